@@ -1,0 +1,82 @@
+import type { PolygonInput } from './scene';
+
+/**
+ * The edges of a sketch, oriented so that the radiating side is on the LEFT of a -> b
+ * (left normal n = (-dy, dx) / L points into the space the edge radiates to).
+ * An enclosure is walked anticlockwise (inside on the left), a solid clockwise
+ * (outside on the left), whatever winding the input used.
+ * Edge ids keep the input numbering: polygon by polygon, edge k from point k to k+1.
+ * Coordinates and lengths are in sketch units.
+ */
+export interface EdgeSet {
+  count: number;
+  ax: Float64Array;
+  ay: Float64Array;
+  bx: Float64Array;
+  by: Float64Array;
+  length: Float64Array;
+  /** Polygon index of each edge. */
+  polygon: Int32Array;
+  /** The oriented edge that ends where this one starts (shares point a). */
+  prevEdge: Int32Array;
+  /** The oriented edge that starts where this one ends (shares point b). */
+  nextEdge: Int32Array;
+  hasEnclosure: boolean;
+}
+
+/** Twice the signed area of a flat [x0,y0,x1,y1,...] polygon; > 0 when anticlockwise (y up). */
+export function signedArea2(points: ArrayLike<number>): number {
+  const n = points.length >> 1;
+  let s = 0;
+  for (let k = 0; k < n; k++) {
+    const m = k + 1 === n ? 0 : k + 1;
+    s += points[2 * k] * points[2 * m + 1] - points[2 * m] * points[2 * k + 1];
+  }
+  return s;
+}
+
+/** Build the oriented edge set of a sketch. Throws on a polygon with fewer than 3 points. */
+export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
+  let count = 0;
+  for (const poly of polygons) {
+    const n = poly.points.length >> 1;
+    if (n < 3 || poly.points.length % 2 !== 0) throw new Error('a polygon needs at least 3 points given as x,y pairs');
+    count += n;
+  }
+  const ax = new Float64Array(count);
+  const ay = new Float64Array(count);
+  const bx = new Float64Array(count);
+  const by = new Float64Array(count);
+  const length = new Float64Array(count);
+  const polygon = new Int32Array(count);
+  const prevEdge = new Int32Array(count);
+  const nextEdge = new Int32Array(count);
+  let hasEnclosure = false;
+  let base = 0;
+  polygons.forEach((poly, p) => {
+    const pts = poly.points;
+    const n = pts.length >> 1;
+    if (poly.kind === 'enclosure') hasEnclosure = true;
+    const ccw = signedArea2(pts) > 0;
+    // Enclosures radiate inward: keep anticlockwise order. Solids radiate outward: clockwise.
+    const flip = poly.kind === 'enclosure' ? !ccw : ccw;
+    for (let k = 0; k < n; k++) {
+      const m = k + 1 === n ? 0 : k + 1;
+      const e = base + k;
+      const [s, t] = flip ? [m, k] : [k, m];
+      ax[e] = pts[2 * s];
+      ay[e] = pts[2 * s + 1];
+      bx[e] = pts[2 * t];
+      by[e] = pts[2 * t + 1];
+      length[e] = Math.hypot(bx[e] - ax[e], by[e] - ay[e]);
+      polygon[e] = p;
+      const before = base + (k === 0 ? n - 1 : k - 1);
+      const after = base + m;
+      // Without a flip edge k+1 follows edge k; with a flip the walk runs backwards.
+      nextEdge[e] = flip ? before : after;
+      prevEdge[e] = flip ? after : before;
+    }
+    base += n;
+  });
+  return { count, ax, ay, bx, by, length, polygon, prevEdge, nextEdge, hasEnclosure };
+}

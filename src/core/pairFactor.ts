@@ -1,0 +1,423 @@
+import { orient } from './orient';
+import type { EdgeSet } from './edges';
+
+/**
+ * Lists candidate obstructing edges whose bounding boxes meet a box (sketch units).
+ * Calls visit(edgeId) for each; the spatial index lives outside this module.
+ */
+export type EdgeQuery = (minX: number, minY: number, maxX: number, maxY: number, visit: (edge: number) => void) => void;
+
+/**
+ * Exact diffuse view factor between two edges of a long (2D) geometry, with
+ * blocking by every other edge of the sketch.
+ *
+ * Method (Hottel's crossed strings, generalised; see Modest, Radiative Heat Transfer,
+ * ch. 4): from a point p on edge i the fraction of diffuse emission that reaches a
+ * range of directions is 1/2 (sin b_hi - sin b_lo), b measured from the edge normal.
+ * The directions that reach edge j unobstructed are bounded by rays through fixed
+ * points (ends of j, or corners of obstructions), and the integral along i of
+ * sin b towards a fixed point v is minus the change of the distance |v - p|.
+ * Between the points of i where p lines up with two such fixed points, the set of
+ * bounding points does not change, so each piece integrates exactly to a sum of
+ * distance differences. One call allocates nothing.
+ */
+export class PairIntegrator {
+  private readonly e: EdgeSet;
+  private readonly query: EdgeQuery;
+  // Stamp per edge: which call last clipped it, and where its clipped piece is.
+  private readonly stamp: Int32Array;
+  private readonly localOf: Int32Array;
+  private call = 0;
+  // Clipped obstruction pieces.
+  private segEdge = new Int32Array(64);
+  private segPx = new Float64Array(64);
+  private segPy = new Float64Array(64);
+  private segQx = new Float64Array(64);
+  private segQy = new Float64Array(64);
+  private segFlags = new Uint8Array(64); // bit 0: a strictly inside the view region, bit 1: b strictly inside, bit 2: grouped
+  private segCount = 0;
+  // Fixed points: 0 and 1 are the ends of j (clipped), then the obstruction points, group by group.
+  private ptX = new Float64Array(64);
+  private ptY = new Float64Array(64);
+  private ptCount = 0;
+  private groupStart = new Int32Array(32); // group g owns points groupStart[g] .. groupStart[g+1]-1
+  private groupCount = 0;
+  // Per piece of edge i.
+  private events = new Float64Array(64);
+  private key = new Float64Array(64);
+  private loKey = new Float64Array(32);
+  private hiKey = new Float64Array(32);
+  private loPt = new Int32Array(32);
+  private hiPt = new Int32Array(32);
+  private order = new Int32Array(32);
+  // View region H: convex quadrilateral a0 a1 b0 b1 (anticlockwise); sides as start point + direction.
+  private readonly sx = new Float64Array(4);
+  private readonly sy = new Float64Array(4);
+  private readonly ex = new Float64Array(4);
+  private readonly ey = new Float64Array(4);
+  private readonly sideOn = new Uint8Array(4);
+  private readonly visitEdge: (edge: number) => void;
+  private pairI = 0;
+  private pairJ = 0;
+
+  constructor(edges: EdgeSet, query: EdgeQuery) {
+    this.e = edges;
+    this.query = query;
+    this.stamp = new Int32Array(edges.count).fill(-1);
+    this.localOf = new Int32Array(edges.count);
+    this.visitEdge = (edge: number) => this.clip(edge);
+  }
+
+  /**
+   * L_i F_ij for oriented edges i and j: the view factor from i to j times the
+   * length of i (sketch units). Equal to L_j F_ji by reciprocity; 0 when i cannot see j.
+   */
+  exchangeLength(i: number, j: number): number {
+    if (i === j) return 0;
+    const E = this.e;
+    let a0x = E.ax[i], a0y = E.ay[i], a1x = E.bx[i], a1y = E.by[i];
+    let b0x = E.ax[j], b0y = E.ay[j], b1x = E.bx[j], b1y = E.by[j];
+    // Front tests: a point is in front of an edge when it lies strictly left of a -> b.
+    const dB0 = orient(a0x, a0y, a1x, a1y, b0x, b0y);
+    const dB1 = orient(a0x, a0y, a1x, a1y, b1x, b1y);
+    if (dB0 <= 0 && dB1 <= 0) return 0;
+    const dA0 = orient(b0x, b0y, b1x, b1y, a0x, a0y);
+    const dA1 = orient(b0x, b0y, b1x, b1y, a1x, a1y);
+    if (dA0 <= 0 && dA1 <= 0) return 0;
+    // Keep only the part of each edge in front of the other: nothing else can exchange.
+    if (dB0 < 0) {
+      const t = dB0 / (dB0 - dB1);
+      b0x += t * (b1x - b0x);
+      b0y += t * (b1y - b0y);
+    } else if (dB1 < 0) {
+      const t = dB1 / (dB1 - dB0);
+      b1x += t * (b0x - b1x);
+      b1y += t * (b0y - b1y);
+    }
+    if (dA0 < 0) {
+      const t = dA0 / (dA0 - dA1);
+      a0x += t * (a1x - a0x);
+      a0y += t * (a1y - a0y);
+    } else if (dA1 < 0) {
+      const t = dA1 / (dA1 - dA0);
+      a1x += t * (a0x - a1x);
+      a1y += t * (a0y - a1y);
+    }
+    const li = Math.hypot(a1x - a0x, a1y - a0y);
+    if (li === 0 || (b0x === b1x && b0y === b1y)) return 0;
+
+    // Every sight line from i to j lies in H = hull(i', j') = a0 a1 b0 b1 (anticlockwise,
+    // since j's front faces i). Only obstructions inside H can block.
+    this.setSide(0, a0x, a0y, a1x, a1y);
+    this.setSide(1, a1x, a1y, b0x, b0y);
+    this.setSide(2, b0x, b0y, b1x, b1y);
+    this.setSide(3, b1x, b1y, a0x, a0y);
+    this.call++;
+    this.segCount = 0;
+    this.pairI = i;
+    this.pairJ = j;
+    this.query(
+      Math.min(a0x, a1x, b0x, b1x), Math.min(a0y, a1y, b0y, b1y),
+      Math.max(a0x, a1x, b0x, b1x), Math.max(a0y, a1y, b0y, b1y),
+      this.visitEdge,
+    );
+    if (this.segCount === 0) {
+      // Unobstructed: crossed minus uncrossed strings over 2 (Hottel).
+      return 0.5 * (Math.hypot(b0x - a0x, b0y - a0y) + Math.hypot(b1x - a1x, b1y - a1y)
+        - Math.hypot(b0x - a1x, b0y - a1y) - Math.hypot(b1x - a0x, b1y - a0y));
+    }
+    this.buildGroups(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
+    const nEvents = this.findEvents(a0x, a0y, a1x, a1y);
+    return this.integrate(a0x, a0y, a1x, a1y, li, nEvents);
+  }
+
+  private setSide(k: number, x0: number, y0: number, x1: number, y1: number): void {
+    this.sx[k] = x0;
+    this.sy[k] = y0;
+    this.ex[k] = x1;
+    this.ey[k] = y1;
+    this.sideOn[k] = x0 === x1 && y0 === y1 ? 0 : 1; // a side of zero length bounds nothing
+  }
+
+  /** Clip edge `edge` to H; keep the piece if it passes through H's interior. */
+  private clip(edge: number): void {
+    if (edge === this.pairI || edge === this.pairJ) return;
+    const E = this.e;
+    const px = E.ax[edge], py = E.ay[edge], qx = E.bx[edge], qy = E.by[edge];
+    let t0 = 0, t1 = 1;
+    let pIn = 1, qIn = 1;
+    for (let k = 0; k < 4; k++) {
+      if (!this.sideOn[k]) continue;
+      const x0 = this.sx[k], y0 = this.sy[k], x1 = this.ex[k], y1 = this.ey[k];
+      // Cheap float rejection first; robust signs only for what survives.
+      const dx = x1 - x0, dy = y1 - y0;
+      const fp = dx * (py - y0) - dy * (px - x0);
+      const fq = dx * (qy - y0) - dy * (qx - x0);
+      const tol = 1e-12 * (Math.abs(dx) + Math.abs(dy)) * (Math.abs(px - x0) + Math.abs(py - y0) + Math.abs(qx - x0) + Math.abs(qy - y0));
+      if (fp < -tol && fq < -tol) return;
+      const dP = orient(x0, y0, x1, y1, px, py);
+      const dQ = orient(x0, y0, x1, y1, qx, qy);
+      if (dP <= 0 && dQ <= 0) return; // outside, or along the boundary: blocks no sight line
+      if (dP <= 0) pIn = 0;
+      if (dQ <= 0) qIn = 0;
+      if (dP < 0) t0 = Math.max(t0, dP / (dP - dQ));
+      else if (dQ < 0) t1 = Math.min(t1, dP / (dP - dQ));
+    }
+    if (t1 <= t0) return;
+    const s = this.segCount;
+    if (s === this.segEdge.length) this.growSegments();
+    this.segEdge[s] = edge;
+    this.segPx[s] = px + t0 * (qx - px);
+    this.segPy[s] = py + t0 * (qy - py);
+    this.segQx[s] = px + t1 * (qx - px);
+    this.segQy[s] = py + t1 * (qy - py);
+    this.segFlags[s] = pIn | (qIn << 1);
+    this.stamp[edge] = this.call;
+    this.localOf[edge] = s;
+    this.segCount = s + 1;
+  }
+
+  /**
+   * Join clipped pieces into chains (runs of one polygon's edges joined by corners
+   * inside H). Each chain covers one interval of directions seen from any p on i;
+   * its ends are its end points or corners that can be a silhouette from i.
+   */
+  private buildGroups(a0x: number, a0y: number, a1x: number, a1y: number,
+    b0x: number, b0y: number, b1x: number, b1y: number): void {
+    this.ptCount = 0;
+    this.pushPoint(b0x, b0y);
+    this.pushPoint(b1x, b1y);
+    this.groupCount = 0;
+    const flags = this.segFlags;
+    // Open chains start at a piece whose start is not inside H.
+    for (let s = 0; s < this.segCount; s++) {
+      if ((flags[s] & 1) === 0) this.walkChain(s, a0x, a0y, a1x, a1y);
+    }
+    // What is left are closed chains: bodies lying wholly inside H.
+    for (let s = 0; s < this.segCount; s++) {
+      if ((flags[s] & 4) === 0) this.walkChain(s, a0x, a0y, a1x, a1y);
+    }
+    this.setGroupStart(this.groupCount, this.ptCount);
+  }
+
+  private walkChain(first: number, a0x: number, a0y: number, a1x: number, a1y: number): void {
+    const E = this.e;
+    const flags = this.segFlags;
+    const g = this.groupCount++;
+    this.setGroupStart(g, this.ptCount);
+    if ((flags[first] & 1) === 0) this.pushPoint(this.segPx[first], this.segPy[first]);
+    let s = first;
+    for (;;) {
+      flags[s] |= 4;
+      if ((flags[s] & 2) === 0) {
+        this.pushPoint(this.segQx[s], this.segQy[s]);
+        return;
+      }
+      const edge = this.segEdge[s];
+      const next = E.nextEdge[edge];
+      // The corner b of `edge` lies inside H, so the next edge was clipped too.
+      if (this.stamp[next] !== this.call) {
+        this.pushPoint(this.segQx[s], this.segQy[s]);
+        return;
+      }
+      const wx = E.bx[edge], wy = E.by[edge];
+      if (silhouetteFromSegment(a0x, a0y, a1x, a1y, wx, wy, E.ax[edge], E.ay[edge], E.bx[next], E.by[next])) {
+        this.pushPoint(wx, wy);
+      }
+      s = this.localOf[next];
+      if ((flags[s] & 4) !== 0) return; // closed chain done
+    }
+  }
+
+  private setGroupStart(g: number, value: number): void {
+    if (g >= this.groupStart.length) {
+      const grown = new Int32Array(this.groupStart.length * 2);
+      grown.set(this.groupStart);
+      this.groupStart = grown;
+    }
+    this.groupStart[g] = value;
+  }
+
+  private pushPoint(x: number, y: number): void {
+    const k = this.ptCount;
+    if (k === this.ptX.length) {
+      this.ptX = grow(this.ptX);
+      this.ptY = grow(this.ptY);
+    }
+    this.ptX[k] = x;
+    this.ptY[k] = y;
+    this.ptCount = k + 1;
+  }
+
+  /** Points of i (as fractions 0..1 from a0) where p lines up with two fixed points, sorted. */
+  private findEvents(a0x: number, a0y: number, a1x: number, a1y: number): number {
+    const X = this.ptX, Y = this.ptY;
+    const n = this.ptCount;
+    let count = 0;
+    for (let r = 0; r < n; r++) {
+      const rx = X[r], ry = Y[r];
+      // orient(p, r, q) is affine along i: g(0) at a0 and g(1) at a1.
+      const r0x = rx - a0x, r0y = ry - a0y, r1x = rx - a1x, r1y = ry - a1y;
+      for (let q = r + 1; q < n; q++) {
+        const qx = X[q], qy = Y[q];
+        const g0 = r0x * (qy - a0y) - r0y * (qx - a0x);
+        const g1 = r1x * (qy - a1y) - r1y * (qx - a1x);
+        if ((g0 < 0 && g1 > 0) || (g0 > 0 && g1 < 0)) {
+          if (count === this.events.length) this.events = grow(this.events);
+          this.events[count++] = g0 / (g0 - g1);
+        }
+      }
+    }
+    sortPrefix(this.events, count);
+    return count;
+  }
+
+  private integrate(a0x: number, a0y: number, a1x: number, a1y: number, li: number, nEvents: number): number {
+    const X = this.ptX, Y = this.ptY;
+    const dxI = a1x - a0x, dyI = a1y - a0y;
+    const tx = dxI / li, ty = dyI / li;
+    const nPts = this.ptCount;
+    if (this.key.length < nPts) this.key = new Float64Array(Math.max(nPts, 2 * this.key.length));
+    const key = this.key;
+    const nGroups = this.groupCount;
+    if (this.loKey.length < nGroups) this.growGroups(nGroups);
+    let total = 0;
+    let sa = 0;
+    for (let ev = 0; ev <= nEvents; ev++) {
+      const sb = ev < nEvents ? this.events[ev] : 1;
+      if (sb <= sa) continue;
+      const sm = 0.5 * (sa + sb);
+      const pmx = a0x + sm * dxI, pmy = a0y + sm * dyI;
+      // key = sin b: the direction's component along i, increasing towards a1.
+      for (let k = 0; k < nPts; k++) {
+        const vx = X[k] - pmx, vy = Y[k] - pmy;
+        key[k] = (vx * tx + vy * ty) / Math.hypot(vx, vy);
+      }
+      const jHi = key[0], jLo = key[1]; // b0 is the high end of j's range, b1 the low end
+      if (jHi > jLo) {
+        let nIv = 0;
+        for (let g = 0; g < nGroups; g++) {
+          const from = this.groupStart[g], to = this.groupStart[g + 1];
+          let lo = Infinity, hi = -Infinity, loP = -1, hiP = -1;
+          for (let k = from; k < to; k++) {
+            const kk = key[k];
+            if (kk < lo) { lo = kk; loP = k; }
+            if (kk > hi) { hi = kk; hiP = k; }
+          }
+          if (hi <= jLo || lo >= jHi) continue;
+          if (lo < jLo) { lo = jLo; loP = 1; }
+          if (hi > jHi) { hi = jHi; hiP = 0; }
+          this.loKey[nIv] = lo; this.hiKey[nIv] = hi; this.loPt[nIv] = loP; this.hiPt[nIv] = hiP;
+          this.order[nIv] = nIv;
+          nIv++;
+        }
+        sortOrderByKey(this.order, this.loKey, nIv);
+        const pax = a0x + sa * dxI, pay = a0y + sa * dyI;
+        const pbx = a0x + sb * dxI, pby = a0y + sb * dyI;
+        // Sweep the blocked intervals from j's low end; the gaps are what p sees of j.
+        let cur = jLo, curP = 1;
+        for (let n = 0; n < nIv; n++) {
+          const o = this.order[n];
+          if (this.loKey[o] > cur) total += gap(X, Y, curP, this.loPt[o], pax, pay, pbx, pby);
+          if (this.hiKey[o] > cur) { cur = this.hiKey[o]; curP = this.hiPt[o]; }
+        }
+        if (cur < jHi) total += gap(X, Y, curP, 0, pax, pay, pbx, pby);
+      }
+      sa = sb;
+    }
+    return total;
+  }
+
+  private growSegments(): void {
+    const n = this.segEdge.length * 2;
+    const segEdge = new Int32Array(n); segEdge.set(this.segEdge); this.segEdge = segEdge;
+    this.segPx = grow(this.segPx); this.segPy = grow(this.segPy);
+    this.segQx = grow(this.segQx); this.segQy = grow(this.segQy);
+    const flags = new Uint8Array(n); flags.set(this.segFlags); this.segFlags = flags;
+  }
+
+  private growGroups(n: number): void {
+    const size = Math.max(n, 2 * this.loKey.length);
+    this.loKey = new Float64Array(size);
+    this.hiKey = new Float64Array(size);
+    this.loPt = new Int32Array(size);
+    this.hiPt = new Int32Array(size);
+    this.order = new Int32Array(size);
+  }
+}
+
+/**
+ * 1/2 of the integral over [pa, pb] of (sin b_hi - sin b_lo), the visible direction
+ * range bounded by fixed points lo and hi: the integral of sin b towards a fixed
+ * point v is -(|v - pb| - |v - pa|).
+ */
+function gap(X: Float64Array, Y: Float64Array, lo: number, hi: number,
+  pax: number, pay: number, pbx: number, pby: number): number {
+  const dLo = Math.hypot(X[lo] - pbx, Y[lo] - pby) - Math.hypot(X[lo] - pax, Y[lo] - pay);
+  const dHi = Math.hypot(X[hi] - pbx, Y[hi] - pby) - Math.hypot(X[hi] - pax, Y[hi] - pay);
+  return 0.5 * (dLo - dHi);
+}
+
+/**
+ * Can corner w (between neighbours u and v) be a silhouette seen from some point p
+ * of segment a0-a1, i.e. both neighbours on one side of the line p-w? Conservative:
+ * may say yes when the answer is no (costs an extra split, never accuracy).
+ */
+function silhouetteFromSegment(a0x: number, a0y: number, a1x: number, a1y: number,
+  wx: number, wy: number, ux: number, uy: number, vx: number, vy: number): boolean {
+  const f0 = orient(a0x, a0y, wx, wy, ux, uy);
+  const g0 = orient(a0x, a0y, wx, wy, vx, vy);
+  if (f0 * g0 > 0) return true;
+  const f1 = orient(a1x, a1y, wx, wy, ux, uy);
+  const g1 = orient(a1x, a1y, wx, wy, vx, vy);
+  if (f1 * g1 > 0) return true;
+  // Both orientations are affine along the segment; if either keeps its sign the
+  // product f g stays <= 0 throughout. If both change sign, it may turn positive between.
+  return f0 * f1 < 0 && g0 * g1 < 0;
+}
+
+function grow(a: Float64Array): Float64Array {
+  const b = new Float64Array(a.length * 2);
+  b.set(a);
+  return b;
+}
+
+/** In-place ascending sort of a[0..n) (insertion sort for short runs, else heap sort). */
+function sortPrefix(a: Float64Array, n: number): void {
+  if (n < 24) {
+    for (let k = 1; k < n; k++) {
+      const v = a[k];
+      let m = k - 1;
+      while (m >= 0 && a[m] > v) { a[m + 1] = a[m]; m--; }
+      a[m + 1] = v;
+    }
+    return;
+  }
+  for (let k = (n >> 1) - 1; k >= 0; k--) siftDown(a, k, n);
+  for (let end = n - 1; end > 0; end--) {
+    const t = a[0]; a[0] = a[end]; a[end] = t;
+    siftDown(a, 0, end);
+  }
+}
+
+function siftDown(a: Float64Array, start: number, n: number): void {
+  let root = start;
+  for (;;) {
+    let child = 2 * root + 1;
+    if (child >= n) return;
+    if (child + 1 < n && a[child + 1] > a[child]) child++;
+    if (a[root] >= a[child]) return;
+    const t = a[root]; a[root] = a[child]; a[child] = t;
+    root = child;
+  }
+}
+
+function sortOrderByKey(order: Int32Array, key: Float64Array, n: number): void {
+  for (let k = 1; k < n; k++) {
+    const o = order[k];
+    const v = key[o];
+    let m = k - 1;
+    while (m >= 0 && key[order[m]] > v) { order[m + 1] = order[m]; m--; }
+    order[m + 1] = o;
+  }
+}

@@ -1,0 +1,66 @@
+import type { ViewFactorResult } from './scene';
+
+/**
+ * Aggregate edge view factors (edges x edges, row-major, row = from) to surfaces:
+ * F_IJ = sum_{i in I, j in J} L_i F_ij / L_I (lengths in sketch units), and report
+ * the row-sum residual 1 - sum_J F_IJ and the largest relative reciprocity residual
+ * |L_I F_IJ - L_J F_JI| / max(L_I F_IJ, L_J F_JI).
+ */
+export function aggregateToSurfaces(
+  edgeCount: number,
+  edgeLength: Float64Array,
+  edgeF: Float64Array,
+  edgeSurface: ArrayLike<number>,
+  surfaceCount: number,
+  closed: boolean,
+): ViewFactorResult {
+  const n = edgeCount;
+  const m = surfaceCount;
+  const surfaceLength = new Float64Array(m);
+  for (let i = 0; i < n; i++) {
+    const s = edgeSurface[i];
+    if (!(s >= 0 && s < m && Number.isInteger(s))) throw new Error(`edge ${i} has surface index ${s} outside 0..${m - 1}`);
+    surfaceLength[s] += edgeLength[i];
+  }
+  // G_IJ = L_I F_IJ, the exchange length; summed straight from the edge rows.
+  const G = new Float64Array(m * m);
+  for (let i = 0; i < n; i++) {
+    const row = edgeSurface[i] * m;
+    const Li = edgeLength[i];
+    const base = i * n;
+    for (let j = 0; j < n; j++) {
+      const f = edgeF[base + j];
+      if (f !== 0) G[row + edgeSurface[j]] += Li * f;
+    }
+  }
+  const F = new Float64Array(m * m);
+  const rowSumResidual = new Float64Array(m);
+  for (let I = 0; I < m; I++) {
+    const LI = surfaceLength[I];
+    let sum = 0;
+    for (let J = 0; J < m; J++) {
+      const f = LI > 0 ? G[I * m + J] / LI : 0;
+      F[I * m + J] = f;
+      sum += f;
+    }
+    rowSumResidual[I] = 1 - sum;
+  }
+  let reciprocityResidual = 0;
+  for (let I = 0; I < m; I++) {
+    for (let J = I + 1; J < m; J++) {
+      const a = G[I * m + J], b = G[J * m + I];
+      const big = Math.max(Math.abs(a), Math.abs(b));
+      if (big > 0) reciprocityResidual = Math.max(reciprocityResidual, Math.abs(a - b) / big);
+    }
+  }
+  return {
+    edgeCount: n,
+    surfaceCount: m,
+    edgeLength,
+    surfaceLength,
+    F,
+    rowSumResidual,
+    reciprocityResidual,
+    closed,
+  };
+}

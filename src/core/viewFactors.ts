@@ -1,0 +1,74 @@
+import Flatbush from 'flatbush';
+import { buildEdges, type EdgeSet } from './edges';
+import { PairIntegrator, type EdgeQuery } from './pairFactor';
+import type { SceneInput, ViewFactorResult } from './scene';
+import { aggregateToSurfaces } from './surfaces';
+
+export interface ViewFactorOptions {
+  /**
+   * Integrate every ordered pair on its own instead of filling F_ji from F_ij by
+   * reciprocity. Twice the work; makes the reciprocity residual an independent check.
+   */
+  independentPairs?: boolean;
+  /** Reuse this buffer (length >= edges^2) for the edge matrix. */
+  edgeMatrix?: Float64Array;
+}
+
+/** A spatial index over the edges' bounding boxes, as an EdgeQuery. */
+export function indexEdges(edges: EdgeSet): EdgeQuery {
+  const n = edges.count;
+  if (n === 0) return () => {};
+  const index = new Flatbush(n);
+  for (let e = 0; e < n; e++) {
+    index.add(
+      Math.min(edges.ax[e], edges.bx[e]), Math.min(edges.ay[e], edges.by[e]),
+      Math.max(edges.ax[e], edges.bx[e]), Math.max(edges.ay[e], edges.by[e]),
+    );
+  }
+  index.finish();
+  return (minX, minY, maxX, maxY, visit) => {
+    // The filter visits each hit and keeps none, so flatbush builds no result list.
+    index.search(minX, minY, maxX, maxY, (id) => {
+      visit(id);
+      return false;
+    });
+  };
+}
+
+/**
+ * Edge-to-edge view factors of a sketch: row-major edges x edges, row = from.
+ * F[i*n + j] is the fraction of diffuse emission from edge i (per unit depth) that
+ * arrives at edge j unobstructed; dimensionless, exact to rounding.
+ */
+export function edgeViewFactors(edges: EdgeSet, options: ViewFactorOptions = {}): Float64Array {
+  const n = edges.count;
+  const F = options.edgeMatrix && options.edgeMatrix.length >= n * n ? options.edgeMatrix : new Float64Array(n * n);
+  F.fill(0, 0, n * n);
+  const integrator = new PairIntegrator(edges, indexEdges(edges));
+  const L = edges.length;
+  for (let i = 0; i < n; i++) {
+    if (L[i] === 0) continue;
+    for (let j = i + 1; j < n; j++) {
+      if (L[j] === 0) continue;
+      const g = integrator.exchangeLength(i, j); // = L_i F_ij = L_j F_ji
+      if (g === 0 && !options.independentPairs) continue;
+      F[i * n + j] = g / L[i];
+      F[j * n + i] = (options.independentPairs ? integrator.exchangeLength(j, i) : g) / L[j];
+    }
+  }
+  return F;
+}
+
+/**
+ * View factors between the named surfaces of a sketch (area-weighted sums of edge
+ * factors, F_IJ = sum_{i in I, j in J} L_i F_ij / L_I), with the enclosure-rule and
+ * reciprocity residuals. Lengths are in sketch units; factors are dimensionless.
+ */
+export function computeViewFactors(scene: SceneInput, options: ViewFactorOptions = {}): ViewFactorResult {
+  const edges = buildEdges(scene.polygons);
+  if (scene.edgeSurface.length !== edges.count) {
+    throw new Error(`edgeSurface has ${scene.edgeSurface.length} entries for ${edges.count} edges`);
+  }
+  const F = edgeViewFactors(edges, options);
+  return aggregateToSurfaces(edges.count, edges.length, F, scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
+}

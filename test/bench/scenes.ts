@@ -1,0 +1,49 @@
+import type { SceneInput } from '../../src/core/scene';
+
+/** Small seeded PRNG (mulberry32), so every run measures the same scenes. */
+export function mulberry32(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/**
+ * A rectangular furnace section (wallEdges edges) holding `tubes` regular polygons
+ * of `sides` sides at random, non-touching positions. Every edge is its own surface.
+ */
+export function tubeScene(seed: number, tubes: number, sides: number, wallEdges: number): SceneInput {
+  const rand = mulberry32(seed);
+  const W = 10, H = 4;
+  const per = Math.max(1, Math.round(wallEdges / 4));
+  const wall: number[] = [];
+  const corners = [[0, 0], [W, 0], [W, H], [0, H]];
+  for (let c = 0; c < 4; c++) {
+    const [x0, y0] = corners[c];
+    const [x1, y1] = corners[(c + 1) % 4];
+    for (let k = 0; k < per; k++) wall.push(x0 + ((x1 - x0) * k) / per, y0 + ((y1 - y0) * k) / per);
+  }
+  const polygons: SceneInput['polygons'] = [{ kind: 'enclosure', points: wall }];
+  const placed: [number, number, number][] = [];
+  let guard = 0;
+  while (placed.length < tubes && guard++ < 100000) {
+    const r = 0.15 + 0.2 * rand();
+    const cx = r + 0.1 + rand() * (W - 2 * r - 0.2);
+    const cy = r + 0.1 + rand() * (H - 2 * r - 0.2);
+    if (placed.some(([x, y, q]) => Math.hypot(x - cx, y - cy) < r + q + 0.05)) continue;
+    placed.push([cx, cy, r]);
+    const pts: number[] = [];
+    const phase = rand() * Math.PI;
+    for (let k = 0; k < sides; k++) {
+      const a = phase + (2 * Math.PI * k) / sides;
+      pts.push(cx + r * Math.cos(a), cy + r * Math.sin(a));
+    }
+    polygons.push({ kind: 'solid', points: pts });
+  }
+  const count = polygons.reduce((n, p) => n + p.points.length / 2, 0);
+  return { polygons, edgeSurface: Array.from({ length: count }, (_, k) => k), surfaceCount: count };
+}
