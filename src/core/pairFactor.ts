@@ -376,7 +376,7 @@ function silhouetteFromSegment(a0x: number, a0y: number, a1x: number, a1y: numbe
   return f0 * f1 < 0 && g0 * g1 < 0;
 }
 
-function grow(a: Float64Array): Float64Array {
+function grow(a: Float64Array<ArrayBuffer>): Float64Array<ArrayBuffer> {
   const b = new Float64Array(a.length * 2);
   b.set(a);
   return b;
