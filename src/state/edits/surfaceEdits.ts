@@ -1,0 +1,67 @@
+// Grouping, renaming and splitting named surfaces. Surface properties
+// (doc.surfaces) follow their name and are dropped when no edge uses it.
+import type { SketchFile, SurfaceProps } from '../sketchFile';
+import { edgeNames } from '../geometry/polygon';
+import { compactSurface, uniqueName, usedSurfaceNames } from './surfaceNames';
+
+export interface EdgeRef { shape: number; index: number }
+
+function relabel(doc: SketchFile, nameOf: (shape: number, edge: number, old: string) => string): SketchFile {
+  const shapes = doc.shapes.map((shape, s) => {
+    const old = edgeNames(shape);
+    const next = old.map((n, k) => nameOf(s, k, n));
+    return next.every((n, k) => n === old[k]) ? shape : { ...shape, surface: compactSurface(next) };
+  });
+  return { ...doc, shapes };
+}
+
+function pruneProps(doc: SketchFile, props: Record<string, SurfaceProps> | undefined): SketchFile {
+  if (!props) return doc;
+  const used = usedSurfaceNames(doc);
+  const kept = Object.fromEntries(Object.entries(props).filter(([n]) => used.has(n)));
+  const { surfaces: _old, ...rest } = doc;
+  return Object.keys(kept).length ? { ...rest, surfaces: kept } : rest;
+}
+
+/** Give the chosen edges one surface name (a new or an existing one). */
+export function groupEdges(doc: SketchFile, edges: readonly EdgeRef[], name: string): SketchFile {
+  const target = name.trim();
+  if (!target || edges.length === 0) return doc;
+  const chosen = new Set(edges.map((e) => `${e.shape}:${e.index}`));
+  const firstOld = edgeNames(doc.shapes[edges[0].shape])[edges[0].index];
+  const props = { ...(doc.surfaces ?? {}) };
+  // A brand-new name inherits the properties of the first edge's old surface.
+  if (!props[target] && firstOld !== undefined && props[firstOld]) props[target] = { ...props[firstOld] };
+  const next = relabel(doc, (s, k, old) => (chosen.has(`${s}:${k}`) ? target : old));
+  return pruneProps(next, Object.keys(props).length ? props : doc.surfaces);
+}
+
+/** Rename a surface everywhere; renaming onto an existing name merges the two. */
+export function renameSurface(doc: SketchFile, from: string, to: string): SketchFile {
+  const target = to.trim();
+  if (!target || target === from) return doc;
+  const props = { ...(doc.surfaces ?? {}) };
+  if (props[from] && !props[target]) props[target] = props[from];
+  delete props[from];
+  const next = relabel(doc, (_s, _k, old) => (old === from ? target : old));
+  return pruneProps(next, doc.surfaces ? props : undefined);
+}
+
+/** Give each edge of a surface its own name again ("roof 1", "roof 2", ...), copying its properties. */
+export function splitSurface(doc: SketchFile, name: string): SketchFile {
+  const taken = usedSurfaceNames(doc);
+  taken.delete(name);
+  const props = { ...(doc.surfaces ?? {}) };
+  const original = props[name];
+  let count = 0;
+  const next = relabel(doc, (_s, _k, old) => {
+    if (old !== name) return old;
+    const fresh = uniqueName(`${name} ${++count}`, taken);
+    taken.add(fresh);
+    if (original) props[fresh] = { ...original };
+    return fresh;
+  });
+  if (count < 2) return doc;
+  delete props[name];
+  return pruneProps(next, doc.surfaces ? props : undefined);
+}

@@ -1,0 +1,79 @@
+import type { Point, Shape } from '../sketchFile';
+
+/** Signed area (sketch units^2); positive when the points run anticlockwise with y up. */
+export function signedArea(points: readonly Point[]): number {
+  let a = 0;
+  for (let i = 0; i < points.length; i++) {
+    const [x0, y0] = points[i];
+    const [x1, y1] = points[(i + 1) % points.length];
+    a += x0 * y1 - x1 * y0;
+  }
+  return a / 2;
+}
+
+/** Surface name of every edge, whether the shape stores one name or one per edge. */
+export function edgeNames(shape: Shape): string[] {
+  const n = shape.points.length;
+  if (typeof shape.surface === 'string') return new Array<string>(n).fill(shape.surface);
+  return shape.points.map((_, k) => shape.surface[k] ?? `edge ${k + 1}`);
+}
+
+export function edgeEnds(shape: Shape, k: number): [Point, Point] {
+  const n = shape.points.length;
+  return [shape.points[k], shape.points[(k + 1) % n]];
+}
+
+export function edgeLength(shape: Shape, k: number): number {
+  const [a, b] = edgeEnds(shape, k);
+  return Math.hypot(b[0] - a[0], b[1] - a[1]);
+}
+
+/** Unit normal of edge k pointing to the side that radiates (into an enclosure, out of a solid). */
+export function radiatingNormal(shape: Shape, k: number): Point {
+  const [a, b] = edgeEnds(shape, k);
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const len = Math.hypot(dx, dy) || 1;
+  // Left of the edge (y up) is the inside of an anticlockwise polygon.
+  const left: Point = [-dy / len, dx / len];
+  const ccw = signedArea(shape.points) > 0;
+  const towardLeft = (shape.kind === 'enclosure') === ccw;
+  return towardLeft ? left : [-left[0], -left[1]];
+}
+
+export function pointInPolygon(p: Point, points: readonly Point[]): boolean {
+  let inside = false;
+  for (let i = 0, j = points.length - 1; i < points.length; j = i++) {
+    const [xi, yi] = points[i];
+    const [xj, yj] = points[j];
+    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
+  }
+  return inside;
+}
+
+/** Closest point on segment ab to p, and the parameter t in [0, 1] along it. */
+export function closestOnSegment(p: Point, a: Point, b: Point): { point: Point; t: number; distance: number } {
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const len2 = dx * dx + dy * dy;
+  let t = len2 > 0 ? ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / len2 : 0;
+  t = Math.max(0, Math.min(1, t));
+  const point: Point = [a[0] + t * dx, a[1] + t * dy];
+  return { point, t, distance: Math.hypot(p[0] - point[0], p[1] - point[1]) };
+}
+
+export interface Bounds { minX: number; minY: number; maxX: number; maxY: number }
+
+export function sketchBounds(shapes: readonly Shape[]): Bounds | null {
+  let b: Bounds | null = null;
+  for (const s of shapes) {
+    for (const [x, y] of s.points) {
+      if (!b) b = { minX: x, minY: y, maxX: x, maxY: y };
+      else {
+        b.minX = Math.min(b.minX, x); b.minY = Math.min(b.minY, y);
+        b.maxX = Math.max(b.maxX, x); b.maxY = Math.max(b.maxY, y);
+      }
+    }
+  }
+  return b;
+}

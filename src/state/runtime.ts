@@ -1,0 +1,32 @@
+// Wires the app together: store, autosave, live results over a worker client.
+import type { DocumentApi } from './documentApi';
+import type { SketchFile } from './sketchFile';
+import { createAppStore, type AppStore } from './store';
+import { loadAutosave, startAutosave } from './autosave';
+import { startLiveResults } from './liveResults';
+import { ViewFactorClient, type WorkerHandle } from '../worker/client';
+
+/** Seconds a job may run before the worker counts as hung (the benchmark's largest sketch takes ~2 s). */
+export const WORKER_TIME_LIMIT_MS = 15000;
+
+export interface Runtime { store: AppStore; client: ViewFactorClient; dispose: () => void }
+
+export function startRuntime(options: {
+  storage: Storage;
+  api: DocumentApi;
+  spawn: () => WorkerHandle;
+  demo: SketchFile;
+  timeLimitMs?: number;
+}): Runtime {
+  const start = loadAutosave(options.storage, options.api, options.demo);
+  const store = createAppStore(start.doc);
+  if (start.notice) store.getState().notify(start.notice.level, start.notice.text);
+  const client = new ViewFactorClient(options.spawn, { timeLimitMs: options.timeLimitMs ?? WORKER_TIME_LIMIT_MS });
+  const stopSave = startAutosave(store, options.storage, options.api);
+  const stopLive = startLiveResults(store, client, options.api);
+  return {
+    store,
+    client,
+    dispose: () => { stopLive(); stopSave(); client.dispose(); },
+  };
+}

@@ -1,0 +1,79 @@
+// View state: tool, selection, camera, grid, table options, notices. Never saved
+// in the sketch file and never part of undo.
+import type { StateCreator } from 'zustand';
+import type { Point, Shape } from './sketchFile';
+import type { Pick } from './selection';
+import type { AppState } from './store';
+
+export type Tool = 'select' | 'enclosure' | 'solid' | 'rectangle' | 'tube';
+
+/** Screen = origin + scale * (x, -y): y points up in the sketch, down on screen. */
+export interface Camera { scale: number; originX: number; originY: number }
+
+export interface Notice { id: number; level: 'info' | 'warning' | 'error'; text: string }
+
+export interface ViewSlice {
+  tool: Tool;
+  selection: Pick[];
+  camera: Camera;
+  snap: boolean;
+  gridStep: number;
+  /** Kind of shape the rectangle and tube tools make. */
+  quickKind: Shape['kind'];
+  tubeSides: number;
+  /** Outline being drawn by the polygon tools, and the live rubber-band point. */
+  draft: Point[];
+  /** Pointer position (sketch units) while a drawing tool is active, for the rubber band. */
+  hoverPoint: Point | null;
+  digits: number;
+  /** Surfaces under the pointer in the table (from, to), highlighted on the canvas. */
+  hoverPair: [string, string] | null;
+  helpOpen: boolean;
+  notices: Notice[];
+  setTool: (tool: Tool) => void;
+  setSelection: (selection: Pick[]) => void;
+  setCamera: (camera: Camera) => void;
+  setSnap: (snap: boolean) => void;
+  setGridStep: (step: number) => void;
+  setQuickKind: (kind: Shape['kind']) => void;
+  setTubeSides: (n: number) => void;
+  setDraft: (draft: Point[]) => void;
+  setHoverPoint: (p: Point | null) => void;
+  setDigits: (digits: number) => void;
+  setHoverPair: (pair: [string, string] | null) => void;
+  setHelpOpen: (open: boolean) => void;
+  notify: (level: Notice['level'], text: string) => void;
+  dismissNotice: (id: number) => void;
+}
+
+let nextNoticeId = 1;
+
+export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) => ({
+  tool: 'select',
+  selection: [],
+  camera: { scale: 100, originX: 60, originY: 400 },
+  snap: true,
+  gridStep: 0.1,
+  quickKind: 'solid',
+  tubeSides: 12,
+  draft: [],
+  hoverPoint: null,
+  digits: 4,
+  hoverPair: null,
+  helpOpen: false,
+  notices: [],
+  setTool: (tool) => set({ tool, draft: [], hoverPoint: null }),
+  setSelection: (selection) => set({ selection }),
+  setCamera: (camera) => set({ camera }),
+  setSnap: (snap) => set({ snap }),
+  setGridStep: (gridStep) => { if (gridStep > 0 && Number.isFinite(gridStep)) set({ gridStep }); },
+  setQuickKind: (quickKind) => set({ quickKind }),
+  setTubeSides: (n) => set({ tubeSides: Math.max(3, Math.min(256, Math.round(n) || 3)) }),
+  setDraft: (draft) => set({ draft }),
+  setHoverPoint: (hoverPoint) => set({ hoverPoint }),
+  setDigits: (digits) => set({ digits: Math.max(1, Math.min(15, Math.round(digits) || 1)) }),
+  setHoverPair: (hoverPair) => set({ hoverPair }),
+  setHelpOpen: (helpOpen) => set({ helpOpen }),
+  notify: (level, text) => set((s) => ({ notices: [...s.notices.slice(-4), { id: nextNoticeId++, level, text }] })),
+  dismissNotice: (id) => set((s) => ({ notices: s.notices.filter((n) => n.id !== id) })),
+});
