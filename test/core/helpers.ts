@@ -1,0 +1,23 @@
+import { computeViewFactors } from '../../src/core/viewFactors';
+import type { ViewFactorResult } from '../../src/core/scene';
+
+export type Poly = { kind: 'enclosure' | 'solid'; points: number[][] };
+
+/** View factors with one surface per edge (edges numbered polygon by polygon). */
+export function perEdge(polys: Poly[], independentPairs = false): ViewFactorResult {
+  const count = polys.reduce((n, p) => n + p.points.length, 0);
+  return computeViewFactors(
+    { polygons: polys.map((p) => ({ kind: p.kind, points: p.points.flat() })), edgeSurface: Array.from({ length: count }, (_, k) => k), surfaceCount: count },
+    { independentPairs },
+  );
+}
+
+/** View factors with the given surface index per edge. */
+export function withSurfaces(polys: Poly[], edgeSurface: number[], surfaceCount: number, independentPairs = false): ViewFactorResult {
+  return computeViewFactors(
+    { polygons: polys.map((p) => ({ kind: p.kind, points: p.points.flat() })), edgeSurface, surfaceCount },
+    { independentPairs },
+  );
+}
+
+export const f = (r: ViewFactorResult, i: number, j: number) => r.F[i * r.surfaceCount + j];
