@@ -1,0 +1,75 @@
+// Messages for broken geometric rules, naming shapes, edges and points as
+// they are numbered in the file (from 1), also after repeated points were removed.
+import type { GeometryFinding } from '../core/sketchChecks';
+import { formatPoint, shapeLabel } from './labels';
+import type { Shape } from './schema';
+
+export interface GeometryContext {
+  shapes: readonly Shape[];
+  /** Per shape: for each kept edge (= its start point), its index in the file. */
+  fileIndex: readonly (readonly number[])[];
+  /** Points per shape as written in the file (before repairs). */
+  filePointCount: readonly number[];
+}
+
+export function formatGeometryFinding(f: GeometryFinding, ctx: GeometryContext): string {
+  const label = (shape: number) => shapeLabel(shape, ctx.shapes[shape]);
+  const edge = (shape: number, k: number) => ctx.fileIndex[shape][k] + 1;
+  const point = edge; // a kept edge starts at the kept point of the same index
+  switch (f.rule) {
+    case 'too-few-points': {
+      const written = ctx.filePointCount[f.shape];
+      const repaired = written !== f.pointCount ? ` distinct (of ${written} written)` : '';
+      return `${label(f.shape)}: has ${f.pointCount}${repaired} point${f.pointCount === 1 ? '' : 's'}; a shape needs at least 3`;
+    }
+    case 'zero-area':
+      return `${label(f.shape)}: all its points lie on one straight line (zero area)`;
+    case 'repeated-point':
+      return `${label(f.shape)}: point ${point(f.shape, f.point)} repeats the point before it (a zero-length edge)`;
+    case 'several-enclosures': {
+      const list = f.shapes.map((s) => s + 1);
+      const named = list.length === 2 ? `${list[0]} and ${list[1]}` : `${list.slice(0, -1).join(', ')} and ${list[list.length - 1]}`;
+      return `shapes ${named} are ${list.length === 2 ? 'both' : 'all'} enclosures; a sketch has at most one (draw the others as solids)`;
+    }
+    case 'outside-enclosure':
+      return `${label(f.shape)}: lies outside the enclosure (point ${point(f.shape, f.point)} at ${formatPoint(f.at)}); solids must be inside it`;
+    case 'inside-solid':
+      return `${label(f.shape)}: lies inside ${label(f.otherShape)} (point ${point(f.shape, f.point)} at ${formatPoint(f.at)}); solids must not overlap`;
+    case 'edges-cross':
+    case 'edges-touch':
+    case 'edges-overlap':
+      return formatContact(f, ctx, label, edge);
+  }
+}
+
+type Contact = Extract<GeometryFinding, { rule: 'edges-cross' | 'edges-touch' | 'edges-overlap' }>;
+
+function formatContact(f: Contact, ctx: GeometryContext, label: (s: number) => string, edge: (s: number, k: number) => number): string {
+  const where = f.rule === 'edges-overlap' ? `from ${formatPoint(f.at)} to ${formatPoint(f.to)}` : `at ${formatPoint(f.at)}`;
+  const verb = f.rule === 'edges-cross' ? 'crosses' : f.rule === 'edges-touch' ? 'touches' : 'runs along';
+
+  if (f.shape === f.otherShape) {
+    const [a, b] = [edge(f.shape, f.edge), edge(f.shape, f.otherEdge)].sort((x, y) => x - y);
+    if (f.rule === 'edges-overlap' && isNeighbour(a, b, ctx.filePointCount[f.shape])) {
+      return `${label(f.shape)}: edges ${a} and ${b} fold back onto each other ${where}; the outline must not cross or touch itself`;
+    }
+    return `${label(f.shape)}: edge ${a} ${verb} edge ${b} ${where}; the outline must not cross or touch itself`;
+  }
+
+  // Name the solid first: against the wall, the solid is what to move; between
+  // two solids, the later one (usually the one just drawn).
+  const kinds = [ctx.shapes[f.shape].kind, ctx.shapes[f.otherShape].kind];
+  if (kinds[0] === 'enclosure' && kinds[1] === 'enclosure') {
+    return `${label(f.otherShape)}: edge ${edge(f.otherShape, f.otherEdge)} ${verb} ${label(f.shape)} edge ${edge(f.shape, f.edge)} ${where}; shapes must not overlap or touch`;
+  }
+  const swap = kinds[0] === 'enclosure' || (kinds[1] !== 'enclosure' && f.otherShape > f.shape);
+  const [s, e, os, oe] = swap ? [f.otherShape, f.otherEdge, f.shape, f.edge] : [f.shape, f.edge, f.otherShape, f.otherEdge];
+  if (ctx.shapes[os].kind === 'enclosure') {
+    return `${label(s)}: edge ${edge(s, e)} ${verb} the enclosure wall (shape ${os + 1}, edge ${edge(os, oe)}) ${where}; solids must lie inside the enclosure without touching it`;
+  }
+  return `${label(s)}: edge ${edge(s, e)} ${verb} ${label(os)} edge ${edge(os, oe)} ${where}; solids must not overlap or touch`;
+}
+
+function isNeighbour(a: number, b: number, count: number): boolean {
+  return b - a === 1 || (a === 1 && b === count);
+}

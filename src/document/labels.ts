@@ -1,0 +1,46 @@
+// How messages name things. Shapes, points and edges are counted from 1 in
+// every message (as a person counts them in the file); edge k runs from point
+// k to point k+1 and the last edge closes the shape.
+
+/** A number for a message: up to 10 significant digits, no trailing zeros. */
+export function formatNumber(x: number): string {
+  if (!Number.isFinite(x)) return String(x);
+  return String(Number(x.toPrecision(10)));
+}
+
+export function formatPoint([x, y]: readonly [number, number]): string {
+  return `(${formatNumber(x)}, ${formatNumber(y)})`;
+}
+
+/** A surface or field name in quotes, control characters shown as '?', long names cut. */
+export function quoteName(name: string): string {
+  // eslint-disable-next-line no-control-regex
+  const clean = name.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
+  return `'${clean.length > 40 ? `${clean.slice(0, 39)}…` : clean}'`;
+}
+
+/** A value that broke a rule, for "(got ...)". */
+export function describeValue(value: unknown): string {
+  if (value === undefined) return 'nothing';
+  if (value === null) return 'null';
+  if (typeof value === 'string') return JSON.stringify(value.length > 30 ? `${value.slice(0, 29)}…` : value);
+  if (typeof value === 'number') return formatNumber(value);
+  if (typeof value === 'boolean') return String(value);
+  if (Array.isArray(value)) return value.length === 0 ? 'an empty list' : `a list of ${value.length}`;
+  if (typeof value === 'object') return 'an object';
+  return typeof value;
+}
+
+/**
+ * "shape 2 (solid 'block')" from whatever the file holds for shape `index`
+ * (0-based): kind and surface names when they are readable.
+ */
+export function shapeLabel(index: number, shape: unknown): string {
+  const s = (shape ?? {}) as { kind?: unknown; surface?: unknown };
+  const kind = s.kind === 'enclosure' || s.kind === 'solid' ? s.kind : '';
+  const raw = typeof s.surface === 'string' ? [s.surface] : Array.isArray(s.surface) ? s.surface : [];
+  const names = [...new Set(raw.filter((n): n is string => typeof n === 'string' && n !== ''))];
+  const shown = names.slice(0, 3).map(quoteName).join('/') + (names.length > 3 ? '/…' : '');
+  const detail = [kind, shown].filter(Boolean).join(' ');
+  return detail ? `shape ${index + 1} (${detail})` : `shape ${index + 1}`;
+}

@@ -1,0 +1,28 @@
+// Documented limits of a sketch. Numbers beyond them are refused with a
+// message rather than computed badly (or slowly enough to freeze a tab).
+
+/** Most edges in one sketch: the view-factor matrix has edges^2 entries (5000 edges: 200 MB of doubles). */
+export const MAX_EDGES = 5000;
+
+/**
+ * Largest |coordinate|, in file units. Squares and products of coordinate
+ * differences (lengths, orientation tests) must stay far from overflow,
+ * including the error terms of the exact predicates.
+ */
+export const MAX_COORDINATE = 1e100;
+
+/** Shortest edge, in file units: keeps squared lengths and predicate error terms far from underflow. */
+export const MIN_EDGE_LENGTH = 1e-100;
+
+/**
+ * Shortest edge relative to the size of its coordinates (2^-40, about 1e-12):
+ * shorter edges sit within a few thousand rounding steps of their own
+ * coordinates, so their direction and length are mostly rounding.
+ */
+export const MIN_RELATIVE_EDGE_LENGTH = 2 ** -40;
+
+/** Longest surface name, in characters. */
+export const MAX_NAME_LENGTH = 200;
+
+/** Most messages returned for one file; the rest are counted. */
+export const MAX_MESSAGES = 8;

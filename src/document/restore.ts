@@ -1,0 +1,101 @@
+// The one way in for a sketch: file text, a pasted document, an autosave.
+// Never throws; a refused document comes back as short messages that say what
+// is wrong and where (shapes, points and edges counted from 1).
+import { checkSketchGeometry } from '../core/sketchChecks';
+import type { PolygonInput } from '../core/scene';
+import { formatGeometryFinding } from './geometryMessages';
+import { parseJsonText } from './jsonText';
+import { MAX_EDGES, MAX_MESSAGES } from './limits';
+import { migrate } from './migrate';
+import { normalise } from './normalise';
+import { sketchFileSchemaV1, type Sketch } from './schema';
+import { formatSchemaIssue } from './zodMessages';
+import { unknownFieldWarnings } from './unknownFields';
+
+export type RestoreResult = { ok: true; sketch: Sketch; warnings: string[] } | { ok: false; errors: string[] };
+
+/**
+ * Read a sketch from JSON text or from an already-parsed value; validate it
+ * against the file format, bring older versions up to date, normalise it
+ * (one surface name per edge, repeated consecutive points removed) and check
+ * its geometry. Warnings describe repairs and ignored content.
+ */
+export function restore(input: string | unknown): RestoreResult {
+  try {
+    return restoreUnsafe(input);
+  } catch (error) {
+    // A fault here is a bug, but the caller (app or command line) must still get a message, not an exception.
+    const detail = error instanceof Error ? error.message.split('\n', 1)[0] : String(error);
+    return { ok: false, errors: [`could not read the sketch (internal error: ${detail})`] };
+  }
+}
+
+function restoreUnsafe(input: unknown): RestoreResult {
+  let value = input;
+  if (typeof input === 'string') {
+    const parsed = parseJsonText(input);
+    if (!parsed.ok) return refuse([parsed.error]);
+    value = parsed.value;
+  }
+  const kind = notASketch(value);
+  if (kind) return refuse([kind]);
+  const migrated = migrate(value as Record<string, unknown>);
+  if (!migrated.ok) return refuse([migrated.error]);
+  const doc = migrated.doc;
+
+  const shapeCount = Array.isArray(doc.shapes) ? doc.shapes.length : 0;
+  if (shapeCount > MAX_EDGES / 3) {
+    return refuse([`the sketch has ${shapeCount} shapes; the limit is ${MAX_EDGES} edges in all, and each shape has at least 3`]);
+  }
+  const edges = countEdges(doc.shapes);
+  if (edges > MAX_EDGES) {
+    return refuse([`the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`]);
+  }
+
+  const parsed = sketchFileSchemaV1.safeParse(doc, { reportInput: true });
+  if (!parsed.success) return refuse(parsed.error.issues.map((issue) => formatSchemaIssue(issue, doc)));
+
+  const normalised = normalise(parsed.data);
+  if (normalised.errors.length > 0) return refuse(normalised.errors);
+  const { sketch, fileIndex, filePointCount } = normalised;
+
+  const polygons: PolygonInput[] = sketch.shapes.map((s) => ({ kind: s.kind, points: s.points.flat() }));
+  const findings = checkSketchGeometry(polygons);
+  if (findings.length > 0) {
+    return refuse(findings.map((f) => formatGeometryFinding(f, { shapes: sketch.shapes, fileIndex, filePointCount })));
+  }
+  return { ok: true, sketch, warnings: [...unknownFieldWarnings(doc), ...normalised.warnings] };
+}
+
+function refuse(messages: string[]): RestoreResult {
+  const unique = [...new Set(messages)];
+  if (unique.length <= MAX_MESSAGES) return { ok: false, errors: unique };
+  const more = unique.length - (MAX_MESSAGES - 1);
+  return { ok: false, errors: [...unique.slice(0, MAX_MESSAGES - 1), `…and ${more} more problems`] };
+}
+
+/** A message when the value is plainly not a sketch document (another kind of file), else null. */
+function notASketch(value: unknown): string | null {
+  const expected = 'a Tautline sketch is a JSON object with "version", "units" and "shapes"';
+  if (value === null || typeof value !== 'object') {
+    return `not a Tautline sketch: the file holds ${value === null ? 'null' : `a single ${typeof value}`}; ${expected}`;
+  }
+  if (Array.isArray(value)) return `not a Tautline sketch: the file holds a list; ${expected}`;
+  const keys = Object.keys(value);
+  if (!keys.includes('version') && !keys.includes('shapes')) {
+    const found = keys.length === 0 ? 'an empty object' : `fields ${keys.slice(0, 4).map((k) => JSON.stringify(k)).join(', ')}${keys.length > 4 ? ', …' : ''}`;
+    return `not a Tautline sketch: found ${found}; ${expected}`;
+  }
+  return null;
+}
+
+/** Edges the document would have (points per shape), counted before the schema runs so a huge file is refused quickly. */
+function countEdges(shapes: unknown): number {
+  if (!Array.isArray(shapes)) return 0;
+  let total = 0;
+  for (const s of shapes) {
+    const points = (s as { points?: unknown } | null)?.points;
+    if (Array.isArray(points)) total += points.length;
+  }
+  return total;
+}

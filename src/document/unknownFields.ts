@@ -1,0 +1,28 @@
+// Fields this version does not know are ignored (and not saved again); say
+// so, since they may be a misspelling ("emisivity") or from a newer program.
+import { quoteName, shapeLabel } from './labels';
+
+const TOP = ['version', 'units', 'shapes', 'surfaces', 'settings'];
+const SHAPE = ['kind', 'points', 'surface'];
+const SURFACE = ['emissivity', 'temperature', 'heatFlux', 'adiabatic', 'opening'];
+const SETTINGS = ['surroundingsTemperature', 'depth'];
+
+/** Warnings for unknown fields of a document that passed the schema. */
+export function unknownFieldWarnings(doc: Record<string, unknown>): string[] {
+  const warnings: string[] = [];
+  const note = (where: string, obj: unknown, known: string[]) => {
+    if (obj === null || typeof obj !== 'object') return;
+    const extra = Object.keys(obj).filter((k) => !known.includes(k));
+    if (extra.length > 0) {
+      const names = extra.slice(0, 3).map(quoteName).join(', ') + (extra.length > 3 ? ', …' : '');
+      warnings.push(`${where}: ignored unknown field${extra.length === 1 ? '' : 's'} ${names}`);
+    }
+  };
+  note('the sketch', doc, TOP);
+  (Array.isArray(doc.shapes) ? doc.shapes : []).forEach((shape, i) => note(shapeLabel(i, shape), shape, SHAPE));
+  for (const [name, props] of Object.entries((doc.surfaces ?? {}) as Record<string, unknown>)) {
+    note(`surface ${quoteName(name)}`, props, SURFACE);
+  }
+  note('settings', doc.settings, SETTINGS);
+  return warnings;
+}

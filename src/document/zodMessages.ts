@@ -1,0 +1,48 @@
+// Turns schema issues into short messages that say where (shape, point, edge
+// or surface, counted from 1) and which rule, with the offending value.
+import type { z } from 'zod';
+import { describeValue, quoteName, shapeLabel } from './labels';
+
+/** One message per issue; `file` is the raw document, used to label shapes. */
+export function formatSchemaIssue(issue: z.core.$ZodIssue, file: unknown): string {
+  const path = issue.path;
+  const input = (issue as { input?: unknown }).input;
+  const missing = input === undefined && (issue.code === 'invalid_type' || issue.code === 'invalid_value' || issue.code === 'invalid_union');
+  const what = missing ? `is missing; it ${issue.message}` : `${issue.message} (got ${describeReceived(issue, input)})`;
+  const { subject, field } = describePath(path, file);
+  if (!field) return `${subject} ${what}`;
+  return `${subject}: ${field} ${what}`;
+}
+
+function describeReceived(issue: z.core.$ZodIssue, input: unknown): string {
+  // NaN and Infinity only come from objects (JSON cannot hold them); the issue names them.
+  const received = (issue as { received?: unknown }).received;
+  if (received === 'NaN' || received === 'Infinity') return received;
+  if (typeof input === 'number' && !Number.isFinite(input)) return String(input);
+  return describeValue(input);
+}
+
+function describePath(path: PropertyKey[], file: unknown): { subject: string; field: string } {
+  const [head, ...rest] = path;
+  if (head === undefined) return { subject: 'the sketch', field: '' };
+  if (head === 'shapes' && typeof rest[0] === 'number') {
+    const shapes = ((file ?? {}) as { shapes?: unknown[] }).shapes ?? [];
+    return { subject: shapeLabel(rest[0], shapes[rest[0]]), field: shapeField(rest.slice(1)) };
+  }
+  if (head === 'surfaces' && rest.length > 0) {
+    return { subject: `surface ${quoteName(String(rest[0]))}`, field: rest.slice(1).map(String).join(' ') };
+  }
+  if (head === 'settings' && rest.length > 0) return { subject: 'settings', field: rest.map(String).join(' ') };
+  return { subject: [head, ...rest].map(String).join(' '), field: '' };
+}
+
+function shapeField(rest: PropertyKey[]): string {
+  const [key, index, axis] = rest;
+  if (key === undefined) return '';
+  if (key === 'points' && typeof index === 'number') {
+    const coordinate = axis === 0 ? ' x' : axis === 1 ? ' y' : axis === undefined ? '' : ` ${String(axis)}`;
+    return `point ${index + 1}${coordinate}`;
+  }
+  if (key === 'surface' && typeof index === 'number') return `surface name of edge ${index + 1}`;
+  return rest.map(String).join(' ');
+}
