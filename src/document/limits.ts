@@ -24,5 +24,5 @@ export const MIN_RELATIVE_EDGE_LENGTH = 2 ** -40;
 /** Longest surface name, in characters. */
 export const MAX_NAME_LENGTH = 200;
 
-/** Most messages returned for one file; the rest are counted. */
-export const MAX_MESSAGES = 8;
+/** Most messages returned for one file (the last says how many more); fix the first ones first. */
+export const MAX_MESSAGES = 5;

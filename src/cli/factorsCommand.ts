@@ -1,0 +1,141 @@
+// `factors FILE [--json | --csv]`: the view factor between every pair of named
+// surfaces of a sketch file, as a readable table, one JSON object, or CSV.
+import { computeViewFactors } from '../core/viewFactors';
+import type { ViewFactorResult } from '../core/scene';
+import { matrixCsv, restore, toScene, type Sketch } from '../document';
+import { describeReadError, type CliIO } from './io';
+
+export const FACTORS_USAGE = 'usage: npm run cli -- factors FILE [--json | --csv]';
+
+const FACTORS_HELP = `${FACTORS_USAGE}
+
+View factors between the named surfaces of a sketch file (row = from,
+column = to, surfaces in order of first appearance along the edges).
+  --json   one JSON object: surfaces (name, length), viewFactors,
+           rowSumResidual (1 - row sum), reciprocityResidual
+  --csv    the matrix as CSV, header row and first column of names
+Lengths are in the file's units; view factors are dimensionless.
+FILE '-' reads standard input.
+`;
+
+/** Most warnings printed (errors are already capped by restore). */
+const MAX_WARNINGS = 5;
+
+type Format = 'table' | 'json' | 'csv';
+
+/** Run the command; returns the exit code (0 done, 1 bad file, 2 bad arguments). */
+export function runFactors(args: string[], io: CliIO): number {
+  let format: Format = 'table';
+  const files: string[] = [];
+  for (const arg of args) {
+    if (arg === '--help' || arg === '-h') {
+      io.out(FACTORS_HELP);
+      return 0;
+    }
+    if (arg === '--json' || arg === '--csv') {
+      const wanted = arg === '--json' ? 'json' : 'csv';
+      if (format !== 'table' && format !== wanted) return usageError(io, 'choose one of --json and --csv');
+      format = wanted;
+    } else if (arg.startsWith('-') && arg !== '-') {
+      return usageError(io, `unknown option '${arg}'`);
+    } else {
+      files.push(arg);
+    }
+  }
+  if (files.length === 0) return usageError(io, 'no sketch file given');
+  if (files.length > 1) return usageError(io, `one sketch file at a time (got ${files.length})`);
+  const file = files[0];
+
+  let text: string;
+  try {
+    text = io.readFile(file);
+  } catch (error) {
+    io.err(`factors: ${describeReadError(file, error)}\n`);
+    return 1;
+  }
+  const read = restore(text);
+  if (!read.ok) {
+    for (const m of read.errors) io.err(`factors: ${file}: ${m}\n`);
+    return 1;
+  }
+  for (const m of read.warnings.slice(0, MAX_WARNINGS)) io.err(`factors: ${file}: warning: ${m}\n`);
+  if (read.warnings.length > MAX_WARNINGS) io.err(`factors: ${file}: …and ${read.warnings.length - MAX_WARNINGS} more warnings\n`);
+  const { sketch } = read;
+  if (sketch.shapes.length === 0) {
+    io.err(`factors: ${file}: the sketch has no shapes; nothing to compute\n`);
+    return 1;
+  }
+
+  const { scene, surfaceNames } = toScene(sketch);
+  const result = computeViewFactors(scene);
+  if (!allFinite(result)) {
+    io.err(`factors: ${file}: internal error: the computation produced a non-finite number; please report this file\n`);
+    return 1;
+  }
+  if (format === 'json') io.out(`${JSON.stringify(factorsJson(surfaceNames, result))}\n`);
+  else if (format === 'csv') io.out(matrixCsv(surfaceNames, result.F));
+  else io.out(factorsTable(file, sketch, surfaceNames, result));
+  return 0;
+}
+
+/** The --json object: row = from, column = to, both in the order of `surfaces`. */
+export function factorsJson(names: string[], result: ViewFactorResult) {
+  const n = result.surfaceCount;
+  return {
+    surfaces: names.map((name, i) => ({ name, length: result.surfaceLength[i] })),
+    viewFactors: Array.from({ length: n }, (_, i) => Array.from(result.F.subarray(i * n, (i + 1) * n))),
+    rowSumResidual: Array.from(result.rowSumResidual),
+    reciprocityResidual: result.reciprocityResidual,
+  };
+}
+
+function factorsTable(file: string, sketch: Sketch, names: string[], r: ViewFactorResult): string {
+  const n = r.surfaceCount;
+  const shown = names.map(displayName);
+  const width = Math.max(7, ...shown.map((s) => s.length));
+  const cell = 10;
+  const pad = (s: string, w: number) => s + ' '.repeat(Math.max(0, w - s.length));
+  const lines: string[] = [];
+  lines.push(`View factors of ${displayName(file, Infinity)} (${n} surface${n === 1 ? '' : 's'}, lengths in ${sketch.units})`, '');
+  lines.push(`  ${pad('surface', width)}  length`);
+  shown.forEach((s, i) => lines.push(`  ${pad(s, width)}  ${formatLength(r.surfaceLength[i])}`));
+  lines.push('', 'F (row = from, column = to):');
+  const header = shown.map((s) => pad(s.length > cell - 1 ? `${s.slice(0, cell - 2)}…` : s, cell)).join('');
+  lines.push(`  ${pad('', width)}  ${header}${r.closed ? '' : 'surroundings'}`.trimEnd());
+  for (let i = 0; i < n; i++) {
+    let row = '';
+    for (let j = 0; j < n; j++) row += pad(r.F[i * n + j].toFixed(6), cell);
+    if (!r.closed) row += r.rowSumResidual[i].toFixed(6);
+    lines.push(`  ${pad(shown[i], width)}  ${row.trimEnd()}`);
+  }
+  lines.push('');
+  if (r.closed) {
+    const worst = Math.max(0, ...Array.from(r.rowSumResidual, Math.abs));
+    lines.push(`Enclosure rule: largest |1 - row sum| = ${worst.toExponential(1)}`);
+  } else {
+    lines.push('Open sketch (no enclosure): the last column is the factor to the surroundings, 1 - row sum.');
+  }
+  lines.push(`Reciprocity: largest relative |L_I F_IJ - L_J F_JI| = ${r.reciprocityResidual.toExponential(1)}`);
+  return `${lines.join('\n')}\n`;
+}
+
+function formatLength(x: number): string {
+  return String(Number(x.toPrecision(8)));
+}
+
+/** Names as plain text for a terminal: control characters (escape sequences) shown as '?', long names cut. */
+function displayName(name: string, longest = 24): string {
+  // eslint-disable-next-line no-control-regex
+  const clean = name.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
+  return clean.length > longest ? `${clean.slice(0, longest - 1)}…` : clean;
+}
+
+function allFinite(r: ViewFactorResult): boolean {
+  const arrays = [r.F, r.surfaceLength, r.rowSumResidual];
+  return Number.isFinite(r.reciprocityResidual) && arrays.every((a) => a.every(Number.isFinite));
+}
+
+function usageError(io: CliIO, problem: string): number {
+  io.err(`factors: ${problem}\n${FACTORS_USAGE}\n`);
+  return 2;
+}
