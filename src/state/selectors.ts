@@ -21,3 +21,5 @@ export const selectResultsStale = (s: AppState) =>
 
 export const selectGrid = (s: AppState) => ({ snap: s.snap, gridStep: s.gridStep });
 export const selectToolOptions = (s: AppState) => ({ quickKind: s.quickKind, tubeSides: s.tubeSides });
+export const selectFitRequest = (s: AppState) => s.fitRequest;
+export const selectHoverPoint = (s: AppState) => s.hoverPoint;

@@ -29,6 +29,8 @@ export interface ViewSlice {
   /** Surfaces under the pointer in the table (from, to), highlighted on the canvas. */
   hoverPair: [string, string] | null;
   helpOpen: boolean;
+  /** Bumped to ask the canvas to fit the sketch in view (the canvas knows its size). */
+  fitRequest: number;
   notices: Notice[];
   setTool: (tool: Tool) => void;
   setSelection: (selection: Pick[]) => void;
@@ -42,6 +44,7 @@ export interface ViewSlice {
   setDigits: (digits: number) => void;
   setHoverPair: (pair: [string, string] | null) => void;
   setHelpOpen: (open: boolean) => void;
+  requestFit: () => void;
   notify: (level: Notice['level'], text: string) => void;
   dismissNotice: (id: number) => void;
 }
@@ -61,6 +64,7 @@ export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) 
   digits: 4,
   hoverPair: null,
   helpOpen: false,
+  fitRequest: 0,
   notices: [],
   setTool: (tool) => set({ tool, draft: [], hoverPoint: null }),
   setSelection: (selection) => set({ selection }),
@@ -74,6 +78,7 @@ export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) 
   setDigits: (digits) => set({ digits: Math.max(1, Math.min(15, Math.round(digits) || 1)) }),
   setHoverPair: (hoverPair) => set({ hoverPair }),
   setHelpOpen: (helpOpen) => set({ helpOpen }),
+  requestFit: () => set((s) => ({ fitRequest: s.fitRequest + 1 })),
   notify: (level, text) => set((s) => ({ notices: [...s.notices.slice(-4), { id: nextNoticeId++, level, text }] })),
   dismissNotice: (id) => set((s) => ({ notices: s.notices.filter((n) => n.id !== id) })),
 });

@@ -1,0 +1,21 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from './ui/App';
+import { AppProvider } from './ui/AppContext';
+import { startRuntime } from './state/runtime';
+import { documentApi } from './state/documentApi';
+import { demoSketch } from './state/demo';
+import { spawnViewFactorWorker } from './worker/spawn';
+import './ui/styles.css';
+
+const runtime = startRuntime({ storage: window.localStorage, api: documentApi, spawn: spawnViewFactorWorker, demo: demoSketch });
+// Browser tests read the store through this handle (never used by the app itself).
+(window as unknown as { __tautline?: unknown }).__tautline = runtime;
+
+createRoot(document.getElementById('root')!).render(
+  <StrictMode>
+    <AppProvider store={runtime.store} api={documentApi}>
+      <App />
+    </AppProvider>
+  </StrictMode>,
+);

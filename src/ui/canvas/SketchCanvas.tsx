@@ -1,0 +1,68 @@
+import { useEffect, useMemo } from 'react';
+import { Stage } from 'react-konva';
+import { useApp } from '../AppContext';
+import {
+  selectCamera, selectDoc, selectDraft, selectFitRequest, selectHoverPair, selectHoverPoint, selectSelection, selectTool, selectViewFactors,
+} from '../../state/selectors';
+import type { AppState } from '../../state/store';
+import { fitCamera } from '../../state/camera';
+import { sketchBounds } from '../../state/geometry/polygon';
+import { useElementSize } from './useElementSize';
+import { usePointerRouting } from './usePointerRouting';
+import { useSelectedSurfaces } from './useSelectedSurfaces';
+import { surfaceOrder } from './surfaceIndex';
+import { problemMarks } from './problems';
+import { GridLayer } from './GridLayer';
+import { ShapesLayer } from './ShapesLayer';
+import { HandlesLayer } from './HandlesLayer';
+import { DraftLayer } from './DraftLayer';
+import { ProblemLayer } from './ProblemLayer';
+
+const selectGridStep = (s: AppState) => s.gridStep;
+const selectSetCamera = (s: AppState) => s.setCamera;
+
+export function SketchCanvas() {
+  const { ref, width, height } = useElementSize<HTMLDivElement>();
+  const doc = useApp(selectDoc);
+  const camera = useApp(selectCamera);
+  const tool = useApp(selectTool);
+  const selection = useApp(selectSelection);
+  const draft = useApp(selectDraft);
+  const hover = useApp(selectHoverPoint);
+  const hoverPair = useApp(selectHoverPair);
+  const gridStep = useApp(selectGridStep);
+  const fitRequest = useApp(selectFitRequest);
+  const setCamera = useApp(selectSetCamera);
+  const results = useApp(selectViewFactors);
+  const selected = useSelectedSurfaces();
+  const handlers = usePointerRouting();
+
+  const order = useMemo(() => surfaceOrder(doc), [doc]);
+  const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
+  const problems = useMemo(
+    () => (results.status === 'invalid' ? problemMarks(results.problems, doc.shapes.length) : { shapes: new Set<number>(), points: [] }),
+    [results.status, results.problems, doc.shapes.length],
+  );
+
+  // Fit on first layout and whenever asked (F, the Fit button, a file opened).
+  useEffect(() => {
+    if (width > 0 && height > 0) setCamera(fitCamera(sketchBounds(doc.shapes), width, height));
+    // Fitting follows the size and explicit requests only, not every edit.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [width > 0 && height > 0, fitRequest]);
+
+  const cursor = tool === 'select' ? 'default' : 'crosshair';
+  return (
+    <div ref={ref} className="canvas-box" tabIndex={0} aria-label="Sketch canvas: draw with the mouse; the side panel edits the same sketch numerically" style={{ cursor }}>
+      {width > 0 && height > 0 && (
+        <Stage width={width} height={height} {...handlers}>
+          <GridLayer camera={camera} width={width} height={height} step={gridStep} />
+          <ShapesLayer doc={doc} camera={camera} order={order} emphasis={emphasis} problemShapes={problems.shapes} />
+          <HandlesLayer doc={doc} camera={camera} selection={selection} showAll={tool === 'select'} />
+          <DraftLayer tool={tool} draft={draft} hover={hover} camera={camera} />
+          <ProblemLayer points={problems.points} camera={camera} />
+        </Stage>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,45 @@
+import { useEffect } from 'react';
+import { useAppStore, useController, useDocumentApi } from '../AppContext';
+import { TOOL_KEYS } from './shortcuts';
+import { OPEN_INPUT_ID } from './FileButtons';
+import { downloadText } from './download';
+import { sketchFileText } from '../../state/files';
+
+function typingInField(target: EventTarget | null): boolean {
+  const el = target as HTMLElement | null;
+  return !!el && (el.tagName === 'INPUT' || el.tagName === 'TEXTAREA' || el.tagName === 'SELECT' || el.isContentEditable);
+}
+
+export function useShortcuts(): void {
+  const store = useAppStore();
+  const controller = useController();
+  const api = useDocumentApi();
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (typingInField(e.target)) return;
+      const s = store.getState();
+      const key = e.key.toLowerCase();
+      const mod = e.ctrlKey || e.metaKey;
+      if (mod && key === 'z') { e.preventDefault(); if (e.shiftKey) s.redo(); else s.undo(); return; }
+      if (mod && key === 'y') { e.preventDefault(); s.redo(); return; }
+      if (mod && key === 's') { e.preventDefault(); downloadText('sketch.json', sketchFileText(store, api), 'application/json'); return; }
+      if (mod && key === 'o') { e.preventDefault(); document.getElementById(OPEN_INPUT_ID)?.click(); return; }
+      if (mod || e.altKey) return;
+      if (e.key === '?') { s.setHelpOpen(!s.helpOpen); return; }
+      if (e.key === 'Escape') { if (s.helpOpen) s.setHelpOpen(false); else controller.cancel(); return; }
+      if (e.key === 'Enter') { controller.finishDraft(); return; }
+      if (e.key === 'Delete' || e.key === 'Backspace') {
+        e.preventDefault();
+        if (s.draft.length && (s.tool === 'enclosure' || s.tool === 'solid')) s.setDraft(s.draft.slice(0, -1));
+        else controller.deleteSelection();
+        return;
+      }
+      if (key === 'g') { s.setSnap(!s.snap); return; }
+      if (key === 'f') { s.requestFit(); return; }
+      const tool = TOOL_KEYS.find((t) => t.key === key);
+      if (tool) s.setTool(tool.tool);
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [store, controller, api]);
+}

@@ -1,0 +1,42 @@
+import { useEffect, useId, useState } from 'react';
+
+interface Props {
+  label: string;
+  title: string;
+  value: number;
+  onCommit: (v: number) => void;
+  width?: string;
+  integer?: boolean;
+  /** Digits shown when not editing. */
+  precision?: number;
+}
+
+/** A labelled number input that commits on Enter or leaving the field, and refuses non-numbers. */
+export function NumberField({ label, title, value, onCommit, width, integer, precision = 10 }: Props) {
+  const id = useId();
+  const shown = integer ? String(value) : String(Number(value.toPrecision(precision)));
+  const [text, setText] = useState(shown);
+  const [editing, setEditing] = useState(false);
+  useEffect(() => { if (!editing) setText(shown); }, [shown, editing]);
+  const parsed = Number(text.trim().replace(',', '.'));
+  const bad = text.trim() === '' || !Number.isFinite(parsed);
+  const commit = () => {
+    setEditing(false);
+    if (bad) { setText(shown); return; }
+    if (parsed !== value) onCommit(integer ? Math.round(parsed) : parsed);
+  };
+  return (
+    <span className="field" title={title}>
+      <label htmlFor={id}>{label}</label>
+      <input id={id} type="text" inputMode="decimal" value={text} aria-invalid={bad || undefined}
+        style={width ? { width } : undefined}
+        onFocus={() => setEditing(true)}
+        onChange={(e) => { setEditing(true); setText(e.target.value); }}
+        onBlur={commit}
+        onKeyDown={(e) => {
+          if (e.key === 'Enter') commit();
+          if (e.key === 'Escape') { setEditing(false); setText(shown); }
+        }} />
+    </span>
+  );
+}

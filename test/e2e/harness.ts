@@ -1,0 +1,52 @@
+// Browser-test harness: build the app once with Vite, serve the build on a free
+// port on 127.0.0.1, and drive Debian's chromium with playwright-core (no browser download).
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { createServer } from 'node:net';
+import { build, preview, type PreviewServer } from 'vite';
+import { chromium, type BrowserContext } from 'playwright-core';
+
+export const CHROMIUM = '/usr/bin/chromium';
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = createServer();
+    srv.once('error', reject);
+    srv.listen(0, '127.0.0.1', () => {
+      const addr = srv.address();
+      const port = typeof addr === 'object' && addr ? addr.port : 0;
+      srv.close(() => resolve(port));
+    });
+  });
+}
+
+/** The served app and a browser context with a fresh profile (1366 x 768, the laptop size the layout must fit). */
+export interface App { url: string; context: BrowserContext; close: () => Promise<void> }
+
+export async function startApp(): Promise<App> {
+  const outDir = mkdtempSync(join(tmpdir(), 'tautline-build-'));
+  const profile = mkdtempSync(join(tmpdir(), 'tautline-profile-'));
+  await build({ logLevel: 'error', build: { outDir, emptyOutDir: true } });
+  const port = await freePort();
+  const server: PreviewServer = await preview({ logLevel: 'error', build: { outDir }, preview: { host: '127.0.0.1', port, strictPort: true } });
+  // The fresh profile directory is chromium's --user-data-dir (playwright passes it).
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM,
+    headless: true,
+    viewport: { width: 1366, height: 768 },
+    acceptDownloads: true,
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update',
+      '--disable-sync', '--no-first-run', '--disable-quic'],
+  });
+  return {
+    url: `http://127.0.0.1:${port}/`,
+    context,
+    close: async () => {
+      await context.close();
+      await new Promise<void>((r) => server.httpServer.close(() => r()));
+      rmSync(outDir, { recursive: true, force: true });
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
