@@ -6,7 +6,9 @@ import type { PolygonInput } from './scene';
  * An enclosure is walked anticlockwise (inside on the left), a solid clockwise
  * (outside on the left), whatever winding the input used.
  * Edge ids keep the input numbering: polygon by polygon, edge k from point k to k+1.
- * Coordinates and lengths are in sketch units.
+ * Coordinates are in sketch units relative to `originX, originY` (the lower-left corner
+ * of the sketch's bounding box): a sketch drawn far from the origin, say at 1e6 with
+ * millimetre features, then computes with small, exactly shifted numbers.
  */
 export interface EdgeSet {
   count: number;
@@ -22,6 +24,8 @@ export interface EdgeSet {
   /** The oriented edge that starts where this one ends (shares point b). */
   nextEdge: Int32Array;
   hasEnclosure: boolean;
+  originX: number;
+  originY: number;
 }
 
 /** Twice the signed area of a flat [x0,y0,x1,y1,...] polygon; > 0 when anticlockwise (y up). */
@@ -52,6 +56,14 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
   const prevEdge = new Int32Array(count);
   const nextEdge = new Int32Array(count);
   let hasEnclosure = false;
+  let originX = Infinity, originY = Infinity;
+  for (const poly of polygons) {
+    for (let k = 0; k < poly.points.length; k += 2) {
+      originX = Math.min(originX, poly.points[k]);
+      originY = Math.min(originY, poly.points[k + 1]);
+    }
+  }
+  if (count === 0) originX = originY = 0;
   let base = 0;
   polygons.forEach((poly, p) => {
     const pts = poly.points;
@@ -64,10 +76,10 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
       const m = k + 1 === n ? 0 : k + 1;
       const e = base + k;
       const [s, t] = flip ? [m, k] : [k, m];
-      ax[e] = pts[2 * s];
-      ay[e] = pts[2 * s + 1];
-      bx[e] = pts[2 * t];
-      by[e] = pts[2 * t + 1];
+      ax[e] = pts[2 * s] - originX;
+      ay[e] = pts[2 * s + 1] - originY;
+      bx[e] = pts[2 * t] - originX;
+      by[e] = pts[2 * t + 1] - originY;
       length[e] = Math.hypot(bx[e] - ax[e], by[e] - ay[e]);
       polygon[e] = p;
       const before = base + (k === 0 ? n - 1 : k - 1);
@@ -78,5 +90,5 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
     }
     base += n;
   });
-  return { count, ax, ay, bx, by, length, polygon, prevEdge, nextEdge, hasEnclosure };
+  return { count, ax, ay, bx, by, length, polygon, prevEdge, nextEdge, hasEnclosure, originX, originY };
 }

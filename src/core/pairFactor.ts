@@ -123,8 +123,9 @@ export class PairIntegrator {
     );
     if (this.segCount === 0) {
       // Unobstructed: crossed minus uncrossed strings over 2 (Hottel).
-      return 0.5 * (Math.hypot(b0x - a0x, b0y - a0y) + Math.hypot(b1x - a1x, b1y - a1y)
-        - Math.hypot(b0x - a1x, b0y - a1y) - Math.hypot(b1x - a0x, b1y - a0y));
+      // Written as distance changes along i so that short edges lose no digits.
+      const dx = a1x - a0x, dy = a1y - a0y;
+      return 0.5 * (distanceChange(b1x, b1y, a0x, a0y, a1x, a1y, dx, dy) - distanceChange(b0x, b0y, a0x, a0y, a1x, a1y, dx, dy));
     }
     this.buildGroups(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
     const nEvents = this.findEvents(a0x, a0y, a1x, a1y);
@@ -163,7 +164,11 @@ export class PairIntegrator {
       if (dP < 0) t0 = Math.max(t0, dP / (dP - dQ));
       else if (dQ < 0) t1 = Math.min(t1, dP / (dP - dQ));
     }
-    if (t1 <= t0) return;
+    // A corner strictly inside H keeps its piece even when rounding makes the clipped
+    // piece vanish (a corner a hair inside a side): chains must stay connected.
+    if (pIn) t0 = 0;
+    if (qIn) t1 = 1;
+    if (t1 <= t0 && !pIn && !qIn) return;
     const s = this.segCount;
     if (s === this.segEdge.length) this.growSegments();
     this.segEdge[s] = edge;
@@ -191,7 +196,10 @@ export class PairIntegrator {
     const flags = this.segFlags;
     // Open chains start at a piece whose start is not inside H.
     for (let s = 0; s < this.segCount; s++) {
-      if ((flags[s] & 1) === 0) this.walkChain(s, a0x, a0y, a1x, a1y);
+      if ((flags[s] & 1) === 0 || this.stamp[this.e.prevEdge[this.segEdge[s]]] !== this.call) {
+        flags[s] &= ~1; // its start is the end of the chain
+        this.walkChain(s, a0x, a0y, a1x, a1y);
+      }
     }
     // What is left are closed chains: bodies lying wholly inside H.
     for (let s = 0; s < this.segCount; s++) {
@@ -314,14 +322,15 @@ export class PairIntegrator {
         sortOrderByKey(this.order, this.loKey, nIv);
         const pax = a0x + sa * dxI, pay = a0y + sa * dyI;
         const pbx = a0x + sb * dxI, pby = a0y + sb * dyI;
+        const ddx = (sb - sa) * dxI, ddy = (sb - sa) * dyI;
         // Sweep the blocked intervals from j's low end; the gaps are what p sees of j.
         let cur = jLo, curP = 1;
         for (let n = 0; n < nIv; n++) {
           const o = this.order[n];
-          if (this.loKey[o] > cur) total += gap(X, Y, curP, this.loPt[o], pax, pay, pbx, pby);
+          if (this.loKey[o] > cur) total += gap(X, Y, curP, this.loPt[o], pax, pay, pbx, pby, ddx, ddy);
           if (this.hiKey[o] > cur) { cur = this.hiKey[o]; curP = this.hiPt[o]; }
         }
-        if (cur < jHi) total += gap(X, Y, curP, 0, pax, pay, pbx, pby);
+        if (cur < jHi) total += gap(X, Y, curP, 0, pax, pay, pbx, pby, ddx, ddy);
       }
       sa = sb;
     }
@@ -352,10 +361,19 @@ export class PairIntegrator {
  * point v is -(|v - pb| - |v - pa|).
  */
 function gap(X: Float64Array, Y: Float64Array, lo: number, hi: number,
-  pax: number, pay: number, pbx: number, pby: number): number {
-  const dLo = Math.hypot(X[lo] - pbx, Y[lo] - pby) - Math.hypot(X[lo] - pax, Y[lo] - pay);
-  const dHi = Math.hypot(X[hi] - pbx, Y[hi] - pby) - Math.hypot(X[hi] - pax, Y[hi] - pay);
-  return 0.5 * (dLo - dHi);
+  pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
+  return 0.5 * (distanceChange(X[lo], Y[lo], pax, pay, pbx, pby, dx, dy) - distanceChange(X[hi], Y[hi], pax, pay, pbx, pby, dx, dy));
+}
+
+/**
+ * |v - pb| - |v - pa| without cancellation, given d = pb - pa computed directly:
+ * (|v-pb|^2 - |v-pa|^2) / (|v-pb| + |v-pa|) = -d . ((v-pa) + (v-pb)) / (|v-pa| + |v-pb|).
+ * Keeps the factor from a very short edge (or piece) accurate to rounding.
+ */
+function distanceChange(vx: number, vy: number, pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
+  const ux = vx - pax, uy = vy - pay, wx = vx - pbx, wy = vy - pby;
+  const sum = Math.hypot(ux, uy) + Math.hypot(wx, wy);
+  return sum === 0 ? 0 : -(dx * (ux + wx) + dy * (uy + wy)) / sum;
 }
 
 /**
@@ -367,13 +385,12 @@ function silhouetteFromSegment(a0x: number, a0y: number, a1x: number, a1y: numbe
   wx: number, wy: number, ux: number, uy: number, vx: number, vy: number): boolean {
   const f0 = orient(a0x, a0y, wx, wy, ux, uy);
   const g0 = orient(a0x, a0y, wx, wy, vx, vy);
-  if (f0 * g0 > 0) return true;
   const f1 = orient(a1x, a1y, wx, wy, ux, uy);
   const g1 = orient(a1x, a1y, wx, wy, vx, vy);
-  if (f1 * g1 > 0) return true;
-  // Both orientations are affine along the segment; if either keeps its sign the
-  // product f g stays <= 0 throughout. If both change sign, it may turn positive between.
-  return f0 * f1 < 0 && g0 * g1 < 0;
+  // f and g are affine along the segment. The corner is surely no silhouette only when
+  // f g < 0 at both ends and neither changes sign; with both changing sign, f g turns
+  // positive between the roots. Any zero at an end counts as a possible silhouette.
+  return !(f0 * g0 < 0 && f1 * g1 < 0 && f0 * f1 > 0);
 }
 
 function grow(a: Float64Array<ArrayBuffer>): Float64Array<ArrayBuffer> {

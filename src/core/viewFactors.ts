@@ -50,10 +50,17 @@ export function edgeViewFactors(edges: EdgeSet, options: ViewFactorOptions = {})
     if (L[i] === 0) continue;
     for (let j = i + 1; j < n; j++) {
       if (L[j] === 0) continue;
-      const g = integrator.exchangeLength(i, j); // = L_i F_ij = L_j F_ji
-      if (g === 0 && !options.independentPairs) continue;
+      // g = L_i F_ij = L_j F_ji. Integrating along the shorter edge keeps its rounding
+      // error relative to that edge, so the factor from a tiny edge stays accurate.
+      if (options.independentPairs) {
+        F[i * n + j] = integrator.exchangeLength(i, j) / L[i];
+        F[j * n + i] = integrator.exchangeLength(j, i) / L[j];
+        continue;
+      }
+      const g = L[i] <= L[j] ? integrator.exchangeLength(i, j) : integrator.exchangeLength(j, i);
+      if (g === 0) continue;
       F[i * n + j] = g / L[i];
-      F[j * n + i] = (options.independentPairs ? integrator.exchangeLength(j, i) : g) / L[j];
+      F[j * n + i] = g / L[j];
     }
   }
   return F;
