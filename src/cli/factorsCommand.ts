@@ -91,7 +91,7 @@ export function factorsJson(names: string[], result: ViewFactorResult) {
 
 function factorsTable(file: string, sketch: Sketch, names: string[], r: ViewFactorResult): string {
   const n = r.surfaceCount;
-  const shown = names.map(displayName);
+  const shown = names.map((name) => displayName(name));
   const width = Math.max(7, ...shown.map((s) => s.length));
   const cell = 10;
   const pad = (s: string, w: number) => s + ' '.repeat(Math.max(0, w - s.length));

@@ -18,6 +18,8 @@ commands:
 Run a command with --help for its options. FILE '-' reads standard input.
 `;
 
+const SHORT_USAGE = 'usage: npm run cli -- <command> FILE [options]   (commands: factors, exchange; --help for more)';
+
 const commands: Record<string, (args: string[], io: CliIO) => number> = {
   factors: runFactors,
   exchange: runExchange,
@@ -28,7 +30,7 @@ export function main(argv: string[], io: CliIO): number {
   try {
     const [command, ...rest] = argv;
     if (command === undefined) {
-      io.err(`tautline: no command given\n${HELP}`);
+      io.err(`tautline: no command given\n${SHORT_USAGE}\n`);
       return 2;
     }
     if (command === '--help' || command === '-h' || command === 'help') {
@@ -37,7 +39,7 @@ export function main(argv: string[], io: CliIO): number {
     }
     const run = Object.hasOwn(commands, command) ? commands[command] : undefined;
     if (!run) {
-      io.err(`tautline: unknown command '${command.slice(0, 40)}' (commands: ${Object.keys(commands).join(', ')}; --help for more)\n`);
+      io.err(`tautline: unknown command '${command.slice(0, 40)}'\n${SHORT_USAGE}\n`);
       return 2;
     }
     return run(rest, io);
