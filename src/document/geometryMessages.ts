@@ -5,7 +5,10 @@ import { formatPoint, shapeLabel } from './labels';
 import type { Shape } from './schema';
 
 export interface GeometryContext {
+  /** Shapes after normalising (the ones checked). */
   shapes: readonly Shape[];
+  /** Shapes as written, to label them by kind and surface names. */
+  fileShapes: readonly unknown[];
   /** Per shape: for each kept edge (= its start point), its index in the file. */
   fileIndex: readonly (readonly number[])[];
   /** Points per shape as written in the file (before repairs). */
@@ -13,7 +16,7 @@ export interface GeometryContext {
 }
 
 export function formatGeometryFinding(f: GeometryFinding, ctx: GeometryContext): string {
-  const label = (shape: number) => shapeLabel(shape, ctx.shapes[shape]);
+  const label = (shape: number) => shapeLabel(shape, ctx.fileShapes[shape]);
   const edge = (shape: number, k: number) => ctx.fileIndex[shape][k] + 1;
   const point = edge; // a kept edge starts at the kept point of the same index
   switch (f.rule) {

@@ -62,7 +62,7 @@ function restoreUnsafe(input: unknown): RestoreResult {
   const polygons: PolygonInput[] = sketch.shapes.map((s) => ({ kind: s.kind, points: s.points.flat() }));
   const findings = checkSketchGeometry(polygons);
   if (findings.length > 0) {
-    return refuse(findings.map((f) => formatGeometryFinding(f, { shapes: sketch.shapes, fileIndex, filePointCount })));
+    return refuse(findings.map((f) => formatGeometryFinding(f, { shapes: sketch.shapes, fileShapes: parsed.data.shapes, fileIndex, filePointCount })));
   }
   return { ok: true, sketch, warnings: [...unknownFieldWarnings(doc), ...normalised.warnings] };
 }
