@@ -1,0 +1,84 @@
+// Drawing through the tool kernels and the canvas controller, no canvas needed.
+import { describe, expect, it } from 'vitest';
+import { createAppStore } from '../../src/state/store';
+import { CanvasController } from '../../src/state/canvasController';
+import { emptySketch } from '../../src/state/documentSlice';
+import { clickPoint, finish, removeLastPoint, emptyDraft } from '../../src/state/tools/polygonTool';
+import { rectangleFromCorners, regularPolygon } from '../../src/state/tools/quickShapes';
+import { restore } from '../../src/document';
+import type { Point } from '../../src/state/sketchFile';
+
+const at = (p: Point, shift = false) => ({ at: p, shift, tolerance: 0.05 });
+
+describe('polygon kernel', () => {
+  it('adds points, ignores a repeated click and closes on the first point', () => {
+    let d = emptyDraft;
+    d = clickPoint(d, [0, 0], 0.05).draft;
+    d = clickPoint(d, [2, 0], 0.05).draft;
+    d = clickPoint(d, [2, 0.01], 0.05).draft; // second click of a double-click
+    d = clickPoint(d, [2, 1], 0.05).draft;
+    expect(d.points).toEqual([[0, 0], [2, 0], [2, 1]]);
+    const closed = clickPoint(d, [0.02, -0.01], 0.05);
+    expect(closed.finished).toEqual([[0, 0], [2, 0], [2, 1]]);
+    expect(closed.draft.points).toEqual([]);
+  });
+
+  it('does not finish with fewer than three points; removeLastPoint steps back', () => {
+    const d = { points: [[0, 0], [1, 0]] as Point[] };
+    expect(finish(d).finished).toBeUndefined();
+    expect(removeLastPoint(d).points).toEqual([[0, 0]]);
+  });
+
+  it('makes rectangles and regular polygons, refusing zero size', () => {
+    expect(rectangleFromCorners([2, 1], [0, 0])).toEqual([[0, 0], [2, 0], [2, 1], [0, 1]]);
+    expect(rectangleFromCorners([0, 0], [0, 1])).toBeNull();
+    const hex = regularPolygon([1, 1], [1.5, 1], 6)!;
+    expect(hex).toHaveLength(6);
+    for (const [x, y] of hex) expect(Math.hypot(x - 1, y - 1)).toBeCloseTo(0.5, 10);
+    expect(regularPolygon([0, 0], [0, 0], 8)).toBeNull();
+  });
+});
+
+describe('drawing with the controller', () => {
+  it('draws an enclosure by clicks and Enter, each edge its own named surface', () => {
+    const store = createAppStore(emptySketch);
+    const c = new CanvasController(store);
+    store.getState().setTool('enclosure');
+    for (const p of [[0, 0], [3, 0], [3, 2], [0, 2]] as Point[]) { c.press(at(p)); c.release(at(p)); }
+    expect(store.getState().draft).toHaveLength(4);
+    c.finishDraft();
+    const shape = store.getState().doc.shapes[0];
+    expect(shape.kind).toBe('enclosure');
+    expect(shape.points).toEqual([[0, 0], [3, 0], [3, 2], [0, 2]]);
+    expect(shape.surface).toEqual(['wall 1', 'wall 2', 'wall 3', 'wall 4']);
+    expect(store.getState().selection).toEqual([{ type: 'shape', shape: 0 }]);
+    expect(restore(store.getState().doc).ok).toBe(true);
+  });
+
+  it('snaps clicks to the grid and closes a body on its first point', () => {
+    const store = createAppStore({ version: 1, units: 'm', shapes: [{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 4], [0, 4]], surface: 'wall' }] });
+    const c = new CanvasController(store);
+    store.getState().setGridStep(0.5);
+    store.getState().setTool('solid');
+    for (const p of [[1.1, 1.2], [2.9, 0.9], [2.1, 2.6], [1.04, 1.03]] as Point[]) c.press(at(p));
+    const body = store.getState().doc.shapes[1];
+    expect(body.kind).toBe('solid');
+    expect(body.points).toEqual([[1, 1], [3, 1], [2, 2.5]]);
+    expect(body.surface).toEqual(['body 1 edge 1', 'body 1 edge 2', 'body 1 edge 3']);
+  });
+
+  it('drags a rectangle and a tube as bodies', () => {
+    const store = createAppStore({ version: 1, units: 'm', shapes: [{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 4], [0, 4]], surface: 'wall' }] });
+    const c = new CanvasController(store);
+    store.getState().setTool('rectangle');
+    c.press(at([0.5, 0.5])); c.move(at([1.5, 1.0])); c.release(at([1.5, 1.0]));
+    store.getState().setTool('tube');
+    store.getState().setTubeSides(8);
+    c.press(at([3, 3])); c.move(at([3.5, 3])); c.release(at([3.5, 3]));
+    const shapes = store.getState().doc.shapes;
+    expect(shapes[1].points).toEqual([[0.5, 0.5], [1.5, 0.5], [1.5, 1], [0.5, 1]]);
+    expect(shapes[2].kind).toBe('solid');
+    expect(shapes[2].points).toHaveLength(8);
+    expect(restore(store.getState().doc).ok).toBe(true);
+  });
+});

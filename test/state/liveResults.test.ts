@@ -1,0 +1,89 @@
+import { describe, expect, it } from 'vitest';
+import { createAppStore } from '../../src/state/store';
+import { startLiveResults, type JobRunner } from '../../src/state/liveResults';
+import { documentApi } from '../../src/state/documentApi';
+import { setVertex } from '../../src/state/edits/shapeEdits';
+import { emptySketch } from '../../src/state/documentSlice';
+import { ViewFactorClient } from '../../src/worker/client';
+import { viewFactorApi } from '../../src/worker/api';
+import type { SketchFile } from '../../src/state/sketchFile';
+import { spawner } from '../worker/fakeWorker';
+
+const box: SketchFile = {
+  version: 1, units: 'm',
+  shapes: [
+    { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] },
+    { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: 'block' },
+  ],
+};
+const flush = () => new Promise((r) => setTimeout(r, 0));
+/** The real core, run in-thread. */
+const inThread: JobRunner = { run: async (job) => ({ kind: 'done', result: await viewFactorApi.compute(job), elapsedMs: 0 }) };
+
+describe('live results', () => {
+  it('computes for the current document and files the result with it', async () => {
+    const store = createAppStore(box);
+    startLiveResults(store, inThread, documentApi);
+    expect(store.getState().viewFactors.status).toBe('computing');
+    await flush();
+    const vf = store.getState().viewFactors;
+    expect(vf.status).toBe('ready');
+    expect(vf.shown?.doc).toBe(box);
+    expect(vf.shown?.surfaceNames).toEqual(['floor', 'right', 'roof', 'left', 'block']);
+  });
+
+  it('marks invalid geometry, keeps the last valid result and the drawing', async () => {
+    const store = createAppStore(box);
+    startLiveResults(store, inThread, documentApi);
+    await flush();
+    const shown = store.getState().viewFactors.shown;
+    // Drag a block corner through the wall.
+    store.getState().edit((d) => setVertex(d, 1, 1, [4.5, 0.75]));
+    await flush();
+    const vf = store.getState().viewFactors;
+    expect(vf.status).toBe('invalid');
+    expect(vf.problems.join(' ')).toMatch(/shape 2.*(enclosure|outside)/);
+    expect(vf.shown).toBe(shown);
+    expect(store.getState().doc.shapes[1].points[1]).toEqual([4.5, 0.75]);
+  });
+
+  it('shows nothing to compute for an empty sketch', async () => {
+    const store = createAppStore(emptySketch);
+    startLiveResults(store, inThread, documentApi);
+    await flush();
+    expect(store.getState().viewFactors.status).toBe('empty');
+  });
+
+  it('after a worker that throws or hangs: shows the error, restarts, keeps the document, never stuck computing', async () => {
+    const { workers, spawn } = spawner();
+    const client = new ViewFactorClient(spawn, { timeLimitMs: 40 });
+    const store = createAppStore(box);
+    startLiveResults(store, client, documentApi);
+    await flush();
+    workers[0].calls[0].reject(new Error('simulated fault'));
+    await flush();
+    let s = store.getState();
+    expect(s.viewFactors.status).toBe('error');
+    expect(s.viewFactors.error).toContain('simulated fault');
+    expect(s.notices.at(-1)?.level).toBe('error');
+    expect(s.notices.at(-1)?.text).toMatch(/restarted; your sketch is unchanged/);
+    expect(s.doc).toBe(box);
+    expect(workers).toHaveLength(2);
+    // The next edit runs on the new worker; this one hangs past the time limit.
+    s.edit((d) => setVertex(d, 0, 2, [4, 2.5]));
+    await new Promise((r) => setTimeout(r, 80));
+    s = store.getState();
+    expect(s.viewFactors.status).toBe('error');
+    expect(s.viewFactors.error).toMatch(/took too long/);
+    expect(workers).toHaveLength(3);
+    expect(s.doc.shapes[0].points[2]).toEqual([4, 2.5]);
+    // A healthy worker answers the next edit.
+    s.edit((d) => setVertex(d, 0, 2, [4, 2.4]));
+    await flush();
+    const call = workers[2].calls[0];
+    call.resolve(await viewFactorApi.compute(call.job));
+    await flush();
+    expect(store.getState().viewFactors.status).toBe('ready');
+    client.dispose();
+  });
+});

@@ -1,0 +1,94 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { ViewFactorClient, type JobOutcome } from '../../src/worker/client';
+import type { ViewFactorJob } from '../../src/worker/job';
+import { fakeResult, spawner } from './fakeWorker';
+
+const job = (tag: number): ViewFactorJob => ({
+  polygons: [{ kind: 'enclosure', points: Float64Array.from([tag, 0, 1, 0, 1, 1]) }],
+  edgeSurface: Int32Array.from([0, 0, 0]), surfaceCount: 1,
+});
+const flush = () => new Promise((r) => setTimeout(r, 0));
+
+afterEach(() => vi.useRealTimers());
+
+describe('view-factor client', () => {
+  it('runs one job at a time and keeps only the newest waiting job', async () => {
+    const { workers, spawn } = spawner();
+    const client = new ViewFactorClient(spawn, { timeLimitMs: 1000 });
+    const w = workers[0];
+    const outcomes: (JobOutcome | undefined)[] = [];
+    [1, 2, 3, 4].forEach((t, i) => void client.run(job(t)).then((o) => { outcomes[i] = o; }));
+    await flush();
+    expect(w.calls).toHaveLength(1); // job 1 runs; 2 and 3 were replaced by 4
+    expect(outcomes[1]).toEqual({ kind: 'dropped' });
+    expect(outcomes[2]).toEqual({ kind: 'dropped' });
+    w.calls[0].resolve(fakeResult(w.calls[0].job));
+    await flush();
+    expect(outcomes[0]?.kind).toBe('done'); // one job behind is still delivered
+    expect(w.calls).toHaveLength(2);
+    expect(w.calls[1].job.polygons[0].points[0]).toBe(4); // the newest geometry runs next
+    w.calls[1].resolve(fakeResult(w.calls[1].job));
+    await flush();
+    expect(outcomes[3]?.kind).toBe('done');
+    expect(client.busy).toBe(false);
+    client.dispose();
+  });
+
+  it('recovers from a job that throws: reports it, replaces the worker, runs the next job', async () => {
+    const { workers, spawn } = spawner();
+    const client = new ViewFactorClient(spawn, { timeLimitMs: 1000 });
+    const first = client.run(job(1));
+    const second = client.run(job(2));
+    await flush();
+    workers[0].calls[0].reject(new Error('index out of range'));
+    expect(await first).toEqual({ kind: 'failed', reason: 'threw', message: 'index out of range' });
+    expect(workers[0].terminated).toBe(true);
+    expect(workers).toHaveLength(2);
+    expect(client.restarts).toBe(1);
+    await flush();
+    expect(workers[1].calls).toHaveLength(1);
+    workers[1].calls[0].resolve(fakeResult(workers[1].calls[0].job));
+    expect((await second).kind).toBe('done');
+    client.dispose();
+  });
+
+  it('gives up on a hung job at the time limit and ignores its late answer', async () => {
+    vi.useFakeTimers();
+    const { workers, spawn } = spawner();
+    const client = new ViewFactorClient(spawn, { timeLimitMs: 500 });
+    let outcome: JobOutcome | undefined;
+    void client.run(job(1)).then((o) => { outcome = o; });
+    await vi.advanceTimersByTimeAsync(499);
+    expect(outcome).toBeUndefined();
+    await vi.advanceTimersByTimeAsync(2);
+    expect(outcome).toMatchObject({ kind: 'failed', reason: 'timeout' });
+    expect(workers[0].terminated).toBe(true);
+    // A late answer from the dead worker changes nothing.
+    workers[0].calls[0].resolve(fakeResult(workers[0].calls[0].job));
+    await vi.advanceTimersByTimeAsync(1);
+    expect(outcome).toMatchObject({ kind: 'failed' });
+    // The new worker serves the next job.
+    const next = client.run(job(5));
+    await vi.advanceTimersByTimeAsync(1);
+    workers[1].calls[0].resolve(fakeResult(workers[1].calls[0].job));
+    expect((await next).kind).toBe('done');
+    client.dispose();
+  });
+
+  it('treats a crashed worker like a failed job', async () => {
+    const { workers, spawn } = spawner();
+    const client = new ViewFactorClient(spawn, { timeLimitMs: 1000 });
+    const p = client.run(job(1));
+    await flush();
+    workers[0].die('out of memory');
+    expect(await p).toEqual({ kind: 'failed', reason: 'crashed', message: 'out of memory' });
+    expect(workers).toHaveLength(2);
+    client.dispose();
+  });
+
+  it('a compute that throws synchronously fails the job instead of the caller', async () => {
+    const client = new ViewFactorClient(() => ({ compute: () => { throw new Error('boom'); }, terminate: () => {} }), { timeLimitMs: 1000 });
+    expect(await client.run(job(1))).toMatchObject({ kind: 'failed', reason: 'threw', message: 'boom' });
+    client.dispose();
+  });
+});
