@@ -3,8 +3,8 @@
 // uses exact orientation predicates, so collinear and touching cases are
 // decided exactly, not by a tolerance. Indices in findings count from 0; the
 // document layer turns them into messages for people.
-import { orient2d } from 'robust-predicates';
 import Flatbush from 'flatbush';
+import { orient as orientation } from './orient';
 import type { PolygonInput } from './scene';
 
 /** A location in sketch units. */
@@ -94,12 +94,6 @@ export function checkSketchGeometry(polygons: readonly PolygonInput[], options: 
   }
   findings.push(...findNestedSolids(polygons, usable, contacts.touching));
   return findings;
-}
-
-/** Exact orientation: positive when c lies to the left of the line a -> b (anticlockwise turn, y up), 0 when collinear. */
-export function orientation(ax: number, ay: number, bx: number, by: number, cx: number, cy: number): number {
-  // robust-predicates returns the opposite sign (its convention is y-down screens).
-  return -orient2d(ax, ay, bx, by, cx, cy);
 }
 
 /**

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { checkSketchGeometry, orientation, pointInPolygon, signedDoubleArea, type GeometryFinding } from '../../src/core/sketchChecks';
+import { checkSketchGeometry, pointInPolygon, signedDoubleArea, type GeometryFinding } from '../../src/core/sketchChecks';
+import { orient as orientation } from '../../src/core/orient';
 import type { PolygonInput } from '../../src/core/scene';
 
 // Geometry facts used here are elementary plane geometry (common practice):
