@@ -1,0 +1,50 @@
+// Seeded benchmark of the view-factor core: `npm run bench`.
+// Prints min and median wall time of a full edge matrix per scene size, the growth
+// from one size to the next, and the memory of the edge matrix.
+import { buildEdges } from '../../src/core/edges';
+import { edgeViewFactors } from '../../src/core/viewFactors';
+import type { SceneInput } from '../../src/core/scene';
+import { tubeScene } from './scenes';
+
+function time(scene: SceneInput, repeats: number): { min: number; median: number; edges: number; rowWorst: number } {
+  const edges = buildEdges(scene.polygons);
+  const n = edges.count;
+  const matrix = new Float64Array(n * n);
+  const times: number[] = [];
+  for (let r = 0; r < repeats; r++) {
+    const t0 = performance.now();
+    edgeViewFactors(edges, { edgeMatrix: matrix });
+    times.push(performance.now() - t0);
+  }
+  let rowWorst = 0;
+  for (let i = 0; i < n; i++) {
+    let s = 0;
+    for (let j = 0; j < n; j++) s += matrix[i * n + j];
+    rowWorst = Math.max(rowWorst, Math.abs(1 - s));
+  }
+  times.sort((a, b) => a - b);
+  return { min: times[0], median: times[times.length >> 1], edges: n, rowWorst };
+}
+
+const args = process.argv.slice(2);
+const quick = args.includes('--quick');
+const cases: { label: string; scene: SceneInput; repeats: number }[] = [
+  { label: 'drag-size sketch: 6 bodies', scene: tubeScene(42, 6, 22, 18), repeats: quick ? 20 : 200 },
+  { label: '20 tubes, ~100 edges', scene: tubeScene(1, 20, 4, 20), repeats: quick ? 5 : 30 },
+  { label: '20 tubes, ~400 edges', scene: tubeScene(1, 20, 18, 40), repeats: quick ? 3 : 10 },
+  { label: '20 tubes, ~1600 edges', scene: tubeScene(1, 20, 75, 100), repeats: quick ? 1 : 5 },
+];
+
+console.log(`node ${process.version}, ${quick ? 'quick' : 'full'} run`);
+console.log('scene                          edges   min ms  median ms  growth  matrix MB  worst |1-row sum|');
+let previous: { edges: number; median: number } | null = null;
+for (const c of cases) {
+  const r = time(c.scene, c.repeats);
+  const growth = previous && c.label.startsWith('20 tubes') && previous.edges < r.edges
+    ? `${(r.median / previous.median).toFixed(2)}x/${(r.edges / previous.edges).toFixed(1)}x edges`
+    : '';
+  console.log(
+    `${c.label.padEnd(30)} ${String(r.edges).padStart(5)} ${r.min.toFixed(2).padStart(8)} ${r.median.toFixed(2).padStart(10)}  ${growth.padEnd(18)} ${((r.edges * r.edges * 8) / 1e6).toFixed(1).padStart(6)}  ${r.rowWorst.toExponential(1)}`,
+  );
+  if (c.label.startsWith('20 tubes')) previous = { edges: r.edges, median: r.median };
+}
