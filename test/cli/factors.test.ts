@@ -112,7 +112,7 @@ describe('factors --csv and the table', () => {
     const files = { 'tri.json': triangle };
     const csv = run(['factors', 'tri.json', '--csv'], files);
     expect(csv.code).toBe(0);
-    const rows = Papa.parse<string[]>(csv.out.trimEnd(), { newline: '\r\n' }).data;
+    const rows = Papa.parse<string[]>(csv.out.trimEnd(), { newline: '\r\n', delimiter: ',' }).data;
     expect(rows[0]).toEqual(['from \\ to', 'a', 'b', 'c']);
     expect(rows.map((r) => r[0])).toEqual(['from \\ to', 'a', 'b', 'c']);
     const F = json(run(['factors', 'tri.json', '--json'], files)).viewFactors;
@@ -122,7 +122,7 @@ describe('factors --csv and the table', () => {
   it('CSV neutralises formula-like surface names', () => {
     const names = ['=HYPERLINK("x")', '+wall', '-roof', '@floor'];
     const evil = sketch([{ kind: 'enclosure', points: [[0, 0], [1, 0], [1, 1], [0, 1]], surface: names }]);
-    const rows = Papa.parse<string[]>(run(['factors', 'e.json', '--csv'], { 'e.json': evil }).out.trimEnd(), { newline: '\r\n' }).data;
+    const rows = Papa.parse<string[]>(run(['factors', 'e.json', '--csv'], { 'e.json': evil }).out.trimEnd(), { newline: '\r\n', delimiter: ',' }).data;
     expect(rows[0].slice(1)).toEqual(names.map((n) => `'${n}`));
   });
 

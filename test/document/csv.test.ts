@@ -15,7 +15,7 @@ describe('CSV export', () => {
 
   it('neutralises names a spreadsheet would run as formulas, but not numbers', () => {
     const out = toCsv([['=SUM(A1:A9)', '+1', '-x', '@cmd', '\tq', '\rr', '=a\nb', 'safe'], [-0.5, 1e-17, 0, 1, 2, 3, 4, 5]]);
-    const [names, values] = Papa.parse<string[]>(out.trimEnd(), { newline: '\r\n' }).data;
+    const [names, values] = Papa.parse<string[]>(out.trimEnd(), { newline: '\r\n', delimiter: ',' }).data;
     expect(names).toEqual(["'=SUM(A1:A9)", "'+1", "'-x", "'@cmd", "'\tq", "'\rr", "'=a\nb", 'safe']);
     expect(values.map(Number)).toEqual([-0.5, 1e-17, 0, 1, 2, 3, 4, 5]);
   });
@@ -24,7 +24,7 @@ describe('CSV export', () => {
     fc.assert(fc.property(fc.array(fc.string({ minLength: 1 }), { minLength: 1, maxLength: 5 }), fc.double({ noNaN: true, noDefaultInfinity: true }), (names, x) => {
       const n = names.length;
       const matrix = Float64Array.from({ length: n * n }, (_, k) => x * (k + 1));
-      const rows = Papa.parse<string[]>(matrixCsv(names, matrix).slice(0, -2), { newline: '\r\n' }).data;
+      const rows = Papa.parse<string[]>(matrixCsv(names, matrix).slice(0, -2), { newline: '\r\n', delimiter: ',' }).data;
       expect(rows).toHaveLength(n + 1);
       const guarded = names.map((s) => (/^[=+\-@\t\r]/.test(s) ? `'${s}` : s));
       expect(rows[0].slice(1)).toEqual(guarded);
