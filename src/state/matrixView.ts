@@ -51,14 +51,3 @@ export function matrixView(shown: ShownResult): MatrixView {
   cache.set(shown, view);
   return view;
 }
-
-/** Tab-separated copy for pasting into a spreadsheet; names neutralised like the CSV. */
-export function matrixTsv(view: MatrixView, digits: number): string {
-  const safe = (name: string) => {
-    const flat = name.replace(/[\t\r\n]+/g, ' ');
-    return /^[=+\-@\t\r]/.test(name) ? `'${flat}` : flat;
-  };
-  const head = ['from \\ to', ...view.names.map(safe)].join('\t');
-  const body = view.rows.map((row, i) => [safe(view.names[i]), ...row.map((f) => f.toFixed(digits))].join('\t'));
-  return [head, ...body].join('\n') + '\n';
-}

@@ -1,5 +1,5 @@
-import { matrixCsv } from '../../document';
-import { matrixTsv, type MatrixView } from '../../state/matrixView';
+import type { MatrixView } from '../../state/matrixView';
+import { matrixTsv, shownCsv } from '../../state/matrixExport';
 import type { ShownResult } from '../../state/resultsSlice';
 import { NumberField } from '../inspector/NumberField';
 import { downloadText } from '../chrome/download';
@@ -8,11 +8,6 @@ import type { AppState } from '../../state/store';
 
 const selectSetDigits = (s: AppState) => s.setDigits;
 const selectNotify = (s: AppState) => s.notify;
-
-/** CSV text of the shown matrix: the same writer and content as the command line's --csv. */
-export function shownCsv(shown: ShownResult): string {
-  return matrixCsv(shown.surfaceNames.slice(0, shown.result.surfaceCount), shown.result.F);
-}
 
 export function MatrixControls({ shown, view, digits }: { shown: ShownResult | null; view: MatrixView | null; digits: number }) {
   const setDigits = useApp(selectSetDigits);

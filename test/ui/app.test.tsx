@@ -1,0 +1,124 @@
+// @vitest-environment jsdom
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { cleanup, configure, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { renderApp } from './renderApp';
+import { demoSketch } from '../../src/state/demo';
+import { AUTOSAVE_KEY, SET_ASIDE_PREFIX } from '../../src/state/autosave';
+import { MemoryStorage } from '../state/memoryStorage';
+import { spawner } from '../worker/fakeWorker';
+import { viewFactorApi } from '../../src/worker/api';
+
+vi.mock('../../src/ui/canvas/SketchCanvas', () => ({ SketchCanvas: () => <div data-testid="canvas-stub" /> }));
+
+// The whole suite shares two cores in CI: give async queries room.
+configure({ asyncUtilTimeout: 8000 });
+afterEach(() => cleanup());
+
+const matrix = () => screen.getByRole('table', { name: /view factor/i });
+
+describe('the app', () => {
+  it('opens the demo with its matrix, a CSV button and the safety caution', async () => {
+    renderApp();
+    await waitFor(() => expect(within(matrix()).getByRole('rowheader', { name: /fired floor/ })).toBeTruthy());
+    expect(within(matrix()).getAllByRole('row')).toHaveLength(1 + 7);
+    expect(screen.getByRole('button', { name: /CSV/ })).toBeTruthy();
+    expect(screen.getByRole('note', { name: /safety/i }).textContent).toMatch(/gray-diffuse radiation only.*licensed engineering practice/i);
+    await waitFor(() => expect(document.querySelector('[data-status]')?.textContent).toMatch(/Up to date/));
+  });
+
+  it('opening a bad file shows what is wrong and leaves the sketch untouched', async () => {
+    const user = userEvent.setup();
+    const { store } = renderApp();
+    const before = store.getState().doc;
+    const input = screen.getByLabelText('Sketch file to open') as HTMLInputElement;
+    const bad = new File(['{"version": 1, "units": "furlong", "shapes": []}'], 'colleague.json', { type: 'application/json' });
+    await user.upload(input, bad);
+    const alert = await screen.findByRole('alert');
+    expect(alert.textContent).toContain('Could not open "colleague.json"');
+    expect(alert.textContent).toMatch(/units/);
+    expect(store.getState().doc).toBe(before);
+    const good = new File([JSON.stringify({ version: 1, units: 'mm', shapes: [{ kind: 'enclosure', points: [[0, 0], [100, 0], [0, 100]], surface: 'w' }] })], 'ok.json');
+    await user.upload(input, good);
+    await waitFor(() => expect(store.getState().doc.units).toBe('mm'));
+    // Opening is one undo step.
+    await user.click(screen.getByRole('button', { name: 'Undo' }));
+    expect(store.getState().doc).toBe(before);
+  });
+
+  it('renders surface names as text, never as HTML', async () => {
+    const { store } = renderApp();
+    const nasty = '<img src=x onerror="window.__hacked=1">';
+    store.getState().edit((d) => ({ ...d, shapes: d.shapes.map((s, i) => (i === 1 ? { ...s, surface: nasty } : s)) }));
+    await waitFor(() => expect(within(matrix()).getByRole('rowheader', { name: nasty })).toBeTruthy());
+    expect(document.querySelector('img')).toBeNull();
+    expect((window as unknown as { __hacked?: number }).__hacked).toBeUndefined();
+  });
+
+  it('groups selected edges into a named surface and renames it in the Surfaces tab', async () => {
+    const user = userEvent.setup();
+    const { store } = renderApp();
+    store.getState().setSelection([{ type: 'edge', shape: 0, index: 0 }, { type: 'edge', shape: 0, index: 2 }]);
+    await user.type(await screen.findByLabelText('surface name'), 'hot faces');
+    await user.click(screen.getByRole('button', { name: 'Group' }));
+    expect(store.getState().doc.shapes[0].surface).toEqual(['hot faces', 'side walls', 'hot faces', 'refractory roof', 'refractory roof', 'side walls']);
+    await user.click(screen.getByRole('tab', { name: 'Surfaces' }));
+    const name = screen.getByDisplayValue('hot faces');
+    await user.clear(name);
+    await user.type(name, 'burner row{Enter}');
+    expect(store.getState().doc.shapes[0].surface[0]).toBe('burner row');
+    await waitFor(() => expect(within(matrix()).getByRole('rowheader', { name: /burner row/ })).toBeTruthy());
+    // Ctrl+Z twice brings the demo back.
+    fireEvent.keyDown(window, { key: 'z', ctrlKey: true });
+    fireEvent.keyDown(window, { key: 'z', ctrlKey: true });
+    expect(store.getState().doc).toBe(demoSketch);
+    fireEvent.keyDown(window, { key: 'Z', ctrlKey: true, shiftKey: true });
+    expect(store.getState().doc.shapes[0].surface[0]).toBe('hot faces');
+  });
+
+  it('edits a vertex numerically from the Edit tab', async () => {
+    const user = userEvent.setup();
+    const { store } = renderApp();
+    store.getState().setSelection([{ type: 'vertex', shape: 0, index: 2 }]);
+    const x = await screen.findByLabelText('x (m)');
+    await user.clear(x);
+    await user.type(x, '2.5{Enter}');
+    expect(store.getState().doc.shapes[0].points[2]).toEqual([2.5, 1.2]);
+    await user.clear(x);
+    await user.type(x, 'abc{Enter}'); // refused: the value goes back
+    expect(store.getState().doc.shapes[0].points[2]).toEqual([2.5, 1.2]);
+    expect((x as HTMLInputElement).value).toBe('2.5');
+  });
+
+  it('tells the user when a corrupt autosave was set aside', async () => {
+    const storage = new MemoryStorage();
+    storage.setItem(AUTOSAVE_KEY, 'not json at all');
+    renderApp({ storage });
+    const notice = await screen.findByText(/autosaved sketch could not be read/);
+    expect(notice.textContent).toContain(SET_ASIDE_PREFIX);
+    expect(storage.keys().some((k) => k.startsWith(SET_ASIDE_PREFIX))).toBe(true);
+  });
+
+  it('recovers from a worker that throws and one that hangs, keeping the document', async () => {
+    const { workers, spawn } = spawner();
+    const { store } = renderApp({ spawn, timeLimitMs: 60 });
+    await waitFor(() => expect(workers[0]?.calls).toHaveLength(1));
+    workers[0].calls[0].reject(new Error('simulated fault'));
+    expect((await screen.findByRole('alert')).textContent).toMatch(/failed \(simulated fault\).*restarted/);
+    expect(document.querySelector('[data-status]')?.getAttribute('data-status')).toBe('error');
+    expect(store.getState().doc).toBe(demoSketch);
+    // The next job hangs: after the time limit the app says so and is not stuck computing.
+    store.getState().edit((d) => ({ ...d, units: 'cm' }));
+    await waitFor(() => expect(document.querySelector('[data-status]')?.getAttribute('data-status')).toBe('computing'));
+    await waitFor(() => expect(screen.getAllByRole('alert').some((a) => /took too long/.test(a.textContent ?? ''))).toBe(true));
+    expect(document.querySelector('[data-status]')?.getAttribute('data-status')).toBe('error');
+    expect(store.getState().doc.units).toBe('cm');
+    // A third, healthy worker answers the next edit.
+    store.getState().edit((d) => ({ ...d, units: 'mm' }));
+    await waitFor(() => expect(workers[2]?.calls).toHaveLength(1));
+    const call = workers[2].calls[0];
+    call.resolve(await viewFactorApi.compute(call.job));
+    await waitFor(() => expect(document.querySelector('[data-status]')?.getAttribute('data-status')).toBe('ready'));
+    expect(within(matrix()).getAllByRole('row')).toHaveLength(8);
+  });
+});
