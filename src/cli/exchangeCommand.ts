@@ -1,7 +1,292 @@
-// Placeholder until the heat-exchange command lands; keeps main.ts's dispatch compiling.
-import type { CliIO } from './io';
+// `exchange FILE [--json | --csv] [--depth METRES]`: gray-diffuse radiation
+// exchange between the named surfaces of a sketch file, per metre of depth.
+// Units: lengths in the file's units; temperature K; net heat W per metre of
+// depth; net flux and radiosity W/m^2; totals W. Net heat and net flux are
+// positive when a surface gives off more radiation than it absorbs.
+// A surface without properties gets emissivity 0.9 and is adiabatic
+// (reradiating), see src/core/exchangeSetup.ts.
+import { ExchangeError, emissivePower, solveExchange, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
+import { exchangeInputFor } from '../core/exchangeSetup';
+import type { ViewFactorResult } from '../core/scene';
+import { computeViewFactors } from '../core/viewFactors';
+import { METRES_PER_UNIT, restore, toCsv, toScene, type CsvCell, type Sketch } from '../document';
+import { describeReadError, type CliIO } from './io';
 
-export function runExchange(_args: string[], io: CliIO): number {
-  io.err('exchange: not available yet\n');
-  return 1;
+export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --csv] [--depth METRES]';
+
+const CAUTION =
+  'Gray-diffuse radiation only: no convection or absorbing gas unless modelled. Results support, not replace, local codes and licensed engineering practice.';
+
+const EXCHANGE_HELP = `${EXCHANGE_USAGE}
+
+Gray-diffuse radiation exchange (net-radiation method) between the named
+surfaces of a sketch file, per metre of depth.
+  --json            one JSON object: surfaces (name, length, emissivity,
+                    temperature, netHeat, netFlux, radiosity), exchange
+                    (net heat from row to column), energyBalance
+  --csv             one row per surface
+  --depth METRES    length of the long dimension; adds totals in W
+                    (default: the file's settings.depth, if any)
+Units: length in the file's units, temperature K, netHeat W per metre of
+depth, netFlux and radiosity W/m^2, totals W. netHeat > 0: the surface gives
+off more radiation than it absorbs. A surface with no properties has
+emissivity 0.9 and is adiabatic. Open sketches and openings need
+settings.surroundingsTemperature (K). FILE '-' reads standard input.
+${CAUTION}
+`;
+
+/** Most warnings printed. */
+const MAX_WARNINGS = 5;
+
+type Format = 'table' | 'json' | 'csv';
+
+/** Run the command; returns the exit code (0 done, 1 bad file or no answer, 2 bad arguments). */
+export function runExchange(args: string[], io: CliIO): number {
+  let format: Format = 'table';
+  let depthArg: number | undefined;
+  const files: string[] = [];
+  for (let k = 0; k < args.length; k++) {
+    const arg = args[k];
+    if (arg === '--help' || arg === '-h') {
+      io.out(EXCHANGE_HELP);
+      return 0;
+    }
+    if (arg === '--json' || arg === '--csv') {
+      const wanted = arg === '--json' ? 'json' : 'csv';
+      if (format !== 'table' && format !== wanted) return usageError(io, 'choose one of --json and --csv');
+      format = wanted;
+    } else if (arg === '--depth' || arg.startsWith('--depth=')) {
+      const text = arg === '--depth' ? args[++k] : arg.slice('--depth='.length);
+      if (text === undefined) return usageError(io, '--depth needs a number of metres');
+      const value = text.trim() === '' ? Number.NaN : Number(text);
+      if (!(Number.isFinite(value) && value > 0)) return usageError(io, `--depth must be a number of metres above 0, got '${text.slice(0, 40)}'`);
+      depthArg = value;
+    } else if (arg.startsWith('-') && arg !== '-') {
+      return usageError(io, `unknown option '${arg.slice(0, 40)}'`);
+    } else {
+      files.push(arg);
+    }
+  }
+  if (files.length === 0) return usageError(io, 'no sketch file given');
+  if (files.length > 1) return usageError(io, `one sketch file at a time (got ${files.length})`);
+  const file = files[0];
+
+  let text: string;
+  try {
+    text = io.readFile(file);
+  } catch (error) {
+    io.err(`exchange: ${describeReadError(file, error)}\n`);
+    return 1;
+  }
+  const read = restore(text);
+  if (!read.ok) {
+    for (const m of read.errors) io.err(`exchange: ${file}: ${m}\n`);
+    return 1;
+  }
+  for (const m of read.warnings.slice(0, MAX_WARNINGS)) io.err(`exchange: ${file}: warning: ${m}\n`);
+  if (read.warnings.length > MAX_WARNINGS) io.err(`exchange: ${file}: …and ${read.warnings.length - MAX_WARNINGS} more warnings\n`);
+  const { sketch } = read;
+  if (sketch.shapes.length === 0) {
+    io.err(`exchange: ${file}: the sketch has no shapes; nothing to compute\n`);
+    return 1;
+  }
+
+  const { scene, surfaceNames } = toScene(sketch);
+  const factors = computeViewFactors(scene);
+  if (!factors.F.every(Number.isFinite) || !factors.surfaceLength.every(Number.isFinite)) {
+    io.err(`exchange: ${file}: internal error: the view factors came out non-finite; please report this file\n`);
+    return 1;
+  }
+  const metres = METRES_PER_UNIT[sketch.units];
+  let result: ExchangeResult;
+  let conditions: ReadonlyArray<SurfaceCondition>;
+  try {
+    const input = exchangeInputFor({
+      names: surfaceNames,
+      properties: sketch.surfaces,
+      viewFactors: factors.F,
+      lengthMetres: factors.surfaceLength.map((L) => L * metres),
+      surroundingsTemperature: sketch.settings.surroundingsTemperature,
+      depth: depthArg ?? sketch.settings.depth,
+    });
+    conditions = input.conditions;
+    result = solveExchange(input);
+  } catch (error) {
+    if (error instanceof ExchangeError) {
+      io.err(`exchange: ${file}: ${error.message}\n`);
+      return 1;
+    }
+    throw error;
+  }
+  const report: Report = { file, sketch, names: surfaceNames, factors, result, conditions };
+  if (format === 'json') io.out(`${JSON.stringify(exchangeJson(report))}\n`);
+  else if (format === 'csv') io.out(exchangeCsv(report));
+  else io.out(exchangeTable(report));
+  return 0;
+}
+
+interface Report {
+  file: string;
+  sketch: Sketch;
+  names: string[];
+  factors: ViewFactorResult;
+  result: ExchangeResult;
+  conditions: ReadonlyArray<SurfaceCondition>;
+}
+
+/** True when some surface sees the surroundings (an open sketch). */
+const seesSurroundings = (r: ExchangeResult) => r.surroundingsViewFactor.some((f) => f > 0);
+
+/**
+ * The --json object. Per surface: length (file units), emissivity, temperature
+ * (K), netHeat (W per metre of depth), netFlux and radiosity (W/m^2), and with
+ * a depth netHeatTotal (W). exchange[i][j]: net heat from surface i to j, W per
+ * metre of depth. Open sketches add `surroundings`.
+ */
+export function exchangeJson({ names, factors, result: r }: Report) {
+  const n = r.surfaceCount;
+  const withDepth = r.depth !== undefined;
+  const json: Record<string, unknown> = {
+    surfaces: names.map((name, i) => ({
+      name,
+      length: factors.surfaceLength[i],
+      emissivity: r.emissivity[i],
+      temperature: r.temperature[i],
+      netHeat: r.netHeat[i],
+      netFlux: r.netFlux[i],
+      radiosity: r.radiosity[i],
+      ...(withDepth ? { netHeatTotal: r.netHeatTotal![i] } : {}),
+    })),
+    exchange: Array.from({ length: n }, (_, i) => Array.from(r.exchange.subarray(i * n, (i + 1) * n))),
+    energyBalance: r.energyBalance,
+  };
+  if (withDepth) json.depth = r.depth;
+  if (seesSurroundings(r)) {
+    json.surroundings = {
+      temperature: r.surroundingsTemperature,
+      viewFactors: Array.from(r.surroundingsViewFactor),
+      exchange: Array.from(r.surroundingsExchange),
+      netHeat: r.surroundingsNetHeat,
+      ...(withDepth ? { netHeatTotal: r.surroundingsNetHeatTotal } : {}),
+    };
+  }
+  return json;
+}
+
+const CONDITION_LABEL: Record<SurfaceCondition['kind'], string> = {
+  temperature: 'temperature',
+  heatFlux: 'heat flux',
+  adiabatic: 'adiabatic',
+  opening: 'opening',
+};
+
+/** One row per surface (and one for the surroundings of an open sketch), units in the header. */
+export function exchangeCsv({ sketch, names, factors, result: r, conditions }: Report): string {
+  const withDepth = r.depth !== undefined;
+  const header: CsvCell[] = [
+    'surface',
+    `length (${sketch.units})`,
+    'emissivity',
+    'condition',
+    'temperature (K)',
+    'net heat (W/m)',
+    'net flux (W/m^2)',
+    'radiosity (W/m^2)',
+    ...(withDepth ? [`net heat total (W) over ${r.depth} m`] : []),
+  ];
+  const rows: CsvCell[][] = [header];
+  names.forEach((name, i) => {
+    rows.push([
+      name,
+      factors.surfaceLength[i],
+      r.emissivity[i],
+      CONDITION_LABEL[conditions[i].kind],
+      r.temperature[i],
+      r.netHeat[i],
+      r.netFlux[i],
+      r.radiosity[i],
+      ...(withDepth ? [r.netHeatTotal![i]] : []),
+    ]);
+  });
+  if (seesSurroundings(r)) {
+    const Ts = r.surroundingsTemperature!;
+    rows.push(['(surroundings)', '', 1, 'surroundings', Ts, r.surroundingsNetHeat, '', emissivePower(Ts), ...(withDepth ? [r.surroundingsNetHeatTotal!] : [])]);
+  }
+  return toCsv(rows);
+}
+
+function exchangeTable({ file, sketch, names, factors, result: r, conditions }: Report): string {
+  const n = r.surfaceCount;
+  const shown = names.map((s) => displayName(s));
+  const open = seesSurroundings(r);
+  const withDepth = r.depth !== undefined;
+  const lines: string[] = [];
+  lines.push(
+    `Heat exchange of ${displayName(file, Infinity)} (${n} surface${n === 1 ? '' : 's'}, lengths in ${sketch.units}, per metre of depth)`,
+    '',
+  );
+  const head = ['surface', 'length', 'emissivity', 'condition', 'T (K)', 'net heat (W/m)', 'net flux (W/m^2)', 'radiosity (W/m^2)'];
+  if (withDepth) head.push(`total (W) over ${fmt(r.depth!)} m`);
+  const body: string[][] = names.map((_, i) => {
+    const row = [
+      shown[i],
+      fmt(factors.surfaceLength[i]),
+      fmt(r.emissivity[i]),
+      conditions[i].kind === 'adiabatic' || conditions[i].kind === 'heatFlux' ? `${CONDITION_LABEL[conditions[i].kind]} (T solved)` : CONDITION_LABEL[conditions[i].kind],
+      r.temperature[i].toFixed(2),
+      fmt(r.netHeat[i]),
+      fmt(r.netFlux[i]),
+      fmt(r.radiosity[i]),
+    ];
+    if (withDepth) row.push(fmt(r.netHeatTotal![i]));
+    return row;
+  });
+  if (open) {
+    const row = ['(surroundings)', '', '1', 'black', r.surroundingsTemperature!.toFixed(2), fmt(r.surroundingsNetHeat), '', ''];
+    if (withDepth) row.push(fmt(r.surroundingsNetHeatTotal!));
+    body.push(row);
+  }
+  lines.push(...columns([head, ...body]));
+  lines.push('', "Net exchange q'_ij, W per metre of depth, from row to column:");
+  const matrixHead = ['', ...shown.map((s) => (s.length > 12 ? `${s.slice(0, 11)}…` : s))];
+  if (open) matrixHead.push('(surroundings)');
+  const matrixRows = names.map((_, i) => {
+    const row = [shown[i]];
+    for (let j = 0; j < n; j++) row.push(fmt(r.exchange[i * n + j]));
+    if (open) row.push(fmt(r.surroundingsExchange[i]));
+    return row;
+  });
+  lines.push(...columns([matrixHead, ...matrixRows]));
+  lines.push(
+    '',
+    `Energy balance: |sum of net heat| / largest = ${r.energyBalance.toExponential(1)}`,
+    'Net heat > 0: the surface gives off more radiation than it absorbs; < 0: it takes heat up.',
+    CAUTION,
+  );
+  return `${lines.join('\n')}\n`;
+}
+
+/** Six significant digits, no trailing zeros. */
+function fmt(x: number): string {
+  if (x === 0) return '0';
+  return String(Number(x.toPrecision(6)));
+}
+
+/** Left-aligned columns, two spaces apart, indented by two. */
+function columns(rows: string[][]): string[] {
+  const widths: number[] = [];
+  for (const row of rows) row.forEach((cell, k) => (widths[k] = Math.max(widths[k] ?? 0, cell.length)));
+  return rows.map((row) => `  ${row.map((cell, k) => cell + ' '.repeat(widths[k] - cell.length)).join('  ')}`.trimEnd());
+}
+
+/** Names as plain text for a terminal: control characters shown as '?', long names cut. */
+function displayName(name: string, longest = 24): string {
+  // eslint-disable-next-line no-control-regex
+  const clean = name.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
+  return clean.length > longest ? `${clean.slice(0, longest - 1)}…` : clean;
+}
+
+function usageError(io: CliIO, problem: string): number {
+  io.err(`exchange: ${problem}\n${EXCHANGE_USAGE}\n`);
+  return 2;
 }

@@ -1,0 +1,303 @@
+import { describe, expect, it } from 'vitest';
+import Papa from 'papaparse';
+import { main } from '../../src/cli/main';
+import type { CliIO } from '../../src/cli/io';
+import { STEFAN_BOLTZMANN as SIGMA } from '../../src/core/exchange';
+
+// The command line end to end: sketch file -> view factors -> exchange -> output.
+// Physics checks name their source; the chain is exact to rounding (1e-9).
+const REL = 1e-9;
+
+function run(files: Record<string, unknown>, ...args: string[]) {
+  let out = '';
+  let err = '';
+  const io: CliIO = {
+    out: (t) => void (out += t),
+    err: (t) => void (err += t),
+    readFile: (path) => {
+      if (!(path in files)) throw Object.assign(new Error('nope'), { code: 'ENOENT' });
+      const f = files[path];
+      return typeof f === 'string' ? f : JSON.stringify(f);
+    },
+  };
+  const code = main(['exchange', ...args], io);
+  return { code, out, err };
+}
+
+function json(files: Record<string, unknown>, ...args: string[]) {
+  const r = run(files, ...args, '--json');
+  expect(r.err).toBe('');
+  expect(r.code).toBe(0);
+  return JSON.parse(r.out);
+}
+
+type Pt = [number, number];
+const regular = (sides: number, radius: number, phase = 0): Pt[] =>
+  Array.from({ length: sides }, (_, k): Pt => [radius * Math.cos(phase + (2 * Math.PI * k) / sides), radius * Math.sin(phase + (2 * Math.PI * k) / sides)]);
+
+function close(actual: number, expected: number, rel = REL) {
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
+}
+
+describe('exchange FILE --json: physics through the whole chain', () => {
+  it('a hexagonal tube inside a hexagonal duct (two-surface enclosure, convex inner body), drawn in mm', () => {
+    // Similar concentric polygons: F12 = 1, A1/A2 = r1/r2, so the long concentric cylinders form is exact:
+    // q = sigma A1 (T1^4 - T2^4) / (1/e1 + (1-e2)/e2 (A1/A2)) (Incropera et al., 6th ed., Table 13.3;
+    // the two-surface enclosure of sec. 13.3.3 with F12 = 1).
+    const [r1, r2] = [60, 250]; // mm, circumradius
+    const file = {
+      version: 1,
+      units: 'mm',
+      shapes: [
+        { kind: 'enclosure', points: regular(6, r2), surface: 'duct' },
+        { kind: 'solid', points: regular(6, r1, 0.3), surface: 'tube' },
+      ],
+      surfaces: { tube: { emissivity: 0.8, temperature: 900 }, duct: { emissivity: 0.4, temperature: 350 } },
+    };
+    const j = json({ 'hex.json': file }, 'hex.json');
+    const names = j.surfaces.map((s: { name: string }) => s.name);
+    expect(names).toEqual(['duct', 'tube']);
+    const [duct, tube] = j.surfaces;
+    close(tube.length, 6 * r1); // side of a regular hexagon = circumradius; reported in file units
+    const A1 = (6 * r1) / 1000; // m per m of depth
+    const q = (SIGMA * A1 * (900 ** 4 - 350 ** 4)) / (1 / 0.8 + ((1 - 0.4) / 0.4) * (r1 / r2));
+    close(tube.netHeat, q);
+    close(duct.netHeat, -q);
+    close(tube.netFlux, q / A1);
+    close(j.exchange[1][0], q);
+    expect(j.energyBalance).toBeLessThan(1e-12);
+  });
+
+  it('a triangular duct with a reradiating side, and its temperature', () => {
+    // Three-surface enclosure with a reradiating surface (Incropera et al., 6th ed., sec. 13.3.4, eq. 13.30,
+    // number from memory), F_ij = (L_i + L_j - L_k)/(2 L_i) (Incropera, Table 13.1, three-sided enclosure).
+    const L = [3, 4, 5];
+    const file = {
+      version: 1,
+      units: 'm',
+      shapes: [{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 4]], surface: ['a', 'b', 'r'] }],
+      surfaces: { a: { emissivity: 0.7, temperature: 1000 }, b: { emissivity: 0.4, temperature: 500 }, r: { adiabatic: true } },
+    };
+    const f = (i: number, j: number) => (L[i] + L[j] - L[3 - i - j]) / (2 * L[i]);
+    const E1 = SIGMA * 1000 ** 4;
+    const E2 = SIGMA * 500 ** 4;
+    const R1 = 0.3 / (0.7 * 3);
+    const R2 = 0.6 / (0.4 * 4);
+    const q = (E1 - E2) / (R1 + 1 / (3 * f(0, 1) + 1 / (1 / (3 * f(0, 2)) + 1 / (4 * f(1, 2)))) + R2);
+    const J1 = E1 - q * R1;
+    const J2 = E2 + q * R2;
+    const JR = (3 * f(0, 2) * J1 + 4 * f(1, 2) * J2) / (3 * f(0, 2) + 4 * f(1, 2));
+    const j = json({ 't.json': file }, 't.json');
+    close(j.surfaces[0].netHeat, q);
+    close(j.surfaces[1].netHeat, -q);
+    expect(j.surfaces[2].netHeat).toBe(0);
+    close(j.surfaces[2].temperature, (JR / SIGMA) ** 0.25);
+    expect(j.surfaces[2].emissivity).toBe(0.9); // default for a surface without one
+  });
+
+  it('a wide flat duct: exact for its geometry, and within H/W of infinite parallel plates', () => {
+    // Directly opposed strips, F12 = sqrt(1 + (H/W)^2) - H/W (Incropera, Table 13.1, parallel plates with
+    // midlines connected by a perpendicular); ends reradiating, so eq. 13.30 as above. As H/W -> 0 the
+    // infinite-plates form q" = sigma (T1^4 - T2^4)/(1/e1 + 1/e2 - 1) (Table 13.3) is approached; the ends
+    // change q by about (H/W)/2 for black plates and less for gray ones, so H/W bounds the difference.
+    const [W, H] = [20, 0.02];
+    const [e1, e2, T1, T2] = [0.6, 0.3, 800, 400];
+    const file = {
+      version: 1,
+      units: 'm',
+      shapes: [{ kind: 'enclosure', points: [[0, 0], [W, 0], [W, H], [0, H]], surface: ['bottom', 'ends', 'top', 'ends'] }],
+      surfaces: { bottom: { emissivity: e1, temperature: T1 }, top: { emissivity: e2, temperature: T2 }, ends: { adiabatic: true } },
+    };
+    const j = json({ 'w.json': file }, 'w.json');
+    const [bottom] = j.surfaces;
+    const h = H / W;
+    const F12 = Math.sqrt(1 + h * h) - h;
+    const F1R = 1 - F12; // both ends together
+    const A = W;
+    const AR = 2 * H;
+    const FR1 = (A * F1R) / AR;
+    expect(FR1).toBeGreaterThan(0);
+    const R1 = (1 - e1) / (e1 * A);
+    const R2 = (1 - e2) / (e2 * A);
+    const E1 = SIGMA * T1 ** 4;
+    const E2 = SIGMA * T2 ** 4;
+    const q = (E1 - E2) / (R1 + 1 / (A * F12 + 1 / (2 / (A * F1R))) + R2);
+    close(bottom.netHeat, q);
+    const qInfinite = (SIGMA * (T1 ** 4 - T2 ** 4)) / (1 / e1 + 1 / e2 - 1);
+    expect(Math.abs(bottom.netFlux / qInfinite - 1)).toBeLessThan(h);
+  });
+
+  it('a bar alone in open space: q = e sigma A (T^4 - Ts^4), the surroundings reported', () => {
+    // Small convex object in large surroundings (Incropera et al., 6th ed., Table 13.3; eq. 1.7).
+    const file = {
+      version: 1,
+      units: 'cm',
+      shapes: [{ kind: 'solid', points: [[0, 0], [10, 0], [10, 5], [0, 5]], surface: 'bar' }],
+      surfaces: { bar: { emissivity: 0.55, temperature: 700 } },
+      settings: { surroundingsTemperature: 295 },
+    };
+    const j = json({ 'bar.json': file }, 'bar.json');
+    const q = 0.55 * SIGMA * 0.3 * (700 ** 4 - 295 ** 4);
+    close(j.surfaces[0].netHeat, q);
+    close(j.surroundings.viewFactors[0], 1);
+    close(j.surroundings.netHeat, -q);
+    expect(j.surroundings.temperature).toBe(295);
+    close(j.surroundings.exchange[0], q);
+  });
+
+  it('an opening in a black isothermal cavity passes A sigma (T^4 - Ts^4) (common practice: a black cavity emits as a blackbody)', () => {
+    const file = {
+      version: 1,
+      units: 'm',
+      shapes: [{ kind: 'enclosure', points: [[0, 0], [1, 0], [1, 0.6], [0.5, 1.2], [0, 0.6]], surface: ['floor', 'wall', 'mouth', 'wall', 'wall'] }],
+      surfaces: { floor: { emissivity: 1, temperature: 1000 }, wall: { emissivity: 1, temperature: 1000 }, mouth: { opening: true } },
+      settings: { surroundingsTemperature: 300 },
+    };
+    const j = json({ 'c.json': file }, 'c.json');
+    const mouth = j.surfaces.find((s: { name: string }) => s.name === 'mouth');
+    close(mouth.netHeat, mouth.length * SIGMA * (300 ** 4 - 1000 ** 4));
+    expect(mouth.temperature).toBe(300);
+    expect(mouth.emissivity).toBe(1);
+    expect(j.surroundings).toBeUndefined(); // closed sketch: the opening is a surface of the matrix
+  });
+});
+
+describe('exchange FILE: options and formats', () => {
+  const duct = {
+    version: 1,
+    units: 'm',
+    shapes: [
+      { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] },
+      { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: 'block' },
+    ],
+    surfaces: { floor: { emissivity: 0.9, temperature: 1100 }, roof: { emissivity: 0.3, temperature: 600 }, block: { heatFlux: -5000 } },
+  };
+  const inMm = {
+    ...duct,
+    units: 'mm',
+    shapes: duct.shapes.map((s) => ({ ...s, points: s.points.map(([x, y]) => [x * 1000, y * 1000]) })),
+  };
+
+  it('--json has exactly the documented keys, in surface order', () => {
+    const j = json({ 'd.json': duct }, 'd.json');
+    expect(Object.keys(j)).toEqual(['surfaces', 'exchange', 'energyBalance']);
+    expect(Object.keys(j.surfaces[0])).toEqual(['name', 'length', 'emissivity', 'temperature', 'netHeat', 'netFlux', 'radiosity']);
+    expect(j.surfaces.map((s: { name: string }) => s.name)).toEqual(['floor', 'right', 'roof', 'left', 'block']);
+    expect(j.exchange).toHaveLength(5);
+    expect(j.exchange[0]).toHaveLength(5);
+    const sum = j.surfaces.reduce((a: number, s: { netHeat: number }) => a + s.netHeat, 0);
+    expect(Math.abs(sum)).toBeLessThan(1e-9 * Math.abs(j.surfaces[0].netHeat));
+  });
+
+  it('the same sketch in mm gives the same heat per metre; lengths stay in file units', () => {
+    const a = json({ 'd.json': duct }, 'd.json');
+    const b = json({ 'd.json': inMm }, 'd.json');
+    for (let i = 0; i < 5; i++) {
+      close(b.surfaces[i].netHeat === 0 ? 1 : b.surfaces[i].netHeat, a.surfaces[i].netHeat === 0 ? 1 : a.surfaces[i].netHeat);
+      close(b.surfaces[i].temperature, a.surfaces[i].temperature);
+      close(b.surfaces[i].length, 1000 * a.surfaces[i].length);
+    }
+  });
+
+  it('--depth adds totals in W (and overrides settings.depth)', () => {
+    const withFileDepth = { ...duct, settings: { depth: 10 } };
+    const j = json({ 'd.json': withFileDepth }, 'd.json', '--depth', '2.5');
+    expect(j.depth).toBe(2.5);
+    for (const s of j.surfaces) expect(s.netHeatTotal).toBe(s.netHeat * 2.5);
+    const k = json({ 'd.json': withFileDepth }, 'd.json');
+    expect(k.depth).toBe(10);
+    expect(json({ 'd.json': duct }, 'd.json', '--depth=4').surfaces[0].netHeatTotal).toBe(json({ 'd.json': duct }, 'd.json').surfaces[0].netHeat * 4);
+  });
+
+  it('--csv: one row per surface with units in the header', () => {
+    const r = run({ 'd.json': duct }, 'd.json', '--csv', '--depth', '3');
+    expect(r.code).toBe(0);
+    const rows = Papa.parse<string[]>(r.out.trim(), { skipEmptyLines: true }).data;
+    expect(rows[0]).toEqual([
+      'surface',
+      'length (m)',
+      'emissivity',
+      'condition',
+      'temperature (K)',
+      'net heat (W/m)',
+      'net flux (W/m^2)',
+      'radiosity (W/m^2)',
+      'net heat total (W) over 3 m',
+    ]);
+    expect(rows.map((row) => row[0])).toEqual(['surface', 'floor', 'right', 'roof', 'left', 'block']);
+    expect(rows[2][3]).toBe('adiabatic');
+    expect(rows[5][3]).toBe('heat flux');
+    const j = json({ 'd.json': duct }, 'd.json');
+    expect(Number(rows[1][5])).toBe(j.surfaces[0].netHeat);
+    expect(Number(rows[1][8])).toBe(j.surfaces[0].netHeat * 3);
+  });
+
+  it('the default table names units, sign convention and the safety caution', () => {
+    const r = run({ 'd.json': duct }, 'd.json');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/lengths in m, per metre of depth/);
+    expect(r.out).toMatch(/net heat \(W\/m\)/);
+    expect(r.out).toMatch(/adiabatic \(T solved\)/);
+    expect(r.out).toMatch(/Net heat > 0: the surface gives off more radiation than it absorbs/);
+    expect(r.out).toMatch(/Gray-diffuse radiation only.*licensed engineering practice/);
+  });
+
+  it('--help explains units and defaults', () => {
+    const r = run({}, '--help');
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/emissivity 0\.9 and is adiabatic/);
+  });
+});
+
+describe('exchange FILE: errors are short, on stderr, without a stack trace', () => {
+  const expectShortError = (r: { code: number; out: string; err: string }, code: number, pattern: RegExp) => {
+    expect(r.code).toBe(code);
+    expect(r.out).toBe('');
+    expect(r.err).toMatch(pattern);
+    expect(r.err.split('\n').filter(Boolean).length).toBeLessThanOrEqual(3);
+    expect(r.err).not.toMatch(/\n\s+at /);
+  };
+  const box = (surfaces: object, settings?: object) => ({
+    version: 1,
+    units: 'm',
+    shapes: [{ kind: 'enclosure', points: [[0, 0], [1, 0], [1, 1], [0, 1]], surface: ['a', 'b', 'c', 'd'] }],
+    surfaces,
+    ...(settings ? { settings } : {}),
+  });
+
+  it('no surface with a temperature (every surface defaults to adiabatic)', () => {
+    expectShortError(run({ 'x.json': box({}) }, 'x.json'), 1, /^exchange: x\.json: no unique answer: no surface has a temperature/);
+  });
+
+  it('an open sketch without a surroundings temperature', () => {
+    const file = { version: 1, units: 'm', shapes: [{ kind: 'solid', points: [[0, 0], [1, 0], [1, 1]], surface: 'p' }], surfaces: { p: { temperature: 500 } } };
+    expectShortError(run({ 'o.json': file }, 'o.json'), 1, /surface 'p' sees the surroundings .* but no surroundings temperature is set/);
+  });
+
+  it('an opening without a surroundings temperature', () => {
+    expectShortError(run({ 'x.json': box({ a: { temperature: 500 }, c: { opening: true } }) }, 'x.json'), 1, /surface 'c' is an opening, but no surroundings temperature is set/);
+  });
+
+  it('an impossible heat flux', () => {
+    expectShortError(run({ 'x.json': box({ a: { temperature: 300 }, b: { heatFlux: -1e7 } }) }, 'x.json'), 1, /surface 'b': no physical answer/);
+  });
+
+  it('values out of range are refused by the file reader', () => {
+    expectShortError(run({ 'x.json': box({ a: { emissivity: 1.5, temperature: 300 } }) }, 'x.json'), 1, /emissivity/);
+    expectShortError(run({ 'x.json': box({ a: { temperature: -4 } }) }, 'x.json'), 1, /temperature/);
+  });
+
+  it('bad arguments exit 2 with the usage', () => {
+    expectShortError(run({}, 'x.json', '--depth', 'deep'), 2, /--depth must be a number of metres above 0, got 'deep'/);
+    expectShortError(run({}, 'x.json', '--depth', '0'), 2, /--depth must be a number of metres above 0/);
+    expectShortError(run({}, 'x.json', '--depth'), 2, /--depth needs a number of metres/);
+    expectShortError(run({}, 'x.json', '--json', '--csv'), 2, /choose one of --json and --csv/);
+    expectShortError(run({}, 'x.json', '--colour'), 2, /unknown option '--colour'/);
+    expectShortError(run({}), 2, /no sketch file given/);
+  });
+
+  it('a missing file or one that is not JSON', () => {
+    expectShortError(run({}, 'gone.json'), 1, /cannot read 'gone\.json': no such file/);
+    expectShortError(run({ 'bad.json': '{"version": 1,' }, 'bad.json'), 1, /^exchange: bad\.json: /);
+  });
+});
