@@ -58,6 +58,10 @@ export function normalise(file: SketchFileV1): Normalised {
     if (props.opening === true && props.emissivity !== undefined && props.emissivity !== 1) {
       warnings.push(`surface ${quoteName(name)}: emissivity ${formatNumber(props.emissivity)} is ignored; an opening acts as a black surface`);
     }
+    const onSolid = shapes.findIndex((shape) => shape.kind === 'solid' && shape.surface.includes(name));
+    if (props.opening === true && onSolid >= 0) {
+      warnings.push(`surface ${quoteName(name)} is an opening but lies on a solid (shape ${onSolid + 1}); openings are gaps in the enclosure wall`);
+    }
     if (!used.has(name)) warnings.push(`surface ${quoteName(name)} has properties but no edge uses that name`);
   }
 

@@ -116,6 +116,11 @@ describe('restore repairs and warns', () => {
     const doc = { ...JSON.parse(minimalText), surfaces: { right: { opening: true, emissivity: 0.5 } } };
     expect(sketchOf(doc).warnings).toEqual(["surface 'right': emissivity 0.5 is ignored; an opening acts as a black surface"]);
   });
+
+  it('warns about an opening on a solid (openings are gaps in the enclosure wall)', () => {
+    const doc = { ...JSON.parse(minimalText), surfaces: { block: { opening: true } } };
+    expect(sketchOf(doc).warnings).toEqual(["surface 'block' is an opening but lies on a solid (shape 2); openings are gaps in the enclosure wall"]);
+  });
 });
 
 describe('toScene', () => {
