@@ -104,8 +104,8 @@ function factorsTable(file: string, sketch: Sketch, names: string[], r: ViewFact
   lines.push(`  ${pad('', width)}  ${header}${r.closed ? '' : 'surroundings'}`.trimEnd());
   for (let i = 0; i < n; i++) {
     let row = '';
-    for (let j = 0; j < n; j++) row += pad(r.F[i * n + j].toFixed(6), cell);
-    if (!r.closed) row += r.rowSumResidual[i].toFixed(6);
+    for (let j = 0; j < n; j++) row += pad(fixed6(r.F[i * n + j]), cell);
+    if (!r.closed) row += fixed6(r.rowSumResidual[i]);
     lines.push(`  ${pad(shown[i], width)}  ${row.trimEnd()}`);
   }
   lines.push('');
@@ -117,6 +117,12 @@ function factorsTable(file: string, sketch: Sketch, names: string[], r: ViewFact
   }
   lines.push(`Reciprocity: largest relative |L_I F_IJ - L_J F_JI| = ${r.reciprocityResidual.toExponential(1)}`);
   return `${lines.join('\n')}\n`;
+}
+
+/** Six decimals; rounding noise such as -1e-32 shows as 0.000000, not -0.000000 (the JSON keeps every digit). */
+function fixed6(x: number): string {
+  const text = x.toFixed(6);
+  return text === '-0.000000' ? '0.000000' : text;
 }
 
 function formatLength(x: number): string {
