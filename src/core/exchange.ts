@@ -127,8 +127,10 @@ export function temperatureOfEmissivePower(e: number): number {
  * net-radiation method (see the file header for units, signs and equations).
  * Throws ExchangeError for values out of range and problems without a unique
  * answer (e.g. a closed enclosure where no surface has a temperature).
+ * `workspace`: a solver of size n to reuse between calls (live updates), so its
+ * n x n matrix is not allocated again; one of another size is not used.
  */
-export function solveExchange(input: ExchangeInput): ExchangeResult {
+export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): ExchangeResult {
   const n = input.conditions.length;
   const label = (i: number) => (input.names && input.names[i] !== undefined ? `surface '${input.names[i]}'` : `surface ${i}`);
   checkSizes(input, n);
@@ -209,7 +211,7 @@ export function solveExchange(input: ExchangeInput): ExchangeResult {
   }
 
   // Radiosity system M J = rhs, built straight into the solver's workspace.
-  const solver = new DenseLuSolver(n);
+  const solver = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
   const M = solver.matrix;
   const J = new Float64Array(n);
   for (let i = 0; i < n; i++) {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { STEFAN_BOLTZMANN as SIGMA, emissivePower, solveExchange, type SurfaceCondition } from '../../src/core/exchange';
+import { DenseLuSolver } from '../../src/core/linearSolve';
 
 // Closed forms of gray-diffuse exchange, each against its published source.
 // The radiosity solve is exact up to rounding, so comparisons are at 1e-12
@@ -245,5 +246,20 @@ describe('depth', () => {
     expect(r.netHeatTotal![0]).toBe(r.netHeat[0] * 3.5);
     expect(r.netHeatTotal![1]).toBe(r.netHeat[1] * 3.5);
     expect(r.surroundingsNetHeatTotal).toBe(0);
+  });
+});
+
+describe('workspace reuse', () => {
+  it('a reused solver gives the same answers as a fresh one, call after call', () => {
+    // Parallel planes again (Incropera et al., 6th ed., Table 13.3).
+    const workspace = new DenseLuSolver(2);
+    for (const [T1, e1] of [[900, 0.3], [1200, 0.8], [500, 1]]) {
+      const input = { viewFactors: [0, 1, 1, 0], area: [1, 1], emissivity: [e1, 0.6], conditions: [T(T1), T(300)] };
+      const r = solveExchange(input, workspace);
+      close(r.netFlux[0], (SIGMA * (T1 ** 4 - 300 ** 4)) / (1 / e1 + 1 / 0.6 - 1));
+    }
+    // A workspace of another size is left alone.
+    const r3 = solveExchange({ viewFactors: [0], area: [1], emissivity: [0.5], conditions: [T(400)], surroundingsTemperature: 300 }, workspace);
+    close(r3.netFlux[0], 0.5 * SIGMA * (400 ** 4 - 300 ** 4));
   });
 });
