@@ -24,6 +24,8 @@ export type PressAnswer = 'handled' | 'pan';
 export class CanvasController {
   private drag: { plan: DragPlan; base: SketchFile } | null = null;
   private anchor: Point | null = null; // rectangle corner or tube centre
+  /** The two latest presses: a double-click counts only when both were at one place. */
+  private presses: [Point | null, Point | null] = [null, null];
 
   constructor(private readonly store: AppStore) {}
 
@@ -34,6 +36,7 @@ export class CanvasController {
 
   press(e: PointerInfo): PressAnswer {
     const s = this.store.getState();
+    this.presses = [this.presses[1], e.at];
     switch (s.tool) {
       case 'select': {
         const hit = hitTest(s.doc, e.at, e.tolerance);
@@ -84,6 +87,9 @@ export class CanvasController {
 
   doubleClick(e: PointerInfo): void {
     const s = this.store.getState();
+    // Two quick clicks at different places are two clicks, not a double-click.
+    const [p, q] = this.presses;
+    if (!p || !q || Math.hypot(p[0] - q[0], p[1] - q[1]) > e.tolerance) return;
     if (s.tool === 'enclosure' || s.tool === 'solid') { this.finishDraft(); return; }
     if (s.tool !== 'select') return;
     const hit = hitTest(s.doc, e.at, e.tolerance);

@@ -55,6 +55,18 @@ describe('drawing with the controller', () => {
     expect(restore(store.getState().doc).ok).toBe(true);
   });
 
+  it('finishes on a double-click, but not on two quick clicks at different places', () => {
+    const store = createAppStore(emptySketch);
+    const c = new CanvasController(store);
+    store.getState().setTool('enclosure');
+    c.press(at([0, 0])); c.press(at([1, 0]));
+    c.doubleClick(at([1, 0])); // the browser reports a double-click for quick clicks anywhere
+    expect(store.getState().doc.shapes).toHaveLength(0);
+    c.press(at([1, 1])); c.press(at([1, 1]));
+    c.doubleClick(at([1, 1]));
+    expect(store.getState().doc.shapes[0].points).toEqual([[0, 0], [1, 0], [1, 1]]);
+  });
+
   it('snaps clicks to the grid and closes a body on its first point', () => {
     const store = createAppStore({ version: 1, units: 'm', shapes: [{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 4], [0, 4]], surface: 'wall' }] });
     const c = new CanvasController(store);

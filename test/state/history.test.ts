@@ -102,6 +102,8 @@ describe('undo and redo', () => {
   it('double-click inserts a vertex on an edge; Delete removes vertices and shapes', () => {
     const store = createAppStore(box);
     const c = new CanvasController(store);
+    c.press(at([1.02, 0])); c.release(at([1.02, 0]));
+    c.press(at([1.02, 0])); c.release(at([1.02, 0]));
     c.doubleClick(at([1.02, 0]));
     expect(store.getState().doc.shapes[0].points).toEqual([[0, 0], [1, 0], [4, 0], [4, 2], [0, 2]]);
     expect(store.getState().doc.shapes[0].surface).toEqual(['floor', 'floor', 'right', 'roof', 'left']);

@@ -10,8 +10,15 @@ import { computeViewFactors } from '../../src/core/viewFactors';
 import { runFactors } from '../../src/cli/factorsCommand';
 import type { SketchFile } from '../../src/state/sketchFile';
 
+/** The checked form of a sketch, as the app passes it to toScene. */
+function checked(doc: unknown) {
+  const r = documentApi.restore(doc);
+  if (!r.ok) throw new Error(r.errors.join('; '));
+  return r.sketch;
+}
+
 function shownFor(doc: SketchFile): ShownResult {
-  const { scene, surfaceNames } = documentApi.toScene(doc);
+  const { scene, surfaceNames } = documentApi.toScene(checked(doc));
   return { doc, surfaceNames, result: computeViewFactors(scene), elapsedMs: 0 };
 }
 

@@ -5,9 +5,12 @@ import { OPEN_INPUT_ID } from './FileButtons';
 import { downloadText } from './download';
 import { sketchFileText } from '../../state/files';
 
+/** Keys typed into a text field belong to the field; a focused checkbox or button does not take letters. */
 function typingInField(target: EventTarget | null): boolean {
   const el = target as HTMLElement | null;
-  return !!el && (el.tagName === 'INPUT' || el.tagName === 'TEXTAREA' || el.tagName === 'SELECT' || el.isContentEditable);
+  if (!el) return false;
+  if (el.tagName === 'INPUT') return !['checkbox', 'radio', 'button', 'file', 'range'].includes((el as HTMLInputElement).type);
+  return el.tagName === 'TEXTAREA' || el.tagName === 'SELECT' || el.isContentEditable;
 }
 
 export function useShortcuts(): void {

@@ -1,0 +1,178 @@
+// The sketcher end to end in headless chromium: demo, drawing with the mouse,
+// dragging, undo, CSV export, reload. Also logs the drag-to-table latency.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { mkdirSync, readFileSync } from 'node:fs';
+import Papa from 'papaparse';
+import type { Page } from 'playwright-core';
+import { startApp, type App } from './harness';
+import { runFactors } from '../../src/cli/factorsCommand';
+import { documentApi } from '../../src/state/documentApi';
+import type { SketchFile } from '../../src/state/sketchFile';
+
+let app: App;
+let page: Page;
+
+beforeAll(async () => {
+  app = await startApp();
+  page = await app.context.newPage();
+  page.on('pageerror', (e) => console.error('page error:', e.message));
+  await page.goto(app.url);
+}, 180_000);
+
+afterAll(async () => { await app?.close(); });
+
+/** Screen position (page pixels) of a sketch point, from the app's own camera. */
+async function screenOf(x: number, y: number): Promise<[number, number]> {
+  const box = (await page.locator('.canvas-box').boundingBox())!;
+  const cam = await page.evaluate(() => (window as any).__tautline.store.getState().camera);
+  return [box.x + cam.originX + cam.scale * x, box.y + cam.originY - cam.scale * y];
+}
+
+const table = () => page.getByRole('table', { name: /view factor/i });
+const tableText = () => table().locator('tbody').innerText();
+const docOf = () => page.evaluate(() => (window as any).__tautline.store.getState().doc as SketchFile);
+const status = () => page.locator('[data-status]').getAttribute('data-status');
+
+async function waitReady() {
+  await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+}
+
+describe('sketcher in chromium', () => {
+  it('opens the demo with its matrix, fits 1366 x 768 without horizontal scrolling, and saves a screenshot', async () => {
+    await waitReady();
+    await expect.poll(() => table().getByRole('rowheader').count()).toBe(7);
+    expect(await tableText()).toContain('fired floor');
+    const [scrollW, clientW] = await page.evaluate(() => [document.documentElement.scrollWidth, document.documentElement.clientWidth]);
+    expect(scrollW).toBeLessThanOrEqual(clientW);
+    const tableBox = (await page.locator('.matrix-scroll').boundingBox())!;
+    expect(tableBox.x + tableBox.width).toBeLessThanOrEqual(1366);
+    mkdirSync('test-artifacts', { recursive: true });
+    await page.screenshot({ path: 'test-artifacts/demo.png' });
+  });
+
+  it('measures the time from a drag event to the updated table on the demo', async () => {
+    // Count every change of the table body, stamped with the time of the pointer event before it.
+    await page.evaluate(() => {
+      const w = window as any;
+      w.__lat = { lastMove: 0, samples: [] as number[], changes: 0 };
+      window.addEventListener('pointermove', () => { w.__lat.lastMove = performance.now(); }, true);
+      new MutationObserver(() => {
+        if (w.__lat.lastMove) w.__lat.samples.push(performance.now() - w.__lat.lastMove);
+        w.__lat.lastMove = 0;
+        w.__lat.changes++;
+      }).observe(document.querySelector('.matrix-scroll')!, { subtree: true, childList: true, characterData: true });
+    });
+    const before = await tableText();
+    // Snapping off, so every pointer move changes the geometry (the worst case for keeping up).
+    await page.getByRole('checkbox', { name: 'snap' }).uncheck();
+    const [sx, sy] = await screenOf(2.1, 1.5); // a roof corner of the oven
+    // A first drag warms up the compiler in page and worker, as any real session does.
+    await page.mouse.move(sx, sy);
+    await page.mouse.down();
+    for (let i = 1; i <= 20; i++) await page.mouse.move(sx + i, sy - i / 2);
+    await page.mouse.move(sx, sy);
+    await page.mouse.up();
+    await page.keyboard.press('Control+z');
+    await waitReady();
+    await page.evaluate(() => { const l = (window as any).__lat; l.samples = []; l.lastMove = 0; });
+    await page.mouse.move(sx, sy);
+    await page.mouse.down();
+    for (let i = 1; i <= 40; i++) {
+      const changes = await page.evaluate(() => (window as any).__lat.changes);
+      await page.mouse.move(sx + i * 2, sy - i);
+      await page.waitForFunction((c) => (window as any).__lat.changes > c, changes, { timeout: 5000 });
+    }
+    await page.mouse.up();
+    await page.getByRole('checkbox', { name: 'snap' }).check();
+    const samples: number[] = await page.evaluate(() => (window as any).__lat.samples);
+    const sorted = [...samples].sort((a, b) => a - b);
+    const median = sorted[Math.floor(sorted.length / 2)];
+    console.log(`drag-to-table latency on the demo: median ${median.toFixed(1)} ms, p90 ${sorted[Math.floor(sorted.length * 0.9)].toFixed(1)} ms over ${samples.length} moves`);
+    expect(samples.length).toBeGreaterThanOrEqual(35);
+    expect(await tableText()).not.toBe(before);
+    // The whole drag is one undo step.
+    await page.keyboard.press('Control+z');
+    await waitReady();
+    expect(await tableText()).toBe(before);
+  });
+
+  it('draws an enclosure with the mouse, drags a vertex, undoes, exports CSV and restores after reload', async () => {
+    await page.getByRole('button', { name: 'New' }).click();
+    await expect.poll(status).toBe('empty');
+    await page.getByRole('button', { name: /^Enclosure/ }).click();
+    // A 2 m x 1 m rectangle, clicked corner by corner (snapped to the 0.1 m grid), closed on the first point.
+    for (const [x, y] of [[0, 0], [2, 0], [2, 1], [0, 1], [0, 0]]) {
+      const [px, py] = await screenOf(x + 0.01, y - 0.01);
+      await page.mouse.click(px, py);
+    }
+    await waitReady();
+    const heads = await table().getByRole('rowheader').allInnerTexts();
+    expect(heads.map((h) => h.replace(/^\d+\s*/, ''))).toEqual(['wall 1', 'wall 2', 'wall 3', 'wall 4']);
+    const drawn = await tableText();
+
+    // Drag the corner (2, 1) to (2, 1.5) with the select tool.
+    await page.getByRole('button', { name: /^Select/ }).click();
+    const [ax, ay] = await screenOf(2, 1);
+    const [bx, by] = await screenOf(2, 1.5);
+    await page.mouse.move(ax, ay);
+    await page.mouse.down();
+    await page.mouse.move((ax + bx) / 2, (ay + by) / 2);
+    await page.mouse.move(bx, by);
+    await page.mouse.up();
+    await waitReady();
+    expect((await docOf()).shapes[0].points[2]).toEqual([2, 1.5]);
+    expect(await tableText()).not.toBe(drawn);
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await waitReady();
+    expect(await tableText()).toBe(drawn);
+
+    // CSV: floor (wall 1) to roof (wall 3) of a 2 x 1 rectangle by crossed strings,
+    // (sqrt(w^2 + h^2) - h) / w with w = 2, h = 1 (Hottel's crossed-strings method;
+    // Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1.4).
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: /CSV/ }).click()]);
+    const csv = readFileSync((await download.path())!, 'utf8');
+    const rows = Papa.parse<string[]>(csv.trim(), { newline: '\r\n' }).data;
+    expect(rows[0]).toEqual(['from \\ to', 'wall 1', 'wall 2', 'wall 3', 'wall 4']);
+    const F = rows.slice(1).map((r) => r.slice(1).map(Number));
+    expect(Math.abs(F[0][2] - (Math.sqrt(5) - 1) / 2)).toBeLessThan(1e-12);
+    // Floor to a side wall: (w + h - sqrt(w^2 + h^2)) / (2 w), same source.
+    expect(Math.abs(F[0][1] - (3 - Math.sqrt(5)) / 4)).toBeLessThan(1e-12);
+    for (const row of F) expect(Math.abs(row.reduce((a, b) => a + b, 0) - 1)).toBeLessThan(1e-12);
+    // The same text as the command line's --csv for the same sketch.
+    const doc = await docOf();
+    let cli = '';
+    runFactors(['s.json', '--csv'], { out: (t) => { cli += t; }, err: () => {}, readFile: () => documentApi.serialize(doc) });
+    expect(csv).toBe(cli);
+
+    // Reload: the autosave brings the drawn sketch back, not the demo.
+    await page.reload();
+    await waitReady();
+    expect(await tableText()).toBe(drawn);
+    expect((await docOf()).shapes[0].points).toEqual([[0, 0], [2, 0], [2, 1], [0, 1]]);
+  });
+
+  it('marks a body dragged through the wall as invalid and keeps the drawing', async () => {
+    await page.getByRole('button', { name: /^Rectangle/ }).click();
+    const [ax, ay] = await screenOf(0.8, 0.3);
+    const [bx, by] = await screenOf(1.2, 0.7);
+    await page.mouse.move(ax, ay);
+    await page.mouse.down();
+    await page.mouse.move(bx, by, { steps: 4 });
+    await page.mouse.up();
+    await waitReady();
+    expect(await table().getByRole('rowheader').count()).toBe(8);
+    await page.getByRole('button', { name: /^Select/ }).click();
+    const [cx, cy] = await screenOf(1.0, 0.5);
+    const [dx, dy] = await screenOf(1.0, 1.0);
+    await page.mouse.move(cx, cy);
+    await page.mouse.down();
+    await page.mouse.move(dx, dy, { steps: 3 });
+    await page.mouse.up();
+    await expect.poll(status).toBe('invalid');
+    expect(await page.locator('.canvas-status').innerText()).toMatch(/Geometry problem: shape 2/);
+    expect(await page.locator('[data-status]').innerText()).toMatch(/last valid sketch/);
+    expect((await docOf()).shapes).toHaveLength(2);
+    await page.keyboard.press('Control+z');
+    await waitReady();
+  });
+});
