@@ -10,12 +10,19 @@ import { computeViewFactors } from '../../src/core/viewFactors';
 import { documentApi } from '../../src/state/documentApi';
 import { demoSketch } from '../../src/state/demo';
 
+/** The checked form of a sketch, as the app passes it to toScene. */
+function checked(doc: unknown) {
+  const r = documentApi.restore(doc);
+  if (!r.ok) throw new Error(r.errors.join('; '));
+  return r.sketch;
+}
+
 describe('worker api', () => {
   it('returns the same matrix through the channel as the core gives directly', async () => {
     const { port1, port2 } = new MessageChannel();
     Comlink.expose(viewFactorApi, nodeEndpoint(port1));
     const remote = Comlink.wrap<ViewFactorApi>(nodeEndpoint(port2));
-    const { scene } = documentApi.toScene(demoSketch);
+    const { scene } = documentApi.toScene(checked(demoSketch));
     const direct = computeViewFactors(scene);
     const viaWorker = await remote.compute(jobFromScene(scene));
     expect(viaWorker.F).toBeInstanceOf(Float64Array);
