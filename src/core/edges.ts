@@ -24,6 +24,10 @@ export interface EdgeSet {
   /** The oriented edge that starts where this one ends (shares point b). */
   nextEdge: Int32Array;
   hasEnclosure: boolean;
+  /** Edges of polygon p are polygonStart[p] .. polygonStart[p+1]-1. */
+  polygonStart: Int32Array;
+  /** 1 for an enclosure, 0 for a solid, per polygon. */
+  polygonIsEnclosure: Uint8Array;
   originX: number;
   originY: number;
 }
@@ -64,8 +68,12 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
     }
   }
   if (count === 0) originX = originY = 0;
+  const polygonStart = new Int32Array(polygons.length + 1);
+  const polygonIsEnclosure = new Uint8Array(polygons.length);
   let base = 0;
   polygons.forEach((poly, p) => {
+    polygonStart[p] = base;
+    polygonIsEnclosure[p] = poly.kind === 'enclosure' ? 1 : 0;
     const pts = poly.points;
     const n = pts.length >> 1;
     if (poly.kind === 'enclosure') hasEnclosure = true;
@@ -90,5 +98,6 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
     }
     base += n;
   });
-  return { count, ax, ay, bx, by, length, polygon, prevEdge, nextEdge, hasEnclosure, originX, originY };
+  polygonStart[polygons.length] = base;
+  return { count, ax, ay, bx, by, length, polygon, prevEdge, nextEdge, hasEnclosure, polygonStart, polygonIsEnclosure, originX, originY };
 }

@@ -1,11 +1,6 @@
-import { orient } from './orient';
 import type { EdgeSet } from './edges';
-
-/**
- * Lists candidate obstructing edges whose bounding boxes meet a box (sketch units).
- * Calls visit(edgeId) for each; the spatial index lives outside this module.
- */
-export type EdgeQuery = (minX: number, minY: number, maxX: number, maxY: number, visit: (edge: number) => void) => void;
+import type { ObstacleIndex } from './obstacles';
+import { orient } from './orient';
 
 /**
  * Exact diffuse view factor between two edges of a long (2D) geometry, with
@@ -23,7 +18,7 @@ export type EdgeQuery = (minX: number, minY: number, maxX: number, maxY: number,
  */
 export class PairIntegrator {
   private readonly e: EdgeSet;
-  private readonly query: EdgeQuery;
+  private readonly obstacles: ObstacleIndex;
   // Stamp per edge: which call last clipped it, and where its clipped piece is.
   private readonly stamp: Int32Array;
   private readonly localOf: Int32Array;
@@ -36,6 +31,15 @@ export class PairIntegrator {
   private segQy = new Float64Array(64);
   private segFlags = new Uint8Array(64); // bit 0: a strictly inside the view region, bit 1: b strictly inside, bit 2: grouped
   private segCount = 0;
+  // Convex bodies lying wholly inside H: handled by their silhouette corners alone.
+  private wholeBody = new Int32Array(16);
+  private wholeCount = 0;
+  private facingCode = new Uint8Array(64);
+  private cornerIn = new Uint8Array(64);
+  private cornerOut = new Uint8Array(64);
+  private readonly sideTol = new Float64Array(4);
+  /** Largest coordinate magnitude of the (shifted) sketch: scales float margins. */
+  private readonly extent: number;
   // Fixed points: 0 and 1 are the ends of j (clipped), then the obstruction points, group by group.
   private ptX = new Float64Array(64);
   private ptY = new Float64Array(64);
@@ -56,16 +60,28 @@ export class PairIntegrator {
   private readonly ex = new Float64Array(4);
   private readonly ey = new Float64Array(4);
   private readonly sideOn = new Uint8Array(4);
-  private readonly visitEdge: (edge: number) => void;
+  private readonly sideLen = new Float64Array(4);
+  private readonly visitEdge: (id: number) => boolean;
+  private readonly visitBody: (id: number) => boolean;
   private pairI = 0;
   private pairJ = 0;
 
-  constructor(edges: EdgeSet, query: EdgeQuery) {
+  constructor(edges: EdgeSet, obstacles: ObstacleIndex) {
     this.e = edges;
-    this.query = query;
+    this.obstacles = obstacles;
+    let extent = 0;
+    for (let e = 0; e < edges.count; e++) extent = Math.max(extent, Math.abs(edges.ax[e]), Math.abs(edges.ay[e]));
+    this.extent = extent;
     this.stamp = new Int32Array(edges.count).fill(-1);
     this.localOf = new Int32Array(edges.count);
-    this.visitEdge = (edge: number) => this.clip(edge);
+    this.visitEdge = (id: number) => {
+      this.clip(this.obstacles.wallEdges[id]);
+      return false; // keep no result list in flatbush
+    };
+    this.visitBody = (id: number) => {
+      this.clipBody(id);
+      return false;
+    };
   }
 
   /**
@@ -103,7 +119,7 @@ export class PairIntegrator {
       a1x += t * (a0x - a1x);
       a1y += t * (a0y - a1y);
     }
-    const li = Math.hypot(a1x - a0x, a1y - a0y);
+    const li = Math.sqrt((a1x - a0x) ** 2 + (a1y - a0y) ** 2);
     if (li === 0 || (b0x === b1x && b0y === b1y)) return 0;
 
     // Every sight line from i to j lies in H = hull(i', j') = a0 a1 b0 b1 (anticlockwise,
@@ -114,14 +130,14 @@ export class PairIntegrator {
     this.setSide(3, b1x, b1y, a0x, a0y);
     this.call++;
     this.segCount = 0;
+    this.wholeCount = 0;
     this.pairI = i;
     this.pairJ = j;
-    this.query(
+    this.gatherObstacles(
       Math.min(a0x, a1x, b0x, b1x), Math.min(a0y, a1y, b0y, b1y),
       Math.max(a0x, a1x, b0x, b1x), Math.max(a0y, a1y, b0y, b1y),
-      this.visitEdge,
     );
-    if (this.segCount === 0) {
+    if (this.segCount === 0 && this.wholeCount === 0) {
       // Unobstructed: crossed minus uncrossed strings over 2 (Hottel).
       // Written as distance changes along i so that short edges lose no digits.
       const dx = a1x - a0x, dy = a1y - a0y;
@@ -138,6 +154,145 @@ export class PairIntegrator {
     this.ex[k] = x1;
     this.ey[k] = y1;
     this.sideOn[k] = x0 === x1 && y0 === y1 ? 0 : 1; // a side of zero length bounds nothing
+    this.sideLen[k] = Math.sqrt((x1 - x0) ** 2 + (y1 - y0) ** 2);
+    this.sideTol[k] = 1e-14 * this.sideLen[k] * this.extent;
+  }
+
+  /** Clip to H every edge that may block: walls of pockets near H, and bodies whose circle meets H. */
+  private gatherObstacles(minX: number, minY: number, maxX: number, maxY: number): void {
+    const ob = this.obstacles;
+    ob.wallTree?.search(minX, minY, maxX, maxY, this.visitEdge);
+    if (ob.bodyTree) ob.bodyTree.search(minX, minY, maxX, maxY, this.visitBody);
+    else for (let b = 0; b < ob.bodyCount; b++) this.clipBody(b);
+  }
+
+  /**
+   * Clip the edges of body b unless its bounding circle lies wholly outside a side of H;
+   * when the circle lies wholly inside H, keep every edge whole without testing it.
+   */
+  private clipBody(b: number): void {
+    const ob = this.obstacles;
+    const cx = ob.bodyCx[b], cy = ob.bodyCy[b], r = ob.bodyR[b];
+    // A relative margin of 1e-9 keeps these float tests on the safe side: a body kept
+    // in vain costs only time, and "wholly inside" must be certain.
+    const margin = r * 1e-9 + 1e-12 * (Math.abs(cx) + Math.abs(cy));
+    let inside = true;
+    for (let k = 0; k < 4; k++) {
+      if (!this.sideOn[k]) continue;
+      const dx = this.ex[k] - this.sx[k], dy = this.ey[k] - this.sy[k];
+      // Signed distance of the centre from the side, positive inside H.
+      const dist = (dx * (cy - this.sy[k]) - dy * (cx - this.sx[k])) / this.sideLen[k];
+      if (dist < -r - margin) return;
+      if (dist < r + margin) inside = false;
+    }
+    const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
+    if (!inside) {
+      this.clipBodyEdges(first, end);
+      return;
+    }
+    if (ob.bodyConvex[b]) {
+      if (this.wholeCount === this.wholeBody.length) {
+        const grown = new Int32Array(2 * this.wholeCount);
+        grown.set(this.wholeBody);
+        this.wholeBody = grown;
+      }
+      this.wholeBody[this.wholeCount++] = b;
+      return;
+    }
+    const E = this.e;
+    for (let e = first; e < end; e++) {
+      this.keepPiece(e, E.ax[e], E.ay[e], E.bx[e], E.by[e], 3);
+    }
+  }
+
+  /**
+   * A convex body wholly inside H is one closed chain; from any p on i its extremes are
+   * its two tangent corners, where the edges facing p meet those facing away. A corner
+   * can be a tangent from some p on i' only if its two edges differ in facing at an end
+   * of i', or both change facing along i'. Float tests with a margin; any doubt keeps
+   * the corner (an extra split costs time, never accuracy).
+   */
+  private addWholeConvexBody(b: number, a0x: number, a0y: number, a1x: number, a1y: number): void {
+    const E = this.e;
+    const ob = this.obstacles;
+    const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
+    const g = this.groupCount++;
+    this.setGroupStart(g, this.ptCount);
+    if (this.facingCode.length < end - first) this.facingCode = new Uint8Array(2 * (end - first));
+    const code = this.facingCode;
+    for (let e = first; e < end; e++) code[e - first] = this.facing(e, a0x, a0y, a1x, a1y);
+    // Corner a of edge e sits between the edge before it (in the oriented walk) and e.
+    for (let e = first; e < end; e++) {
+      if (cornerMayBeTangent(code[E.prevEdge[e] - first], code[e - first])) this.pushPoint(E.ax[e], E.ay[e]);
+    }
+  }
+
+  /** Facing code of edge e seen from a0 and a1: bit 0 front at a0, bit 1 front at a1, bit 2 in doubt. */
+  private facing(e: number, a0x: number, a0y: number, a1x: number, a1y: number): number {
+    const E = this.e;
+    const x0 = E.ax[e], y0 = E.ay[e];
+    const dx = E.bx[e] - x0, dy = E.by[e] - y0;
+    const f0 = dx * (a0y - y0) - dy * (a0x - x0);
+    const f1 = dx * (a1y - y0) - dy * (a1x - x0);
+    const tol = 1e-12 * (Math.abs(dx) + Math.abs(dy)) * (Math.abs(a0x - x0) + Math.abs(a0y - y0) + Math.abs(a1x - x0) + Math.abs(a1y - y0));
+    let code = (f0 > 0 ? 1 : 0) | (f1 > 0 ? 2 : 0);
+    if (Math.abs(f0) <= tol || Math.abs(f1) <= tol) code |= 4;
+    return code;
+  }
+
+  private keepPiece(edge: number, px: number, py: number, qx: number, qy: number, flags: number): void {
+    const s = this.segCount;
+    if (s === this.segEdge.length) this.growSegments();
+    this.segEdge[s] = edge;
+    this.segPx[s] = px;
+    this.segPy[s] = py;
+    this.segQx[s] = qx;
+    this.segQy[s] = qy;
+    this.segFlags[s] = flags;
+    this.stamp[edge] = this.call;
+    this.localOf[edge] = s;
+    this.segCount = s + 1;
+  }
+
+  /**
+   * Clip the edges [first, end) of a body that straddles H's boundary. Each corner is
+   * classified once against the four sides in floats, with a margin well above the
+   * rounding of a cross product (sides' length x sketch extent x 1e-14): edges with
+   * both corners surely outside one side are dropped, edges with both surely inside
+   * are kept whole, and only the rest go through the exact clip.
+   */
+  private clipBodyEdges(first: number, end: number): void {
+    const E = this.e;
+    const n = end - first;
+    if (this.cornerIn.length < n) {
+      this.cornerIn = new Uint8Array(2 * n);
+      this.cornerOut = new Uint8Array(2 * n);
+    }
+    const cin = this.cornerIn, cout = this.cornerOut;
+    let allOn = 0;
+    for (let k = 0; k < 4; k++) if (this.sideOn[k]) allOn |= 1 << k;
+    for (let e = first; e < end; e++) {
+      const x = E.ax[e], y = E.ay[e];
+      let inBits = 0, outBits = 0;
+      for (let k = 0; k < 4; k++) {
+        if (!this.sideOn[k]) continue;
+        const d = (this.ex[k] - this.sx[k]) * (y - this.sy[k]) - (this.ey[k] - this.sy[k]) * (x - this.sx[k]);
+        const tol = this.sideTol[k];
+        if (d > tol) inBits |= 1 << k;
+        else if (d < -tol) outBits |= 1 << k;
+      }
+      cin[e - first] = inBits;
+      cout[e - first] = outBits;
+    }
+    for (let e = first; e < end; e++) {
+      const a = e - first, bq = E.nextEdge[e] - first;
+      if ((cout[a] & cout[bq]) !== 0) continue;
+      if (cin[a] === allOn && cin[bq] === allOn) {
+        if (e !== this.pairI && e !== this.pairJ) this.keepPiece(e, E.ax[e], E.ay[e], E.bx[e], E.by[e], 3);
+      } else {
+        this.clip(e);
+      }
+    }
   }
 
   /** Clip edge `edge` to H; keep the piece if it passes through H's interior. */
@@ -169,17 +324,7 @@ export class PairIntegrator {
     if (pIn) t0 = 0;
     if (qIn) t1 = 1;
     if (t1 <= t0 && !pIn && !qIn) return;
-    const s = this.segCount;
-    if (s === this.segEdge.length) this.growSegments();
-    this.segEdge[s] = edge;
-    this.segPx[s] = px + t0 * (qx - px);
-    this.segPy[s] = py + t0 * (qy - py);
-    this.segQx[s] = px + t1 * (qx - px);
-    this.segQy[s] = py + t1 * (qy - py);
-    this.segFlags[s] = pIn | (qIn << 1);
-    this.stamp[edge] = this.call;
-    this.localOf[edge] = s;
-    this.segCount = s + 1;
+    this.keepPiece(edge, px + t0 * (qx - px), py + t0 * (qy - py), px + t1 * (qx - px), py + t1 * (qy - py), pIn | (qIn << 1));
   }
 
   /**
@@ -193,6 +338,7 @@ export class PairIntegrator {
     this.pushPoint(b0x, b0y);
     this.pushPoint(b1x, b1y);
     this.groupCount = 0;
+    for (let w = 0; w < this.wholeCount; w++) this.addWholeConvexBody(this.wholeBody[w], a0x, a0y, a1x, a1y);
     const flags = this.segFlags;
     // Open chains start at a piece whose start is not inside H.
     for (let s = 0; s < this.segCount; s++) {
@@ -299,7 +445,7 @@ export class PairIntegrator {
       // key = sin b: the direction's component along i, increasing towards a1.
       for (let k = 0; k < nPts; k++) {
         const vx = X[k] - pmx, vy = Y[k] - pmy;
-        key[k] = (vx * tx + vy * ty) / Math.hypot(vx, vy);
+        key[k] = (vx * tx + vy * ty) / Math.sqrt(vx * vx + vy * vy);
       }
       const jHi = key[0], jLo = key[1]; // b0 is the high end of j's range, b1 the low end
       if (jHi > jLo) {
@@ -372,7 +518,7 @@ function gap(X: Float64Array, Y: Float64Array, lo: number, hi: number,
  */
 function distanceChange(vx: number, vy: number, pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
   const ux = vx - pax, uy = vy - pay, wx = vx - pbx, wy = vy - pby;
-  const sum = Math.hypot(ux, uy) + Math.hypot(wx, wy);
+  const sum = Math.sqrt(ux * ux + uy * uy) + Math.sqrt(wx * wx + wy * wy);
   return sum === 0 ? 0 : -(dx * (ux + wx) + dy * (uy + wy)) / sum;
 }
 
@@ -391,6 +537,14 @@ function silhouetteFromSegment(a0x: number, a0y: number, a1x: number, a1y: numbe
   // f g < 0 at both ends and neither changes sign; with both changing sign, f g turns
   // positive between the roots. Any zero at an end counts as a possible silhouette.
   return !(f0 * g0 < 0 && f1 * g1 < 0 && f0 * f1 > 0);
+}
+
+/** From the facing codes of the two edges at a corner (see PairIntegrator.facing). */
+function cornerMayBeTangent(before: number, after: number): boolean {
+  if ((before | after) & 4) return true;
+  if ((before & 1) !== (after & 1) || (before & 2) !== (after & 2)) return true;
+  // Same facing at both ends: a tangent between only if both edges change facing along i'.
+  return (before & 1) !== ((before >> 1) & 1) && (after & 1) !== ((after >> 1) & 1);
 }
 
 function grow(a: Float64Array<ArrayBuffer>): Float64Array<ArrayBuffer> {

@@ -1,6 +1,6 @@
-import Flatbush from 'flatbush';
 import { buildEdges, type EdgeSet } from './edges';
-import { PairIntegrator, type EdgeQuery } from './pairFactor';
+import { buildObstacleIndex } from './obstacles';
+import { PairIntegrator } from './pairFactor';
 import type { SceneInput, ViewFactorResult } from './scene';
 import { aggregateToSurfaces } from './surfaces';
 
@@ -14,27 +14,6 @@ export interface ViewFactorOptions {
   edgeMatrix?: Float64Array;
 }
 
-/** A spatial index over the edges' bounding boxes, as an EdgeQuery. */
-export function indexEdges(edges: EdgeSet): EdgeQuery {
-  const n = edges.count;
-  if (n === 0) return () => {};
-  const index = new Flatbush(n);
-  for (let e = 0; e < n; e++) {
-    index.add(
-      Math.min(edges.ax[e], edges.bx[e]), Math.min(edges.ay[e], edges.by[e]),
-      Math.max(edges.ax[e], edges.bx[e]), Math.max(edges.ay[e], edges.by[e]),
-    );
-  }
-  index.finish();
-  return (minX, minY, maxX, maxY, visit) => {
-    // The filter visits each hit and keeps none, so flatbush builds no result list.
-    index.search(minX, minY, maxX, maxY, (id) => {
-      visit(id);
-      return false;
-    });
-  };
-}
-
 /**
  * Edge-to-edge view factors of a sketch: row-major edges x edges, row = from.
  * F[i*n + j] is the fraction of diffuse emission from edge i (per unit depth) that
@@ -44,7 +23,7 @@ export function edgeViewFactors(edges: EdgeSet, options: ViewFactorOptions = {})
   const n = edges.count;
   const F = options.edgeMatrix && options.edgeMatrix.length >= n * n ? options.edgeMatrix : new Float64Array(n * n);
   F.fill(0, 0, n * n);
-  const integrator = new PairIntegrator(edges, indexEdges(edges));
+  const integrator = new PairIntegrator(edges, buildObstacleIndex(edges));
   const L = edges.length;
   for (let i = 0; i < n; i++) {
     if (L[i] === 0) continue;

@@ -1,0 +1,129 @@
+import Flatbush from 'flatbush';
+import type { EdgeSet } from './edges';
+import { orient } from './orient';
+
+/**
+ * Where to look for edges that may block a view, built once per sketch.
+ * - Bodies (solids) are culled whole by a bounding circle before their edges are looked at.
+ * - Edges of the enclosure's convex hull cannot block anything: the whole enclosure lies
+ *   on their radiating side, so no sight line inside it can cross them. Only the other
+ *   wall edges (those of re-entrant pockets) are indexed, by flatbush.
+ * Coordinates are those of the EdgeSet (sketch units, shifted origin).
+ */
+export interface ObstacleIndex {
+  /** Number of bodies and, per body, its edge range and bounding circle. */
+  bodyCount: number;
+  bodyFirstEdge: Int32Array;
+  bodyEdgeEnd: Int32Array;
+  bodyCx: Float64Array;
+  bodyCy: Float64Array;
+  bodyR: Float64Array;
+  /** 1 when the body is convex: then, lying wholly in a view region, only its silhouette corners matter. */
+  bodyConvex: Uint8Array;
+  /** Flatbush over body bounding boxes when there are many bodies; null means test them all. */
+  bodyTree: Flatbush | null;
+  /** Wall edges that can block (not on the enclosure's convex hull), and their index. */
+  wallEdges: Int32Array;
+  wallTree: Flatbush | null;
+}
+
+const MANY_BODIES = 48;
+
+/** Build the obstacle index of an oriented edge set. */
+export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
+  const P = edges.polygonIsEnclosure.length;
+  const start = edges.polygonStart;
+
+  const bodies: number[] = [];
+  const walls: number[] = [];
+  for (let p = 0; p < P; p++) {
+    if (!edges.polygonIsEnclosure[p]) bodies.push(p);
+    else for (const e of blockingWallEdges(edges, start[p], start[p + 1])) walls.push(e);
+  }
+
+  const B = bodies.length;
+  const bodyFirstEdge = new Int32Array(B), bodyEdgeEnd = new Int32Array(B);
+  const bodyCx = new Float64Array(B), bodyCy = new Float64Array(B), bodyR = new Float64Array(B);
+  const bodyConvex = new Uint8Array(B);
+  const bodyTree = B > MANY_BODIES ? new Flatbush(B) : null;
+  bodies.forEach((p, b) => {
+    bodyFirstEdge[b] = start[p];
+    bodyEdgeEnd[b] = start[p + 1];
+    let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+    for (let e = start[p]; e < start[p + 1]; e++) {
+      x0 = Math.min(x0, edges.ax[e]); x1 = Math.max(x1, edges.ax[e]);
+      y0 = Math.min(y0, edges.ay[e]); y1 = Math.max(y1, edges.ay[e]);
+    }
+    const cx = 0.5 * (x0 + x1), cy = 0.5 * (y0 + y1);
+    let r = 0;
+    for (let e = start[p]; e < start[p + 1]; e++) r = Math.max(r, Math.hypot(edges.ax[e] - cx, edges.ay[e] - cy));
+    bodyCx[b] = cx; bodyCy[b] = cy; bodyR[b] = r;
+    bodyConvex[b] = isConvex(edges, start[p], start[p + 1]) ? 1 : 0;
+    bodyTree?.add(x0, y0, x1, y1);
+  });
+  bodyTree?.finish();
+
+  const wallEdges = Int32Array.from(walls);
+  let wallTree: Flatbush | null = null;
+  if (walls.length > 0) {
+    wallTree = new Flatbush(walls.length);
+    for (const e of walls) {
+      wallTree.add(Math.min(edges.ax[e], edges.bx[e]), Math.min(edges.ay[e], edges.by[e]),
+        Math.max(edges.ax[e], edges.bx[e]), Math.max(edges.ay[e], edges.by[e]));
+    }
+    wallTree.finish();
+  }
+  return { bodyCount: B, bodyFirstEdge, bodyEdgeEnd, bodyCx, bodyCy, bodyR, bodyConvex, bodyTree, wallEdges, wallTree };
+}
+
+/**
+ * Edges of one enclosure polygon [from, to) that may block a view: those not on its
+ * convex hull. An edge is on the hull when every hull corner lies on its radiating
+ * side or on its line (exact test).
+ */
+function blockingWallEdges(edges: EdgeSet, from: number, to: number): number[] {
+  const hull = convexHull(edges, from, to);
+  const out: number[] = [];
+  for (let e = from; e < to; e++) {
+    let onHull = true;
+    for (let k = 0; k < hull.length && onHull; k += 2) {
+      if (orient(edges.ax[e], edges.ay[e], edges.bx[e], edges.by[e], hull[k], hull[k + 1]) < 0) onHull = false;
+    }
+    if (!onHull) out.push(e);
+  }
+  return out;
+}
+
+/** Corners of the convex hull of the start points of edges [from, to), flat x,y (monotone chain). */
+function convexHull(edges: EdgeSet, from: number, to: number): number[] {
+  const idx: number[] = [];
+  for (let e = from; e < to; e++) idx.push(e);
+  idx.sort((a, b) => edges.ax[a] - edges.ax[b] || edges.ay[a] - edges.ay[b]);
+  const chain: number[] = [];
+  const build = (order: number[]) => {
+    const part: number[] = [];
+    for (const e of order) {
+      while (part.length >= 2) {
+        const p = part[part.length - 2], q = part[part.length - 1];
+        if (orient(edges.ax[p], edges.ay[p], edges.ax[q], edges.ay[q], edges.ax[e], edges.ay[e]) > 0) break;
+        part.pop();
+      }
+      part.push(e);
+    }
+    part.pop();
+    return part;
+  };
+  chain.push(...build(idx), ...build([...idx].reverse()));
+  const out: number[] = [];
+  for (const e of chain) out.push(edges.ax[e], edges.ay[e]);
+  return out;
+}
+
+/** A solid's oriented edges (outside on the left, so walked clockwise) never turn left. */
+function isConvex(edges: EdgeSet, from: number, to: number): boolean {
+  for (let e = from; e < to; e++) {
+    const n = edges.nextEdge[e];
+    if (orient(edges.ax[e], edges.ay[e], edges.bx[e], edges.by[e], edges.bx[n], edges.by[n]) > 0) return false;
+  }
+  return true;
+}
