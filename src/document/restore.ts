@@ -52,6 +52,11 @@ function restoreUnsafe(input: unknown): RestoreResult {
     return refuse([`the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`]);
   }
 
+  const surfaces = doc.surfaces;
+  if (surfaces !== null && typeof surfaces === 'object' && Object.hasOwn(surfaces, '__proto__')) {
+    // The schema would silently drop this key; say so instead.
+    return refuse([`surfaces: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`]);
+  }
   const parsed = sketchFileSchemaV1.safeParse(doc, { reportInput: true });
   if (!parsed.success) return refuse(parsed.error.issues.map((issue) => formatSchemaIssue(issue, doc)));
 

@@ -16,7 +16,9 @@ export const pointSchema = z.tuple([coordinate, coordinate], { error: 'must be a
 export const surfaceNameSchema = z
   .string({ error: 'must be a surface name (text)' })
   .min(1, { error: 'must not be empty' })
-  .max(MAX_NAME_LENGTH, { error: `must be at most ${MAX_NAME_LENGTH} characters` });
+  .max(MAX_NAME_LENGTH, { error: `must be at most ${MAX_NAME_LENGTH} characters` })
+  // Would replace an object's prototype instead of naming a surface.
+  .refine((name) => name !== '__proto__', { error: 'must not be "__proto__" (a reserved word); choose another name' });
 
 export const shapeSchema = z.object(
   {
@@ -66,7 +68,7 @@ export const sketchFileSchemaV1 = z.object({
   version: z.literal(1, { error: 'must be 1' }),
   units: z.enum(UNITS, { error: `must be one of ${UNITS.join(', ')}` }),
   shapes: z.array(shapeSchema, { error: 'must be a list of shapes' }),
-  surfaces: z.record(z.string(), surfacePropertiesSchema, { error: 'must be an object of surface names' }).optional(),
+  surfaces: z.record(surfaceNameSchema, surfacePropertiesSchema, { error: 'must be an object of surface names' }).optional(),
   settings: settingsSchema.optional(),
 });
 

@@ -9,6 +9,10 @@ export function formatSchemaIssue(issue: z.core.$ZodIssue, file: unknown): strin
   const input = (issue as { input?: unknown }).input;
   const missing = input === undefined && (issue.code === 'invalid_type' || issue.code === 'invalid_value' || issue.code === 'invalid_union');
   const what = missing ? `is missing; it ${issue.message}` : `${issue.message} (got ${describeReceived(issue, input)})`;
+  if (issue.code === 'invalid_key' && path[0] === 'surfaces') {
+    const rule = issue.issues[0]?.message ?? 'is not a valid surface name';
+    return `surfaces: the name ${quoteName(String(path[path.length - 1] ?? input))} ${rule}`;
+  }
   const { subject, field } = describePath(path, file);
   if (!field) return `${subject} ${what}`;
   return `${subject}: ${field} ${what}`;

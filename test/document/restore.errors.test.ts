@@ -83,6 +83,11 @@ describe('restore refuses a bad version, units or structure', () => {
     expect(only({ ...minimal, surfaces: [] })).toMatch(/^surfaces must be an object of surface names/);
     expect(only({ ...minimal, settings: { depth: -2 } })).toBe('settings: depth must be greater than 0 (got -2)');
   });
+  it('surface names that are empty or reserved', () => {
+    expect(only({ ...minimal, surfaces: { '': { emissivity: 0.5 } } })).toBe("surfaces: the name '' must not be empty");
+    expect(only('{"version": 1, "units": "m", "shapes": [], "surfaces": {"__proto__": {"emissivity": 0.5}}}')).toMatch(/^surfaces: the name '__proto__' must not be "__proto__"/);
+    expect(only(withShapes({ ...enclosure, surface: '__proto__' }))).toMatch(/^shape 1 \(enclosure '__proto__'\): surface must not be "__proto__" \(a reserved word\)/);
+  });
   it('an unknown kind', () => {
     expect(only(withShapes(enclosure, { ...block, kind: 'tube' }))).toBe(`shape 2 ('block'): kind must be "enclosure" or "solid" (got "tube")`);
   });
