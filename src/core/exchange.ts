@@ -26,7 +26,7 @@ import { DenseLuSolver, LinearSolveError } from './linearSolve';
 export const STEFAN_BOLTZMANN = 5.670374419e-8;
 
 /**
- * Row sums of F within this of one count as a closed enclosure (rounding of
+ * Dimensionless. Row sums of F within this of one count as a closed enclosure (rounding of
  * an exact view-factor method is ~1e-14); the rest goes to the surroundings.
  */
 export const CLOSURE_TOLERANCE = 1e-8;
@@ -124,7 +124,10 @@ export function temperatureOfEmissivePower(e: number): number {
 
 /**
  * Solves gray-diffuse exchange in a 2D enclosure or open sketch by the
- * net-radiation method (see the file header for units, signs and equations).
+ * net-radiation method (equations in the file header). Input and results in
+ * SI: lengths m, temperatures K, fluxes and radiosities W/m^2, net heat W per
+ * metre of depth, totals W; net heat and flux positive when the surface gives
+ * off more radiation than it absorbs.
  * Throws ExchangeError for values out of range and problems without a unique
  * answer (e.g. a closed enclosure where no surface has a temperature).
  * `workspace`: a solver of size n to reuse between calls (live updates), so its

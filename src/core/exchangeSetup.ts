@@ -3,7 +3,7 @@
 
 import { ExchangeError, type ExchangeInput, type SurfaceCondition } from './exchange';
 
-/** Emissivity of a surface that gives none (typical of oxidised metals and refractories). */
+/** Emissivity (dimensionless) of a surface that gives none (typical of oxidised metals and refractories). */
 export const DEFAULT_EMISSIVITY = 0.9;
 
 /**

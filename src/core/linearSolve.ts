@@ -13,7 +13,7 @@
 
 import { createProductKernel, type ProductKernel } from './linearSolveKernel';
 
-/** Below this reciprocal condition number a system is refused as ill-conditioned: fewer than ~4 of 16 digits could be trusted. */
+/** Dimensionless. Below this reciprocal condition number a system is refused as ill-conditioned: fewer than ~4 of 16 digits could be trusted. */
 export const DEFAULT_MIN_RECIPROCAL_CONDITION = 1e-12;
 
 export type LinearSolveProblem = 'singular' | 'ill-conditioned' | 'not-finite' | 'not-factored';
@@ -48,7 +48,8 @@ const COLUMN_BLOCK = 512;
 const BASE_WIDTH = 8;
 
 /**
- * A reusable n x n dense solver. Write the system matrix (row-major, row i =
+ * A reusable n x n dense solver (units: those of the caller's system; the
+ * solver adds none). Write the system matrix (row-major, row i =
  * equation i) into `matrix`, call factor(), then solve() any number of
  * right-hand sides. factor() overwrites `matrix` with L (unit lower, below the
  * diagonal) and U (on and above it).
