@@ -23,6 +23,7 @@ export function openSketchText(store: AppStore, api: DocumentApi, text: string, 
   s.commit(read.sketch);
   s.setSelection([]);
   s.setDraft([]);
+  s.requestFit();
   if (read.warnings.length) s.notify('warning', `Opened "${fileName}" with warnings: ${read.warnings.slice(0, 4).join('; ')}`);
   else s.notify('info', `Opened "${fileName}".`);
   return true;

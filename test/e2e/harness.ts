@@ -27,7 +27,14 @@ export interface App { url: string; context: BrowserContext; close: () => Promis
 export async function startApp(): Promise<App> {
   const outDir = mkdtempSync(join(tmpdir(), 'tautline-build-'));
   const profile = mkdtempSync(join(tmpdir(), 'tautline-profile-'));
-  await build({ logLevel: 'error', build: { outDir, emptyOutDir: true } });
+  // vitest sets NODE_ENV=test, which would give a development build of React; test what users get.
+  const nodeEnv = process.env.NODE_ENV;
+  process.env.NODE_ENV = 'production';
+  try {
+    await build({ logLevel: 'error', mode: 'production', build: { outDir, emptyOutDir: true } });
+  } finally {
+    process.env.NODE_ENV = nodeEnv;
+  }
   const port = await freePort();
   const server: PreviewServer = await preview({ logLevel: 'error', build: { outDir }, preview: { host: '127.0.0.1', port, strictPort: true } });
   // The fresh profile directory is chromium's --user-data-dir (playwright passes it).

@@ -54,10 +54,13 @@ describe('sketcher in chromium', () => {
     // Count every change of the table body, stamped with the time of the pointer event before it.
     await page.evaluate(() => {
       const w = window as any;
-      w.__lat = { lastMove: 0, samples: [] as number[], changes: 0 };
+      w.__lat = { lastMove: 0, samples: [] as number[], jobs: [] as number[], changes: 0 };
       window.addEventListener('pointermove', () => { w.__lat.lastMove = performance.now(); }, true);
       new MutationObserver(() => {
-        if (w.__lat.lastMove) w.__lat.samples.push(performance.now() - w.__lat.lastMove);
+        if (w.__lat.lastMove) {
+          w.__lat.samples.push(performance.now() - w.__lat.lastMove);
+          w.__lat.jobs.push(w.__tautline.store.getState().viewFactors.shown?.elapsedMs ?? NaN);
+        }
         w.__lat.lastMove = 0;
         w.__lat.changes++;
       }).observe(document.querySelector('.matrix-scroll')!, { subtree: true, childList: true, characterData: true });
@@ -74,7 +77,7 @@ describe('sketcher in chromium', () => {
     await page.mouse.up();
     await page.keyboard.press('Control+z');
     await waitReady();
-    await page.evaluate(() => { const l = (window as any).__lat; l.samples = []; l.lastMove = 0; });
+    await page.evaluate(() => { const l = (window as any).__lat; l.samples = []; l.jobs = []; l.lastMove = 0; });
     await page.mouse.move(sx, sy);
     await page.mouse.down();
     for (let i = 1; i <= 40; i++) {
@@ -85,10 +88,15 @@ describe('sketcher in chromium', () => {
     await page.mouse.up();
     await page.getByRole('checkbox', { name: 'snap' }).check();
     const samples: number[] = await page.evaluate(() => (window as any).__lat.samples);
+    const jobs: number[] = await page.evaluate(() => (window as any).__lat.jobs);
     const sorted = [...samples].sort((a, b) => a - b);
+    const jobMedian = [...jobs].sort((a, b) => a - b)[Math.floor(jobs.length / 2)];
     const median = sorted[Math.floor(sorted.length / 2)];
-    console.log(`drag-to-table latency on the demo: median ${median.toFixed(1)} ms, p90 ${sorted[Math.floor(sorted.length * 0.9)].toFixed(1)} ms over ${samples.length} moves`);
+    console.log(`drag-to-table latency on the demo: median ${median.toFixed(1)} ms, p90 ${sorted[Math.floor(sorted.length * 0.9)].toFixed(1)} ms over ${samples.length} moves (worker job alone: median ${jobMedian.toFixed(1)} ms)`);
     expect(samples.length).toBeGreaterThanOrEqual(35);
+    // The target (under 50 ms on the dev machine) is reported, not asserted: CI shares its cores.
+    // This bound only catches a pipeline that has stopped keeping up with a drag at all.
+    expect(median).toBeLessThan(300);
     expect(await tableText()).not.toBe(before);
     // The whole drag is one undo step.
     await page.keyboard.press('Control+z');
