@@ -122,3 +122,17 @@ describe('the app', () => {
     expect(within(matrix()).getAllByRole('row')).toHaveLength(8);
   });
 });
+
+describe('number fields', () => {
+  it('leaving an untouched coordinate field keeps the exact stored value', async () => {
+    const user = userEvent.setup();
+    const { store } = renderApp();
+    store.getState().setSelection([{ type: 'shape', shape: 1 }]);
+    const exact = store.getState().doc.shapes[1].points[1];
+    const fields = await screen.findAllByLabelText('x (m)');
+    await user.click(fields[1]);
+    await user.tab();
+    expect(store.getState().doc.shapes[1].points[1]).toBe(exact);
+    expect(store.getState().past).toHaveLength(0);
+  });
+});

@@ -23,7 +23,8 @@ export function NumberField({ label, title, value, onCommit, width, integer, pre
   const commit = () => {
     setEditing(false);
     if (bad) { setText(shown); return; }
-    if (parsed !== value) onCommit(integer ? Math.round(parsed) : parsed);
+    // Only what the user typed counts: leaving an untouched field must not round the stored value.
+    if (text.trim() !== shown && parsed !== value) onCommit(integer ? Math.round(parsed) : parsed);
   };
   return (
     <span className="field" title={title}>

@@ -10,8 +10,8 @@ export function VertexRow({ shape, index, point, units }: { shape: number; index
   return (
     <div className="vertex-row">
       <span className="vertex-label">point {index + 1}</span>
-      <NumberField label={`x (${units})`} title={`x of point ${index + 1}, ${units}`} value={point[0]} onCommit={(x) => set([x, point[1]])} width="6.5em" />
-      <NumberField label={`y (${units})`} title={`y of point ${index + 1}, ${units}`} value={point[1]} onCommit={(y) => set([point[0], y])} width="6.5em" />
+      <NumberField label={`x (${units})`} title={`x of point ${index + 1}, ${units}`} value={point[0]} onCommit={(x) => set([x, point[1]])} width="7.5em" precision={9} />
+      <NumberField label={`y (${units})`} title={`y of point ${index + 1}, ${units}`} value={point[1]} onCommit={(y) => set([point[0], y])} width="7.5em" precision={9} />
     </div>
   );
 }
