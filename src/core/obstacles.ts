@@ -20,6 +20,15 @@ export interface ObstacleIndex {
   bodyR: Float64Array;
   /** 1 when the body is convex: then, lying wholly in a view region, only its silhouette corners matter. */
   bodyConvex: Uint8Array;
+  /**
+   * For convex bodies: corners in walk order (edge ids whose start is the corner,
+   * following nextEdge) from bodyFirstEdge, with their polar angles about the circle's
+   * centre (the corner average, inside a convex body), decreasing along the walk and
+   * unwrapped over one turn; and the smallest corner distance from that centre.
+   */
+  walkEdge: Int32Array;
+  walkAngle: Float64Array;
+  bodyRMin: Float64Array;
   /** Flatbush over body bounding boxes when there are many bodies; null means test them all. */
   bodyTree: Flatbush | null;
   /** Wall edges that can block (not on the enclosure's convex hull), and their index. */
@@ -45,6 +54,9 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   const bodyFirstEdge = new Int32Array(B), bodyEdgeEnd = new Int32Array(B);
   const bodyCx = new Float64Array(B), bodyCy = new Float64Array(B), bodyR = new Float64Array(B);
   const bodyConvex = new Uint8Array(B);
+  const bodyRMin = new Float64Array(B);
+  const walkEdge = new Int32Array(edges.count);
+  const walkAngle = new Float64Array(edges.count);
   const bodyTree = B > MANY_BODIES ? new Flatbush(B) : null;
   bodies.forEach((p, b) => {
     bodyFirstEdge[b] = start[p];
@@ -54,11 +66,32 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
       x0 = Math.min(x0, edges.ax[e]); x1 = Math.max(x1, edges.ax[e]);
       y0 = Math.min(y0, edges.ay[e]); y1 = Math.max(y1, edges.ay[e]);
     }
-    const cx = 0.5 * (x0 + x1), cy = 0.5 * (y0 + y1);
-    let r = 0;
-    for (let e = start[p]; e < start[p + 1]; e++) r = Math.max(r, Math.hypot(edges.ax[e] - cx, edges.ay[e] - cy));
-    bodyCx[b] = cx; bodyCy[b] = cy; bodyR[b] = r;
+    // Centre: the corner average, which lies inside a convex body (needed for angles).
+    let cx = 0, cy = 0;
+    for (let e = start[p]; e < start[p + 1]; e++) { cx += edges.ax[e]; cy += edges.ay[e]; }
+    cx /= start[p + 1] - start[p];
+    cy /= start[p + 1] - start[p];
+    let r = 0, rMin = Infinity;
+    for (let e = start[p]; e < start[p + 1]; e++) {
+      const d = Math.hypot(edges.ax[e] - cx, edges.ay[e] - cy);
+      r = Math.max(r, d);
+      rMin = Math.min(rMin, d);
+    }
+    bodyCx[b] = cx; bodyCy[b] = cy; bodyR[b] = r; bodyRMin[b] = rMin;
     bodyConvex[b] = isConvex(edges, start[p], start[p + 1]) ? 1 : 0;
+    if (bodyConvex[b]) {
+      // Solids are walked clockwise, so the angle falls along the walk.
+      let e = start[p];
+      let previous = Math.atan2(edges.ay[e] - cy, edges.ax[e] - cx);
+      for (let m = start[p]; m < start[p + 1]; m++) {
+        let angle = Math.atan2(edges.ay[e] - cy, edges.ax[e] - cx);
+        while (angle > previous) angle -= 2 * Math.PI;
+        walkEdge[m] = e;
+        walkAngle[m] = angle;
+        previous = angle;
+        e = edges.nextEdge[e];
+      }
+    }
     bodyTree?.add(x0, y0, x1, y1);
   });
   bodyTree?.finish();
@@ -73,7 +106,7 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     }
     wallTree.finish();
   }
-  return { bodyCount: B, bodyFirstEdge, bodyEdgeEnd, bodyCx, bodyCy, bodyR, bodyConvex, bodyTree, wallEdges, wallTree };
+  return { bodyCount: B, bodyFirstEdge, bodyEdgeEnd, bodyCx, bodyCy, bodyR, bodyConvex, walkEdge, walkAngle, bodyRMin, bodyTree, wallEdges, wallTree };
 }
 
 /**

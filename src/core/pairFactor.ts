@@ -38,6 +38,16 @@ export class PairIntegrator {
   private cornerIn = new Uint8Array(64);
   private cornerOut = new Uint8Array(64);
   private readonly sideTol = new Float64Array(4);
+  private sideMask = 0;
+  // Scratch ranges of walk positions for clipConvexBody (ranges per window stay few).
+  private readonly rangeLo = new Int32Array(64);
+  private readonly rangeHi = new Int32Array(64);
+  private readonly nextLo = new Int32Array(64);
+  private readonly nextHi = new Int32Array(64);
+  private readonly winLo = new Int32Array(4);
+  private readonly winHi = new Int32Array(4);
+  private readonly edgeLo = new Int32Array(8);
+  private readonly edgeHi = new Int32Array(8);
   /** Largest coordinate magnitude of the (shifted) sketch: scales float margins. */
   private readonly extent: number;
   // Fixed points: 0 and 1 are the ends of j (clipped), then the obstruction points, group by group.
@@ -128,6 +138,7 @@ export class PairIntegrator {
     this.setSide(1, a1x, a1y, b0x, b0y);
     this.setSide(2, b0x, b0y, b1x, b1y);
     this.setSide(3, b1x, b1y, a0x, a0y);
+    this.sideMask = (this.sideOn[0] ? 1 : 0) | (this.sideOn[1] ? 2 : 0) | (this.sideOn[2] ? 4 : 0) | (this.sideOn[3] ? 8 : 0);
     this.call++;
     this.segCount = 0;
     this.wholeCount = 0;
@@ -187,7 +198,8 @@ export class PairIntegrator {
     }
     const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
     if (!inside) {
-      this.clipBodyEdges(first, end);
+      if (ob.bodyConvex[b]) this.clipConvexBody(b);
+      else this.clipBodyEdges(first, end);
       return;
     }
     if (ob.bodyConvex[b]) {
@@ -293,6 +305,113 @@ export class PairIntegrator {
         this.clip(e);
       }
     }
+  }
+
+  /**
+   * Clip a convex body that straddles H's boundary, looking only at edges that can meet
+   * H. About the body's centre, a corner at distance rho and angle t lies inside side k
+   * when d_k + rho cos(t - phi_k) > 0 (d_k: the centre's signed distance, phi_k: the
+   * side's inward normal); with rMin <= rho <= r that bounds t to a window around phi_k.
+   * An edge can meet H only if, for every side, one of its corners may lie inside it.
+   * The windows are found by binary search in the corners' angles and intersected as
+   * ranges of walk positions, so a many-sided tube costs a few edges, not all of them.
+   */
+  private clipConvexBody(b: number): void {
+    const ob = this.obstacles;
+    const first = ob.bodyFirstEdge[b];
+    const n = ob.bodyEdgeEnd[b] - first;
+    const cx = ob.bodyCx[b], cy = ob.bodyCy[b], r = ob.bodyR[b], rMin = ob.bodyRMin[b];
+    const lo = this.rangeLo, hi = this.rangeHi;
+    let count = 1;
+    lo[0] = 0; hi[0] = n - 1;
+    for (let k = 0; k < 4 && count > 0; k++) {
+      if (!this.sideOn[k]) continue;
+      const len = this.sideLen[k];
+      const tx = (this.ex[k] - this.sx[k]) / len, ty = (this.ey[k] - this.sy[k]) / len;
+      const d = tx * (cy - this.sy[k]) - ty * (cx - this.sx[k]);
+      let c = d >= 0 ? (rMin > 0 ? -d / rMin : -Infinity) : -d / r;
+      c -= 1e-9; // margin for rounding: a wider window only costs time
+      if (c <= -1) continue;
+      if (c >= 1) return; // every corner, so the whole body, is outside this side
+      const w = Math.acos(c) + 1e-9;
+      const phi = Math.atan2(tx, -ty); // inward (left) normal (-ty, tx)
+      count = this.intersectWindow(first, n, phi, w, count);
+    }
+    const E = this.e;
+    const walk = ob.walkEdge;
+    for (let q = 0; q < count; q++) {
+      for (let m = lo[q]; m <= hi[q]; m++) this.clipClassified(walk[first + m], E);
+    }
+  }
+
+  /**
+   * Intersect the walk-position ranges rangeLo/Hi[0..count) with the edges having a
+   * corner whose angle is within w of phi; returns the new count.
+   */
+  private intersectWindow(first: number, n: number, phi: number, w: number, count: number): number {
+    const A = this.obstacles.walkAngle;
+    const top = A[first]; // angles fall from top to above top - 2 pi along the walk
+    const turn = 2 * Math.PI;
+    let centre = phi - turn * Math.ceil((phi - top) / turn); // in (top - 2 pi, top]
+    if (centre > top) centre -= turn;
+    const wl = this.winLo, wh = this.winHi;
+    // Corner windows as walk positions (angles [a, b] inside (top - 2 pi, top]).
+    let nw = cornerWindow(A, first, n, Math.max(centre - w, top - turn), Math.min(centre + w, top), wl, wh, 0);
+    if (centre + w > top) nw = cornerWindow(A, first, n, top - turn, centre + w - turn, wl, wh, nw);
+    if (centre - w < top - turn) nw = cornerWindow(A, first, n, centre - w + turn, top, wl, wh, nw);
+    // Edge at position m runs from corner m to m+1: a corner window [f, t] admits edges [f-1, t].
+    let ne = 0;
+    const el = this.edgeLo, eh = this.edgeHi;
+    for (let q = 0; q < nw; q++) {
+      if (wl[q] === 0) {
+        el[ne] = n - 1; eh[ne] = n - 1; ne++;
+        el[ne] = 0; eh[ne] = wh[q]; ne++;
+      } else {
+        el[ne] = wl[q] - 1; eh[ne] = wh[q]; ne++;
+      }
+    }
+    const lo = this.rangeLo, hi = this.rangeHi, nlo = this.nextLo, nhi = this.nextHi;
+    let out = 0;
+    for (let x = 0; x < count; x++) {
+      for (let y = 0; y < ne; y++) {
+        const a = Math.max(lo[x], el[y]), bb = Math.min(hi[x], eh[y]);
+        if (a <= bb && out < nlo.length) { nlo[out] = a; nhi[out] = bb; out++; }
+      }
+    }
+    // Ranges may overlap after intersection; merge so no edge is clipped twice.
+    sortRanges(nlo, nhi, out);
+    let merged = 0;
+    for (let q = 0; q < out; q++) {
+      if (merged > 0 && nlo[q] <= hi[merged - 1] + 1) hi[merged - 1] = Math.max(hi[merged - 1], nhi[q]);
+      else { lo[merged] = nlo[q]; hi[merged] = nhi[q]; merged++; }
+    }
+    return merged;
+  }
+
+  /** Float-classify both corners of edge e; drop, keep whole, or clip exactly. */
+  private clipClassified(e: number, E: EdgeSet): void {
+    const inA = this.cornerBits(E.ax[e], E.ay[e]);
+    const inB = this.cornerBits(E.bx[e], E.by[e]);
+    // Low 4 bits: surely inside side k; high 4 bits: surely outside side k.
+    if (((inA >> 4) & (inB >> 4)) !== 0) return;
+    const all = this.sideMask;
+    if ((inA & 15) === all && (inB & 15) === all) {
+      if (e !== this.pairI && e !== this.pairJ) this.keepPiece(e, E.ax[e], E.ay[e], E.bx[e], E.by[e], 3);
+      return;
+    }
+    this.clip(e);
+  }
+
+  private cornerBits(x: number, y: number): number {
+    let bits = 0;
+    for (let k = 0; k < 4; k++) {
+      if (!this.sideOn[k]) continue;
+      const d = (this.ex[k] - this.sx[k]) * (y - this.sy[k]) - (this.ey[k] - this.sy[k]) * (x - this.sx[k]);
+      const tol = this.sideTol[k];
+      if (d > tol) bits |= 1 << k;
+      else if (d < -tol) bits |= 16 << k;
+    }
+    return bits;
   }
 
   /** Clip edge `edge` to H; keep the piece if it passes through H's interior. */
@@ -537,6 +656,40 @@ function silhouetteFromSegment(a0x: number, a0y: number, a1x: number, a1y: numbe
   // f g < 0 at both ends and neither changes sign; with both changing sign, f g turns
   // positive between the roots. Any zero at an end counts as a possible silhouette.
   return !(f0 * g0 < 0 && f1 * g1 < 0 && f0 * f1 > 0);
+}
+
+/** First walk position m in [0, n) whose angle A[first+m] <= value (angles fall with m); n if none. */
+function firstAtOrBelow(A: Float64Array, first: number, n: number, value: number): number {
+  let lo = 0, hi = n;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (A[first + mid] <= value) hi = mid;
+    else lo = mid + 1;
+  }
+  return lo;
+}
+
+/** Append to wl/wh the walk positions whose angle lies in [a, b]; returns the new count. */
+function cornerWindow(A: Float64Array, first: number, n: number, a: number, b: number,
+  wl: Int32Array, wh: Int32Array, count: number): number {
+  const from = firstAtOrBelow(A, first, n, b);
+  let lo = from, hi = n; // first position below a
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (A[first + mid] < a) hi = mid;
+    else lo = mid + 1;
+  }
+  if (from < lo) { wl[count] = from; wh[count] = lo - 1; return count + 1; }
+  return count;
+}
+
+function sortRanges(lo: Int32Array, hi: Int32Array, n: number): void {
+  for (let k = 1; k < n; k++) {
+    const a = lo[k], b = hi[k];
+    let m = k - 1;
+    while (m >= 0 && lo[m] > a) { lo[m + 1] = lo[m]; hi[m + 1] = hi[m]; m--; }
+    lo[m + 1] = a; hi[m + 1] = b;
+  }
 }
 
 /** From the facing codes of the two edges at a corner (see PairIntegrator.facing). */
