@@ -1,0 +1,86 @@
+// Random sequences of edits through the store (move, insert, delete, undo, redo)
+// never throw, never put a non-finite number in the document, keep the document
+// a readable sketch file, and every sketch the reader accepts keeps the
+// view-factor invariants: summation rule and reciprocity (Incropera et al.,
+// Fundamentals of Heat and Mass Transfer, 6th ed., eqs. 13.3 and 13.4), 0 <= F <= 1.
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { createAppStore } from '../../src/state/store';
+import { insertVertex, deleteVertices, moveSelection } from '../../src/state/edits/shapeEdits';
+import { documentApi } from '../../src/state/documentApi';
+import { computeViewFactors } from '../../src/core/viewFactors';
+import { serialize } from '../../src/document';
+import type { SketchFile } from '../../src/state/sketchFile';
+
+const start: SketchFile = {
+  version: 1, units: 'm',
+  shapes: [
+    { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] },
+    { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: 'block' },
+  ],
+};
+
+const edit = fc.oneof(
+  fc.record({ op: fc.constant('move' as const), shape: fc.nat(1), index: fc.nat(20), dx: fc.double({ min: -1, max: 1, noNaN: true }), dy: fc.double({ min: -1, max: 1, noNaN: true }) }),
+  fc.record({ op: fc.constant('insert' as const), shape: fc.nat(1), index: fc.nat(20), t: fc.double({ min: 0.05, max: 0.95, noNaN: true }) }),
+  fc.record({ op: fc.constant('delete' as const), shape: fc.nat(1), index: fc.nat(20) }),
+  fc.constant({ op: 'undo' as const }),
+  fc.constant({ op: 'redo' as const }),
+);
+
+/** Summation and reciprocity hold to rounding for exact factors; 1e-9 leaves room for sums over ~100 terms. */
+const TOL = 1e-9;
+
+describe('random edit sequences', () => {
+  it('keep the document valid JSON and the factors within their invariants', () => {
+    fc.assert(
+      fc.property(fc.array(edit, { minLength: 1, maxLength: 12 }), (edits) => {
+        const store = createAppStore(start);
+        const s = () => store.getState();
+        for (const e of edits) {
+          const doc = s().doc;
+          if (e.op === 'undo') s().undo();
+          else if (e.op === 'redo') s().redo();
+          else {
+            const shape = doc.shapes[e.shape];
+            if (!shape) continue;
+            const k = e.index % shape.points.length;
+            if (e.op === 'move') s().edit((d) => moveSelection(d, [{ type: 'vertex', shape: e.shape, index: k }], e.dx, e.dy));
+            if (e.op === 'delete') s().edit((d) => deleteVertices(d, [{ shape: e.shape, index: k }]));
+            if (e.op === 'insert') {
+              const a = shape.points[k];
+              const b = shape.points[(k + 1) % shape.points.length];
+              s().edit((d) => insertVertex(d, e.shape, k, [a[0] + e.t * (b[0] - a[0]), a[1] + e.t * (b[1] - a[1])]));
+            }
+          }
+          const now = s().doc;
+          for (const shape of now.shapes) {
+            expect(shape.points.length).toBeGreaterThanOrEqual(3);
+            for (const [x, y] of shape.points) expect(Number.isFinite(x) && Number.isFinite(y)).toBe(true);
+          }
+          expect(JSON.parse(JSON.stringify(now))).toEqual(now);
+          const read = documentApi.restore(now);
+          if (!read.ok) {
+            expect(read.errors.length).toBeGreaterThan(0);
+            expect(read.errors.every((m) => m.length > 10)).toBe(true);
+            continue;
+          }
+          expect(documentApi.restore(serialize(read.sketch)).ok).toBe(true);
+          const { scene } = documentApi.toScene(read.sketch);
+          const r = computeViewFactors(scene);
+          const n = r.surfaceCount;
+          for (let i = 0; i < n; i++) {
+            expect(Math.abs(r.rowSumResidual[i])).toBeLessThan(TOL);
+            for (let j = 0; j < n; j++) {
+              const f = r.F[i * n + j];
+              expect(f).toBeGreaterThanOrEqual(-TOL);
+              expect(f).toBeLessThanOrEqual(1 + TOL);
+            }
+          }
+          expect(r.reciprocityResidual).toBeLessThan(TOL);
+        }
+      }),
+      { numRuns: 60, seed: 20261201 },
+    );
+  });
+});
