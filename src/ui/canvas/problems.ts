@@ -10,11 +10,10 @@ export function problemMarks(messages: readonly string[], shapeCount: number): P
   const shapes = new Set<number>();
   const points: Point[] = [];
   for (const m of messages) {
-    for (const hit of m.matchAll(/shape (\d+)/gi)) {
-      // Messages count shapes from 1.
-      const i = Number(hit[1]) - 1;
-      if (i >= 0 && i < shapeCount) shapes.add(i);
-    }
+    // The first shape a message names is the one to fix (messages count shapes from 1).
+    const hit = /shape (\d+)/i.exec(m);
+    const i = hit ? Number(hit[1]) - 1 : -1;
+    if (i >= 0 && i < shapeCount) shapes.add(i);
     for (const hit of m.matchAll(new RegExp(`\\((${NUM}),\\s*(${NUM})\\)`, 'gi'))) {
       const p: Point = [Number(hit[1]), Number(hit[2])];
       if (Number.isFinite(p[0]) && Number.isFinite(p[1])) points.push(p);

@@ -1,0 +1,36 @@
+import { describe, expect, it } from 'vitest';
+import { fitCamera, toScreen, toSketch, zoomAt } from '../../src/state/camera';
+import { problemMarks } from '../../src/ui/canvas/problems';
+
+describe('camera', () => {
+  it('maps sketch to screen with y up, and back', () => {
+    const c = { scale: 50, originX: 10, originY: 300 };
+    expect(toScreen(c, [2, 1])).toEqual([110, 250]);
+    expect(toSketch(c, [110, 250])).toEqual([2, 1]);
+  });
+
+  it('zooms around the pointer: the point under it stays put', () => {
+    const c = { scale: 50, originX: 10, originY: 300 };
+    const z = zoomAt(c, [200, 120], 1.7);
+    expect(z.scale).toBeCloseTo(85, 12);
+    const before = toSketch(c, [200, 120]);
+    const after = toSketch(z, [200, 120]);
+    expect(after[0]).toBeCloseTo(before[0], 12);
+    expect(after[1]).toBeCloseTo(before[1], 12);
+  });
+
+  it('fits a sketch centred in the viewport', () => {
+    const c = fitCamera({ minX: 0, minY: 0, maxX: 4, maxY: 2 }, 840, 480, 20);
+    expect(c.scale).toBe(200);
+    expect(toScreen(c, [2, 1])).toEqual([420, 240]);
+  });
+});
+
+describe('problem marks', () => {
+  it('finds the shape and the place a message names', () => {
+    const m = problemMarks(["shape 2 (solid 'block'): edge 3 crosses the enclosure wall (shape 1, edge 2) at (4, 0.75); solids must lie inside"], 2);
+    expect([...m.shapes]).toEqual([1]);
+    expect(m.points).toEqual([[4, 0.75]]);
+    expect(problemMarks(['shape 9: too far'], 2).shapes.size).toBe(0);
+  });
+});
