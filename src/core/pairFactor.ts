@@ -2,6 +2,9 @@ import type { EdgeSet } from './edges';
 import type { ObstacleIndex } from './obstacles';
 import { orient } from './orient';
 
+/** Convex bodies with more edges than this are clipped through angular windows (measured by `npm run bench`). */
+const WINDOW_MIN_EDGES = 8;
+
 /**
  * Exact diffuse view factor between two edges of a long (2D) geometry, with
  * blocking by every other edge of the sketch.
@@ -198,7 +201,8 @@ export class PairIntegrator {
     }
     const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
     if (!inside) {
-      if (ob.bodyConvex[b]) this.clipConvexBody(b);
+      // Angular windows pay off for many-sided bodies; a few corners are cheaper to test all.
+      if (ob.bodyConvex[b] && end - first > WINDOW_MIN_EDGES) this.clipConvexBody(b);
       else this.clipBodyEdges(first, end);
       return;
     }

@@ -37,7 +37,9 @@ export function edgeViewFactors(edges: EdgeSet, options: ViewFactorOptions = {})
         continue;
       }
       const g = L[i] <= L[j] ? integrator.exchangeLength(i, j) : integrator.exchangeLength(j, i);
-      if (g === 0) continue;
+      // Every visible gap adds a non-negative amount, so g < 0 is rounding of an exact
+      // zero (a grazing view, e.g. -1e-32): report it as no view.
+      if (!(g > 0)) continue;
       F[i * n + j] = g / L[i];
       F[j * n + i] = g / L[j];
     }
