@@ -19,7 +19,5 @@ export const selectCanRedo = (s: AppState) => s.future.length > 0 && !s.gestureB
 export const selectResultsStale = (s: AppState) =>
   s.viewFactors.shown !== null && s.viewFactors.shown.doc !== s.doc;
 
-export const selectGrid = (s: AppState) => ({ snap: s.snap, gridStep: s.gridStep });
-export const selectToolOptions = (s: AppState) => ({ quickKind: s.quickKind, tubeSides: s.tubeSides });
 export const selectFitRequest = (s: AppState) => s.fitRequest;
 export const selectHoverPoint = (s: AppState) => s.hoverPoint;

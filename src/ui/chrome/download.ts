@@ -9,7 +9,3 @@ export function downloadText(fileName: string, text: string, type: string): void
   a.remove();
   setTimeout(() => URL.revokeObjectURL(url), 1000);
 }
-
-export async function readFileText(file: File): Promise<string> {
-  return file.text();
-}
