@@ -59,3 +59,17 @@ describe('units', () => {
     expect(re.shapes).toBe(doc.shapes);
   });
 });
+
+describe('awkward names', () => {
+  it('treats names like "toString" and "__proto__" as plain names', () => {
+    const doc: SketchFile = { ...base, surfaces: { 'wall 1': { emissivity: 0.3 } } };
+    const a = renameSurface(doc, 'wall 2', 'toString');
+    expect(edgeNames(a.shapes[0])[1]).toBe('toString');
+    expect(a.surfaces).toEqual({ 'wall 1': { emissivity: 0.3 } });
+    const b = groupEdges(doc, [{ shape: 0, index: 0 }], '__proto__');
+    expect(Object.getPrototypeOf(b.surfaces ?? {})).toBe(Object.prototype);
+    const read = restore(b);
+    expect(read.ok).toBe(false);
+    if (!read.ok) expect(read.errors.join(' ')).toMatch(/__proto__/);
+  });
+});

@@ -6,6 +6,11 @@ import { compactSurface, uniqueName, usedSurfaceNames } from './surfaceNames';
 
 export interface EdgeRef { shape: number; index: number }
 
+/** Own properties only: a surface named "toString" must not find Object.prototype's. */
+function own(props: Record<string, SurfaceProps>, name: string): SurfaceProps | undefined {
+  return Object.hasOwn(props, name) ? props[name] : undefined;
+}
+
 function relabel(doc: SketchFile, nameOf: (shape: number, edge: number, old: string) => string): SketchFile {
   const shapes = doc.shapes.map((shape, s) => {
     const old = edgeNames(shape);
@@ -31,7 +36,9 @@ export function groupEdges(doc: SketchFile, edges: readonly EdgeRef[], name: str
   const firstOld = edgeNames(doc.shapes[edges[0].shape])[edges[0].index];
   const props = { ...(doc.surfaces ?? {}) };
   // A brand-new name inherits the properties of the first edge's old surface.
-  if (!props[target] && firstOld !== undefined && props[firstOld]) props[target] = { ...props[firstOld] };
+  // ('__proto__' is refused by the reader with a message; never assign it as a key.)
+  const inherited = firstOld !== undefined ? own(props, firstOld) : undefined;
+  if (target !== '__proto__' && !own(props, target) && inherited) props[target] = { ...inherited };
   const next = relabel(doc, (s, k, old) => (chosen.has(`${s}:${k}`) ? target : old));
   return pruneProps(next, Object.keys(props).length ? props : doc.surfaces);
 }
@@ -41,7 +48,8 @@ export function renameSurface(doc: SketchFile, from: string, to: string): Sketch
   const target = to.trim();
   if (!target || target === from) return doc;
   const props = { ...(doc.surfaces ?? {}) };
-  if (props[from] && !props[target]) props[target] = props[from];
+  const moving = own(props, from);
+  if (target !== '__proto__' && moving && !own(props, target)) props[target] = moving;
   delete props[from];
   const next = relabel(doc, (_s, _k, old) => (old === from ? target : old));
   return pruneProps(next, doc.surfaces ? props : undefined);
@@ -52,7 +60,7 @@ export function splitSurface(doc: SketchFile, name: string): SketchFile {
   const taken = usedSurfaceNames(doc);
   taken.delete(name);
   const props = { ...(doc.surfaces ?? {}) };
-  const original = props[name];
+  const original = own(props, name);
   let count = 0;
   const next = relabel(doc, (_s, _k, old) => {
     if (old !== name) return old;
