@@ -4,12 +4,13 @@
 // depth; net flux and radiosity W/m^2; totals W. Net heat and net flux are
 // positive when a surface gives off more radiation than it absorbs.
 // A surface without properties gets emissivity 0.9 and is adiabatic
-// (reradiating), see src/core/exchangeSetup.ts.
+// (reradiating), see src/core/exchangeSetup.ts; the sketch-to-solver mapping
+// is shared with the app (src/document/exchangeInput.ts).
 import { ExchangeError, emissivePower, solveExchange, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
-import { exchangeInputFor } from '../core/exchangeSetup';
 import type { ViewFactorResult } from '../core/scene';
 import { computeViewFactors } from '../core/viewFactors';
-import { METRES_PER_UNIT, restore, toCsv, toScene, type CsvCell, type Sketch } from '../document';
+import { restore, toCsv, toScene, type CsvCell, type Sketch } from '../document';
+import { sketchExchangeInput } from '../document/exchangeInput';
 import { describeReadError, type CliIO } from './io';
 
 export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --csv] [--depth METRES]';
@@ -97,18 +98,10 @@ export function runExchange(args: string[], io: CliIO): number {
     io.err(`exchange: ${file}: internal error: the view factors came out non-finite; please report this file\n`);
     return 1;
   }
-  const metres = METRES_PER_UNIT[sketch.units];
   let result: ExchangeResult;
   let conditions: ReadonlyArray<SurfaceCondition>;
   try {
-    const input = exchangeInputFor({
-      names: surfaceNames,
-      properties: sketch.surfaces,
-      viewFactors: factors.F,
-      lengthMetres: factors.surfaceLength.map((L) => L * metres),
-      surroundingsTemperature: sketch.settings.surroundingsTemperature,
-      depth: depthArg ?? sketch.settings.depth,
-    });
+    const input = sketchExchangeInput(sketch, surfaceNames, factors, depthArg);
     conditions = input.conditions;
     result = solveExchange(input);
   } catch (error) {
