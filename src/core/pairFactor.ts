@@ -4,6 +4,7 @@ import { orient } from './orient';
 
 /** Convex bodies with more edges than this are clipped through angular windows (measured by `npm run bench`). */
 const WINDOW_MIN_EDGES = 8;
+const SIDE_ORDER = [1, 3, 0, 2];
 
 /**
  * Exact diffuse view factor between two edges of a long (2D) geometry, with
@@ -328,7 +329,9 @@ export class PairIntegrator {
     const lo = this.rangeLo, hi = this.rangeHi;
     let count = 1;
     lo[0] = 0; hi[0] = n - 1;
-    for (let k = 0; k < 4 && count > 0; k++) {
+    // The side strings (1 and 3) bound H most tightly, so they go first.
+    for (let step = 0; step < 4 && count > 0; step++) {
+      const k = SIDE_ORDER[step];
       if (!this.sideOn[k]) continue;
       const len = this.sideLen[k];
       const tx = (this.ex[k] - this.sx[k]) / len, ty = (this.ey[k] - this.sy[k]) / len;
