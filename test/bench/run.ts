@@ -5,6 +5,14 @@ import { buildEdges } from '../../src/core/edges';
 import { edgeViewFactors } from '../../src/core/viewFactors';
 import type { SceneInput } from '../../src/core/scene';
 import { tubeScene } from './scenes';
+import { demoSketch } from '../../src/state/demo';
+import { restore, toScene } from '../../src/document';
+
+function demoScene(): SceneInput {
+  const r = restore(demoSketch);
+  if (!r.ok) throw new Error(`demo sketch invalid: ${r.errors.join('; ')}`);
+  return toScene(r.sketch).scene;
+}
 
 function time(scene: SceneInput, repeats: number): { min: number; median: number; edges: number; rowWorst: number } {
   const edges = buildEdges(scene.polygons);
@@ -29,6 +37,7 @@ function time(scene: SceneInput, repeats: number): { min: number; median: number
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
 const cases: { label: string; scene: SceneInput; repeats: number }[] = [
+  { label: 'demo oven (first start)', scene: demoScene(), repeats: quick ? 20 : 300 },
   { label: 'drag-size sketch: 6 bodies', scene: tubeScene(42, 6, 22, 18), repeats: quick ? 20 : 200 },
   { label: '20 tubes, ~100 edges', scene: tubeScene(1, 20, 4, 20), repeats: quick ? 5 : 30 },
   { label: '20 tubes, ~400 edges', scene: tubeScene(1, 20, 18, 40), repeats: quick ? 3 : 10 },
@@ -36,15 +45,24 @@ const cases: { label: string; scene: SceneInput; repeats: number }[] = [
 ];
 
 console.log(`node ${process.version}, ${quick ? 'quick' : 'full'} run`);
-console.log('scene                          edges   min ms  median ms  growth  matrix MB  worst |1-row sum|');
+console.log('scene                          edges   min ms  median ms  growth                   matrix MB  worst |1-row sum|');
 let previous: { edges: number; median: number } | null = null;
+const verdicts: string[] = [];
 for (const c of cases) {
   const r = time(c.scene, c.repeats);
-  const growth = previous && c.label.startsWith('20 tubes') && previous.edges < r.edges
-    ? `${(r.median / previous.median).toFixed(2)}x/${(r.edges / previous.edges).toFixed(1)}x edges`
-    : '';
+  let growth = '';
+  if (previous && c.label.startsWith('20 tubes')) {
+    // Per doubling of the edges: the square root of the ratio for 4x the edges.
+    const perDoubling = Math.pow(r.median / previous.median, 1 / Math.log2(r.edges / previous.edges));
+    growth = `${(r.median / previous.median).toFixed(1)}x (${perDoubling.toFixed(2)}x/doubling)`;
+    verdicts.push(`growth ${previous.edges}->${r.edges} edges: ${perDoubling.toFixed(2)}x per doubling (target <= 4.5): ${perDoubling <= 4.5 ? 'met' : 'NOT met'}`);
+  }
   console.log(
-    `${c.label.padEnd(30)} ${String(r.edges).padStart(5)} ${r.min.toFixed(2).padStart(8)} ${r.median.toFixed(2).padStart(10)}  ${growth.padEnd(18)} ${((r.edges * r.edges * 8) / 1e6).toFixed(1).padStart(6)}  ${r.rowWorst.toExponential(1)}`,
+    `${c.label.padEnd(30)} ${String(r.edges).padStart(5)} ${r.min.toFixed(2).padStart(8)} ${r.median.toFixed(2).padStart(10)}  ${growth.padEnd(24)} ${((r.edges * r.edges * 8) / 1e6).toFixed(1).padStart(6)}  ${r.rowWorst.toExponential(1)}`,
   );
+  if (c.label.startsWith('drag-size')) verdicts.push(`drag-size sketch (${r.edges} edges, 6 bodies): median ${r.median.toFixed(1)} ms (target <= 5 ms): ${r.median <= 5 ? 'met' : 'NOT met'}`);
+  if (c.label.startsWith('20 tubes, ~1600')) verdicts.push(`1600 edges: median ${r.median.toFixed(0)} ms (target <= 2000 ms): ${r.median <= 2000 ? 'met' : 'NOT met'}`);
   if (c.label.startsWith('20 tubes')) previous = { edges: r.edges, median: r.median };
 }
+console.log(`peak resident memory ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (the 1600-edge matrix is ${((1600 * 1600 * 8) / 1e6).toFixed(1)} MB)`);
+for (const v of verdicts) console.log(v);
