@@ -42,6 +42,10 @@ export class PairIntegrator {
   private cornerIn = new Uint8Array(64);
   private cornerOut = new Uint8Array(64);
   private readonly sideTol = new Float64Array(4);
+  /** Angle of each side's inward (left) normal, radians. */
+  private readonly sideNormalAngle = new Float64Array(4);
+  /** Signed distance of the current body's centre from each side, positive inside H. */
+  private readonly centreDist = new Float64Array(4);
   private sideMask = 0;
   // Scratch ranges of walk positions for clipConvexBody (ranges per window stay few).
   private readonly rangeLo = new Int32Array(64);
@@ -171,6 +175,7 @@ export class PairIntegrator {
     this.sideOn[k] = x0 === x1 && y0 === y1 ? 0 : 1; // a side of zero length bounds nothing
     this.sideLen[k] = Math.sqrt((x1 - x0) ** 2 + (y1 - y0) ** 2);
     this.sideTol[k] = 1e-14 * this.sideLen[k] * this.extent;
+    this.sideNormalAngle[k] = Math.atan2(x1 - x0, -(y1 - y0)); // left normal (-dy, dx)
   }
 
   /** Clip to H every edge that may block: walls of pockets near H, and bodies whose circle meets H. */
@@ -197,6 +202,7 @@ export class PairIntegrator {
       const dx = this.ex[k] - this.sx[k], dy = this.ey[k] - this.sy[k];
       // Signed distance of the centre from the side, positive inside H.
       const dist = (dx * (cy - this.sy[k]) - dy * (cx - this.sx[k])) / this.sideLen[k];
+      this.centreDist[k] = dist;
       if (dist < -r - margin) return;
       if (dist < r + margin) inside = false;
     }
@@ -325,7 +331,7 @@ export class PairIntegrator {
     const ob = this.obstacles;
     const first = ob.bodyFirstEdge[b];
     const n = ob.bodyEdgeEnd[b] - first;
-    const cx = ob.bodyCx[b], cy = ob.bodyCy[b], r = ob.bodyR[b], rMin = ob.bodyRMin[b];
+    const r = ob.bodyR[b], rMin = ob.bodyRMin[b];
     const lo = this.rangeLo, hi = this.rangeHi;
     let count = 1;
     lo[0] = 0; hi[0] = n - 1;
@@ -333,16 +339,13 @@ export class PairIntegrator {
     for (let step = 0; step < 4 && count > 0; step++) {
       const k = SIDE_ORDER[step];
       if (!this.sideOn[k]) continue;
-      const len = this.sideLen[k];
-      const tx = (this.ex[k] - this.sx[k]) / len, ty = (this.ey[k] - this.sy[k]) / len;
-      const d = tx * (cy - this.sy[k]) - ty * (cx - this.sx[k]);
+      const d = this.centreDist[k]; // set by clipBody for this body
       let c = d >= 0 ? (rMin > 0 ? -d / rMin : -Infinity) : -d / r;
       c -= 1e-9; // margin for rounding: a wider window only costs time
       if (c <= -1) continue;
       if (c >= 1) return; // every corner, so the whole body, is outside this side
       const w = Math.acos(c) + 1e-9;
-      const phi = Math.atan2(tx, -ty); // inward (left) normal (-ty, tx)
-      count = this.intersectWindow(first, n, phi, w, count);
+      count = this.intersectWindow(first, n, this.sideNormalAngle[k], w, count);
     }
     const E = this.e;
     const walk = ob.walkEdge;
