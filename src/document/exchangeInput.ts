@@ -7,6 +7,10 @@ import { exchangeInputFor } from '../core/exchangeSetup';
 import type { SketchSettings, SurfaceProperties } from './schema';
 import { METRES_PER_UNIT, type Units } from './units';
 
+// For the app, which reaches the core through this layer.
+export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY } from '../core/exchangeSetup';
+export type { ExchangeResult, SurfaceCondition } from '../core/exchange';
+
 /** What the exchange needs of a sketch: its units, surface properties and settings (as the file holds them). */
 export interface SketchExchangePart {
   units: Units;

@@ -1,0 +1,211 @@
+import { describe, expect, it } from 'vitest';
+import { createAppStore, type AppStore } from '../../src/state/store';
+import { startLiveResults, type JobRunner } from '../../src/state/liveResults';
+import { startLiveExchange } from '../../src/state/exchangeLive';
+import { documentApi } from '../../src/state/documentApi';
+import { setVertex } from '../../src/state/edits/shapeEdits';
+import { setCondition, setEmissivity, setSettings, setSurfaceProps } from '../../src/state/exchangeEdits';
+import type { ExchangeSolved } from '../../src/state/exchangeSlice';
+import { demoSketch } from '../../src/state/demo';
+import type { SketchFile } from '../../src/state/sketchFile';
+import { viewFactorApi } from '../../src/worker/api';
+import { main } from '../../src/cli/main';
+import { STEFAN_BOLTZMANN as SIGMA } from '../../src/core/exchange';
+
+// Heat exchange in the app store: derived from the shown view factors and the
+// document, live, never saved. The chain (exact view factors, dense solve) is
+// exact to rounding, so closed forms are checked to 1e-9.
+const REL = 1e-9;
+const flush = () => new Promise((r) => setTimeout(r, 0));
+const inThread: JobRunner = { run: async (job) => ({ kind: 'done', result: await viewFactorApi.compute(job), elapsedMs: 0 }) };
+
+function live(doc: SketchFile): AppStore {
+  const store = createAppStore(doc);
+  startLiveResults(store, inThread, documentApi);
+  startLiveExchange(store);
+  return store;
+}
+
+function solved(store: AppStore): ExchangeSolved {
+  const ex = store.getState().exchange;
+  if (ex.kind !== 'solved') throw new Error(`expected a solved exchange, got ${JSON.stringify(ex)}`);
+  return ex;
+}
+
+const heatOf = (ex: ExchangeSolved, name: string) => ex.result.netHeat[ex.names.indexOf(name)];
+const close = (actual: number, expected: number, rel = REL) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
+
+// Two long concentric squares in millimetres: inner 200 mm (a solid, convex, so
+// F_12 = 1), outer 600 mm (the enclosure).
+const squares: SketchFile = {
+  version: 1,
+  units: 'mm',
+  shapes: [
+    { kind: 'enclosure', points: [[0, 0], [600, 0], [600, 600], [0, 600]], surface: 'outer' },
+    { kind: 'solid', points: [[200, 200], [400, 200], [400, 400], [200, 400]], surface: 'inner' },
+  ],
+  surfaces: { inner: { emissivity: 0.6, temperature: 1000 }, outer: { emissivity: 0.8, temperature: 500 } },
+};
+
+/**
+ * Two-surface enclosure, inner convex body (F_12 = 1):
+ * q'_1 = sigma (T1^4 - T2^4) A1 / (1/e1 + (A1/A2)(1/e2 - 1)).
+ * Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.3 (two-surface enclosure), from memory.
+ */
+function twoSurface(T1: number, T2: number, e1: number, e2: number, A1: number, A2: number): number {
+  return (SIGMA * (T1 ** 4 - T2 ** 4) * A1) / (1 / e1 + (A1 / A2) * (1 / e2 - 1));
+}
+
+describe('exchange results in the store', () => {
+  it('match the two-surface closed form for concentric squares drawn in mm (lengths converted to metres)', async () => {
+    const store = live(squares);
+    expect(store.getState().exchange.kind).toBe('none');
+    await flush();
+    const ex = solved(store);
+    expect(ex.stale).toBe(false);
+    expect(ex.units).toBe('mm');
+    const q = twoSurface(1000, 500, 0.6, 0.8, 0.8, 2.4);
+    close(heatOf(ex, 'inner'), q);
+    close(heatOf(ex, 'outer'), -q);
+    // Net flux is per m^2 of the surface: q'/A.
+    close(ex.result.netFlux[ex.names.indexOf('inner')], q / 0.8);
+    // Energy balance of a closed, reciprocal enclosure: rounding only (common practice: conservation check).
+    expect(ex.result.energyBalance).toBeLessThan(1e-12);
+    expect(store.getState().doc).toBe(squares); // results never enter the document
+  });
+
+  it('a property edit shows at once on the old view factors, is one undo step, and undo brings the old answer back', async () => {
+    const store = live(squares);
+    await flush();
+    const before = heatOf(solved(store), 'inner');
+    store.getState().edit((d) => setCondition(d, 'inner', { kind: 'temperature', temperature: 1200 }));
+    // Same geometry, so no wait for the worker.
+    let ex = solved(store);
+    expect(ex.stale).toBe(false);
+    close(heatOf(ex, 'inner'), twoSurface(1200, 500, 0.6, 0.8, 0.8, 2.4));
+    expect(store.getState().doc.surfaces?.inner).toEqual({ emissivity: 0.6, temperature: 1200 });
+    store.getState().undo();
+    ex = solved(store);
+    close(heatOf(ex, 'inner'), before);
+    store.getState().redo();
+    close(heatOf(solved(store), 'inner'), twoSurface(1200, 500, 0.6, 0.8, 0.8, 2.4));
+  });
+
+  it('adds totals over the depth (W) and keeps them per metre otherwise', async () => {
+    const store = live(squares);
+    await flush();
+    expect(solved(store).result.netHeatTotal).toBeUndefined();
+    store.getState().edit((d) => setSettings(d, { depth: 2.5 }));
+    const ex = solved(store);
+    close(ex.result.netHeatTotal![ex.names.indexOf('inner')], 2.5 * twoSurface(1000, 500, 0.6, 0.8, 0.8, 2.4));
+  });
+
+  it('shows the solver message when the problem has no unique answer, and recovers when it has one', async () => {
+    const store = live(squares);
+    await flush();
+    store.getState().edit((d) => setCondition(setCondition(d, 'inner', { kind: 'adiabatic' }), 'outer', { kind: 'adiabatic' }));
+    const ex = store.getState().exchange;
+    expect(ex.kind).toBe('error');
+    if (ex.kind === 'error') expect(ex.message).toMatch(/no unique answer.*give at least one surface a temperature/);
+    store.getState().edit((d) => setCondition(d, 'outer', { kind: 'temperature', temperature: 500 }));
+    // Inner reradiating in a 500 K enclosure: it settles at 500 K with no net heat.
+    const ok = solved(store);
+    close(ok.result.temperature[ok.names.indexOf('inner')], 500);
+    expect(Math.abs(heatOf(ok, 'inner'))).toBeLessThan(1e-9);
+  });
+
+  it('names the surface when an open sketch or an opening needs a surroundings temperature', async () => {
+    const plate: SketchFile = {
+      version: 1, units: 'm',
+      shapes: [{ kind: 'solid', points: [[0, 0], [1, 0], [1, 0.1], [0, 0.1]], surface: 'plate' }],
+      surfaces: { plate: { emissivity: 0.5, temperature: 400 } },
+    };
+    const store = live(plate);
+    await flush();
+    const ex = store.getState().exchange;
+    expect(ex.kind).toBe('error');
+    if (ex.kind === 'error') {
+      expect(ex.surface).toBe('plate');
+      expect(ex.message).toMatch(/'plate' sees the surroundings.*no surroundings temperature/);
+    }
+    store.getState().edit((d) => setSettings(d, { surroundingsTemperature: 300 }));
+    // A convex body in open space sees only the surroundings (F_i,s = 1): q' = e sigma (T^4 - Ts^4) A
+    // (Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 12.7, small body in large surroundings, from memory).
+    close(heatOf(solved(store), 'plate'), 0.5 * SIGMA * (400 ** 4 - 300 ** 4) * 2.2);
+  });
+
+  it('while geometry is being edited, results are those of the shown view factors, marked stale, with their own properties', async () => {
+    const store = live(squares);
+    await flush();
+    const shown = store.getState().viewFactors.shown;
+    store.getState().beginGesture();
+    store.getState().updateGesture(setVertex(store.getState().doc, 1, 1, [450, 200]));
+    const ex = solved(store);
+    expect(store.getState().viewFactors.shown).toBe(shown);
+    expect(ex.stale).toBe(true);
+    close(heatOf(ex, 'inner'), twoSurface(1000, 500, 0.6, 0.8, 0.8, 2.4));
+    store.getState().endGesture();
+    await flush();
+    const after = solved(store);
+    expect(after.stale).toBe(false);
+    // The inner body is now a longer (856 mm round) convex quadrilateral, so it gives off more.
+    expect(heatOf(after, 'inner')).toBeGreaterThan(heatOf(ex, 'inner'));
+  });
+
+  it('agree with what the command line prints for the same file (the demo oven)', async () => {
+    const store = live(demoSketch);
+    await flush();
+    const ex = solved(store);
+    let out = '';
+    const code = main(['exchange', 'demo.json', '--json'], {
+      out: (t) => void (out += t), err: () => {}, readFile: () => JSON.stringify(demoSketch),
+    });
+    expect(code).toBe(0);
+    const cli = JSON.parse(out) as { surfaces: { name: string; netHeat: number; temperature: number; netFlux: number }[] };
+    expect(cli.surfaces.map((s) => s.name)).toEqual(ex.names);
+    cli.surfaces.forEach((s, i) => {
+      expect(ex.result.netHeat[i]).toBe(s.netHeat);
+      expect(ex.result.temperature[i]).toBe(s.temperature);
+      expect(ex.result.netFlux[i]).toBe(s.netFlux);
+    });
+  });
+});
+
+describe('exchange edits', () => {
+  it('one condition at a time, emissivity kept; back to the defaults removes the entry', () => {
+    let doc = setCondition(squares, 'inner', { kind: 'heatFlux', heatFlux: 5000 });
+    expect(doc.surfaces?.inner).toEqual({ emissivity: 0.6, heatFlux: 5000 });
+    doc = setCondition(doc, 'inner', { kind: 'opening' });
+    expect(doc.surfaces?.inner).toEqual({ emissivity: 0.6, opening: true });
+    doc = setEmissivity(doc, 'inner', undefined);
+    expect(doc.surfaces?.inner).toEqual({ opening: true });
+    doc = setSurfaceProps(doc, 'inner', undefined);
+    expect(Object.hasOwn(doc.surfaces!, 'inner')).toBe(false);
+    doc = setSurfaceProps(doc, 'outer', undefined);
+    expect('surfaces' in doc).toBe(false);
+    expect(documentApi.restore(doc).ok).toBe(true);
+  });
+
+  it('an edit that changes nothing returns the same document, so it adds no undo step', () => {
+    const store = createAppStore(squares);
+    store.getState().edit((d) => setCondition(d, 'outer', { kind: 'temperature', temperature: 500 }));
+    store.getState().edit((d) => setEmissivity(d, 'inner', 0.6));
+    store.getState().edit((d) => setSettings(d, { depth: undefined }));
+    expect(store.getState().doc).toBe(squares);
+    expect(store.getState().past).toHaveLength(0);
+  });
+
+  it('names no edge uses, and "__proto__", are left alone', () => {
+    expect(setEmissivity(squares, 'nowhere', 0.5)).toBe(squares);
+    expect(setEmissivity(squares, '__proto__', 0.5)).toBe(squares);
+  });
+
+  it('settings are set and cleared one at a time', () => {
+    let doc = setSettings(squares, { surroundingsTemperature: 293.15, depth: 3 });
+    expect(doc.settings).toEqual({ surroundingsTemperature: 293.15, depth: 3 });
+    doc = setSettings(doc, { depth: undefined });
+    expect(doc.settings).toEqual({ surroundingsTemperature: 293.15 });
+    doc = setSettings(doc, { surroundingsTemperature: undefined });
+    expect('settings' in doc).toBe(false);
+  });
+});
