@@ -7,9 +7,10 @@ import { createDocumentSlice, type DocumentSlice } from './documentSlice';
 import { createHistorySlice, type HistorySlice } from './historySlice';
 import { createViewSlice, type ViewSlice } from './viewSlice';
 import { createResultsSlice, type ResultsSlice } from './resultsSlice';
+import { createExchangeSlice, type ExchangeSlice } from './exchangeSlice';
 import type { SketchFile } from './sketchFile';
 
-export type AppState = DocumentSlice & HistorySlice & ViewSlice & ResultsSlice;
+export type AppState = DocumentSlice & HistorySlice & ViewSlice & ResultsSlice & ExchangeSlice;
 export type AppStore = StoreApi<AppState>;
 
 export function createAppStore(initial: SketchFile): AppStore {
@@ -18,5 +19,6 @@ export function createAppStore(initial: SketchFile): AppStore {
     ...createHistorySlice(...a),
     ...createViewSlice(...a),
     ...createResultsSlice(...a),
+    ...createExchangeSlice(...a),
   }));
 }
