@@ -4,6 +4,7 @@ import type { SketchFile } from './sketchFile';
 import { createAppStore, type AppStore } from './store';
 import { loadAutosave, startAutosave } from './autosave';
 import { startLiveResults } from './liveResults';
+import { startLiveExchange } from './exchangeLive';
 import { ViewFactorClient, type WorkerHandle } from '../worker/client';
 
 /** Seconds a job may run before the worker counts as hung (the benchmark's largest sketch takes ~2 s). */
@@ -24,9 +25,10 @@ export function startRuntime(options: {
   const client = new ViewFactorClient(options.spawn, { timeLimitMs: options.timeLimitMs ?? WORKER_TIME_LIMIT_MS });
   const stopSave = startAutosave(store, options.storage, options.api);
   const stopLive = startLiveResults(store, client, options.api);
+  const stopExchange = startLiveExchange(store);
   return {
     store,
     client,
-    dispose: () => { stopLive(); stopSave(); client.dispose(); },
+    dispose: () => { stopExchange(); stopLive(); stopSave(); client.dispose(); },
   };
 }
