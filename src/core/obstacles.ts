@@ -29,6 +29,8 @@ export interface ObstacleIndex {
   walkEdge: Int32Array;
   walkAngle: Float64Array;
   bodyRMin: Float64Array;
+  /** For convex bodies: radius of the largest disc about the centre inside the body (0 otherwise). */
+  bodyRIn: Float64Array;
   /** Flatbush over body bounding boxes when there are many bodies; null means test them all. */
   bodyTree: Flatbush | null;
   /** Wall edges that can block (not on the enclosure's convex hull), and their index. */
@@ -55,6 +57,7 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   const bodyCx = new Float64Array(B), bodyCy = new Float64Array(B), bodyR = new Float64Array(B);
   const bodyConvex = new Uint8Array(B);
   const bodyRMin = new Float64Array(B);
+  const bodyRIn = new Float64Array(B);
   const walkEdge = new Int32Array(edges.count);
   const walkAngle = new Float64Array(edges.count);
   const bodyTree = B > MANY_BODIES ? new Flatbush(B) : null;
@@ -80,6 +83,13 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     bodyCx[b] = cx; bodyCy[b] = cy; bodyR[b] = r; bodyRMin[b] = rMin;
     bodyConvex[b] = isConvex(edges, start[p], start[p + 1]) ? 1 : 0;
     if (bodyConvex[b]) {
+      let rIn = Infinity;
+      for (let e = start[p]; e < start[p + 1]; e++) {
+        const dx = edges.bx[e] - edges.ax[e], dy = edges.by[e] - edges.ay[e];
+        // The centre is inside, i.e. right of every edge: distance to the edge's line.
+        rIn = Math.min(rIn, (dy * (cx - edges.ax[e]) - dx * (cy - edges.ay[e])) / edges.length[e]);
+      }
+      bodyRIn[b] = Math.max(0, rIn);
       // Solids are walked clockwise, so the angle falls along the walk.
       let e = start[p];
       let previous = Math.atan2(edges.ay[e] - cy, edges.ax[e] - cx);
@@ -106,7 +116,7 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     }
     wallTree.finish();
   }
-  return { bodyCount: B, bodyFirstEdge, bodyEdgeEnd, bodyCx, bodyCy, bodyR, bodyConvex, walkEdge, walkAngle, bodyRMin, bodyTree, wallEdges, wallTree };
+  return { bodyCount: B, bodyFirstEdge, bodyEdgeEnd, bodyCx, bodyCy, bodyR, bodyConvex, walkEdge, walkAngle, bodyRMin, bodyRIn, bodyTree, wallEdges, wallTree };
 }
 
 /**

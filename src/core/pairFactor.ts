@@ -82,6 +82,7 @@ export class PairIntegrator {
   private readonly visitEdge: (id: number) => boolean;
   private readonly visitBody: (id: number) => boolean;
   private pairI = 0;
+  private blocked = false;
   private pairJ = 0;
 
   constructor(edges: EdgeSet, obstacles: ObstacleIndex) {
@@ -97,7 +98,7 @@ export class PairIntegrator {
       return false; // keep no result list in flatbush
     };
     this.visitBody = (id: number) => {
-      this.clipBody(id);
+      if (!this.blocked) this.clipBody(id);
       return false;
     };
   }
@@ -152,10 +153,11 @@ export class PairIntegrator {
     this.wholeCount = 0;
     this.pairI = i;
     this.pairJ = j;
-    this.gatherObstacles(
+    const cut = this.gatherObstacles(
       Math.min(a0x, a1x, b0x, b1x), Math.min(a0y, a1y, b0y, b1y),
       Math.max(a0x, a1x, b0x, b1x), Math.max(a0y, a1y, b0y, b1y),
     );
+    if (cut) return 0;
     if (this.segCount === 0 && this.wholeCount === 0) {
       // Unobstructed: crossed minus uncrossed strings over 2 (Hottel).
       // Written as distance changes along i so that short edges lose no digits.
@@ -179,11 +181,37 @@ export class PairIntegrator {
   }
 
   /** Clip to H every edge that may block: walls of pockets near H, and bodies whose circle meets H. */
-  private gatherObstacles(minX: number, minY: number, maxX: number, maxY: number): void {
+  /** Returns true when one body blocks every sight line (then nothing else needs looking at). */
+  private gatherObstacles(minX: number, minY: number, maxX: number, maxY: number): boolean {
     const ob = this.obstacles;
-    ob.wallTree?.search(minX, minY, maxX, maxY, this.visitEdge);
+    this.blocked = false;
     if (ob.bodyTree) ob.bodyTree.search(minX, minY, maxX, maxY, this.visitBody);
-    else for (let b = 0; b < ob.bodyCount; b++) this.clipBody(b);
+    else for (let b = 0; b < ob.bodyCount && !this.blocked; b++) this.clipBody(b);
+    if (this.blocked) return true;
+    ob.wallTree?.search(minX, minY, maxX, maxY, this.visitEdge);
+    return false;
+  }
+
+  /**
+   * Does convex body b block every sight line? It does when the disc inscribed about its
+   * centre meets both side strings (sides 1 and 3): the body then holds a chord from one
+   * string to the other, which cuts H between i and j. Float test with a margin that
+   * only ever says no in doubt.
+   */
+  private cutsView(b: number): boolean {
+    const ob = this.obstacles;
+    const rIn = ob.bodyRIn[b] * (1 - 1e-9);
+    if (!(rIn > 0) || !this.sideOn[1] || !this.sideOn[3]) return false;
+    return this.discMeetsSide(1, ob.bodyCx[b], ob.bodyCy[b], rIn) && this.discMeetsSide(3, ob.bodyCx[b], ob.bodyCy[b], rIn);
+  }
+
+  private discMeetsSide(k: number, cx: number, cy: number, r: number): boolean {
+    const x0 = this.sx[k], y0 = this.sy[k];
+    const dx = this.ex[k] - x0, dy = this.ey[k] - y0;
+    let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
+    t = t < 0 ? 0 : t > 1 ? 1 : t;
+    const ux = cx - (x0 + t * dx), uy = cy - (y0 + t * dy);
+    return ux * ux + uy * uy < r * r;
   }
 
   /**
@@ -207,6 +235,10 @@ export class PairIntegrator {
       if (dist < r + margin) inside = false;
     }
     const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
+    if (!inside && ob.bodyConvex[b] && this.cutsView(b)) {
+      this.blocked = true;
+      return;
+    }
     if (!inside) {
       // Angular windows pay off for many-sided bodies; a few corners are cheaper to test all.
       if (ob.bodyConvex[b] && end - first > WINDOW_MIN_EDGES) this.clipConvexBody(b);
