@@ -9,9 +9,10 @@
 import { ExchangeError, emissivePower, solveExchange, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
 import type { ViewFactorResult } from '../core/scene';
 import { computeViewFactors } from '../core/viewFactors';
-import { restore, toCsv, toScene, type CsvCell, type Sketch } from '../document';
+import { toCsv, toScene, type CsvCell, type Sketch } from '../document';
 import { sketchExchangeInput } from '../document/exchangeInput';
-import { describeReadError, type CliIO } from './io';
+import type { CliIO } from './io';
+import { readSketchFile } from './readSketch';
 
 export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --csv] [--depth METRES]';
 
@@ -37,7 +38,6 @@ ${CAUTION}
 `;
 
 /** Most warnings printed. */
-const MAX_WARNINGS = 5;
 
 type Format = 'table' | 'json' | 'csv';
 
@@ -72,25 +72,8 @@ export function runExchange(args: string[], io: CliIO): number {
   if (files.length > 1) return usageError(io, `one sketch file at a time (got ${files.length})`);
   const file = files[0];
 
-  let text: string;
-  try {
-    text = io.readFile(file);
-  } catch (error) {
-    io.err(`exchange: ${describeReadError(file, error)}\n`);
-    return 1;
-  }
-  const read = restore(text);
-  if (!read.ok) {
-    for (const m of read.errors) io.err(`exchange: ${file}: ${m}\n`);
-    return 1;
-  }
-  for (const m of read.warnings.slice(0, MAX_WARNINGS)) io.err(`exchange: ${file}: warning: ${m}\n`);
-  if (read.warnings.length > MAX_WARNINGS) io.err(`exchange: ${file}: …and ${read.warnings.length - MAX_WARNINGS} more warnings\n`);
-  const { sketch } = read;
-  if (sketch.shapes.length === 0) {
-    io.err(`exchange: ${file}: the sketch has no shapes; nothing to compute\n`);
-    return 1;
-  }
+  const sketch = readSketchFile('exchange', file, io);
+  if (!sketch) return 1;
 
   const { scene, surfaceNames } = toScene(sketch);
   const factors = computeViewFactors(scene);

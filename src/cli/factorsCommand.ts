@@ -2,8 +2,9 @@
 // surfaces of a sketch file, as a readable table, one JSON object, or CSV.
 import { computeViewFactors } from '../core/viewFactors';
 import type { ViewFactorResult } from '../core/scene';
-import { matrixCsv, restore, toScene, type Sketch } from '../document';
-import { describeReadError, type CliIO } from './io';
+import { matrixCsv, toScene, type Sketch } from '../document';
+import type { CliIO } from './io';
+import { readSketchFile } from './readSketch';
 
 export const FACTORS_USAGE = 'usage: npm run cli -- factors FILE [--json | --csv]';
 
@@ -19,7 +20,6 @@ FILE '-' reads standard input.
 `;
 
 /** Most warnings printed (errors are already capped by restore). */
-const MAX_WARNINGS = 5;
 
 type Format = 'table' | 'json' | 'csv';
 
@@ -46,25 +46,8 @@ export function runFactors(args: string[], io: CliIO): number {
   if (files.length > 1) return usageError(io, `one sketch file at a time (got ${files.length})`);
   const file = files[0];
 
-  let text: string;
-  try {
-    text = io.readFile(file);
-  } catch (error) {
-    io.err(`factors: ${describeReadError(file, error)}\n`);
-    return 1;
-  }
-  const read = restore(text);
-  if (!read.ok) {
-    for (const m of read.errors) io.err(`factors: ${file}: ${m}\n`);
-    return 1;
-  }
-  for (const m of read.warnings.slice(0, MAX_WARNINGS)) io.err(`factors: ${file}: warning: ${m}\n`);
-  if (read.warnings.length > MAX_WARNINGS) io.err(`factors: ${file}: …and ${read.warnings.length - MAX_WARNINGS} more warnings\n`);
-  const { sketch } = read;
-  if (sketch.shapes.length === 0) {
-    io.err(`factors: ${file}: the sketch has no shapes; nothing to compute\n`);
-    return 1;
-  }
+  const sketch = readSketchFile('factors', file, io);
+  if (!sketch) return 1;
 
   const { scene, surfaceNames } = toScene(sketch);
   const result = computeViewFactors(scene);
