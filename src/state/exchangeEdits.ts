@@ -5,6 +5,9 @@
 import type { SketchFile, SurfaceProps } from './sketchFile';
 import { usedSurfaceNames } from './edits/surfaceNames';
 
+/** The defaults for a surface with no properties (emissivity 0.9, adiabatic), as the solver applies them. */
+export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY } from '../document/exchangeInput';
+
 /** The one condition a surface can be given in the app. */
 export type ConditionChoice =
   | { kind: 'temperature'; temperature: number }

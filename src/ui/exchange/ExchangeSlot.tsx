@@ -1,10 +1,22 @@
-// Place for the heat-exchange work: surface properties and results per surface.
-// The store is ready for an exchange results slice beside the view-factor one.
+// The heat-exchange tab: properties of the chosen surface, the sketch settings,
+// and the results (table, energy balance, bar chart, caution). Everything edits
+// the document through the store, so undo, redo and autosave apply.
+import './exchange.css';
+import { SurfaceProperties } from './SurfaceProperties';
+import { ExchangeSettings } from './ExchangeSettings';
+import { ExchangeResults } from './ExchangeResults';
+import { TemperatureUnitToggle } from './TemperatureUnitToggle';
+
 export function ExchangeSlot() {
   return (
-    <div className="exchange-slot">
-      <p><strong>Not available yet.</strong> Surface properties (emissivity, temperature, heat flux or reradiating) and
-        net heat per metre will be set and shown here. The sketch file already keeps each surface's properties.</p>
+    <div className="exchange">
+      <div className="exchange-head">
+        <span className="hint">Gray-diffuse exchange, per metre of depth.</span>
+        <TemperatureUnitToggle />
+      </div>
+      <SurfaceProperties />
+      <ExchangeSettings />
+      <ExchangeResults />
     </div>
   );
 }

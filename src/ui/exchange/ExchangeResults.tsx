@@ -1,0 +1,54 @@
+import { useId } from 'react';
+import { useApp } from '../AppContext';
+import { selectExchange } from '../../state/exchangeSelectors';
+import { SAFETY_TEXT } from '../chrome/SafetyNote';
+import { fmtResidual } from '../matrix/format';
+import { ExchangeStatus } from './ExchangeStatus';
+import { ExchangeTable } from './ExchangeTable';
+import { NetHeatChart } from './NetHeatChart';
+import { useSurfaceChoice } from './useSurfaceChoice';
+
+/** Energy balances above this (relative) are more than rounding: the view factors are not reciprocal enough. */
+const BALANCE_TOLERANCE = 1e-9;
+/** Below this estimated reciprocal condition number the solve loses most of its digits. */
+const CONDITION_WARNING = 1e-10;
+
+/** Results per surface, the energy balance, the solver's message when there is no answer, the chart, and the caution. */
+export function ExchangeResults() {
+  const id = useId();
+  const ex = useApp(selectExchange);
+  const { current, choose } = useSurfaceChoice();
+  return (
+    <section className="exchange-results" aria-labelledby={`${id}-title`}>
+      <div className="panel-head">
+        <h3 id={`${id}-title`}>Net heat</h3>
+        <ExchangeStatus />
+      </div>
+      <p className="exchange-caution" role="note" aria-label="Caution about these results"><strong>Caution:</strong> {SAFETY_TEXT}</p>
+      {ex.kind === 'error' && (
+        <div className="exchange-error" role="alert">
+          <p><strong>No results:</strong> {ex.message}</p>
+          {ex.surface !== undefined && (
+            <button type="button" title="Show this surface in the properties above" onClick={() => choose(ex.surface!)}>Edit “{ex.surface}”</button>
+          )}
+        </div>
+      )}
+      {ex.kind === 'solved' && (
+        <>
+          <ExchangeTable ex={ex} current={current} onChoose={choose} />
+          <div className="matrix-notes">
+            <span className={ex.result.energyBalance > BALANCE_TOLERANCE ? 'warn' : undefined}
+              title="|sum of the net heats, surroundings included| relative to the largest; rounding is about 1e-14">
+              energy balance residual: {fmtResidual(ex.result.energyBalance)}{ex.result.energyBalance > BALANCE_TOLERANCE ? ' — above rounding' : ''}
+            </span>
+            {ex.result.reciprocalCondition < CONDITION_WARNING && (
+              <span className="warn">the radiosity equations are nearly singular (reciprocal condition {fmtResidual(ex.result.reciprocalCondition)}): digits may be lost</span>
+            )}
+            {ex.result.depth === undefined && <span>Set a depth below to see totals in W.</span>}
+          </div>
+          <NetHeatChart ex={ex} />
+        </>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,33 @@
+import { useId } from 'react';
+import { useApp, useAppStore } from '../AppContext';
+import { selectSettings, selectTemperatureUnit } from '../../state/exchangeSelectors';
+import { setSettings } from '../../state/exchangeEdits';
+import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchangeUnits';
+import { CheckedField } from './CheckedField';
+
+/** The sketch's settings for heat exchange: surroundings temperature and depth. */
+export function ExchangeSettings() {
+  const id = useId();
+  const settings = useApp(selectSettings);
+  const unit = useApp(selectTemperatureUnit);
+  const store = useAppStore();
+  const Ts = settings?.surroundingsTemperature;
+  return (
+    <section className="exchange-settings" aria-labelledby={`${id}-title`}>
+      <h3 id={`${id}-title`}>Sketch settings</h3>
+      <div className="row">
+        <CheckedField label={`surroundings temperature (${TEMPERATURE_LABEL[unit]})`} value={Ts === undefined ? undefined : fromKelvin(Ts, unit)}
+          placeholder="not set" optional
+          title="Temperature of the surroundings seen through openings and around an open sketch (black); kept in kelvin in the file"
+          check={(v) => temperatureProblem(v, unit)}
+          onCommit={(v) => store.getState().edit((d) => setSettings(d, { surroundingsTemperature: v === undefined ? undefined : toKelvin(v, unit) }))} />
+      </div>
+      <div className="row">
+        <CheckedField label="depth (m)" value={settings?.depth} placeholder="not set" optional
+          title="Length of the long dimension (duct or furnace length), metres: turns W per metre into W"
+          check={(v) => (v > 0 ? null : 'must be greater than 0')}
+          onCommit={(v) => store.getState().edit((d) => setSettings(d, { depth: v }))} />
+      </div>
+    </section>
+  );
+}

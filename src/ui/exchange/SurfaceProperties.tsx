@@ -1,0 +1,125 @@
+import { useId } from 'react';
+import { useApp, useAppStore } from '../AppContext';
+import { selectDoc } from '../../state/selectors';
+import { selectExchange, selectTemperatureUnit } from '../../state/exchangeSelectors';
+import { DEFAULT_EMISSIVITY, setCondition, setEmissivity, setSurfaceProps, surfacePropsOf, type ConditionChoice } from '../../state/exchangeEdits';
+import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchangeUnits';
+import type { SurfaceProps } from '../../state/sketchFile';
+import type { AppState } from '../../state/store';
+import { CheckedField } from './CheckedField';
+import { useSurfaceChoice } from './useSurfaceChoice';
+
+type Kind = ConditionChoice['kind'];
+
+const KIND_LABEL: Record<Kind, string> = {
+  temperature: 'temperature',
+  heatFlux: 'heat flux',
+  adiabatic: 'adiabatic (reradiating)',
+  opening: 'opening to the surroundings',
+};
+
+const KIND_TITLE: Record<Kind, string> = {
+  temperature: 'The surface is held at a temperature; its net heat is solved',
+  heatFlux: 'A net radiative flux is imposed (> 0: heat leaves the surface); its temperature is solved',
+  adiabatic: 'Insulated, reradiating wall (net heat zero), such as a refractory; its temperature is solved',
+  opening: 'A gap to the outside: black, at the surroundings temperature',
+};
+
+/** Temperature a surface starts at when it is first given one, K (room temperature, common practice). */
+const ROOM_TEMPERATURE = 293.15;
+
+/** The condition the file gives a surface (the first one, as the solver reads it), or the default. */
+function kindOf(props: SurfaceProps | undefined): { kind: Kind; isDefault: boolean } {
+  if (props?.temperature !== undefined) return { kind: 'temperature', isDefault: false };
+  if (props?.heatFlux !== undefined) return { kind: 'heatFlux', isDefault: false };
+  if (props?.adiabatic === true) return { kind: 'adiabatic', isDefault: false };
+  if (props?.opening === true) return { kind: 'opening', isDefault: false };
+  return { kind: 'adiabatic', isDefault: true };
+}
+
+const selectSurroundings = (s: AppState) => s.doc.settings?.surroundingsTemperature;
+
+/** Emissivity and the one condition of the surface chosen on the canvas or in the list. */
+export function SurfaceProperties() {
+  const id = useId();
+  const doc = useApp(selectDoc);
+  const unit = useApp(selectTemperatureUnit);
+  const exchange = useApp(selectExchange);
+  const surroundings = useApp(selectSurroundings);
+  const store = useAppStore();
+  const { names, current, choose } = useSurfaceChoice();
+  if (current === null) return <p className="hint">No surfaces yet: draw an enclosure or a body first.</p>;
+
+  const props = surfacePropsOf(doc, current);
+  const { kind, isDefault } = kindOf(props);
+  const edit = (fn: (d: typeof doc) => typeof doc) => store.getState().edit(fn);
+  const solvedIndex = exchange.kind === 'solved' ? exchange.names.indexOf(current) : -1;
+
+  // A new condition starts from the surface's current result, so switching keeps the answer where it is.
+  const startValue = (k: Kind): ConditionChoice => {
+    if (k === 'temperature') {
+      const T = solvedIndex >= 0 && exchange.kind === 'solved' ? exchange.result.temperature[solvedIndex] : surroundings ?? ROOM_TEMPERATURE;
+      return { kind: k, temperature: Number(T.toFixed(2)) };
+    }
+    if (k === 'heatFlux') {
+      const q = solvedIndex >= 0 && exchange.kind === 'solved' ? exchange.result.netFlux[solvedIndex] : 0;
+      return { kind: k, heatFlux: Number(q.toPrecision(6)) };
+    }
+    return { kind: k };
+  };
+
+  return (
+    <section className="exchange-props" aria-labelledby={`${id}-title`}>
+      <h3 id={`${id}-title`}>Surface properties</h3>
+      <div className="row">
+        <label htmlFor={`${id}-surface`}>surface</label>
+        <select id={`${id}-surface`} value={current} title="Surface to edit (selecting an edge on the canvas picks its surface)"
+          onChange={(e) => choose(e.target.value)}>
+          {names.map((n) => <option key={n} value={n}>{n}</option>)}
+        </select>
+        <button type="button" disabled={!props} title="Remove this surface's properties from the file, so the defaults apply"
+          onClick={() => edit((d) => setSurfaceProps(d, current, undefined))}>Use defaults</button>
+      </div>
+      {!props && (
+        <p className="hint">No properties in the file: the defaults apply (emissivity {DEFAULT_EMISSIVITY}, adiabatic).</p>
+      )}
+      <div className="row">
+        <CheckedField label="emissivity" value={kind === 'opening' ? 1 : props?.emissivity}
+          placeholder={`${DEFAULT_EMISSIVITY} (default)`} optional disabled={kind === 'opening'}
+          title="Hemispherical emissivity, in (0, 1]; leave empty for the default"
+          check={(v) => (v > 0 && v <= 1 ? null : 'must be in (0, 1]')}
+          onCommit={(v) => edit((d) => setEmissivity(d, current, v))} />
+        {kind === 'opening' && <span className="hint">openings are black</span>}
+        {kind === 'adiabatic' && <span className="hint">no effect on an adiabatic surface</span>}
+      </div>
+      <div className="row">
+        <label htmlFor={`${id}-condition`}>condition</label>
+        <select id={`${id}-condition`} value={kind} title={KIND_TITLE[kind]}
+          onChange={(e) => edit((d) => setCondition(d, current, startValue(e.target.value as Kind)))}>
+          {(Object.keys(KIND_LABEL) as Kind[]).map((k) => (
+            <option key={k} value={k} title={KIND_TITLE[k]}>{KIND_LABEL[k]}{isDefault && k === 'adiabatic' ? ' (default)' : ''}</option>
+          ))}
+        </select>
+      </div>
+      {kind === 'temperature' && props?.temperature !== undefined && (
+        <div className="row">
+          <CheckedField label={`temperature (${TEMPERATURE_LABEL[unit]})`} value={fromKelvin(props.temperature, unit)}
+            title="Temperature held at the surface; kept in kelvin in the file"
+            check={(v) => temperatureProblem(v, unit)}
+            onCommit={(v) => v !== undefined && edit((d) => setCondition(d, current, { kind: 'temperature', temperature: toKelvin(v, unit) }))} />
+        </div>
+      )}
+      {kind === 'heatFlux' && props?.heatFlux !== undefined && (
+        <div className="row">
+          <CheckedField label="heat flux (W/m²)" value={props.heatFlux}
+            title="Net radiative flux imposed on the surface, W/m²; > 0 when heat leaves the surface"
+            onCommit={(v) => v !== undefined && edit((d) => setCondition(d, current, { kind: 'heatFlux', heatFlux: v }))} />
+          <span className="hint">&gt; 0: heat leaves the surface</span>
+        </div>
+      )}
+      {kind === 'opening' && (
+        <p className="hint">Black, at the surroundings temperature{surroundings === undefined ? ' — set one below' : ''}.</p>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,44 @@
+// One row per surface of a solved exchange (and one for the surroundings of an
+// open sketch), in the units the panel shows: K, W per metre of depth, W/m^2, W.
+import type { ExchangeSolved } from '../../state/exchangeSlice';
+
+export interface ExchangeRow {
+  name: string;
+  /** Null for the surroundings row. */
+  index: number | null;
+  condition: string;
+  emissivity: number;
+  temperature: number;
+  netHeat: number;
+  /** Undefined for the surroundings (no area of their own). */
+  netFlux: number | undefined;
+  total: number | undefined;
+}
+
+const CONDITION: Record<string, string> = {
+  temperature: 'temperature',
+  heatFlux: 'heat flux (T solved)',
+  adiabatic: 'adiabatic (T solved)',
+  opening: 'opening',
+};
+
+export function exchangeRows(ex: ExchangeSolved): ExchangeRow[] {
+  const r = ex.result;
+  const rows: ExchangeRow[] = ex.names.map((name, i) => ({
+    name,
+    index: i,
+    condition: CONDITION[ex.conditions[i].kind],
+    emissivity: r.emissivity[i],
+    temperature: r.temperature[i],
+    netHeat: r.netHeat[i],
+    netFlux: r.netFlux[i],
+    total: r.netHeatTotal?.[i],
+  }));
+  if (r.surroundingsTemperature !== undefined && r.surroundingsViewFactor.some((f) => f > 0)) {
+    rows.push({
+      name: '(surroundings)', index: null, condition: 'black', emissivity: 1, temperature: r.surroundingsTemperature,
+      netHeat: r.surroundingsNetHeat, netFlux: undefined, total: r.surroundingsNetHeatTotal,
+    });
+  }
+  return rows;
+}
