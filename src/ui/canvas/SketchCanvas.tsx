@@ -17,6 +17,8 @@ import { ShapesLayer } from './ShapesLayer';
 import { HandlesLayer } from './HandlesLayer';
 import { DraftLayer } from './DraftLayer';
 import { ProblemLayer } from './ProblemLayer';
+import { HeatLayer } from '../exchange/HeatLayer';
+import { HeatLegend } from '../exchange/HeatLegend';
 
 const selectGridStep = (s: AppState) => s.gridStep;
 const selectSetCamera = (s: AppState) => s.setCamera;
@@ -58,11 +60,13 @@ export function SketchCanvas() {
         <Stage width={width} height={height} {...handlers}>
           <GridLayer camera={camera} width={width} height={height} step={gridStep} />
           <ShapesLayer doc={doc} camera={camera} order={order} emphasis={emphasis} problemShapes={problems.shapes} />
+          <HeatLayer doc={doc} camera={camera} />
           <HandlesLayer doc={doc} camera={camera} selection={selection} showAll={tool === 'select'} />
           <DraftLayer tool={tool} draft={draft} hover={hover} camera={camera} />
           <ProblemLayer points={problems.points} camera={camera} />
         </Stage>
       )}
+      <HeatLegend />
     </div>
   );
 }
