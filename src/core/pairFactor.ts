@@ -40,13 +40,14 @@ export class PairIntegrator {
   private wholeCount = 0;
   private facingCode = new Uint8Array(64);
   private cornerIn = new Uint8Array(64);
-  private cornerOut = new Uint8Array(64);
   private readonly sideTol = new Float64Array(4);
   /** Angle of each side's inward (left) normal, radians. */
   private readonly sideNormalAngle = new Float64Array(4);
   /** Signed distance of the current body's centre from each side, positive inside H. */
   private readonly centreDist = new Float64Array(4);
   private sideMask = 0;
+  private crossingSides = 0;
+  private anglesFor = -1; // the call whose side normal angles are computed
   // Scratch ranges of walk positions for clipConvexBody (ranges per window stay few).
   private readonly rangeLo = new Int32Array(64);
   private readonly rangeHi = new Int32Array(64);
@@ -177,7 +178,6 @@ export class PairIntegrator {
     this.sideOn[k] = x0 === x1 && y0 === y1 ? 0 : 1; // a side of zero length bounds nothing
     this.sideLen[k] = Math.sqrt((x1 - x0) ** 2 + (y1 - y0) ** 2);
     this.sideTol[k] = 1e-14 * this.sideLen[k] * this.extent;
-    this.sideNormalAngle[k] = Math.atan2(x1 - x0, -(y1 - y0)); // left normal (-dy, dx)
   }
 
   /** Clip to H every edge that may block: walls of pockets near H, and bodies whose circle meets H. */
@@ -224,7 +224,7 @@ export class PairIntegrator {
     // A relative margin of 1e-9 keeps these float tests on the safe side: a body kept
     // in vain costs only time, and "wholly inside" must be certain.
     const margin = r * 1e-9 + 1e-12 * (Math.abs(cx) + Math.abs(cy));
-    let inside = true;
+    let crossing = 0; // sides that cut the circle; the body is surely inside the others
     for (let k = 0; k < 4; k++) {
       if (!this.sideOn[k]) continue;
       const dx = this.ex[k] - this.sx[k], dy = this.ey[k] - this.sy[k];
@@ -232,8 +232,10 @@ export class PairIntegrator {
       const dist = (dx * (cy - this.sy[k]) - dy * (cx - this.sx[k])) / this.sideLen[k];
       this.centreDist[k] = dist;
       if (dist < -r - margin) return;
-      if (dist < r + margin) inside = false;
+      if (dist < r + margin) crossing |= 1 << k;
     }
+    this.crossingSides = crossing;
+    const inside = crossing === 0;
     const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
     if (!inside && ob.bodyConvex[b] && this.cutsView(b)) {
       this.blocked = true;
@@ -319,30 +321,14 @@ export class PairIntegrator {
   private clipBodyEdges(first: number, end: number): void {
     const E = this.e;
     const n = end - first;
-    if (this.cornerIn.length < n) {
-      this.cornerIn = new Uint8Array(2 * n);
-      this.cornerOut = new Uint8Array(2 * n);
-    }
-    const cin = this.cornerIn, cout = this.cornerOut;
-    let allOn = 0;
-    for (let k = 0; k < 4; k++) if (this.sideOn[k]) allOn |= 1 << k;
+    if (this.cornerIn.length < n) this.cornerIn = new Uint8Array(2 * n);
+    const cin = this.cornerIn;
+    const allOn = this.sideMask;
+    for (let e = first; e < end; e++) cin[e - first] = this.cornerBits(E.ax[e], E.ay[e]);
     for (let e = first; e < end; e++) {
-      const x = E.ax[e], y = E.ay[e];
-      let inBits = 0, outBits = 0;
-      for (let k = 0; k < 4; k++) {
-        if (!this.sideOn[k]) continue;
-        const d = (this.ex[k] - this.sx[k]) * (y - this.sy[k]) - (this.ey[k] - this.sy[k]) * (x - this.sx[k]);
-        const tol = this.sideTol[k];
-        if (d > tol) inBits |= 1 << k;
-        else if (d < -tol) outBits |= 1 << k;
-      }
-      cin[e - first] = inBits;
-      cout[e - first] = outBits;
-    }
-    for (let e = first; e < end; e++) {
-      const a = e - first, bq = E.nextEdge[e] - first;
-      if ((cout[a] & cout[bq]) !== 0) continue;
-      if (cin[a] === allOn && cin[bq] === allOn) {
+      const a = cin[e - first], bq = cin[E.nextEdge[e] - first];
+      if (((a >> 4) & (bq >> 4)) !== 0) continue;
+      if ((a & 15) === allOn && (bq & 15) === allOn) {
         if (e !== this.pairI && e !== this.pairJ) this.keepPiece(e, E.ax[e], E.ay[e], E.bx[e], E.by[e], 3);
       } else {
         this.clip(e);
@@ -365,6 +351,10 @@ export class PairIntegrator {
     const n = ob.bodyEdgeEnd[b] - first;
     const r = ob.bodyR[b], rMin = ob.bodyRMin[b];
     const lo = this.rangeLo, hi = this.rangeHi;
+    if (this.anglesFor !== this.call) {
+      for (let k = 0; k < 4; k++) this.sideNormalAngle[k] = Math.atan2(this.ex[k] - this.sx[k], this.sy[k] - this.ey[k]); // left normal (-dy, dx)
+      this.anglesFor = this.call;
+    }
     let count = 1;
     lo[0] = 0; hi[0] = n - 1;
     // The side strings (1 and 3) bound H most tightly, so they go first.
@@ -444,10 +434,15 @@ export class PairIntegrator {
     this.clip(e);
   }
 
+  /**
+   * Low 4 bits: surely inside side k; high 4 bits: surely outside side k. Only the sides
+   * that cut the current body's circle are tested; the body is surely inside the rest.
+   */
   private cornerBits(x: number, y: number): number {
-    let bits = 0;
+    const crossing = this.crossingSides;
+    let bits = this.sideMask & ~crossing;
     for (let k = 0; k < 4; k++) {
-      if (!this.sideOn[k]) continue;
+      if (!(crossing & (1 << k))) continue;
       const d = (this.ex[k] - this.sx[k]) * (y - this.sy[k]) - (this.ey[k] - this.sy[k]) * (x - this.sx[k]);
       const tol = this.sideTol[k];
       if (d > tol) bits |= 1 << k;
