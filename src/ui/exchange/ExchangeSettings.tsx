@@ -21,8 +21,6 @@ export function ExchangeSettings() {
           title="Temperature of the surroundings seen through openings and around an open sketch (black); kept in kelvin in the file"
           check={(v) => temperatureProblem(v, unit)}
           onCommit={(v) => store.getState().edit((d) => setSettings(d, { surroundingsTemperature: v === undefined ? undefined : toKelvin(v, unit) }))} />
-      </div>
-      <div className="row">
         <CheckedField label="depth (m)" value={settings?.depth} placeholder="not set" optional
           title="Length of the long dimension (duct or furnace length), metres: turns W per metre into W"
           check={(v) => (v > 0 ? null : 'must be greater than 0')}

@@ -5,18 +5,15 @@ import './exchange.css';
 import { SurfaceProperties } from './SurfaceProperties';
 import { ExchangeSettings } from './ExchangeSettings';
 import { ExchangeResults } from './ExchangeResults';
-import { TemperatureUnitToggle } from './TemperatureUnitToggle';
 
 export function ExchangeSlot() {
   return (
-    <div className="exchange">
-      <div className="exchange-head">
-        <span className="hint">Gray-diffuse exchange, per metre of depth.</span>
-        <TemperatureUnitToggle />
+    <div className="exchange-frame">
+      <div className="exchange">
+        <SurfaceProperties />
+        <ExchangeSettings />
+        <ExchangeResults />
       </div>
-      <SurfaceProperties />
-      <ExchangeSettings />
-      <ExchangeResults />
     </div>
   );
 }

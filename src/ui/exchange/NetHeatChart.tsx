@@ -4,8 +4,8 @@ import { fmtHeat } from './format';
 import { exchangeRows } from './rows';
 
 const ROW = 18;
-const WIDTH = 360;
-const LABEL = 112;
+const WIDTH = 420;
+const LABEL = 120;
 const VALUE = 64;
 
 /**
@@ -23,7 +23,7 @@ export function NetHeatChart({ ex }: { ex: ExchangeSolved }) {
   return (
     <figure className="net-heat-chart">
       <figcaption>Net heat per surface, W per metre of depth</figcaption>
-      <svg viewBox={`0 0 ${WIDTH} ${height}`} width="100%" role="img" aria-label="Bar chart of net heat per surface, W per metre of depth">
+      <svg viewBox={`0 0 ${WIDTH} ${height}`} width={WIDTH} height={height} style={{ maxWidth: '100%', height: 'auto' }} role="img" aria-label="Bar chart of net heat per surface, W per metre of depth">
         <line x1={zero} x2={zero} y1={0} y2={height} stroke="#6a747b" strokeWidth={1} />
         {rows.map((r, k) => {
           const w = largest > 0 ? ((plot / 2) * Math.abs(r.netHeat)) / largest : 0;

@@ -8,6 +8,7 @@ import type { SurfaceProps } from '../../state/sketchFile';
 import type { AppState } from '../../state/store';
 import { CheckedField } from './CheckedField';
 import { useSurfaceChoice } from './useSurfaceChoice';
+import { TemperatureUnitToggle } from './TemperatureUnitToggle';
 
 type Kind = ConditionChoice['kind'];
 
@@ -69,8 +70,11 @@ export function SurfaceProperties() {
   };
 
   return (
-    <section className="exchange-props" aria-labelledby={`${id}-title`}>
-      <h3 id={`${id}-title`}>Surface properties</h3>
+    <section key={current} className="exchange-props" aria-labelledby={`${id}-title`}>
+      <div className="exchange-head">
+        <h3 id={`${id}-title`}>Surface properties</h3>
+        <TemperatureUnitToggle />
+      </div>
       <div className="row">
         <label htmlFor={`${id}-surface`}>surface</label>
         <select id={`${id}-surface`} value={current} title="Surface to edit (selecting an edge on the canvas picks its surface)"
@@ -89,10 +93,6 @@ export function SurfaceProperties() {
           title="Hemispherical emissivity, in (0, 1]; leave empty for the default"
           check={(v) => (v > 0 && v <= 1 ? null : 'must be in (0, 1]')}
           onCommit={(v) => edit((d) => setEmissivity(d, current, v))} />
-        {kind === 'opening' && <span className="hint">openings are black</span>}
-        {kind === 'adiabatic' && <span className="hint">no effect on an adiabatic surface</span>}
-      </div>
-      <div className="row">
         <label htmlFor={`${id}-condition`}>condition</label>
         <select id={`${id}-condition`} value={kind} title={KIND_TITLE[kind]}
           onChange={(e) => edit((d) => setCondition(d, current, startValue(e.target.value as Kind)))}>
@@ -101,25 +101,26 @@ export function SurfaceProperties() {
           ))}
         </select>
       </div>
-      {kind === 'temperature' && props?.temperature !== undefined && (
-        <div className="row">
+      <div className="row">
+        {kind === 'temperature' && props?.temperature !== undefined && (
           <CheckedField label={`temperature (${TEMPERATURE_LABEL[unit]})`} value={fromKelvin(props.temperature, unit)}
             title="Temperature held at the surface; kept in kelvin in the file"
             check={(v) => temperatureProblem(v, unit)}
             onCommit={(v) => v !== undefined && edit((d) => setCondition(d, current, { kind: 'temperature', temperature: toKelvin(v, unit) }))} />
-        </div>
-      )}
-      {kind === 'heatFlux' && props?.heatFlux !== undefined && (
-        <div className="row">
-          <CheckedField label="heat flux (W/m²)" value={props.heatFlux}
-            title="Net radiative flux imposed on the surface, W/m²; > 0 when heat leaves the surface"
-            onCommit={(v) => v !== undefined && edit((d) => setCondition(d, current, { kind: 'heatFlux', heatFlux: v }))} />
-          <span className="hint">&gt; 0: heat leaves the surface</span>
-        </div>
-      )}
-      {kind === 'opening' && (
-        <p className="hint">Black, at the surroundings temperature{surroundings === undefined ? ' — set one below' : ''}.</p>
-      )}
+        )}
+        {kind === 'heatFlux' && props?.heatFlux !== undefined && (
+          <>
+            <CheckedField label="heat flux (W/m²)" value={props.heatFlux}
+              title="Net radiative flux imposed on the surface, W/m²; > 0 when heat leaves the surface"
+              onCommit={(v) => v !== undefined && edit((d) => setCondition(d, current, { kind: 'heatFlux', heatFlux: v }))} />
+            <span className="hint">&gt; 0: heat leaves the surface; temperature solved</span>
+          </>
+        )}
+        {kind === 'adiabatic' && <span className="hint">Net heat zero, temperature solved; the emissivity has no effect on it.</span>}
+        {kind === 'opening' && (
+          <span className="hint">Black, at the surroundings temperature{surroundings === undefined ? ' — set one below' : ''}.</span>
+        )}
+      </div>
     </section>
   );
 }
