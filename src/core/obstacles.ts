@@ -31,6 +31,8 @@ export interface ObstacleIndex {
   bodyRMin: Float64Array;
   /** For convex bodies: radius of the largest disc about the centre inside the body (0 otherwise). */
   bodyRIn: Float64Array;
+  /** Body index of each polygon, -1 for the enclosure. */
+  bodyOfPolygon: Int32Array;
   /** Flatbush over body bounding boxes when there are many bodies; null means test them all. */
   bodyTree: Flatbush | null;
   /** Wall edges that can block (not on the enclosure's convex hull), and their index. */
@@ -53,6 +55,8 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   }
 
   const B = bodies.length;
+  const bodyOfPolygon = new Int32Array(P).fill(-1);
+  bodies.forEach((p, b) => { bodyOfPolygon[p] = b; });
   const bodyFirstEdge = new Int32Array(B), bodyEdgeEnd = new Int32Array(B);
   const bodyCx = new Float64Array(B), bodyCy = new Float64Array(B), bodyR = new Float64Array(B);
   const bodyConvex = new Uint8Array(B);
@@ -116,7 +120,7 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     }
     wallTree.finish();
   }
-  return { bodyCount: B, bodyFirstEdge, bodyEdgeEnd, bodyCx, bodyCy, bodyR, bodyConvex, walkEdge, walkAngle, bodyRMin, bodyRIn, bodyTree, wallEdges, wallTree };
+  return { bodyCount: B, bodyFirstEdge, bodyEdgeEnd, bodyCx, bodyCy, bodyR, bodyConvex, walkEdge, walkAngle, bodyRMin, bodyRIn, bodyOfPolygon, bodyTree, wallEdges, wallTree };
 }
 
 /**

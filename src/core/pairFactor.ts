@@ -83,6 +83,8 @@ export class PairIntegrator {
   private readonly visitEdge: (id: number) => boolean;
   private readonly visitBody: (id: number) => boolean;
   private pairI = 0;
+  private bodyI = -1;
+  private bodyJ = -1;
   private blocked = false;
   private pairJ = 0;
 
@@ -154,6 +156,8 @@ export class PairIntegrator {
     this.wholeCount = 0;
     this.pairI = i;
     this.pairJ = j;
+    this.bodyI = this.obstacles.bodyOfPolygon[E.polygon[i]];
+    this.bodyJ = this.obstacles.bodyOfPolygon[E.polygon[j]];
     const cut = this.gatherObstacles(
       Math.min(a0x, a1x, b0x, b1x), Math.min(a0y, a1y, b0y, b1y),
       Math.max(a0x, a1x, b0x, b1x), Math.max(a0y, a1y, b0y, b1y),
@@ -220,6 +224,9 @@ export class PairIntegrator {
    */
   private clipBody(b: number): void {
     const ob = this.obstacles;
+    // A convex body lies wholly behind each of its own edges, so it cannot block a
+    // view from or to one of them.
+    if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return;
     const cx = ob.bodyCx[b], cy = ob.bodyCy[b], r = ob.bodyR[b];
     // A relative margin of 1e-9 keeps these float tests on the safe side: a body kept
     // in vain costs only time, and "wholly inside" must be certain.
