@@ -19,6 +19,8 @@ function time(scene: SceneInput, repeats: number): { min: number; median: number
   const n = edges.count;
   const matrix = new Float64Array(n * n);
   const times: number[] = [];
+  // Untimed runs first, so the engine has compiled the hot loop (as in a long drag).
+  for (let r = 0; r < Math.min(repeats, 10); r++) edgeViewFactors(edges, { edgeMatrix: matrix });
   for (let r = 0; r < repeats; r++) {
     const t0 = performance.now();
     edgeViewFactors(edges, { edgeMatrix: matrix });
