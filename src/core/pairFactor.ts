@@ -1,6 +1,8 @@
 import type { EdgeSet } from './edges';
 import type { ObstacleIndex } from './obstacles';
 import { orient } from './orient';
+import { cornerMayBeTangent, distanceChange, gap, silhouetteFromSegment } from './pairGeometry';
+import { cornerWindow, grow, sortOrderByKey, sortPrefix, sortRanges } from './scratch';
 
 /** Convex bodies with more edges than this are clipped through angular windows (measured by `npm run bench`). */
 const WINDOW_MIN_EDGES = 8;
@@ -661,131 +663,5 @@ export class PairIntegrator {
     this.loPt = new Int32Array(size);
     this.hiPt = new Int32Array(size);
     this.order = new Int32Array(size);
-  }
-}
-
-/**
- * 1/2 of the integral over [pa, pb] of (sin b_hi - sin b_lo), the visible direction
- * range bounded by fixed points lo and hi: the integral of sin b towards a fixed
- * point v is -(|v - pb| - |v - pa|).
- */
-function gap(X: Float64Array, Y: Float64Array, lo: number, hi: number,
-  pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
-  return 0.5 * (distanceChange(X[lo], Y[lo], pax, pay, pbx, pby, dx, dy) - distanceChange(X[hi], Y[hi], pax, pay, pbx, pby, dx, dy));
-}
-
-/**
- * |v - pb| - |v - pa| without cancellation, given d = pb - pa computed directly:
- * (|v-pb|^2 - |v-pa|^2) / (|v-pb| + |v-pa|) = -d . ((v-pa) + (v-pb)) / (|v-pa| + |v-pb|).
- * Keeps the factor from a very short edge (or piece) accurate to rounding.
- */
-function distanceChange(vx: number, vy: number, pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
-  const ux = vx - pax, uy = vy - pay, wx = vx - pbx, wy = vy - pby;
-  const sum = Math.sqrt(ux * ux + uy * uy) + Math.sqrt(wx * wx + wy * wy);
-  return sum === 0 ? 0 : -(dx * (ux + wx) + dy * (uy + wy)) / sum;
-}
-
-/**
- * Can corner w (between neighbours u and v) be a silhouette seen from some point p
- * of segment a0-a1, i.e. both neighbours on one side of the line p-w? Conservative:
- * may say yes when the answer is no (costs an extra split, never accuracy).
- */
-function silhouetteFromSegment(a0x: number, a0y: number, a1x: number, a1y: number,
-  wx: number, wy: number, ux: number, uy: number, vx: number, vy: number): boolean {
-  const f0 = orient(a0x, a0y, wx, wy, ux, uy);
-  const g0 = orient(a0x, a0y, wx, wy, vx, vy);
-  const f1 = orient(a1x, a1y, wx, wy, ux, uy);
-  const g1 = orient(a1x, a1y, wx, wy, vx, vy);
-  // f and g are affine along the segment. The corner is surely no silhouette only when
-  // f g < 0 at both ends and neither changes sign; with both changing sign, f g turns
-  // positive between the roots. Any zero at an end counts as a possible silhouette.
-  return !(f0 * g0 < 0 && f1 * g1 < 0 && f0 * f1 > 0);
-}
-
-/** First walk position m in [0, n) whose angle A[first+m] <= value (angles fall with m); n if none. */
-function firstAtOrBelow(A: Float64Array, first: number, n: number, value: number): number {
-  let lo = 0, hi = n;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (A[first + mid] <= value) hi = mid;
-    else lo = mid + 1;
-  }
-  return lo;
-}
-
-/** Append to wl/wh the walk positions whose angle lies in [a, b]; returns the new count. */
-function cornerWindow(A: Float64Array, first: number, n: number, a: number, b: number,
-  wl: Int32Array, wh: Int32Array, count: number): number {
-  const from = firstAtOrBelow(A, first, n, b);
-  let lo = from, hi = n; // first position below a
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (A[first + mid] < a) hi = mid;
-    else lo = mid + 1;
-  }
-  if (from < lo) { wl[count] = from; wh[count] = lo - 1; return count + 1; }
-  return count;
-}
-
-function sortRanges(lo: Int32Array, hi: Int32Array, n: number): void {
-  for (let k = 1; k < n; k++) {
-    const a = lo[k], b = hi[k];
-    let m = k - 1;
-    while (m >= 0 && lo[m] > a) { lo[m + 1] = lo[m]; hi[m + 1] = hi[m]; m--; }
-    lo[m + 1] = a; hi[m + 1] = b;
-  }
-}
-
-/** From the facing codes of the two edges at a corner (see PairIntegrator.facing). */
-function cornerMayBeTangent(before: number, after: number): boolean {
-  if ((before | after) & 4) return true;
-  if ((before & 1) !== (after & 1) || (before & 2) !== (after & 2)) return true;
-  // Same facing at both ends: a tangent between only if both edges change facing along i'.
-  return (before & 1) !== ((before >> 1) & 1) && (after & 1) !== ((after >> 1) & 1);
-}
-
-function grow(a: Float64Array<ArrayBuffer>): Float64Array<ArrayBuffer> {
-  const b = new Float64Array(a.length * 2);
-  b.set(a);
-  return b;
-}
-
-/** In-place ascending sort of a[0..n) (insertion sort for short runs, else heap sort). */
-function sortPrefix(a: Float64Array, n: number): void {
-  if (n < 24) {
-    for (let k = 1; k < n; k++) {
-      const v = a[k];
-      let m = k - 1;
-      while (m >= 0 && a[m] > v) { a[m + 1] = a[m]; m--; }
-      a[m + 1] = v;
-    }
-    return;
-  }
-  for (let k = (n >> 1) - 1; k >= 0; k--) siftDown(a, k, n);
-  for (let end = n - 1; end > 0; end--) {
-    const t = a[0]; a[0] = a[end]; a[end] = t;
-    siftDown(a, 0, end);
-  }
-}
-
-function siftDown(a: Float64Array, start: number, n: number): void {
-  let root = start;
-  for (;;) {
-    let child = 2 * root + 1;
-    if (child >= n) return;
-    if (child + 1 < n && a[child + 1] > a[child]) child++;
-    if (a[root] >= a[child]) return;
-    const t = a[root]; a[root] = a[child]; a[child] = t;
-    root = child;
-  }
-}
-
-function sortOrderByKey(order: Int32Array, key: Float64Array, n: number): void {
-  for (let k = 1; k < n; k++) {
-    const o = order[k];
-    const v = key[o];
-    let m = k - 1;
-    while (m >= 0 && key[order[m]] > v) { order[m + 1] = order[m]; m--; }
-    order[m + 1] = o;
   }
 }

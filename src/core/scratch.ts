@@ -1,0 +1,85 @@
+// Typed-array helpers of the pair integral: in-place sorts and searches that
+// allocate nothing (the hot loop runs them once per edge pair).
+
+/** First walk position m in [0, n) whose angle A[first+m] <= value (angles fall with m); n if none. */
+export function firstAtOrBelow(A: Float64Array, first: number, n: number, value: number): number {
+  let lo = 0, hi = n;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (A[first + mid] <= value) hi = mid;
+    else lo = mid + 1;
+  }
+  return lo;
+}
+
+/** Append to wl/wh the walk positions whose angle lies in [a, b]; returns the new count. */
+export function cornerWindow(A: Float64Array, first: number, n: number, a: number, b: number,
+  wl: Int32Array, wh: Int32Array, count: number): number {
+  const from = firstAtOrBelow(A, first, n, b);
+  let lo = from, hi = n; // first position below a
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (A[first + mid] < a) hi = mid;
+    else lo = mid + 1;
+  }
+  if (from < lo) { wl[count] = from; wh[count] = lo - 1; return count + 1; }
+  return count;
+}
+
+/** Sort ranges [lo[k], hi[k]], k < n, by their start, in place (the lists are short). */
+export function sortRanges(lo: Int32Array, hi: Int32Array, n: number): void {
+  for (let k = 1; k < n; k++) {
+    const a = lo[k], b = hi[k];
+    let m = k - 1;
+    while (m >= 0 && lo[m] > a) { lo[m + 1] = lo[m]; hi[m + 1] = hi[m]; m--; }
+    lo[m + 1] = a; hi[m + 1] = b;
+  }
+}
+
+/** A typed array of twice the length holding a's values (scratch buffers grow rarely, never per pair). */
+export function grow(a: Float64Array<ArrayBuffer>): Float64Array<ArrayBuffer> {
+  const b = new Float64Array(a.length * 2);
+  b.set(a);
+  return b;
+}
+
+/** In-place ascending sort of a[0..n) (insertion sort for short runs, else heap sort). */
+export function sortPrefix(a: Float64Array, n: number): void {
+  if (n < 24) {
+    for (let k = 1; k < n; k++) {
+      const v = a[k];
+      let m = k - 1;
+      while (m >= 0 && a[m] > v) { a[m + 1] = a[m]; m--; }
+      a[m + 1] = v;
+    }
+    return;
+  }
+  for (let k = (n >> 1) - 1; k >= 0; k--) siftDown(a, k, n);
+  for (let end = n - 1; end > 0; end--) {
+    const t = a[0]; a[0] = a[end]; a[end] = t;
+    siftDown(a, 0, end);
+  }
+}
+
+function siftDown(a: Float64Array, start: number, n: number): void {
+  let root = start;
+  for (;;) {
+    let child = 2 * root + 1;
+    if (child >= n) return;
+    if (child + 1 < n && a[child + 1] > a[child]) child++;
+    if (a[root] >= a[child]) return;
+    const t = a[root]; a[root] = a[child]; a[child] = t;
+    root = child;
+  }
+}
+
+/** Sort the indices order[0..n) by key[order[k]], ascending, in place (insertion sort: n is the number of chains). */
+export function sortOrderByKey(order: Int32Array, key: Float64Array, n: number): void {
+  for (let k = 1; k < n; k++) {
+    const o = order[k];
+    const v = key[o];
+    let m = k - 1;
+    while (m >= 0 && key[order[m]] > v) { order[m + 1] = order[m]; m--; }
+    order[m + 1] = o;
+  }
+}

@@ -1,0 +1,35 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { sortPrefix, sortOrderByKey } from '../../src/core/scratch';
+import { distanceChange } from '../../src/core/pairGeometry';
+
+describe('pair-integral helpers', () => {
+  it('sortPrefix sorts the prefix like Array.prototype.sort and leaves the rest', () => {
+    fc.assert(fc.property(fc.array(fc.double({ noNaN: true }), { maxLength: 80 }), fc.nat(80), (values, cut) => {
+      const n = Math.min(cut, values.length);
+      const a = Float64Array.from(values);
+      sortPrefix(a, n);
+      expect(Array.from(a.subarray(0, n))).toEqual(values.slice(0, n).sort((x, y) => x - y));
+      expect(Array.from(a.subarray(n))).toEqual(values.slice(n));
+    }));
+  });
+
+  it('sortOrderByKey orders indices by their keys', () => {
+    fc.assert(fc.property(fc.array(fc.double({ noNaN: true }), { maxLength: 30 }), (keys) => {
+      const key = Float64Array.from(keys);
+      const order = Int32Array.from(keys.map((_, k) => k));
+      sortOrderByKey(order, key, keys.length);
+      for (let k = 1; k < keys.length; k++) expect(key[order[k - 1]]).toBeLessThanOrEqual(key[order[k]]);
+    }));
+  });
+
+  it('distanceChange equals |v - pb| - |v - pa| and keeps its digits for a tiny step', () => {
+    // Plain difference for a large step: both forms agree to rounding.
+    const plain = Math.hypot(3 - 1, 4 - 0) - Math.hypot(3 - 0, 4 - 0);
+    expect(distanceChange(3, 4, 0, 0, 1, 0, 1, 0)).toBeCloseTo(plain, 14);
+    // A step of 1e-12 along x from the origin towards v = (3, 4): the change is -0.6e-12
+    // (the derivative of |v - p| is -(v - p)/|v - p| . d), exact to first order.
+    const tiny = distanceChange(3, 4, 0, 0, 1e-12, 0, 1e-12, 0);
+    expect(Math.abs(tiny / -0.6e-12 - 1)).toBeLessThan(1e-11);
+  });
+});
