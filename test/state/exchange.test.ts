@@ -134,6 +134,19 @@ describe('exchange results in the store', () => {
     close(heatOf(solved(store), 'plate'), 0.5 * SIGMA * (400 ** 4 - 300 ** 4) * 2.2);
   });
 
+  it('an imposed flux the surface cannot take up gives the solver message naming it', async () => {
+    const store = live(squares);
+    await flush();
+    // Taking up 1e7 W/m^2 from a 500 K enclosure would need a temperature below absolute zero.
+    store.getState().edit((d) => setCondition(d, 'inner', { kind: 'heatFlux', heatFlux: -1e7 }));
+    const ex = store.getState().exchange;
+    expect(ex.kind).toBe('error');
+    if (ex.kind === 'error') {
+      expect(ex.surface).toBe('inner');
+      expect(ex.message).toMatch(/no physical answer.*below absolute zero/);
+    }
+  });
+
   it('while geometry is being edited, results are those of the shown view factors, marked stale, with their own properties', async () => {
     const store = live(squares);
     await flush();

@@ -1,6 +1,6 @@
 // @vitest-environment jsdom
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, configure, screen, waitFor, within } from '@testing-library/react';
+import { act, cleanup, configure, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { renderApp } from './renderApp';
 import { STEFAN_BOLTZMANN as SIGMA } from '../../src/core/exchange';
@@ -89,6 +89,13 @@ describe('heat-exchange tab', () => {
     expect(Number(netHeatCell('tube 1').getAttribute('data-value'))).toBe(before);
     await user.click(screen.getByRole('radio', { name: 'K' }));
     expect((screen.getByLabelText('temperature (K)') as HTMLInputElement).value).toBe('900');
+  });
+
+  it('follows the canvas selection: picking an edge edits its surface', async () => {
+    const { store } = await openTab();
+    act(() => store.getState().setSelection([{ type: 'edge', shape: 2, index: 3 }]));
+    await waitFor(() => expect((screen.getByLabelText('surface') as HTMLSelectElement).value).toBe('tube 2'));
+    expect(rowOf('tube 2').className).toBe('on');
   });
 
   it('refuses out-of-range values with a message and leaves the document alone', async () => {
