@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createAppStore, type AppStore } from '../../src/state/store';
 import { startLiveResults, type JobRunner } from '../../src/state/liveResults';
-import { startLiveExchange } from '../../src/state/exchangeLive';
+import { LIVE_SOLVE_LIMIT, startLiveExchange } from '../../src/state/exchangeLive';
 import { documentApi } from '../../src/state/documentApi';
 import { setVertex } from '../../src/state/edits/shapeEdits';
 import { setCondition, setEmissivity, setSettings, setSurfaceProps } from '../../src/state/exchangeEdits';
@@ -163,6 +163,31 @@ describe('exchange results in the store', () => {
     expect(after.stale).toBe(false);
     // The inner body is now a longer (856 mm round) convex quadrilateral, so it gives off more.
     expect(heatOf(after, 'inner')).toBeGreaterThan(heatOf(ex, 'inner'));
+  });
+
+  it('with more surfaces than a frame can solve, a drag waits for its end (stale meanwhile), then solves', async () => {
+    // A regular 320-gon enclosure, every edge its own surface, one of them hot.
+    const n = LIVE_SOLVE_LIMIT + 20;
+    const points = Array.from({ length: n }, (_, k): [number, number] => [Math.cos((2 * Math.PI * k) / n), Math.sin((2 * Math.PI * k) / n)]);
+    const names = points.map((_, k) => `wall ${k}`);
+    const ring: SketchFile = { version: 1, units: 'm', shapes: [{ kind: 'enclosure', points, surface: names }], surfaces: { 'wall 0': { temperature: 800 } } };
+    const store = live(ring);
+    await flush();
+    const first = solved(store);
+    expect(first.names).toHaveLength(n);
+    store.getState().beginGesture();
+    store.getState().updateGesture(setVertex(store.getState().doc, 0, 5, [0.9, 0.1]));
+    await flush(); // the view factors of the dragged shape arrive during the gesture
+    expect(store.getState().viewFactors.shown?.doc).toBe(store.getState().doc);
+    const during = solved(store);
+    expect(during.stale).toBe(true);
+    expect(during.result).toBe(first.result); // not solved again mid-drag
+    store.getState().endGesture();
+    const after = solved(store);
+    expect(after.stale).toBe(false);
+    expect(after.result).not.toBe(first.result);
+    // A closed enclosure of reradiating walls around one wall at 800 K settles at 800 K throughout (equilibrium, common practice).
+    for (const T of after.result.temperature) expect(Math.abs(T - 800)).toBeLessThanOrEqual(1e-9 * 800);
   });
 
   it('agree with what the command line prints for the same file (the demo oven)', async () => {
