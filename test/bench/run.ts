@@ -7,6 +7,7 @@ import type { SceneInput } from '../../src/core/scene';
 import { tubeScene } from './scenes';
 import { demoSketch } from '../../src/state/demo';
 import { restore, toScene } from '../../src/document';
+import { DenseLuSolver } from '../../src/core/linearSolve';
 
 function demoScene(): SceneInput {
   const r = restore(demoSketch);
@@ -68,3 +69,40 @@ for (const c of cases) {
 }
 console.log(`peak resident memory ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (the 1600-edge matrix is ${((1600 * 1600 * 8) / 1e6).toFixed(1)} MB)`);
 for (const v of verdicts) console.log(v);
+
+// Other targets: reading a 1600-edge sketch file (validation included) and the
+// dense solve behind heat exchange at 2000 surfaces ("well under a second").
+{
+  const ring = (cx: number, cy: number, r: number, n: number) =>
+    Array.from({ length: n }, (_, k) => [cx + r * Math.cos((2 * Math.PI * k) / n), cy + r * Math.sin((2 * Math.PI * k) / n)]);
+  const shapes = [{ kind: 'enclosure', points: ring(0, 0, 100, 400), surface: 'shell' }];
+  for (let t = 0; t < 20; t++) shapes.push({ kind: 'solid', points: ring(-60 + (t % 5) * 30, -45 + Math.floor(t / 5) * 30, 10, 60), surface: `tube ${t + 1}` });
+  const text = JSON.stringify({ version: 1, units: 'mm', shapes });
+  const reads: number[] = [];
+  for (let r = 0; r < (quick ? 5 : 30); r++) {
+    const t0 = performance.now();
+    if (!restore(text).ok) throw new Error('bench sketch refused');
+    reads.push(performance.now() - t0);
+  }
+  reads.sort((a, b) => a - b);
+  console.log(`read and check a 1600-edge sketch file: min ${reads[0].toFixed(1)} ms, median ${reads[reads.length >> 1].toFixed(1)} ms`);
+
+  const N = 2000;
+  const solver = new DenseLuSolver(N);
+  let s = 12345;
+  const rnd = () => { s = (Math.imul(s, 1103515245) + 12345) >>> 0; return s / 4294967296 - 0.5; };
+  const a = new Float64Array(N * N).map(() => rnd() / N);
+  for (let i = 0; i < N; i++) a[i * N + i] += 1; // diagonally dominant, like I - (1 - e) F
+  const x = new Float64Array(N).fill(1);
+  const solves: number[] = [];
+  for (let r = 0; r < (quick ? 1 : 5); r++) {
+    solver.matrix.set(a);
+    const t0 = performance.now();
+    solver.factor();
+    solver.solve(x);
+    solves.push(performance.now() - t0);
+  }
+  solves.sort((p, q) => p - q);
+  const med = solves[solves.length >> 1];
+  console.log(`dense solve, ${N} surfaces (${solver.accelerated ? 'SIMD kernel' : 'plain JavaScript'}): min ${solves[0].toFixed(0)} ms, median ${med.toFixed(0)} ms (target well under 1000 ms): ${med < 1000 ? 'met' : 'NOT met'}`);
+}

@@ -152,16 +152,11 @@ describe('checkSketchGeometry', () => {
     }), { numRuns: 300 });
   });
 
-  it('checks a 1600-edge sketch (enclosure and 20 tubes) in well under 100 ms', () => {
+  it('finds nothing wrong in a valid 1600-edge sketch (enclosure and 20 tubes; timed by npm run bench)', () => {
     const polys: PolygonInput[] = [circle('enclosure', 0, 0, 100, 400)];
     for (let t = 0; t < 20; t++) polys.push(circle('solid', -60 + (t % 5) * 30, -45 + Math.floor(t / 5) * 30, 10, 60));
     expect(polys.reduce((n, p) => n + p.points.length / 2, 0)).toBe(1600);
-    checkSketchGeometry(polys); // warm up the JIT
-    const t0 = performance.now();
-    const f = checkSketchGeometry(polys);
-    const ms = performance.now() - t0;
-    expect(f).toEqual([]);
-    expect(ms).toBeLessThan(100);
+    expect(checkSketchGeometry(polys)).toEqual([]);
   });
 });
 

@@ -105,16 +105,12 @@ describe('restore on random documents', () => {
     }), { numRuns: 200 });
   });
 
-  it('validates a 1600-edge sketch in well under 100 ms', () => {
+  it('accepts a 1600-edge sketch (its reading time is measured by npm run bench)', () => {
     const ring = (cx: number, cy: number, r: number, n: number) => Array.from({ length: n }, (_, k) => [cx + r * Math.cos((2 * Math.PI * k) / n), cy + r * Math.sin((2 * Math.PI * k) / n)]);
     const shapes = [{ kind: 'enclosure', points: ring(0, 0, 100, 400), surface: 'shell' }];
     for (let t = 0; t < 20; t++) shapes.push({ kind: 'solid', points: ring(-60 + (t % 5) * 30, -45 + Math.floor(t / 5) * 30, 10, 60), surface: `tube ${t + 1}` });
     const text = JSON.stringify({ version: 1, units: 'mm', shapes });
-    restore(text); // warm up
-    const t0 = performance.now();
     const r = restore(text);
-    const ms = performance.now() - t0;
     expect(r.ok).toBe(true);
-    expect(ms).toBeLessThan(100);
   });
 });
