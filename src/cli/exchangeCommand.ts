@@ -6,10 +6,11 @@
 // A surface without properties gets emissivity 0.9 and is adiabatic
 // (reradiating), see src/core/exchangeSetup.ts; the sketch-to-solver mapping
 // is shared with the app (src/document/exchangeInput.ts).
-import { ExchangeError, emissivePower, solveExchange, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
+import { ExchangeError, solveExchange, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
 import type { ViewFactorResult } from '../core/scene';
 import { computeViewFactors } from '../core/viewFactors';
-import { toCsv, toScene, type CsvCell, type Sketch } from '../document';
+import { toScene, type Sketch } from '../document';
+import { CONDITION_LABEL, exchangeCsv, seesSurroundings } from '../document/exchangeCsv';
 import { sketchExchangeInput } from '../document/exchangeInput';
 import type { CliIO } from './io';
 import { readSketchFile } from './readSketch';
@@ -96,7 +97,7 @@ export function runExchange(args: string[], io: CliIO): number {
   }
   const report: Report = { file, sketch, names: surfaceNames, factors, result, conditions };
   if (format === 'json') io.out(`${JSON.stringify(exchangeJson(report))}\n`);
-  else if (format === 'csv') io.out(exchangeCsv(report));
+  else if (format === 'csv') io.out(exchangeCsv({ units: sketch.units, names: surfaceNames, surfaceLength: factors.surfaceLength, result, conditions }));
   else io.out(exchangeTable(report));
   return 0;
 }
@@ -110,8 +111,6 @@ interface Report {
   conditions: ReadonlyArray<SurfaceCondition>;
 }
 
-/** True when some surface sees the surroundings (an open sketch). */
-const seesSurroundings = (r: ExchangeResult) => r.surroundingsViewFactor.some((f) => f > 0);
 
 /**
  * The --json object. Per surface: length (file units), emissivity, temperature
@@ -147,48 +146,6 @@ export function exchangeJson({ names, factors, result: r }: Report) {
     };
   }
   return json;
-}
-
-const CONDITION_LABEL: Record<SurfaceCondition['kind'], string> = {
-  temperature: 'temperature',
-  heatFlux: 'heat flux',
-  adiabatic: 'adiabatic',
-  opening: 'opening',
-};
-
-/** One row per surface (and one for the surroundings of an open sketch), units in the header. */
-export function exchangeCsv({ sketch, names, factors, result: r, conditions }: Report): string {
-  const withDepth = r.depth !== undefined;
-  const header: CsvCell[] = [
-    'surface',
-    `length (${sketch.units})`,
-    'emissivity',
-    'condition',
-    'temperature (K)',
-    'net heat (W/m)',
-    'net flux (W/m^2)',
-    'radiosity (W/m^2)',
-    ...(withDepth ? [`net heat total (W) over ${r.depth} m`] : []),
-  ];
-  const rows: CsvCell[][] = [header];
-  names.forEach((name, i) => {
-    rows.push([
-      name,
-      factors.surfaceLength[i],
-      r.emissivity[i],
-      CONDITION_LABEL[conditions[i].kind],
-      r.temperature[i],
-      r.netHeat[i],
-      r.netFlux[i],
-      r.radiosity[i],
-      ...(withDepth ? [r.netHeatTotal![i]] : []),
-    ]);
-  });
-  if (seesSurroundings(r)) {
-    const Ts = r.surroundingsTemperature!;
-    rows.push(['(surroundings)', '', 1, 'surroundings', Ts, r.surroundingsNetHeat, '', emissivePower(Ts), ...(withDepth ? [r.surroundingsNetHeatTotal!] : [])]);
-  }
-  return toCsv(rows);
 }
 
 function exchangeTable({ file, sketch, names, factors, result: r, conditions }: Report): string {

@@ -11,6 +11,7 @@ import type { SketchFile } from '../../src/state/sketchFile';
 import { viewFactorApi } from '../../src/worker/api';
 import { main } from '../../src/cli/main';
 import { STEFAN_BOLTZMANN as SIGMA } from '../../src/core/exchange';
+import { solvedCsv } from '../../src/state/exchangeExport';
 
 // Heat exchange in the app store: derived from the shown view factors and the
 // document, live, never saved. The chain (exact view factors, dense solve) is
@@ -206,6 +207,21 @@ describe('exchange results in the store', () => {
       expect(ex.result.temperature[i]).toBe(s.temperature);
       expect(ex.result.netFlux[i]).toBe(s.netFlux);
     });
+  });
+});
+
+describe('exchange export', () => {
+  it('the app\'s net heat CSV is exactly what the command line prints with exchange --csv', async () => {
+    const store = live(demoSketch);
+    await flush();
+    let out = '';
+    const code = main(['exchange', 'demo.json', '--csv'], {
+      out: (t) => void (out += t), err: () => {}, readFile: () => JSON.stringify(demoSketch),
+    });
+    expect(code).toBe(0);
+    const csv = solvedCsv(solved(store));
+    expect(csv).toBe(out);
+    expect(csv.split('\r\n')[0]).toContain('net heat (W/m)');
   });
 });
 

@@ -1,6 +1,8 @@
 import { useId } from 'react';
 import { useApp } from '../AppContext';
 import { selectExchange } from '../../state/exchangeSelectors';
+import { solvedCsv } from '../../state/exchangeExport';
+import { downloadText } from '../chrome/download';
 import { SAFETY_TEXT } from '../chrome/SafetyNote';
 import { fmtResidual } from '../matrix/format';
 import { ExchangeStatus } from './ExchangeStatus';
@@ -46,6 +48,8 @@ export function ExchangeResults() {
             )}
             {ex.result.depth === undefined && <span>Set a depth below to see totals in W.</span>}
           </div>
+          <button type="button" title="Download the net heat per surface as CSV (same as the command line's exchange --csv)"
+            onClick={() => downloadText('net-heat.csv', solvedCsv(ex), 'text/csv')}>Download net heat CSV</button>
           <NetHeatChart ex={ex} />
         </>
       )}
