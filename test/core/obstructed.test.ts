@@ -29,6 +29,13 @@ describe('blocked views against the ray-cast reference', () => {
     const r = expectMatchesReference(polys);
     expect(f(r, 0, 2)).toBeGreaterThan(0.44);
     expect(f(r, 0, 2)).toBeLessThan(0.46);
+    // The plain rule, evaluated by hand: each crossed string wraps one corner of the block,
+    // (0,0)-(2.25,0.75)-(4,2), of length sqrt(2.25^2+0.75^2) + sqrt(1.75^2+1.25^2); the
+    // uncrossed strings are the side walls (2 each). F = (2 crossed - 2 uncrossed) / (2 * 4).
+    const crossed = Math.hypot(2.25, 0.75) + Math.hypot(1.75, 1.25);
+    const plainRule = (2 * crossed - 2 * 2) / (2 * 4);
+    expect(plainRule).toBeCloseTo(0.6306, 4);
+    expect(plainRule - f(r, 0, 2)).toBeGreaterThan(0.15); // the block splits the view in two channels
   });
 
   it('a row of tubes between a floor and a roof (several channels at once)', () => {
