@@ -14,8 +14,10 @@ import { CONDITION_LABEL, exchangeCsv, seesSurroundings } from '../document/exch
 import { sketchExchangeInput } from '../document/exchangeInput';
 import type { CliIO } from './io';
 import { readSketchFile } from './readSketch';
+import { displayName, usageError as reportUsage } from './terminalText';
 
 export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --csv] [--depth METRES]';
+const usageError = (io: CliIO, problem: string) => reportUsage(io, 'exchange', EXCHANGE_USAGE, problem);
 
 const CAUTION =
   'Gray-diffuse radiation only: no convection or absorbing gas unless modelled. Results support, not replace, local codes and licensed engineering practice.';
@@ -37,8 +39,6 @@ emissivity 0.9 and is adiabatic. Open sketches and openings need
 settings.surroundingsTemperature (K). FILE '-' reads standard input.
 ${CAUTION}
 `;
-
-/** Most warnings printed. */
 
 type Format = 'table' | 'json' | 'csv';
 
@@ -110,7 +110,6 @@ interface Report {
   result: ExchangeResult;
   conditions: ReadonlyArray<SurfaceCondition>;
 }
-
 
 /**
  * The --json object. Per surface: length (file units), emissivity, temperature
@@ -210,16 +209,4 @@ function columns(rows: string[][]): string[] {
   const widths: number[] = [];
   for (const row of rows) row.forEach((cell, k) => (widths[k] = Math.max(widths[k] ?? 0, cell.length)));
   return rows.map((row) => `  ${row.map((cell, k) => cell + ' '.repeat(widths[k] - cell.length)).join('  ')}`.trimEnd());
-}
-
-/** Names as plain text for a terminal: control characters shown as '?', long names cut. */
-function displayName(name: string, longest = 24): string {
-  // eslint-disable-next-line no-control-regex
-  const clean = name.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
-  return clean.length > longest ? `${clean.slice(0, longest - 1)}…` : clean;
-}
-
-function usageError(io: CliIO, problem: string): number {
-  io.err(`exchange: ${problem}\n${EXCHANGE_USAGE}\n`);
-  return 2;
 }

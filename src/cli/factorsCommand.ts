@@ -5,8 +5,10 @@ import type { ViewFactorResult } from '../core/scene';
 import { matrixCsv, toScene, type Sketch } from '../document';
 import type { CliIO } from './io';
 import { readSketchFile } from './readSketch';
+import { displayName, usageError as reportUsage } from './terminalText';
 
 export const FACTORS_USAGE = 'usage: npm run cli -- factors FILE [--json | --csv]';
+const usageError = (io: CliIO, problem: string) => reportUsage(io, 'factors', FACTORS_USAGE, problem);
 
 const FACTORS_HELP = `${FACTORS_USAGE}
 
@@ -18,8 +20,6 @@ column = to, surfaces in order of first appearance along the edges).
 Lengths are in the file's units; view factors are dimensionless.
 FILE '-' reads standard input.
 `;
-
-/** Most warnings printed (errors are already capped by restore). */
 
 type Format = 'table' | 'json' | 'csv';
 
@@ -112,19 +112,7 @@ function formatLength(x: number): string {
   return String(Number(x.toPrecision(8)));
 }
 
-/** Names as plain text for a terminal: control characters (escape sequences) shown as '?', long names cut. */
-function displayName(name: string, longest = 24): string {
-  // eslint-disable-next-line no-control-regex
-  const clean = name.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
-  return clean.length > longest ? `${clean.slice(0, longest - 1)}…` : clean;
-}
-
 function allFinite(r: ViewFactorResult): boolean {
   const arrays = [r.F, r.surfaceLength, r.rowSumResidual];
   return Number.isFinite(r.reciprocityResidual) && arrays.every((a) => a.every(Number.isFinite));
-}
-
-function usageError(io: CliIO, problem: string): number {
-  io.err(`factors: ${problem}\n${FACTORS_USAGE}\n`);
-  return 2;
 }
