@@ -82,6 +82,7 @@ export class PairIntegrator {
   private readonly ey = new Float64Array(4);
   private readonly sideOn = new Uint8Array(4);
   private readonly sideLen = new Float64Array(4);
+  private readonly sideInvLen = new Float64Array(4);
   private readonly visitEdge: (id: number) => boolean;
   private readonly visitBody: (id: number) => boolean;
   private pairI = 0;
@@ -183,6 +184,7 @@ export class PairIntegrator {
     this.ey[k] = y1;
     this.sideOn[k] = x0 === x1 && y0 === y1 ? 0 : 1; // a side of zero length bounds nothing
     this.sideLen[k] = Math.sqrt((x1 - x0) ** 2 + (y1 - y0) ** 2);
+    this.sideInvLen[k] = this.sideLen[k] > 0 ? 1 / this.sideLen[k] : 0;
     this.sideTol[k] = 1e-14 * this.sideLen[k] * this.extent;
   }
 
@@ -234,11 +236,12 @@ export class PairIntegrator {
     // in vain costs only time, and "wholly inside" must be certain.
     const margin = r * 1e-9 + 1e-12 * (Math.abs(cx) + Math.abs(cy));
     let crossing = 0; // sides that cut the circle; the body is surely inside the others
-    for (let k = 0; k < 4; k++) {
+    for (let step = 0; step < 4; step++) {
+      const k = SIDE_ORDER[step]; // the side strings reject most bodies, so they go first
       if (!this.sideOn[k]) continue;
       const dx = this.ex[k] - this.sx[k], dy = this.ey[k] - this.sy[k];
       // Signed distance of the centre from the side, positive inside H.
-      const dist = (dx * (cy - this.sy[k]) - dy * (cx - this.sx[k])) / this.sideLen[k];
+      const dist = (dx * (cy - this.sy[k]) - dy * (cx - this.sx[k])) * this.sideInvLen[k];
       this.centreDist[k] = dist;
       if (dist < -r - margin) return;
       if (dist < r + margin) crossing |= 1 << k;
