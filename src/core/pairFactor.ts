@@ -85,11 +85,12 @@ export class PairIntegrator {
   private readonly sideInvLen = new Float64Array(4);
   private readonly visitEdge: (id: number) => boolean;
   private readonly visitBody: (id: number) => boolean;
+  // The pair being integrated, the bodies owning its edges (-1: a wall), and whether one body blocks it all.
   private pairI = 0;
+  private pairJ = 0;
   private bodyI = -1;
   private bodyJ = -1;
   private blocked = false;
-  private pairJ = 0;
 
   constructor(edges: EdgeSet, obstacles: ObstacleIndex) {
     this.e = edges;
