@@ -10,7 +10,7 @@ import { sketchBounds } from '../../state/geometry/polygon';
 import { useElementSize } from './useElementSize';
 import { usePointerRouting } from './usePointerRouting';
 import { useSelectedSurfaces } from './useSelectedSurfaces';
-import { surfaceOrder } from './surfaceIndex';
+import { useSurfaceOrder } from './useSurfaceOrder';
 import { problemMarks } from './problems';
 import { GridLayer } from './GridLayer';
 import { ShapesLayer } from './ShapesLayer';
@@ -39,7 +39,7 @@ export function SketchCanvas() {
   const selected = useSelectedSurfaces();
   const handlers = usePointerRouting();
 
-  const order = useMemo(() => surfaceOrder(doc), [doc]);
+  const order = useSurfaceOrder();
   const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
   const problems = useMemo(
     () => (results.status === 'invalid' ? problemMarks(results.problems, doc.shapes.length) : { shapes: new Set<number>(), points: [] }),

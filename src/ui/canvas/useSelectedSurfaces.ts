@@ -1,21 +1,21 @@
-import { useMemo } from 'react';
+import { useShallow } from 'zustand/react/shallow';
 import { useApp } from '../AppContext';
-import { selectDoc, selectSelection } from '../../state/selectors';
+import type { AppState } from '../../state/store';
 import { edgeNames } from '../../state/geometry/polygon';
 
-/** Surface names of the selected edges and shapes. */
+function selectSelectedSurfaces(s: AppState): Set<string> {
+  const names = new Set<string>();
+  for (const p of s.selection) {
+    const shape = s.doc.shapes[p.shape];
+    if (!shape) continue;
+    const all = edgeNames(shape);
+    if (p.type === 'edge') names.add(all[p.index]);
+    if (p.type === 'shape') all.forEach((n) => names.add(n));
+  }
+  return names;
+}
+
+/** Surface names of the selected edges and shapes; the same Set while the names stay the same (as during a drag). */
 export function useSelectedSurfaces(): Set<string> {
-  const doc = useApp(selectDoc);
-  const selection = useApp(selectSelection);
-  return useMemo(() => {
-    const names = new Set<string>();
-    for (const p of selection) {
-      const shape = doc.shapes[p.shape];
-      if (!shape) continue;
-      const all = edgeNames(shape);
-      if (p.type === 'edge') names.add(all[p.index]);
-      if (p.type === 'shape') all.forEach((n) => names.add(n));
-    }
-    return names;
-  }, [doc, selection]);
+  return useApp(useShallow(selectSelectedSurfaces));
 }

@@ -1,8 +1,7 @@
 import { useEffect, useMemo } from 'react';
 import { useApp, useAppStore } from '../AppContext';
-import { selectDoc } from '../../state/selectors';
 import { selectExchangeSurface } from '../../state/exchangeSelectors';
-import { surfaceOrder } from '../canvas/surfaceIndex';
+import { useSurfaceOrder } from '../canvas/useSurfaceOrder';
 import { useSelectedSurfaces } from '../canvas/useSelectedSurfaces';
 
 /**
@@ -11,11 +10,11 @@ import { useSelectedSurfaces } from '../canvas/useSelectedSurfaces';
  * it changes, else the first surface.
  */
 export function useSurfaceChoice(): { names: string[]; current: string | null; choose: (name: string) => void } {
-  const doc = useApp(selectDoc);
   const chosen = useApp(selectExchangeSurface);
   const store = useAppStore();
   const selected = useSelectedSurfaces();
-  const names = useMemo(() => [...surfaceOrder(doc).keys()], [doc]);
+  const order = useSurfaceOrder();
+  const names = useMemo(() => [...order.keys()], [order]);
   useEffect(() => {
     if (selected.size === 0) return;
     const current = store.getState().exchangeSurface;

@@ -1,9 +1,8 @@
-import { useMemo } from 'react';
 import { useApp } from '../AppContext';
-import { selectDigits, selectDoc, selectHoverPair, selectResultsStale, selectViewFactors } from '../../state/selectors';
+import { selectDigits, selectHoverPair, selectResultsStale, selectUnits, selectViewFactors } from '../../state/selectors';
 import { matrixView, RESIDUAL_TOLERANCE } from '../../state/matrixView';
 import type { AppState } from '../../state/store';
-import { surfaceOrder } from '../canvas/surfaceIndex';
+import { useSurfaceOrder } from '../canvas/useSurfaceOrder';
 import { useSelectedSurfaces } from '../canvas/useSelectedSurfaces';
 import { MatrixTable } from './MatrixTable';
 import { MatrixControls } from './MatrixControls';
@@ -15,14 +14,14 @@ const selectSetHover = (s: AppState) => s.setHoverPair;
 export function MatrixPanel() {
   const vf = useApp(selectViewFactors);
   const digits = useApp(selectDigits);
-  const doc = useApp(selectDoc);
+  const docUnits = useApp(selectUnits);
   const hoverPair = useApp(selectHoverPair);
   const stale = useApp(selectResultsStale);
   const setHover = useApp(selectSetHover);
   const selected = useSelectedSurfaces();
-  const order = useMemo(() => surfaceOrder(doc), [doc]);
+  const order = useSurfaceOrder();
   const view = vf.shown ? matrixView(vf.shown) : null;
-  const units = vf.shown?.doc.units ?? doc.units;
+  const units = vf.shown?.doc.units ?? docUnits;
   const recipBad = view ? view.reciprocityResidual > RESIDUAL_TOLERANCE : false;
   const rowBad = view ? view.worstRowResidual > RESIDUAL_TOLERANCE : false;
   return (
