@@ -5,5 +5,4 @@ export const selectExchange = (s: AppState) => s.exchange;
 export const selectHeatColouring = (s: AppState) => s.heatColouring;
 export const selectTemperatureUnit = (s: AppState) => s.temperatureUnit;
 export const selectExchangeSurface = (s: AppState) => s.exchangeSurface;
-export const selectSurfaceProps = (s: AppState) => s.doc.surfaces;
 export const selectSettings = (s: AppState) => s.doc.settings;

@@ -2,7 +2,6 @@
 import type { AppState } from './store';
 
 export const selectDoc = (s: AppState) => s.doc;
-export const selectShapes = (s: AppState) => s.doc.shapes;
 export const selectUnits = (s: AppState) => s.doc.units;
 export const selectTool = (s: AppState) => s.tool;
 export const selectSelection = (s: AppState) => s.selection;
