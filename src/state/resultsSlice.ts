@@ -1,7 +1,7 @@
 // Results are a cache derived from the document, never saved and never undone.
 // `shown` is the newest result that finished, with the document it belongs to;
 // comparing that document with the current one tells whether it is stale.
-// A heat-exchange slice can sit beside this one with the same pattern.
+// The heat-exchange cache (exchangeSlice.ts) is derived from this one.
 import type { StateCreator } from 'zustand';
 import type { ViewFactorResult } from '../core/scene';
 import type { SketchFile } from './sketchFile';

@@ -1,7 +1,6 @@
 // The app store, built from slices. createAppStore is a factory so tests get a
-// fresh store; the app makes one in runtime.ts. A heat-exchange results slice
-// joins the same way: add its type to AppState and spread its creator below;
-// like the view-factor cache it should keep the document it was computed for.
+// fresh store; the app makes one in runtime.ts. A new slice joins by adding its
+// type to AppState and spreading its creator below.
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import { createDocumentSlice, type DocumentSlice } from './documentSlice';
 import { createHistorySlice, type HistorySlice } from './historySlice';
