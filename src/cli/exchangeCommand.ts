@@ -10,7 +10,7 @@ import { ExchangeError, solveExchange, type ExchangeResult, type SurfaceConditio
 import type { ViewFactorResult } from '../core/scene';
 import { computeViewFactors } from '../core/viewFactors';
 import { toScene, type Sketch } from '../document';
-import { CONDITION_LABEL, exchangeCsv, seesSurroundings } from '../document/exchangeCsv';
+import { conditionInTable, exchangeCsv, seesSurroundings } from '../document/exchangeCsv';
 import { sketchExchangeInput } from '../document/exchangeInput';
 import type { CliIO } from './io';
 import { readSketchFile } from './readSketch';
@@ -164,7 +164,7 @@ function exchangeTable({ file, sketch, names, factors, result: r, conditions }: 
       shown[i],
       fmt(factors.surfaceLength[i]),
       fmt(r.emissivity[i]),
-      conditions[i].kind === 'adiabatic' || conditions[i].kind === 'heatFlux' ? `${CONDITION_LABEL[conditions[i].kind]} (T solved)` : CONDITION_LABEL[conditions[i].kind],
+      conditionInTable(conditions[i].kind),
       r.temperature[i].toFixed(2),
       fmt(r.netHeat[i]),
       fmt(r.netFlux[i]),

@@ -21,6 +21,11 @@ export const CONDITION_LABEL: Record<SurfaceCondition['kind'], string> = {
   opening: 'opening',
 };
 
+/** The condition as results tables name it: "(T solved)" where the temperature is an answer, not an input. */
+export function conditionInTable(kind: SurfaceCondition['kind']): string {
+  return kind === 'adiabatic' || kind === 'heatFlux' ? `${CONDITION_LABEL[kind]} (T solved)` : CONDITION_LABEL[kind];
+}
+
 /** True when some surface sees the surroundings (an open sketch). */
 export const seesSurroundings = (r: ExchangeResult) => r.surroundingsViewFactor.some((f) => f > 0);
 

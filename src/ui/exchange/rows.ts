@@ -1,6 +1,7 @@
 // One row per surface of a solved exchange (and one for the surroundings of an
 // open sketch), in the units the panel shows: K, W per metre of depth, W/m^2, W.
 import type { ExchangeSolved } from '../../state/exchangeSlice';
+import { conditionInTable, seesSurroundings } from '../../state/exchangeLabels';
 
 export interface ExchangeRow {
   name: string;
@@ -15,26 +16,19 @@ export interface ExchangeRow {
   total: number | undefined;
 }
 
-const CONDITION: Record<string, string> = {
-  temperature: 'temperature',
-  heatFlux: 'heat flux (T solved)',
-  adiabatic: 'adiabatic (T solved)',
-  opening: 'opening',
-};
-
 export function exchangeRows(ex: ExchangeSolved): ExchangeRow[] {
   const r = ex.result;
   const rows: ExchangeRow[] = ex.names.map((name, i) => ({
     name,
     index: i,
-    condition: CONDITION[ex.conditions[i].kind],
+    condition: conditionInTable(ex.conditions[i].kind),
     emissivity: r.emissivity[i],
     temperature: r.temperature[i],
     netHeat: r.netHeat[i],
     netFlux: r.netFlux[i],
     total: r.netHeatTotal?.[i],
   }));
-  if (r.surroundingsTemperature !== undefined && r.surroundingsViewFactor.some((f) => f > 0)) {
+  if (seesSurroundings(r) && r.surroundingsTemperature !== undefined) {
     rows.push({
       name: '(surroundings)', index: null, condition: 'black', emissivity: 1, temperature: r.surroundingsTemperature,
       netHeat: r.surroundingsNetHeat, netFlux: undefined, total: r.surroundingsNetHeatTotal,
