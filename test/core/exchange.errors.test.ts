@@ -129,6 +129,7 @@ describe('defaults and conditions from surface properties', () => {
   });
 
   it('an opening is black whatever emissivity it was given', () => {
+    // An opening stands for the surroundings seen through it, which absorb all they get: black (common practice).
     const input = exchangeInputFor({
       names: ['gap'],
       properties: { gap: { opening: true, emissivity: 0.3 } },

@@ -29,7 +29,7 @@ describe('blocked views against the ray-cast reference', () => {
     const r = expectMatchesReference(polys);
     expect(f(r, 0, 2)).toBeGreaterThan(0.44);
     expect(f(r, 0, 2)).toBeLessThan(0.46);
-    // The plain rule, evaluated by hand: each crossed string wraps one corner of the block,
+    // The plain rule (Hottel's crossed strings, Modest, Radiative Heat Transfer, 3rd ed., ch. 4, crossed-strings method, from memory), evaluated by hand: each crossed string wraps one corner of the block,
     // (0,0)-(2.25,0.75)-(4,2), of length sqrt(2.25^2+0.75^2) + sqrt(1.75^2+1.25^2); the
     // uncrossed strings are the side walls (2 each). F = (2 crossed - 2 uncrossed) / (2 * 4).
     const crossed = Math.hypot(2.25, 0.75) + Math.hypot(1.75, 1.25);
@@ -65,7 +65,7 @@ describe('blocked views against the ray-cast reference', () => {
     // Floor and the far wall of the other leg cannot see each other past the corner at (1.5, 1.5)... partly.
     const all = Array.from({ length: 6 }, (_, k) => k);
     const oneSurface = withSurfaces([L], all.map(() => 0), 1);
-    expect(Math.abs(f(oneSurface, 0, 0) - 1)).toBeLessThan(1e-12); // a whole closed enclosure sees only itself
+    expect(Math.abs(f(oneSurface, 0, 0) - 1)).toBeLessThan(1e-12); // a whole closed enclosure sees only itself (summation rule, Incropera et al., 6th ed., sec. 13.1.2, eq. 13.5, from memory)
     const walls = withSurfaces([L], [0, 0, 1, 1, 1, 1], 2);
     expect(f(walls, 0, 0)).toBeGreaterThan(0); // floor + right wall form a concave corner
   });
