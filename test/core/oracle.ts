@@ -74,6 +74,8 @@ export function pointFactors(segs: Seg[], from: number, px: number, py: number, 
   }
 }
 
+// Kronrod 15-point nodes and weights with the embedded 7-point Gauss weights (common practice;
+// Piessens et al., QUADPACK, 1983, routine QK15, from memory).
 const XK = [0.991455371120813, 0.949107912342759, 0.864864423359769, 0.741531185599394,
   0.586087235467691, 0.405845151377397, 0.207784955007898, 0];
 const WK = [0.022935322010529, 0.063092092629979, 0.104790010322250, 0.140653259715525,
