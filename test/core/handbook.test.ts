@@ -52,14 +52,14 @@ describe('handbook view factors (unobstructed)', () => {
     }
   });
 
-  it('square duct: adjacent walls 1 - sqrt(2)/2, opposite walls sqrt(2) - 1 (Hottel's crossed strings evaluated by hand; Modest, Radiative Heat Transfer, 3rd ed., ch. 4, crossed-strings method, from memory)', () => {
+  it('square duct: adjacent walls 1 - sqrt(2)/2, opposite walls sqrt(2) - 1 (crossed strings of Hottel evaluated by hand; Modest, Radiative Heat Transfer, 3rd ed., ch. 4, crossed-strings method, from memory)', () => {
     const r = perEdge([{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 3], [0, 3]] }]);
     expect(Math.abs(f(r, 0, 1) - (1 - Math.SQRT1_2))).toBeLessThan(TOL);
     expect(Math.abs(f(r, 0, 2) - (Math.SQRT2 - 1))).toBeLessThan(TOL);
     expect(f(r, 0, 0)).toBe(0);
   });
 
-  it('offset parallel plates in open space: F = (sqrt(10) - sqrt(2)) / 4 (Hottel's crossed strings evaluated by hand; Modest, Radiative Heat Transfer, 3rd ed., ch. 4, crossed-strings method, from memory)', () => {
+  it('offset parallel plates in open space: F = (sqrt(10) - sqrt(2)) / 4 (crossed strings of Hottel evaluated by hand; Modest, Radiative Heat Transfer, 3rd ed., ch. 4, crossed-strings method, from memory)', () => {
     // Plate 1: top face of a thin bar from x = 0 to 2 at y = 0; plate 2: bottom face of a bar from x = 1 to 3 at y = 1.
     // Crossed strings sqrt(10) and sqrt(2), uncrossed strings sqrt(2) and sqrt(2), plate width 2.
     const t = 0.01;
