@@ -4,11 +4,11 @@ import type { Point, SketchFile } from './sketchFile';
 import type { AppStore } from './store';
 import type { Pick } from './selection';
 import { hitTest } from './tools/hitTest';
-import { pressSelect, dragTo, type DragPlan } from './tools/selectTool';
+import { pressSelect, dragOffset, type DragPlan } from './tools/selectTool';
 import { clickPoint, finish } from './tools/polygonTool';
 import { rectangleFromCorners, regularPolygon } from './tools/quickShapes';
 import { snapPoint } from './geometry/snap';
-import { addShape, deleteShapes, deleteVertices, insertVertex } from './edits/shapeEdits';
+import { addShape, deleteShapes, deleteVertices, insertVertex, moveSelection } from './edits/shapeEdits';
 
 export interface PointerInfo {
   /** Pointer position in sketch units. */
@@ -22,7 +22,8 @@ export interface PointerInfo {
 export type PressAnswer = 'handled' | 'pan';
 
 export class CanvasController {
-  private drag: { plan: DragPlan; base: SketchFile } | null = null;
+  /** `offset`: the move shown now; a pointer move within one grid step changes nothing and is skipped. */
+  private drag: { plan: DragPlan; base: SketchFile; offset: Point } | null = null;
   private anchor: Point | null = null; // rectangle corner or tube centre
   /** The two latest presses: a double-click counts only when both were at one place. */
   private presses: [Point | null, Point | null] = [null, null];
@@ -45,7 +46,7 @@ export class CanvasController {
         if (!hit) return 'pan';
         if (r.drag) {
           s.beginGesture();
-          this.drag = { plan: r.drag, base: this.store.getState().doc };
+          this.drag = { plan: r.drag, base: this.store.getState().doc, offset: [0, 0] };
         }
         return 'handled';
       }
@@ -68,7 +69,10 @@ export class CanvasController {
   move(e: PointerInfo): void {
     const s = this.store.getState();
     if (this.drag) {
-      s.updateGesture(dragTo(this.drag.base, this.drag.plan, e.at, s.gridStep, s.snap));
+      const [dx, dy] = dragOffset(this.drag.plan, e.at, s.gridStep, s.snap);
+      if (dx === this.drag.offset[0] && dy === this.drag.offset[1]) return;
+      this.drag.offset = [dx, dy];
+      s.updateGesture(moveSelection(this.drag.base, this.drag.plan.picks, dx, dy));
       return;
     }
     if (s.tool === 'enclosure' || s.tool === 'solid') s.setHoverPoint(this.snapped(e.at));

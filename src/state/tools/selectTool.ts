@@ -1,11 +1,10 @@
 // Select-and-drag kernel: a press picks and plans a drag; each pointer move turns
-// the plan into a new document computed from the document at the press, so a
-// whole drag is one clean edit with no accumulated rounding.
+// the plan into an offset from the document at the press, so a whole drag is one
+// clean edit with no accumulated rounding.
 import type { Point, SketchFile } from '../sketchFile';
 import type { Pick } from '../selection';
 import { samePick, togglePick } from '../selection';
 import type { Hit } from './hitTest';
-import { moveSelection } from '../edits/shapeEdits';
 import { snapPoint } from '../geometry/snap';
 
 export interface DragPlan {
@@ -34,12 +33,15 @@ export function pressSelect(doc: SketchFile, selection: readonly Pick[], hit: Hi
   return { selection: next, drag: { picks: next, anchor: pointer, reference } };
 }
 
-/** The document while dragging: base moved so the reference point follows the pointer (snapped). */
-export function dragTo(base: SketchFile, plan: DragPlan, pointer: Point, gridStep: number, snap: boolean): SketchFile {
+/**
+ * The move (dx, dy), sketch units, that brings the reference point under the
+ * pointer (snapped); the dragged document is moveSelection(base, plan.picks, dx, dy).
+ */
+export function dragOffset(plan: DragPlan, pointer: Point, gridStep: number, snap: boolean): Point {
   const target = snapPoint(
     [plan.reference[0] + pointer[0] - plan.anchor[0], plan.reference[1] + pointer[1] - plan.anchor[1]],
     gridStep,
     snap,
   );
-  return moveSelection(base, plan.picks, target[0] - plan.reference[0], target[1] - plan.reference[1]);
+  return [target[0] - plan.reference[0], target[1] - plan.reference[1]];
 }
