@@ -75,7 +75,11 @@ export class CanvasController {
       s.updateGesture(moveSelection(this.drag.base, this.drag.plan.picks, dx, dy));
       return;
     }
-    if (s.tool === 'enclosure' || s.tool === 'solid') s.setHoverPoint(this.snapped(e.at));
+    if (s.tool === 'enclosure' || s.tool === 'solid') {
+      const p = this.snapped(e.at);
+      // With snapping most moves land on the same grid point: no new state, no re-render.
+      if (!s.hoverPoint || p[0] !== s.hoverPoint[0] || p[1] !== s.hoverPoint[1]) s.setHoverPoint(p);
+    }
     if ((s.tool === 'rectangle' || s.tool === 'tube') && this.anchor) s.setDraft(this.quickOutline(e.at) ?? []);
   }
 
