@@ -43,16 +43,20 @@ export function loadAutosave(storage: Storage, api: DocumentApi, fallback: Sketc
   };
 }
 
-/** Write the document if it is valid; returns whether it was written. */
-export function saveAutosave(storage: Storage, api: DocumentApi, doc: SketchFile): boolean {
-  const check = api.restore(doc);
-  if (!check.ok) return false;
+/** Write the document if it is valid: 'invalid' leaves the last good copy, 'failed' means storage refused it. */
+function writeAutosave(storage: Storage, api: DocumentApi, doc: SketchFile): 'saved' | 'invalid' | 'failed' {
+  if (!api.restore(doc).ok) return 'invalid';
   try {
     storage.setItem(AUTOSAVE_KEY, api.serialize(doc));
-    return true;
+    return 'saved';
   } catch {
-    return false;
+    return 'failed';
   }
+}
+
+/** Write the document if it is valid; returns whether it was written. */
+export function saveAutosave(storage: Storage, api: DocumentApi, doc: SketchFile): boolean {
+  return writeAutosave(storage, api, doc) === 'saved';
 }
 
 /** Save on every document change; returns the unsubscribe function. */
@@ -63,12 +67,9 @@ export function startAutosave(store: AppStore, storage: Storage, api: DocumentAp
     if (s.gestureBase) return; // mid-drag: save once the drag ends
     if (s.doc === last) return;
     last = s.doc;
-    const check = api.restore(s.doc);
-    if (!check.ok) return;
-    try {
-      storage.setItem(AUTOSAVE_KEY, api.serialize(s.doc));
-    } catch {
-      if (!warnedFull) { warnedFull = true; s.notify('warning', 'Autosave failed: browser storage is full or blocked. Use Save to keep a copy.'); }
+    if (writeAutosave(storage, api, s.doc) === 'failed' && !warnedFull) {
+      warnedFull = true;
+      s.notify('warning', 'Autosave failed: browser storage is full or blocked. Use Save to keep a copy.');
     }
   });
 }
