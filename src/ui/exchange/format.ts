@@ -1,6 +1,7 @@
 // Numbers in the heat-exchange panel.
 import type { TemperatureUnit } from '../../state/exchangeSlice';
 import { fromKelvin } from '../../state/exchangeUnits';
+import { fmtFactor } from '../matrix/format';
 
 /** Heat, flux or power: five significant digits, no trailing zeros, never -0. */
 export function fmtHeat(x: number): string {
@@ -9,10 +10,9 @@ export function fmtHeat(x: number): string {
   return v === 0 ? '0' : String(v);
 }
 
-/** A temperature (given in K) in the shown unit, two decimals. */
+/** A temperature (given in K) in the shown unit, two decimals, never -0.00. */
 export function fmtTemperature(kelvin: number, unit: TemperatureUnit): string {
-  const s = fromKelvin(kelvin, unit).toFixed(2);
-  return Number(s) === 0 ? (0).toFixed(2) : s;
+  return fmtFactor(fromKelvin(kelvin, unit), 2);
 }
 
 /** A number typed by the user, as it shows in a field: up to ten significant digits. */

@@ -1,4 +1,4 @@
-/** A view factor with a fixed number of decimals; rounding noise below the last digit shows as 0, not -0. */
+/** A view factor (or any number) with a fixed number of decimals; rounding noise below the last digit shows as 0, not -0. */
 export function fmtFactor(f: number, digits: number): string {
   const s = f.toFixed(digits);
   return Number(s) === 0 ? (0).toFixed(digits) : s;
