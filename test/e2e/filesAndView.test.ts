@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { startApp, type App } from './harness';
+import { dragOnCanvas, screenOf as screenPoint, startApp, type App } from './harness';
 import type { SketchFile } from '../../src/state/sketchFile';
 
 let app: App;
@@ -23,11 +23,7 @@ const state = () => page.evaluate(() => {
   return { doc: s.doc as SketchFile, camera: s.camera as { scale: number; originX: number; originY: number } };
 });
 
-async function screenOf(x: number, y: number): Promise<[number, number]> {
-  const box = (await page.locator('.canvas-box').boundingBox())!;
-  const { camera: c } = await state();
-  return [box.x + c.originX + c.scale * x, box.y + c.originY - c.scale * y];
-}
+const screenOf = (x: number, y: number) => screenPoint(page, x, y);
 
 describe('files and view', () => {
   it('saves the sketch file and opens it again; a bad file changes nothing and says why', async () => {
@@ -88,12 +84,7 @@ describe('files and view', () => {
     await page.getByRole('button', { name: /^Tube/ }).click();
     await page.getByLabel('sides').fill('10');
     await page.getByLabel('sides').press('Enter');
-    const [cx, cy] = await screenOf(80, 50);
-    const [rx, ry] = await screenOf(100, 50);
-    await page.mouse.move(cx, cy);
-    await page.mouse.down();
-    await page.mouse.move(rx, ry, { steps: 4 });
-    await page.mouse.up();
+    await dragOnCanvas(page, [80, 50], [100, 50], 4);
     await expect.poll(async () => (await state()).doc.shapes.length).toBe(2);
     const tube = (await state()).doc.shapes[1];
     expect(tube.kind).toBe('solid');

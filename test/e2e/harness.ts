@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createServer } from 'node:net';
 import { build, preview, type PreviewServer } from 'vite';
-import { chromium, type BrowserContext } from 'playwright-core';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 export const CHROMIUM = '/usr/bin/chromium';
 
@@ -56,4 +56,21 @@ export async function startApp(): Promise<App> {
       rmSync(profile, { recursive: true, force: true });
     },
   };
+}
+
+/** Screen position (page pixels) of a sketch point, from the app's own camera. */
+export async function screenOf(page: Page, x: number, y: number): Promise<[number, number]> {
+  const box = (await page.locator('.canvas-box').boundingBox())!;
+  const cam = await page.evaluate(() => (window as any).__tautline.store.getState().camera);
+  return [box.x + cam.originX + cam.scale * x, box.y + cam.originY - cam.scale * y];
+}
+
+/** Press at sketch point `from`, move to `to` in `steps` pointer moves, release. */
+export async function dragOnCanvas(page: Page, from: [number, number], to: [number, number], steps: number): Promise<void> {
+  const [ax, ay] = await screenOf(page, ...from);
+  const [bx, by] = await screenOf(page, ...to);
+  await page.mouse.move(ax, ay);
+  await page.mouse.down();
+  await page.mouse.move(bx, by, { steps });
+  await page.mouse.up();
 }

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync, readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import type { Page } from 'playwright-core';
-import { startApp, type App } from './harness';
+import { dragOnCanvas, screenOf as screenPoint, startApp, type App } from './harness';
 import { runFactors } from '../../src/cli/factorsCommand';
 import { documentApi } from '../../src/state/documentApi';
 import type { SketchFile } from '../../src/state/sketchFile';
@@ -21,12 +21,7 @@ beforeAll(async () => {
 
 afterAll(async () => { await app?.close(); });
 
-/** Screen position (page pixels) of a sketch point, from the app's own camera. */
-async function screenOf(x: number, y: number): Promise<[number, number]> {
-  const box = (await page.locator('.canvas-box').boundingBox())!;
-  const cam = await page.evaluate(() => (window as any).__tautline.store.getState().camera);
-  return [box.x + cam.originX + cam.scale * x, box.y + cam.originY - cam.scale * y];
-}
+const screenOf = (x: number, y: number) => screenPoint(page, x, y);
 
 const table = () => page.getByRole('table', { name: /view factor/i });
 const tableText = () => table().locator('tbody').innerText();
@@ -161,21 +156,11 @@ describe('sketcher in chromium', () => {
 
   it('marks a body dragged through the wall as invalid and keeps the drawing', async () => {
     await page.getByRole('button', { name: /^Rectangle/ }).click();
-    const [ax, ay] = await screenOf(0.8, 0.3);
-    const [bx, by] = await screenOf(1.2, 0.7);
-    await page.mouse.move(ax, ay);
-    await page.mouse.down();
-    await page.mouse.move(bx, by, { steps: 4 });
-    await page.mouse.up();
+    await dragOnCanvas(page, [0.8, 0.3], [1.2, 0.7], 4);
     await waitReady();
     expect(await table().getByRole('rowheader').count()).toBe(8);
     await page.getByRole('button', { name: /^Select/ }).click();
-    const [cx, cy] = await screenOf(1.0, 0.5);
-    const [dx, dy] = await screenOf(1.0, 1.0);
-    await page.mouse.move(cx, cy);
-    await page.mouse.down();
-    await page.mouse.move(dx, dy, { steps: 3 });
-    await page.mouse.up();
+    await dragOnCanvas(page, [1.0, 0.5], [1.0, 1.0], 3);
     await expect.poll(status).toBe('invalid');
     expect(await page.locator('.canvas-status').innerText()).toMatch(/Geometry problem: shape 2/);
     expect(await page.locator('[data-status]').innerText()).toMatch(/last valid sketch/);
