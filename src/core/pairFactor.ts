@@ -64,6 +64,7 @@ export class PairIntegrator {
   // Fixed points: 0 and 1 are the ends of j (clipped), then the obstruction points, group by group.
   private ptX = new Float64Array(64);
   private ptY = new Float64Array(64);
+  private ptBoundary = new Uint8Array(64);
   private ptCount = 0;
   private groupStart = new Int32Array(32); // group g owns points groupStart[g] .. groupStart[g+1]-1
   private groupCount = 0;
@@ -528,19 +529,19 @@ export class PairIntegrator {
     const flags = this.segFlags;
     const g = this.groupCount++;
     this.setGroupStart(g, this.ptCount);
-    if ((flags[first] & 1) === 0) this.pushPoint(this.segPx[first], this.segPy[first]);
+    if ((flags[first] & 1) === 0) this.pushPoint(this.segPx[first], this.segPy[first], 1);
     let s = first;
     for (;;) {
       flags[s] |= 4;
       if ((flags[s] & 2) === 0) {
-        this.pushPoint(this.segQx[s], this.segQy[s]);
+        this.pushPoint(this.segQx[s], this.segQy[s], 1);
         return;
       }
       const edge = this.segEdge[s];
       const next = E.nextEdge[edge];
       // The corner b of `edge` lies inside H, so the next edge was clipped too.
       if (this.stamp[next] !== this.call) {
-        this.pushPoint(this.segQx[s], this.segQy[s]);
+        this.pushPoint(this.segQx[s], this.segQy[s], 1);
         return;
       }
       const wx = E.bx[edge], wy = E.by[edge];
@@ -561,14 +562,26 @@ export class PairIntegrator {
     this.groupStart[g] = value;
   }
 
-  private pushPoint(x: number, y: number): void {
+  /**
+   * Add a fixed point. `onBoundary` marks the end of a chain, which lies on the boundary
+   * of H: seen from i, a point on a side string is always outside j's range of
+   * directions (H is convex, so its boundary is swept in order: a1, side 1, j, side 3,
+   * a0), and a point on i's or j's line is at an end of its range. Such a point can
+   * bound a chain's directions but never a visible gap of j by itself, so lines through
+   * it make no events.
+   */
+  private pushPoint(x: number, y: number, onBoundary = 0): void {
     const k = this.ptCount;
     if (k === this.ptX.length) {
       this.ptX = grow(this.ptX);
       this.ptY = grow(this.ptY);
+      const flags = new Uint8Array(this.ptX.length);
+      flags.set(this.ptBoundary);
+      this.ptBoundary = flags;
     }
     this.ptX[k] = x;
     this.ptY[k] = y;
+    this.ptBoundary[k] = onBoundary;
     this.ptCount = k + 1;
   }
 
@@ -577,11 +590,14 @@ export class PairIntegrator {
     const X = this.ptX, Y = this.ptY;
     const n = this.ptCount;
     let count = 0;
+    const boundary = this.ptBoundary;
     for (let r = 0; r < n; r++) {
+      if (boundary[r]) continue;
       const rx = X[r], ry = Y[r];
       // orient(p, r, q) is affine along i: g(0) at a0 and g(1) at a1.
       const r0x = rx - a0x, r0y = ry - a0y, r1x = rx - a1x, r1y = ry - a1y;
       for (let q = r + 1; q < n; q++) {
+        if (boundary[q]) continue;
         const qx = X[q], qy = Y[q];
         const g0 = r0x * (qy - a0y) - r0y * (qx - a0x);
         const g1 = r1x * (qy - a1y) - r1y * (qx - a1x);
