@@ -13,6 +13,7 @@ import { toScene, type Sketch } from '../document';
 import { conditionInTable, exchangeCsv, seesSurroundings } from '../document/exchangeCsv';
 import { sketchExchangeInput } from '../document/exchangeInput';
 import type { CliIO } from './io';
+import { parseArgs } from './args';
 import { readSketchFile } from './readSketch';
 import { displayName, usageError as reportUsage } from './terminalText';
 
@@ -40,38 +41,25 @@ settings.surroundingsTemperature (K). FILE '-' reads standard input.
 ${CAUTION}
 `;
 
-type Format = 'table' | 'json' | 'csv';
 
 /** Run the command; returns the exit code (0 done, 1 bad file or no answer, 2 bad arguments). */
 export function runExchange(args: string[], io: CliIO): number {
-  let format: Format = 'table';
   let depthArg: number | undefined;
-  const files: string[] = [];
-  for (let k = 0; k < args.length; k++) {
-    const arg = args[k];
-    if (arg === '--help' || arg === '-h') {
-      io.out(EXCHANGE_HELP);
-      return 0;
-    }
-    if (arg === '--json' || arg === '--csv') {
-      const wanted = arg === '--json' ? 'json' : 'csv';
-      if (format !== 'table' && format !== wanted) return usageError(io, 'choose one of --json and --csv');
-      format = wanted;
-    } else if (arg === '--depth' || arg.startsWith('--depth=')) {
-      const text = arg === '--depth' ? args[++k] : arg.slice('--depth='.length);
-      if (text === undefined) return usageError(io, '--depth needs a number of metres');
-      const value = text.trim() === '' ? Number.NaN : Number(text);
-      if (!(Number.isFinite(value) && value > 0)) return usageError(io, `--depth must be a number of metres above 0, got '${text.slice(0, 40)}'`);
-      depthArg = value;
-    } else if (arg.startsWith('-') && arg !== '-') {
-      return usageError(io, `unknown option '${arg.slice(0, 40)}'`);
-    } else {
-      files.push(arg);
-    }
+  const parsed = parseArgs(args, (arg, takeNext) => {
+    if (arg !== '--depth' && !arg.startsWith('--depth=')) return undefined;
+    const text = arg === '--depth' ? takeNext() : arg.slice('--depth='.length);
+    if (text === undefined) return '--depth needs a number of metres';
+    const value = text.trim() === '' ? Number.NaN : Number(text);
+    if (!(Number.isFinite(value) && value > 0)) return `--depth must be a number of metres above 0, got '${text.slice(0, 40)}'`;
+    depthArg = value;
+    return null;
+  });
+  if (parsed.kind === 'help') {
+    io.out(EXCHANGE_HELP);
+    return 0;
   }
-  if (files.length === 0) return usageError(io, 'no sketch file given');
-  if (files.length > 1) return usageError(io, `one sketch file at a time (got ${files.length})`);
-  const file = files[0];
+  if (parsed.kind === 'error') return usageError(io, parsed.problem);
+  const { format, file } = parsed;
 
   const sketch = readSketchFile('exchange', file, io);
   if (!sketch) return 1;

@@ -4,6 +4,7 @@ import { computeViewFactors } from '../core/viewFactors';
 import type { ViewFactorResult } from '../core/scene';
 import { matrixCsv, toScene, type Sketch } from '../document';
 import type { CliIO } from './io';
+import { parseArgs } from './args';
 import { readSketchFile } from './readSketch';
 import { displayName, usageError as reportUsage } from './terminalText';
 
@@ -21,30 +22,16 @@ Lengths are in the file's units; view factors are dimensionless.
 FILE '-' reads standard input.
 `;
 
-type Format = 'table' | 'json' | 'csv';
 
 /** Run the command; returns the exit code (0 done, 1 bad file, 2 bad arguments). */
 export function runFactors(args: string[], io: CliIO): number {
-  let format: Format = 'table';
-  const files: string[] = [];
-  for (const arg of args) {
-    if (arg === '--help' || arg === '-h') {
-      io.out(FACTORS_HELP);
-      return 0;
-    }
-    if (arg === '--json' || arg === '--csv') {
-      const wanted = arg === '--json' ? 'json' : 'csv';
-      if (format !== 'table' && format !== wanted) return usageError(io, 'choose one of --json and --csv');
-      format = wanted;
-    } else if (arg.startsWith('-') && arg !== '-') {
-      return usageError(io, `unknown option '${arg}'`);
-    } else {
-      files.push(arg);
-    }
+  const parsed = parseArgs(args);
+  if (parsed.kind === 'help') {
+    io.out(FACTORS_HELP);
+    return 0;
   }
-  if (files.length === 0) return usageError(io, 'no sketch file given');
-  if (files.length > 1) return usageError(io, `one sketch file at a time (got ${files.length})`);
-  const file = files[0];
+  if (parsed.kind === 'error') return usageError(io, parsed.problem);
+  const { format, file } = parsed;
 
   const sketch = readSketchFile('factors', file, io);
   if (!sketch) return 1;
