@@ -20,11 +20,26 @@ export interface DocumentApi {
   serialize(sketch: SketchFile): string;
 }
 
+// Documents are immutable (every edit makes a new object), so the verdict on one is
+// kept: live results, autosave and serialize each ask about the same document, and
+// the geometry checks should run once per edit, not three times.
+const verdicts = new WeakMap<object, RestoreOutcome>();
+
+function restoreOnce(input: string | unknown): RestoreOutcome {
+  if (typeof input !== 'object' || input === null) return restore(input);
+  let verdict = verdicts.get(input);
+  if (!verdict) {
+    verdict = restore(input);
+    verdicts.set(input, verdict);
+  }
+  return verdict;
+}
+
 export const documentApi: DocumentApi = {
-  restore: (input) => restore(input),
+  restore: restoreOnce,
   toScene: (sketch) => toScene(sketch),
   serialize: (sketch) => {
-    const read = restore(sketch);
+    const read = restoreOnce(sketch);
     return read.ok ? serialize(read.sketch) : `${JSON.stringify(sketch, null, 2)}\n`;
   },
 };
