@@ -2,6 +2,7 @@
 // they are numbered in the file (from 1), also after repeated points were removed.
 import type { GeometryFinding } from '../core/sketchChecks';
 import { formatPoint, shapeLabel } from './labels';
+import type { ProblemPlace, SketchProblem } from './problems';
 import type { Shape } from './schema';
 
 export interface GeometryContext {
@@ -13,6 +14,38 @@ export interface GeometryContext {
   fileIndex: readonly (readonly number[])[];
   /** Points per shape as written in the file (before repairs). */
   filePointCount: readonly number[];
+}
+
+/** The finding as a problem: its message and the shapes, edges and points it concerns, numbered as in the file. */
+export function geometryProblem(f: GeometryFinding, ctx: GeometryContext): SketchProblem {
+  return { kind: f.rule, message: formatGeometryFinding(f, ctx), place: geometryPlace(f, ctx) };
+}
+
+/**
+ * Indices follow the file, as the app holds and draws it: a kept edge k is the
+ * file's edge fileIndex[k] (the edges dropped after it have zero length, so
+ * that one file edge spans the same two points), and likewise its start point.
+ */
+function geometryPlace(f: GeometryFinding, ctx: GeometryContext): ProblemPlace {
+  const fileEdge = (shape: number, k: number) => ({ shape, edge: ctx.fileIndex[shape][k] });
+  switch (f.rule) {
+    case 'too-few-points':
+    case 'zero-area':
+      return { shapes: [f.shape], edges: [], points: [] };
+    case 'several-enclosures':
+      return { shapes: [...f.shapes], edges: [], points: [] };
+    case 'repeated-point':
+    case 'outside-enclosure':
+    case 'inside-solid':
+      return { shapes: [f.shape], edges: [], points: [f.at] };
+    case 'edges-cross':
+    case 'edges-touch':
+    case 'edges-overlap': {
+      const shapes = f.shape === f.otherShape ? [f.shape] : [f.shape, f.otherShape];
+      const points: [number, number][] = f.rule === 'edges-overlap' ? [f.at, f.to] : [f.at];
+      return { shapes, edges: [fileEdge(f.shape, f.edge), fileEdge(f.otherShape, f.otherEdge)], points };
+    }
+  }
 }
 
 export function formatGeometryFinding(f: GeometryFinding, ctx: GeometryContext): string {

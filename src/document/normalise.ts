@@ -3,6 +3,7 @@
 // within the documented limits, one thermal condition per surface.
 import { formatNumber, formatPoint, quoteName, shapeLabel } from './labels';
 import { MAX_COORDINATE, MIN_EDGE_LENGTH, MIN_RELATIVE_EDGE_LENGTH } from './limits';
+import { problemAt, type SketchProblem } from './problems';
 import type { Point, Shape, Sketch, SketchFileV1, SurfaceProperties } from './schema';
 
 export interface Normalised {
@@ -11,12 +12,12 @@ export interface Normalised {
   fileIndex: number[][];
   /** Points per shape as written. */
   filePointCount: number[];
-  errors: string[];
+  errors: SketchProblem[];
   warnings: string[];
 }
 
 export function normalise(file: SketchFileV1): Normalised {
-  const errors: string[] = [];
+  const errors: SketchProblem[] = [];
   const warnings: string[] = [];
   const fileIndex: number[][] = [];
   const filePointCount: number[] = [];
@@ -26,18 +27,23 @@ export function normalise(file: SketchFileV1): Normalised {
     filePointCount.push(n);
     const names = typeof shape.surface === 'string' ? new Array<string>(n).fill(shape.surface) : shape.surface;
     if (names.length !== n) {
-      errors.push(`${label}: surface lists ${names.length} name${names.length === 1 ? '' : 's'} for ${n} edge${n === 1 ? '' : 's'}; give one name per edge, or a single name for all`);
+      errors.push(problemAt('surface-list', `${label}: surface lists ${names.length} name${names.length === 1 ? '' : 's'} for ${n} edge${n === 1 ? '' : 's'}; give one name per edge, or a single name for all`, { shapes: [s] }));
     }
     const tooBig = shape.points.findIndex(([x, y]) => Math.abs(x) > MAX_COORDINATE || Math.abs(y) > MAX_COORDINATE);
     if (tooBig >= 0) {
-      errors.push(`${label}: point ${tooBig + 1} ${formatPoint(shape.points[tooBig])} is beyond ±${formatNumber(MAX_COORDINATE)}; lengths would overflow`);
+      // No point mark: a coordinate this far out cannot be shown next to the rest.
+      errors.push(problemAt('coordinate-range', `${label}: point ${tooBig + 1} ${formatPoint(shape.points[tooBig])} is beyond ±${formatNumber(MAX_COORDINATE)}; lengths would overflow`, { shapes: [s] }));
     }
     const keep = keptEdges(shape.points);
     fileIndex.push(keep);
     if (keep.length < n && n > 1) warnings.push(`${label}: removed ${describeRemoved(keep, n)}, which made zero-length edges`);
     if (tooBig < 0 && keep.length >= 3) {
       const short = tooShortEdge(shape.points, keep);
-      if (short) errors.push(`${label}: edge ${short.edge + 1} is ${formatNumber(short.length)} ${file.units} long, ${short.why}`);
+      if (short) {
+        errors.push(problemAt('edge-too-short', `${label}: edge ${short.edge + 1} is ${formatNumber(short.length)} ${file.units} long, ${short.why}`, {
+          shapes: [s], edges: [{ shape: s, edge: short.edge }], points: [[shape.points[short.edge][0], shape.points[short.edge][1]]],
+        }));
+      }
     }
     return {
       kind: shape.kind,
@@ -53,7 +59,7 @@ export function normalise(file: SketchFileV1): Normalised {
     const conditions = (['temperature', 'heatFlux', 'adiabatic', 'opening'] as const).filter((c) =>
       c === 'adiabatic' || c === 'opening' ? props[c] === true : props[c] !== undefined);
     if (conditions.length > 1) {
-      errors.push(`surface ${quoteName(name)}: give one condition, not ${conditions.join(' and ')} together`);
+      errors.push(problemAt('conditions', `surface ${quoteName(name)}: give one condition, not ${conditions.join(' and ')} together`, { edges: edgesNamed(shapes, fileIndex, name) }));
     }
     if (props.opening === true && props.emissivity !== undefined && props.emissivity !== 1) {
       warnings.push(`surface ${quoteName(name)}: emissivity ${formatNumber(props.emissivity)} is ignored; an opening acts as a black surface`);
@@ -67,6 +73,11 @@ export function normalise(file: SketchFileV1): Normalised {
 
   const sketch: Sketch = { version: 1, units: file.units, shapes, surfaces, settings: { ...(file.settings ?? {}) } };
   return { sketch, fileIndex, filePointCount, errors, warnings };
+}
+
+/** The file's edges (shape, edge from 0) that carry surface `name`. */
+function edgesNamed(shapes: readonly Shape[], fileIndex: readonly number[][], name: string): { shape: number; edge: number }[] {
+  return shapes.flatMap((shape, s) => shape.surface.flatMap((n, k) => (n === name ? [{ shape: s, edge: fileIndex[s][k] }] : [])));
 }
 
 /**

@@ -1,18 +1,20 @@
 // The one way in for a sketch: file text, a pasted document, an autosave.
-// Never throws; a refused document comes back as short messages that say what
-// is wrong and where (shapes, points and edges counted from 1).
+// Never throws; a refused document comes back as problems: short messages that
+// say what is wrong and where (shapes, points and edges counted from 1), each
+// with the place it concerns as data (counted from 0) for the canvas.
 import { checkSketchGeometry } from '../core/sketchChecks';
 import type { PolygonInput } from '../core/scene';
-import { formatGeometryFinding } from './geometryMessages';
+import { geometryProblem } from './geometryMessages';
 import { parseJsonText } from './jsonText';
 import { MAX_EDGES, MAX_MESSAGES } from './limits';
 import { migrate } from './migrate';
 import { normalise } from './normalise';
+import { mergePlaces, problemAt, type SketchProblem } from './problems';
 import { sketchFileSchemaV1, type Sketch } from './schema';
-import { formatSchemaIssue } from './zodMessages';
+import { schemaProblem } from './zodMessages';
 import { unknownFieldWarnings } from './unknownFields';
 
-export type RestoreResult = { ok: true; sketch: Sketch; warnings: string[] } | { ok: false; errors: string[] };
+export type RestoreResult = { ok: true; sketch: Sketch; warnings: string[] } | { ok: false; errors: SketchProblem[] };
 
 /**
  * Read a sketch from JSON text or from an already-parsed value; validate it
@@ -26,7 +28,7 @@ export function restore(input: string | unknown): RestoreResult {
   } catch (error) {
     // A fault here is a bug, but the caller (app or command line) must still get a message, not an exception.
     const detail = error instanceof Error ? error.message.split('\n', 1)[0] : String(error);
-    return { ok: false, errors: [`could not read the sketch (internal error: ${detail})`] };
+    return { ok: false, errors: [problemAt('internal', `could not read the sketch (internal error: ${detail})`)] };
   }
 }
 
@@ -34,31 +36,31 @@ function restoreUnsafe(input: unknown): RestoreResult {
   let value = input;
   if (typeof input === 'string') {
     const parsed = parseJsonText(input);
-    if (!parsed.ok) return refuse([parsed.error]);
+    if (!parsed.ok) return refuse([problemAt('json', parsed.error)]);
     value = parsed.value;
   }
   const kind = notASketch(value);
-  if (kind) return refuse([kind]);
+  if (kind) return refuse([problemAt('not-a-sketch', kind)]);
   const migrated = migrate(value as Record<string, unknown>);
-  if (!migrated.ok) return refuse([migrated.error]);
+  if (!migrated.ok) return refuse([problemAt('version', migrated.error)]);
   const doc = migrated.doc;
 
   const shapeCount = Array.isArray(doc.shapes) ? doc.shapes.length : 0;
   if (shapeCount > MAX_EDGES / 3) {
-    return refuse([`the sketch has ${shapeCount} shapes; the limit is ${MAX_EDGES} edges in all, and each shape has at least 3`]);
+    return refuse([problemAt('limit', `the sketch has ${shapeCount} shapes; the limit is ${MAX_EDGES} edges in all, and each shape has at least 3`)]);
   }
   const edges = countEdges(doc.shapes);
   if (edges > MAX_EDGES) {
-    return refuse([`the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`]);
+    return refuse([problemAt('limit', `the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`)]);
   }
 
   const surfaces = doc.surfaces;
   if (surfaces !== null && typeof surfaces === 'object' && Object.hasOwn(surfaces, '__proto__')) {
     // The schema would silently drop this key; say so instead.
-    return refuse([`surfaces: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`]);
+    return refuse([problemAt('schema', `surfaces: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`)]);
   }
   const parsed = sketchFileSchemaV1.safeParse(doc, { reportInput: true });
-  if (!parsed.success) return refuse(parsed.error.issues.map((issue) => formatSchemaIssue(issue, doc)));
+  if (!parsed.success) return refuse(parsed.error.issues.map((issue) => schemaProblem(issue, doc)));
 
   const normalised = normalise(parsed.data);
   if (normalised.errors.length > 0) return refuse(normalised.errors);
@@ -67,16 +69,28 @@ function restoreUnsafe(input: unknown): RestoreResult {
   const polygons: PolygonInput[] = sketch.shapes.map((s) => ({ kind: s.kind, points: s.points.flat() }));
   const findings = checkSketchGeometry(polygons);
   if (findings.length > 0) {
-    return refuse(findings.map((f) => formatGeometryFinding(f, { shapes: sketch.shapes, fileShapes: parsed.data.shapes, fileIndex, filePointCount })));
+    const ctx = { shapes: sketch.shapes, fileShapes: parsed.data.shapes, fileIndex, filePointCount };
+    return refuse(findings.map((f) => geometryProblem(f, ctx)));
   }
   return { ok: true, sketch, warnings: [...unknownFieldWarnings(doc), ...normalised.warnings] };
 }
 
-function refuse(messages: string[]): RestoreResult {
-  const unique = [...new Set(messages)];
+/**
+ * At most MAX_MESSAGES problems, one per message; past that the last counts
+ * the rest, and its place covers theirs so the canvas still marks every one.
+ */
+function refuse(problems: SketchProblem[]): RestoreResult {
+  // One entry per message; a repeated message adds its place to the first.
+  const byMessage = new Map<string, SketchProblem>();
+  for (const p of problems) {
+    const first = byMessage.get(p.message);
+    byMessage.set(p.message, first ? { ...first, place: mergePlaces([first.place, p.place]) } : p);
+  }
+  const unique = [...byMessage.values()];
   if (unique.length <= MAX_MESSAGES) return { ok: false, errors: unique };
-  const more = unique.length - (MAX_MESSAGES - 1);
-  return { ok: false, errors: [...unique.slice(0, MAX_MESSAGES - 1), `…and ${more} more problems`] };
+  const rest = unique.slice(MAX_MESSAGES - 1);
+  const more = problemAt('more', `…and ${rest.length} more problems`, mergePlaces(rest.map((p) => p.place)));
+  return { ok: false, errors: [...unique.slice(0, MAX_MESSAGES - 1), more] };
 }
 
 /** A message when the value is plainly not a sketch document (another kind of file), else null. */

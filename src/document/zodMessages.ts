@@ -2,6 +2,14 @@
 // or surface, counted from 1) and which rule, with the offending value.
 import type { z } from 'zod';
 import { describeValue, quoteName, shapeLabel } from './labels';
+import { problemAt, type SketchProblem } from './problems';
+
+/** The issue as a problem; it concerns a shape when its path runs through one. */
+export function schemaProblem(issue: z.core.$ZodIssue, file: unknown): SketchProblem {
+  const [head, index] = issue.path;
+  const shapes = head === 'shapes' && typeof index === 'number' ? [index] : [];
+  return problemAt('schema', formatSchemaIssue(issue, file), { shapes });
+}
 
 /** One message per issue; `file` is the raw document, used to label shapes. */
 export function formatSchemaIssue(issue: z.core.$ZodIssue, file: unknown): string {

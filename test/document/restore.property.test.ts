@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { restore, serialize, toScene } from '../../src/document';
+import { restore, serialize, toScene, type ProblemPlace } from '../../src/document';
 
 // Property-based checks (fast-check): valid sketches are always accepted and
 // survive a save/open round trip; invalid ones are always refused with a message.
@@ -43,6 +43,22 @@ const validDoc = fc
     return { version: 1, units: g.units, shapes, surfaces: { [g.perEdgeNames ? 'a' : 'wall']: { emissivity: 0.8, temperature: 400 } } };
   });
 
+/**
+ * A problem's place names shapes and edges of the document as given (not as
+ * repaired), and only real edges: an edge the reader dropped for zero length
+ * is never the one marked. Points are finite.
+ */
+function expectPlaceInDocument(place: ProblemPlace, doc: Doc): void {
+  for (const s of place.shapes) expect(s >= 0 && s < doc.shapes.length).toBe(true);
+  for (const { shape, edge } of place.edges) {
+    const points = doc.shapes[shape].points as number[][];
+    expect(edge >= 0 && edge < points.length).toBe(true);
+    const [a, b] = [points[edge], points[(edge + 1) % points.length]];
+    expect(a[0] !== b[0] || a[1] !== b[1]).toBe(true);
+  }
+  for (const p of place.points) expect(Number.isFinite(p[0]) && Number.isFinite(p[1])).toBe(true);
+}
+
 /** Ways to break a valid document, each a rule of the format. */
 const corruptions: ((d: Doc, pick: number) => void)[] = [
   (d) => { d.version = 2 + (d.shapes.length % 5); },
@@ -59,6 +75,13 @@ const corruptions: ((d: Doc, pick: number) => void)[] = [
   (d) => { const s = d.shapes[0].points as number[][]; d.shapes[0].points = [s[0], s[2], s[1], s[3]]; }, // bow tie
   (d, p) => { const s = d.shapes[0].points as number[][]; d.shapes.push({ kind: 'solid', points: s.map(([x, y]) => [x + (p % 2 ? 0.5 : 2) * (s[2][0] - s[0][0]), y]), surface: 'out' }); },
   (d) => { d.shapes.push({ kind: 'solid', points: d.shapes[0].points, surface: 'copy' }); },
+  // A bow tie with one point written twice: the reader drops it, the marks must still follow the file.
+  (d, p) => {
+    const s = d.shapes[0].points as number[][];
+    const bow = [s[0], s[2], s[1], s[3]];
+    bow.splice(p % 4, 0, bow[p % 4]);
+    d.shapes[0] = { ...d.shapes[0], points: bow, surface: 'wall' };
+  },
   (d, p) => { d.surfaces = { [String(d.shapes[0].surface).split(',')[0]]: [{ emissivity: 0 }, { emissivity: 1.01 }, { temperature: 0 }, { temperature: -1 }, { emissivity: '0.5' }, { temperature: 300, heatFlux: 1 }][p % 6] }; },
 ];
 
@@ -66,7 +89,7 @@ describe('restore on random documents', () => {
   it('accepts random valid sketches, and a saved sketch reads back unchanged', () => {
     fc.assert(fc.property(validDoc, (doc) => {
       const r = restore(JSON.stringify(doc));
-      if (!r.ok) throw new Error(r.errors.join('; '));
+      if (!r.ok) throw new Error(r.errors.map((e) => e.message).join('; '));
       expect(r.warnings).toEqual([]);
       const again = restore(serialize(r.sketch));
       expect(again.ok && again.sketch).toEqual(r.sketch);
@@ -83,8 +106,9 @@ describe('restore on random documents', () => {
       if (r.ok) return;
       expect(r.errors.length).toBeGreaterThan(0);
       for (const e of r.errors) {
-        expect(e.length).toBeGreaterThan(10);
-        expect(e).not.toMatch(/Invalid input|undefined|\[object/);
+        expect(e.message.length).toBeGreaterThan(10);
+        expect(e.message).not.toMatch(/Invalid input|undefined|\[object/);
+        expectPlaceInDocument(e.place, doc);
       }
     }), { numRuns: 400 });
   });
@@ -92,7 +116,7 @@ describe('restore on random documents', () => {
   it('never throws on arbitrary values or text, and explains every refusal', () => {
     fc.assert(fc.property(fc.oneof(fc.anything(), fc.string(), fc.json()), (value) => {
       const r = restore(value);
-      if (!r.ok) expect(r.errors.every((e) => typeof e === 'string' && e.length > 0)).toBe(true);
+      if (!r.ok) expect(r.errors.every((e) => typeof e.message === 'string' && e.message.length > 0)).toBe(true);
     }), { numRuns: 500 });
   });
 
@@ -101,7 +125,7 @@ describe('restore on random documents', () => {
       const text = JSON.stringify(doc);
       const r = restore(text.slice(0, Math.floor(at * text.length)));
       expect(r.ok).toBe(false);
-      if (!r.ok) expect(r.errors[0]).toMatch(/empty|not valid JSON|not a Tautline sketch/);
+      if (!r.ok) expect(r.errors[0].message).toMatch(/empty|not valid JSON|not a Tautline sketch/);
     }), { numRuns: 200 });
   });
 

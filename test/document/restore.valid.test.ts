@@ -15,7 +15,7 @@ const minimalText = `{
 
 function sketchOf(input: unknown): { sketch: Sketch; warnings: string[] } {
   const r = restore(input);
-  if (!r.ok) throw new Error(`refused: ${r.errors.join('; ')}`);
+  if (!r.ok) throw new Error(`refused: ${r.errors.map((e) => e.message).join('; ')}`);
   return r;
 }
 
