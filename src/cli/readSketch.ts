@@ -18,7 +18,7 @@ export function readSketchFile(command: string, file: string, io: CliIO): Sketch
   }
   const read = restore(text);
   if (!read.ok) {
-    for (const m of read.errors) io.err(`${command}: ${file}: ${m}\n`);
+    for (const e of read.errors) io.err(`${command}: ${file}: ${e.message}\n`);
     return null;
   }
   for (const m of read.warnings.slice(0, MAX_WARNINGS)) io.err(`${command}: ${file}: warning: ${m}\n`);

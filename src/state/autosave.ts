@@ -38,7 +38,7 @@ export function loadAutosave(storage: Storage, api: DocumentApi, fallback: Sketc
     fromAutosave: false,
     notice: {
       level: 'warning',
-      text: `The autosaved sketch could not be read (${read.errors.slice(0, 2).join('; ')}). ${where} The demo was opened instead.`,
+      text: `The autosaved sketch could not be read (${read.errors.slice(0, 2).map((e) => e.message).join('; ')}). ${where} The demo was opened instead.`,
     },
   };
 }

@@ -2,14 +2,16 @@
 // the live pipeline and autosave can be tested with stand-ins for faults.
 import type { SceneInput } from '../core/scene';
 import type { SketchFile } from './sketchFile';
-import { restore, serialize, toScene, type Sketch } from '../document';
+import { restore, serialize, toScene, type Sketch, type SketchProblem } from '../document';
+
+export type { SketchProblem, ProblemPlace } from '../document';
 
 /** A sketch as `restore` returns it: checked, one surface name per edge. It is also a valid sketch file. */
 export type CheckedSketch = Sketch;
 
 export type RestoreOutcome =
   | { ok: true; sketch: CheckedSketch; warnings: string[] }
-  | { ok: false; errors: string[] };
+  | { ok: false; errors: SketchProblem[] };
 
 export interface DocumentApi {
   /** Parse (from text) or validate (an object) a sketch file, with messages for people. */

@@ -17,7 +17,8 @@ export function openSketchText(store: AppStore, api: DocumentApi, text: string, 
   const s = store.getState();
   if (!read.ok) {
     const more = read.errors.length > 4 ? ` (and ${read.errors.length - 4} more)` : '';
-    s.notify('error', `Could not open "${fileName}": ${read.errors.slice(0, 4).join('; ')}${more}. Your current sketch is unchanged.`);
+    const shown = read.errors.slice(0, 4).map((e) => e.message).join('; ');
+    s.notify('error', `Could not open "${fileName}": ${shown}${more}. Your current sketch is unchanged.`);
     return false;
   }
   s.commit(read.sketch);

@@ -9,7 +9,7 @@ export function CanvasStatus() {
   const draft = useApp(selectDraft);
   if (results.status === 'invalid' && results.problems.length) {
     const more = results.problems.length > 1 ? ` (+${results.problems.length - 1} more)` : '';
-    return <div className="canvas-status problem" role="alert">Geometry problem: {results.problems[0]}{more}</div>;
+    return <div className="canvas-status problem" role="alert">Geometry problem: {results.problems[0].message}{more}</div>;
   }
   const hint = TOOL_KEYS.find((t) => t.tool === tool)?.hint ?? '';
   const progress = draft.length && (tool === 'enclosure' || tool === 'solid') ? ` — ${draft.length} point${draft.length > 1 ? 's' : ''} so far` : '';

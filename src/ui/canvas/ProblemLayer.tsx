@@ -1,15 +1,19 @@
 import { memo } from 'react';
-import { Circle, Layer, Text } from 'react-konva';
+import { Circle, Layer, Line, Text } from 'react-konva';
 import type { Camera } from '../../state/viewSlice';
-import type { Point } from '../../state/sketchFile';
 import { toScreen } from '../../state/camera';
 import { MARK } from '../palette';
+import type { ProblemMarks } from './problems';
 
-/** Rings with "!" where validation says the geometry breaks a rule. */
-export const ProblemLayer = memo(function ProblemLayer({ points, camera }: { points: Point[]; camera: Camera }) {
-  if (!points.length) return null;
+/** Edges traced and rings with "!" where validation says the geometry breaks a rule. */
+export const ProblemLayer = memo(function ProblemLayer({ marks, camera }: { marks: ProblemMarks; camera: Camera }) {
+  const { edges, points } = marks;
+  if (!points.length && !edges.length) return null;
   return (
     <Layer listening={false}>
+      {edges.map(([a, b], i) => (
+        <Line key={`e${i}`} points={[...toScreen(camera, a), ...toScreen(camera, b)]} stroke={MARK.problem} strokeWidth={5} opacity={0.6} lineCap="round" />
+      ))}
       {points.map((p, i) => {
         const [x, y] = toScreen(camera, p);
         return [

@@ -11,7 +11,7 @@ import { useElementSize } from './useElementSize';
 import { usePointerRouting } from './usePointerRouting';
 import { useSelectedSurfaces } from './useSelectedSurfaces';
 import { useSurfaceOrder } from './useSurfaceOrder';
-import { problemMarks } from './problems';
+import { canvasProblemMarks } from './problems';
 import { GridLayer } from './GridLayer';
 import { ShapesLayer } from './ShapesLayer';
 import { HandlesLayer } from './HandlesLayer';
@@ -42,8 +42,8 @@ export function SketchCanvas() {
   const order = useSurfaceOrder();
   const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
   const problems = useMemo(
-    () => (results.status === 'invalid' ? problemMarks(results.problems, doc.shapes.length) : { shapes: new Set<number>(), points: [] }),
-    [results.status, results.problems, doc.shapes.length],
+    () => canvasProblemMarks(results.status, results.problems, doc.shapes),
+    [results.status, results.problems, doc.shapes],
   );
 
   // Fit on first layout and whenever asked (F, the Fit button, a file opened).
@@ -63,7 +63,7 @@ export function SketchCanvas() {
           <HeatLayer doc={doc} camera={camera} />
           <HandlesLayer doc={doc} camera={camera} selection={selection} showAll={tool === 'select'} />
           <DraftLayer tool={tool} draft={draft} hover={hover} camera={camera} />
-          <ProblemLayer points={problems.points} camera={camera} />
+          <ProblemLayer marks={problems} camera={camera} />
         </Stage>
       )}
       <HeatLegend />

@@ -1,23 +1,52 @@
-// Where a validation message points: "shape N" and "(x, y)" in the document
-// layer's messages become highlighted shapes and markers on the canvas.
-import type { Point } from '../../state/sketchFile';
+// Where validation problems are drawn: shapes outlined, edges traced and
+// places ringed, read from each problem's place (data made by the document
+// layer), never from its wording.
+import type { SketchProblem } from '../../state/documentApi';
+import type { Point, Shape } from '../../state/sketchFile';
+import { edgeEnds } from '../../state/geometry/polygon';
 
-export interface ProblemMarks { shapes: Set<number>; points: Point[] }
+export interface ProblemMarks {
+  /** Indices into the document's shapes. */
+  shapes: Set<number>;
+  /** Edge ends in sketch units. */
+  edges: [Point, Point][];
+  /** Places in sketch units. */
+  points: Point[];
+}
 
-const NUM = '[-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:e[-+]?\\d+)?';
+/** More marks than this only clutter the drawing; the status line counts every problem. */
+const MAX_MARKS = 20;
 
-export function problemMarks(messages: readonly string[], shapeCount: number): ProblemMarks {
-  const shapes = new Set<number>();
-  const points: Point[] = [];
-  for (const m of messages) {
-    // The first shape a message names is the one to fix (messages count shapes from 1).
-    const hit = /shape (\d+)/i.exec(m);
-    const i = hit ? Number(hit[1]) - 1 : -1;
-    if (i >= 0 && i < shapeCount) shapes.add(i);
-    for (const hit of m.matchAll(new RegExp(`\\((${NUM}),\\s*(${NUM})\\)`, 'gi'))) {
-      const p: Point = [Number(hit[1]), Number(hit[2])];
-      if (Number.isFinite(p[0]) && Number.isFinite(p[1])) points.push(p);
+export const NO_MARKS: ProblemMarks = { shapes: new Set(), edges: [], points: [] };
+
+/**
+ * Marks for the problems of the document whose shapes are `shapes`. Places
+ * that do not fit those shapes (a document changed since it was checked) are
+ * left out rather than drawn in the wrong place.
+ */
+export function problemMarks(problems: readonly SketchProblem[], shapes: readonly Shape[]): ProblemMarks {
+  const marks: ProblemMarks = { shapes: new Set(), edges: [], points: [] };
+  const seenEdges = new Set<string>();
+  const seenPoints = new Set<string>();
+  for (const { place } of problems) {
+    for (const s of place.shapes) if (s >= 0 && s < shapes.length) marks.shapes.add(s);
+    for (const { shape, edge } of place.edges) {
+      const key = `${shape}:${edge}`;
+      if (shape < 0 || shape >= shapes.length || edge < 0 || edge >= shapes[shape].points.length || seenEdges.has(key)) continue;
+      seenEdges.add(key);
+      marks.edges.push(edgeEnds(shapes[shape], edge));
+    }
+    for (const p of place.points) {
+      const key = `${p[0]},${p[1]}`;
+      if (!Number.isFinite(p[0]) || !Number.isFinite(p[1]) || seenPoints.has(key)) continue;
+      seenPoints.add(key);
+      marks.points.push([p[0], p[1]]);
     }
   }
-  return { shapes, points: points.slice(0, 20) };
+  return { shapes: marks.shapes, edges: marks.edges.slice(0, MAX_MARKS), points: marks.points.slice(0, MAX_MARKS) };
+}
+
+/** The marks the canvas shows for the results state: problems only while the document is invalid. */
+export function canvasProblemMarks(status: string, problems: readonly SketchProblem[], shapes: readonly Shape[]): ProblemMarks {
+  return status === 'invalid' ? problemMarks(problems, shapes) : NO_MARKS;
 }
