@@ -1,16 +1,7 @@
 import { orient } from './orient';
 
-// Small exact-geometry pieces of the pair integral (sketch units throughout).
-
-/**
- * 1/2 of the integral over [pa, pb] of (sin b_hi - sin b_lo), the visible direction
- * range bounded by fixed points lo and hi: the integral of sin b towards a fixed
- * point v is -(|v - pb| - |v - pa|).
- */
-export function gap(X: Float64Array, Y: Float64Array, lo: number, hi: number,
-  pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
-  return 0.5 * (distanceChange(X[lo], Y[lo], pax, pay, pbx, pby, dx, dy) - distanceChange(X[hi], Y[hi], pax, pay, pbx, pby, dx, dy));
-}
+// Small exact-geometry pieces of the pair integral (sketch units throughout): the
+// distance change behind every closed-form piece integral, and the silhouette test.
 
 /**
  * |v - pb| - |v - pa| without cancellation, given d = pb - pa computed directly:
@@ -38,12 +29,4 @@ export function silhouetteFromSegment(a0x: number, a0y: number, a1x: number, a1y
   // f g < 0 at both ends and neither changes sign; with both changing sign, f g turns
   // positive between the roots. Any zero at an end counts as a possible silhouette.
   return !(f0 * g0 < 0 && f1 * g1 < 0 && f0 * f1 > 0);
-}
-
-/** From the facing codes of the two edges at a corner (see PairIntegrator.facing). */
-export function cornerMayBeTangent(before: number, after: number): boolean {
-  if ((before | after) & 4) return true;
-  if ((before & 1) !== (after & 1) || (before & 2) !== (after & 2)) return true;
-  // Same facing at both ends: a tangent between only if both edges change facing along i'.
-  return (before & 1) !== ((before >> 1) & 1) && (after & 1) !== ((after >> 1) & 1);
 }

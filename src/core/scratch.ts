@@ -12,20 +12,6 @@ export function firstAtOrBelow(A: Float64Array, first: number, n: number, value:
   return lo;
 }
 
-/** Append to wl/wh the walk positions whose angle lies in [a, b]; returns the new count. */
-export function cornerWindow(A: Float64Array, first: number, n: number, a: number, b: number,
-  wl: Int32Array, wh: Int32Array, count: number): number {
-  const from = firstAtOrBelow(A, first, n, b);
-  let lo = from, hi = n; // first position below a
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (A[first + mid] < a) hi = mid;
-    else lo = mid + 1;
-  }
-  if (from < lo) { wl[count] = from; wh[count] = lo - 1; return count + 1; }
-  return count;
-}
-
 /** Sort ranges [lo[k], hi[k]], k < n, by their start, in place (the lists are short). */
 export function sortRanges(lo: Int32Array, hi: Int32Array, n: number): void {
   for (let k = 1; k < n; k++) {

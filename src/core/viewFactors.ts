@@ -1,6 +1,6 @@
 import { buildEdges, type EdgeSet } from './edges';
 import { buildObstacleIndex } from './obstacles';
-import { PairIntegrator } from './pairFactor';
+import { PairIntegrator } from './pair/integrator';
 import type { SceneInput, ViewFactorResult } from './scene';
 import { aggregateToSurfaces } from './surfaces';
 

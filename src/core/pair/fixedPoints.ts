@@ -1,0 +1,187 @@
+import type { EdgeSet } from '../edges';
+import type { ObstacleIndex } from '../obstacles';
+import { silhouetteFromSegment } from '../pairGeometry';
+import { grow, sortPrefix } from '../scratch';
+import type { ObstaclePieces } from './obstaclePieces';
+
+// The points that bound the view from the emitting edge piece i' = a0-a1: the ends of
+// the target j' (points 0 and 1: b0 and b1), then the obstruction points chain by
+// chain (chain ends and corners that can be a silhouette from i'). Seen from any p on
+// i', a chain covers one interval of directions bounded by two of its points. Also the
+// breakpoints along i': where p lines up with two fixed points, the set of bounding
+// points can change. Sketch units throughout.
+
+/** How an edge faces the two ends of i' (float test; in doubt when either end is near its line). */
+type Facing = typeof BACK | typeof FRONT_AT_START | typeof FRONT_AT_END | typeof FRONT | typeof IN_DOUBT;
+const BACK = 0;
+const FRONT_AT_START = 1;
+const FRONT_AT_END = 2;
+const FRONT = 3;
+const IN_DOUBT = 4;
+
+/**
+ * Can the corner between edges with facings `before` and `after` be a tangent (a
+ * silhouette) seen from some point of i'? Conservative: says yes in doubt (an extra
+ * split costs time, never accuracy).
+ */
+export function cornerMayBeTangent(before: Facing, after: Facing): boolean {
+  if (before === IN_DOUBT || after === IN_DOUBT || before !== after) return true;
+  // Same facing at both ends: a tangent between only if both edges change facing along i'.
+  return before === FRONT_AT_START || before === FRONT_AT_END;
+}
+
+export class FixedPoints {
+  x = new Float64Array(64);
+  y = new Float64Array(64);
+  /** 1 for a chain end, which lies on the boundary of H (see push). */
+  onBoundary = new Uint8Array(64);
+  count = 0;
+  /** Chain g owns points chainStart[g] .. chainStart[g+1]-1. */
+  chainStart = new Int32Array(32);
+  chainCount = 0;
+  private facing = new Uint8Array(64);
+
+  constructor(private readonly e: EdgeSet, private readonly ob: ObstacleIndex) {}
+
+  /**
+   * Collect the fixed points for emitting piece a0-a1 and target piece b0-b1 from the
+   * obstruction pieces: join them into chains (runs of one polygon's edges joined by
+   * corners inside H) and keep each chain's ends and possible silhouette corners.
+   */
+  build(pieces: ObstaclePieces, a0x: number, a0y: number, a1x: number, a1y: number,
+    b0x: number, b0y: number, b1x: number, b1y: number): void {
+    this.count = 0;
+    this.push(b0x, b0y, 0);
+    this.push(b1x, b1y, 0);
+    this.chainCount = 0;
+    for (let w = 0; w < pieces.wholeCount; w++) this.addWholeConvexBody(pieces.wholeBody[w], a0x, a0y, a1x, a1y);
+    // Open chains start at a piece whose start is not inside H, or whose previous edge was not kept.
+    const prevEdge = this.e.prevEdge;
+    for (let s = 0; s < pieces.count; s++) {
+      if (!pieces.startInside[s] || !pieces.has(prevEdge[pieces.edge[s]])) this.walkChain(pieces, s, true, a0x, a0y, a1x, a1y);
+    }
+    // What is left are closed chains: bodies lying wholly inside H.
+    for (let s = 0; s < pieces.count; s++) {
+      if (!pieces.walked[s]) this.walkChain(pieces, s, false, a0x, a0y, a1x, a1y);
+    }
+    this.setChainStart(this.chainCount, this.count);
+  }
+
+  private walkChain(pieces: ObstaclePieces, first: number, open: boolean, a0x: number, a0y: number, a1x: number, a1y: number): void {
+    const E = this.e;
+    this.setChainStart(this.chainCount++, this.count);
+    if (open) this.push(pieces.px[first], pieces.py[first], 1);
+    let s = first;
+    for (;;) {
+      pieces.walked[s] = 1;
+      const edge = pieces.edge[s];
+      const next = E.nextEdge[edge];
+      if (!pieces.endInside[s] || !pieces.has(next)) {
+        this.push(pieces.qx[s], pieces.qy[s], 1);
+        return;
+      }
+      // Corner b of `edge` lies inside H, and the next edge was kept too.
+      const wx = E.bx[edge], wy = E.by[edge];
+      if (silhouetteFromSegment(a0x, a0y, a1x, a1y, wx, wy, E.ax[edge], E.ay[edge], E.bx[next], E.by[next])) this.push(wx, wy, 0);
+      s = pieces.pieceOf(next);
+      if (pieces.walked[s]) return; // closed chain done
+    }
+  }
+
+  /**
+   * A convex body wholly inside H is one closed chain; from any p on i' its extremes are
+   * its two tangent corners, where the edges facing p meet those facing away. Only
+   * corners that may be a tangent from some p on i' are kept.
+   */
+  private addWholeConvexBody(b: number, a0x: number, a0y: number, a1x: number, a1y: number): void {
+    const E = this.e;
+    const first = this.ob.bodyFirstEdge[b], end = this.ob.bodyEdgeEnd[b];
+    this.setChainStart(this.chainCount++, this.count);
+    if (this.facing.length < end - first) this.facing = new Uint8Array(2 * (end - first));
+    const facing = this.facing;
+    for (let e = first; e < end; e++) facing[e - first] = facingOf(E, e, a0x, a0y, a1x, a1y);
+    // Corner a of e sits between the edge before it (in the oriented walk) and e.
+    for (let e = first; e < end; e++) {
+      if (cornerMayBeTangent(facing[E.prevEdge[e] - first] as Facing, facing[e - first] as Facing)) this.push(E.ax[e], E.ay[e], 0);
+    }
+  }
+
+  private setChainStart(g: number, value: number): void {
+    if (g >= this.chainStart.length) {
+      const grown = new Int32Array(this.chainStart.length * 2);
+      grown.set(this.chainStart);
+      this.chainStart = grown;
+    }
+    this.chainStart[g] = value;
+  }
+
+  /**
+   * Add a fixed point. `onBoundary` = 1 marks the end of a chain, which lies on the
+   * boundary of H: seen from i', a point on a side string is always outside j's range of
+   * directions (H is convex, so its boundary is swept in order: a1, side 1, j, side 3,
+   * a0), and a point on i's or j's line is at an end of its range. Such a point can
+   * bound a chain's directions but never a visible gap of j by itself, so lines through
+   * it make no breakpoints.
+   */
+  private push(x: number, y: number, onBoundary: number): void {
+    const k = this.count;
+    if (k === this.x.length) {
+      this.x = grow(this.x);
+      this.y = grow(this.y);
+      const flags = new Uint8Array(this.x.length);
+      flags.set(this.onBoundary);
+      this.onBoundary = flags;
+    }
+    this.x[k] = x;
+    this.y[k] = y;
+    this.onBoundary[k] = onBoundary;
+    this.count = k + 1;
+  }
+}
+
+/** Facing of edge e seen from a0 and from a1 (front: the point lies strictly left of the edge's line). */
+function facingOf(E: EdgeSet, e: number, a0x: number, a0y: number, a1x: number, a1y: number): Facing {
+  const x0 = E.ax[e], y0 = E.ay[e];
+  const dx = E.bx[e] - x0, dy = E.by[e] - y0;
+  const f0 = dx * (a0y - y0) - dy * (a0x - x0);
+  const f1 = dx * (a1y - y0) - dy * (a1x - x0);
+  const tol = 1e-12 * (Math.abs(dx) + Math.abs(dy)) * (Math.abs(a0x - x0) + Math.abs(a0y - y0) + Math.abs(a1x - x0) + Math.abs(a1y - y0));
+  if (Math.abs(f0) <= tol || Math.abs(f1) <= tol) return IN_DOUBT;
+  if (f0 > 0) return f1 > 0 ? FRONT : FRONT_AT_START;
+  return f1 > 0 ? FRONT_AT_END : BACK;
+}
+
+/** Breakpoints along i': fractions in (0, 1) from a0, sorted ascending, in at[0 .. count). */
+export class Breakpoints {
+  at = new Float64Array(64);
+  count = 0;
+
+  /**
+   * Find the points of i' = a0-a1 where p lines up with two fixed points (neither a
+   * chain end). Between consecutive breakpoints the points bounding the view of j'
+   * cannot change.
+   */
+  find(points: FixedPoints, a0x: number, a0y: number, a1x: number, a1y: number): void {
+    const X = points.x, Y = points.y, boundary = points.onBoundary;
+    const n = points.count;
+    let count = 0;
+    for (let r = 0; r < n; r++) {
+      if (boundary[r]) continue;
+      const rx = X[r], ry = Y[r];
+      // orient(p, r, q) is affine along i': g0 at a0 and g1 at a1.
+      const r0x = rx - a0x, r0y = ry - a0y, r1x = rx - a1x, r1y = ry - a1y;
+      for (let q = r + 1; q < n; q++) {
+        if (boundary[q]) continue;
+        const qx = X[q], qy = Y[q];
+        const g0 = r0x * (qy - a0y) - r0y * (qx - a0x);
+        const g1 = r1x * (qy - a1y) - r1y * (qx - a1x);
+        if ((g0 < 0 && g1 > 0) || (g0 > 0 && g1 < 0)) {
+          if (count === this.at.length) this.at = grow(this.at);
+          this.at[count++] = g0 / (g0 - g1);
+        }
+      }
+    }
+    sortPrefix(this.at, count);
+    this.count = count;
+  }
+}

@@ -1,0 +1,203 @@
+import type { EdgeSet } from '../edges';
+import type { ObstacleIndex } from '../obstacles';
+import { ConvexWindows } from './convexWindows';
+import type { ObstaclePieces } from './obstaclePieces';
+import { SIDE_ORDER, SURELY_INSIDE, SURELY_OUTSIDE, type SegmentClip, type ViewRegion } from './viewRegion';
+
+// Which edges can block the view of an edge pair: every edge that enters the interior
+// of the view region H, clipped to H. Walls of re-entrant pockets come from the wall
+// index; bodies are culled whole by their bounding circle, convex many-sided bodies are
+// cut down by angular windows, and corners are classified in floats first so that only
+// doubtful edges go through the exact clip.
+
+/** Convex bodies with more edges than this are clipped through angular windows (measured by `npm run bench`). */
+const WINDOW_MIN_EDGES = 8;
+
+/** What to do with an edge after classifying both corners against every side of H. */
+type EdgeVerdict = typeof DROP | typeof KEEP_WHOLE | typeof CLIP;
+const DROP = 0;
+const KEEP_WHOLE = 1;
+const CLIP = 2;
+
+export class ObstacleGatherer {
+  private readonly clipOut: SegmentClip = { t0: 0, t1: 1, startInside: false, endInside: false };
+  private readonly windows = new ConvexWindows();
+  /** Signed distance of the current body's centre from each side, positive inside H. */
+  private readonly centreDist = new Float64Array(4);
+  /** 1 when side k cuts the current body's circle; the body is surely inside the other sides. */
+  private readonly crossing = new Uint8Array(4);
+  /** SidePlace of corners against the four sides, 4 entries per corner. */
+  private places = new Int8Array(256);
+  private readonly visitWall: (id: number) => boolean;
+  private readonly visitBody: (id: number) => boolean;
+  // The pair being gathered: its edges, the bodies owning them (-1: a wall), and whether one body blocks it all.
+  private pairI = 0;
+  private pairJ = 0;
+  private bodyI = -1;
+  private bodyJ = -1;
+  private blocked = false;
+
+  constructor(
+    private readonly e: EdgeSet,
+    private readonly ob: ObstacleIndex,
+    private readonly region: ViewRegion,
+    private readonly pieces: ObstaclePieces,
+  ) {
+    this.visitWall = (id: number) => {
+      this.clipEdge(this.ob.wallEdges[id]);
+      return false; // keep no result list in flatbush
+    };
+    this.visitBody = (id: number) => {
+      if (!this.blocked) this.clipBody(id);
+      return false;
+    };
+  }
+
+  /**
+   * Fill `pieces` with the obstructions of edges i and j inside the region (set for
+   * this pair). Returns true when one body blocks every sight line: the pair then
+   * exchanges nothing, and the pieces are incomplete.
+   */
+  gather(i: number, j: number): boolean {
+    const ob = this.ob, R = this.region;
+    this.pieces.begin();
+    this.pairI = i;
+    this.pairJ = j;
+    this.bodyI = ob.bodyOfPolygon[this.e.polygon[i]];
+    this.bodyJ = ob.bodyOfPolygon[this.e.polygon[j]];
+    this.blocked = false;
+    if (ob.bodyTree) ob.bodyTree.search(R.minX, R.minY, R.maxX, R.maxY, this.visitBody);
+    else for (let b = 0; b < ob.bodyCount && !this.blocked; b++) this.clipBody(b);
+    if (this.blocked) return true;
+    ob.wallTree?.search(R.minX, R.minY, R.maxX, R.maxY, this.visitWall);
+    return false;
+  }
+
+  /**
+   * Does convex body b block every sight line? It does when the disc inscribed about its
+   * centre meets both side strings (sides 1 and 3): the body then holds a chord from one
+   * string to the other, which cuts H between i and j. Float test with a margin that
+   * only ever says no in doubt.
+   */
+  private cutsView(b: number): boolean {
+    const ob = this.ob, R = this.region;
+    const rIn = ob.bodyRIn[b] * (1 - 1e-9);
+    if (!(rIn > 0) || !R.on[1] || !R.on[3]) return false;
+    return R.discMeetsSide(1, ob.bodyCx[b], ob.bodyCy[b], rIn) && R.discMeetsSide(3, ob.bodyCx[b], ob.bodyCy[b], rIn);
+  }
+
+  /**
+   * Clip the edges of body b unless its bounding circle lies wholly outside a side of H;
+   * when the circle lies wholly inside H, keep every edge whole without testing it.
+   */
+  private clipBody(b: number): void {
+    const ob = this.ob, R = this.region;
+    // A convex body lies wholly behind each of its own edges, so it cannot block a
+    // view from or to one of them.
+    if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return;
+    const cx = ob.bodyCx[b], cy = ob.bodyCy[b], r = ob.bodyR[b];
+    // A relative margin of 1e-9 keeps these float tests on the safe side: a body kept
+    // in vain costs only time, and "wholly inside" must be certain.
+    const margin = r * 1e-9 + 1e-12 * (Math.abs(cx) + Math.abs(cy));
+    let inside = true;
+    for (let step = 0; step < 4; step++) {
+      const k = SIDE_ORDER[step]; // the side strings reject most bodies, so they go first
+      this.crossing[k] = 0;
+      if (!R.on[k]) continue;
+      const dist = R.signedDistance(k, cx, cy);
+      this.centreDist[k] = dist;
+      if (dist < -r - margin) return;
+      if (dist < r + margin) {
+        this.crossing[k] = 1;
+        inside = false;
+      }
+    }
+    const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
+    if (!inside) {
+      if (ob.bodyConvex[b] && this.cutsView(b)) {
+        this.blocked = true;
+        return;
+      }
+      // Angular windows pay off for many-sided bodies; a few corners are cheaper to test all.
+      if (ob.bodyConvex[b] && end - first > WINDOW_MIN_EDGES) this.clipConvexBody(b);
+      else this.clipBodyEdges(first, end);
+      return;
+    }
+    if (ob.bodyConvex[b]) {
+      this.pieces.addWholeBody(b);
+      return;
+    }
+    const E = this.e;
+    for (let e = first; e < end; e++) this.pieces.keep(e, E.ax[e], E.ay[e], E.bx[e], E.by[e], true, true);
+  }
+
+  /**
+   * Clip the edges [first, end) of a body that straddles H's boundary. Each corner is
+   * classified once against the four sides in floats, with a margin well above the
+   * rounding of a cross product (side length x sketch extent x 1e-14): edges with
+   * both corners surely outside one side are dropped, edges with both surely inside
+   * are kept whole, and only the rest go through the exact clip.
+   */
+  private clipBodyEdges(first: number, end: number): void {
+    const E = this.e;
+    const n = end - first;
+    if (this.places.length < 4 * n) this.places = new Int8Array(8 * n);
+    for (let e = first; e < end; e++) this.classifyCorner(E.ax[e], E.ay[e], 4 * (e - first));
+    for (let e = first; e < end; e++) this.settleEdge(e, 4 * (e - first), 4 * (E.nextEdge[e] - first));
+  }
+
+  /** Clip a convex body that straddles H's boundary, looking only at edges its angular windows admit. */
+  private clipConvexBody(b: number): void {
+    const ob = this.ob, E = this.e;
+    if (!this.windows.find(ob, b, this.region, this.centreDist)) return;
+    const ranges = this.windows.ranges;
+    const first = ob.bodyFirstEdge[b];
+    for (let q = 0; q < ranges.count; q++) {
+      for (let m = ranges.lo[q]; m <= ranges.hi[q]; m++) {
+        const e = ob.walkEdge[first + m];
+        this.classifyCorner(E.ax[e], E.ay[e], 0);
+        this.classifyCorner(E.bx[e], E.by[e], 4);
+        this.settleEdge(e, 0, 4);
+      }
+    }
+  }
+
+  /** Write the SidePlace of (x, y) against sides 0..3 to places[at .. at+3]; sides that miss the body's circle are surely inside. */
+  private classifyCorner(x: number, y: number, at: number): void {
+    const R = this.region, P = this.places;
+    for (let k = 0; k < 4; k++) P[at + k] = this.crossing[k] ? R.place(k, x, y) : SURELY_INSIDE;
+  }
+
+  /** Drop, keep whole, or clip edge e, from its corners' places at offsets a and b. */
+  private settleEdge(e: number, a: number, b: number): void {
+    const verdict = this.verdict(a, b);
+    if (verdict === DROP) return;
+    if (verdict === CLIP) {
+      this.clipEdge(e);
+      return;
+    }
+    const E = this.e;
+    if (e !== this.pairI && e !== this.pairJ) this.pieces.keep(e, E.ax[e], E.ay[e], E.bx[e], E.by[e], true, true);
+  }
+
+  private verdict(a: number, b: number): EdgeVerdict {
+    const P = this.places;
+    let whole = true;
+    for (let k = 0; k < 4; k++) {
+      if (!this.region.on[k]) continue; // a side of zero length bounds nothing
+      const pa = P[a + k], pb = P[b + k];
+      if (pa === SURELY_OUTSIDE && pb === SURELY_OUTSIDE) return DROP;
+      if (pa !== SURELY_INSIDE || pb !== SURELY_INSIDE) whole = false;
+    }
+    return whole ? KEEP_WHOLE : CLIP;
+  }
+
+  /** Clip edge `edge` to H exactly; keep the piece if it passes through H's interior. */
+  private clipEdge(edge: number): void {
+    if (edge === this.pairI || edge === this.pairJ) return;
+    const E = this.e, c = this.clipOut;
+    const px = E.ax[edge], py = E.ay[edge], qx = E.bx[edge], qy = E.by[edge];
+    if (!this.region.clipSegment(px, py, qx, qy, c)) return;
+    this.pieces.keep(edge, px + c.t0 * (qx - px), py + c.t0 * (qy - py), px + c.t1 * (qx - px), py + c.t1 * (qy - py), c.startInside, c.endInside);
+  }
+}

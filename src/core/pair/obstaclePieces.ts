@@ -1,0 +1,88 @@
+// The obstruction pieces of one edge pair: edges (or their parts) clipped to the view
+// region H, and the convex bodies lying wholly inside H (which enter the view only by
+// their silhouette corners). Filled by ObstacleGatherer, read by FixedPoints. Coordinates
+// in sketch units. Buffers grow when full; no piece is ever dropped.
+
+export class ObstaclePieces {
+  /** Edge id of each piece, and the piece's start (px, py) and end (qx, qy). */
+  edge = new Int32Array(64);
+  px = new Float64Array(64);
+  py = new Float64Array(64);
+  qx = new Float64Array(64);
+  qy = new Float64Array(64);
+  /** 1 when the piece's start / end is a corner strictly inside H (the chain goes on there). */
+  startInside = new Uint8Array(64);
+  endInside = new Uint8Array(64);
+  /** 1 once the piece has been walked into a chain. */
+  walked = new Uint8Array(64);
+  count = 0;
+  /** Convex bodies wholly inside H. */
+  wholeBody = new Int32Array(16);
+  wholeCount = 0;
+  // Per edge: which pair last kept a piece of it, and which piece.
+  private readonly stamp: Int32Array;
+  private readonly pieceOfEdge: Int32Array;
+  private pair = 0;
+
+  constructor(edgeCount: number) {
+    this.stamp = new Int32Array(edgeCount).fill(-1);
+    this.pieceOfEdge = new Int32Array(edgeCount);
+  }
+
+  /** Forget the previous pair's pieces (O(1): the per-edge stamps are compared with a counter). */
+  begin(): void {
+    this.pair++;
+    this.count = 0;
+    this.wholeCount = 0;
+  }
+
+  /** Is a piece of `edge` kept for this pair? */
+  has(edge: number): boolean {
+    return this.stamp[edge] === this.pair;
+  }
+
+  /** Index of the piece of `edge` (valid when has(edge)). */
+  pieceOf(edge: number): number {
+    return this.pieceOfEdge[edge];
+  }
+
+  keep(edge: number, px: number, py: number, qx: number, qy: number, startInside: boolean, endInside: boolean): void {
+    const s = this.count;
+    if (s === this.edge.length) this.grow();
+    this.edge[s] = edge;
+    this.px[s] = px;
+    this.py[s] = py;
+    this.qx[s] = qx;
+    this.qy[s] = qy;
+    this.startInside[s] = startInside ? 1 : 0;
+    this.endInside[s] = endInside ? 1 : 0;
+    this.walked[s] = 0;
+    this.stamp[edge] = this.pair;
+    this.pieceOfEdge[edge] = s;
+    this.count = s + 1;
+  }
+
+  addWholeBody(b: number): void {
+    if (this.wholeCount === this.wholeBody.length) {
+      const grown = new Int32Array(2 * this.wholeCount);
+      grown.set(this.wholeBody);
+      this.wholeBody = grown;
+    }
+    this.wholeBody[this.wholeCount++] = b;
+  }
+
+  private grow(): void {
+    const n = 2 * this.edge.length;
+    const i32 = (a: Int32Array) => { const b = new Int32Array(n); b.set(a); return b; };
+    const f64 = (a: Float64Array) => { const b = new Float64Array(n); b.set(a); return b; };
+    const u8 = (a: Uint8Array) => { const b = new Uint8Array(n); b.set(a); return b; };
+    this.edge = i32(this.edge);
+    this.px = f64(this.px);
+    this.py = f64(this.py);
+    this.qx = f64(this.qx);
+    this.qy = f64(this.qy);
+    this.startInside = u8(this.startInside);
+    this.endInside = u8(this.endInside);
+    this.walked = u8(this.walked);
+  }
+}

@@ -1,0 +1,139 @@
+import { orient } from '../orient';
+
+// The view region H of an edge pair: every sight line from i' to j' lies in the
+// convex quadrilateral a0 a1 b0 b1 (anticlockwise), whose sides are i' (side 0), the
+// string a1-b0 (side 1), j' (side 2) and the string b1-a0 (side 3). Sketch units.
+
+/** Where a point lies against one side of H, decided in floats with a margin. */
+export type SidePlace = typeof SURELY_OUTSIDE | typeof UNSURE | typeof SURELY_INSIDE;
+export const SURELY_OUTSIDE = -1;
+export const UNSURE = 0;
+export const SURELY_INSIDE = 1;
+
+/** Sides in the order that rejects most obstacles first: the side strings bound H most tightly. */
+export const SIDE_ORDER: readonly number[] = [1, 3, 0, 2];
+
+/** Result of clipping a segment to H (reused, never allocated per call). */
+export interface SegmentClip {
+  /** Fractions along the segment where the kept piece starts and ends. */
+  t0: number;
+  t1: number;
+  /** Whether the segment's start / end lies strictly inside H. */
+  startInside: boolean;
+  endInside: boolean;
+}
+
+export class ViewRegion {
+  /** Side k runs from (sx, sy) to (ex, ey). */
+  readonly sx = new Float64Array(4);
+  readonly sy = new Float64Array(4);
+  readonly ex = new Float64Array(4);
+  readonly ey = new Float64Array(4);
+  /** 1 when side k has length: a side of zero length bounds nothing. */
+  readonly on = new Uint8Array(4);
+  readonly invLen = new Float64Array(4);
+  /** Float margin of a cross product against side k (side length x sketch extent x 1e-14). */
+  readonly tol = new Float64Array(4);
+  private readonly normal = new Float64Array(4);
+  private normalReady = false;
+  minX = 0;
+  minY = 0;
+  maxX = 0;
+  maxY = 0;
+
+  /** `extent`: largest coordinate magnitude of the (shifted) sketch, scales float margins. */
+  constructor(private readonly extent: number) {}
+
+  /** H for emitting piece a0-a1 and receiving piece b0-b1 (j' faces i', so a0 a1 b0 b1 is anticlockwise). */
+  set(a0x: number, a0y: number, a1x: number, a1y: number, b0x: number, b0y: number, b1x: number, b1y: number): void {
+    this.side(0, a0x, a0y, a1x, a1y);
+    this.side(1, a1x, a1y, b0x, b0y);
+    this.side(2, b0x, b0y, b1x, b1y);
+    this.side(3, b1x, b1y, a0x, a0y);
+    this.minX = Math.min(a0x, a1x, b0x, b1x);
+    this.minY = Math.min(a0y, a1y, b0y, b1y);
+    this.maxX = Math.max(a0x, a1x, b0x, b1x);
+    this.maxY = Math.max(a0y, a1y, b0y, b1y);
+    this.normalReady = false;
+  }
+
+  private side(k: number, x0: number, y0: number, x1: number, y1: number): void {
+    this.sx[k] = x0;
+    this.sy[k] = y0;
+    this.ex[k] = x1;
+    this.ey[k] = y1;
+    this.on[k] = x0 === x1 && y0 === y1 ? 0 : 1;
+    const len = Math.sqrt((x1 - x0) ** 2 + (y1 - y0) ** 2);
+    this.invLen[k] = len > 0 ? 1 / len : 0;
+    this.tol[k] = 1e-14 * len * this.extent;
+  }
+
+  /** Angle of each side's inward (left) normal, radians; computed once per pair, on first use. */
+  normalAngles(): Float64Array {
+    if (!this.normalReady) {
+      for (let k = 0; k < 4; k++) this.normal[k] = Math.atan2(this.ex[k] - this.sx[k], this.sy[k] - this.ey[k]); // (-dy, dx)
+      this.normalReady = true;
+    }
+    return this.normal;
+  }
+
+  /** Signed distance (sketch units) of (x, y) from side k, positive inside H. */
+  signedDistance(k: number, x: number, y: number): number {
+    const dx = this.ex[k] - this.sx[k], dy = this.ey[k] - this.sy[k];
+    return (dx * (y - this.sy[k]) - dy * (x - this.sx[k])) * this.invLen[k];
+  }
+
+  /** Where (x, y) lies against side k, with the float margin `tol[k]`. */
+  place(k: number, x: number, y: number): SidePlace {
+    const d = (this.ex[k] - this.sx[k]) * (y - this.sy[k]) - (this.ey[k] - this.sy[k]) * (x - this.sx[k]);
+    const tol = this.tol[k];
+    return d > tol ? SURELY_INSIDE : d < -tol ? SURELY_OUTSIDE : UNSURE;
+  }
+
+  /** Does the disc of radius r (sketch units) about (cx, cy) meet side k? Float test. */
+  discMeetsSide(k: number, cx: number, cy: number, r: number): boolean {
+    const x0 = this.sx[k], y0 = this.sy[k];
+    const dx = this.ex[k] - x0, dy = this.ey[k] - y0;
+    let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
+    t = t < 0 ? 0 : t > 1 ? 1 : t;
+    const ux = cx - (x0 + t * dx), uy = cy - (y0 + t * dy);
+    return ux * ux + uy * uy < r * r;
+  }
+
+  /**
+   * Clip segment p-q to H with exact orientation tests. Returns true, with the kept
+   * piece in `out`, when the segment passes through H's interior; false when it lies
+   * outside or along the boundary (it then blocks no sight line).
+   */
+  clipSegment(px: number, py: number, qx: number, qy: number, out: SegmentClip): boolean {
+    let t0 = 0, t1 = 1;
+    let pIn = true, qIn = true;
+    for (let k = 0; k < 4; k++) {
+      if (!this.on[k]) continue;
+      const x0 = this.sx[k], y0 = this.sy[k], x1 = this.ex[k], y1 = this.ey[k];
+      // Cheap float rejection first; robust signs only for what survives.
+      const dx = x1 - x0, dy = y1 - y0;
+      const fp = dx * (py - y0) - dy * (px - x0);
+      const fq = dx * (qy - y0) - dy * (qx - x0);
+      const tol = 1e-12 * (Math.abs(dx) + Math.abs(dy)) * (Math.abs(px - x0) + Math.abs(py - y0) + Math.abs(qx - x0) + Math.abs(qy - y0));
+      if (fp < -tol && fq < -tol) return false;
+      const dP = orient(x0, y0, x1, y1, px, py);
+      const dQ = orient(x0, y0, x1, y1, qx, qy);
+      if (dP <= 0 && dQ <= 0) return false;
+      if (dP <= 0) pIn = false;
+      if (dQ <= 0) qIn = false;
+      if (dP < 0) t0 = Math.max(t0, dP / (dP - dQ));
+      else if (dQ < 0) t1 = Math.min(t1, dP / (dP - dQ));
+    }
+    // A corner strictly inside H keeps its piece even when rounding makes the clipped
+    // piece vanish (a corner a hair inside a side): chains must stay connected.
+    if (pIn) t0 = 0;
+    if (qIn) t1 = 1;
+    if (t1 <= t0 && !pIn && !qIn) return false;
+    out.t0 = t0;
+    out.t1 = t1;
+    out.startInside = pIn;
+    out.endInside = qIn;
+    return true;
+  }
+}

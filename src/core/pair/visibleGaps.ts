@@ -1,0 +1,91 @@
+import { sortOrderByKey } from '../scratch';
+import type { FixedPoints } from './fixedPoints';
+
+// Which part of the target j' a piece of the emitting edge sees. Directions from a
+// point p are keyed by sin b (b from i's normal; the component of the unit direction
+// along i, increasing towards a1). From p in the middle of a piece, j' covers the key
+// range [key(b1), key(b0)] and each chain covers [min, max] of its points' keys; the
+// gaps of j's range left uncovered by the chains are what p sees. Inside one piece the
+// same fixed points bound the same gaps, so the gaps found at the middle hold all along.
+
+export class VisibleGaps {
+  /** Gap g is the direction range from fixed point lo[g] (low end) to hi[g] (high end). */
+  lo = new Int32Array(32);
+  hi = new Int32Array(32);
+  count = 0;
+  private key = new Float64Array(64);
+  // Blocked intervals, one per chain that overlaps j's range.
+  private loKey = new Float64Array(32);
+  private hiKey = new Float64Array(32);
+  private loPt = new Int32Array(32);
+  private hiPt = new Int32Array(32);
+  private order = new Int32Array(32);
+
+  /**
+   * Find the gaps seen from point (px, py) (sketch units) on i, whose unit direction
+   * is (tx, ty). Fixed points 0 and 1 are j's ends b0 (high end) and b1 (low end).
+   */
+  find(points: FixedPoints, px: number, py: number, tx: number, ty: number): void {
+    const X = points.x, Y = points.y;
+    const nPts = points.count, nChains = points.chainCount, start = points.chainStart;
+    if (this.key.length < nPts) this.key = new Float64Array(Math.max(nPts, 2 * this.key.length));
+    if (this.loKey.length < nChains) this.growChains(nChains);
+    const key = this.key;
+    for (let k = 0; k < nPts; k++) {
+      const vx = X[k] - px, vy = Y[k] - py;
+      key[k] = (vx * tx + vy * ty) / Math.sqrt(vx * vx + vy * vy);
+    }
+    this.count = 0;
+    const jHi = key[0], jLo = key[1];
+    if (!(jHi > jLo)) return;
+    const loKey = this.loKey, hiKey = this.hiKey, loPt = this.loPt, hiPt = this.hiPt, order = this.order;
+    let nIv = 0;
+    for (let g = 0; g < nChains; g++) {
+      const from = start[g], to = start[g + 1];
+      let lo = Infinity, hi = -Infinity, loP = -1, hiP = -1;
+      for (let k = from; k < to; k++) {
+        const kk = key[k];
+        if (kk < lo) { lo = kk; loP = k; }
+        if (kk > hi) { hi = kk; hiP = k; }
+      }
+      if (hi <= jLo || lo >= jHi) continue;
+      if (lo < jLo) { lo = jLo; loP = 1; }
+      if (hi > jHi) { hi = jHi; hiP = 0; }
+      loKey[nIv] = lo; hiKey[nIv] = hi; loPt[nIv] = loP; hiPt[nIv] = hiP;
+      order[nIv] = nIv;
+      nIv++;
+    }
+    sortOrderByKey(order, loKey, nIv);
+    // Sweep the blocked intervals from j's low end; what they leave uncovered is seen.
+    let cur = jLo, curP = 1;
+    for (let n = 0; n < nIv; n++) {
+      const o = order[n];
+      if (loKey[o] > cur) this.push(curP, loPt[o]);
+      if (hiKey[o] > cur) { cur = hiKey[o]; curP = hiPt[o]; }
+    }
+    if (cur < jHi) this.push(curP, 0);
+  }
+
+  private push(lo: number, hi: number): void {
+    const g = this.count;
+    if (g === this.lo.length) {
+      const lo2 = new Int32Array(2 * g), hi2 = new Int32Array(2 * g);
+      lo2.set(this.lo);
+      hi2.set(this.hi);
+      this.lo = lo2;
+      this.hi = hi2;
+    }
+    this.lo[g] = lo;
+    this.hi[g] = hi;
+    this.count = g + 1;
+  }
+
+  private growChains(n: number): void {
+    const size = Math.max(n, 2 * this.loKey.length);
+    this.loKey = new Float64Array(size);
+    this.hiKey = new Float64Array(size);
+    this.loPt = new Int32Array(size);
+    this.hiPt = new Int32Array(size);
+    this.order = new Int32Array(size);
+  }
+}
