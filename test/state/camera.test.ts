@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { fitCamera, toScreen, toSketch, zoomAt } from '../../src/state/camera';
-import { problemMarks } from '../../src/ui/canvas/problems';
 
 describe('camera', () => {
   it('maps sketch to screen with y up, and back', () => {
@@ -23,14 +22,5 @@ describe('camera', () => {
     const c = fitCamera({ minX: 0, minY: 0, maxX: 4, maxY: 2 }, 840, 480, 20);
     expect(c.scale).toBe(200);
     expect(toScreen(c, [2, 1])).toEqual([420, 240]);
-  });
-});
-
-describe('problem marks', () => {
-  it('finds the shape and the place a message names', () => {
-    const m = problemMarks(["shape 2 (solid 'block'): edge 3 crosses the enclosure wall (shape 1, edge 2) at (4, 0.75); solids must lie inside"], 2);
-    expect([...m.shapes]).toEqual([1]);
-    expect(m.points).toEqual([[4, 0.75]]);
-    expect(problemMarks(['shape 9: too far'], 2).shapes.size).toBe(0);
   });
 });

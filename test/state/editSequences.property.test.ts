@@ -62,7 +62,7 @@ describe('random edit sequences', () => {
           const read = documentApi.restore(now);
           if (!read.ok) {
             expect(read.errors.length).toBeGreaterThan(0);
-            expect(read.errors.every((m) => m.length > 10)).toBe(true);
+            expect(read.errors.every((e) => e.message.length > 10)).toBe(true);
             continue;
           }
           expect(documentApi.restore(serialize(read.sketch)).ok).toBe(true);

@@ -70,6 +70,6 @@ describe('awkward names', () => {
     expect(Object.getPrototypeOf(b.surfaces ?? {})).toBe(Object.prototype);
     const read = restore(b);
     expect(read.ok).toBe(false);
-    if (!read.ok) expect(read.errors.join(' ')).toMatch(/__proto__/);
+    if (!read.ok) expect(read.errors.map((e) => e.message).join(' ')).toMatch(/__proto__/);
   });
 });
