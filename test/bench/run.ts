@@ -7,11 +7,11 @@ import type { SceneInput } from '../../src/core/scene';
 import { tubeScene } from './scenes';
 import { demoSketch } from '../../src/state/demo';
 import { restore, toScene } from '../../src/document';
-import { DenseLuSolver } from '../../src/core/linearSolve';
+import { DenseLuSolver } from '../../src/core/exchange';
 
 function demoScene(): SceneInput {
   const r = restore(demoSketch);
-  if (!r.ok) throw new Error(`demo sketch invalid: ${r.errors.join('; ')}`);
+  if (!r.ok) throw new Error(`demo sketch invalid: ${r.errors.map((e) => e.message).join('; ')}`);
   return toScene(r.sketch).scene;
 }
 
