@@ -4,14 +4,14 @@
 // depth; net flux and radiosity W/m^2; totals W. Net heat and net flux are
 // positive when a surface gives off more radiation than it absorbs.
 // A surface without properties gets emissivity 0.9 and is adiabatic
-// (reradiating), see src/core/exchangeSetup.ts; the sketch-to-solver mapping
-// is shared with the app (src/document/exchangeInput.ts).
-import { ExchangeError, solveExchange, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
+// (reradiating), see src/core/exchange/setup.ts; the sketch-to-solver mapping
+// and the wording of failures are shared with the app (src/document/exchangeInput.ts).
+import type { ExchangeResult, SurfaceCondition } from '../core/exchange';
 import type { ViewFactorResult } from '../core/scene';
 import { computeViewFactors } from '../core/viewFactors';
 import { toScene, type Sketch } from '../document';
-import { conditionInTable, exchangeCsv, seesSurroundings } from '../document/exchangeCsv';
-import { sketchExchangeInput } from '../document/exchangeInput';
+import { SURROUNDINGS_LABEL, conditionInTable, exchangeCsv, seesSurroundings } from '../document/exchangeCsv';
+import { solveSketchExchange } from '../document/exchangeInput';
 import type { CliIO } from './io';
 import { parseArgs } from './args';
 import { readSketchFile } from './readSketch';
@@ -70,19 +70,13 @@ export function runExchange(args: string[], io: CliIO): number {
     io.err(`exchange: ${file}: internal error: the view factors came out non-finite; please report this file\n`);
     return 1;
   }
-  let result: ExchangeResult;
-  let conditions: ReadonlyArray<SurfaceCondition>;
-  try {
-    const input = sketchExchangeInput(sketch, surfaceNames, factors, depthArg);
-    conditions = input.conditions;
-    result = solveExchange(input);
-  } catch (error) {
-    if (error instanceof ExchangeError) {
-      io.err(`exchange: ${file}: ${error.message}\n`);
-      return 1;
-    }
-    throw error;
+  const outcome = solveSketchExchange(sketch, surfaceNames, factors, depthArg);
+  if (!outcome.ok) {
+    io.err(`exchange: ${file}: ${outcome.message}\n`);
+    return 1;
   }
+  const { result } = outcome;
+  const conditions = outcome.input.conditions;
   const report: Report = { file, sketch, names: surfaceNames, factors, result, conditions };
   if (format === 'json') io.out(`${JSON.stringify(exchangeJson(report))}\n`);
   else if (format === 'csv') io.out(exchangeCsv({ units: sketch.units, names: surfaceNames, surfaceLength: factors.surfaceLength, result, conditions }));
@@ -162,14 +156,14 @@ function exchangeTable({ file, sketch, names, factors, result: r, conditions }: 
     return row;
   });
   if (open) {
-    const row = ['(surroundings)', '', '1', 'black', r.surroundingsTemperature!.toFixed(2), fmt(r.surroundingsNetHeat), '', ''];
+    const row = [SURROUNDINGS_LABEL.name, '', '1', SURROUNDINGS_LABEL.condition, r.surroundingsTemperature!.toFixed(2), fmt(r.surroundingsNetHeat), '', ''];
     if (withDepth) row.push(fmt(r.surroundingsNetHeatTotal!));
     body.push(row);
   }
   lines.push(...columns([head, ...body]));
   lines.push('', "Net exchange q'_ij, W per metre of depth, from row to column:");
   const matrixHead = ['', ...shown.map((s) => (s.length > 12 ? `${s.slice(0, 11)}…` : s))];
-  if (open) matrixHead.push('(surroundings)');
+  if (open) matrixHead.push(SURROUNDINGS_LABEL.name);
   const matrixRows = names.map((_, i) => {
     const row = [shown[i]];
     for (let j = 0; j < n; j++) row.push(fmt(r.exchange[i * n + j]));

@@ -1,7 +1,11 @@
 // The heat-exchange results as CSV, one writer for the command line and the app.
 import { emissivePower, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
 import { toCsv, type CsvCell } from './csv';
+import { CONDITION_LABEL, SURROUNDINGS_LABEL, seesSurroundings } from './exchange/labels';
 import type { Units } from './units';
+
+// Where the app's state layer reads the table labels (one set of words for the command line and the app).
+export { CONDITION_LABEL, SURROUNDINGS_LABEL, conditionInTable, seesSurroundings } from './exchange/labels';
 
 export interface ExchangeReport {
   /** Units of the lengths (the sketch file's). */
@@ -12,22 +16,6 @@ export interface ExchangeReport {
   result: ExchangeResult;
   conditions: ReadonlyArray<SurfaceCondition>;
 }
-
-/** How each condition is named in tables and CSV. */
-export const CONDITION_LABEL: Record<SurfaceCondition['kind'], string> = {
-  temperature: 'temperature',
-  heatFlux: 'heat flux',
-  adiabatic: 'adiabatic',
-  opening: 'opening',
-};
-
-/** The condition as results tables name it: "(T solved)" where the temperature is an answer, not an input. */
-export function conditionInTable(kind: SurfaceCondition['kind']): string {
-  return kind === 'adiabatic' || kind === 'heatFlux' ? `${CONDITION_LABEL[kind]} (T solved)` : CONDITION_LABEL[kind];
-}
-
-/** True when some surface sees the surroundings (an open sketch). */
-export const seesSurroundings = (r: ExchangeResult) => r.surroundingsViewFactor.some((f) => f > 0);
 
 /**
  * One row per surface (and one for the surroundings of an open sketch), units in
@@ -64,7 +52,7 @@ export function exchangeCsv({ units, names, surfaceLength, result: r, conditions
   });
   if (seesSurroundings(r)) {
     const Ts = r.surroundingsTemperature!;
-    rows.push(['(surroundings)', '', 1, 'surroundings', Ts, r.surroundingsNetHeat, '', emissivePower(Ts), ...(withDepth ? [r.surroundingsNetHeatTotal!] : [])]);
+    rows.push([SURROUNDINGS_LABEL.name, '', 1, SURROUNDINGS_LABEL.condition, Ts, r.surroundingsNetHeat, '', emissivePower(Ts), ...(withDepth ? [r.surroundingsNetHeatTotal!] : [])]);
   }
   return toCsv(rows);
 }

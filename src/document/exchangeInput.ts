@@ -1,14 +1,17 @@
 // From a sketch file and its view factors to a gray-diffuse exchange solve.
 // The one place where the file's lengths become metres and its `surfaces` and
 // `settings` become solver input, so the command line and the app agree.
-// Defaults for a surface with no properties: src/core/exchangeSetup.ts.
-import { ExchangeError, solveExchange, type ExchangeInput, type ExchangeResult } from '../core/exchange';
-import { exchangeInputFor } from '../core/exchangeSetup';
+// Defaults for a surface with no properties: src/core/exchange/setup.ts; the
+// one-condition rule: src/document/exchange/conditions.ts; wording of
+// failures: src/document/exchange/messages.ts.
+import { exchangeInputFor, solveExchange, type ExchangeInput, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
+import { conditionOf } from './exchange/conditions';
+import { exchangeFailureMessage, type ConditionsFailure, type SketchExchangeFailure } from './exchange/messages';
 import type { SketchSettings, SurfaceProperties } from './schema';
 import { METRES_PER_UNIT, type Units } from './units';
 
 // For the app, which reaches the core through this layer.
-export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY } from '../core/exchangeSetup';
+export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY } from '../core/exchange';
 export type { ExchangeResult, SurfaceCondition } from '../core/exchange';
 
 /** What the exchange needs of a sketch: its units, surface properties and settings (as the file holds them). */
@@ -30,24 +33,47 @@ export interface SurfaceFactors {
  * Solver input for a sketch: lengths converted from the file's units to metres
  * (area per metre of depth), properties per surface name with the defaults
  * applied, surroundings temperature (K) and depth (m) from the settings;
- * `depth` overrides settings.depth. Throws ExchangeError when a surface gives
- * more than one condition.
+ * `depth` overrides settings.depth. Refused (code 'more-than-one-condition')
+ * when a surface gives more than one condition.
  */
 export function sketchExchangeInput(
   sketch: SketchExchangePart,
   surfaceNames: ReadonlyArray<string>,
   factors: SurfaceFactors,
   depth?: number,
-): ExchangeInput {
+): { ok: true; input: ExchangeInput } | ConditionsFailure {
+  const surfaces = sketch.surfaces ?? {};
+  // Own keys only: a surface named 'constructor' has no inherited properties.
+  const props = surfaceNames.map((name) => (Object.hasOwn(surfaces, name) ? surfaces[name] : undefined));
+  const conditions: (SurfaceCondition | undefined)[] = [];
+  for (let i = 0; i < props.length; i++) {
+    const c = conditionOf(props[i]);
+    if (!c.ok) return { ok: false, code: 'more-than-one-condition', surface: i, kinds: c.kinds };
+    conditions.push(c.condition);
+  }
   const metres = METRES_PER_UNIT[sketch.units];
-  return exchangeInputFor({
-    names: surfaceNames,
-    properties: sketch.surfaces ?? {},
+  const input = exchangeInputFor({
+    conditions,
+    emissivity: props.map((p) => p?.emissivity),
     viewFactors: factors.F,
     lengthMetres: Array.from(factors.surfaceLength, (L) => L * metres),
     surroundingsTemperature: sketch.settings?.surroundingsTemperature,
     depth: depth ?? sketch.settings?.depth,
   });
+  return { ok: true, input };
+}
+
+/** The exchange of a sketch, or the coded reason there is none (word it with exchangeFailureMessage). */
+export function sketchExchange(
+  sketch: SketchExchangePart,
+  surfaceNames: ReadonlyArray<string>,
+  factors: SurfaceFactors,
+  depth?: number,
+): { ok: true; input: ExchangeInput; result: ExchangeResult } | SketchExchangeFailure {
+  const prepared = sketchExchangeInput(sketch, surfaceNames, factors, depth);
+  if (!prepared.ok) return prepared;
+  const solved = solveExchange(prepared.input);
+  return solved.ok ? { ok: true, input: prepared.input, result: solved.result } : solved;
 }
 
 export type SketchExchangeOutcome =
@@ -58,7 +84,7 @@ export type SketchExchangeOutcome =
 /**
  * Solves the sketch's exchange (SI results: W per metre of depth, W/m^2, K;
  * see solveExchange). Problems that are out of range or have no unique answer
- * come back as a message instead of an exception.
+ * come back as a message naming the surface, never as an exception.
  */
 export function solveSketchExchange(
   sketch: SketchExchangePart,
@@ -66,11 +92,7 @@ export function solveSketchExchange(
   factors: SurfaceFactors,
   depth?: number,
 ): SketchExchangeOutcome {
-  try {
-    const input = sketchExchangeInput(sketch, surfaceNames, factors, depth);
-    return { ok: true, input, result: solveExchange(input) };
-  } catch (error) {
-    if (error instanceof ExchangeError) return { ok: false, message: error.message, surface: error.surface };
-    throw error;
-  }
+  const outcome = sketchExchange(sketch, surfaceNames, factors, depth);
+  if (outcome.ok) return outcome;
+  return { ok: false, message: exchangeFailureMessage(outcome, surfaceNames), surface: outcome.surface };
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { STEFAN_BOLTZMANN as SIGMA, emissivePower, solveExchange, type SurfaceCondition } from '../../src/core/exchange';
-import { DenseLuSolver } from '../../src/core/linearSolve';
+import { STEFAN_BOLTZMANN as SIGMA, DenseLuSolver, emissivePower, type SurfaceCondition } from '../../src/core/exchange';
+import { solved } from './exchange.solved';
 
 // Closed forms of gray-diffuse exchange, each against its published source.
 // The radiosity solve is exact up to rounding, so comparisons are at 1e-12
@@ -26,7 +26,7 @@ describe('two-surface enclosure', () => {
   it('net heat matches q = sigma (T1^4 - T2^4) / ((1-e1)/(e1 A1) + 1/(A1 F12) + (1-e2)/(e2 A2))', () => {
     // Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.3.3, eq. 13.23 (equation number from memory).
     const [T1, T2, e1, e2] = [1100, 400, 0.8, 0.5];
-    const r = solveExchange({ viewFactors: F, area: [A1, A2], emissivity: [e1, e2], conditions: [T(T1), T(T2)] });
+    const r = solved({ viewFactors: F, area: [A1, A2], emissivity: [e1, e2], conditions: [T(T1), T(T2)] });
     const q = (SIGMA * (T1 ** 4 - T2 ** 4)) / ((1 - e1) / (e1 * A1) + 1 / (A1 * 1) + (1 - e2) / (e2 * A2));
     close(r.netHeat[0], q);
     close(r.netHeat[1], -q);
@@ -46,7 +46,7 @@ describe('two-surface enclosure', () => {
     const [T1, T2, e1, e2] = [950, 500, 0.35, 0.7];
     const R = (1 - e1) / (e1 * A1) + 1 / A1 + (1 - e2) / (e2 * A2);
     const q = (SIGMA * (T1 ** 4 - T2 ** 4)) / R;
-    const r = solveExchange({ viewFactors: F, area: [A1, A2], emissivity: [e1, e2], conditions: [FLUX(q / A1), T(T2)] });
+    const r = solved({ viewFactors: F, area: [A1, A2], emissivity: [e1, e2], conditions: [FLUX(q / A1), T(T2)] });
     close(r.temperature[0], T1);
     close(r.netHeat[1], -q);
   });
@@ -60,7 +60,7 @@ describe('special two-surface enclosures (Incropera et al., 6th ed., Table 13.3)
       [1500, 1200, 0.05, 0.95],
       [300, 700, 1, 0.4],
     ]) {
-      const r = solveExchange({ viewFactors: [0, 1, 1, 0], area: [1, 1], emissivity: [e1, e2], conditions: [T(T1), T(T2)] });
+      const r = solved({ viewFactors: [0, 1, 1, 0], area: [1, 1], emissivity: [e1, e2], conditions: [T(T1), T(T2)] });
       const q = (SIGMA * (T1 ** 4 - T2 ** 4)) / (1 / e1 + 1 / e2 - 1);
       close(r.netFlux[0], q);
       close(r.netFlux[1], -q);
@@ -72,7 +72,7 @@ describe('special two-surface enclosures (Incropera et al., 6th ed., Table 13.3)
     const [r1, r2] = [0.05, 0.2];
     const [A1, A2] = [2 * Math.PI * r1, 2 * Math.PI * r2];
     const [T1, T2, e1, e2] = [700, 320, 0.9, 0.15];
-    const r = solveExchange({
+    const r = solved({
       viewFactors: [0, 1, r1 / r2, 1 - r1 / r2],
       area: [A1, A2],
       emissivity: [e1, e2],
@@ -86,7 +86,7 @@ describe('special two-surface enclosures (Incropera et al., 6th ed., Table 13.3)
   it('small convex object in a large cavity: q = sigma A1 e1 (T1^4 - T2^4)', () => {
     // A2 >> A1; as the open-sketch limit: the body sees only surroundings at T2 (black).
     const [T1, T2, e1] = [900, 290, 0.45];
-    const r = solveExchange({ viewFactors: [0], area: [0.3], emissivity: [e1], conditions: [T(T1)], surroundingsTemperature: T2 });
+    const r = solved({ viewFactors: [0], area: [0.3], emissivity: [e1], conditions: [T(T1)], surroundingsTemperature: T2 });
     const q = SIGMA * 0.3 * e1 * (T1 ** 4 - T2 ** 4);
     close(r.netHeat[0], q);
     close(r.surroundingsNetHeat, -q);
@@ -117,7 +117,7 @@ describe('three-surface enclosure with a reradiating surface', () => {
   it('net heat, radiosities and the reradiating surface temperature match the network solution', () => {
     for (const eR of [0.3, 0.95, 1]) {
       // The reradiating surface's emissivity has no effect (Incropera, sec. 13.3.4).
-      const r = solveExchange({ viewFactors: F, area: L, emissivity: [e1, e2, eR], conditions: [T(T1), T(T2), ADIABATIC] });
+      const r = solved({ viewFactors: F, area: L, emissivity: [e1, e2, eR], conditions: [T(T1), T(T2), ADIABATIC] });
       close(r.netHeat[0], q);
       close(r.netHeat[1], -q);
       expect(r.netHeat[2]).toBe(0);
@@ -131,7 +131,7 @@ describe('three-surface enclosure with a reradiating surface', () => {
   });
 
   it('the exchange matrix splits q between the direct path and the path through R', () => {
-    const r = solveExchange({ viewFactors: F, area: L, emissivity: [e1, e2, 0.5], conditions: [T(T1), T(T2), ADIABATIC] });
+    const r = solved({ viewFactors: F, area: L, emissivity: [e1, e2, 0.5], conditions: [T(T1), T(T2), ADIABATIC] });
     close(r.exchange[0 * 3 + 1], L[0] * f(0, 1) * (J1 - J2));
     close(r.exchange[0 * 3 + 2], L[0] * f(0, 2) * (J1 - JR));
     // What R receives from 1 it passes to 2.
@@ -147,7 +147,7 @@ describe('black surfaces (emissivity 1)', () => {
   it('radiosity equals emissive power and q_i = sum_j A_i F_ij sigma (T_i^4 - T_j^4)', () => {
     // Blackbody exchange (Incropera et al., 6th ed., sec. 13.2, eq. 13.17, from memory).
     const temps = [1200, 600, 350];
-    const r = solveExchange({ viewFactors: F, area: L, emissivity: [1, 1, 1], conditions: temps.map(T) });
+    const r = solved({ viewFactors: F, area: L, emissivity: [1, 1, 1], conditions: temps.map(T) });
     for (let i = 0; i < 3; i++) {
       expect(r.radiosity[i]).toBe(emissivePower(temps[i]));
       let q = 0;
@@ -158,7 +158,7 @@ describe('black surfaces (emissivity 1)', () => {
 
   it('black surfaces with a reradiating one: J_R is the view-weighted mean of the others', () => {
     // Incropera et al., 6th ed., sec. 13.3.4 with R1 = R2 = 0 (from memory).
-    const r = solveExchange({ viewFactors: F, area: L, emissivity: [1, 1, 1], conditions: [T(1000), T(400), ADIABATIC] });
+    const r = solved({ viewFactors: F, area: L, emissivity: [1, 1, 1], conditions: [T(1000), T(400), ADIABATIC] });
     const JR = (L[0] * f(0, 2) * emissivePower(1000) + L[1] * f(1, 2) * emissivePower(400)) / (L[0] * f(0, 2) + L[1] * f(1, 2));
     close(r.radiosity[2], JR);
     close(r.temperature[2], (JR / SIGMA) ** 0.25);
@@ -167,7 +167,7 @@ describe('black surfaces (emissivity 1)', () => {
   it('a black surface with an imposed flux: E = J, so T = (J/sigma)^(1/4)', () => {
     // Parallel planes, Incropera Table 13.3 with e1 = 1: q" = sigma (T1^4 - T2^4) / (1/e2).
     const [T2, e2, q] = [400, 0.3, 2500];
-    const r = solveExchange({ viewFactors: [0, 1, 1, 0], area: [1, 1], emissivity: [1, e2], conditions: [FLUX(q), T(T2)] });
+    const r = solved({ viewFactors: [0, 1, 1, 0], area: [1, 1], emissivity: [1, e2], conditions: [FLUX(q), T(T2)] });
     const T1 = (T2 ** 4 + q / (SIGMA * e2)) ** 0.25;
     close(r.temperature[0], T1);
     close(r.radiosity[0], emissivePower(T1));
@@ -190,14 +190,14 @@ describe('openings and surroundings', () => {
     const area = [1, 1, 1, 1];
     const conditions = [T(900), ADIABATIC, FLUX(-1200)];
     const eps = [0.6, 0.8, 0.3];
-    const withOpening = solveExchange({
+    const withOpening = solved({
       viewFactors: F.flat(),
       area,
       emissivity: [...eps, 0.5],
       conditions: [...conditions, { kind: 'opening' }],
       surroundingsTemperature: 300,
     });
-    const open = solveExchange({
+    const open = solved({
       viewFactors: F.slice(0, 3).flatMap((row) => row.slice(0, 3)),
       area: area.slice(0, 3),
       emissivity: eps,
@@ -216,7 +216,7 @@ describe('openings and surroundings', () => {
   });
 
   it('everything at one temperature: no net heat anywhere, J = sigma T^4 (equilibrium, Kirchhoff; common practice)', () => {
-    const r = solveExchange({
+    const r = solved({
       viewFactors: [0, 0.4, 0.5, 0.1],
       area: [1, 0.8],
       emissivity: [0.3, 0.7],
@@ -235,7 +235,7 @@ describe('openings and surroundings', () => {
 
 describe('depth', () => {
   it('totals are per-metre values times the depth in metres', () => {
-    const r = solveExchange({
+    const r = solved({
       viewFactors: [0, 1, 1, 0],
       area: [2, 2],
       emissivity: [0.5, 0.5],
@@ -255,11 +255,11 @@ describe('workspace reuse', () => {
     const workspace = new DenseLuSolver(2);
     for (const [T1, e1] of [[900, 0.3], [1200, 0.8], [500, 1]]) {
       const input = { viewFactors: [0, 1, 1, 0], area: [1, 1], emissivity: [e1, 0.6], conditions: [T(T1), T(300)] };
-      const r = solveExchange(input, workspace);
+      const r = solved(input, workspace);
       close(r.netFlux[0], (SIGMA * (T1 ** 4 - 300 ** 4)) / (1 / e1 + 1 / 0.6 - 1));
     }
     // A workspace of another size is left alone.
-    const r3 = solveExchange({ viewFactors: [0], area: [1], emissivity: [0.5], conditions: [T(400)], surroundingsTemperature: 300 }, workspace);
+    const r3 = solved({ viewFactors: [0], area: [1], emissivity: [0.5], conditions: [T(400)], surroundingsTemperature: 300 }, workspace);
     close(r3.netFlux[0], 0.5 * SIGMA * (400 ** 4 - 300 ** 4));
   });
 });

@@ -4,10 +4,10 @@ import { Matrix, solve as mlSolve } from 'ml-matrix';
 import {
   STEFAN_BOLTZMANN as SIGMA,
   emissivePower,
-  solveExchange,
   type ExchangeInput,
   type SurfaceCondition,
 } from '../../src/core/exchange';
+import { solved } from './exchange.solved';
 
 // Random well-posed problems, an independent solve in another formulation,
 // and the conservation / reciprocity properties any exchange solution has.
@@ -141,7 +141,7 @@ describe('against an independent solve (ml-matrix, q-E_b formulation)', () => {
       ],
       surroundingsTemperature: 310,
     };
-    const r = solveExchange(input);
+    const r = solved(input);
     const ref = oracle(input);
     for (let i = 0; i < 5; i++) {
       expect(Math.abs(r.netFlux[i] - ref.q[i])).toBeLessThanOrEqual(REL * maxAbs(ref.q));
@@ -153,7 +153,7 @@ describe('against an independent solve (ml-matrix, q-E_b formulation)', () => {
   it('random problems agree (fast-check)', () => {
     fc.assert(
       fc.property(problemArb({ allowOpening: true }), ({ input }) => {
-        const r = solveExchange(input);
+        const r = solved(input);
         const ref = oracle(input);
         const qScale = maxAbs(r.radiosity); // fluxes are differences of radiosities
         for (let i = 0; i < input.conditions.length; i++) {
@@ -170,7 +170,7 @@ describe('properties of every solution (random problems)', () => {
   it('energy is conserved: sum of net heat including the surroundings is zero (first law; common practice)', () => {
     fc.assert(
       fc.property(problemArb({ allowOpening: true }), ({ input }) => {
-        const r = solveExchange(input);
+        const r = solved(input);
         const sum = Array.from(r.netHeat).reduce((a, b) => a + b, r.surroundingsNetHeat);
         expect(Math.abs(sum)).toBeLessThanOrEqual(REL * heatScale(input.area, r.radiosity));
         // The reported ratio: tiny whenever net heats stand above rounding, and never noise/noise.
@@ -185,7 +185,7 @@ describe('properties of every solution (random problems)', () => {
   it('the exchange matrix is antisymmetric and its rows add up to each net heat (reciprocity A_i F_ij = A_j F_ji; Incropera, sec. 13.1)', () => {
     fc.assert(
       fc.property(problemArb({ allowOpening: true }), ({ input }) => {
-        const r = solveExchange(input);
+        const r = solved(input);
         const n = r.surfaceCount;
         const scale = heatScale(input.area, r.radiosity);
         for (let i = 0; i < n; i++) {
@@ -204,7 +204,7 @@ describe('properties of every solution (random problems)', () => {
   it('every condition holds, checked from J alone: J - G = q, J = e E + (1 - e) G', () => {
     fc.assert(
       fc.property(problemArb({ allowOpening: true }), ({ input }) => {
-        const r = solveExchange(input);
+        const r = solved(input);
         const n = r.surfaceCount;
         const Es = input.surroundingsTemperature === undefined ? 0 : emissivePower(input.surroundingsTemperature);
         const Jscale = maxAbs(r.radiosity);
@@ -235,7 +235,7 @@ describe('properties of every solution (random problems)', () => {
   it('reradiating surfaces settle between the coldest and hottest fixed temperatures (maximum principle; common practice)', () => {
     fc.assert(
       fc.property(problemArb({ allowFlux: false, allowOpening: true }), ({ input }) => {
-        const r = solveExchange(input);
+        const r = solved(input);
         const fixed = input.conditions.flatMap((c) => (c.kind === 'temperature' ? [c.temperature] : []));
         if (input.surroundingsTemperature !== undefined) fixed.push(input.surroundingsTemperature);
         const lo = Math.min(...fixed);
@@ -254,9 +254,9 @@ describe('properties of every solution (random problems)', () => {
   it("a reradiating surface's emissivity changes nothing (Incropera, sec. 13.3.4)", () => {
     fc.assert(
       fc.property(problemArb(), fc.double({ min: 0.01, max: 1, noNaN: true }), ({ input }, e) => {
-        const a = solveExchange(input);
+        const a = solved(input);
         const emissivity = Array.from(input.emissivity, (v, i) => (input.conditions[i].kind === 'adiabatic' ? e : v));
-        const b = solveExchange({ ...input, emissivity });
+        const b = solved({ ...input, emissivity });
         const scale = heatScale(input.area, a.radiosity);
         for (let i = 0; i < a.surfaceCount; i++) {
           expect(Math.abs(a.netHeat[i] - b.netHeat[i])).toBeLessThanOrEqual(REL * scale);
@@ -271,7 +271,7 @@ describe('properties of every solution (random problems)', () => {
     fc.assert(
       fc.property(problemArb({ allowFlux: false }), fc.double({ min: 200, max: 2500, noNaN: true }), ({ input }, t) => {
         const conditions = input.conditions.map((c): SurfaceCondition => (c.kind === 'temperature' ? { kind: 'temperature', temperature: t } : c));
-        const r = solveExchange({ ...input, conditions, surroundingsTemperature: input.surroundingsTemperature === undefined ? undefined : t });
+        const r = solved({ ...input, conditions, surroundingsTemperature: input.surroundingsTemperature === undefined ? undefined : t });
         const E = emissivePower(t);
         for (let i = 0; i < r.surfaceCount; i++) {
           expect(Math.abs(r.netFlux[i])).toBeLessThanOrEqual(REL * E);
@@ -293,8 +293,8 @@ describe('properties of every solution (random problems)', () => {
           : c,
         );
         const Ts = input.surroundingsTemperature;
-        const a = solveExchange(input);
-        const b = solveExchange({ ...input, conditions, surroundingsTemperature: Ts === undefined ? undefined : Ts * scaleT });
+        const a = solved(input);
+        const b = solved({ ...input, conditions, surroundingsTemperature: Ts === undefined ? undefined : Ts * scaleT });
         const scale = maxAbs(a.radiosity);
         for (let i = 0; i < a.surfaceCount; i++) {
           expect(Math.abs(b.radiosity[i] - s * a.radiosity[i])).toBeLessThanOrEqual(REL * s * scale);
@@ -321,7 +321,7 @@ describe('size', () => {
       emissivity[j] = 0.8;
       conditions.push({ kind: 'temperature', temperature: 600 + p }, { kind: 'temperature', temperature: 300 });
     }
-    const r = solveExchange({ viewFactors: F, area: new Float64Array(n).fill(1), emissivity, conditions });
+    const r = solved({ viewFactors: F, area: new Float64Array(n).fill(1), emissivity, conditions });
     for (let p = 0; p < n / 2; p += 37) {
       const q = (SIGMA * ((600 + p) ** 4 - 300 ** 4)) / (1 / emissivity[2 * p] + 1 / 0.8 - 1);
       expect(Math.abs(r.netFlux[2 * p] - q)).toBeLessThanOrEqual(1e-12 * q);

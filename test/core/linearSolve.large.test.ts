@@ -1,5 +1,5 @@
 import { expect, it } from 'vitest';
-import { DenseLuSolver } from '../../src/core/linearSolve';
+import { DenseLuSolver } from '../../src/core/exchange';
 
 // The largest size we promise (~2000 surfaces after subdivision) solves
 // accurately on the accelerated path. Its time is measured by `npm run bench`.

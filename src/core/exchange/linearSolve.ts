@@ -8,28 +8,17 @@
 //   cache-sized blocks, or by a row-oriented JavaScript loop as a fallback.
 //   Pivot rows are swapped over the full row at once (cheap in row-major).
 // - After factoring, the 1-norm condition number is estimated (Hager's method
-//   as refined by Higham, the estimator LAPACK uses): a few O(n^2) solves.
+//   as refined by Higham, conditionEstimate.ts): a few O(n^2) solves.
 //   Relative error in the solution is about (condition number) x 1.1e-16.
 
+import { estimateInverseNormOne } from './conditionEstimate';
+import { LinearSolveError } from './linearSolveError';
 import { createProductKernel, type ProductKernel } from './linearSolveKernel';
+
+export { LinearSolveError, type LinearSolveProblem } from './linearSolveError';
 
 /** Dimensionless. Below this reciprocal condition number a system is refused as ill-conditioned: fewer than ~4 of 16 digits could be trusted. */
 export const DEFAULT_MIN_RECIPROCAL_CONDITION = 1e-12;
-
-export type LinearSolveProblem = 'singular' | 'ill-conditioned' | 'not-finite' | 'not-factored';
-
-/** Thrown for a system with no unique, trustworthy solution; `problem` says which kind. */
-export class LinearSolveError extends Error {
-  readonly problem: LinearSolveProblem;
-  /** Estimated reciprocal 1-norm condition number (0 when exactly singular, NaN when unknown). */
-  readonly reciprocalCondition: number;
-  constructor(problem: LinearSolveProblem, message: string, reciprocalCondition = Number.NaN) {
-    super(message);
-    this.name = 'LinearSolveError';
-    this.problem = problem;
-    this.reciprocalCondition = reciprocalCondition;
-  }
-}
 
 export interface FactorOptions {
   /** Refuse the system when the estimated reciprocal condition number is below this (default 1e-12; 0 accepts anything not exactly singular). */
@@ -70,7 +59,7 @@ export class DenseLuSolver {
   private rcond = Number.NaN;
 
   constructor(n: number, options: SolverOptions = {}) {
-    if (!Number.isInteger(n) || n < 0) throw new RangeError(`matrix size must be a whole number >= 0, got ${n}`);
+    if (!Number.isInteger(n) || n < 0) throw new LinearSolveError('bad-size', { value: n });
     this.n = n;
     const instance = options.accelerate === false || n < 8 ? null : createProductKernel(n * n);
     this.kernel = instance ? instance.kernel : null;
@@ -106,16 +95,12 @@ export class DenseLuSolver {
     const norm = this.normOneAndCheck();
     this.factorColumns(0, n);
     this.factored = true;
-    const inverseNorm = this.estimateInverseNormOne();
+    const inverseNorm = estimateInverseNormOne(this, this.workX, this.workY, this.workZ);
     const rcond = norm > 0 && Number.isFinite(inverseNorm) && inverseNorm > 0 ? 1 / (norm * inverseNorm) : 0;
     this.rcond = rcond;
     if (!(rcond >= minRcond)) {
       this.factored = rcond > 0;
-      throw new LinearSolveError(
-        'ill-conditioned',
-        `ill-conditioned matrix: reciprocal condition number about ${rcond.toExponential(1)} (limit ${minRcond.toExponential(1)}), so the solution would have few or no correct digits`,
-        rcond,
-      );
+      throw new LinearSolveError('ill-conditioned', { reciprocalCondition: rcond, limit: minRcond });
     }
     return rcond;
   }
@@ -177,8 +162,8 @@ export class DenseLuSolver {
   }
 
   private requireFactored(b: Float64Array): void {
-    if (!this.factored) throw new LinearSolveError('not-factored', 'solve() needs a successful factor() first');
-    if (b.length !== this.n) throw new RangeError(`right-hand side has length ${b.length}, expected ${this.n}`);
+    if (!this.factored) throw new LinearSolveError('not-factored');
+    if (b.length !== this.n) throw new LinearSolveError('bad-size', { value: b.length, expected: this.n });
   }
 
   /** 1-norm (largest column sum of |a_ij|); throws for NaN or infinite entries. */
@@ -195,10 +180,10 @@ export class DenseLuSolver {
       if (!Number.isFinite(col[j])) {
         for (let i = 0; i < n; i++) {
           if (!Number.isFinite(a[i * n + j])) {
-            throw new LinearSolveError('not-finite', `matrix entry (${i}, ${j}) is ${a[i * n + j]}, not a finite number`);
+            throw new LinearSolveError('not-finite', { row: i, column: j, value: a[i * n + j] });
           }
         }
-        throw new LinearSolveError('not-finite', `column ${j} of the matrix overflows`);
+        throw new LinearSolveError('not-finite', { column: j, value: col[j] });
       }
       if (col[j] > norm) norm = col[j];
     }
@@ -233,7 +218,7 @@ export class DenseLuSolver {
         }
       }
       if (!(big > 0)) {
-        throw new LinearSolveError('singular', `singular matrix: no nonzero pivot in column ${k}`, 0);
+        throw new LinearSolveError('singular', { column: k, reciprocalCondition: 0 });
       }
       pivot[k] = p;
       const rk = k * n;
@@ -336,48 +321,6 @@ export class DenseLuSolver {
       }
     }
   }
-
-  /** Estimate of ||A^{-1}||_1 from the factors (a lower bound, usually within a factor of 3). */
-  private estimateInverseNormOne(): number {
-    const n = this.n;
-    const x = this.workX;
-    const y = this.workY;
-    const z = this.workZ;
-    x.fill(1 / n);
-    let est = 0;
-    for (let iter = 0; iter < 5; iter++) {
-      y.set(x);
-      this.solve(y);
-      let norm = 0;
-      for (let i = 0; i < n; i++) norm += Math.abs(y[i]);
-      if (!Number.isFinite(norm)) return Number.POSITIVE_INFINITY;
-      if (iter > 0 && norm <= est) break;
-      est = norm;
-      for (let i = 0; i < n; i++) z[i] = y[i] >= 0 ? 1 : -1;
-      this.solveTransposed(z);
-      let jBest = 0;
-      let zBest = -1;
-      let zx = 0;
-      for (let i = 0; i < n; i++) {
-        const v = Math.abs(z[i]);
-        if (v > zBest) {
-          zBest = v;
-          jBest = i;
-        }
-        zx += z[i] * x[i];
-      }
-      if (iter > 0 && zBest <= zx) break;
-      x.fill(0);
-      x[jBest] = 1;
-    }
-    // Higham's extra test vector catches matrices that fool the iteration.
-    for (let i = 0; i < n; i++) y[i] = (i % 2 === 0 ? 1 : -1) * (1 + (n > 1 ? i / (n - 1) : 0));
-    this.solve(y);
-    let alt = 0;
-    for (let i = 0; i < n; i++) alt += Math.abs(y[i]);
-    alt = (2 * alt) / (3 * n);
-    return Math.max(est, alt);
-  }
 }
 
 export interface LinearSolution {
@@ -389,7 +332,8 @@ export interface LinearSolution {
 
 /**
  * One-shot solve of A x = b (A n x n row-major, copied, not modified).
- * Throws LinearSolveError when A is singular, ill-conditioned or not finite.
+ * Throws LinearSolveError when A is singular, ill-conditioned or not finite
+ * (`row` set and `column` unset: the right-hand side entry), or sizes differ.
  */
 export function solveLinearSystem(
   a: ArrayLike<number>,
@@ -397,14 +341,14 @@ export function solveLinearSystem(
   n: number,
   options: FactorOptions & SolverOptions = {},
 ): LinearSolution {
-  if (a.length !== n * n) throw new RangeError(`matrix has ${a.length} entries, expected ${n * n}`);
-  if (b.length !== n) throw new RangeError(`right-hand side has length ${b.length}, expected ${n}`);
+  if (a.length !== n * n) throw new LinearSolveError('bad-size', { value: a.length, expected: n * n });
+  if (b.length !== n) throw new LinearSolveError('bad-size', { value: b.length, expected: n });
   const solver = new DenseLuSolver(n, options);
   solver.matrix.set(a);
   const reciprocalCondition = solver.factor(options);
   const x = Float64Array.from(b);
   for (let i = 0; i < n; i++) {
-    if (!Number.isFinite(x[i])) throw new LinearSolveError('not-finite', `right-hand side entry ${i} is ${x[i]}, not a finite number`);
+    if (!Number.isFinite(x[i])) throw new LinearSolveError('not-finite', { row: i, value: x[i] });
   }
   solver.solve(x);
   return { x, reciprocalCondition };

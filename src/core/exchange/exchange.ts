@@ -21,6 +21,7 @@
 // F_i,s = 1 - sum_j F_ij. They are not an unknown, so not part of the matrix.
 
 import { DenseLuSolver, LinearSolveError } from './linearSolve';
+import { exchangeFailure, type ExchangeFailure } from './failures';
 
 /** Stefan-Boltzmann constant, W/(m^2 K^4) (CODATA 2018). */
 export const STEFAN_BOLTZMANN = 5.670374419e-8;
@@ -58,8 +59,6 @@ export interface ExchangeInput {
   surroundingsTemperature?: number;
   /** Depth of the cross-section in m (duct or furnace length): adds totals in W. */
   depth?: number;
-  /** Surface names, only used to make error messages readable. */
-  names?: ReadonlyArray<string>;
 }
 
 export interface ExchangeResult {
@@ -102,15 +101,8 @@ export interface ExchangeResult {
   surroundingsNetHeatTotal: number | undefined;
 }
 
-/** An exchange problem that is out of range or has no unique physical answer; `surface` is the index concerned, if one. */
-export class ExchangeError extends Error {
-  readonly surface: number | undefined;
-  constructor(message: string, surface?: number) {
-    super(message);
-    this.name = 'ExchangeError';
-    this.surface = surface;
-  }
-}
+/** The solved exchange, or why there is none (codes and numbers: src/document words them). */
+export type ExchangeOutcome = { ok: true; result: ExchangeResult } | ExchangeFailure;
 
 /** Blackbody emissive power sigma T^4, W/m^2, of a temperature in K. */
 export function emissivePower(temperature: number): number {
@@ -128,28 +120,29 @@ export function temperatureOfEmissivePower(e: number): number {
  * SI: lengths m, temperatures K, fluxes and radiosities W/m^2, net heat W per
  * metre of depth, totals W; net heat and flux positive when the surface gives
  * off more radiation than it absorbs.
- * Throws ExchangeError for values out of range and problems without a unique
- * answer (e.g. a closed enclosure where no surface has a temperature).
+ * Values out of range and problems without a unique answer (e.g. a closed
+ * enclosure where no surface has a temperature) come back as an
+ * ExchangeFailure: a code, the surface index and the number concerned.
  * `workspace`: a solver of size n to reuse between calls (live updates), so its
  * n x n matrix is not allocated again; one of another size is not used.
  */
-export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): ExchangeResult {
+export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): ExchangeOutcome {
   const n = input.conditions.length;
-  const label = (i: number) => (input.names && input.names[i] !== undefined ? `surface '${input.names[i]}'` : `surface ${i}`);
-  checkSizes(input, n);
+  const sizeFailure = checkSizes(input, n);
+  if (sizeFailure) return sizeFailure;
   const F = input.viewFactors;
   const area = input.area;
   const Ts = input.surroundingsTemperature;
   if (Ts !== undefined && !(Number.isFinite(Ts) && Ts > 0)) {
-    throw new ExchangeError(`surroundings temperature must be a finite number of kelvin above 0, got ${Ts}`);
+    return exchangeFailure('surroundings-temperature-out-of-range', { value: Ts });
   }
   const depth = input.depth;
   if (depth !== undefined && !(Number.isFinite(depth) && depth > 0)) {
-    throw new ExchangeError(`depth must be a finite number of metres above 0, got ${depth}`);
+    return exchangeFailure('depth-out-of-range', { value: depth });
   }
   const Es = Ts === undefined ? 0 : emissivePower(Ts);
 
-  // Per-surface values; validate as we go so messages name the surface.
+  // Per-surface values; validate as we go so failures name the surface.
   const eps = new Float64Array(n);
   const Eb = new Float64Array(n); // emissive power where known, W/m^2
   const fixedFlux = new Float64Array(n);
@@ -158,60 +151,51 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
   for (let i = 0; i < n; i++) {
     const c = input.conditions[i];
     if (!(Number.isFinite(area[i]) && area[i] > 0)) {
-      throw new ExchangeError(`${label(i)}: length must be a finite number of metres above 0, got ${area[i]}`, i);
+      return exchangeFailure('length-out-of-range', { surface: i, value: area[i] });
     }
     const e = input.emissivity[i];
     if (c.kind === 'opening') {
-      if (Ts === undefined) throw new ExchangeError(`${label(i)} is an opening, but no surroundings temperature is set`, i);
+      if (Ts === undefined) return exchangeFailure('opening-without-surroundings', { surface: i });
       eps[i] = 1;
       Eb[i] = Es;
       anchored = true;
     } else {
       if (!(Number.isFinite(e) && e > 0 && e <= 1)) {
-        throw new ExchangeError(`${label(i)}: emissivity must be in (0, 1], got ${e}`, i);
+        return exchangeFailure('emissivity-out-of-range', { surface: i, value: e });
       }
       eps[i] = e;
       if (c.kind === 'temperature') {
         if (!(Number.isFinite(c.temperature) && c.temperature > 0)) {
-          throw new ExchangeError(`${label(i)}: temperature must be a finite number of kelvin above 0, got ${c.temperature}`, i);
+          return exchangeFailure('temperature-out-of-range', { surface: i, value: c.temperature });
         }
         Eb[i] = emissivePower(c.temperature);
         anchored = true;
       } else if (c.kind === 'heatFlux') {
-        if (!Number.isFinite(c.heatFlux)) throw new ExchangeError(`${label(i)}: heat flux must be a finite number of W/m^2, got ${c.heatFlux}`, i);
+        if (!Number.isFinite(c.heatFlux)) return exchangeFailure('heat-flux-not-finite', { surface: i, value: c.heatFlux });
         fixedFlux[i] = c.heatFlux;
       } else if (c.kind !== 'adiabatic') {
-        throw new ExchangeError(`${label(i)}: unknown condition '${(c as { kind: unknown }).kind}'`, i);
+        return exchangeFailure('unknown-condition', { surface: i });
       }
     }
     let rowSum = 0;
     for (let j = 0; j < n; j++) {
       const f = F[i * n + j];
       if (!(Number.isFinite(f) && f >= -CLOSURE_TOLERANCE && f <= 1 + CLOSURE_TOLERANCE)) {
-        throw new ExchangeError(`view factor from ${label(i)} to ${label(j)} must be a number in [0, 1], got ${f}`, i);
+        return exchangeFailure('view-factor-out-of-range', { surface: i, other: j, value: f });
       }
       rowSum += f;
     }
     const toSurroundings = 1 - rowSum;
     if (toSurroundings < -CLOSURE_TOLERANCE) {
-      throw new ExchangeError(`${label(i)}: view factors sum to ${rowSum}, more than 1`, i);
+      return exchangeFailure('view-factor-sum-above-one', { surface: i, value: rowSum });
     }
     if (toSurroundings > CLOSURE_TOLERANCE) {
-      if (Ts === undefined) {
-        throw new ExchangeError(
-          `${label(i)} sees the surroundings (view factor ${toSurroundings.toPrecision(3)}: the sketch is open), but no surroundings temperature is set`,
-          i,
-        );
-      }
+      if (Ts === undefined) return exchangeFailure('open-without-surroundings', { surface: i, value: toSurroundings });
       Fs[i] = toSurroundings;
       anchored = true;
     }
   }
-  if (n > 0 && !anchored) {
-    throw new ExchangeError(
-      'no unique answer: no surface has a temperature and none sees the surroundings or is an opening, so the temperature level is undetermined; give at least one surface a temperature',
-    );
-  }
+  if (n > 0 && !anchored) return exchangeFailure('no-fixed-temperature');
 
   // Radiosity system M J = rhs, built straight into the solver's workspace.
   const solver = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
@@ -231,9 +215,9 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
     reciprocalCondition = solver.factor();
   } catch (err) {
     if (err instanceof LinearSolveError) {
-      throw new ExchangeError(
-        `no unique answer: the radiosity equations are ${err.problem === 'not-finite' ? 'not finite' : 'singular or nearly so'} (${err.message}); check that every group of surfaces that see each other has a surface with a temperature, an opening or a view to the surroundings`,
-      );
+      return err.problem === 'not-finite'
+        ? exchangeFailure('not-finite')
+        : exchangeFailure('singular', { value: Number.isNaN(err.reciprocalCondition) ? 0 : err.reciprocalCondition });
     }
     throw err;
   }
@@ -262,10 +246,7 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
       const E = J[i] + ((1 - eps[i]) / eps[i]) * q[i];
       const scale = Math.abs(J[i]) + Math.abs(E - J[i]) + G[i];
       if (J[i] < -1e-12 * scale || E < -1e-12 * scale) {
-        throw new ExchangeError(
-          `${label(i)}: no physical answer: the imposed heat flux of ${c.kind === 'heatFlux' ? c.heatFlux : 0} W/m^2 would need a temperature below absolute zero (it takes up more than the surface can receive)`,
-          i,
-        );
+        return exchangeFailure('flux-below-absolute-zero', { surface: i, value: fixedFlux[i] });
       }
       T[i] = temperatureOfEmissivePower(Math.max(E, 0));
     }
@@ -288,7 +269,7 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
   const denominator = Math.max(largest, BALANCE_FLOOR * radiated);
   const energyBalance = denominator > 0 ? Math.abs(sum) / denominator : 0;
 
-  return {
+  const result: ExchangeResult = {
     surfaceCount: n,
     radiosity: J,
     irradiation: G,
@@ -307,15 +288,17 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
     netHeatTotal: depth === undefined ? undefined : qp.map((v) => v * depth),
     surroundingsNetHeatTotal: depth === undefined ? undefined : surroundingsNetHeat * depth,
   };
+  return { ok: true, result };
 }
 
-function checkSizes(input: ExchangeInput, n: number): void {
-  const sizes: [string, number, number][] = [
-    ['viewFactors', input.viewFactors.length, n * n],
-    ['area', input.area.length, n],
-    ['emissivity', input.emissivity.length, n],
-  ];
-  for (const [what, got, want] of sizes) {
-    if (got !== want) throw new ExchangeError(`${what} has ${got} entries, expected ${want} for ${n} surfaces`);
+function checkSizes(input: ExchangeInput, n: number): ExchangeFailure | null {
+  const sizes = [
+    ['view-factors-size', input.viewFactors.length, n * n],
+    ['area-size', input.area.length, n],
+    ['emissivity-size', input.emissivity.length, n],
+  ] as const;
+  for (const [code, got, want] of sizes) {
+    if (got !== want) return exchangeFailure(code, { value: got, expected: want });
   }
+  return null;
 }

@@ -1,0 +1,57 @@
+// Why an exchange problem was refused, as a code and the numbers involved:
+// the core says what and where, src/document/exchange/messages.ts says it to people.
+
+/** A code for each refusal; the comment names the fields it fills (units as in ExchangeInput). */
+export type ExchangeFailureCode =
+  /** An input array has the wrong length: `value` entries, `expected` wanted. */
+  | 'view-factors-size'
+  | 'area-size'
+  | 'emissivity-size'
+  /** Surroundings temperature not a finite number of K above 0: `value`. */
+  | 'surroundings-temperature-out-of-range'
+  /** Depth not a finite number of m above 0: `value`. */
+  | 'depth-out-of-range'
+  /** `surface`'s length (m) not finite and above 0: `value`. */
+  | 'length-out-of-range'
+  /** `surface`'s emissivity not in (0, 1]: `value`. */
+  | 'emissivity-out-of-range'
+  /** `surface`'s temperature not a finite number of K above 0: `value`. */
+  | 'temperature-out-of-range'
+  /** `surface`'s heat flux (W/m^2) not finite: `value`. */
+  | 'heat-flux-not-finite'
+  /** `surface`'s condition has a kind the solver does not know. */
+  | 'unknown-condition'
+  /** View factor from `surface` to `other` not a number in [0, 1]: `value`. */
+  | 'view-factor-out-of-range'
+  /** `surface`'s view factors sum to `value` > 1. */
+  | 'view-factor-sum-above-one'
+  /** `surface` is an opening and no surroundings temperature is set. */
+  | 'opening-without-surroundings'
+  /** `surface` sees the surroundings (view factor `value`) and no surroundings temperature is set. */
+  | 'open-without-surroundings'
+  /** No surface has a temperature, none is an opening or sees the surroundings: the level is undetermined. */
+  | 'no-fixed-temperature'
+  /** The radiosity equations are singular or too ill-conditioned: `value` = estimated reciprocal condition number. */
+  | 'singular'
+  /** The radiosity equations have a non-finite coefficient (overflow). */
+  | 'not-finite'
+  /** `surface`'s imposed heat flux `value` (W/m^2) would need a temperature below absolute zero. */
+  | 'flux-below-absolute-zero';
+
+export interface ExchangeFailure {
+  ok: false;
+  code: ExchangeFailureCode;
+  /** Index of the surface concerned, when there is one. */
+  surface?: number;
+  /** Index of the second surface (view factor from `surface` to `other`). */
+  other?: number;
+  /** The offending number (units per code). */
+  value?: number;
+  /** The number wanted (array sizes). */
+  expected?: number;
+}
+
+/** Builds a failure; a helper so each refusal in the solver is one line. */
+export function exchangeFailure(code: ExchangeFailureCode, where: Omit<ExchangeFailure, 'ok' | 'code'> = {}): ExchangeFailure {
+  return { ok: false, code, ...where };
+}
