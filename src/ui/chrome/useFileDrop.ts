@@ -8,11 +8,11 @@ export function useFileDrop(): void {
   const api = useDocumentApi();
   useEffect(() => {
     const over = (e: DragEvent) => { if (e.dataTransfer?.types.includes('Files')) e.preventDefault(); };
-    const drop = async (e: DragEvent) => {
+    const drop = (e: DragEvent) => {
       const file = e.dataTransfer?.files?.[0];
       if (!file) return;
       e.preventDefault();
-      openSketchText(store, api, await file.text(), file.name);
+      void file.text().then((text) => openSketchText(store, api, text, file.name));
     };
     window.addEventListener('dragover', over);
     window.addEventListener('drop', drop);

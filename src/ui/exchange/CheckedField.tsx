@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 import { fmtInput } from './format';
 
 interface Props {
@@ -23,10 +23,10 @@ interface Props {
 export function CheckedField({ label, title, value, placeholder, optional, check, onCommit, disabled }: Props) {
   const id = useId();
   const shown = value === undefined ? '' : fmtInput(value);
-  const [text, setText] = useState(shown);
-  const [editing, setEditing] = useState(false);
+  // What the user is typing, or null when not editing: then the field shows the stored value as it is now.
+  const [draft, setDraft] = useState<string | null>(null);
+  const text = draft ?? shown;
   const [problem, setProblem] = useState<string | null>(null);
-  useEffect(() => { if (!editing) setText(shown); }, [shown, editing]);
 
   const problemOf = (t: string): string | null => {
     const trimmed = t.trim();
@@ -40,10 +40,10 @@ export function CheckedField({ label, title, value, placeholder, optional, check
     setProblem(p);
     if (p) {
       // Leaving the field puts the stored value back; Enter keeps the text to fix.
-      if (leaving) { setEditing(false); setText(shown); }
+      if (leaving) setDraft(null);
       return;
     }
-    setEditing(false);
+    setDraft(null);
     if (text.trim() === shown) return;
     const trimmed = text.trim();
     const v = trimmed === '' ? undefined : Number(trimmed.replace(',', '.'));
@@ -54,12 +54,12 @@ export function CheckedField({ label, title, value, placeholder, optional, check
       <label htmlFor={id}>{label}</label>
       <input id={id} type="text" inputMode="decimal" value={text} placeholder={placeholder} disabled={disabled}
         aria-invalid={problem ? true : undefined} aria-describedby={problem ? `${id}-problem` : undefined}
-        onFocus={() => setEditing(true)}
-        onChange={(e) => { setEditing(true); setProblem(null); setText(e.target.value); }}
+        onFocus={() => setDraft(text)}
+        onChange={(e) => { setProblem(null); setDraft(e.target.value); }}
         onBlur={() => commit(true)}
         onKeyDown={(e) => {
           if (e.key === 'Enter') commit(false);
-          if (e.key === 'Escape') { setEditing(false); setProblem(null); setText(shown); }
+          if (e.key === 'Escape') { setDraft(null); setProblem(null); }
         }} />
       {problem && <span id={`${id}-problem`} className="field-problem">not applied: {label} {problem}</span>}
     </span>

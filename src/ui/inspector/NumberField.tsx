@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 
 interface Props {
   label: string;
@@ -15,14 +15,14 @@ interface Props {
 export function NumberField({ label, title, value, onCommit, width, integer, precision = 10 }: Props) {
   const id = useId();
   const shown = integer ? String(value) : String(Number(value.toPrecision(precision)));
-  const [text, setText] = useState(shown);
-  const [editing, setEditing] = useState(false);
-  useEffect(() => { if (!editing) setText(shown); }, [shown, editing]);
+  // What the user is typing, or null when not editing: then the field shows the stored value as it is now.
+  const [draft, setDraft] = useState<string | null>(null);
+  const text = draft ?? shown;
   const parsed = Number(text.trim().replace(',', '.'));
   const bad = text.trim() === '' || !Number.isFinite(parsed);
   const commit = () => {
-    setEditing(false);
-    if (bad) { setText(shown); return; }
+    setDraft(null);
+    if (bad) return;
     // Only what the user typed counts: leaving an untouched field must not round the stored value.
     if (text.trim() !== shown && parsed !== value) onCommit(integer ? Math.round(parsed) : parsed);
   };
@@ -31,12 +31,12 @@ export function NumberField({ label, title, value, onCommit, width, integer, pre
       <label htmlFor={id}>{label}</label>
       <input id={id} type="text" inputMode="decimal" value={text} aria-invalid={bad || undefined}
         style={width ? { width } : undefined}
-        onFocus={() => setEditing(true)}
-        onChange={(e) => { setEditing(true); setText(e.target.value); }}
+        onFocus={() => setDraft(text)}
+        onChange={(e) => setDraft(e.target.value)}
         onBlur={commit}
         onKeyDown={(e) => {
           if (e.key === 'Enter') commit();
-          if (e.key === 'Escape') { setEditing(false); setText(shown); }
+          if (e.key === 'Escape') setDraft(null);
         }} />
     </span>
   );
