@@ -4,8 +4,7 @@ import type { StateCreator } from 'zustand';
 import type { Point, Shape } from './sketchFile';
 import type { Pick } from './selection';
 import type { AppState } from './store';
-
-export type Tool = 'select' | 'enclosure' | 'solid' | 'rectangle' | 'tube';
+import { DEFAULT_TOOL, type ToolId } from './tools/registry';
 
 /** Screen = origin + scale * (x, -y): y points up in the sketch, down on screen. */
 export interface Camera { scale: number; originX: number; originY: number }
@@ -13,7 +12,8 @@ export interface Camera { scale: number; originX: number; originY: number }
 export interface Notice { id: number; level: 'info' | 'warning' | 'error'; text: string }
 
 export interface ViewSlice {
-  tool: Tool;
+  /** Id of the active drawing tool in the tool registry (a test may run its own registry). */
+  tool: string;
   selection: Pick[];
   camera: Camera;
   snap: boolean;
@@ -32,7 +32,7 @@ export interface ViewSlice {
   /** Bumped to ask the canvas to fit the sketch in view (the canvas knows its size). */
   fitRequest: number;
   notices: Notice[];
-  setTool: (tool: Tool) => void;
+  setTool: (tool: ToolId) => void;
   setSelection: (selection: Pick[]) => void;
   setCamera: (camera: Camera) => void;
   setSnap: (snap: boolean) => void;
@@ -52,7 +52,7 @@ export interface ViewSlice {
 let nextNoticeId = 1;
 
 export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) => ({
-  tool: 'select',
+  tool: DEFAULT_TOOL,
   selection: [],
   camera: { scale: 100, originX: 60, originY: 400 },
   snap: true,

@@ -1,26 +1,29 @@
 import { memo } from 'react';
 import { Circle, Layer, Line } from 'react-konva';
-import type { Camera, Tool } from '../../state/viewSlice';
+import type { Camera } from '../../state/viewSlice';
 import type { Point } from '../../state/sketchFile';
 import { toScreen } from '../../state/camera';
+import { toolRegistry } from '../../state/tools/registry';
 
-interface Props { tool: Tool; draft: Point[]; hover: Point | null; camera: Camera }
+interface Props { tool: string; draft: Point[]; hover: Point | null; camera: Camera }
 
-/** The outline being drawn: open with a rubber band for polygons, closed for quick shapes. */
+const TONES = { enclosure: '#1d2b36', body: '#5a4a2a' } as const;
+
+/** The shape being drawn, as the active tool pictures it: an open rubber band or a closed outline. */
 export const DraftLayer = memo(function DraftLayer({ tool, draft, hover, camera }: Props) {
-  if (!draft.length && !hover) return null;
-  const polygonTool = tool === 'enclosure' || tool === 'solid';
-  const pts = polygonTool && hover && draft.length ? [...draft, hover] : draft;
-  const flat = pts.flatMap((p) => toScreen(camera, p));
-  const colour = tool === 'enclosure' ? '#1d2b36' : '#5a4a2a';
+  const picture = toolRegistry.get(tool).draft(draft, hover);
+  if (!picture) return null;
+  const flat = picture.points.flatMap((p) => toScreen(camera, p));
+  const colour = TONES[picture.tone];
+  const dot = picture.dot && toScreen(camera, picture.dot);
   return (
     <Layer listening={false}>
-      {flat.length >= 4 && <Line points={flat} closed={!polygonTool} stroke={colour} strokeWidth={1.5} dash={[6, 4]} fill={polygonTool ? undefined : 'rgba(90,74,42,0.08)'} />}
-      {polygonTool && draft.map((p, i) => {
+      {flat.length >= 4 && <Line points={flat} closed={picture.closed} stroke={colour} strokeWidth={1.5} dash={[6, 4]} fill={picture.closed ? 'rgba(90,74,42,0.08)' : undefined} />}
+      {picture.marks.map((p, i) => {
         const [x, y] = toScreen(camera, p);
         return <Circle key={i} x={x} y={y} radius={i === 0 ? 6 : 3.5} stroke={colour} strokeWidth={1.5} fill={i === 0 ? '#fff3d6' : '#ffffff'} />;
       })}
-      {polygonTool && hover && !draft.length && <Circle x={toScreen(camera, hover)[0]} y={toScreen(camera, hover)[1]} radius={3} fill={colour} />}
+      {dot && <Circle x={dot[0]} y={dot[1]} radius={3} fill={colour} />}
     </Layer>
   );
 });

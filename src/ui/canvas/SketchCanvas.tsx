@@ -1,12 +1,13 @@
-import { useEffect, useMemo } from 'react';
+import { useEffect, useMemo, useRef } from 'react';
 import { Stage } from 'react-konva';
-import { useApp } from '../AppContext';
+import { useApp, useAppStore } from '../AppContext';
 import {
   selectCamera, selectDoc, selectDraft, selectFitRequest, selectHoverPair, selectHoverPoint, selectSelection, selectTool, selectViewFactors,
 } from '../../state/selectors';
 import type { AppState } from '../../state/store';
 import { fitCamera } from '../../state/camera';
 import { sketchBounds } from '../../state/geometry/polygon';
+import { toolRegistry } from '../../state/tools/registry';
 import { useElementSize } from './useElementSize';
 import { usePointerRouting } from './usePointerRouting';
 import { useSelectedSurfaces } from './useSelectedSurfaces';
@@ -35,6 +36,7 @@ export function SketchCanvas() {
   const gridStep = useApp(selectGridStep);
   const fitRequest = useApp(selectFitRequest);
   const setCamera = useApp(selectSetCamera);
+  const store = useAppStore();
   const results = useApp(selectViewFactors);
   const selected = useSelectedSurfaces();
   const handlers = usePointerRouting();
@@ -46,22 +48,25 @@ export function SketchCanvas() {
     [results.status, results.problems, doc.shapes],
   );
 
-  // Fit on first layout and whenever asked (F, the Fit button, a file opened).
+  // Fit once per request (F, the Fit button, a file opened) and on each layout
+  // from zero size; not on resizes or edits, so it reads the document from the store.
+  const fitted = useRef<number | null>(null);
   useEffect(() => {
-    if (width > 0 && height > 0) setCamera(fitCamera(sketchBounds(doc.shapes), width, height));
-    // Fitting follows the size and explicit requests only, not every edit.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [width > 0 && height > 0, fitRequest]);
+    if (width <= 0 || height <= 0) { fitted.current = null; return; }
+    if (fitted.current === fitRequest) return;
+    fitted.current = fitRequest;
+    setCamera(fitCamera(sketchBounds(store.getState().doc.shapes), width, height));
+  }, [width, height, fitRequest, setCamera, store]);
 
-  const cursor = tool === 'select' ? 'default' : 'crosshair';
+  const active = toolRegistry.get(tool);
   return (
-    <div ref={ref} className="canvas-box" tabIndex={0} aria-label="Sketch canvas: draw with the mouse; the side panel edits the same sketch numerically" style={{ cursor }}>
+    <div ref={ref} className="canvas-box" tabIndex={0} aria-label="Sketch canvas: draw with the mouse; the side panel edits the same sketch numerically" style={{ cursor: active.cursor }}>
       {width > 0 && height > 0 && (
         <Stage width={width} height={height} {...handlers}>
           <GridLayer camera={camera} width={width} height={height} step={gridStep} />
           <ShapesLayer doc={doc} camera={camera} order={order} emphasis={emphasis} problemShapes={problems.shapes} />
           <HeatLayer doc={doc} camera={camera} />
-          <HandlesLayer doc={doc} camera={camera} selection={selection} showAll={tool === 'select'} />
+          <HandlesLayer doc={doc} camera={camera} selection={selection} showAll={active.showsAllHandles ?? false} />
           <DraftLayer tool={tool} draft={draft} hover={hover} camera={camera} />
           <ProblemLayer marks={problems} camera={camera} />
         </Stage>

@@ -1,7 +1,8 @@
 import { useEffect, useRef } from 'react';
 import { useApp } from '../AppContext';
 import { selectHelpOpen } from '../../state/selectors';
-import { OTHER_KEYS, TOOL_KEYS } from './shortcuts';
+import { OTHER_KEYS } from './shortcuts';
+import { toolRegistry } from '../../state/tools/registry';
 
 const selectSetHelp = (s: { setHelpOpen: (o: boolean) => void }) => s.setHelpOpen;
 
@@ -22,8 +23,8 @@ export function HelpOverlay() {
         <table className="keys">
           <caption>Keyboard shortcuts</caption>
           <tbody>
-            {TOOL_KEYS.map((t) => (
-              <tr key={t.key}><th scope="row"><kbd>{t.key.toUpperCase()}</kbd></th><td><strong>{t.label}</strong>: {t.hint}</td></tr>
+            {toolRegistry.tools.map((t) => (
+              <tr key={t.id}><th scope="row"><kbd>{t.shortcut.toUpperCase()}</kbd></th><td><strong>{t.label}</strong>: {t.hint}</td></tr>
             ))}
             {OTHER_KEYS.map(([k, what]) => (
               <tr key={k}><th scope="row"><kbd>{k}</kbd></th><td>{what}</td></tr>

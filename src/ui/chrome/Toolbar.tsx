@@ -1,40 +1,53 @@
 import { useShallow } from 'zustand/react/shallow';
-import { useApp } from '../AppContext';
+import { useApp, useAppStore } from '../AppContext';
 import type { AppState } from '../../state/store';
-import { TOOL_KEYS } from './shortcuts';
+import type { ToolSetting } from '../../state/tools/tool';
+import { toolRegistry } from '../../state/tools/registry';
 import { NumberField } from '../inspector/NumberField';
 
 const selectToolbar = (s: AppState) => ({
-  tool: s.tool, snap: s.snap, gridStep: s.gridStep, quickKind: s.quickKind, tubeSides: s.tubeSides, units: s.doc.units,
-  setTool: s.setTool, setSnap: s.setSnap, setGridStep: s.setGridStep, setQuickKind: s.setQuickKind,
-  setTubeSides: s.setTubeSides, requestFit: s.requestFit,
+  tool: s.tool, snap: s.snap, gridStep: s.gridStep, units: s.doc.units,
+  setTool: s.setTool, setSnap: s.setSnap, setGridStep: s.setGridStep, requestFit: s.requestFit,
 });
+
+type Setting<T extends ToolSetting['type']> = Extract<ToolSetting, { type: T }>;
+
+/** Settings of the active tool; their values live in the store. */
+function IntegerSetting({ setting }: { setting: Setting<'integer'> }) {
+  const store = useAppStore();
+  const value = useApp(setting.read);
+  return <NumberField label={setting.label} title={setting.title} value={value} onCommit={(n) => setting.write(store.getState(), n)} width="3.5em" integer />;
+}
+
+function ChoiceSetting({ setting }: { setting: Setting<'choice'> }) {
+  const store = useAppStore();
+  const value = useApp(setting.read);
+  return (
+    <label className="inline" title={setting.title}>
+      {setting.label}
+      <select value={value} onChange={(e) => setting.write(store.getState(), e.target.value)}>
+        {setting.options.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+      </select>
+    </label>
+  );
+}
 
 export function Toolbar() {
   const t = useApp(useShallow(selectToolbar));
-  const quick = t.tool === 'rectangle' || t.tool === 'tube';
+  const active = toolRegistry.get(t.tool);
   return (
     <div className="toolbar" role="toolbar" aria-label="Drawing tools">
       <div className="group" role="group" aria-label="Tool">
-        {TOOL_KEYS.map((k) => (
-          <button key={k.tool} type="button" className="tool" aria-pressed={t.tool === k.tool}
-            title={`${k.label} (${k.key.toUpperCase()}): ${k.hint}`} onClick={() => t.setTool(k.tool)}>
+        {toolRegistry.tools.map((k) => (
+          <button key={k.id} type="button" className="tool" aria-pressed={t.tool === k.id}
+            title={`${k.label} (${k.shortcut.toUpperCase()}): ${k.hint}`} onClick={() => t.setTool(k.id)}>
             {k.label}
           </button>
         ))}
       </div>
-      {quick && (
-        <label className="inline" title="Whether the rectangle or tube becomes a solid body or the enclosure">
-          makes
-          <select value={t.quickKind} onChange={(e) => t.setQuickKind(e.target.value as 'solid' | 'enclosure')}>
-            <option value="solid">body</option>
-            <option value="enclosure">enclosure</option>
-          </select>
-        </label>
-      )}
-      {t.tool === 'tube' && (
-        <NumberField label="sides" title="Number of sides of the tube polygon (3 to 256)" value={t.tubeSides} onCommit={t.setTubeSides} width="3.5em" integer />
-      )}
+      {active.settings?.map((setting) => (setting.type === 'integer'
+        ? <IntegerSetting key={setting.label} setting={setting} />
+        : <ChoiceSetting key={setting.label} setting={setting} />))}
       <label className="inline" title="Snap points to the grid (G)">
         <input type="checkbox" checked={t.snap} onChange={(e) => t.setSnap(e.target.checked)} /> snap
       </label>

@@ -1,14 +1,4 @@
-// One list drives both the key handling and the help overlay.
-import type { Tool } from '../../state/viewSlice';
-
-export const TOOL_KEYS: { key: string; tool: Tool; label: string; hint: string }[] = [
-  { key: 'v', tool: 'select', label: 'Select', hint: 'Pick and drag vertices, edges or shapes; shift adds to the selection; double-click an edge to insert a vertex' },
-  { key: 'e', tool: 'enclosure', label: 'Enclosure', hint: 'Click the corners of the enclosing wall; finish on the first point, with Enter or a double-click' },
-  { key: 'b', tool: 'solid', label: 'Body', hint: 'Click the corners of a solid body inside the enclosure; finish like the enclosure' },
-  { key: 'r', tool: 'rectangle', label: 'Rectangle', hint: 'Drag from corner to corner (or click twice)' },
-  { key: 't', tool: 'tube', label: 'Tube', hint: 'Drag from the centre out to the radius; the number of sides is set beside the tools' },
-];
-
+// The keys besides the tool letters (those come from the tool registry), for the help overlay.
 export const OTHER_KEYS: [string, string][] = [
   ['Ctrl+Z', 'Undo'],
   ['Ctrl+Shift+Z, Ctrl+Y', 'Redo'],

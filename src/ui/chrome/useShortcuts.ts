@@ -1,6 +1,6 @@
 import { useEffect } from 'react';
 import { useAppStore, useController, useDocumentApi } from '../AppContext';
-import { TOOL_KEYS } from './shortcuts';
+import { toolRegistry } from '../../state/tools/registry';
 import { OPEN_INPUT_ID } from './FileButtons';
 import { downloadText } from './download';
 import { sketchFileText } from '../../state/files';
@@ -30,17 +30,15 @@ export function useShortcuts(): void {
       if (mod || e.altKey) return;
       if (e.key === '?') { s.setHelpOpen(!s.helpOpen); return; }
       if (e.key === 'Escape') { if (s.helpOpen) s.setHelpOpen(false); else controller.cancel(); return; }
-      if (e.key === 'Enter') { controller.finishDraft(); return; }
-      if (e.key === 'Delete' || e.key === 'Backspace') {
-        e.preventDefault();
-        if (s.draft.length && (s.tool === 'enclosure' || s.tool === 'solid')) s.setDraft(s.draft.slice(0, -1));
-        else controller.deleteSelection();
-        return;
-      }
+      const deleting = e.key === 'Delete' || e.key === 'Backspace';
+      if (deleting) e.preventDefault();
+      // The active tool first: Enter finishes an outline, Delete while drawing drops its last point.
+      if (controller.key(e.key)) return;
+      if (deleting) { controller.deleteSelection(); return; }
       if (key === 'g') { s.setSnap(!s.snap); return; }
       if (key === 'f') { s.requestFit(); return; }
-      const tool = TOOL_KEYS.find((t) => t.key === key);
-      if (tool) s.setTool(tool.tool);
+      const tool = toolRegistry.byShortcut(key);
+      if (tool) s.setTool(tool.id);
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
