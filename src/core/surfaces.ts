@@ -1,6 +1,16 @@
 import type { ViewFactorResult } from './scene';
 
 /**
+ * Relative reciprocity residual of one pair, |a - b| / max(|a|, |b|), where
+ * a = L_I F_IJ and b = L_J F_JI are exchange lengths (any one length unit);
+ * 0 when neither surface sees the other. Dimensionless.
+ */
+export function reciprocityResidualOf(a: number, b: number): number {
+  const big = Math.max(Math.abs(a), Math.abs(b));
+  return big > 0 ? Math.abs(a - b) / big : 0;
+}
+
+/**
  * Aggregate edge view factors (edges x edges, row-major, row = from) to surfaces:
  * F_IJ = sum_{i in I, j in J} L_i F_ij / L_I (lengths in sketch units), and report
  * the row-sum residual 1 - sum_J F_IJ and the largest relative reciprocity residual
@@ -48,9 +58,7 @@ export function aggregateToSurfaces(
   let reciprocityResidual = 0;
   for (let I = 0; I < m; I++) {
     for (let J = I + 1; J < m; J++) {
-      const a = G[I * m + J], b = G[J * m + I];
-      const big = Math.max(Math.abs(a), Math.abs(b));
-      if (big > 0) reciprocityResidual = Math.max(reciprocityResidual, Math.abs(a - b) / big);
+      reciprocityResidual = Math.max(reciprocityResidual, reciprocityResidualOf(G[I * m + J], G[J * m + I]));
     }
   }
   return {

@@ -1,27 +1,11 @@
 // From a checked sketch to the view-factor core's plain input.
-import type { SceneInput } from '../core/scene';
+import type { PolygonInput, SceneInput } from '../core/scene';
 import type { Sketch } from './schema';
+import { surfaceIndex } from './surfaceIndex';
 
-/**
- * The core's input for a sketch. Surfaces are numbered by first appearance
- * along the edges (shape by shape, edge by edge); `surfaceNames[i]` is the name
- * of surface i, the order the command line and the app report surfaces in.
- * Lengths stay in the sketch's units.
- */
-export function toScene(sketch: Sketch): { scene: SceneInput; surfaceNames: string[] } {
-  const index = new Map<string, number>();
-  const edgeSurface: number[] = [];
-  for (const shape of sketch.shapes) {
-    for (const name of shape.surface) {
-      let i = index.get(name);
-      if (i === undefined) {
-        i = index.size;
-        index.set(name, i);
-      }
-      edgeSurface.push(i);
-    }
-  }
-  const polygons = sketch.shapes.map((shape) => {
+/** The polygons of a sketch as the core takes them: flat [x0, y0, x1, y1, ...] in the sketch's units. */
+export function scenePolygons(sketch: Pick<Sketch, 'shapes'>): PolygonInput[] {
+  return sketch.shapes.map((shape) => {
     const points = new Float64Array(2 * shape.points.length);
     shape.points.forEach(([x, y], k) => {
       points[2 * k] = x;
@@ -29,5 +13,18 @@ export function toScene(sketch: Sketch): { scene: SceneInput; surfaceNames: stri
     });
     return { kind: shape.kind, points };
   });
-  return { scene: { polygons, edgeSurface: Int32Array.from(edgeSurface), surfaceCount: index.size }, surfaceNames: [...index.keys()] };
+}
+
+/**
+ * The core's input for a sketch. Surfaces are numbered as `surfaceIndex` does
+ * (first appearance along the edges); `surfaceNames[i]` is the name of surface
+ * i, the order the command line and the app report surfaces in. Lengths stay
+ * in the sketch's units.
+ */
+export function toScene(sketch: Sketch): { scene: SceneInput; surfaceNames: string[] } {
+  const index = surfaceIndex(sketch.shapes);
+  return {
+    scene: { polygons: scenePolygons(sketch), edgeSurface: index.edgeSurface, surfaceCount: index.names.length },
+    surfaceNames: [...index.names],
+  };
 }

@@ -1,12 +1,12 @@
 // Exports of the shown matrix: CSV (the command line's writer and content) and
 // tab-separated text for the clipboard.
 import { matrixCsv } from '../document';
-import type { ShownResult } from './resultsSlice';
+import type { ShownResult } from './results/derive';
 import type { MatrixView } from './matrixView';
 
 /** CSV of a result: exactly what `npm run cli -- factors FILE --csv` prints for the same sketch. */
 export function shownCsv(shown: ShownResult): string {
-  return matrixCsv(shown.surfaceNames.slice(0, shown.result.surfaceCount), shown.result.F);
+  return matrixCsv(shown.names.slice(0, shown.result.surfaceCount), shown.result.F);
 }
 
 /** Tab-separated copy for pasting into a spreadsheet; names neutralised like the CSV. */

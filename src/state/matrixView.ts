@@ -1,6 +1,7 @@
 // Table-ready numbers from a finished result: rows, residuals and the cells
 // whose reciprocity misses the tolerance. Cached per result object.
-import type { ShownResult } from './resultsSlice';
+import { reciprocityResidualOf } from '../core/surfaces';
+import type { ShownResult } from './results/derive';
 
 /** Exact methods agree to rounding; anything above this is reported, not hidden. */
 export const RESIDUAL_TOLERANCE = 1e-9;
@@ -19,24 +20,18 @@ export interface MatrixView {
   worstRowResidual: number;
 }
 
-const cache = new WeakMap<ShownResult, MatrixView>();
+// Per surface result (a rename makes a new one; a property edit keeps it).
+const cache = new WeakMap<ShownResult['result'], MatrixView>();
 
 export function matrixView(shown: ShownResult): MatrixView {
-  const hit = cache.get(shown);
+  const hit = cache.get(shown.result);
   if (hit) return hit;
-  const { result, surfaceNames } = shown;
+  const { result, names: surfaceNames } = shown;
   const n = result.surfaceCount;
   const L = Array.from(result.surfaceLength);
   const rows: number[][] = [];
   for (let i = 0; i < n; i++) rows.push(Array.from(result.F.subarray(i * n, (i + 1) * n)));
-  const pairResidual = rows.map((row, i) =>
-    row.map((f, j) => {
-      const a = L[i] * f;
-      const b = L[j] * rows[j][i];
-      const big = Math.max(a, b);
-      return big > 0 ? Math.abs(a - b) / big : 0;
-    }),
-  );
+  const pairResidual = rows.map((row, i) => row.map((f, j) => reciprocityResidualOf(L[i] * f, L[j] * rows[j][i])));
   const rowResidual = Array.from(result.rowSumResidual);
   const view: MatrixView = {
     names: surfaceNames.slice(0, n),
@@ -48,6 +43,6 @@ export function matrixView(shown: ShownResult): MatrixView {
     closed: result.closed,
     worstRowResidual: result.closed ? Math.max(0, ...rowResidual.map(Math.abs)) : 0,
   };
-  cache.set(shown, view);
+  cache.set(shown.result, view);
   return view;
 }

@@ -3,8 +3,8 @@ import type { DocumentApi } from './documentApi';
 import type { SketchFile } from './sketchFile';
 import { createAppStore, type AppStore } from './store';
 import { loadAutosave, startAutosave } from './autosave';
-import { startLiveResults } from './liveResults';
-import { startLiveExchange } from './exchangeLive';
+import { startLiveResults } from './results/live';
+import { startLiveExchange } from './exchange/live';
 import { ViewFactorClient, type WorkerHandle } from '../worker/client';
 
 /** Seconds a job may run before the worker counts as hung (the benchmark's largest sketch takes ~2 s). */

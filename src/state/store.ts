@@ -5,8 +5,8 @@ import { createStore, type StoreApi } from 'zustand/vanilla';
 import { createDocumentSlice, type DocumentSlice } from './documentSlice';
 import { createHistorySlice, type HistorySlice } from './historySlice';
 import { createViewSlice, type ViewSlice } from './viewSlice';
-import { createResultsSlice, type ResultsSlice } from './resultsSlice';
-import { createExchangeSlice, type ExchangeSlice } from './exchangeSlice';
+import { createResultsSlice, type ResultsSlice } from './results/slice';
+import { createExchangeSlice, type ExchangeSlice } from './exchange/slice';
 import type { SketchFile } from './sketchFile';
 
 export type AppState = DocumentSlice & HistorySlice & ViewSlice & ResultsSlice & ExchangeSlice;

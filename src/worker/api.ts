@@ -1,20 +1,22 @@
-// What the worker offers: the core's computeViewFactors on plain payloads.
+// What the worker offers: the core's edge-level view factors on plain payloads.
+// Summing edges to surfaces is a cheap stage of its own on the main thread, so
+// renaming or grouping surfaces never needs the worker.
 import * as Comlink from 'comlink';
-import { computeViewFactors } from '../core/viewFactors';
-import type { ViewFactorApi, ViewFactorJob } from './job';
+import { buildEdges } from '../core/edges';
+import { edgeViewFactors } from '../core/viewFactors';
+import type { EdgeViewFactors, ViewFactorApi, ViewFactorJob } from './job';
 
-// The edges x edges matrix is scratch for each job: keep one and reuse it, so a drag
-// of a large sketch does not allocate (and collect) tens of megabytes per frame.
-let edgeMatrix = new Float64Array(0);
+/** Edge view factors of a job's polygons (lengths in sketch units). */
+export function computeEdgeViewFactors(job: ViewFactorJob): EdgeViewFactors {
+  const edges = buildEdges(job.polygons);
+  const F = edgeViewFactors(edges);
+  return { edgeCount: edges.count, edgeLength: edges.length, F, closed: edges.hasEnclosure };
+}
 
 export const viewFactorApi: ViewFactorApi = {
   compute(job: ViewFactorJob) {
-    const edges = job.edgeSurface.length;
-    const need = edges * edges;
-    // Grow when short; let go of a much larger one (a big sketch was closed).
-    if (edgeMatrix.length < need || edgeMatrix.length > 4 * need + 65536) edgeMatrix = new Float64Array(need);
-    const r = computeViewFactors(job, { edgeMatrix });
-    // Hand the arrays over instead of copying them.
-    return Comlink.transfer(r, [r.edgeLength.buffer, r.surfaceLength.buffer, r.F.buffer, r.rowSumResidual.buffer] as ArrayBuffer[]);
+    const r = computeEdgeViewFactors(job);
+    // Hand the arrays over instead of copying them: the matrix is edges^2 numbers.
+    return Comlink.transfer(r, [r.edgeLength.buffer, r.F.buffer] as ArrayBuffer[]);
   },
 };

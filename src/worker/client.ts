@@ -2,18 +2,17 @@
 // at most one job runs and at most one waits; a newer request replaces the
 // waiting one (its caller gets 'dropped'). A job that throws, or does not answer
 // within the time limit, fails, and the worker is replaced before the next job.
-import type { ViewFactorResult } from '../core/scene';
-import type { ViewFactorJob } from './job';
+import type { EdgeViewFactors, ViewFactorJob } from './job';
 
 /** One live worker. `onCrash` reports an uncaught error that killed it. */
 export interface WorkerHandle {
-  compute(job: ViewFactorJob): Promise<ViewFactorResult>;
+  compute(job: ViewFactorJob): Promise<EdgeViewFactors>;
   terminate(): void;
   onCrash?(listener: (message: string) => void): void;
 }
 
 export type JobOutcome =
-  | { kind: 'done'; result: ViewFactorResult; elapsedMs: number }
+  | { kind: 'done'; result: EdgeViewFactors; elapsedMs: number }
   | { kind: 'dropped' }
   | { kind: 'failed'; reason: 'threw' | 'timeout' | 'crashed'; message: string };
 
@@ -75,7 +74,7 @@ export class ViewFactorClient {
     );
     const current = { ...entry, started, timer };
     this.running = current;
-    let answer: Promise<ViewFactorResult>;
+    let answer: Promise<EdgeViewFactors>;
     try {
       answer = Promise.resolve(this.worker.compute(entry.job));
     } catch (e) {

@@ -54,7 +54,7 @@ describe('sketcher in chromium', () => {
       new MutationObserver(() => {
         if (w.__lat.lastMove) {
           w.__lat.samples.push(performance.now() - w.__lat.lastMove);
-          w.__lat.jobs.push(w.__tautline.store.getState().viewFactors.shown?.elapsedMs ?? NaN);
+          w.__lat.jobs.push(w.__tautline.store.getState().viewFactors.edges?.elapsedMs ?? NaN);
         }
         w.__lat.lastMove = 0;
         w.__lat.changes++;

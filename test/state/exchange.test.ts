@@ -1,17 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { createAppStore, type AppStore } from '../../src/state/store';
-import { startLiveResults, type JobRunner } from '../../src/state/liveResults';
-import { LIVE_SOLVE_LIMIT, startLiveExchange } from '../../src/state/exchangeLive';
+import { startLiveResults, type JobRunner } from '../../src/state/results/live';
+import { LIVE_SOLVE_LIMIT, startLiveExchange } from '../../src/state/exchange/live';
 import { documentApi } from '../../src/state/documentApi';
 import { setVertex } from '../../src/state/edits/shapeEdits';
 import { setCondition, setEmissivity, setSettings, setSurfaceProps } from '../../src/state/exchangeEdits';
-import type { ExchangeSolved } from '../../src/state/exchangeSlice';
+import type { ExchangeSolved } from '../../src/state/exchange/slice';
 import { demoSketch } from '../../src/state/demo';
 import type { SketchFile } from '../../src/state/sketchFile';
 import { viewFactorApi } from '../../src/worker/api';
 import { main } from '../../src/cli/main';
 import { STEFAN_BOLTZMANN as SIGMA } from '../../src/core/exchange';
-import { solvedCsv } from '../../src/state/exchangeExport';
+import { solvedCsv } from '../../src/state/exchange/export';
 
 // Heat exchange in the app store: derived from the shown view factors and the
 // document, live, never saved. The chain (exact view factors, dense solve) is
@@ -151,11 +151,11 @@ describe('exchange results in the store', () => {
   it('while geometry is being edited, results are those of the shown view factors, marked stale, with their own properties', async () => {
     const store = live(squares);
     await flush();
-    const shown = store.getState().viewFactors.shown;
+    const shown = store.getState().viewFactors.edges;
     store.getState().beginGesture();
     store.getState().updateGesture(setVertex(store.getState().doc, 1, 1, [450, 200]));
     const ex = solved(store);
-    expect(store.getState().viewFactors.shown).toBe(shown);
+    expect(store.getState().viewFactors.edges).toBe(shown);
     expect(ex.stale).toBe(true);
     close(heatOf(ex, 'inner'), twoSurface(1000, 500, 0.6, 0.8, 0.8, 2.4));
     store.getState().endGesture();
@@ -179,7 +179,7 @@ describe('exchange results in the store', () => {
     store.getState().beginGesture();
     store.getState().updateGesture(setVertex(store.getState().doc, 0, 5, [0.9, 0.1]));
     await flush(); // the view factors of the dragged shape arrive during the gesture
-    expect(store.getState().viewFactors.shown?.doc).toBe(store.getState().doc);
+    expect(store.getState().viewFactors.status).toBe('ready'); // factors for the dragged geometry are in
     const during = solved(store);
     expect(during.stale).toBe(true);
     expect(during.result).toBe(first.result); // not solved again mid-drag

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import { shownCsv, matrixTsv } from '../../src/state/matrixExport';
 import { matrixView } from '../../src/state/matrixView';
-import type { ShownResult } from '../../src/state/resultsSlice';
+import type { ShownResult } from '../../src/state/results/derive';
 import { documentApi } from '../../src/state/documentApi';
 import { demoSketch } from '../../src/state/demo';
 import { renameSurface } from '../../src/state/edits/surfaceEdits';
@@ -13,13 +13,14 @@ import type { SketchFile } from '../../src/state/sketchFile';
 /** The checked form of a sketch, as the app passes it to toScene. */
 function checked(doc: unknown) {
   const r = documentApi.restore(doc);
-  if (!r.ok) throw new Error(r.errors.join('; '));
+  if (!r.ok) throw new Error(JSON.stringify(r.errors));
   return r.sketch;
 }
 
 function shownFor(doc: SketchFile): ShownResult {
-  const { scene, surfaceNames } = documentApi.toScene(checked(doc));
-  return { doc, surfaceNames, result: computeViewFactors(scene), elapsedMs: 0 };
+  const sketch = checked(doc);
+  const { scene, surfaceNames } = documentApi.toScene(sketch);
+  return { sketch, names: surfaceNames, units: sketch.units, stale: false, result: computeViewFactors(scene), elapsedMs: 0 };
 }
 
 function cliCsv(doc: SketchFile): string {
@@ -38,10 +39,10 @@ describe('matrix CSV', () => {
     const shown = shownFor(demoSketch);
     const rows = Papa.parse<string[]>(shownCsv(shown).trim(), { newline: '\r\n' }).data;
     const n = shown.result.surfaceCount;
-    expect(rows[0]).toEqual(['from \\ to', ...shown.surfaceNames]);
+    expect(rows[0]).toEqual(['from \\ to', ...shown.names]);
     expect(rows).toHaveLength(n + 1);
     for (let i = 0; i < n; i++) {
-      expect(rows[i + 1][0]).toBe(shown.surfaceNames[i]);
+      expect(rows[i + 1][0]).toBe(shown.names[i]);
       // Round trip through text gives back the very same doubles.
       expect(rows[i + 1].slice(1).map(Number)).toEqual(Array.from(shown.result.F.subarray(i * n, (i + 1) * n)));
     }

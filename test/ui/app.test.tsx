@@ -8,6 +8,7 @@ import { AUTOSAVE_KEY, SET_ASIDE_PREFIX } from '../../src/state/autosave';
 import { MemoryStorage } from '../state/memoryStorage';
 import { spawner } from '../worker/fakeWorker';
 import { viewFactorApi } from '../../src/worker/api';
+import type { SketchFile } from '../../src/state/sketchFile';
 
 vi.mock('../../src/ui/canvas/SketchCanvas', () => ({ SketchCanvas: () => <div data-testid="canvas-stub" /> }));
 
@@ -108,15 +109,17 @@ describe('the app', () => {
     expect(document.querySelector('[data-status]')?.getAttribute('data-status')).toBe('error');
     expect(store.getState().doc).toBe(demoSketch);
     // The next job hangs: after the time limit the app says so and is not stuck computing.
-    store.getState().edit((d) => ({ ...d, units: 'cm' }));
+    // A change of geometry posts a job (units or names would not).
+    const shift = (dx: number) => (d: SketchFile): SketchFile => ({ ...d, shapes: d.shapes.map((sh) => ({ ...sh, points: sh.points.map(([x, y]): [number, number] => [x + dx, y]) })) });
+    store.getState().edit(shift(0.5));
     // (The job reaching the new worker is checked rather than the brief "computing"
     // state, which a loaded machine can pass before the first poll.)
     await waitFor(() => expect(workers[1]?.calls).toHaveLength(1));
     await waitFor(() => expect(screen.getAllByRole('alert').some((a) => /took too long/.test(a.textContent ?? ''))).toBe(true));
     expect(document.querySelector('[data-status]')?.getAttribute('data-status')).toBe('error');
-    expect(store.getState().doc.units).toBe('cm');
+    expect(store.getState().doc.shapes[0].points[0][0]).toBe(demoSketch.shapes[0].points[0][0] + 0.5);
     // A third, healthy worker answers the next edit.
-    store.getState().edit((d) => ({ ...d, units: 'mm' }));
+    store.getState().edit(shift(0.25));
     await waitFor(() => expect(workers[2]?.calls).toHaveLength(1));
     const call = workers[2].calls[0];
     call.resolve(await viewFactorApi.compute(call.job));

@@ -3,16 +3,17 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
 import { MatrixTable } from '../../src/ui/matrix/MatrixTable';
 import { matrixView } from '../../src/state/matrixView';
-import type { ShownResult } from '../../src/state/resultsSlice';
-import { emptySketch } from '../../src/state/documentSlice';
+import type { ShownResult } from '../../src/state/results/derive';
 
 afterEach(() => cleanup());
 
 /** A two-surface result whose reciprocity and row sums are off on purpose, to see them flagged. */
 function shown(closed: boolean): ShownResult {
   return {
-    doc: emptySketch,
-    surfaceNames: ['inner', 'outer'],
+    sketch: { version: 1, units: 'm', shapes: [], surfaces: {}, settings: {} },
+    names: ['inner', 'outer'],
+    units: 'm',
+    stale: false,
     elapsedMs: 1,
     result: {
       edgeCount: 2, surfaceCount: 2, closed,

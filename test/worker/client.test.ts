@@ -5,7 +5,6 @@ import { fakeResult, spawner } from './fakeWorker';
 
 const job = (tag: number): ViewFactorJob => ({
   polygons: [{ kind: 'enclosure', points: Float64Array.from([tag, 0, 1, 0, 1, 1]) }],
-  edgeSurface: Int32Array.from([0, 0, 0]), surfaceCount: 1,
 });
 const flush = () => new Promise((r) => setTimeout(r, 0));
 

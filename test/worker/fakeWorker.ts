@@ -1,16 +1,15 @@
 // A stand-in for the view-factor worker: each job waits until the test answers,
 // throws, or never answers (a hang).
-import type { ViewFactorResult } from '../../src/core/scene';
 import type { WorkerHandle } from '../../src/worker/client';
-import type { ViewFactorJob } from '../../src/worker/job';
+import type { EdgeViewFactors, ViewFactorJob } from '../../src/worker/job';
 
-export interface PendingCall { job: ViewFactorJob; resolve: (r: ViewFactorResult) => void; reject: (e: unknown) => void }
+export interface PendingCall { job: ViewFactorJob; resolve: (r: EdgeViewFactors) => void; reject: (e: unknown) => void }
 
 export class FakeWorker implements WorkerHandle {
   calls: PendingCall[] = [];
   terminated = false;
   private crash: ((m: string) => void) | null = null;
-  compute(job: ViewFactorJob): Promise<ViewFactorResult> {
+  compute(job: ViewFactorJob): Promise<EdgeViewFactors> {
     return new Promise((resolve, reject) => this.calls.push({ job, resolve, reject }));
   }
   terminate() { this.terminated = true; }
@@ -19,13 +18,9 @@ export class FakeWorker implements WorkerHandle {
 }
 
 /** A result shaped like the core's, tagged with the job's first coordinate so tests can tell jobs apart. */
-export function fakeResult(job: ViewFactorJob): ViewFactorResult {
-  const n = job.surfaceCount;
-  return {
-    edgeCount: job.edgeSurface.length, surfaceCount: n,
-    edgeLength: new Float64Array(job.edgeSurface.length), surfaceLength: new Float64Array(n).fill(job.polygons[0]?.points[0] ?? 0),
-    F: new Float64Array(n * n), rowSumResidual: new Float64Array(n), reciprocityResidual: 0, closed: true,
-  };
+export function fakeResult(job: ViewFactorJob): EdgeViewFactors {
+  const n = job.polygons.reduce((sum, p) => sum + p.points.length / 2, 0);
+  return { edgeCount: n, edgeLength: new Float64Array(n).fill(job.polygons[0]?.points[0] ?? 0), F: new Float64Array(n * n), closed: true };
 }
 
 export function spawner() {

@@ -9,7 +9,7 @@ import { surfaceStyle, MARK } from '../palette';
 interface Props {
   doc: SketchFile;
   camera: Camera;
-  order: Map<string, number>;
+  order: ReadonlyMap<string, number>;
   /** Surfaces to emphasise (hovered table cell, selected surfaces). */
   emphasis: Set<string>;
   problemShapes: Set<number>;

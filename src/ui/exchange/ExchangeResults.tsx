@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import { useApp } from '../AppContext';
-import { selectExchange } from '../../state/exchangeSelectors';
-import { solvedCsv } from '../../state/exchangeExport';
+import { selectExchange } from '../../state/exchange/selectors';
+import { solvedCsv } from '../../state/exchange/export';
 import { downloadText } from '../chrome/download';
 import { SAFETY_TEXT } from '../chrome/SafetyNote';
 import { fmtResidual } from '../matrix/format';

@@ -1,6 +1,6 @@
 import { useId } from 'react';
 import { useApp, useAppStore } from '../AppContext';
-import { selectSettings, selectTemperatureUnit } from '../../state/exchangeSelectors';
+import { selectSettings, selectTemperatureUnit } from '../../state/exchange/selectors';
 import { setSettings } from '../../state/exchangeEdits';
 import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchangeUnits';
 import { CheckedField } from './CheckedField';

@@ -1,6 +1,6 @@
 import { useApp } from '../AppContext';
 import { selectViewFactors } from '../../state/selectors';
-import { selectExchange } from '../../state/exchangeSelectors';
+import { selectExchange } from '../../state/exchange/selectors';
 
 /** Are the exchange numbers current, a step behind, or for the last valid sketch? */
 export function ExchangeStatus() {

@@ -1,6 +1,6 @@
 import { useApp } from '../AppContext';
-import { selectTemperatureUnit } from '../../state/exchangeSelectors';
-import type { ExchangeSolved } from '../../state/exchangeSlice';
+import { selectTemperatureUnit } from '../../state/exchange/selectors';
+import type { ExchangeSolved } from '../../state/exchange/slice';
 import { TEMPERATURE_LABEL } from '../../state/exchangeUnits';
 import { fmtHeat, fmtTemperature } from './format';
 import { exchangeRows } from './rows';

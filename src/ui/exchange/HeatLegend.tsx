@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import { useApp, useAppStore } from '../AppContext';
-import { selectExchange, selectHeatColouring } from '../../state/exchangeSelectors';
-import type { HeatColouring } from '../../state/exchangeSlice';
+import { selectExchange, selectHeatColouring } from '../../state/exchange/selectors';
+import type { HeatColouring } from '../../state/exchange/slice';
 import { SCALE_GRADIENT } from './heatScale';
 import { fmtHeat } from './format';
 import { useHeatScale } from './useHeatScale';

@@ -1,4 +1,4 @@
-import type { ExchangeSolved } from '../../state/exchangeSlice';
+import type { ExchangeSolved } from '../../state/exchange/slice';
 import { divergingColour } from './heatScale';
 import { fmtHeat } from './format';
 import { exchangeRows } from './rows';

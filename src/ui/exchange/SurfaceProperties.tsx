@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import { useApp, useAppStore } from '../AppContext';
 import { selectDoc } from '../../state/selectors';
-import { selectExchange, selectTemperatureUnit } from '../../state/exchangeSelectors';
+import { selectExchange, selectTemperatureUnit } from '../../state/exchange/selectors';
 import { DEFAULT_EMISSIVITY, setCondition, setEmissivity, setSurfaceProps, surfacePropsOf, type ConditionChoice } from '../../state/exchangeEdits';
 import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchangeUnits';
 import type { SurfaceProps } from '../../state/sketchFile';

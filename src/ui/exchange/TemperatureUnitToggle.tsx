@@ -1,6 +1,6 @@
 import { useApp, useAppStore } from '../AppContext';
-import { selectTemperatureUnit } from '../../state/exchangeSelectors';
-import type { TemperatureUnit } from '../../state/exchangeSlice';
+import { selectTemperatureUnit } from '../../state/exchange/selectors';
+import type { TemperatureUnit } from '../../state/exchange/slice';
 import { TEMPERATURE_LABEL } from '../../state/exchangeUnits';
 
 /** K or degrees Celsius for every temperature the panel shows or accepts (the file keeps kelvin). */

@@ -1,5 +1,5 @@
 // Numbers in the heat-exchange panel.
-import type { TemperatureUnit } from '../../state/exchangeSlice';
+import type { TemperatureUnit } from '../../state/exchange/slice';
 import { fromKelvin } from '../../state/exchangeUnits';
 import { fmtFactor } from '../matrix/format';
 

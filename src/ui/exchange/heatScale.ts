@@ -3,7 +3,7 @@
 // red-green colour blindness, and lightness rises from both ends to the middle,
 // so the scale also reads in grey. Net flux is centred on zero (blue: takes heat
 // up, orange: gives heat off); temperature on the middle of its range.
-import type { ExchangeView, HeatColouring, TemperatureUnit } from '../../state/exchangeSlice';
+import type { ExchangeView, HeatColouring, TemperatureUnit } from '../../state/exchange/slice';
 import { fromKelvin, TEMPERATURE_LABEL } from '../../state/exchangeUnits';
 
 /** sRGB stops at t = 0, 0.25, 0.5, 0.75, 1. */

@@ -1,7 +1,7 @@
 // One row per surface of a solved exchange (and one for the surroundings of an
 // open sketch), in the units the panel shows: K, W per metre of depth, W/m^2, W.
-import type { ExchangeSolved } from '../../state/exchangeSlice';
-import { conditionInTable, seesSurroundings } from '../../state/exchangeLabels';
+import type { ExchangeSolved } from '../../state/exchange/slice';
+import { conditionInTable, seesSurroundings } from '../../state/exchange/labels';
 
 export interface ExchangeRow {
   name: string;

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { useApp } from '../AppContext';
-import { selectExchange, selectHeatColouring, selectTemperatureUnit } from '../../state/exchangeSelectors';
+import { selectExchange, selectHeatColouring, selectTemperatureUnit } from '../../state/exchange/selectors';
 import { heatScale, type HeatScale } from './heatScale';
 
 /** The canvas colour scale for the current colouring and results, or null (off, or nothing solved). */

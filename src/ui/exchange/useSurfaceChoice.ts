@@ -1,6 +1,6 @@
-import { useEffect, useMemo } from 'react';
+import { useEffect, useMemo, useRef } from 'react';
 import { useApp, useAppStore } from '../AppContext';
-import { selectExchangeSurface } from '../../state/exchangeSelectors';
+import { selectExchangeSurface } from '../../state/exchange/selectors';
 import { useSurfaceOrder } from '../canvas/useSurfaceOrder';
 import { useSelectedSurfaces } from '../canvas/useSelectedSurfaces';
 
@@ -15,15 +15,18 @@ export function useSurfaceChoice(): { names: string[]; current: string | null; c
   const selected = useSelectedSurfaces();
   const order = useSurfaceOrder();
   const names = useMemo(() => [...order.keys()], [order]);
+  // Follow selection changes only: a name chosen in the panel stays until the
+  // selection changes, even when the names change. The effect below reads the
+  // latest names through this ref (updated first, effects run in order).
+  const latestNames = useRef(names);
+  useEffect(() => { latestNames.current = names; }, [names]);
   useEffect(() => {
     if (selected.size === 0) return;
     const current = store.getState().exchangeSurface;
     if (current !== null && selected.has(current)) return;
-    const first = names.find((n) => selected.has(n));
+    const first = latestNames.current.find((n) => selected.has(n));
     if (first !== undefined) store.getState().setExchangeSurface(first);
-    // Follow selection changes only; a name chosen in the panel stays until the selection changes.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [selected]);
+  }, [selected, store]);
   const current = chosen !== null && names.includes(chosen) ? chosen : (names[0] ?? null);
   return { names, current, choose: (name) => store.getState().setExchangeSurface(name) };
 }

@@ -1,6 +1,6 @@
 import type { MatrixView } from '../../state/matrixView';
 import { matrixTsv, shownCsv } from '../../state/matrixExport';
-import type { ShownResult } from '../../state/resultsSlice';
+import type { ShownResult } from '../../state/results/derive';
 import { NumberField } from '../inspector/NumberField';
 import { downloadText } from '../chrome/download';
 import { useApp } from '../AppContext';

@@ -1,5 +1,5 @@
 import { useApp } from '../AppContext';
-import { selectDigits, selectHoverPair, selectResultsStale, selectUnits, selectViewFactors } from '../../state/selectors';
+import { selectDigits, selectHoverPair, selectShown, selectUnits } from '../../state/selectors';
 import { matrixView, RESIDUAL_TOLERANCE } from '../../state/matrixView';
 import type { AppState } from '../../state/store';
 import { useSurfaceOrder } from '../canvas/useSurfaceOrder';
@@ -12,16 +12,16 @@ import { fmtResidual } from './format';
 const selectSetHover = (s: AppState) => s.setHoverPair;
 
 export function MatrixPanel() {
-  const vf = useApp(selectViewFactors);
+  const shown = useApp(selectShown);
   const digits = useApp(selectDigits);
   const docUnits = useApp(selectUnits);
   const hoverPair = useApp(selectHoverPair);
-  const stale = useApp(selectResultsStale);
+  const stale = shown?.stale ?? false;
   const setHover = useApp(selectSetHover);
   const selected = useSelectedSurfaces();
   const order = useSurfaceOrder();
-  const view = vf.shown ? matrixView(vf.shown) : null;
-  const units = vf.shown?.doc.units ?? docUnits;
+  const view = shown ? matrixView(shown) : null;
+  const units = shown?.units ?? docUnits;
   const recipBad = view ? view.reciprocityResidual > RESIDUAL_TOLERANCE : false;
   const rowBad = view ? view.worstRowResidual > RESIDUAL_TOLERANCE : false;
   return (
@@ -30,7 +30,7 @@ export function MatrixPanel() {
         <h2 id="matrix-title">View factors</h2>
         <ResultStatus />
       </div>
-      <MatrixControls shown={vf.shown} view={view} digits={digits} />
+      <MatrixControls shown={shown} view={view} digits={digits} />
       <div className="matrix-scroll">
         {view ? (
           <MatrixTable view={view} digits={digits} units={units} order={order} selected={selected} hoverPair={hoverPair} onHover={setHover} stale={stale} />

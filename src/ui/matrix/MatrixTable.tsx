@@ -9,7 +9,7 @@ interface Props {
   digits: number;
   units: string;
   /** Colour index of each surface name on the canvas. */
-  order: Map<string, number>;
+  order: ReadonlyMap<string, number>;
   selected: Set<string>;
   hoverPair: [string, string] | null;
   onHover: (pair: [string, string] | null) => void;

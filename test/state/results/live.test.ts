@@ -1,13 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { createAppStore } from '../../src/state/store';
-import { startLiveResults, type JobRunner } from '../../src/state/liveResults';
-import { documentApi } from '../../src/state/documentApi';
-import { setVertex } from '../../src/state/edits/shapeEdits';
-import { emptySketch } from '../../src/state/documentSlice';
-import { ViewFactorClient } from '../../src/worker/client';
-import { viewFactorApi } from '../../src/worker/api';
-import type { SketchFile } from '../../src/state/sketchFile';
-import { spawner } from '../worker/fakeWorker';
+import { createAppStore } from '../../../src/state/store';
+import { startLiveResults, type JobRunner } from '../../../src/state/results/live';
+import { shownResult } from '../../../src/state/results/derive';
+import { documentApi } from '../../../src/state/documentApi';
+import { setVertex } from '../../../src/state/edits/shapeEdits';
+import { emptySketch } from '../../../src/state/documentSlice';
+import { ViewFactorClient } from '../../../src/worker/client';
+import { viewFactorApi } from '../../../src/worker/api';
+import type { SketchFile } from '../../../src/state/sketchFile';
+import { spawner } from '../../worker/fakeWorker';
 
 const box: SketchFile = {
   version: 1, units: 'm',
@@ -28,22 +29,23 @@ describe('live results', () => {
     await flush();
     const vf = store.getState().viewFactors;
     expect(vf.status).toBe('ready');
-    expect(vf.shown?.doc).toBe(box);
-    expect(vf.shown?.surfaceNames).toEqual(['floor', 'right', 'roof', 'left', 'block']);
+    expect(shownResult(vf)?.stale).toBe(false);
+    expect(shownResult(vf)?.names).toEqual(['floor', 'right', 'roof', 'left', 'block']);
   });
 
   it('marks invalid geometry, keeps the last valid result and the drawing', async () => {
     const store = createAppStore(box);
     startLiveResults(store, inThread, documentApi);
     await flush();
-    const shown = store.getState().viewFactors.shown;
+    const shown = shownResult(store.getState().viewFactors);
     // Drag a block corner through the wall.
     store.getState().edit((d) => setVertex(d, 1, 1, [4.5, 0.75]));
     await flush();
     const vf = store.getState().viewFactors;
     expect(vf.status).toBe('invalid');
-    expect(vf.problems.join(' ')).toMatch(/shape 2.*(enclosure|outside)/);
-    expect(vf.shown).toBe(shown);
+    expect(vf.problems.map((p) => p.message).join(' ')).toMatch(/shape 2.*(enclosure|outside)/);
+    expect(shownResult(vf)?.result).toBe(shown?.result);
+    expect(shownResult(vf)?.stale).toBe(true);
     expect(store.getState().doc.shapes[1].points[1]).toEqual([4.5, 0.75]);
   });
 

@@ -1,5 +1,5 @@
 // Selectors for the heat-exchange slice, at module level so components subscribe to stable functions.
-import type { AppState } from './store';
+import type { AppState } from '../store';
 
 export const selectExchange = (s: AppState) => s.exchange;
 export const selectHeatColouring = (s: AppState) => s.heatColouring;

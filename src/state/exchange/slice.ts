@@ -1,11 +1,11 @@
 // Heat-exchange results: a cache derived from the newest view-factor result and
-// the document (src/state/exchangeLive.ts), never saved and never undone. Also
+// the document (live.ts beside this file), never saved and never undone. Also
 // the exchange's view state: how the canvas is coloured, the temperature unit
 // shown, and which surface the properties panel edits.
 import type { StateCreator } from 'zustand';
-import type { ExchangeResult, SurfaceCondition } from '../document/exchangeInput';
-import type { Units } from './sketchFile';
-import type { AppState } from './store';
+import type { ExchangeResult, SurfaceCondition } from '../../document/exchangeInput';
+import type { Units } from '../sketchFile';
+import type { AppState } from '../store';
 
 export type HeatColouring = 'off' | 'netFlux' | 'temperature';
 

@@ -1,0 +1,76 @@
+// The cheap stages of the results pipeline, pure and cached on exactly their
+// inputs: edge factors + surface index -> surface factors (a rename or a group
+// redoes only this sum); the one staleness rule; the table numbers.
+import { aggregateToSurfaces } from '../../core/surfaces';
+import type { ViewFactorResult } from '../../core/scene';
+import type { SurfaceIndex } from '../../document/surfaceIndex';
+import type { EdgeViewFactors } from '../../worker/job';
+import type { CheckedSketch } from '../documentApi';
+import type { Units } from '../sketchFile';
+import { scaleBetween } from './geometry';
+import type { ViewFactorCache } from './slice';
+
+/** Surface-level view factors as screens and exports show them. */
+export interface ShownResult {
+  /** Surface names in table order (names[i] is row i). */
+  names: readonly string[];
+  result: ViewFactorResult;
+  /** Units of `result`'s lengths. */
+  units: Units;
+  /** The checked sketch whose surface properties and settings go with these factors. */
+  sketch: CheckedSketch;
+  /** True when the factors are not for the current document's geometry (one step behind, or the last valid sketch). */
+  stale: boolean;
+  /** Wall-clock time of the worker job, ms. */
+  elapsedMs: number;
+}
+
+const sums = new WeakMap<EdgeViewFactors, WeakMap<SurfaceIndex, { scale: number; result: ViewFactorResult }>>();
+
+/**
+ * Surface factors from edge factors: F_IJ = sum L_i F_ij / L_I over the edges of
+ * I and J. `scale` multiplies the edge lengths (a geometry that is the computed
+ * one scaled, e.g. after a change of units); the factors do not change.
+ */
+export function surfaceFactors(edges: EdgeViewFactors, surfaces: SurfaceIndex, scale = 1): ViewFactorResult {
+  let bySurfaces = sums.get(edges);
+  if (!bySurfaces) sums.set(edges, (bySurfaces = new WeakMap()));
+  const hit = bySurfaces.get(surfaces);
+  if (hit && hit.scale === scale) return hit.result;
+  const lengths = scale === 1 ? edges.edgeLength : edges.edgeLength.map((L) => L * scale);
+  const result = aggregateToSurfaces(edges.edgeCount, lengths, edges.F, surfaces.edgeSurface, surfaces.names.length, edges.closed);
+  bySurfaces.set(surfaces, { scale, result });
+  return result;
+}
+
+let lastCache: ViewFactorCache | null = null;
+let lastShown: ShownResult | null = null;
+
+/**
+ * What is on screen: the newest edge factors summed to surfaces. When they were
+ * computed for the current geometry (up to scale), the current names, units and
+ * properties go with them; otherwise those of the sketch they were computed for,
+ * and they are stale. This is the only staleness rule.
+ */
+export function shownResult(vf: ViewFactorCache): ShownResult | null {
+  if (vf === lastCache) return lastShown;
+  lastCache = vf;
+  lastShown = deriveShown(vf);
+  return lastShown;
+}
+
+function deriveShown(vf: ViewFactorCache): ShownResult | null {
+  const edges = vf.edges;
+  if (!edges) return null;
+  const current = vf.current;
+  const scale = current ? scaleBetween(edges.basis.key, current.key) : null;
+  const basis = current && scale !== null ? current : edges.basis;
+  return {
+    names: basis.surfaces.names,
+    result: surfaceFactors(edges.result, basis.surfaces, scale ?? 1),
+    units: basis.sketch.units,
+    sketch: basis.sketch,
+    stale: scale === null,
+    elapsedMs: edges.elapsedMs,
+  };
+}
