@@ -5,6 +5,8 @@ import { CanvasController } from '../../src/state/canvasController';
 import { emptySketch } from '../../src/state/documentSlice';
 import { clickPoint, finish, removeLastPoint, emptyDraft } from '../../src/state/tools/polygonTool';
 import { rectangleFromCorners, regularPolygon } from '../../src/state/tools/quickShapes';
+import { rectangleTool } from '../../src/state/tools/rectangle';
+import { tubeTool } from '../../src/state/tools/tube';
 import { restore } from '../../src/document';
 import type { Point } from '../../src/state/sketchFile';
 
@@ -91,6 +93,56 @@ describe('drawing with the controller', () => {
     expect(shapes[1].points).toEqual([[0.5, 0.5], [1.5, 0.5], [1.5, 1], [0.5, 1]]);
     expect(shapes[2].kind).toBe('solid');
     expect(shapes[2].points).toHaveLength(8);
+    expect(restore(store.getState().doc).ok).toBe(true);
+  });
+
+  it('Backspace while drawing drops the last point, Escape drops the outline, then clears the selection', () => {
+    const store = createAppStore(emptySketch);
+    const c = new CanvasController(store);
+    store.getState().setSelection([{ type: 'shape', shape: 0 }]);
+    store.getState().setTool('enclosure');
+    for (const p of [[0, 0], [3, 0], [3, 2]] as Point[]) c.press(at(p));
+    expect(c.key('Backspace')).toBe(true);
+    expect(store.getState().draft).toEqual([[0, 0], [3, 0]]);
+    c.finishDraft(); // two points: not an outline yet, and the app says so
+    expect(store.getState().doc.shapes).toHaveLength(0);
+    expect(store.getState().notices.at(-1)?.text).toMatch(/at least three points/);
+    c.cancel();
+    expect(store.getState().draft).toEqual([]);
+    expect(store.getState().selection).toHaveLength(1);
+    expect(c.key('Delete')).toBe(false); // nothing drawn: Delete is for the selection
+    c.cancel();
+    expect(store.getState().selection).toEqual([]);
+  });
+
+  it('a rectangle by two clicks, as the enclosure; a tube with the sides setting; Escape drops a quick shape', () => {
+    const store = createAppStore(emptySketch);
+    const c = new CanvasController(store);
+    store.getState().setTool('rectangle');
+    const makes = rectangleTool.settings?.find((x) => x.type === 'choice');
+    if (makes?.type !== 'choice') throw new Error('the rectangle tool has a makes setting');
+    makes.write(store.getState(), 'enclosure');
+    expect(store.getState().quickKind).toBe('enclosure');
+    c.press(at([0, 0])); c.release(at([0, 0])); // a click: waits for the second corner
+    c.move(at([4, 3]));
+    expect(store.getState().draft).toEqual([[0, 0], [4, 0], [4, 3], [0, 3]]);
+    c.press(at([4, 3])); c.release(at([4, 3]));
+    expect(store.getState().doc.shapes[0]).toMatchObject({ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 3], [0, 3]] });
+    makes.write(store.getState(), 'solid');
+    store.getState().setTool('tube');
+    const sides = tubeTool.settings?.find((x) => x.type === 'integer');
+    if (sides?.type !== 'integer') throw new Error('the tube tool has a sides setting');
+    sides.write(store.getState(), 4);
+    expect(sides.read(store.getState())).toBe(4);
+    c.press(at([2, 1.5])); c.move(at([2.5, 1.5]));
+    expect(store.getState().draft).toHaveLength(4);
+    c.cancel();
+    expect(store.getState().draft).toEqual([]);
+    c.release(at([2.5, 1.5])); // the dropped tube is not made on release
+    expect(store.getState().doc.shapes).toHaveLength(1);
+    c.press(at([2, 1.5])); c.move(at([2.5, 1.5])); c.release(at([2.5, 1.5]));
+    // A square on the circle of radius 0.5 about (2, 1.5), first corner towards the rim point.
+    expect(store.getState().doc.shapes[1]).toMatchObject({ kind: 'solid', points: [[2.5, 1.5], [2, 2], [1.5, 1.5], [2, 1]] });
     expect(restore(store.getState().doc).ok).toBe(true);
   });
 });
