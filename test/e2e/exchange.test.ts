@@ -4,8 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { startApp, type App } from './harness';
-import type { SketchFile } from '../../src/state/sketchFile';
+import { startApp, type App, type TestWindow } from './harness';
 
 let app: App;
 let page: Page;
@@ -24,7 +23,7 @@ afterAll(async () => { await app?.close(); });
 const results = () => page.getByRole('table', { name: /heat exchange per surface/i });
 const netHeat = (surface: string) => page.locator(`.exchange-table tr[data-surface="${surface}"] td:nth-of-type(4)`);
 const netHeatValue = async (surface: string) => Number(await netHeat(surface).getAttribute('data-value'));
-const docOf = () => page.evaluate(() => (window as any).__tautline.store.getState().doc as SketchFile);
+const docOf = () => page.evaluate(() => (window as unknown as TestWindow).__tautline.store.getState().doc);
 
 async function openTab() {
   await page.getByRole('tab', { name: 'Heat exchange' }).click();

@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { dragOnCanvas, screenOf as screenPoint, startApp, type App } from './harness';
+import { dragOnCanvas, screenOf as screenPoint, startApp, type App, type TestWindow } from './harness';
 import type { SketchFile } from '../../src/state/sketchFile';
 
 let app: App;
@@ -19,8 +19,8 @@ beforeAll(async () => {
 afterAll(async () => { await app?.close(); });
 
 const state = () => page.evaluate(() => {
-  const s = (window as any).__tautline.store.getState();
-  return { doc: s.doc as SketchFile, camera: s.camera as { scale: number; originX: number; originY: number } };
+  const s = (window as unknown as TestWindow).__tautline.store.getState();
+  return { doc: s.doc, camera: s.camera };
 });
 
 const screenOf = (x: number, y: number) => screenPoint(page, x, y);
@@ -28,8 +28,8 @@ const screenOf = (x: number, y: number) => screenPoint(page, x, y);
 describe('files and view', () => {
   it('saves the sketch file and opens it again; a bad file changes nothing and says why', async () => {
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save' }).click()]);
-    const text = readFileSync((await download.path())!, 'utf8');
-    const saved = JSON.parse(text);
+    const text = readFileSync(await download.path(), 'utf8');
+    const saved = JSON.parse(text) as SketchFile;
     expect(saved.version).toBe(1);
     expect(saved.shapes).toHaveLength(5);
     const before = (await state()).doc;

@@ -6,8 +6,12 @@ import { join } from 'node:path';
 import { createServer } from 'node:net';
 import { build, preview, type PreviewServer } from 'vite';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import type { Runtime } from '../../src/state/runtime';
 
 export const CHROMIUM = '/usr/bin/chromium';
+
+/** The page's window as the tests see it: src/main.tsx puts the app's runtime there. Types only (evaluate callbacks run in the page). */
+export type TestWindow = Window & { __tautline: Runtime };
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -61,7 +65,7 @@ export async function startApp(): Promise<App> {
 /** Screen position (page pixels) of a sketch point, from the app's own camera. */
 export async function screenOf(page: Page, x: number, y: number): Promise<[number, number]> {
   const box = (await page.locator('.canvas-box').boundingBox())!;
-  const cam = await page.evaluate(() => (window as any).__tautline.store.getState().camera);
+  const cam = await page.evaluate(() => (window as unknown as TestWindow).__tautline.store.getState().camera);
   return [box.x + cam.originX + cam.scale * x, box.y + cam.originY - cam.scale * y];
 }
 
