@@ -31,6 +31,8 @@ export class ViewFactorClient {
   private disposed = false;
   /** How many times the worker was replaced after a failure. */
   restarts = 0;
+  /** How many jobs were handed to a worker (benchmarks and tests count them). */
+  launched = 0;
 
   constructor(private readonly spawn: () => WorkerHandle, private readonly options: ClientOptions) {
     this.worker = this.start();
@@ -73,6 +75,7 @@ export class ViewFactorClient {
       this.options.timeLimitMs,
     );
     const current = { ...entry, started, timer };
+    this.launched++;
     this.running = current;
     let answer: Promise<EdgeViewFactors>;
     try {

@@ -1,0 +1,87 @@
+// Browser benchmark: `npm run bench:browser`. Builds the app, opens the demo in
+// Debian's headless chromium and measures, over many pointer moves, the time
+// from a drag event to the updated view-factor table, and from a property
+// edit to the updated net-heat table (which must post no view-factor job).
+// Prints min, median and p90; the targets are reported, never asserted.
+import type { Page } from 'playwright-core';
+import { screenOf, startApp, type TestWindow } from '../e2e/harness';
+
+type LatencyWindow = TestWindow & { __lat: { lastEvent: number; samples: number[]; changes: number } };
+
+function stats(samples: number[]): string {
+  const s = [...samples].sort((a, b) => a - b);
+  const at = (q: number) => s[Math.min(s.length - 1, Math.floor(q * s.length))].toFixed(1);
+  return `min ${s[0].toFixed(1)} ms, median ${at(0.5)} ms, p90 ${at(0.9)} ms over ${s.length}`;
+}
+
+/** Stamp every change below `selector` with the time since the last input event of `kind`. */
+async function watch(page: Page, selector: string, kind: 'pointermove' | 'change'): Promise<void> {
+  await page.evaluate(
+    ([sel, ev]) => {
+      const w = window as unknown as LatencyWindow;
+      w.__lat = { lastEvent: 0, samples: [], changes: 0 };
+      window.addEventListener(ev, () => { w.__lat.lastEvent = performance.now(); }, true);
+      new MutationObserver(() => {
+        if (w.__lat.lastEvent) w.__lat.samples.push(performance.now() - w.__lat.lastEvent);
+        w.__lat.lastEvent = 0;
+        w.__lat.changes++;
+      }).observe(document.querySelector(sel)!, { subtree: true, childList: true, characterData: true });
+    },
+    [selector, kind] as const,
+  );
+}
+
+const changes = (page: Page) => page.evaluate(() => (window as unknown as LatencyWindow).__lat.changes);
+const samples = (page: Page) => page.evaluate(() => (window as unknown as LatencyWindow).__lat.samples);
+const jobs = (page: Page) => page.evaluate(() => (window as unknown as TestWindow).__tautline.client.launched);
+const waitReady = (page: Page) =>
+  page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+
+async function dragLatency(page: Page, moves: number): Promise<number[]> {
+  await watch(page, '.matrix-scroll', 'pointermove');
+  await page.getByRole('checkbox', { name: 'snap' }).uncheck();
+  const [sx, sy] = await screenOf(page, 2.1, 1.5); // a roof corner of the demo oven
+  for (const warm of [true, false]) {
+    await page.evaluate(() => { (window as unknown as LatencyWindow).__lat.samples = []; });
+    await page.mouse.move(sx, sy);
+    await page.mouse.down();
+    for (let i = 1; i <= (warm ? 20 : moves); i++) {
+      const c = await changes(page);
+      await page.mouse.move(sx + (i % 40) * 2, sy - (i % 40));
+      await page.waitForFunction((n) => (window as unknown as LatencyWindow).__lat.changes > n, c, { timeout: 5000 });
+    }
+    await page.mouse.up();
+    await page.keyboard.press('Control+z');
+    await waitReady(page);
+  }
+  return samples(page);
+}
+
+async function propertyLatency(page: Page, edits: number): Promise<{ samples: number[]; jobs: number }> {
+  await page.getByRole('tab', { name: /heat exchange/i }).click();
+  await watch(page, '.exchange-results', 'change');
+  const field = page.getByRole('textbox', { name: /emissivity/i }).first();
+  const before = await jobs(page);
+  for (let i = 0; i < edits; i++) {
+    const c = await changes(page);
+    await field.fill(String(0.5 + (i % 40) / 100));
+    await field.press('Enter');
+    await page.waitForFunction((n) => (window as unknown as LatencyWindow).__lat.changes > n, c, { timeout: 5000 });
+  }
+  return { samples: await samples(page), jobs: (await jobs(page)) - before };
+}
+
+const app = await startApp();
+try {
+  const page = await app.context.newPage();
+  await page.goto(app.url);
+  await waitReady(page);
+  console.log(`chromium headless, demo oven; ${new Date().toISOString()}`);
+  console.log(`drag event -> updated view-factor table: ${stats(await dragLatency(page, 80))} moves (target median <= 50 ms)`);
+  const p = await propertyLatency(page, 40);
+  console.log(`emissivity typed -> updated net-heat table: ${stats(p.samples)} edits; view-factor jobs posted: ${p.jobs} (target 0)`);
+  const mem = await page.evaluate(() => (performance as unknown as { memory?: { usedJSHeapSize: number } }).memory?.usedJSHeapSize ?? 0);
+  if (mem) console.log(`page JS heap after the runs: ${(mem / 1e6).toFixed(1)} MB`);
+} finally {
+  await app.close();
+}
