@@ -22,7 +22,7 @@ export type RestoreResult = { ok: true; sketch: Sketch; warnings: string[] } | {
  * (one surface name per edge, repeated consecutive points removed) and check
  * its geometry. Warnings describe repairs and ignored content.
  */
-export function restore(input: string | unknown): RestoreResult {
+export function restore(input: unknown): RestoreResult {
   try {
     return restoreUnsafe(input);
   } catch (error) {

@@ -15,7 +15,7 @@ export type RestoreOutcome =
 
 export interface DocumentApi {
   /** Parse (from text) or validate (an object) a sketch file, with messages for people. */
-  restore(input: string | unknown): RestoreOutcome;
+  restore(input: unknown): RestoreOutcome;
   /** Core input for a sketch that `restore` accepted. */
   toScene(sketch: CheckedSketch): { scene: SceneInput; surfaceNames: string[] };
   /** File text; a sketch that fails validation is still written (as plain JSON), so work is never lost. */
@@ -27,7 +27,7 @@ export interface DocumentApi {
 // the geometry checks should run once per edit, not three times.
 const verdicts = new WeakMap<object, RestoreOutcome>();
 
-function restoreOnce(input: string | unknown): RestoreOutcome {
+function restoreOnce(input: unknown): RestoreOutcome {
   if (typeof input !== 'object' || input === null) return restore(input);
   let verdict = verdicts.get(input);
   if (!verdict) {
