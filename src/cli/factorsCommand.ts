@@ -3,6 +3,7 @@
 import { computeViewFactors } from '../core/viewFactors';
 import type { ViewFactorResult } from '../core/scene';
 import { matrixCsv, toScene, type Sketch } from '../document';
+import { SURROUNDINGS_LABEL } from '../document/exchange/labels';
 import type { CliIO } from './io';
 import { parseArgs } from './args';
 import { readSketchFile } from './readSketch';
@@ -71,7 +72,7 @@ function factorsTable(file: string, sketch: Sketch, names: string[], r: ViewFact
   shown.forEach((s, i) => lines.push(`  ${pad(s, width)}  ${formatLength(r.surfaceLength[i])}`));
   lines.push('', 'F (row = from, column = to):');
   const header = shown.map((s) => pad(s.length > cell - 1 ? `${s.slice(0, cell - 2)}…` : s, cell)).join('');
-  lines.push(`  ${pad('', width)}  ${header}${r.closed ? '' : 'surroundings'}`.trimEnd());
+  lines.push(`  ${pad('', width)}  ${header}${r.closed ? '' : SURROUNDINGS_LABEL.name}`.trimEnd());
   for (let i = 0; i < n; i++) {
     let row = '';
     for (let j = 0; j < n; j++) row += pad(fixed6(r.F[i * n + j]), cell);

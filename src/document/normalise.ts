@@ -1,6 +1,8 @@
 // From a schema-valid version-1 file to the form the program works with: one
 // surface name per edge, zero-length edges removed (with a warning), numbers
 // within the documented limits, one thermal condition per surface.
+import { conditionOf } from './exchange/conditions';
+import { moreThanOneConditionMessage } from './exchange/messages';
 import { formatNumber, formatPoint, quoteName, shapeLabel } from './labels';
 import { MAX_COORDINATE, MIN_EDGE_LENGTH, MIN_RELATIVE_EDGE_LENGTH } from './limits';
 import { problemAt, type SketchProblem } from './problems';
@@ -56,10 +58,9 @@ export function normalise(file: SketchFileV1): Normalised {
   const used = new Set(shapes.flatMap((s) => s.surface));
   for (const [name, props] of Object.entries(file.surfaces ?? {})) {
     surfaces[name] = { ...props };
-    const conditions = (['temperature', 'heatFlux', 'adiabatic', 'opening'] as const).filter((c) =>
-      c === 'adiabatic' || c === 'opening' ? props[c] === true : props[c] !== undefined);
-    if (conditions.length > 1) {
-      errors.push(problemAt('conditions', `surface ${quoteName(name)}: give one condition, not ${conditions.join(' and ')} together`, { edges: edgesNamed(shapes, fileIndex, name) }));
+    const condition = conditionOf(props);
+    if (!condition.ok) {
+      errors.push(problemAt('conditions', moreThanOneConditionMessage(name, condition.kinds), { edges: edgesNamed(shapes, fileIndex, name) }));
     }
     if (props.opening === true && props.emissivity !== undefined && props.emissivity !== 1) {
       warnings.push(`surface ${quoteName(name)}: emissivity ${formatNumber(props.emissivity)} is ignored; an opening acts as a black surface`);
