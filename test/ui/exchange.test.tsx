@@ -74,7 +74,7 @@ describe('heat-exchange tab', () => {
     await user.selectOptions(screen.getByLabelText('surface'), 'tube 1');
     const before = Number(netHeatCell('tube 1').getAttribute('data-value'));
     await user.click(screen.getByRole('radio', { name: '°C' }));
-    const field = screen.getByLabelText('temperature (°C)') as HTMLInputElement;
+    const field = screen.getByLabelText<HTMLInputElement>('temperature (°C)');
     expect(field.value).toBe('626.85'); // 900 K
     await type(user, field, '700');
     expect(store.getState().doc.surfaces!['tube 1'].temperature).toBeCloseTo(973.15, 9);
@@ -85,16 +85,16 @@ describe('heat-exchange tab', () => {
     expect(within(results()).getByRole('columnheader', { name: 'T (°C)' })).toBeTruthy();
     await user.click(screen.getByRole('button', { name: /^undo/i }));
     expect(store.getState().doc.surfaces!['tube 1'].temperature).toBe(900);
-    await waitFor(() => expect((screen.getByLabelText('temperature (°C)') as HTMLInputElement).value).toBe('626.85'));
+    await waitFor(() => expect(screen.getByLabelText<HTMLInputElement>('temperature (°C)').value).toBe('626.85'));
     expect(Number(netHeatCell('tube 1').getAttribute('data-value'))).toBe(before);
     await user.click(screen.getByRole('radio', { name: 'K' }));
-    expect((screen.getByLabelText('temperature (K)') as HTMLInputElement).value).toBe('900');
+    expect(screen.getByLabelText<HTMLInputElement>('temperature (K)').value).toBe('900');
   });
 
   it('follows the canvas selection: picking an edge edits its surface', async () => {
     const { store } = await openTab();
     act(() => store.getState().setSelection([{ type: 'edge', shape: 2, index: 3 }]));
-    await waitFor(() => expect((screen.getByLabelText('surface') as HTMLSelectElement).value).toBe('tube 2'));
+    await waitFor(() => expect(screen.getByLabelText<HTMLSelectElement>('surface').value).toBe('tube 2'));
     expect(rowOf('tube 2').className).toBe('on');
   });
 
@@ -116,8 +116,8 @@ describe('heat-exchange tab', () => {
     await user.click(screen.getByRole('button', { name: 'Use defaults' }));
     expect(Object.hasOwn(store.getState().doc.surfaces!, 'side walls')).toBe(false);
     expect(screen.getByText(/No properties in the file: the defaults apply \(emissivity 0\.9, adiabatic\)/)).toBeTruthy();
-    expect((screen.getByLabelText('emissivity') as HTMLInputElement).placeholder).toBe('0.9 (default)');
-    expect((screen.getByLabelText('condition') as HTMLSelectElement).selectedOptions[0].textContent).toBe('adiabatic (reradiating) (default)');
+    expect(screen.getByLabelText<HTMLInputElement>('emissivity').placeholder).toBe('0.9 (default)');
+    expect(screen.getByLabelText<HTMLSelectElement>('condition').selectedOptions[0].textContent).toBe('adiabatic (reradiating) (default)');
     expect(cellsOf('side walls')[1].textContent).toBe('0.9');
   });
 
@@ -129,15 +129,15 @@ describe('heat-exchange tab', () => {
     await waitFor(() => expect(document.querySelector('[data-exchange-status]')?.getAttribute('data-exchange-status')).toBe('solved'));
     const cell = netHeatCell('inner');
     expect(Math.abs(Number(cell.getAttribute('data-value')) - q)).toBeLessThanOrEqual(1e-9 * q);
-    shownMatches(cell.textContent!, q);
-    shownMatches(cellsOf('inner')[4].textContent!, q / 0.8); // net flux, W/m^2
-    shownMatches(netHeatCell('outer').textContent!, -q);
+    shownMatches(cell.textContent, q);
+    shownMatches(cellsOf('inner')[4].textContent, q / 0.8); // net flux, W/m^2
+    shownMatches(netHeatCell('outer').textContent, -q);
     expect(screen.getByText(/energy balance residual:/).textContent).not.toMatch(/above rounding/);
     // A depth of 3 m adds totals in W.
     await type(user, screen.getByLabelText('depth (m)'), '3');
     expect(store.getState().doc.settings).toEqual({ depth: 3 });
     expect(within(results()).getByRole('columnheader', { name: 'total (W)' })).toBeTruthy();
-    shownMatches(cellsOf('inner')[5].textContent!, 3 * q);
+    shownMatches(cellsOf('inner')[5].textContent, 3 * q);
   });
 
   it('shows the solver message for a problem with no unique answer and stays usable', async () => {
@@ -171,7 +171,7 @@ describe('heat-exchange tab', () => {
     const alert = await screen.findByRole('alert');
     expect(alert.textContent).toMatch(/'plate' sees the surroundings.*no surroundings temperature/);
     await user.click(within(alert).getByRole('button', { name: 'Edit “plate”' }));
-    expect((screen.getByLabelText('surface') as HTMLSelectElement).value).toBe('plate');
+    expect(screen.getByLabelText<HTMLSelectElement>('surface').value).toBe('plate');
     await user.click(screen.getByRole('radio', { name: '°C' }));
     await type(user, screen.getByLabelText('surroundings temperature (°C)'), '20');
     expect(store.getState().doc.settings?.surroundingsTemperature).toBeCloseTo(293.15, 9);
