@@ -58,7 +58,7 @@ describe('tools in the chrome', () => {
       expect(store.getState().tool).toBe(id);
     }
     key('t');
-    const sides = screen.getByLabelText('sides') as HTMLInputElement;
+    const sides = screen.getByLabelText<HTMLInputElement>('sides');
     fireEvent.change(sides, { target: { value: '7' } });
     fireEvent.keyDown(sides, { key: 'Enter' });
     fireEvent.blur(sides);

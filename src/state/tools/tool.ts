@@ -19,11 +19,11 @@ export type PressAnswer = 'handled' | 'pan';
 /** What a tool gets on each call. */
 export interface ToolContext<G> {
   /** The store's state now; read it again after an action, actions replace it. */
-  get(): AppState;
+  get: () => AppState;
   /** The tool's own in-flight state, made by init() when the tool became active. */
   gesture: G;
   /** p on the grid when snapping is on, else p (sketch units). */
-  snapped(p: Point): Point;
+  snapped: (p: Point) => Point;
 }
 
 /** What the draft layer draws for the shape being made; pure data, sketch units. */
