@@ -24,9 +24,10 @@ export class ObstacleGatherer {
   private readonly windows = new ConvexWindows();
   /** Signed distance of the current body's centre from each side, positive inside H. */
   private readonly centreDist = new Float64Array(4);
-  /** 1 when side k cuts the current body's circle; the body is surely inside the other sides. */
-  private readonly crossing = new Uint8Array(4);
-  /** SidePlace of corners against the four sides, 4 entries per corner. */
+  /** The sides that cut the current body's circle (crossCount of them); the body is surely inside the others. */
+  private readonly crossing = new Int32Array(4);
+  private crossCount = 0;
+  /** SidePlace of corners against the crossing sides, 4 entries per corner (slot c for crossing[c]). */
   private places = new Int8Array(256);
   private readonly visitWall: (id: number) => boolean;
   private readonly visitBody: (id: number) => boolean;
@@ -99,19 +100,17 @@ export class ObstacleGatherer {
     // A relative margin of 1e-9 keeps these float tests on the safe side: a body kept
     // in vain costs only time, and "wholly inside" must be certain.
     const margin = r * 1e-9 + 1e-12 * (Math.abs(cx) + Math.abs(cy));
-    let inside = true;
+    let crossCount = 0;
     for (let step = 0; step < 4; step++) {
       const k = SIDE_ORDER[step]; // the side strings reject most bodies, so they go first
-      this.crossing[k] = 0;
       if (!R.on[k]) continue;
       const dist = R.signedDistance(k, cx, cy);
       this.centreDist[k] = dist;
       if (dist < -r - margin) return;
-      if (dist < r + margin) {
-        this.crossing[k] = 1;
-        inside = false;
-      }
+      if (dist < r + margin) this.crossing[crossCount++] = k;
     }
+    this.crossCount = crossCount;
+    const inside = crossCount === 0;
     const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
     if (!inside) {
       if (ob.bodyConvex[b] && this.cutsView(b)) {
@@ -162,10 +161,10 @@ export class ObstacleGatherer {
     }
   }
 
-  /** Write the SidePlace of (x, y) against sides 0..3 to places[at .. at+3]; sides that miss the body's circle are surely inside. */
+  /** Write the SidePlace of (x, y) against each crossing side to places[at + c]. */
   private classifyCorner(x: number, y: number, at: number): void {
     const R = this.region, P = this.places;
-    for (let k = 0; k < 4; k++) P[at + k] = this.crossing[k] ? R.place(k, x, y) : SURELY_INSIDE;
+    for (let c = 0; c < this.crossCount; c++) P[at + c] = R.place(this.crossing[c], x, y);
   }
 
   /** Drop, keep whole, or clip edge e, from its corners' places at offsets a and b. */
@@ -180,12 +179,12 @@ export class ObstacleGatherer {
     if (e !== this.pairI && e !== this.pairJ) this.pieces.keep(e, E.ax[e], E.ay[e], E.bx[e], E.by[e], true, true);
   }
 
+  /** Sides that miss the body's circle hold it wholly inside: only crossing sides can drop or cut an edge. */
   private verdict(a: number, b: number): EdgeVerdict {
     const P = this.places;
     let whole = true;
-    for (let k = 0; k < 4; k++) {
-      if (!this.region.on[k]) continue; // a side of zero length bounds nothing
-      const pa = P[a + k], pb = P[b + k];
+    for (let c = 0; c < this.crossCount; c++) {
+      const pa = P[a + c], pb = P[b + c];
       if (pa === SURELY_OUTSIDE && pb === SURELY_OUTSIDE) return DROP;
       if (pa !== SURELY_INSIDE || pb !== SURELY_INSIDE) whole = false;
     }
