@@ -4,10 +4,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync, readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import type { Page } from 'playwright-core';
-import { dragOnCanvas, screenOf as screenPoint, startApp, type App } from './harness';
+import { dragOnCanvas, screenOf as screenPoint, startApp, type App, type TestWindow } from './harness';
 import { runFactors } from '../../src/cli/factorsCommand';
 import { documentApi } from '../../src/state/documentApi';
-import type { SketchFile } from '../../src/state/sketchFile';
 
 let app: App;
 let page: Page;
@@ -25,7 +24,10 @@ const screenOf = (x: number, y: number) => screenPoint(page, x, y);
 
 const table = () => page.getByRole('table', { name: /view factor/i });
 const tableText = () => table().locator('tbody').innerText();
-const docOf = () => page.evaluate(() => (window as any).__tautline.store.getState().doc as SketchFile);
+const docOf = () => page.evaluate(() => (window as unknown as TestWindow).__tautline.store.getState().doc);
+
+/** The drag-latency probe the latency test puts in the page (times in ms, from performance.now()). */
+type ProbeWindow = TestWindow & { __lat: { lastMove: number; samples: number[]; jobs: number[]; changes: number } };
 const status = () => page.locator('[data-status]').getAttribute('data-status');
 
 async function waitReady() {
@@ -48,8 +50,8 @@ describe('sketcher in chromium', () => {
   it('measures the time from a drag event to the updated table on the demo', async () => {
     // Count every change of the table body, stamped with the time of the pointer event before it.
     await page.evaluate(() => {
-      const w = window as any;
-      w.__lat = { lastMove: 0, samples: [] as number[], jobs: [] as number[], changes: 0 };
+      const w = window as unknown as ProbeWindow;
+      w.__lat = { lastMove: 0, samples: [], jobs: [], changes: 0 };
       window.addEventListener('pointermove', () => { w.__lat.lastMove = performance.now(); }, true);
       new MutationObserver(() => {
         if (w.__lat.lastMove) {
@@ -72,18 +74,18 @@ describe('sketcher in chromium', () => {
     await page.mouse.up();
     await page.keyboard.press('Control+z');
     await waitReady();
-    await page.evaluate(() => { const l = (window as any).__lat; l.samples = []; l.jobs = []; l.lastMove = 0; });
+    await page.evaluate(() => { const l = (window as unknown as ProbeWindow).__lat; l.samples = []; l.jobs = []; l.lastMove = 0; });
     await page.mouse.move(sx, sy);
     await page.mouse.down();
     for (let i = 1; i <= 40; i++) {
-      const changes = await page.evaluate(() => (window as any).__lat.changes);
+      const changes = await page.evaluate(() => (window as unknown as ProbeWindow).__lat.changes);
       await page.mouse.move(sx + i * 2, sy - i);
-      await page.waitForFunction((c) => (window as any).__lat.changes > c, changes, { timeout: 5000 });
+      await page.waitForFunction((c) => (window as unknown as ProbeWindow).__lat.changes > c, changes, { timeout: 5000 });
     }
     await page.mouse.up();
     await page.getByRole('checkbox', { name: 'snap' }).check();
-    const samples: number[] = await page.evaluate(() => (window as any).__lat.samples);
-    const jobs: number[] = await page.evaluate(() => (window as any).__lat.jobs);
+    const samples = await page.evaluate(() => (window as unknown as ProbeWindow).__lat.samples);
+    const jobs = await page.evaluate(() => (window as unknown as ProbeWindow).__lat.jobs);
     const sorted = [...samples].sort((a, b) => a - b);
     const jobMedian = [...jobs].sort((a, b) => a - b)[Math.floor(jobs.length / 2)];
     const median = sorted[Math.floor(sorted.length / 2)];
@@ -133,7 +135,7 @@ describe('sketcher in chromium', () => {
     // (sqrt(w^2 + h^2) - h) / w with w = 2, h = 1 (Hottel's crossed-strings method;
     // Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1.4).
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: /CSV/ }).click()]);
-    const csv = readFileSync((await download.path())!, 'utf8');
+    const csv = readFileSync(await download.path(), 'utf8');
     const rows = Papa.parse<string[]>(csv.trim(), { newline: '\r\n' }).data;
     expect(rows[0]).toEqual(['from \\ to', 'wall 1', 'wall 2', 'wall 3', 'wall 4']);
     const F = rows.slice(1).map((r) => r.slice(1).map(Number));

@@ -32,7 +32,7 @@ describe('the app', () => {
     const user = userEvent.setup();
     const { store } = renderApp();
     const before = store.getState().doc;
-    const input = screen.getByLabelText('Sketch file to open') as HTMLInputElement;
+    const input = screen.getByLabelText<HTMLInputElement>('Sketch file to open');
     const bad = new File(['{"version": 1, "units": "furlong", "shapes": []}'], 'colleague.json', { type: 'application/json' });
     await user.upload(input, bad);
     const alert = await screen.findByRole('alert');
