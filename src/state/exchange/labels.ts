@@ -1,3 +1,3 @@
 // How conditions and the surroundings are named in results tables: the same
-// words as the command line's table (src/document/exchangeCsv.ts).
-export { conditionInTable, seesSurroundings } from '../../document/exchangeCsv';
+// words as the command line's table (src/document/exchange/labels.ts).
+export { conditionInTable, seesSurroundings, SURROUNDINGS_LABEL } from '../../document/exchangeCsv';

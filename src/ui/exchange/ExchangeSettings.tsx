@@ -1,8 +1,8 @@
 import { useId } from 'react';
 import { useApp, useAppStore } from '../AppContext';
 import { selectSettings, selectTemperatureUnit } from '../../state/exchange/selectors';
-import { setSettings } from '../../state/exchangeEdits';
-import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchangeUnits';
+import { setSettings } from '../../state/exchange/edits';
+import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchange/units';
 import { CheckedField } from './CheckedField';
 
 /** The sketch's settings for heat exchange: surroundings temperature and depth. */

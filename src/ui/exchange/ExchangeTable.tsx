@@ -1,7 +1,7 @@
 import { useApp } from '../AppContext';
 import { selectTemperatureUnit } from '../../state/exchange/selectors';
 import type { ExchangeSolved } from '../../state/exchange/slice';
-import { TEMPERATURE_LABEL } from '../../state/exchangeUnits';
+import { TEMPERATURE_LABEL } from '../../state/exchange/units';
 import { fmtHeat, fmtTemperature } from './format';
 import { exchangeRows } from './rows';
 

@@ -2,8 +2,8 @@ import { useId } from 'react';
 import { useApp, useAppStore } from '../AppContext';
 import { selectDoc } from '../../state/selectors';
 import { selectExchange, selectTemperatureUnit } from '../../state/exchange/selectors';
-import { DEFAULT_EMISSIVITY, setCondition, setEmissivity, setSurfaceProps, surfacePropsOf, type ConditionChoice } from '../../state/exchangeEdits';
-import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchangeUnits';
+import { conditionIn, DEFAULT_CONDITION, DEFAULT_EMISSIVITY, setCondition, setEmissivity, setSurfaceProps, surfacePropsOf, type ConditionChoice } from '../../state/exchange/edits';
+import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchange/units';
 import type { SurfaceProps } from '../../state/sketchFile';
 import type { AppState } from '../../state/store';
 import { CheckedField } from './CheckedField';
@@ -29,13 +29,10 @@ const KIND_TITLE: Record<Kind, string> = {
 /** Temperature a surface starts at when it is first given one, K (room temperature, common practice). */
 const ROOM_TEMPERATURE = 293.15;
 
-/** The condition the file gives a surface (the first one, as the solver reads it), or the default. */
+/** The condition the file gives a surface, or the default (kinds from the one rule in document/exchange/conditions.ts). */
 function kindOf(props: SurfaceProps | undefined): { kind: Kind; isDefault: boolean } {
-  if (props?.temperature !== undefined) return { kind: 'temperature', isDefault: false };
-  if (props?.heatFlux !== undefined) return { kind: 'heatFlux', isDefault: false };
-  if (props?.adiabatic === true) return { kind: 'adiabatic', isDefault: false };
-  if (props?.opening === true) return { kind: 'opening', isDefault: false };
-  return { kind: 'adiabatic', isDefault: true };
+  const condition = conditionIn(props);
+  return condition ? { kind: condition.kind, isDefault: false } : { kind: DEFAULT_CONDITION.kind, isDefault: true };
 }
 
 const selectSurroundings = (s: AppState) => s.doc.settings?.surroundingsTemperature;

@@ -1,7 +1,7 @@
 import { useApp, useAppStore } from '../AppContext';
 import { selectTemperatureUnit } from '../../state/exchange/selectors';
 import type { TemperatureUnit } from '../../state/exchange/slice';
-import { TEMPERATURE_LABEL } from '../../state/exchangeUnits';
+import { TEMPERATURE_LABEL } from '../../state/exchange/units';
 
 /** K or degrees Celsius for every temperature the panel shows or accepts (the file keeps kelvin). */
 export function TemperatureUnitToggle() {

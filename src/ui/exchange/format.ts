@@ -1,6 +1,6 @@
 // Numbers in the heat-exchange panel.
 import type { TemperatureUnit } from '../../state/exchange/slice';
-import { fromKelvin } from '../../state/exchangeUnits';
+import { fromKelvin } from '../../state/exchange/units';
 import { fmtFactor } from '../matrix/format';
 
 /** Heat, flux or power: five significant digits, no trailing zeros, never -0. */

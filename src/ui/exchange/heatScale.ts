@@ -4,7 +4,7 @@
 // so the scale also reads in grey. Net flux is centred on zero (blue: takes heat
 // up, orange: gives heat off); temperature on the middle of its range.
 import type { ExchangeView, HeatColouring, TemperatureUnit } from '../../state/exchange/slice';
-import { fromKelvin, TEMPERATURE_LABEL } from '../../state/exchangeUnits';
+import { fromKelvin, TEMPERATURE_LABEL } from '../../state/exchange/units';
 
 /** sRGB stops at t = 0, 0.25, 0.5, 0.75, 1. */
 const STOPS: ReadonlyArray<readonly [number, number, number]> = [

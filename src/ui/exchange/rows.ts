@@ -1,7 +1,7 @@
 // One row per surface of a solved exchange (and one for the surroundings of an
 // open sketch), in the units the panel shows: K, W per metre of depth, W/m^2, W.
 import type { ExchangeSolved } from '../../state/exchange/slice';
-import { conditionInTable, seesSurroundings } from '../../state/exchange/labels';
+import { conditionInTable, seesSurroundings, SURROUNDINGS_LABEL } from '../../state/exchange/labels';
 
 export interface ExchangeRow {
   name: string;
@@ -30,7 +30,7 @@ export function exchangeRows(ex: ExchangeSolved): ExchangeRow[] {
   }));
   if (seesSurroundings(r) && r.surroundingsTemperature !== undefined) {
     rows.push({
-      name: '(surroundings)', index: null, condition: 'black', emissivity: 1, temperature: r.surroundingsTemperature,
+      name: SURROUNDINGS_LABEL.name, index: null, condition: SURROUNDINGS_LABEL.condition, emissivity: 1, temperature: r.surroundingsTemperature,
       netHeat: r.surroundingsNetHeat, netFlux: undefined, total: r.surroundingsNetHeatTotal,
     });
   }

@@ -9,7 +9,7 @@ import { documentApi } from '../../../src/state/documentApi';
 import { setVertex } from '../../../src/state/edits/shapeEdits';
 import { renameSurface } from '../../../src/state/edits/surfaceEdits';
 import { changeUnits } from '../../../src/state/edits/unitEdits';
-import { setCondition, setEmissivity } from '../../../src/state/exchangeEdits';
+import { setCondition, setEmissivity } from '../../../src/state/exchange/edits';
 import type { SketchFile } from '../../../src/state/sketchFile';
 import { viewFactorApi } from '../../../src/worker/api';
 import type { ViewFactorJob } from '../../../src/worker/job';

@@ -1,6 +1,6 @@
 // Temperatures: kelvin in the file and the solver; the app shows and accepts
 // K or degrees Celsius.
-import type { TemperatureUnit } from './exchange/slice';
+import type { TemperatureUnit } from './slice';
 
 /** 0 degrees Celsius in kelvin (exact by definition). */
 export const ZERO_CELSIUS = 273.15;

@@ -2,18 +2,22 @@
 // the sketch settings. Pure functions for store.edit, so each is one undo step
 // and autosaves; an edit that changes nothing returns the same document (no step).
 // Units as in the file: temperatures K, heat flux W/m^2 (positive leaving), depth m.
-import type { SketchFile, SurfaceProps } from './sketchFile';
-import { usedSurfaceNames } from './edits/surfaceNames';
+import type { SketchFile, SurfaceProps } from '../sketchFile';
+import { usedSurfaceNames } from '../edits/surfaceNames';
+import { conditionOf, conditionProps } from '../../document/exchange/conditions';
+import type { SurfaceCondition } from '../../document/exchangeInput';
 
 /** The defaults for a surface with no properties (emissivity 0.9, adiabatic), as the solver applies them. */
-export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY } from '../document/exchangeInput';
+export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY } from '../../document/exchangeInput';
 
 /** The one condition a surface can be given in the app. */
-export type ConditionChoice =
-  | { kind: 'temperature'; temperature: number }
-  | { kind: 'heatFlux'; heatFlux: number }
-  | { kind: 'adiabatic' }
-  | { kind: 'opening' };
+export type ConditionChoice = SurfaceCondition;
+
+/** The condition a surface's properties give (the first, if a file broke the rule), or undefined: the default applies. */
+export function conditionIn(props: SurfaceProps | undefined): ConditionChoice | undefined {
+  const given = conditionOf(props);
+  return given.ok ? given.condition : undefined;
+}
 
 export type SettingsPatch = { surroundingsTemperature?: number | undefined; depth?: number | undefined };
 
@@ -57,12 +61,7 @@ export function setEmissivity(doc: SketchFile, name: string, emissivity: number 
 /** Give a surface one condition, replacing any other; the emissivity is kept. */
 export function setCondition(doc: SketchFile, name: string, condition: ConditionChoice): SketchFile {
   const old = surfacePropsOf(doc, name);
-  const props: SurfaceProps = { emissivity: old?.emissivity };
-  if (condition.kind === 'temperature') props.temperature = condition.temperature;
-  if (condition.kind === 'heatFlux') props.heatFlux = condition.heatFlux;
-  if (condition.kind === 'adiabatic') props.adiabatic = true;
-  if (condition.kind === 'opening') props.opening = true;
-  return setSurfaceProps(doc, name, props);
+  return setSurfaceProps(doc, name, { emissivity: old?.emissivity, ...conditionProps(condition) });
 }
 
 /** Set or clear (undefined) the surroundings temperature (K) and the depth (m). */
