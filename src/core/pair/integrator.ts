@@ -90,15 +90,17 @@ export class PairIntegrator {
     const dxI = a1x - a0x, dyI = a1y - a0y;
     const tx = dxI / li, ty = dyI / li;
     const at = this.breakpoints.at, nBreaks = this.breakpoints.count;
+    const gaps = this.gaps, points = this.points;
+    gaps.prepare(points);
     let total = 0;
     let sa = 0;
     for (let k = 0; k <= nBreaks; k++) {
       const sb = k < nBreaks ? at[k] : 1;
       if (sb <= sa) continue;
       const sm = 0.5 * (sa + sb);
-      this.gaps.find(this.points, a0x + sm * dxI, a0y + sm * dyI, tx, ty);
-      if (this.gaps.count > 0) {
-        total += pieceIntegral(this.points, this.gaps,
+      gaps.find(points, a0x + sm * dxI, a0y + sm * dyI, tx, ty);
+      if (gaps.count > 0) {
+        total += pieceIntegral(points, gaps,
           a0x + sa * dxI, a0y + sa * dyI, a0x + sb * dxI, a0y + sb * dyI, (sb - sa) * dxI, (sb - sa) * dyI);
       }
       sa = sb;

@@ -163,8 +163,8 @@ export class ObstacleGatherer {
 
   /** Write the SidePlace of (x, y) against each crossing side to places[at + c]. */
   private classifyCorner(x: number, y: number, at: number): void {
-    const R = this.region, P = this.places;
-    for (let c = 0; c < this.crossCount; c++) P[at + c] = R.place(this.crossing[c], x, y);
+    const R = this.region, P = this.places, crossing = this.crossing, count = this.crossCount;
+    for (let c = 0; c < count; c++) P[at + c] = R.place(crossing[c], x, y);
   }
 
   /** Drop, keep whole, or clip edge e, from its corners' places at offsets a and b. */
@@ -181,9 +181,9 @@ export class ObstacleGatherer {
 
   /** Sides that miss the body's circle hold it wholly inside: only crossing sides can drop or cut an edge. */
   private verdict(a: number, b: number): EdgeVerdict {
-    const P = this.places;
+    const P = this.places, count = this.crossCount;
     let whole = true;
-    for (let c = 0; c < this.crossCount; c++) {
+    for (let c = 0; c < count; c++) {
       const pa = P[a + c], pb = P[b + c];
       if (pa === SURELY_OUTSIDE && pb === SURELY_OUTSIDE) return DROP;
       if (pa !== SURELY_INSIDE || pb !== SURELY_INSIDE) whole = false;

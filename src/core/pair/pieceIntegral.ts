@@ -15,10 +15,10 @@ import type { VisibleGaps } from './visibleGaps';
  */
 export function pieceIntegral(points: FixedPoints, gaps: VisibleGaps,
   pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
-  const X = points.x, Y = points.y;
+  const X = points.x, Y = points.y, LO = gaps.lo, HI = gaps.hi, count = gaps.count;
   let total = 0;
-  for (let g = 0; g < gaps.count; g++) {
-    const lo = gaps.lo[g], hi = gaps.hi[g];
+  for (let g = 0; g < count; g++) {
+    const lo = LO[g], hi = HI[g];
     total += 0.5 * (distanceChange(X[lo], Y[lo], pax, pay, pbx, pby, dx, dy) - distanceChange(X[hi], Y[hi], pax, pay, pbx, pby, dx, dy));
   }
   return total;

@@ -23,13 +23,11 @@ export class VisibleGaps {
 
   /**
    * Find the gaps seen from point (px, py) (sketch units) on i, whose unit direction
-   * is (tx, ty). Fixed points 0 and 1 are j's ends b0 (high end) and b1 (low end).
+   * is (tx, ty), after prepare(points) for this pair. Fixed points 0 and 1 are j's ends b0 (high end) and b1 (low end).
    */
   find(points: FixedPoints, px: number, py: number, tx: number, ty: number): void {
     const X = points.x, Y = points.y;
     const nPts = points.count, nChains = points.chainCount, start = points.chainStart;
-    if (this.key.length < nPts) this.key = new Float64Array(Math.max(nPts, 2 * this.key.length));
-    if (this.loKey.length < nChains) this.growChains(nChains);
     const key = this.key;
     for (let k = 0; k < nPts; k++) {
       const vx = X[k] - px, vy = Y[k] - py;
@@ -64,6 +62,12 @@ export class VisibleGaps {
       if (hiKey[o] > cur) { cur = hiKey[o]; curP = hiPt[o]; }
     }
     if (cur < jHi) this.push(curP, 0);
+  }
+
+  /** Make room for the fixed points and chains of the current pair (call once per pair, before find). */
+  prepare(points: FixedPoints): void {
+    if (this.key.length < points.count) this.key = new Float64Array(Math.max(points.count, 2 * this.key.length));
+    if (this.loKey.length < points.chainCount) this.growChains(points.chainCount);
   }
 
   private push(lo: number, hi: number): void {
