@@ -16,7 +16,7 @@ export function parseJsonText(text: string): ParseResult {
 }
 
 function otherKindOfFile(text: string): string | null {
-  // eslint-disable-next-line no-control-regex
+  // eslint-disable-next-line no-control-regex -- control bytes early in the text are how a binary file is told apart
   if (/[\u0000-\u0008\u000e-\u001a]/.test(text.slice(0, 1024))) return 'a binary file';
   const start = text.trimStart();
   if (start.startsWith('%PDF')) return 'a PDF document';

@@ -12,11 +12,19 @@ export function formatPoint([x, y]: readonly [number, number]): string {
   return `(${formatNumber(x)}, ${formatNumber(y)})`;
 }
 
+/**
+ * A name as plain text: control characters (a terminal's escape sequences, line
+ * breaks) shown as '?', and cut with '…' to at most `longest` characters.
+ */
+export function plainName(name: string, longest: number): string {
+  // eslint-disable-next-line no-control-regex -- matching control characters is the point: they must not reach a terminal or a message
+  const clean = name.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
+  return clean.length > longest ? `${clean.slice(0, longest - 1)}…` : clean;
+}
+
 /** A surface or field name in quotes, control characters shown as '?', long names cut. */
 export function quoteName(name: string): string {
-  // eslint-disable-next-line no-control-regex
-  const clean = name.replace(/[\u0000-\u001f\u007f-\u009f]/g, '?');
-  return `'${clean.length > 40 ? `${clean.slice(0, 39)}…` : clean}'`;
+  return `'${plainName(name, 40)}'`;
 }
 
 /** A value that broke a rule, for "(got ...)". */

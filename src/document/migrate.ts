@@ -1,6 +1,7 @@
 // Older file versions are brought up to the current one step by step before
 // validation, so the schema only ever describes the current version.
 import { CURRENT_VERSION } from './schema';
+import { describeValue } from './labels';
 
 /** migrations[v] turns a version-v document into a version-(v+1) one. None yet: version 1 is the first. */
 const migrations: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {};
@@ -12,7 +13,7 @@ export function migrate(doc: Record<string, unknown>): MigrateResult {
   const version = doc.version;
   if (version === undefined) return { ok: false, error: `version is missing; it must be ${CURRENT_VERSION} for this program` };
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
-    return { ok: false, error: `version must be a whole number from 1 (got ${JSON.stringify(version) ?? String(version)})` };
+    return { ok: false, error: `version must be a whole number from 1 (got ${describeValue(version)})` };
   }
   if (version > CURRENT_VERSION) {
     return { ok: false, error: `version ${version} is newer than this program reads (up to ${CURRENT_VERSION}); open it with a newer Tautline` };

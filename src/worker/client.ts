@@ -81,7 +81,7 @@ export class ViewFactorClient {
     try {
       answer = Promise.resolve(this.worker.compute(entry.job));
     } catch (e) {
-      answer = Promise.reject(e);
+      answer = Promise.reject(e instanceof Error ? e : new Error(errorText(e)));
     }
     answer.then(
       (result) => {

@@ -32,7 +32,7 @@ const KEYS = ['emissivity', 'temperature', 'heatFlux', 'adiabatic', 'opening'] a
 function tidy(props: SurfaceProps): SurfaceProps {
   const out: Record<string, unknown> = {};
   for (const k of KEYS) if (props[k] !== undefined) out[k] = props[k];
-  return out as SurfaceProps;
+  return out;
 }
 
 function sameProps(a: SurfaceProps | undefined, b: SurfaceProps | undefined): boolean {
