@@ -11,6 +11,27 @@ import prettier from 'eslint-config-prettier';
 
 const root = path.resolve(import.meta.dirname, '..');
 
+const PACKAGES = new Set(['react', 'konva', 'zustand']);
+
+/** One no-restricted-imports block per layer: the folders (under src/) and packages it must not import. */
+function layerRules(forbidden) {
+  return Object.entries(forbidden).map(([layer, names]) => ({
+    files: [`${layer}/**/*.{ts,tsx}`],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: names.map((name) =>
+            PACKAGES.has(name)
+              ? { group: [name, `${name}/*`, `react-${name}`], message: `${layer} must not import ${name}.` }
+              : { group: [`**/${name}`, `**/${name}/*`], message: `${layer} must not import src/${name} (see DEVELOPERS.md, Architecture).` },
+          ),
+        },
+      ],
+    },
+  }));
+}
+
 export default defineConfig(
   { ignores: ['dist/', 'node_modules/', 'test-artifacts/', 'coverage/'] },
   {
@@ -48,6 +69,16 @@ export default defineConfig(
       eqeqeq: ['error', 'smart'],
     },
   },
+  // Imports point one way (DEVELOPERS.md, Architecture): ui -> state -> worker -> core;
+  // state -> document -> core; cli -> document -> core.
+  ...layerRules({
+    'src/core': ['document', 'state', 'worker', 'ui', 'cli', 'react', 'konva', 'zustand'],
+    'src/document': ['state', 'worker', 'ui', 'cli', 'react'],
+    'src/worker': ['document', 'state', 'ui', 'cli', 'react'],
+    'src/state': ['ui', 'cli', 'react'],
+    'src/ui': ['document', 'worker', 'core', 'cli'],
+    'src/cli': ['state', 'worker', 'ui', 'react'],
+  }),
   {
     // Plain JavaScript (this file) is outside tsconfig.json: lint it without type information.
     files: ['**/*.{js,mjs,cjs}'],
