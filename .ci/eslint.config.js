@@ -24,7 +24,10 @@ function layerRules(forbidden) {
           patterns: names.map((name) =>
             PACKAGES.has(name)
               ? { group: [name, `${name}/*`, `react-${name}`], message: `${layer} must not import ${name}.` }
-              : { group: [`**/${name}`, `**/${name}/*`], message: `${layer} must not import src/${name} (see DEVELOPERS.md, Architecture).` },
+              : {
+                  group: [`**/${name}`, `**/${name}/*`],
+                  message: `${layer} must not import src/${name} (see DEVELOPERS.md, Architecture).`,
+                },
           ),
         },
       ],

@@ -8,7 +8,12 @@ import { demoSketch } from './state/demo';
 import { spawnViewFactorWorker } from './worker/spawn';
 import './ui/styles.css';
 
-const runtime = startRuntime({ storage: window.localStorage, api: documentApi, spawn: spawnViewFactorWorker, demo: demoSketch });
+const runtime = startRuntime({
+  storage: window.localStorage,
+  api: documentApi,
+  spawn: spawnViewFactorWorker,
+  demo: demoSketch,
+});
 // Browser tests read the store through this handle (never used by the app itself).
 (window as unknown as { __tautline?: unknown }).__tautline = runtime;
 

@@ -4,9 +4,7 @@
 export type Format = 'table' | 'json' | 'csv';
 
 export type ParsedArgs =
-  | { kind: 'help' }
-  | { kind: 'error'; problem: string }
-  | { kind: 'run'; format: Format; file: string };
+  { kind: 'help' } | { kind: 'error'; problem: string } | { kind: 'run'; format: Format; file: string };
 
 /**
  * A command's own option: given the argument and a way to take the next one, return

@@ -41,7 +41,6 @@ settings.surroundingsTemperature (K). FILE '-' reads standard input.
 ${CAUTION}
 `;
 
-
 /** Run the command; returns the exit code (0 done, 1 bad file or no answer, 2 bad arguments). */
 export function runExchange(args: string[], io: CliIO): number {
   let depthArg: number | undefined;
@@ -50,7 +49,8 @@ export function runExchange(args: string[], io: CliIO): number {
     const text = arg === '--depth' ? takeNext() : arg.slice('--depth='.length);
     if (text === undefined) return '--depth needs a number of metres';
     const value = text.trim() === '' ? Number.NaN : Number(text);
-    if (!(Number.isFinite(value) && value > 0)) return `--depth must be a number of metres above 0, got '${text.slice(0, 40)}'`;
+    if (!(Number.isFinite(value) && value > 0))
+      return `--depth must be a number of metres above 0, got '${text.slice(0, 40)}'`;
     depthArg = value;
     return null;
   });
@@ -79,7 +79,16 @@ export function runExchange(args: string[], io: CliIO): number {
   const conditions = outcome.input.conditions;
   const report: Report = { file, sketch, names: surfaceNames, factors, result, conditions };
   if (format === 'json') io.out(`${JSON.stringify(exchangeJson(report))}\n`);
-  else if (format === 'csv') io.out(exchangeCsv({ units: sketch.units, names: surfaceNames, surfaceLength: factors.surfaceLength, result, conditions }));
+  else if (format === 'csv')
+    io.out(
+      exchangeCsv({
+        units: sketch.units,
+        names: surfaceNames,
+        surfaceLength: factors.surfaceLength,
+        result,
+        conditions,
+      }),
+    );
   else io.out(exchangeTable(report));
   return 0;
 }
@@ -139,7 +148,16 @@ function exchangeTable({ file, sketch, names, factors, result: r, conditions }: 
     `Heat exchange of ${displayName(file, Infinity)} (${n} surface${n === 1 ? '' : 's'}, lengths in ${sketch.units}, per metre of depth)`,
     '',
   );
-  const head = ['surface', 'length', 'emissivity', 'condition', 'T (K)', 'net heat (W/m)', 'net flux (W/m^2)', 'radiosity (W/m^2)'];
+  const head = [
+    'surface',
+    'length',
+    'emissivity',
+    'condition',
+    'T (K)',
+    'net heat (W/m)',
+    'net flux (W/m^2)',
+    'radiosity (W/m^2)',
+  ];
   if (withDepth) head.push(`total (W) over ${fmt(r.depth!)} m`);
   const body: string[][] = names.map((_, i) => {
     const row = [
@@ -156,7 +174,16 @@ function exchangeTable({ file, sketch, names, factors, result: r, conditions }: 
     return row;
   });
   if (open) {
-    const row = [SURROUNDINGS_LABEL.name, '', '1', SURROUNDINGS_LABEL.condition, r.surroundingsTemperature!.toFixed(2), fmt(r.surroundingsNetHeat), '', ''];
+    const row = [
+      SURROUNDINGS_LABEL.name,
+      '',
+      '1',
+      SURROUNDINGS_LABEL.condition,
+      r.surroundingsTemperature!.toFixed(2),
+      fmt(r.surroundingsNetHeat),
+      '',
+      '',
+    ];
     if (withDepth) row.push(fmt(r.surroundingsNetHeatTotal!));
     body.push(row);
   }
@@ -190,5 +217,7 @@ function fmt(x: number): string {
 function columns(rows: string[][]): string[] {
   const widths: number[] = [];
   for (const row of rows) row.forEach((cell, k) => (widths[k] = Math.max(widths[k] ?? 0, cell.length)));
-  return rows.map((row) => `  ${row.map((cell, k) => cell + ' '.repeat(widths[k] - cell.length)).join('  ')}`.trimEnd());
+  return rows.map((row) =>
+    `  ${row.map((cell, k) => cell + ' '.repeat(widths[k] - cell.length)).join('  ')}`.trimEnd(),
+  );
 }

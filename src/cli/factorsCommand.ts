@@ -23,7 +23,6 @@ Lengths are in the file's units; view factors are dimensionless.
 FILE '-' reads standard input.
 `;
 
-
 /** Run the command; returns the exit code (0 done, 1 bad file, 2 bad arguments). */
 export function runFactors(args: string[], io: CliIO): number {
   const parsed = parseArgs(args);
@@ -67,7 +66,10 @@ function factorsTable(file: string, sketch: Sketch, names: string[], r: ViewFact
   const cell = 10;
   const pad = (s: string, w: number) => s + ' '.repeat(Math.max(0, w - s.length));
   const lines: string[] = [];
-  lines.push(`View factors of ${displayName(file, Infinity)} (${n} surface${n === 1 ? '' : 's'}, lengths in ${sketch.units})`, '');
+  lines.push(
+    `View factors of ${displayName(file, Infinity)} (${n} surface${n === 1 ? '' : 's'}, lengths in ${sketch.units})`,
+    '',
+  );
   lines.push(`  ${pad('surface', width)}  length`);
   shown.forEach((s, i) => lines.push(`  ${pad(s, width)}  ${formatLength(r.surfaceLength[i])}`));
   lines.push('', 'F (row = from, column = to):');

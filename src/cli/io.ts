@@ -24,13 +24,19 @@ export function nodeIO(): CliIO {
 export function describeReadError(path: string, error: unknown): string {
   const code = (error as { code?: unknown } | null)?.code;
   const reason =
-    code === 'ENOENT' ? 'no such file'
-    : code === 'EISDIR' ? 'it is a directory, not a file'
-    : code === 'EACCES' || code === 'EPERM' ? 'permission denied'
-    : code === 'ENAMETOOLONG' ? 'the name is too long'
-    : code === 'ENOTDIR' ? 'a part of the path is not a directory'
-    : error instanceof Error && error.message ? firstLine(error.message)
-    : 'unknown error';
+    code === 'ENOENT'
+      ? 'no such file'
+      : code === 'EISDIR'
+        ? 'it is a directory, not a file'
+        : code === 'EACCES' || code === 'EPERM'
+          ? 'permission denied'
+          : code === 'ENAMETOOLONG'
+            ? 'the name is too long'
+            : code === 'ENOTDIR'
+              ? 'a part of the path is not a directory'
+              : error instanceof Error && error.message
+                ? firstLine(error.message)
+                : 'unknown error';
   return `cannot read '${path}': ${reason}`;
 }
 

@@ -22,7 +22,8 @@ export function readSketchFile(command: string, file: string, io: CliIO): Sketch
     return null;
   }
   for (const m of read.warnings.slice(0, MAX_WARNINGS)) io.err(`${command}: ${file}: warning: ${m}\n`);
-  if (read.warnings.length > MAX_WARNINGS) io.err(`${command}: ${file}: …and ${read.warnings.length - MAX_WARNINGS} more warnings\n`);
+  if (read.warnings.length > MAX_WARNINGS)
+    io.err(`${command}: ${file}: …and ${read.warnings.length - MAX_WARNINGS} more warnings\n`);
   if (read.sketch.shapes.length === 0) {
     io.err(`${command}: ${file}: the sketch has no shapes; nothing to compute\n`);
     return null;

@@ -60,7 +60,8 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
   const prevEdge = new Int32Array(count);
   const nextEdge = new Int32Array(count);
   let hasEnclosure = false;
-  let originX = Infinity, originY = Infinity;
+  let originX = Infinity,
+    originY = Infinity;
   for (const poly of polygons) {
     for (let k = 0; k < poly.points.length; k += 2) {
       originX = Math.min(originX, poly.points[k]);
@@ -99,5 +100,20 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
     base += n;
   });
   polygonStart[polygons.length] = base;
-  return { count, ax, ay, bx, by, length, polygon, prevEdge, nextEdge, hasEnclosure, polygonStart, polygonIsEnclosure, originX, originY };
+  return {
+    count,
+    ax,
+    ay,
+    bx,
+    by,
+    length,
+    polygon,
+    prevEdge,
+    nextEdge,
+    hasEnclosure,
+    polygonStart,
+    polygonIsEnclosure,
+    originX,
+    originY,
+  };
 }

@@ -56,9 +56,14 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
 
   const B = bodies.length;
   const bodyOfPolygon = new Int32Array(P).fill(-1);
-  bodies.forEach((p, b) => { bodyOfPolygon[p] = b; });
-  const bodyFirstEdge = new Int32Array(B), bodyEdgeEnd = new Int32Array(B);
-  const bodyCx = new Float64Array(B), bodyCy = new Float64Array(B), bodyR = new Float64Array(B);
+  bodies.forEach((p, b) => {
+    bodyOfPolygon[p] = b;
+  });
+  const bodyFirstEdge = new Int32Array(B),
+    bodyEdgeEnd = new Int32Array(B);
+  const bodyCx = new Float64Array(B),
+    bodyCy = new Float64Array(B),
+    bodyR = new Float64Array(B);
   const bodyConvex = new Uint8Array(B);
   const bodyRMin = new Float64Array(B);
   const bodyRIn = new Float64Array(B);
@@ -68,28 +73,42 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   bodies.forEach((p, b) => {
     bodyFirstEdge[b] = start[p];
     bodyEdgeEnd[b] = start[p + 1];
-    let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+    let x0 = Infinity,
+      y0 = Infinity,
+      x1 = -Infinity,
+      y1 = -Infinity;
     for (let e = start[p]; e < start[p + 1]; e++) {
-      x0 = Math.min(x0, edges.ax[e]); x1 = Math.max(x1, edges.ax[e]);
-      y0 = Math.min(y0, edges.ay[e]); y1 = Math.max(y1, edges.ay[e]);
+      x0 = Math.min(x0, edges.ax[e]);
+      x1 = Math.max(x1, edges.ax[e]);
+      y0 = Math.min(y0, edges.ay[e]);
+      y1 = Math.max(y1, edges.ay[e]);
     }
     // Centre: the corner average, which lies inside a convex body (needed for angles).
-    let cx = 0, cy = 0;
-    for (let e = start[p]; e < start[p + 1]; e++) { cx += edges.ax[e]; cy += edges.ay[e]; }
+    let cx = 0,
+      cy = 0;
+    for (let e = start[p]; e < start[p + 1]; e++) {
+      cx += edges.ax[e];
+      cy += edges.ay[e];
+    }
     cx /= start[p + 1] - start[p];
     cy /= start[p + 1] - start[p];
-    let r = 0, rMin = Infinity;
+    let r = 0,
+      rMin = Infinity;
     for (let e = start[p]; e < start[p + 1]; e++) {
       const d = Math.hypot(edges.ax[e] - cx, edges.ay[e] - cy);
       r = Math.max(r, d);
       rMin = Math.min(rMin, d);
     }
-    bodyCx[b] = cx; bodyCy[b] = cy; bodyR[b] = r; bodyRMin[b] = rMin;
+    bodyCx[b] = cx;
+    bodyCy[b] = cy;
+    bodyR[b] = r;
+    bodyRMin[b] = rMin;
     bodyConvex[b] = isConvex(edges, start[p], start[p + 1]) ? 1 : 0;
     if (bodyConvex[b]) {
       let rIn = Infinity;
       for (let e = start[p]; e < start[p + 1]; e++) {
-        const dx = edges.bx[e] - edges.ax[e], dy = edges.by[e] - edges.ay[e];
+        const dx = edges.bx[e] - edges.ax[e],
+          dy = edges.by[e] - edges.ay[e];
         // The centre is inside, i.e. right of every edge: distance to the edge's line.
         rIn = Math.min(rIn, (dy * (cx - edges.ax[e]) - dx * (cy - edges.ay[e])) / edges.length[e]);
       }
@@ -115,12 +134,32 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   if (walls.length > 0) {
     wallTree = new Flatbush(walls.length);
     for (const e of walls) {
-      wallTree.add(Math.min(edges.ax[e], edges.bx[e]), Math.min(edges.ay[e], edges.by[e]),
-        Math.max(edges.ax[e], edges.bx[e]), Math.max(edges.ay[e], edges.by[e]));
+      wallTree.add(
+        Math.min(edges.ax[e], edges.bx[e]),
+        Math.min(edges.ay[e], edges.by[e]),
+        Math.max(edges.ax[e], edges.bx[e]),
+        Math.max(edges.ay[e], edges.by[e]),
+      );
     }
     wallTree.finish();
   }
-  return { bodyCount: B, bodyFirstEdge, bodyEdgeEnd, bodyCx, bodyCy, bodyR, bodyConvex, walkEdge, walkAngle, bodyRMin, bodyRIn, bodyOfPolygon, bodyTree, wallEdges, wallTree };
+  return {
+    bodyCount: B,
+    bodyFirstEdge,
+    bodyEdgeEnd,
+    bodyCx,
+    bodyCy,
+    bodyR,
+    bodyConvex,
+    walkEdge,
+    walkAngle,
+    bodyRMin,
+    bodyRIn,
+    bodyOfPolygon,
+    bodyTree,
+    wallEdges,
+    wallTree,
+  };
 }
 
 /**
@@ -151,7 +190,8 @@ function convexHull(edges: EdgeSet, from: number, to: number): number[] {
     const part: number[] = [];
     for (const e of order) {
       while (part.length >= 2) {
-        const p = part[part.length - 2], q = part[part.length - 1];
+        const p = part[part.length - 2],
+          q = part[part.length - 1];
         if (orient(edges.ax[p], edges.ay[p], edges.ax[q], edges.ay[q], edges.ax[e], edges.ay[e]) > 0) break;
         part.pop();
       }

@@ -8,8 +8,20 @@ import { orient } from './orient';
  * (|v-pb|^2 - |v-pa|^2) / (|v-pb| + |v-pa|) = -d . ((v-pa) + (v-pb)) / (|v-pa| + |v-pb|).
  * Keeps the factor from a very short edge (or piece) accurate to rounding.
  */
-export function distanceChange(vx: number, vy: number, pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
-  const ux = vx - pax, uy = vy - pay, wx = vx - pbx, wy = vy - pby;
+export function distanceChange(
+  vx: number,
+  vy: number,
+  pax: number,
+  pay: number,
+  pbx: number,
+  pby: number,
+  dx: number,
+  dy: number,
+): number {
+  const ux = vx - pax,
+    uy = vy - pay,
+    wx = vx - pbx,
+    wy = vy - pby;
   const sum = Math.sqrt(ux * ux + uy * uy) + Math.sqrt(wx * wx + wy * wy);
   return sum === 0 ? 0 : -(dx * (ux + wx) + dy * (uy + wy)) / sum;
 }
@@ -19,8 +31,18 @@ export function distanceChange(vx: number, vy: number, pax: number, pay: number,
  * of segment a0-a1, i.e. both neighbours on one side of the line p-w? Conservative:
  * may say yes when the answer is no (costs an extra split, never accuracy).
  */
-export function silhouetteFromSegment(a0x: number, a0y: number, a1x: number, a1y: number,
-  wx: number, wy: number, ux: number, uy: number, vx: number, vy: number): boolean {
+export function silhouetteFromSegment(
+  a0x: number,
+  a0y: number,
+  a1x: number,
+  a1y: number,
+  wx: number,
+  wy: number,
+  ux: number,
+  uy: number,
+  vx: number,
+  vy: number,
+): boolean {
   const f0 = orient(a0x, a0y, wx, wy, ux, uy);
   const g0 = orient(a0x, a0y, wx, wy, vx, vy);
   const f1 = orient(a1x, a1y, wx, wy, ux, uy);

@@ -3,7 +3,8 @@
 
 /** First walk position m in [0, n) whose angle A[first+m] <= value (angles fall with m); n if none. */
 export function firstAtOrBelow(A: Float64Array, first: number, n: number, value: number): number {
-  let lo = 0, hi = n;
+  let lo = 0,
+    hi = n;
   while (lo < hi) {
     const mid = (lo + hi) >> 1;
     if (A[first + mid] <= value) hi = mid;
@@ -15,10 +16,16 @@ export function firstAtOrBelow(A: Float64Array, first: number, n: number, value:
 /** Sort ranges [lo[k], hi[k]], k < n, by their start, in place (the lists are short). */
 export function sortRanges(lo: Int32Array, hi: Int32Array, n: number): void {
   for (let k = 1; k < n; k++) {
-    const a = lo[k], b = hi[k];
+    const a = lo[k],
+      b = hi[k];
     let m = k - 1;
-    while (m >= 0 && lo[m] > a) { lo[m + 1] = lo[m]; hi[m + 1] = hi[m]; m--; }
-    lo[m + 1] = a; hi[m + 1] = b;
+    while (m >= 0 && lo[m] > a) {
+      lo[m + 1] = lo[m];
+      hi[m + 1] = hi[m];
+      m--;
+    }
+    lo[m + 1] = a;
+    hi[m + 1] = b;
   }
 }
 
@@ -35,14 +42,19 @@ export function sortPrefix(a: Float64Array, n: number): void {
     for (let k = 1; k < n; k++) {
       const v = a[k];
       let m = k - 1;
-      while (m >= 0 && a[m] > v) { a[m + 1] = a[m]; m--; }
+      while (m >= 0 && a[m] > v) {
+        a[m + 1] = a[m];
+        m--;
+      }
       a[m + 1] = v;
     }
     return;
   }
   for (let k = (n >> 1) - 1; k >= 0; k--) siftDown(a, k, n);
   for (let end = n - 1; end > 0; end--) {
-    const t = a[0]; a[0] = a[end]; a[end] = t;
+    const t = a[0];
+    a[0] = a[end];
+    a[end] = t;
     siftDown(a, 0, end);
   }
 }
@@ -54,7 +66,9 @@ function siftDown(a: Float64Array, start: number, n: number): void {
     if (child >= n) return;
     if (child + 1 < n && a[child + 1] > a[child]) child++;
     if (a[root] >= a[child]) return;
-    const t = a[root]; a[root] = a[child]; a[child] = t;
+    const t = a[root];
+    a[root] = a[child];
+    a[child] = t;
     root = child;
   }
 }
@@ -65,7 +79,10 @@ export function sortOrderByKey(order: Int32Array, key: Float64Array, n: number):
     const o = order[k];
     const v = key[o];
     let m = k - 1;
-    while (m >= 0 && key[order[m]] > v) { order[m + 1] = order[m]; m--; }
+    while (m >= 0 && key[order[m]] > v) {
+      order[m + 1] = order[m];
+      m--;
+    }
     order[m + 1] = o;
   }
 }

@@ -53,7 +53,10 @@ export interface GeometryCheckOptions {
  * Cost: about (edges) log (edges) for ordinary sketches (a spatial index picks
  * the edge pairs whose bounding boxes meet).
  */
-export function checkSketchGeometry(polygons: readonly PolygonInput[], options: GeometryCheckOptions = {}): GeometryFinding[] {
+export function checkSketchGeometry(
+  polygons: readonly PolygonInput[],
+  options: GeometryCheckOptions = {},
+): GeometryFinding[] {
   const maxFindings = options.maxFindings ?? 50;
   const findings: GeometryFinding[] = [];
   const usable: boolean[] = polygons.map((polygon, shape) => {
@@ -64,7 +67,12 @@ export function checkSketchGeometry(polygons: readonly PolygonInput[], options: 
     }
     const repeated = firstRepeatedPoint(polygon.points);
     if (repeated >= 0) {
-      findings.push({ rule: 'repeated-point', shape, point: repeated, at: [polygon.points[2 * repeated], polygon.points[2 * repeated + 1]] });
+      findings.push({
+        rule: 'repeated-point',
+        shape,
+        point: repeated,
+        at: [polygon.points[2 * repeated], polygon.points[2 * repeated + 1]],
+      });
       return false;
     }
     if (isCollinear(polygon.points)) {
@@ -89,7 +97,8 @@ export function checkSketchGeometry(polygons: readonly PolygonInput[], options: 
       if (shape === enclosure || !usable[shape] || contacts.touching.has(pairKey(shape, enclosure))) return;
       const x = polygon.points[0];
       const y = polygon.points[1];
-      if (!pointInPolygon(x, y, ring)) findings.push({ rule: 'outside-enclosure', shape, enclosure, point: 0, at: [x, y] });
+      if (!pointInPolygon(x, y, ring))
+        findings.push({ rule: 'outside-enclosure', shape, enclosure, point: 0, at: [x, y] });
     });
   }
   findings.push(...findNestedSolids(polygons, usable, contacts.touching));
@@ -105,8 +114,10 @@ export function pointInPolygon(x: number, y: number, points: ArrayLike<number>):
   const n = Math.floor(points.length / 2);
   let inside = false;
   for (let k = 0, j = n - 1; k < n; j = k++) {
-    const px = points[2 * j], py = points[2 * j + 1];
-    const qx = points[2 * k], qy = points[2 * k + 1];
+    const px = points[2 * j],
+      py = points[2 * j + 1];
+    const qx = points[2 * k],
+      qy = points[2 * k + 1];
     if (py > y !== qy > y) {
       // The edge straddles the horizontal line through the point; it crosses
       // to the right of the point when the point is left of the upward edge.
@@ -139,8 +150,10 @@ function firstRepeatedPoint(points: ArrayLike<number>): number {
 /** All points on one line (called after repeated points are excluded, so points 0 and 1 differ). */
 function isCollinear(points: ArrayLike<number>): boolean {
   const n = Math.floor(points.length / 2);
-  const ax = points[0], ay = points[1];
-  const bx = points[2], by = points[3];
+  const ax = points[0],
+    ay = points[1];
+  const bx = points[2],
+    by = points[3];
   for (let m = 2; m < n; m++) {
     if (orientation(ax, ay, bx, by, points[2 * m], points[2 * m + 1]) !== 0) return false;
   }
@@ -162,8 +175,15 @@ interface Edges {
 
 function collectEdges(polygons: readonly PolygonInput[], usable: boolean[]): Edges {
   let total = 0;
-  polygons.forEach((p, i) => { if (usable[i]) total += Math.floor(p.points.length / 2); });
-  const edges: Edges = { shape: new Int32Array(total), index: new Int32Array(total), ends: new Float64Array(4 * total), ringSize: new Int32Array(total) };
+  polygons.forEach((p, i) => {
+    if (usable[i]) total += Math.floor(p.points.length / 2);
+  });
+  const edges: Edges = {
+    shape: new Int32Array(total),
+    index: new Int32Array(total),
+    ends: new Float64Array(4 * total),
+    ringSize: new Int32Array(total),
+  };
   let e = 0;
   polygons.forEach((polygon, shape) => {
     if (!usable[shape]) return;
@@ -192,12 +212,19 @@ function findEdgeContacts(polygons: readonly PolygonInput[], usable: boolean[], 
   const e = edges.ends;
   const index = new Flatbush(count);
   for (let i = 0; i < count; i++) {
-    index.add(Math.min(e[4 * i], e[4 * i + 2]), Math.min(e[4 * i + 1], e[4 * i + 3]), Math.max(e[4 * i], e[4 * i + 2]), Math.max(e[4 * i + 1], e[4 * i + 3]));
+    index.add(
+      Math.min(e[4 * i], e[4 * i + 2]),
+      Math.min(e[4 * i + 1], e[4 * i + 3]),
+      Math.max(e[4 * i], e[4 * i + 2]),
+      Math.max(e[4 * i + 1], e[4 * i + 3]),
+    );
   }
   index.finish();
   for (let i = 0; i < count && findings.length < maxFindings; i++) {
-    const minX = Math.min(e[4 * i], e[4 * i + 2]), maxX = Math.max(e[4 * i], e[4 * i + 2]);
-    const minY = Math.min(e[4 * i + 1], e[4 * i + 3]), maxY = Math.max(e[4 * i + 1], e[4 * i + 3]);
+    const minX = Math.min(e[4 * i], e[4 * i + 2]),
+      maxX = Math.max(e[4 * i], e[4 * i + 2]);
+    const minY = Math.min(e[4 * i + 1], e[4 * i + 3]),
+      maxY = Math.max(e[4 * i + 1], e[4 * i + 3]);
     const candidates = index.search(minX, minY, maxX, maxY, (j) => j > i);
     candidates.sort((a, b) => a - b); // stable, readable order of reports
     for (const j of candidates) {
@@ -227,21 +254,32 @@ function withoutEchoes(findings: GeometryFinding[]): GeometryFinding[] {
     const place = `${pair}@${x},${y}`;
     if (seen.has(place)) return false;
     seen.add(place);
-    return !overlaps.some((o) => pairKey(o.shape, o.otherShape) === pair
-      && orientation(o.at[0], o.at[1], o.to[0], o.to[1], x, y) === 0 && within(o.at[0], o.at[1], o.to[0], o.to[1], x, y));
+    return !overlaps.some(
+      (o) =>
+        pairKey(o.shape, o.otherShape) === pair &&
+        orientation(o.at[0], o.at[1], o.to[0], o.to[1], x, y) === 0 &&
+        within(o.at[0], o.at[1], o.to[0], o.to[1], x, y),
+    );
   });
 }
 
 /** How edges i and j (i < j) meet, or null when they do not (or only as neighbours should). */
 function contactOf(edges: Edges, i: number, j: number): GeometryFinding | null {
   const e = edges.ends;
-  const ax = e[4 * i], ay = e[4 * i + 1], bx = e[4 * i + 2], by = e[4 * i + 3];
-  const cx = e[4 * j], cy = e[4 * j + 1], dx = e[4 * j + 2], dy = e[4 * j + 3];
+  const ax = e[4 * i],
+    ay = e[4 * i + 1],
+    bx = e[4 * i + 2],
+    by = e[4 * i + 3];
+  const cx = e[4 * j],
+    cy = e[4 * j + 1],
+    dx = e[4 * j + 2],
+    dy = e[4 * j + 3];
   const base = { shape: edges.shape[i], edge: edges.index[i], otherShape: edges.shape[j], otherEdge: edges.index[j] };
 
   if (edges.shape[i] === edges.shape[j]) {
     const n = edges.ringSize[i];
-    const ki = edges.index[i], kj = edges.index[j];
+    const ki = edges.index[i],
+      kj = edges.index[j];
     // Neighbours share a vertex by construction; they break a rule only by folding back onto each other.
     if (kj === ki + 1) return foldBack(ax, ay, bx, by, dx, dy, base);
     if (ki === 0 && kj === n - 1) return foldBack(cx, cy, dx, dy, bx, by, base);
@@ -255,7 +293,10 @@ function contactOf(edges: Edges, i: number, j: number): GeometryFinding | null {
   if (s1 === 0 && s2 === 0) return collinearContact(ax, ay, bx, by, cx, cy, dx, dy, base);
   if (s1 * s2 < 0 && s3 * s4 < 0) {
     // Proper crossing; the location is for the message only, so floating point is fine.
-    const rx = bx - ax, ry = by - ay, sx = dx - cx, sy = dy - cy;
+    const rx = bx - ax,
+      ry = by - ay,
+      sx = dx - cx,
+      sy = dy - cy;
     const t = ((cx - ax) * sy - (cy - ay) * sx) / (rx * sy - ry * sx);
     return { rule: 'edges-cross', ...base, at: [ax + t * rx, ay + t * ry] };
   }
@@ -268,7 +309,15 @@ function contactOf(edges: Edges, i: number, j: number): GeometryFinding | null {
 }
 
 /** Neighbour edges p -> q -> r: a rule is broken only when r turns straight back along q -> p. */
-function foldBack(px: number, py: number, qx: number, qy: number, rx: number, ry: number, base: Omit<EdgeContact, 'at'>): GeometryFinding | null {
+function foldBack(
+  px: number,
+  py: number,
+  qx: number,
+  qy: number,
+  rx: number,
+  ry: number,
+  base: Omit<EdgeContact, 'at'>,
+): GeometryFinding | null {
   if (orientation(px, py, qx, qy, rx, ry) !== 0) return null;
   // Collinear vectors: each product term has the sign of the dot product, so no cancellation.
   if ((qx - px) * (rx - qx) + (qy - py) * (ry - qy) > 0) return null;
@@ -282,12 +331,24 @@ function within(ax: number, ay: number, bx: number, by: number, cx: number, cy: 
 }
 
 function collinearContact(
-  ax: number, ay: number, bx: number, by: number, cx: number, cy: number, dx: number, dy: number,
+  ax: number,
+  ay: number,
+  bx: number,
+  by: number,
+  cx: number,
+  cy: number,
+  dx: number,
+  dy: number,
   base: Omit<EdgeContact, 'at'>,
 ): GeometryFinding | null {
   // Project on the axis along which a-b is longer (never zero: edges have length).
   const alongX = Math.abs(bx - ax) >= Math.abs(by - ay);
-  const pts: Point[] = [[ax, ay], [bx, by], [cx, cy], [dx, dy]];
+  const pts: Point[] = [
+    [ax, ay],
+    [bx, by],
+    [cx, cy],
+    [dx, dy],
+  ];
   const u = (p: Point) => (alongX ? p[0] : p[1]);
   const lo = Math.max(Math.min(u(pts[0]), u(pts[1])), Math.min(u(pts[2]), u(pts[3])));
   const hi = Math.min(Math.max(u(pts[0]), u(pts[1])), Math.max(u(pts[2]), u(pts[3])));
@@ -299,7 +360,11 @@ function collinearContact(
 }
 
 /** Solids wholly inside other solids (pairs whose bounding boxes nest and whose boundaries do not meet). */
-function findNestedSolids(polygons: readonly PolygonInput[], usable: boolean[], touching: Set<string>): GeometryFinding[] {
+function findNestedSolids(
+  polygons: readonly PolygonInput[],
+  usable: boolean[],
+  touching: Set<string>,
+): GeometryFinding[] {
   const solids = polygons.flatMap((p, i) => (p.kind === 'solid' && usable[i] ? [i] : []));
   if (solids.length < 2) return [];
   const boxes = solids.map((i) => boundingBox(polygons[i].points));
@@ -309,7 +374,8 @@ function findNestedSolids(polygons: readonly PolygonInput[], usable: boolean[], 
   const findings: Extract<GeometryFinding, { rule: 'inside-solid' }>[] = [];
   boxes.forEach((box, a) => {
     for (const b of index.search(box[0], box[1], box[2], box[3], (j) => j !== a)) {
-      const inner = solids[a], outer = solids[b];
+      const inner = solids[a],
+        outer = solids[b];
       const ob = boxes[b];
       const nests = ob[0] <= box[0] && ob[1] <= box[1] && box[2] <= ob[2] && box[3] <= ob[3];
       if (!nests || touching.has(pairKey(inner, outer))) continue;
@@ -323,10 +389,15 @@ function findNestedSolids(polygons: readonly PolygonInput[], usable: boolean[], 
 }
 
 function boundingBox(points: ArrayLike<number>): [number, number, number, number] {
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
   for (let k = 0; k + 1 < points.length; k += 2) {
-    minX = Math.min(minX, points[k]); maxX = Math.max(maxX, points[k]);
-    minY = Math.min(minY, points[k + 1]); maxY = Math.max(maxY, points[k + 1]);
+    minX = Math.min(minX, points[k]);
+    maxX = Math.max(maxX, points[k]);
+    minY = Math.min(minY, points[k + 1]);
+    maxY = Math.max(maxY, points[k + 1]);
   }
   return [minX, minY, maxX, maxY];
 }

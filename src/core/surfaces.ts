@@ -29,7 +29,8 @@ export function aggregateToSurfaces(
   const surfaceLength = new Float64Array(m);
   for (let i = 0; i < n; i++) {
     const s = edgeSurface[i];
-    if (!(s >= 0 && s < m && Number.isInteger(s))) throw new Error(`edge ${i} has surface index ${s} outside 0..${m - 1}`);
+    if (!(s >= 0 && s < m && Number.isInteger(s)))
+      throw new Error(`edge ${i} has surface index ${s} outside 0..${m - 1}`);
     surfaceLength[s] += edgeLength[i];
   }
   // G_IJ = L_I F_IJ, the exchange length; summed straight from the edge rows.

@@ -10,7 +10,10 @@ export type CsvCell = string | number;
 const FORMULA_START = /^[=+\-@\t\r]/;
 
 export function toCsv(rows: readonly (readonly CsvCell[])[]): string {
-  return `${Papa.unparse(rows.map((r) => [...r]), { quotes: false, newline: '\r\n', escapeFormulae: FORMULA_START })}\r\n`;
+  return `${Papa.unparse(
+    rows.map((r) => [...r]),
+    { quotes: false, newline: '\r\n', escapeFormulae: FORMULA_START },
+  )}\r\n`;
 }
 
 /** A square matrix (row-major, row = from) with a header row and a first column of names. */

@@ -52,7 +52,17 @@ export function exchangeCsv({ units, names, surfaceLength, result: r, conditions
   });
   if (seesSurroundings(r)) {
     const Ts = r.surroundingsTemperature!;
-    rows.push([SURROUNDINGS_LABEL.name, '', 1, SURROUNDINGS_LABEL.condition, Ts, r.surroundingsNetHeat, '', emissivePower(Ts), ...(withDepth ? [r.surroundingsNetHeatTotal!] : [])]);
+    rows.push([
+      SURROUNDINGS_LABEL.name,
+      '',
+      1,
+      SURROUNDINGS_LABEL.condition,
+      Ts,
+      r.surroundingsNetHeat,
+      '',
+      emissivePower(Ts),
+      ...(withDepth ? [r.surroundingsNetHeatTotal!] : []),
+    ]);
   }
   return toCsv(rows);
 }

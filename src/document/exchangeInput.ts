@@ -4,7 +4,13 @@
 // Defaults for a surface with no properties: src/core/exchange/setup.ts; the
 // one-condition rule: src/document/exchange/conditions.ts; wording of
 // failures: src/document/exchange/messages.ts.
-import { exchangeInputFor, solveExchange, type ExchangeInput, type ExchangeResult, type SurfaceCondition } from '../core/exchange';
+import {
+  exchangeInputFor,
+  solveExchange,
+  type ExchangeInput,
+  type ExchangeResult,
+  type SurfaceCondition,
+} from '../core/exchange';
 import { conditionOf } from './exchange/conditions';
 import { exchangeFailureMessage, type ConditionsFailure, type SketchExchangeFailure } from './exchange/messages';
 import type { SketchSettings, SurfaceProperties } from './schema';

@@ -64,7 +64,10 @@ export function formatGeometryFinding(f: GeometryFinding, ctx: GeometryContext):
       return `${label(f.shape)}: point ${point(f.shape, f.point)} repeats the point before it (a zero-length edge)`;
     case 'several-enclosures': {
       const list = f.shapes.map((s) => s + 1);
-      const named = list.length === 2 ? `${list[0]} and ${list[1]}` : `${list.slice(0, -1).join(', ')} and ${list[list.length - 1]}`;
+      const named =
+        list.length === 2
+          ? `${list[0]} and ${list[1]}`
+          : `${list.slice(0, -1).join(', ')} and ${list[list.length - 1]}`;
       return `shapes ${named} are ${list.length === 2 ? 'both' : 'all'} enclosures; a sketch has at most one (draw the others as solids)`;
     }
     case 'outside-enclosure':
@@ -80,8 +83,14 @@ export function formatGeometryFinding(f: GeometryFinding, ctx: GeometryContext):
 
 type Contact = Extract<GeometryFinding, { rule: 'edges-cross' | 'edges-touch' | 'edges-overlap' }>;
 
-function formatContact(f: Contact, ctx: GeometryContext, label: (s: number) => string, edge: (s: number, k: number) => number): string {
-  const where = f.rule === 'edges-overlap' ? `from ${formatPoint(f.at)} to ${formatPoint(f.to)}` : `at ${formatPoint(f.at)}`;
+function formatContact(
+  f: Contact,
+  ctx: GeometryContext,
+  label: (s: number) => string,
+  edge: (s: number, k: number) => number,
+): string {
+  const where =
+    f.rule === 'edges-overlap' ? `from ${formatPoint(f.at)} to ${formatPoint(f.to)}` : `at ${formatPoint(f.at)}`;
   const verb = f.rule === 'edges-cross' ? 'crosses' : f.rule === 'edges-touch' ? 'touches' : 'runs along';
 
   if (f.shape === f.otherShape) {
@@ -99,7 +108,9 @@ function formatContact(f: Contact, ctx: GeometryContext, label: (s: number) => s
     return `${label(f.otherShape)}: edge ${edge(f.otherShape, f.otherEdge)} ${verb} ${label(f.shape)} edge ${edge(f.shape, f.edge)} ${where}; shapes must not overlap or touch`;
   }
   const swap = kinds[0] === 'enclosure' || (kinds[1] !== 'enclosure' && f.otherShape > f.shape);
-  const [s, e, os, oe] = swap ? [f.otherShape, f.otherEdge, f.shape, f.edge] : [f.shape, f.edge, f.otherShape, f.otherEdge];
+  const [s, e, os, oe] = swap
+    ? [f.otherShape, f.otherEdge, f.shape, f.edge]
+    : [f.shape, f.edge, f.otherShape, f.otherEdge];
   if (ctx.shapes[os].kind === 'enclosure') {
     return `${label(s)}: edge ${edge(s, e)} ${verb} the enclosure wall (shape ${os + 1}, edge ${edge(os, oe)}) ${where}; solids must lie inside the enclosure without touching it`;
   }

@@ -4,7 +4,16 @@ export { serialize } from './serialize';
 export { toScene } from './toScene';
 export { toCsv, matrixCsv, type CsvCell } from './csv';
 export { CURRENT_VERSION, sketchFileSchemaV1 } from './schema';
-export type { Sketch, Shape, ShapeKind, Point, SurfaceProperties, SketchSettings, SketchFileV1, ShapeV1 } from './schema';
+export type {
+  Sketch,
+  Shape,
+  ShapeKind,
+  Point,
+  SurfaceProperties,
+  SketchSettings,
+  SketchFileV1,
+  ShapeV1,
+} from './schema';
 export { UNITS, METRES_PER_UNIT, type Units } from './units';
 export { MAX_EDGES, MAX_COORDINATE, MIN_EDGE_LENGTH, MIN_RELATIVE_EDGE_LENGTH, MAX_NAME_LENGTH } from './limits';
 export type { SketchProblem, ProblemPlace, ProblemKind } from './problems';

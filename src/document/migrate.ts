@@ -11,12 +11,16 @@ export type MigrateResult = { ok: true; doc: Record<string, unknown>; from: numb
 /** Bring a document (already known to be an object) to CURRENT_VERSION, or say why not. */
 export function migrate(doc: Record<string, unknown>): MigrateResult {
   const version = doc.version;
-  if (version === undefined) return { ok: false, error: `version is missing; it must be ${CURRENT_VERSION} for this program` };
+  if (version === undefined)
+    return { ok: false, error: `version is missing; it must be ${CURRENT_VERSION} for this program` };
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
     return { ok: false, error: `version must be a whole number from 1 (got ${describeValue(version)})` };
   }
   if (version > CURRENT_VERSION) {
-    return { ok: false, error: `version ${version} is newer than this program reads (up to ${CURRENT_VERSION}); open it with a newer Tautline` };
+    return {
+      ok: false,
+      error: `version ${version} is newer than this program reads (up to ${CURRENT_VERSION}); open it with a newer Tautline`,
+    };
   }
   let current = doc;
   for (let v = version; v < CURRENT_VERSION; v++) {

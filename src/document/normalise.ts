@@ -29,22 +29,43 @@ export function normalise(file: SketchFileV1): Normalised {
     filePointCount.push(n);
     const names = typeof shape.surface === 'string' ? new Array<string>(n).fill(shape.surface) : shape.surface;
     if (names.length !== n) {
-      errors.push(problemAt('surface-list', `${label}: surface lists ${names.length} name${names.length === 1 ? '' : 's'} for ${n} edge${n === 1 ? '' : 's'}; give one name per edge, or a single name for all`, { shapes: [s] }));
+      errors.push(
+        problemAt(
+          'surface-list',
+          `${label}: surface lists ${names.length} name${names.length === 1 ? '' : 's'} for ${n} edge${n === 1 ? '' : 's'}; give one name per edge, or a single name for all`,
+          { shapes: [s] },
+        ),
+      );
     }
     const tooBig = shape.points.findIndex(([x, y]) => Math.abs(x) > MAX_COORDINATE || Math.abs(y) > MAX_COORDINATE);
     if (tooBig >= 0) {
       // No point mark: a coordinate this far out cannot be shown next to the rest.
-      errors.push(problemAt('coordinate-range', `${label}: point ${tooBig + 1} ${formatPoint(shape.points[tooBig])} is beyond ±${formatNumber(MAX_COORDINATE)}; lengths would overflow`, { shapes: [s] }));
+      errors.push(
+        problemAt(
+          'coordinate-range',
+          `${label}: point ${tooBig + 1} ${formatPoint(shape.points[tooBig])} is beyond ±${formatNumber(MAX_COORDINATE)}; lengths would overflow`,
+          { shapes: [s] },
+        ),
+      );
     }
     const keep = keptEdges(shape.points);
     fileIndex.push(keep);
-    if (keep.length < n && n > 1) warnings.push(`${label}: removed ${describeRemoved(keep, n)}, which made zero-length edges`);
+    if (keep.length < n && n > 1)
+      warnings.push(`${label}: removed ${describeRemoved(keep, n)}, which made zero-length edges`);
     if (tooBig < 0 && keep.length >= 3) {
       const short = tooShortEdge(shape.points, keep);
       if (short) {
-        errors.push(problemAt('edge-too-short', `${label}: edge ${short.edge + 1} is ${formatNumber(short.length)} ${file.units} long, ${short.why}`, {
-          shapes: [s], edges: [{ shape: s, edge: short.edge }], points: [[shape.points[short.edge][0], shape.points[short.edge][1]]],
-        }));
+        errors.push(
+          problemAt(
+            'edge-too-short',
+            `${label}: edge ${short.edge + 1} is ${formatNumber(short.length)} ${file.units} long, ${short.why}`,
+            {
+              shapes: [s],
+              edges: [{ shape: s, edge: short.edge }],
+              points: [[shape.points[short.edge][0], shape.points[short.edge][1]]],
+            },
+          ),
+        );
       }
     }
     return {
@@ -60,14 +81,22 @@ export function normalise(file: SketchFileV1): Normalised {
     surfaces[name] = { ...props };
     const condition = conditionOf(props);
     if (!condition.ok) {
-      errors.push(problemAt('conditions', moreThanOneConditionMessage(name, condition.kinds), { edges: edgesNamed(shapes, fileIndex, name) }));
+      errors.push(
+        problemAt('conditions', moreThanOneConditionMessage(name, condition.kinds), {
+          edges: edgesNamed(shapes, fileIndex, name),
+        }),
+      );
     }
     if (props.opening === true && props.emissivity !== undefined && props.emissivity !== 1) {
-      warnings.push(`surface ${quoteName(name)}: emissivity ${formatNumber(props.emissivity)} is ignored; an opening acts as a black surface`);
+      warnings.push(
+        `surface ${quoteName(name)}: emissivity ${formatNumber(props.emissivity)} is ignored; an opening acts as a black surface`,
+      );
     }
     const onSolid = shapes.findIndex((shape) => shape.kind === 'solid' && shape.surface.includes(name));
     if (props.opening === true && onSolid >= 0) {
-      warnings.push(`surface ${quoteName(name)} is an opening but lies on a solid (shape ${onSolid + 1}); openings are gaps in the enclosure wall`);
+      warnings.push(
+        `surface ${quoteName(name)} is an opening but lies on a solid (shape ${onSolid + 1}); openings are gaps in the enclosure wall`,
+      );
     }
     if (!used.has(name)) warnings.push(`surface ${quoteName(name)} has properties but no edge uses that name`);
   }
@@ -77,8 +106,14 @@ export function normalise(file: SketchFileV1): Normalised {
 }
 
 /** The file's edges (shape, edge from 0) that carry surface `name`. */
-function edgesNamed(shapes: readonly Shape[], fileIndex: readonly number[][], name: string): { shape: number; edge: number }[] {
-  return shapes.flatMap((shape, s) => shape.surface.flatMap((n, k) => (n === name ? [{ shape: s, edge: fileIndex[s][k] }] : [])));
+function edgesNamed(
+  shapes: readonly Shape[],
+  fileIndex: readonly number[][],
+  name: string,
+): { shape: number; edge: number }[] {
+  return shapes.flatMap((shape, s) =>
+    shape.surface.flatMap((n, k) => (n === name ? [{ shape: s, edge: fileIndex[s][k] }] : [])),
+  );
 }
 
 /**
@@ -90,7 +125,8 @@ function keptEdges(points: readonly Point[]): number[] {
   const n = points.length;
   const keep: number[] = [];
   for (let k = 0; k < n; k++) {
-    const a = points[k], b = points[(k + 1) % n];
+    const a = points[k],
+      b = points[(k + 1) % n];
     if (a[0] !== b[0] || a[1] !== b[1]) keep.push(k);
   }
   return keep.length === 0 && n > 0 ? [0] : keep;
@@ -109,16 +145,24 @@ function describeRemoved(keep: number[], n: number): string {
 /** The first kept edge too short to compute with, absolutely or relative to its coordinates. */
 function tooShortEdge(points: readonly Point[], keep: number[]): { edge: number; length: number; why: string } | null {
   for (let i = 0; i < keep.length; i++) {
-    const a = points[keep[i]], b = points[keep[(i + 1) % keep.length]];
+    const a = points[keep[i]],
+      b = points[keep[(i + 1) % keep.length]];
     const length = Math.hypot(b[0] - a[0], b[1] - a[1]);
     const scale = Math.max(Math.abs(a[0]), Math.abs(a[1]), Math.abs(b[0]), Math.abs(b[1]));
     if (length < MIN_EDGE_LENGTH) {
-      return { edge: keep[i], length, why: `shorter than ${formatNumber(MIN_EDGE_LENGTH)}: the sketch is too small to compute (below rounding)` };
+      return {
+        edge: keep[i],
+        length,
+        why: `shorter than ${formatNumber(MIN_EDGE_LENGTH)}: the sketch is too small to compute (below rounding)`,
+      };
     }
     if (length < MIN_RELATIVE_EDGE_LENGTH * scale) {
-      return { edge: keep[i], length, why: `too short for coordinates near ${formatNumber(scale)} (below rounding; move the sketch near the origin or enlarge the edge)` };
+      return {
+        edge: keep[i],
+        length,
+        why: `too short for coordinates near ${formatNumber(scale)} (below rounding; move the sketch near the origin or enlarge the edge)`,
+      };
     }
   }
   return null;
 }
-

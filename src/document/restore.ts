@@ -47,17 +47,32 @@ function restoreUnsafe(input: unknown): RestoreResult {
 
   const shapeCount = Array.isArray(doc.shapes) ? doc.shapes.length : 0;
   if (shapeCount > MAX_EDGES / 3) {
-    return refuse([problemAt('limit', `the sketch has ${shapeCount} shapes; the limit is ${MAX_EDGES} edges in all, and each shape has at least 3`)]);
+    return refuse([
+      problemAt(
+        'limit',
+        `the sketch has ${shapeCount} shapes; the limit is ${MAX_EDGES} edges in all, and each shape has at least 3`,
+      ),
+    ]);
   }
   const edges = countEdges(doc.shapes);
   if (edges > MAX_EDGES) {
-    return refuse([problemAt('limit', `the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`)]);
+    return refuse([
+      problemAt(
+        'limit',
+        `the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`,
+      ),
+    ]);
   }
 
   const surfaces = doc.surfaces;
   if (surfaces !== null && typeof surfaces === 'object' && Object.hasOwn(surfaces, '__proto__')) {
     // The schema would silently drop this key; say so instead.
-    return refuse([problemAt('schema', `surfaces: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`)]);
+    return refuse([
+      problemAt(
+        'schema',
+        `surfaces: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`,
+      ),
+    ]);
   }
   const parsed = sketchFileSchemaV1.safeParse(doc, { reportInput: true });
   if (!parsed.success) return refuse(parsed.error.issues.map((issue) => schemaProblem(issue, doc)));
@@ -102,7 +117,13 @@ function notASketch(value: unknown): string | null {
   if (Array.isArray(value)) return `not a Tautline sketch: the file holds a list; ${expected}`;
   const keys = Object.keys(value);
   if (!keys.includes('version') && !keys.includes('shapes')) {
-    const found = keys.length === 0 ? 'an empty object' : `fields ${keys.slice(0, 4).map((k) => JSON.stringify(k)).join(', ')}${keys.length > 4 ? ', …' : ''}`;
+    const found =
+      keys.length === 0
+        ? 'an empty object'
+        : `fields ${keys
+            .slice(0, 4)
+            .map((k) => JSON.stringify(k))
+            .join(', ')}${keys.length > 4 ? ', …' : ''}`;
     return `not a Tautline sketch: found ${found}; ${expected}`;
   }
   return null;

@@ -57,7 +57,10 @@ export const surfacePropertiesSchema = z.object(
 export const settingsSchema = z.object(
   {
     /** Temperature of the surroundings seen through openings and by open sketches, kelvin. */
-    surroundingsTemperature: z.number({ error: 'must be a number of kelvin' }).gt(0, { error: 'must be above 0 K' }).optional(),
+    surroundingsTemperature: z
+      .number({ error: 'must be a number of kelvin' })
+      .gt(0, { error: 'must be above 0 K' })
+      .optional(),
     /** Length of the long dimension (duct or furnace length), metres; turns per-metre results into totals. */
     depth: z.number({ error: 'must be a number of metres' }).gt(0, { error: 'must be greater than 0' }).optional(),
   },
@@ -68,7 +71,9 @@ export const sketchFileSchemaV1 = z.object({
   version: z.literal(1, { error: 'must be 1' }),
   units: z.enum(UNITS, { error: `must be one of ${UNITS.join(', ')}` }),
   shapes: z.array(shapeSchema, { error: 'must be a list of shapes' }),
-  surfaces: z.record(surfaceNameSchema, surfacePropertiesSchema, { error: 'must be an object of surface names' }).optional(),
+  surfaces: z
+    .record(surfaceNameSchema, surfacePropertiesSchema, { error: 'must be an object of surface names' })
+    .optional(),
   settings: settingsSchema.optional(),
 });
 

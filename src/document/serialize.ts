@@ -5,7 +5,9 @@ import { CURRENT_VERSION, type Sketch } from './schema';
 export function serialize(sketch: Sketch): string {
   const shapes = sketch.shapes.map((shape) => {
     const same = shape.surface.length > 0 && shape.surface.every((n) => n === shape.surface[0]);
-    const surface = same ? JSON.stringify(shape.surface[0]) : `[${shape.surface.map((n) => JSON.stringify(n)).join(', ')}]`;
+    const surface = same
+      ? JSON.stringify(shape.surface[0])
+      : `[${shape.surface.map((n) => JSON.stringify(n)).join(', ')}]`;
     const points = `[${shape.points.map(([x, y]) => `[${num(x)}, ${num(y)}]`).join(', ')}]`;
     return [
       '    {',
@@ -21,8 +23,10 @@ export function serialize(sketch: Sketch): string {
     `  "units": ${JSON.stringify(sketch.units)},`,
     shapes.length === 0 ? '  "shapes": []' : `  "shapes": [\n${shapes.join(',\n')}\n  ]`,
   ];
-  if (Object.keys(sketch.surfaces).length > 0) lines[lines.length - 1] += `,\n  "surfaces": ${indent(JSON.stringify(sketch.surfaces, null, 2))}`;
-  if (Object.keys(sketch.settings).length > 0) lines[lines.length - 1] += `,\n  "settings": ${indent(JSON.stringify(sketch.settings, null, 2))}`;
+  if (Object.keys(sketch.surfaces).length > 0)
+    lines[lines.length - 1] += `,\n  "surfaces": ${indent(JSON.stringify(sketch.surfaces, null, 2))}`;
+  if (Object.keys(sketch.settings).length > 0)
+    lines[lines.length - 1] += `,\n  "settings": ${indent(JSON.stringify(sketch.settings, null, 2))}`;
   return `${lines.join('\n')}\n}\n`;
 }
 

@@ -15,7 +15,9 @@ export function schemaProblem(issue: z.core.$ZodIssue, file: unknown): SketchPro
 export function formatSchemaIssue(issue: z.core.$ZodIssue, file: unknown): string {
   const path = issue.path;
   const input = (issue as { input?: unknown }).input;
-  const missing = input === undefined && (issue.code === 'invalid_type' || issue.code === 'invalid_value' || issue.code === 'invalid_union');
+  const missing =
+    input === undefined &&
+    (issue.code === 'invalid_type' || issue.code === 'invalid_value' || issue.code === 'invalid_union');
   const what = missing ? `is missing; it ${issue.message}` : `${issue.message} (got ${describeReceived(issue, input)})`;
   if (issue.code === 'invalid_key' && path[0] === 'surfaces') {
     const rule = issue.issues[0]?.message ?? 'is not a valid surface name';

@@ -15,14 +15,26 @@ export interface StartupDocument {
   fromAutosave: boolean;
 }
 
-export function loadAutosave(storage: Storage, api: DocumentApi, fallback: SketchFile, now = Date.now()): StartupDocument {
+export function loadAutosave(
+  storage: Storage,
+  api: DocumentApi,
+  fallback: SketchFile,
+  now = Date.now(),
+): StartupDocument {
   let text: string | null = null;
-  try { text = storage.getItem(AUTOSAVE_KEY); } catch { /* storage blocked: start fresh */ }
+  try {
+    text = storage.getItem(AUTOSAVE_KEY);
+  } catch {
+    /* storage blocked: start fresh */
+  }
   if (text === null) return { doc: fallback, fromAutosave: false };
   const read = api.restore(text);
   if (read.ok) {
     const notice = read.warnings.length
-      ? { level: 'warning' as const, text: `Restored your last sketch with warnings: ${read.warnings.slice(0, 3).join('; ')}` }
+      ? {
+          level: 'warning' as const,
+          text: `Restored your last sketch with warnings: ${read.warnings.slice(0, 3).join('; ')}`,
+        }
       : undefined;
     return { doc: read.sketch, notice, fromAutosave: true };
   }
@@ -31,14 +43,21 @@ export function loadAutosave(storage: Storage, api: DocumentApi, fallback: Sketc
   try {
     storage.setItem(key, text);
     storage.removeItem(AUTOSAVE_KEY);
-  } catch { kept = false; }
-  const where = kept ? `It was kept in this browser's storage under the key "${key}".` : 'It could not be moved aside and is still stored.';
+  } catch {
+    kept = false;
+  }
+  const where = kept
+    ? `It was kept in this browser's storage under the key "${key}".`
+    : 'It could not be moved aside and is still stored.';
   return {
     doc: fallback,
     fromAutosave: false,
     notice: {
       level: 'warning',
-      text: `The autosaved sketch could not be read (${read.errors.slice(0, 2).map((e) => e.message).join('; ')}). ${where} The demo was opened instead.`,
+      text: `The autosaved sketch could not be read (${read.errors
+        .slice(0, 2)
+        .map((e) => e.message)
+        .join('; ')}). ${where} The demo was opened instead.`,
     },
   };
 }

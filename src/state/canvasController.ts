@@ -17,7 +17,10 @@ export class CanvasController {
   /** The two latest presses: a double-click counts only when both were at one place. */
   private presses: [Point | null, Point | null] = [null, null];
 
-  constructor(private readonly store: AppStore, private readonly registry: ToolRegistry = toolRegistry) {}
+  constructor(
+    private readonly store: AppStore,
+    private readonly registry: ToolRegistry = toolRegistry,
+  ) {}
 
   /** The active tool; when the store's tool changed, the old one drops what it had in flight. */
   private active(): { tool: DrawingTool; ctx: ToolContext<object> } {
@@ -83,7 +86,9 @@ export class CanvasController {
   deleteSelection(): void {
     const s = this.store.getState();
     const shapes = new Set(s.selection.filter((p) => p.type === 'shape').map((p) => p.shape));
-    const vertices = s.selection.filter((p): p is Extract<Pick, { type: 'vertex' }> => p.type === 'vertex' && !shapes.has(p.shape));
+    const vertices = s.selection.filter(
+      (p): p is Extract<Pick, { type: 'vertex' }> => p.type === 'vertex' && !shapes.has(p.shape),
+    );
     if (!shapes.size && !vertices.length) return;
     const before = s.doc;
     let doc = deleteVertices(before, vertices);

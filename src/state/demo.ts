@@ -19,7 +19,14 @@ export const demoSketch: SketchFile = {
   shapes: [
     {
       kind: 'enclosure',
-      points: [[0, 0], [2.4, 0], [2.4, 1.2], [2.1, 1.5], [0.3, 1.5], [0, 1.2]],
+      points: [
+        [0, 0],
+        [2.4, 0],
+        [2.4, 1.2],
+        [2.1, 1.5],
+        [0.3, 1.5],
+        [0, 1.2],
+      ],
       surface: ['fired floor', 'side walls', 'refractory roof', 'refractory roof', 'refractory roof', 'side walls'],
     },
     ...TUBE_X.map((x, i) => ({ kind: 'solid' as const, points: tube(x), surface: `tube ${i + 1}` })),

@@ -10,8 +10,7 @@ export type { SketchProblem, ProblemPlace } from '../document';
 export type CheckedSketch = Sketch;
 
 export type RestoreOutcome =
-  | { ok: true; sketch: CheckedSketch; warnings: string[] }
-  | { ok: false; errors: SketchProblem[] };
+  { ok: true; sketch: CheckedSketch; warnings: string[] } | { ok: false; errors: SketchProblem[] };
 
 export interface DocumentApi {
   /** Parse (from text) or validate (an object) a sketch file, with messages for people. */

@@ -17,7 +17,10 @@ export function openSketchText(store: AppStore, api: DocumentApi, text: string, 
   const s = store.getState();
   if (!read.ok) {
     const more = read.errors.length > 4 ? ` (and ${read.errors.length - 4} more)` : '';
-    const shown = read.errors.slice(0, 4).map((e) => e.message).join('; ');
+    const shown = read.errors
+      .slice(0, 4)
+      .map((e) => e.message)
+      .join('; ');
     s.notify('error', `Could not open "${fileName}": ${shown}${more}. Your current sketch is unchanged.`);
     return false;
   }
@@ -25,7 +28,8 @@ export function openSketchText(store: AppStore, api: DocumentApi, text: string, 
   s.setSelection([]);
   s.setDraft([]);
   s.requestFit();
-  if (read.warnings.length) s.notify('warning', `Opened "${fileName}" with warnings: ${read.warnings.slice(0, 4).join('; ')}`);
+  if (read.warnings.length)
+    s.notify('warning', `Opened "${fileName}" with warnings: ${read.warnings.slice(0, 4).join('; ')}`);
   else s.notify('info', `Opened "${fileName}".`);
   return true;
 }

@@ -29,7 +29,10 @@ export const createHistorySlice: StateCreator<AppState, [], [], HistorySlice> = 
   gestureBase: null,
   commit: (next) => {
     const { doc, past, gestureBase } = get();
-    if (gestureBase) { set({ doc: next }); return; }
+    if (gestureBase) {
+      set({ doc: next });
+      return;
+    }
     if (next === doc) return;
     set({ doc: next, past: [...past, doc].slice(-HISTORY_LIMIT), future: [] });
   },
@@ -42,18 +45,31 @@ export const createHistorySlice: StateCreator<AppState, [], [], HistorySlice> = 
   endGesture: () => {
     const { gestureBase, doc, past } = get();
     if (!gestureBase) return;
-    if (gestureBase === doc) { set({ gestureBase: null }); return; }
+    if (gestureBase === doc) {
+      set({ gestureBase: null });
+      return;
+    }
     set({ gestureBase: null, past: [...past, gestureBase].slice(-HISTORY_LIMIT), future: [] });
   },
   undo: () => {
     const { past, future, doc, gestureBase } = get();
     if (gestureBase || past.length === 0) return;
     const prev = past[past.length - 1];
-    set({ doc: prev, past: past.slice(0, -1), future: [doc, ...future], selection: validPicks(prev.shapes, get().selection) });
+    set({
+      doc: prev,
+      past: past.slice(0, -1),
+      future: [doc, ...future],
+      selection: validPicks(prev.shapes, get().selection),
+    });
   },
   redo: () => {
     const { past, future, doc, gestureBase } = get();
     if (gestureBase || future.length === 0) return;
-    set({ doc: future[0], past: [...past, doc], future: future.slice(1), selection: validPicks(future[0].shapes, get().selection) });
+    set({
+      doc: future[0],
+      past: [...past, doc],
+      future: future.slice(1),
+      selection: validPicks(future[0].shapes, get().selection),
+    });
   },
 });

@@ -10,7 +10,11 @@ import { ViewFactorClient, type WorkerHandle } from '../worker/client';
 /** Seconds a job may run before the worker counts as hung (the benchmark's largest sketch takes ~2 s). */
 export const WORKER_TIME_LIMIT_MS = 15000;
 
-export interface Runtime { store: AppStore; client: ViewFactorClient; dispose: () => void }
+export interface Runtime {
+  store: AppStore;
+  client: ViewFactorClient;
+  dispose: () => void;
+}
 
 export function startRuntime(options: {
   storage: Storage;
@@ -29,6 +33,11 @@ export function startRuntime(options: {
   return {
     store,
     client,
-    dispose: () => { stopExchange(); stopLive(); stopSave(); client.dispose(); },
+    dispose: () => {
+      stopExchange();
+      stopLive();
+      stopSave();
+      client.dispose();
+    },
   };
 }

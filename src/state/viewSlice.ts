@@ -7,9 +7,17 @@ import type { AppState } from './store';
 import { DEFAULT_TOOL, type ToolId } from './tools/registry';
 
 /** Screen = origin + scale * (x, -y): y points up in the sketch, down on screen. */
-export interface Camera { scale: number; originX: number; originY: number }
+export interface Camera {
+  scale: number;
+  originX: number;
+  originY: number;
+}
 
-export interface Notice { id: number; level: 'info' | 'warning' | 'error'; text: string }
+export interface Notice {
+  id: number;
+  level: 'info' | 'warning' | 'error';
+  text: string;
+}
 
 export interface ViewSlice {
   /** Id of the active drawing tool in the tool registry (a test may run its own registry). */
@@ -70,7 +78,9 @@ export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) 
   setSelection: (selection) => set({ selection }),
   setCamera: (camera) => set({ camera }),
   setSnap: (snap) => set({ snap }),
-  setGridStep: (gridStep) => { if (gridStep > 0 && Number.isFinite(gridStep)) set({ gridStep }); },
+  setGridStep: (gridStep) => {
+    if (gridStep > 0 && Number.isFinite(gridStep)) set({ gridStep });
+  },
   setQuickKind: (quickKind) => set({ quickKind }),
   setTubeSides: (n) => set({ tubeSides: Math.max(3, Math.min(256, Math.round(n) || 3)) }),
   setDraft: (draft) => set({ draft }),

@@ -4,7 +4,11 @@ import type { AppState, AppStore } from '../state/store';
 import type { DocumentApi } from '../state/documentApi';
 import { CanvasController } from '../state/canvasController';
 
-interface AppServices { store: AppStore; api: DocumentApi; controller: CanvasController }
+interface AppServices {
+  store: AppStore;
+  api: DocumentApi;
+  controller: CanvasController;
+}
 
 const Ctx = createContext<AppServices | null>(null);
 

@@ -16,7 +16,10 @@ export type JobOutcome =
   | { kind: 'dropped' }
   | { kind: 'failed'; reason: 'threw' | 'timeout' | 'crashed'; message: string };
 
-interface Entry { job: ViewFactorJob; resolve: (o: JobOutcome) => void }
+interface Entry {
+  job: ViewFactorJob;
+  resolve: (o: JobOutcome) => void;
+}
 
 export interface ClientOptions {
   /** Longest a job may run before the worker is considered hung, ms. */
@@ -34,15 +37,24 @@ export class ViewFactorClient {
   /** How many jobs were handed to a worker (benchmarks and tests count them). */
   launched = 0;
 
-  constructor(private readonly spawn: () => WorkerHandle, private readonly options: ClientOptions) {
+  constructor(
+    private readonly spawn: () => WorkerHandle,
+    private readonly options: ClientOptions,
+  ) {
     this.worker = this.start();
   }
 
   run(job: ViewFactorJob): Promise<JobOutcome> {
     return new Promise((resolve) => {
-      if (this.disposed) { resolve({ kind: 'dropped' }); return; }
+      if (this.disposed) {
+        resolve({ kind: 'dropped' });
+        return;
+      }
       const entry = { job, resolve };
-      if (!this.running) { this.launch(entry); return; }
+      if (!this.running) {
+        this.launch(entry);
+        return;
+      }
       this.waiting?.resolve({ kind: 'dropped' });
       this.waiting = entry;
     });
@@ -55,7 +67,10 @@ export class ViewFactorClient {
 
   dispose(): void {
     this.disposed = true;
-    if (this.running) { clearTimeout(this.running.timer); this.running.resolve({ kind: 'dropped' }); }
+    if (this.running) {
+      clearTimeout(this.running.timer);
+      this.running.resolve({ kind: 'dropped' });
+    }
     this.waiting?.resolve({ kind: 'dropped' });
     this.running = this.waiting = null;
     this.worker.terminate();
@@ -63,7 +78,9 @@ export class ViewFactorClient {
 
   private start(): WorkerHandle {
     const w = this.spawn();
-    w.onCrash?.((message) => { if (this.worker === w) this.fail('crashed', message); });
+    w.onCrash?.((message) => {
+      if (this.worker === w) this.fail('crashed', message);
+    });
     return w;
   }
 

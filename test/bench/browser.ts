@@ -20,7 +20,13 @@ async function watch(page: Page, selector: string, kind: 'pointermove' | 'change
     ([sel, ev]) => {
       const w = window as unknown as LatencyWindow;
       w.__lat = { lastEvent: 0, samples: [], changes: 0 };
-      window.addEventListener(ev, () => { w.__lat.lastEvent = performance.now(); }, true);
+      window.addEventListener(
+        ev,
+        () => {
+          w.__lat.lastEvent = performance.now();
+        },
+        true,
+      );
       new MutationObserver(() => {
         if (w.__lat.lastEvent) w.__lat.samples.push(performance.now() - w.__lat.lastEvent);
         w.__lat.lastEvent = 0;
@@ -42,7 +48,9 @@ async function dragLatency(page: Page, moves: number): Promise<number[]> {
   await page.getByRole('checkbox', { name: 'snap' }).uncheck();
   const [sx, sy] = await screenOf(page, 2.1, 1.5); // a roof corner of the demo oven
   for (const warm of [true, false]) {
-    await page.evaluate(() => { (window as unknown as LatencyWindow).__lat.samples = []; });
+    await page.evaluate(() => {
+      (window as unknown as LatencyWindow).__lat.samples = [];
+    });
     await page.mouse.move(sx, sy);
     await page.mouse.down();
     for (let i = 1; i <= (warm ? 20 : moves); i++) {
@@ -77,10 +85,16 @@ try {
   await page.goto(app.url);
   await waitReady(page);
   console.log(`chromium headless, demo oven; ${new Date().toISOString()}`);
-  console.log(`drag event -> updated view-factor table: ${stats(await dragLatency(page, 80))} moves (target median <= 50 ms)`);
+  console.log(
+    `drag event -> updated view-factor table: ${stats(await dragLatency(page, 80))} moves (target median <= 50 ms)`,
+  );
   const p = await propertyLatency(page, 40);
-  console.log(`emissivity typed -> updated net-heat table: ${stats(p.samples)} edits; view-factor jobs posted: ${p.jobs} (target 0)`);
-  const mem = await page.evaluate(() => (performance as unknown as { memory?: { usedJSHeapSize: number } }).memory?.usedJSHeapSize ?? 0);
+  console.log(
+    `emissivity typed -> updated net-heat table: ${stats(p.samples)} edits; view-factor jobs posted: ${p.jobs} (target 0)`,
+  );
+  const mem = await page.evaluate(
+    () => (performance as unknown as { memory?: { usedJSHeapSize: number } }).memory?.usedJSHeapSize ?? 0,
+  );
   if (mem) console.log(`page JS heap after the runs: ${(mem / 1e6).toFixed(1)} MB`);
 } finally {
   await app.close();

@@ -48,7 +48,9 @@ const cases: { label: string; scene: SceneInput; repeats: number }[] = [
 ];
 
 console.log(`node ${process.version}, ${quick ? 'quick' : 'full'} run`);
-console.log('scene                          edges   min ms  median ms  growth                   matrix MB  worst |1-row sum|');
+console.log(
+  'scene                          edges   min ms  median ms  growth                   matrix MB  worst |1-row sum|',
+);
 let previous: { edges: number; median: number } | null = null;
 const verdicts: string[] = [];
 for (const c of cases) {
@@ -58,25 +60,43 @@ for (const c of cases) {
     // Per doubling of the edges: the square root of the ratio for 4x the edges.
     const perDoubling = Math.pow(r.median / previous.median, 1 / Math.log2(r.edges / previous.edges));
     growth = `${(r.median / previous.median).toFixed(1)}x (${perDoubling.toFixed(2)}x/doubling)`;
-    verdicts.push(`growth ${previous.edges}->${r.edges} edges: ${perDoubling.toFixed(2)}x per doubling (target <= 4.5): ${perDoubling <= 4.5 ? 'met' : 'NOT met'}`);
+    verdicts.push(
+      `growth ${previous.edges}->${r.edges} edges: ${perDoubling.toFixed(2)}x per doubling (target <= 4.5): ${perDoubling <= 4.5 ? 'met' : 'NOT met'}`,
+    );
   }
   console.log(
     `${c.label.padEnd(30)} ${String(r.edges).padStart(5)} ${r.min.toFixed(2).padStart(8)} ${r.median.toFixed(2).padStart(10)}  ${growth.padEnd(24)} ${((r.edges * r.edges * 8) / 1e6).toFixed(1).padStart(6)}  ${r.rowWorst.toExponential(1)}`,
   );
-  if (c.label.startsWith('drag-size')) verdicts.push(`drag-size sketch (${r.edges} edges, 6 bodies): median ${r.median.toFixed(1)} ms (target <= 5 ms): ${r.median <= 5 ? 'met' : 'NOT met'}`);
-  if (c.label.startsWith('20 tubes, ~1600')) verdicts.push(`1600 edges: median ${r.median.toFixed(0)} ms (target <= 2000 ms): ${r.median <= 2000 ? 'met' : 'NOT met'}`);
+  if (c.label.startsWith('drag-size'))
+    verdicts.push(
+      `drag-size sketch (${r.edges} edges, 6 bodies): median ${r.median.toFixed(1)} ms (target <= 5 ms): ${r.median <= 5 ? 'met' : 'NOT met'}`,
+    );
+  if (c.label.startsWith('20 tubes, ~1600'))
+    verdicts.push(
+      `1600 edges: median ${r.median.toFixed(0)} ms (target <= 2000 ms): ${r.median <= 2000 ? 'met' : 'NOT met'}`,
+    );
   if (c.label.startsWith('20 tubes')) previous = { edges: r.edges, median: r.median };
 }
-console.log(`peak resident memory ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (the 1600-edge matrix is ${((1600 * 1600 * 8) / 1e6).toFixed(1)} MB)`);
+console.log(
+  `peak resident memory ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (the 1600-edge matrix is ${((1600 * 1600 * 8) / 1e6).toFixed(1)} MB)`,
+);
 for (const v of verdicts) console.log(v);
 
 // Other targets: reading a 1600-edge sketch file (validation included) and the
 // dense solve behind heat exchange at 2000 surfaces ("well under a second").
 {
   const ring = (cx: number, cy: number, r: number, n: number) =>
-    Array.from({ length: n }, (_, k) => [cx + r * Math.cos((2 * Math.PI * k) / n), cy + r * Math.sin((2 * Math.PI * k) / n)]);
+    Array.from({ length: n }, (_, k) => [
+      cx + r * Math.cos((2 * Math.PI * k) / n),
+      cy + r * Math.sin((2 * Math.PI * k) / n),
+    ]);
   const shapes = [{ kind: 'enclosure', points: ring(0, 0, 100, 400), surface: 'shell' }];
-  for (let t = 0; t < 20; t++) shapes.push({ kind: 'solid', points: ring(-60 + (t % 5) * 30, -45 + Math.floor(t / 5) * 30, 10, 60), surface: `tube ${t + 1}` });
+  for (let t = 0; t < 20; t++)
+    shapes.push({
+      kind: 'solid',
+      points: ring(-60 + (t % 5) * 30, -45 + Math.floor(t / 5) * 30, 10, 60),
+      surface: `tube ${t + 1}`,
+    });
   const text = JSON.stringify({ version: 1, units: 'mm', shapes });
   const reads: number[] = [];
   for (let r = 0; r < (quick ? 5 : 30); r++) {
@@ -85,12 +105,17 @@ for (const v of verdicts) console.log(v);
     reads.push(performance.now() - t0);
   }
   reads.sort((a, b) => a - b);
-  console.log(`read and check a 1600-edge sketch file: min ${reads[0].toFixed(1)} ms, median ${reads[reads.length >> 1].toFixed(1)} ms`);
+  console.log(
+    `read and check a 1600-edge sketch file: min ${reads[0].toFixed(1)} ms, median ${reads[reads.length >> 1].toFixed(1)} ms`,
+  );
 
   const N = 2000;
   const solver = new DenseLuSolver(N);
   let s = 12345;
-  const rnd = () => { s = (Math.imul(s, 1103515245) + 12345) >>> 0; return s / 4294967296 - 0.5; };
+  const rnd = () => {
+    s = (Math.imul(s, 1103515245) + 12345) >>> 0;
+    return s / 4294967296 - 0.5;
+  };
   const a = new Float64Array(N * N).map(() => rnd() / N);
   for (let i = 0; i < N; i++) a[i * N + i] += 1; // diagonally dominant, like I - (1 - e) F
   const x = new Float64Array(N).fill(1);
@@ -104,5 +129,7 @@ for (const v of verdicts) console.log(v);
   }
   solves.sort((p, q) => p - q);
   const med = solves[solves.length >> 1];
-  console.log(`dense solve, ${N} surfaces (${solver.accelerated ? 'SIMD kernel' : 'plain JavaScript'}): min ${solves[0].toFixed(0)} ms, median ${med.toFixed(0)} ms (target well under 1000 ms): ${med < 1000 ? 'met' : 'NOT met'}`);
+  console.log(
+    `dense solve, ${N} surfaces (${solver.accelerated ? 'SIMD kernel' : 'plain JavaScript'}): min ${solves[0].toFixed(0)} ms, median ${med.toFixed(0)} ms (target well under 1000 ms): ${med < 1000 ? 'met' : 'NOT met'}`,
+  );
 }

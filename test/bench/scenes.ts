@@ -18,10 +18,16 @@ export function mulberry32(seed: number): () => number {
  */
 export function tubeScene(seed: number, tubes: number, sides: number, wallEdges: number): SceneInput {
   const rand = mulberry32(seed);
-  const W = 10, H = 4;
+  const W = 10,
+    H = 4;
   const per = Math.max(1, Math.round(wallEdges / 4));
   const wall: number[] = [];
-  const corners = [[0, 0], [W, 0], [W, H], [0, H]];
+  const corners = [
+    [0, 0],
+    [W, 0],
+    [W, H],
+    [0, H],
+  ];
   for (let c = 0; c < 4; c++) {
     const [x0, y0] = corners[c];
     const [x1, y1] = corners[(c + 1) % 4];

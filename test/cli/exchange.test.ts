@@ -33,7 +33,10 @@ function json(files: Record<string, unknown>, ...args: string[]) {
 
 type Pt = [number, number];
 const regular = (sides: number, radius: number, phase = 0): Pt[] =>
-  Array.from({ length: sides }, (_, k): Pt => [radius * Math.cos(phase + (2 * Math.PI * k) / sides), radius * Math.sin(phase + (2 * Math.PI * k) / sides)]);
+  Array.from({ length: sides }, (_, k): Pt => [
+    radius * Math.cos(phase + (2 * Math.PI * k) / sides),
+    radius * Math.sin(phase + (2 * Math.PI * k) / sides),
+  ]);
 
 function close(actual: number, expected: number, rel = REL) {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
@@ -75,8 +78,22 @@ describe('exchange FILE --json: physics through the whole chain', () => {
     const file = {
       version: 1,
       units: 'm',
-      shapes: [{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 4]], surface: ['a', 'b', 'r'] }],
-      surfaces: { a: { emissivity: 0.7, temperature: 1000 }, b: { emissivity: 0.4, temperature: 500 }, r: { adiabatic: true } },
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [3, 0],
+            [3, 4],
+          ],
+          surface: ['a', 'b', 'r'],
+        },
+      ],
+      surfaces: {
+        a: { emissivity: 0.7, temperature: 1000 },
+        b: { emissivity: 0.4, temperature: 500 },
+        r: { adiabatic: true },
+      },
     };
     const f = (i: number, j: number) => (L[i] + L[j] - L[3 - i - j]) / (2 * L[i]);
     const E1 = SIGMA * 1000 ** 4;
@@ -105,8 +122,23 @@ describe('exchange FILE --json: physics through the whole chain', () => {
     const file = {
       version: 1,
       units: 'm',
-      shapes: [{ kind: 'enclosure', points: [[0, 0], [W, 0], [W, H], [0, H]], surface: ['bottom', 'ends', 'top', 'ends'] }],
-      surfaces: { bottom: { emissivity: e1, temperature: T1 }, top: { emissivity: e2, temperature: T2 }, ends: { adiabatic: true } },
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [W, 0],
+            [W, H],
+            [0, H],
+          ],
+          surface: ['bottom', 'ends', 'top', 'ends'],
+        },
+      ],
+      surfaces: {
+        bottom: { emissivity: e1, temperature: T1 },
+        top: { emissivity: e2, temperature: T2 },
+        ends: { adiabatic: true },
+      },
     };
     const j = json({ 'w.json': file }, 'w.json');
     const [bottom] = j.surfaces;
@@ -132,7 +164,18 @@ describe('exchange FILE --json: physics through the whole chain', () => {
     const file = {
       version: 1,
       units: 'cm',
-      shapes: [{ kind: 'solid', points: [[0, 0], [10, 0], [10, 5], [0, 5]], surface: 'bar' }],
+      shapes: [
+        {
+          kind: 'solid',
+          points: [
+            [0, 0],
+            [10, 0],
+            [10, 5],
+            [0, 5],
+          ],
+          surface: 'bar',
+        },
+      ],
       surfaces: { bar: { emissivity: 0.55, temperature: 700 } },
       settings: { surroundingsTemperature: 295 },
     };
@@ -149,8 +192,24 @@ describe('exchange FILE --json: physics through the whole chain', () => {
     const file = {
       version: 1,
       units: 'm',
-      shapes: [{ kind: 'enclosure', points: [[0, 0], [1, 0], [1, 0.6], [0.5, 1.2], [0, 0.6]], surface: ['floor', 'wall', 'mouth', 'wall', 'wall'] }],
-      surfaces: { floor: { emissivity: 1, temperature: 1000 }, wall: { emissivity: 1, temperature: 1000 }, mouth: { opening: true } },
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [1, 0],
+            [1, 0.6],
+            [0.5, 1.2],
+            [0, 0.6],
+          ],
+          surface: ['floor', 'wall', 'mouth', 'wall', 'wall'],
+        },
+      ],
+      surfaces: {
+        floor: { emissivity: 1, temperature: 1000 },
+        wall: { emissivity: 1, temperature: 1000 },
+        mouth: { opening: true },
+      },
       settings: { surroundingsTemperature: 300 },
     };
     const j = json({ 'c.json': file }, 'c.json');
@@ -171,8 +230,22 @@ describe('exchange FILE --csv: every cell against closed forms, not against anot
     const file = {
       version: 1,
       units: 'm',
-      shapes: [{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 4]], surface: ['a', 'b', 'r'] }],
-      surfaces: { a: { emissivity: 0.7, temperature: 1000 }, b: { emissivity: 0.4, temperature: 500 }, r: { adiabatic: true } },
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [3, 0],
+            [3, 4],
+          ],
+          surface: ['a', 'b', 'r'],
+        },
+      ],
+      surfaces: {
+        a: { emissivity: 0.7, temperature: 1000 },
+        b: { emissivity: 0.4, temperature: 500 },
+        r: { adiabatic: true },
+      },
     };
     const f = (i: number, j: number) => (L[i] + L[j] - L[3 - i - j]) / (2 * L[i]);
     const E1 = SIGMA * 1000 ** 4;
@@ -186,7 +259,17 @@ describe('exchange FILE --csv: every cell against closed forms, not against anot
     const r = run({ 't.json': file }, 't.json', '--csv', '--depth', '2');
     expect(r.code).toBe(0);
     const rows = rowsOf(r.out);
-    expect(rows[0]).toEqual(['surface', 'length (m)', 'emissivity', 'condition', 'temperature (K)', 'net heat (W/m)', 'net flux (W/m^2)', 'radiosity (W/m^2)', 'net heat total (W) over 2 m']);
+    expect(rows[0]).toEqual([
+      'surface',
+      'length (m)',
+      'emissivity',
+      'condition',
+      'temperature (K)',
+      'net heat (W/m)',
+      'net flux (W/m^2)',
+      'radiosity (W/m^2)',
+      'net heat total (W) over 2 m',
+    ]);
     expect(rows.slice(1).map((row) => row.slice(0, 4))).toEqual([
       ['a', '3', '0.7', 'temperature'],
       ['b', '4', '0.4', 'temperature'],
@@ -210,7 +293,18 @@ describe('exchange FILE --csv: every cell against closed forms, not against anot
     const file = {
       version: 1,
       units: 'cm',
-      shapes: [{ kind: 'solid', points: [[0, 0], [10, 0], [10, 5], [0, 5]], surface: 'bar' }],
+      shapes: [
+        {
+          kind: 'solid',
+          points: [
+            [0, 0],
+            [10, 0],
+            [10, 5],
+            [0, 5],
+          ],
+          surface: 'bar',
+        },
+      ],
       surfaces: { bar: { emissivity: 0.55, temperature: 700 } },
       settings: { surroundingsTemperature: 295 },
     };
@@ -219,7 +313,16 @@ describe('exchange FILE --csv: every cell against closed forms, not against anot
     const r = run({ 'bar.json': file }, 'bar.json', '--csv');
     expect(r.code).toBe(0);
     const rows = rowsOf(r.out);
-    expect(rows[0]).toEqual(['surface', 'length (cm)', 'emissivity', 'condition', 'temperature (K)', 'net heat (W/m)', 'net flux (W/m^2)', 'radiosity (W/m^2)']);
+    expect(rows[0]).toEqual([
+      'surface',
+      'length (cm)',
+      'emissivity',
+      'condition',
+      'temperature (K)',
+      'net heat (W/m)',
+      'net flux (W/m^2)',
+      'radiosity (W/m^2)',
+    ]);
     expect(rows[1].slice(0, 5)).toEqual(['bar', '30', '0.55', 'temperature', '700']);
     close(Number(rows[1][5]), q);
     close(Number(rows[1][6]), q / A);
@@ -240,10 +343,32 @@ describe('exchange FILE: options and formats', () => {
     version: 1,
     units: 'm',
     shapes: [
-      { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] },
-      { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: 'block' },
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [4, 0],
+          [4, 2],
+          [0, 2],
+        ],
+        surface: ['floor', 'right', 'roof', 'left'],
+      },
+      {
+        kind: 'solid',
+        points: [
+          [1.75, 0.75],
+          [2.25, 0.75],
+          [2.25, 1.25],
+          [1.75, 1.25],
+        ],
+        surface: 'block',
+      },
     ],
-    surfaces: { floor: { emissivity: 0.9, temperature: 1100 }, roof: { emissivity: 0.3, temperature: 600 }, block: { heatFlux: -5000 } },
+    surfaces: {
+      floor: { emissivity: 0.9, temperature: 1100 },
+      roof: { emissivity: 0.3, temperature: 600 },
+      block: { heatFlux: -5000 },
+    },
   };
   const inMm = {
     ...duct,
@@ -254,7 +379,15 @@ describe('exchange FILE: options and formats', () => {
   it('--json has exactly the documented keys, in surface order', () => {
     const j = json({ 'd.json': duct }, 'd.json');
     expect(Object.keys(j)).toEqual(['surfaces', 'exchange', 'energyBalance']);
-    expect(Object.keys(j.surfaces[0])).toEqual(['name', 'length', 'emissivity', 'temperature', 'netHeat', 'netFlux', 'radiosity']);
+    expect(Object.keys(j.surfaces[0])).toEqual([
+      'name',
+      'length',
+      'emissivity',
+      'temperature',
+      'netHeat',
+      'netFlux',
+      'radiosity',
+    ]);
     expect(j.surfaces.map((s: { name: string }) => s.name)).toEqual(['floor', 'right', 'roof', 'left', 'block']);
     expect(j.exchange).toHaveLength(5);
     expect(j.exchange[0]).toHaveLength(5);
@@ -266,7 +399,10 @@ describe('exchange FILE: options and formats', () => {
     const a = json({ 'd.json': duct }, 'd.json');
     const b = json({ 'd.json': inMm }, 'd.json');
     for (let i = 0; i < 5; i++) {
-      close(b.surfaces[i].netHeat === 0 ? 1 : b.surfaces[i].netHeat, a.surfaces[i].netHeat === 0 ? 1 : a.surfaces[i].netHeat);
+      close(
+        b.surfaces[i].netHeat === 0 ? 1 : b.surfaces[i].netHeat,
+        a.surfaces[i].netHeat === 0 ? 1 : a.surfaces[i].netHeat,
+      );
       close(b.surfaces[i].temperature, a.surfaces[i].temperature);
       close(b.surfaces[i].length, 1000 * a.surfaces[i].length);
     }
@@ -279,7 +415,9 @@ describe('exchange FILE: options and formats', () => {
     for (const s of j.surfaces) expect(s.netHeatTotal).toBe(s.netHeat * 2.5);
     const k = json({ 'd.json': withFileDepth }, 'd.json');
     expect(k.depth).toBe(10);
-    expect(json({ 'd.json': duct }, 'd.json', '--depth=4').surfaces[0].netHeatTotal).toBe(json({ 'd.json': duct }, 'd.json').surfaces[0].netHeat * 4);
+    expect(json({ 'd.json': duct }, 'd.json', '--depth=4').surfaces[0].netHeatTotal).toBe(
+      json({ 'd.json': duct }, 'd.json').surfaces[0].netHeat * 4,
+    );
   });
 
   it('--csv: one row per surface with units in the header', () => {
@@ -298,7 +436,14 @@ describe('exchange FILE: options and formats', () => {
       'net heat total (W) over 3 m',
     ]);
     expect(rows.map((row) => row[0])).toEqual(['surface', 'floor', 'right', 'roof', 'left', 'block']);
-    expect(rows.map((row) => row[3])).toEqual(['condition', 'temperature', 'adiabatic', 'temperature', 'adiabatic', 'heat flux']);
+    expect(rows.map((row) => row[3])).toEqual([
+      'condition',
+      'temperature',
+      'adiabatic',
+      'temperature',
+      'adiabatic',
+      'heat flux',
+    ]);
   });
 
   it('the default table names units, sign convention and the safety caution', () => {
@@ -329,26 +474,68 @@ describe('exchange FILE: errors are short, on stderr, without a stack trace', ()
   const box = (surfaces: object, settings?: object) => ({
     version: 1,
     units: 'm',
-    shapes: [{ kind: 'enclosure', points: [[0, 0], [1, 0], [1, 1], [0, 1]], surface: ['a', 'b', 'c', 'd'] }],
+    shapes: [
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [1, 0],
+          [1, 1],
+          [0, 1],
+        ],
+        surface: ['a', 'b', 'c', 'd'],
+      },
+    ],
     surfaces,
     ...(settings ? { settings } : {}),
   });
 
   it('no surface with a temperature (every surface defaults to adiabatic)', () => {
-    expectShortError(run({ 'x.json': box({}) }, 'x.json'), 1, /^exchange: x\.json: no unique answer: no surface has a temperature/);
+    expectShortError(
+      run({ 'x.json': box({}) }, 'x.json'),
+      1,
+      /^exchange: x\.json: no unique answer: no surface has a temperature/,
+    );
   });
 
   it('an open sketch without a surroundings temperature', () => {
-    const file = { version: 1, units: 'm', shapes: [{ kind: 'solid', points: [[0, 0], [1, 0], [1, 1]], surface: 'p' }], surfaces: { p: { temperature: 500 } } };
-    expectShortError(run({ 'o.json': file }, 'o.json'), 1, /surface 'p' sees the surroundings .* but no surroundings temperature is set/);
+    const file = {
+      version: 1,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'solid',
+          points: [
+            [0, 0],
+            [1, 0],
+            [1, 1],
+          ],
+          surface: 'p',
+        },
+      ],
+      surfaces: { p: { temperature: 500 } },
+    };
+    expectShortError(
+      run({ 'o.json': file }, 'o.json'),
+      1,
+      /surface 'p' sees the surroundings .* but no surroundings temperature is set/,
+    );
   });
 
   it('an opening without a surroundings temperature', () => {
-    expectShortError(run({ 'x.json': box({ a: { temperature: 500 }, c: { opening: true } }) }, 'x.json'), 1, /surface 'c' is an opening, but no surroundings temperature is set/);
+    expectShortError(
+      run({ 'x.json': box({ a: { temperature: 500 }, c: { opening: true } }) }, 'x.json'),
+      1,
+      /surface 'c' is an opening, but no surroundings temperature is set/,
+    );
   });
 
   it('an impossible heat flux', () => {
-    expectShortError(run({ 'x.json': box({ a: { temperature: 300 }, b: { heatFlux: -1e7 } }) }, 'x.json'), 1, /surface 'b': no physical answer/);
+    expectShortError(
+      run({ 'x.json': box({ a: { temperature: 300 }, b: { heatFlux: -1e7 } }) }, 'x.json'),
+      1,
+      /surface 'b': no physical answer/,
+    );
   });
 
   it('values out of range are refused by the file reader', () => {

@@ -9,7 +9,12 @@ const root = fileURLToPath(new URL('../..', import.meta.url));
 const tsx = fileURLToPath(new URL('../../node_modules/tsx/dist/cli.mjs', import.meta.url));
 
 function cli(args: string[], input?: string) {
-  const r = spawnSync(process.execPath, [tsx, 'src/cli/main.ts', ...args], { cwd: root, input, encoding: 'utf8', timeout: 60000 });
+  const r = spawnSync(process.execPath, [tsx, 'src/cli/main.ts', ...args], {
+    cwd: root,
+    input,
+    encoding: 'utf8',
+    timeout: 60000,
+  });
   return { code: r.status, out: r.stdout, err: r.stderr };
 }
 
@@ -27,7 +32,21 @@ describe('factors as a process', () => {
   });
 
   it('reads standard input when FILE is -', () => {
-    const text = JSON.stringify({ version: 1, units: 'cm', shapes: [{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 4]], surface: ['a', 'b', 'c'] }] });
+    const text = JSON.stringify({
+      version: 1,
+      units: 'cm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [3, 0],
+            [3, 4],
+          ],
+          surface: ['a', 'b', 'c'],
+        },
+      ],
+    });
     const r = cli(['factors', '-', '--csv'], text);
     expect(r.code).toBe(0);
     // Three-sided enclosure, F_ab = (3 + 4 - 5) / (2 * 3) (Incropera et al., 6th ed., Table 13.1).
@@ -39,7 +58,10 @@ describe('factors as a process', () => {
     expect(r.code).toBe(1);
     expect(r.out).toBe('');
     expect(r.err).toBe("factors: cannot read 'public/examples/no-such-file.json': no such file\n");
-    const bad = cli(['factors', '-'], '{"version": 1, "units": "m", "shapes": [{"kind": "solid", "points": [[0,0],[1,0]], "surface": "plate"}]}');
+    const bad = cli(
+      ['factors', '-'],
+      '{"version": 1, "units": "m", "shapes": [{"kind": "solid", "points": [[0,0],[1,0]], "surface": "plate"}]}',
+    );
     expect(bad.code).toBe(1);
     expect(bad.err).toBe("factors: -: shape 1 (solid 'plate'): has 2 points; a shape needs at least 3\n");
     const dir = cli(['factors', 'public']);

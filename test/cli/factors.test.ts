@@ -5,16 +5,25 @@ import type { CliIO } from '../../src/cli/io';
 
 // The factors command end to end through main() with files in memory.
 
-interface Run { code: number; out: string; err: string }
+interface Run {
+  code: number;
+  out: string;
+  err: string;
+}
 
 function run(args: string[], files: Record<string, string> = {}): Run {
   let out = '';
   let err = '';
   const io: CliIO = {
-    out: (t) => { out += t; },
-    err: (t) => { err += t; },
+    out: (t) => {
+      out += t;
+    },
+    err: (t) => {
+      err += t;
+    },
     readFile: (path) => {
-      if (!(path in files)) throw Object.assign(new Error(`ENOENT: no such file or directory, open '${path}'`), { code: 'ENOENT' });
+      if (!(path in files))
+        throw Object.assign(new Error(`ENOENT: no such file or directory, open '${path}'`), { code: 'ENOENT' });
       return files[path];
     },
   };
@@ -24,13 +33,39 @@ function run(args: string[], files: Record<string, string> = {}): Run {
 const sketch = (shapes: unknown[], extra: object = {}) => JSON.stringify({ version: 1, units: 'm', shapes, ...extra });
 
 /** A 3-4-5 right triangle as an enclosure; surfaces a (3), b (4), c (5). */
-const triangle = sketch([{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 4]], surface: ['a', 'b', 'c'] }]);
+const triangle = sketch([
+  {
+    kind: 'enclosure',
+    points: [
+      [0, 0],
+      [3, 0],
+      [3, 4],
+    ],
+    surface: ['a', 'b', 'c'],
+  },
+]);
 /** A unit square duct, walls named anticlockwise from the floor. */
-const square = sketch([{ kind: 'enclosure', points: [[0, 0], [1, 0], [1, 1], [0, 1]], surface: ['floor', 'right', 'roof', 'left'] }]);
+const square = sketch([
+  {
+    kind: 'enclosure',
+    points: [
+      [0, 0],
+      [1, 0],
+      [1, 1],
+      [0, 1],
+    ],
+    surface: ['floor', 'right', 'roof', 'left'],
+  },
+]);
 
 function json(r: Run) {
   expect(r.code).toBe(0);
-  return JSON.parse(r.out) as { surfaces: { name: string; length: number }[]; viewFactors: number[][]; rowSumResidual: number[]; reciprocityResidual: number };
+  return JSON.parse(r.out) as {
+    surfaces: { name: string; length: number }[];
+    viewFactors: number[][];
+    rowSumResidual: number[];
+    reciprocityResidual: number;
+  };
 }
 
 /** No stack trace, no internals, a few short lines. */
@@ -49,7 +84,11 @@ describe('factors --json', () => {
     // Fundamentals of Heat and Mass Transfer, 6th ed., Table 13.1 (three-sided enclosure).
     const r = json(run(['factors', 'tri.json', '--json'], { 'tri.json': triangle }));
     expect(Object.keys(r)).toEqual(['surfaces', 'viewFactors', 'rowSumResidual', 'reciprocityResidual']);
-    expect(r.surfaces).toEqual([{ name: 'a', length: 3 }, { name: 'b', length: 4 }, { name: 'c', length: 5 }]);
+    expect(r.surfaces).toEqual([
+      { name: 'a', length: 3 },
+      { name: 'b', length: 4 },
+      { name: 'c', length: 5 },
+    ]);
     const L = [3, 4, 5];
     for (let i = 0; i < 3; i++) {
       for (let j = 0; j < 3; j++) {
@@ -70,7 +109,8 @@ describe('factors --json', () => {
     // F = [sqrt((Wi + Wj)^2 + 4) - sqrt((Wj - Wi)^2 + 4)] / (2 Wi); the same values
     // by Hottel's crossed strings (Modest, Radiative Heat Transfer, 3rd ed., ch. 4).
     const r = json(run(['factors', 'sq.json', '--json'], { 'sq.json': square }));
-    const adjacent = 1 - Math.SQRT2 / 2, opposite = Math.SQRT2 - 1;
+    const adjacent = 1 - Math.SQRT2 / 2,
+      opposite = Math.SQRT2 - 1;
     const expected = [
       [0, adjacent, opposite, adjacent],
       [adjacent, 0, adjacent, opposite],
@@ -86,8 +126,26 @@ describe('factors --json', () => {
     // plates with midlines connected by a perpendicular, Wi = Wj = 1):
     // F = [sqrt(8) - sqrt(4)] / 2 = sqrt(2) - 1; per whole square (perimeter 4): (sqrt(2) - 1) / 4.
     const open = sketch([
-      { kind: 'solid', points: [[0, 0], [1, 0], [1, 1], [0, 1]], surface: 'left block' },
-      { kind: 'solid', points: [[2, 0], [3, 0], [3, 1], [2, 1]], surface: 'right block' },
+      {
+        kind: 'solid',
+        points: [
+          [0, 0],
+          [1, 0],
+          [1, 1],
+          [0, 1],
+        ],
+        surface: 'left block',
+      },
+      {
+        kind: 'solid',
+        points: [
+          [2, 0],
+          [3, 0],
+          [3, 1],
+          [2, 1],
+        ],
+        surface: 'right block',
+      },
     ]);
     const r = json(run(['factors', 'o.json', '--json'], { 'o.json': open }));
     const F = (Math.SQRT2 - 1) / 4;
@@ -100,10 +158,23 @@ describe('factors --json', () => {
   });
 
   it('prints repairs as warnings on stderr and keeps stdout one JSON object', () => {
-    const repeated = sketch([{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 0], [3, 4]], surface: ['a', 'gone', 'b', 'c'] }]);
+    const repeated = sketch([
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [3, 0],
+          [3, 0],
+          [3, 4],
+        ],
+        surface: ['a', 'gone', 'b', 'c'],
+      },
+    ]);
     const r = run(['factors', 'rep.json', '--json'], { 'rep.json': repeated });
     expect(json(r).surfaces.map((s) => s.name)).toEqual(['a', 'b', 'c']);
-    expect(r.err).toBe("factors: rep.json: warning: shape 1 (enclosure 'a'/'gone'/'b'/…): removed point 2 (same as point 3), which made zero-length edges\n");
+    expect(r.err).toBe(
+      "factors: rep.json: warning: shape 1 (enclosure 'a'/'gone'/'b'/…): removed point 2 (same as point 3), which made zero-length edges\n",
+    );
   });
 });
 
@@ -119,17 +190,34 @@ describe('factors --csv and the table', () => {
     const L = [3, 4, 5];
     rows.slice(1).forEach((row, i) => {
       expect(row).toHaveLength(4);
-      row.slice(1).map(Number).forEach((F, j) => {
-        const expected = i === j ? 0 : (L[i] + L[j] - L[3 - i - j]) / (2 * L[i]);
-        expect(Math.abs(F - expected)).toBeLessThanOrEqual(1e-9);
-      });
+      row
+        .slice(1)
+        .map(Number)
+        .forEach((F, j) => {
+          const expected = i === j ? 0 : (L[i] + L[j] - L[3 - i - j]) / (2 * L[i]);
+          expect(Math.abs(F - expected)).toBeLessThanOrEqual(1e-9);
+        });
     });
   });
 
   it('CSV neutralises formula-like surface names', () => {
     const names = ['=HYPERLINK("x")', '+wall', '-roof', '@floor'];
-    const evil = sketch([{ kind: 'enclosure', points: [[0, 0], [1, 0], [1, 1], [0, 1]], surface: names }]);
-    const rows = Papa.parse<string[]>(run(['factors', 'e.json', '--csv'], { 'e.json': evil }).out.trimEnd(), { newline: '\r\n', delimiter: ',' }).data;
+    const evil = sketch([
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [1, 0],
+          [1, 1],
+          [0, 1],
+        ],
+        surface: names,
+      },
+    ]);
+    const rows = Papa.parse<string[]>(run(['factors', 'e.json', '--csv'], { 'e.json': evil }).out.trimEnd(), {
+      newline: '\r\n',
+      delimiter: ',',
+    }).data;
     expect(rows[0].slice(1)).toEqual(names.map((n) => `'${n}`));
   });
 
@@ -143,7 +231,17 @@ describe('factors --csv and the table', () => {
   });
 
   it('the table shows control characters in names as ?', () => {
-    const odd = sketch([{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 4]], surface: ['\u001b[31mred', 'b', 'c'] }]);
+    const odd = sketch([
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [3, 0],
+          [3, 4],
+        ],
+        surface: ['\u001b[31mred', 'b', 'c'],
+      },
+    ]);
     const r = run(['factors', 'odd.json'], { 'odd.json': odd });
     expect(r.out).not.toContain('\u001b');
     expect(r.out).toContain('?[31mred');
@@ -162,10 +260,60 @@ describe('factors errors', () => {
       ['', /^factors: bad\.json: the file is empty\n$/],
       ['{"version": 1, "units": "m", "shapes": [', /the file ends too early/],
       ['{"version": 3, "units": "m", "shapes": []}', /version 3 is newer than this program reads/],
-      [sketch([{ kind: 'solid', points: [[0, 0], [2, 0], [0, 2], [2, 2]], surface: 'bow' }]), /shape 1 \(solid 'bow'\): edge 2 crosses edge 4 at \(1, 1\)/],
-      [sketch([{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: 'w' }, { kind: 'solid', points: [[3.5, 0.5], [4.5, 0.5], [4.5, 1], [3.5, 1]], surface: 'block' }]),
-        /shape 2 \(solid 'block'\): edge 1 crosses the enclosure wall \(shape 1, edge 2\) at \(4, 0.5\)/],
-      [sketch([{ kind: 'solid', points: [[0, 0], [1, 'x'], [0, 1]], surface: 'a' }]), /shape 1 \(solid 'a'\): point 2 y must be a finite number \(got "x"\)/],
+      [
+        sketch([
+          {
+            kind: 'solid',
+            points: [
+              [0, 0],
+              [2, 0],
+              [0, 2],
+              [2, 2],
+            ],
+            surface: 'bow',
+          },
+        ]),
+        /shape 1 \(solid 'bow'\): edge 2 crosses edge 4 at \(1, 1\)/,
+      ],
+      [
+        sketch([
+          {
+            kind: 'enclosure',
+            points: [
+              [0, 0],
+              [4, 0],
+              [4, 2],
+              [0, 2],
+            ],
+            surface: 'w',
+          },
+          {
+            kind: 'solid',
+            points: [
+              [3.5, 0.5],
+              [4.5, 0.5],
+              [4.5, 1],
+              [3.5, 1],
+            ],
+            surface: 'block',
+          },
+        ]),
+        /shape 2 \(solid 'block'\): edge 1 crosses the enclosure wall \(shape 1, edge 2\) at \(4, 0.5\)/,
+      ],
+      [
+        sketch([
+          {
+            kind: 'solid',
+            points: [
+              [0, 0],
+              [1, 'x'],
+              [0, 1],
+            ],
+            surface: 'a',
+          },
+        ]),
+        /shape 1 \(solid 'a'\): point 2 y must be a finite number \(got "x"\)/,
+      ],
       [sketch([], { units: 'yards' }), /units must be one of m, cm, mm, in, ft \(got "yards"\)/],
       [sketch([]), /the sketch has no shapes; nothing to compute/],
     ];
@@ -177,14 +325,21 @@ describe('factors errors', () => {
   });
 
   it('many problems stay a few lines', () => {
-    const r = run(['factors', 'bad.json'], { 'bad.json': sketch([{ kind: 'solid', points: Array.from({ length: 50 }, () => [null, null]), surface: 'a' }]) });
+    const r = run(['factors', 'bad.json'], {
+      'bad.json': sketch([{ kind: 'solid', points: Array.from({ length: 50 }, () => [null, null]), surface: 'a' }]),
+    });
     expectShortError(r, 1);
     expect(r.err).toMatch(/…and \d+ more problems\n$/);
   });
 
   it('bad arguments exit 2 with the usage', () => {
     const files = { 'tri.json': triangle };
-    for (const args of [['factors'], ['factors', 'tri.json', '--xml'], ['factors', 'tri.json', '--json', '--csv'], ['factors', 'tri.json', 'tri.json']]) {
+    for (const args of [
+      ['factors'],
+      ['factors', 'tri.json', '--xml'],
+      ['factors', 'tri.json', '--json', '--csv'],
+      ['factors', 'tri.json', 'tri.json'],
+    ]) {
       const r = run(args, files);
       expectShortError(r, 2);
       expect(r.err).toMatch(/usage: npm run cli -- factors FILE \[--json \| --csv\]/);
@@ -203,7 +358,15 @@ describe('factors errors', () => {
   });
 
   it('a fault while reading becomes one line, not a trace', () => {
-    const io: CliIO = { out: () => {}, err: (t) => { err += t; }, readFile: () => { throw new TypeError('disk on fire'); } };
+    const io: CliIO = {
+      out: () => {},
+      err: (t) => {
+        err += t;
+      },
+      readFile: () => {
+        throw new TypeError('disk on fire');
+      },
+    };
     let err = '';
     expect(main(['factors', 'x.json'], io)).toBe(1);
     expect(err).toBe("factors: cannot read 'x.json': disk on fire\n");

@@ -58,7 +58,15 @@ export const sketchArb: fc.Arbitrary<Poly[]> = fc
  * collinear edges, corners in line with corners, bars level with wall corners.
  */
 export const gridSketchArb: fc.Arbitrary<Poly[]> = fc
-  .array(fc.record({ x: fc.integer({ min: 1, max: 8 }), y: fc.integer({ min: 1, max: 4 }), w: fc.integer({ min: 1, max: 2 }), h: fc.integer({ min: 1, max: 2 }) }), { maxLength: 5 })
+  .array(
+    fc.record({
+      x: fc.integer({ min: 1, max: 8 }),
+      y: fc.integer({ min: 1, max: 4 }),
+      w: fc.integer({ min: 1, max: 2 }),
+      h: fc.integer({ min: 1, max: 2 }),
+    }),
+    { maxLength: 5 },
+  )
   .map((bars) => {
     const wall: number[][] = [];
     for (let x = 0; x < 10; x++) wall.push([x, 0]);
@@ -71,7 +79,15 @@ export const gridSketchArb: fc.Arbitrary<Poly[]> = fc
       if (b.x + b.w > 9 || b.y + b.h > 5) continue;
       if (kept.some((k) => b.x <= k.x + k.w && k.x <= b.x + b.w && b.y <= k.y + k.h && k.y <= b.y + b.h)) continue;
       kept.push(b);
-      polys.push({ kind: 'solid', points: [[b.x, b.y], [b.x + b.w, b.y], [b.x + b.w, b.y + b.h], [b.x, b.y + b.h]] });
+      polys.push({
+        kind: 'solid',
+        points: [
+          [b.x, b.y],
+          [b.x + b.w, b.y],
+          [b.x + b.w, b.y + b.h],
+          [b.x, b.y + b.h],
+        ],
+      });
     }
     return polys;
   });

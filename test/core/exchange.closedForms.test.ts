@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { STEFAN_BOLTZMANN as SIGMA, DenseLuSolver, emissivePower, type SurfaceCondition } from '../../src/core/exchange';
+import {
+  STEFAN_BOLTZMANN as SIGMA,
+  DenseLuSolver,
+  emissivePower,
+  type SurfaceCondition,
+} from '../../src/core/exchange';
 import { solved } from './exchange.solved';
 
 // Closed forms of gray-diffuse exchange, each against its published source.
@@ -86,7 +91,13 @@ describe('special two-surface enclosures (Incropera et al., 6th ed., Table 13.3)
   it('small convex object in a large cavity: q = sigma A1 e1 (T1^4 - T2^4)', () => {
     // A2 >> A1; as the open-sketch limit: the body sees only surroundings at T2 (black).
     const [T1, T2, e1] = [900, 290, 0.45];
-    const r = solved({ viewFactors: [0], area: [0.3], emissivity: [e1], conditions: [T(T1)], surroundingsTemperature: T2 });
+    const r = solved({
+      viewFactors: [0],
+      area: [0.3],
+      emissivity: [e1],
+      conditions: [T(T1)],
+      surroundingsTemperature: T2,
+    });
     const q = SIGMA * 0.3 * e1 * (T1 ** 4 - T2 ** 4);
     close(r.netHeat[0], q);
     close(r.surroundingsNetHeat, -q);
@@ -109,7 +120,9 @@ describe('three-surface enclosure with a reradiating surface', () => {
   // and the reradiating surface's radiosity from the balance (J1 - JR) A1F1R = (JR - J2) A2F2R, with E_bR = J_R.
   const R1 = (1 - e1) / (e1 * L[0]);
   const R2 = (1 - e2) / (e2 * L[1]);
-  const q = (emissivePower(T1) - emissivePower(T2)) / (R1 + 1 / (L[0] * f(0, 1) + 1 / (1 / (L[0] * f(0, 2)) + 1 / (L[1] * f(1, 2)))) + R2);
+  const q =
+    (emissivePower(T1) - emissivePower(T2)) /
+    (R1 + 1 / (L[0] * f(0, 1) + 1 / (1 / (L[0] * f(0, 2)) + 1 / (L[1] * f(1, 2)))) + R2);
   const J1 = emissivePower(T1) - q * R1;
   const J2 = emissivePower(T2) + q * R2;
   const JR = (L[0] * f(0, 2) * J1 + L[1] * f(1, 2) * J2) / (L[0] * f(0, 2) + L[1] * f(1, 2));
@@ -159,7 +172,8 @@ describe('black surfaces (emissivity 1)', () => {
   it('black surfaces with a reradiating one: J_R is the view-weighted mean of the others', () => {
     // Incropera et al., 6th ed., sec. 13.3.4 with R1 = R2 = 0 (from memory).
     const r = solved({ viewFactors: F, area: L, emissivity: [1, 1, 1], conditions: [T(1000), T(400), ADIABATIC] });
-    const JR = (L[0] * f(0, 2) * emissivePower(1000) + L[1] * f(1, 2) * emissivePower(400)) / (L[0] * f(0, 2) + L[1] * f(1, 2));
+    const JR =
+      (L[0] * f(0, 2) * emissivePower(1000) + L[1] * f(1, 2) * emissivePower(400)) / (L[0] * f(0, 2) + L[1] * f(1, 2));
     close(r.radiosity[2], JR);
     close(r.temperature[2], (JR / SIGMA) ** 0.25);
   });
@@ -253,13 +267,20 @@ describe('workspace reuse', () => {
   it('a reused solver gives the same answers as a fresh one, call after call', () => {
     // Parallel planes again (Incropera et al., 6th ed., Table 13.3).
     const workspace = new DenseLuSolver(2);
-    for (const [T1, e1] of [[900, 0.3], [1200, 0.8], [500, 1]]) {
+    for (const [T1, e1] of [
+      [900, 0.3],
+      [1200, 0.8],
+      [500, 1],
+    ]) {
       const input = { viewFactors: [0, 1, 1, 0], area: [1, 1], emissivity: [e1, 0.6], conditions: [T(T1), T(300)] };
       const r = solved(input, workspace);
       close(r.netFlux[0], (SIGMA * (T1 ** 4 - 300 ** 4)) / (1 / e1 + 1 / 0.6 - 1));
     }
     // A workspace of another size is left alone.
-    const r3 = solved({ viewFactors: [0], area: [1], emissivity: [0.5], conditions: [T(400)], surroundingsTemperature: 300 }, workspace);
+    const r3 = solved(
+      { viewFactors: [0], area: [1], emissivity: [0.5], conditions: [T(400)], surroundingsTemperature: 300 },
+      workspace,
+    );
     close(r3.netFlux[0], 0.5 * SIGMA * (400 ** 4 - 300 ** 4));
   });
 });

@@ -35,13 +35,23 @@ function refusal(input: ExchangeInput): ExchangeFailure {
 describe('values out of range', () => {
   for (const e of [0, -0.1, 1.0000001, 2, Number.NaN, Number.POSITIVE_INFINITY]) {
     it(`emissivity ${e} is refused`, () => {
-      expect(refusal(plates({ emissivity: [e, 0.5] }))).toEqual({ ok: false, code: 'emissivity-out-of-range', surface: 0, value: e });
+      expect(refusal(plates({ emissivity: [e, 0.5] }))).toEqual({
+        ok: false,
+        code: 'emissivity-out-of-range',
+        surface: 0,
+        value: e,
+      });
     });
   }
 
   for (const t of [0, -20, Number.NaN, Number.POSITIVE_INFINITY]) {
     it(`temperature ${t} K is refused`, () => {
-      expect(refusal(plates({ conditions: [T(900), T(t)] }))).toEqual({ ok: false, code: 'temperature-out-of-range', surface: 1, value: t });
+      expect(refusal(plates({ conditions: [T(900), T(t)] }))).toEqual({
+        ok: false,
+        code: 'temperature-out-of-range',
+        surface: 1,
+        value: t,
+      });
     });
   }
 
@@ -52,11 +62,19 @@ describe('values out of range', () => {
 
   it('an unknown condition is refused', () => {
     const odd = { kind: 'radiating' } as unknown as SurfaceCondition;
-    expect(refusal(plates({ conditions: [T(900), odd] }))).toEqual({ ok: false, code: 'unknown-condition', surface: 1 });
+    expect(refusal(plates({ conditions: [T(900), odd] }))).toEqual({
+      ok: false,
+      code: 'unknown-condition',
+      surface: 1,
+    });
   });
 
   it('a surroundings temperature at or below 0 K is refused', () => {
-    expect(refusal(plates({ surroundingsTemperature: 0 }))).toEqual({ ok: false, code: 'surroundings-temperature-out-of-range', value: 0 });
+    expect(refusal(plates({ surroundingsTemperature: 0 }))).toEqual({
+      ok: false,
+      code: 'surroundings-temperature-out-of-range',
+      value: 0,
+    });
   });
 
   it('a depth that is not a positive number of metres is refused', () => {
@@ -68,8 +86,19 @@ describe('values out of range', () => {
   });
 
   it('view factors outside [0, 1] or rows summing above one are refused', () => {
-    expect(refusal(plates({ viewFactors: [0, 1.2, 1, 0] }))).toEqual({ ok: false, code: 'view-factor-out-of-range', surface: 0, other: 1, value: 1.2 });
-    expect(refusal(plates({ viewFactors: [0, Number.NaN, 1, 0] }))).toMatchObject({ code: 'view-factor-out-of-range', surface: 0, other: 1, value: Number.NaN });
+    expect(refusal(plates({ viewFactors: [0, 1.2, 1, 0] }))).toEqual({
+      ok: false,
+      code: 'view-factor-out-of-range',
+      surface: 0,
+      other: 1,
+      value: 1.2,
+    });
+    expect(refusal(plates({ viewFactors: [0, Number.NaN, 1, 0] }))).toMatchObject({
+      code: 'view-factor-out-of-range',
+      surface: 0,
+      other: 1,
+      value: Number.NaN,
+    });
     const sum = refusal(plates({ viewFactors: [0.3, 0.9, 1, 0] }));
     expect(sum).toMatchObject({ code: 'view-factor-sum-above-one', surface: 0 });
     expect(sum.value).toBeCloseTo(1.2, 14);
@@ -77,14 +106,27 @@ describe('values out of range', () => {
 
   it('arrays of the wrong size are refused', () => {
     expect(refusal(plates({ area: [1] }))).toEqual({ ok: false, code: 'area-size', value: 1, expected: 2 });
-    expect(refusal(plates({ viewFactors: [0, 1, 1] }))).toEqual({ ok: false, code: 'view-factors-size', value: 3, expected: 4 });
-    expect(refusal(plates({ emissivity: [1, 1, 1] }))).toEqual({ ok: false, code: 'emissivity-size', value: 3, expected: 2 });
+    expect(refusal(plates({ viewFactors: [0, 1, 1] }))).toEqual({
+      ok: false,
+      code: 'view-factors-size',
+      value: 3,
+      expected: 4,
+    });
+    expect(refusal(plates({ emissivity: [1, 1, 1] }))).toEqual({
+      ok: false,
+      code: 'emissivity-size',
+      value: 3,
+      expected: 2,
+    });
   });
 });
 
 describe('no unique answer', () => {
   it('a closed enclosure where no surface has a temperature', () => {
-    expect(refusal(plates({ conditions: [{ kind: 'heatFlux', heatFlux: 100 }, ADIABATIC] }))).toEqual({ ok: false, code: 'no-fixed-temperature' });
+    expect(refusal(plates({ conditions: [{ kind: 'heatFlux', heatFlux: 100 }, ADIABATIC] }))).toEqual({
+      ok: false,
+      code: 'no-fixed-temperature',
+    });
   });
 
   it('an open sketch without a surroundings temperature names the surface and its view factor to the surroundings', () => {
@@ -94,7 +136,11 @@ describe('no unique answer', () => {
   });
 
   it('an opening without a surroundings temperature', () => {
-    expect(refusal(plates({ conditions: [T(900), { kind: 'opening' }] }))).toEqual({ ok: false, code: 'opening-without-surroundings', surface: 1 });
+    expect(refusal(plates({ conditions: [T(900), { kind: 'opening' }] }))).toEqual({
+      ok: false,
+      code: 'opening-without-surroundings',
+      surface: 1,
+    });
   });
 
   it('a group of surfaces that sees only itself and has no temperature (singular equations)', () => {
@@ -136,7 +182,13 @@ describe('defaults', () => {
 
   it('an opening is black whatever emissivity it was given', () => {
     // An opening stands for the surroundings seen through it, which absorb all they get: black (common practice).
-    const input = exchangeInputFor({ conditions: [{ kind: 'opening' }], emissivity: [0.3], viewFactors: [0], lengthMetres: [1], surroundingsTemperature: 300 });
+    const input = exchangeInputFor({
+      conditions: [{ kind: 'opening' }],
+      emissivity: [0.3],
+      viewFactors: [0],
+      lengthMetres: [1],
+      surroundingsTemperature: 300,
+    });
     expect(input.emissivity[0]).toBe(1);
     expect(input.conditions[0]).toEqual({ kind: 'opening' });
   });

@@ -33,7 +33,9 @@ function oracle(input: ExchangeInput): { q: number[]; T: number[] } {
   const knownE = input.conditions.map((c) =>
     c.kind === 'temperature' ? SIGMA * c.temperature ** 4 : c.kind === 'opening' ? Es : undefined,
   );
-  const knownQ = input.conditions.map((c) => (c.kind === 'heatFlux' ? c.heatFlux : c.kind === 'adiabatic' ? 0 : undefined));
+  const knownQ = input.conditions.map((c) =>
+    c.kind === 'heatFlux' ? c.heatFlux : c.kind === 'adiabatic' ? 0 : undefined,
+  );
   const A = Matrix.zeros(n, n);
   const b = Matrix.zeros(n, 1);
   for (let i = 0; i < n; i++) {
@@ -270,8 +272,14 @@ describe('properties of every solution (random problems)', () => {
   it('uniform temperature means no net heat (equilibrium; common practice)', () => {
     fc.assert(
       fc.property(problemArb({ allowFlux: false }), fc.double({ min: 200, max: 2500, noNaN: true }), ({ input }, t) => {
-        const conditions = input.conditions.map((c): SurfaceCondition => (c.kind === 'temperature' ? { kind: 'temperature', temperature: t } : c));
-        const r = solved({ ...input, conditions, surroundingsTemperature: input.surroundingsTemperature === undefined ? undefined : t });
+        const conditions = input.conditions.map((c): SurfaceCondition =>
+          c.kind === 'temperature' ? { kind: 'temperature', temperature: t } : c,
+        );
+        const r = solved({
+          ...input,
+          conditions,
+          surroundingsTemperature: input.surroundingsTemperature === undefined ? undefined : t,
+        });
         const E = emissivePower(t);
         for (let i = 0; i < r.surfaceCount; i++) {
           expect(Math.abs(r.netFlux[i])).toBeLessThanOrEqual(REL * E);
@@ -288,9 +296,11 @@ describe('properties of every solution (random problems)', () => {
         // Scale every temperature by s^(1/4)... i.e. E by s, and every flux by s: J and q scale by s.
         const scaleT = s ** 0.25;
         const conditions = input.conditions.map((c): SurfaceCondition =>
-          c.kind === 'temperature' ? { kind: 'temperature', temperature: c.temperature * scaleT }
-          : c.kind === 'heatFlux' ? { kind: 'heatFlux', heatFlux: c.heatFlux * s }
-          : c,
+          c.kind === 'temperature'
+            ? { kind: 'temperature', temperature: c.temperature * scaleT }
+            : c.kind === 'heatFlux'
+              ? { kind: 'heatFlux', heatFlux: c.heatFlux * s }
+              : c,
         );
         const Ts = input.surroundingsTemperature;
         const a = solved(input);
@@ -317,7 +327,7 @@ describe('size', () => {
       const [i, j] = [2 * p, 2 * p + 1];
       F[i * n + j] = 1;
       F[j * n + i] = 1;
-      emissivity[i] = 0.3 + 0.6 * ((p * 7) % 11) / 10;
+      emissivity[i] = 0.3 + (0.6 * ((p * 7) % 11)) / 10;
       emissivity[j] = 0.8;
       conditions.push({ kind: 'temperature', temperature: 600 + p }, { kind: 'temperature', temperature: 300 });
     }

@@ -7,18 +7,46 @@ const TOL = 1e-12;
 
 describe('handbook view factors (unobstructed)', () => {
   it('parallel plates with midlines joined by a perpendicular (Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., Table 13.1, from memory)', () => {
-    for (const [wi, wj, L] of [[1, 1, 1], [2, 1, 0.5], [0.3, 3, 2]]) {
+    for (const [wi, wj, L] of [
+      [1, 1, 1],
+      [2, 1, 0.5],
+      [0.3, 3, 2],
+    ]) {
       // A trapezoid: plate i on the floor, plate j on the roof, centred on one vertical.
-      const r = perEdge([{ kind: 'enclosure', points: [[-wi / 2, 0], [wi / 2, 0], [wj / 2, L], [-wj / 2, L]] }]);
-      const Wi = wi / L, Wj = wj / L;
+      const r = perEdge([
+        {
+          kind: 'enclosure',
+          points: [
+            [-wi / 2, 0],
+            [wi / 2, 0],
+            [wj / 2, L],
+            [-wj / 2, L],
+          ],
+        },
+      ]);
+      const Wi = wi / L,
+        Wj = wj / L;
       const expected = (Math.sqrt((Wi + Wj) ** 2 + 4) - Math.sqrt((Wj - Wi) ** 2 + 4)) / (2 * Wi);
       expect(Math.abs(f(r, 0, 2) - expected)).toBeLessThan(TOL);
     }
   });
 
   it('perpendicular plates with a common edge (Incropera et al., Table 13.1, from memory)', () => {
-    for (const [wi, wj] of [[1, 1], [1, 3], [2.5, 0.4]]) {
-      const r = perEdge([{ kind: 'enclosure', points: [[0, 0], [wi, 0], [0, wj]] }]);
+    for (const [wi, wj] of [
+      [1, 1],
+      [1, 3],
+      [2.5, 0.4],
+    ]) {
+      const r = perEdge([
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [wi, 0],
+            [0, wj],
+          ],
+        },
+      ]);
       // Edge 0 is the plate of width wi on the x axis, edge 2 the plate of width wj on the y axis.
       const expected = (1 + wj / wi - Math.sqrt(1 + (wj / wi) ** 2)) / 2;
       expect(Math.abs(f(r, 0, 2) - expected)).toBeLessThan(TOL);
@@ -40,7 +68,11 @@ describe('handbook view factors (unobstructed)', () => {
   });
 
   it('three-sided enclosure F_ij = (w_i + w_j - w_k) / (2 w_i) (Incropera et al., Table 13.1, from memory)', () => {
-    const pts = [[0, 0], [5, 0], [1.2, 2.9]];
+    const pts = [
+      [0, 0],
+      [5, 0],
+      [1.2, 2.9],
+    ];
     const r = perEdge([{ kind: 'enclosure', points: pts }]);
     const w = [0, 1, 2].map((k) => Math.hypot(pts[(k + 1) % 3][0] - pts[k][0], pts[(k + 1) % 3][1] - pts[k][1]));
     for (let i = 0; i < 3; i++) {
@@ -53,7 +85,17 @@ describe('handbook view factors (unobstructed)', () => {
   });
 
   it('square duct: adjacent walls 1 - sqrt(2)/2, opposite walls sqrt(2) - 1 (crossed strings of Hottel evaluated by hand; Modest, Radiative Heat Transfer, 3rd ed., ch. 4, crossed-strings method, from memory)', () => {
-    const r = perEdge([{ kind: 'enclosure', points: [[0, 0], [3, 0], [3, 3], [0, 3]] }]);
+    const r = perEdge([
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [3, 0],
+          [3, 3],
+          [0, 3],
+        ],
+      },
+    ]);
     expect(Math.abs(f(r, 0, 1) - (1 - Math.SQRT1_2))).toBeLessThan(TOL);
     expect(Math.abs(f(r, 0, 2) - (Math.SQRT2 - 1))).toBeLessThan(TOL);
     expect(f(r, 0, 0)).toBe(0);
@@ -64,8 +106,24 @@ describe('handbook view factors (unobstructed)', () => {
     // Crossed strings sqrt(10) and sqrt(2), uncrossed strings sqrt(2) and sqrt(2), plate width 2.
     const t = 0.01;
     const r = perEdge([
-      { kind: 'solid', points: [[0, -t], [2, -t], [2, 0], [0, 0]] },
-      { kind: 'solid', points: [[1, 1], [3, 1], [3, 1 + t], [1, 1 + t]] },
+      {
+        kind: 'solid',
+        points: [
+          [0, -t],
+          [2, -t],
+          [2, 0],
+          [0, 0],
+        ],
+      },
+      {
+        kind: 'solid',
+        points: [
+          [1, 1],
+          [3, 1],
+          [3, 1 + t],
+          [1, 1 + t],
+        ],
+      },
     ]);
     // Edge 2 is (2,0)-(0,0), the top of bar 1; edge 4 is (1,1)-(3,1), the bottom of bar 2.
     expect(Math.abs(f(r, 2, 4) - (Math.sqrt(10) - Math.SQRT2) / 4)).toBeLessThan(TOL);
@@ -76,8 +134,15 @@ describe('handbook view factors (unobstructed)', () => {
 
   it('convex body inside an enclosure: F_body,wall = 1 and F_wall,body = L_body / L_wall (summation rule and reciprocity; concentric cylinders, Incropera et al., Table 13.2, from memory)', () => {
     const sides = 24;
-    const ring = (r: number, phase: number) => Array.from({ length: sides }, (_, k) => [r * Math.cos(phase + (2 * Math.PI * k) / sides), r * Math.sin(phase + (2 * Math.PI * k) / sides)]);
-    const polys = [{ kind: 'enclosure' as const, points: ring(2, 0.1) }, { kind: 'solid' as const, points: ring(0.7, 0.3) }];
+    const ring = (r: number, phase: number) =>
+      Array.from({ length: sides }, (_, k) => [
+        r * Math.cos(phase + (2 * Math.PI * k) / sides),
+        r * Math.sin(phase + (2 * Math.PI * k) / sides),
+      ]);
+    const polys = [
+      { kind: 'enclosure' as const, points: ring(2, 0.1) },
+      { kind: 'solid' as const, points: ring(0.7, 0.3) },
+    ];
     const edgeSurface = [...Array(sides).fill(0), ...Array(sides).fill(1)];
     const r = withSurfaces(polys, edgeSurface, 2);
     expect(Math.abs(f(r, 1, 0) - 1)).toBeLessThan(TOL);

@@ -7,13 +7,22 @@ export type Poly = { kind: 'enclosure' | 'solid'; points: number[][] };
 export function perEdge(polys: Poly[], independentPairs = false): ViewFactorResult {
   const count = polys.reduce((n, p) => n + p.points.length, 0);
   return computeViewFactors(
-    { polygons: polys.map((p) => ({ kind: p.kind, points: p.points.flat() })), edgeSurface: Array.from({ length: count }, (_, k) => k), surfaceCount: count },
+    {
+      polygons: polys.map((p) => ({ kind: p.kind, points: p.points.flat() })),
+      edgeSurface: Array.from({ length: count }, (_, k) => k),
+      surfaceCount: count,
+    },
     { independentPairs },
   );
 }
 
 /** View factors with the given surface index per edge. */
-export function withSurfaces(polys: Poly[], edgeSurface: number[], surfaceCount: number, independentPairs = false): ViewFactorResult {
+export function withSurfaces(
+  polys: Poly[],
+  edgeSurface: number[],
+  surfaceCount: number,
+  independentPairs = false,
+): ViewFactorResult {
   return computeViewFactors(
     { polygons: polys.map((p) => ({ kind: p.kind, points: p.points.flat() })), edgeSurface, surfaceCount },
     { independentPairs },

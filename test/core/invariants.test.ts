@@ -14,10 +14,12 @@ const transform = (polys: Poly[], m: (x: number, y: number) => [number, number])
 
 /** Edge lengths computed here from the points (edges numbered polygon by polygon), not read from the result. */
 const edgeLengths = (polys: Poly[]): number[] =>
-  polys.flatMap((p) => p.points.map(([x, y], k) => {
-    const [u, v] = p.points[(k + 1) % p.points.length];
-    return Math.hypot(u - x, v - y);
-  }));
+  polys.flatMap((p) =>
+    p.points.map(([x, y], k) => {
+      const [u, v] = p.points[(k + 1) % p.points.length];
+      return Math.hypot(u - x, v - y);
+    }),
+  );
 
 /** 1 - sum_j F[i][j] for each row of a square row-major matrix, summed here. */
 function rowResiduals(F: Float64Array, n: number): number[] {
@@ -52,7 +54,8 @@ describe('view-factor invariants on random sketches', () => {
             expect(fij).toBeGreaterThanOrEqual(-1e-12); // rounding of the distance differences
             expect(fij).toBeLessThanOrEqual(1 + 1e-12);
             // Reciprocity L_I F_IJ = L_J F_JI, with lengths from the points.
-            const a = L[i] * fij, b = L[j] * r.F[j * n + i];
+            const a = L[i] * fij,
+              b = L[j] * r.F[j * n + i];
             expect(Math.abs(a - b)).toBeLessThanOrEqual(TOL * Math.max(Math.abs(a), Math.abs(b), 1e-3));
           }
         }
@@ -71,8 +74,11 @@ describe('view-factor invariants on random sketches', () => {
         fc.double({ min: 0.001, max: 1000, noNaN: true }),
         (polys, dx, dy, turn, scale) => {
           const base = perPolygon(polys);
-          const c = Math.cos(turn), s = Math.sin(turn);
-          const moved = perPolygon(transform(polys, (x, y) => [scale * (c * x - s * y) + dx, scale * (s * x + c * y) + dy]));
+          const c = Math.cos(turn),
+            s = Math.sin(turn);
+          const moved = perPolygon(
+            transform(polys, (x, y) => [scale * (c * x - s * y) + dx, scale * (s * x + c * y) + dy]),
+          );
           const reversed = perPolygon(polys.map((p) => ({ kind: p.kind, points: [...p.points].reverse() })));
           for (let k = 0; k < base.F.length; k++) {
             expect(Math.abs(moved.F[k] - base.F[k])).toBeLessThan(TOL);

@@ -25,16 +25,42 @@ function checkAgainstReference(polys: Poly[]) {
   return r;
 }
 
-const bar = (x0: number, y0: number, x1: number, y1: number) => [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
+const bar = (x0: number, y0: number, x1: number, y1: number) => [
+  [x0, y0],
+  [x1, y0],
+  [x1, y1],
+  [x0, y1],
+];
 
 describe('near-degenerate geometry', () => {
   it('a wall corner bent by 1e-9 (almost collinear edges)', () => {
-    checkAgainstReference([{ kind: 'enclosure', points: [[0, 0], [1, 1e-9], [2, 0], [2, 1], [0, 1]] }]);
+    checkAgainstReference([
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [1, 1e-9],
+          [2, 0],
+          [2, 1],
+          [0, 1],
+        ],
+      },
+    ]);
   });
 
   it('two corners a hair (1e-9) apart: a tiny edge', () => {
     checkAgainstReference([
-      { kind: 'enclosure', points: [[0, 0], [2, 0], [2, 1], [1 + 1e-9, 1], [1, 1], [0, 1]] },
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [2, 0],
+          [2, 1],
+          [1 + 1e-9, 1],
+          [1, 1],
+          [0, 1],
+        ],
+      },
       { kind: 'solid', points: bar(0.8, 0.4, 1.2, 0.6) },
     ]);
   });
@@ -48,7 +74,17 @@ describe('near-degenerate geometry', () => {
 
   it('a corner of a bar lined up with a wall corner to 1e-12', () => {
     checkAgainstReference([
-      { kind: 'enclosure', points: [[0, 0], [3, 0], [3, 1], [2, 1], [2, 2], [0, 2]] },
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [3, 0],
+          [3, 1],
+          [2, 1],
+          [2, 2],
+          [0, 2],
+        ],
+      },
       { kind: 'solid', points: bar(0.5, 1 + 1e-12, 1, 1.5) },
     ]);
   });

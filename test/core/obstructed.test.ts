@@ -21,11 +21,19 @@ function expectMatchesReference(polys: Poly[], rows?: number[]) {
   return r;
 }
 
-const rect = (x0: number, y0: number, x1: number, y1: number) => [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
+const rect = (x0: number, y0: number, x1: number, y1: number) => [
+  [x0, y0],
+  [x1, y0],
+  [x1, y1],
+  [x0, y1],
+];
 
 describe('blocked views against the ray-cast reference', () => {
   it('a block splits the view of a duct into two channels: floor to roof is about 0.45, not the 0.63 of the plain shortest-string rule', () => {
-    const polys: Poly[] = [{ kind: 'enclosure', points: rect(0, 0, 4, 2) }, { kind: 'solid', points: rect(1.75, 0.75, 2.25, 1.25) }];
+    const polys: Poly[] = [
+      { kind: 'enclosure', points: rect(0, 0, 4, 2) },
+      { kind: 'solid', points: rect(1.75, 0.75, 2.25, 1.25) },
+    ];
     const r = expectMatchesReference(polys);
     expect(f(r, 0, 2)).toBeGreaterThan(0.44);
     expect(f(r, 0, 2)).toBeLessThan(0.46);
@@ -38,7 +46,11 @@ describe('blocked views against the ray-cast reference', () => {
   });
 
   it('a row of tubes between a floor and a roof (several channels at once)', () => {
-    const tube = (cx: number, cy: number, rad: number, sides: number) => Array.from({ length: sides }, (_, k) => [cx + rad * Math.cos((2 * Math.PI * k) / sides + 0.2), cy + rad * Math.sin((2 * Math.PI * k) / sides + 0.2)]);
+    const tube = (cx: number, cy: number, rad: number, sides: number) =>
+      Array.from({ length: sides }, (_, k) => [
+        cx + rad * Math.cos((2 * Math.PI * k) / sides + 0.2),
+        cy + rad * Math.sin((2 * Math.PI * k) / sides + 0.2),
+      ]);
     const polys: Poly[] = [
       { kind: 'enclosure', points: rect(0, 0, 6, 2.5) },
       { kind: 'solid', points: tube(1.2, 1.1, 0.35, 8) },
@@ -51,7 +63,19 @@ describe('blocked views against the ray-cast reference', () => {
   it('a non-convex body (a U-shaped channel) blocks and sees into itself', () => {
     const polys: Poly[] = [
       { kind: 'enclosure', points: rect(0, 0, 5, 3) },
-      { kind: 'solid', points: [[1.5, 0.8], [3.5, 0.8], [3.5, 2.2], [3.0, 2.2], [3.0, 1.2], [2.0, 1.2], [2.0, 2.2], [1.5, 2.2]] },
+      {
+        kind: 'solid',
+        points: [
+          [1.5, 0.8],
+          [3.5, 0.8],
+          [3.5, 2.2],
+          [3.0, 2.2],
+          [3.0, 1.2],
+          [2.0, 1.2],
+          [2.0, 2.2],
+          [1.5, 2.2],
+        ],
+      },
     ];
     const r = expectMatchesReference(polys);
     // Inner walls of the U face each other: edge 3 (x = 3, inner side) sees edge 5 (x = 2).
@@ -59,11 +83,25 @@ describe('blocked views against the ray-cast reference', () => {
   });
 
   it('a concave (L-shaped) enclosure blocks itself, and a concave surface sees itself', () => {
-    const L: Poly = { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 1.5], [1.5, 1.5], [1.5, 4], [0, 4]] };
+    const L: Poly = {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 1.5],
+        [1.5, 1.5],
+        [1.5, 4],
+        [0, 4],
+      ],
+    };
     expectMatchesReference([L]);
     // Floor and the far wall of the other leg cannot see each other past the corner at (1.5, 1.5)... partly.
     const all = Array.from({ length: 6 }, (_, k) => k);
-    const oneSurface = withSurfaces([L], all.map(() => 0), 1);
+    const oneSurface = withSurfaces(
+      [L],
+      all.map(() => 0),
+      1,
+    );
     expect(Math.abs(f(oneSurface, 0, 0) - 1)).toBeLessThan(1e-12); // a whole closed enclosure sees only itself (summation rule, Incropera et al., 6th ed., sec. 13.1.2, eq. 13.5, from memory)
     const walls = withSurfaces([L], [0, 0, 1, 1, 1, 1], 2);
     expect(f(walls, 0, 0)).toBeGreaterThan(0); // floor + right wall form a concave corner
@@ -71,8 +109,27 @@ describe('blocked views against the ray-cast reference', () => {
 
   it('touching and collinear cases: a wall split into collinear edges, a body with an edge on the line of a wall', () => {
     const polys: Poly[] = [
-      { kind: 'enclosure', points: [[0, 0], [1, 0], [2, 0], [3, 0], [3, 2], [1.5, 2], [0, 2]] },
-      { kind: 'solid', points: [[1, 0.5], [2, 0.5], [2, 1], [1, 1]] }, // its bottom edge lies on the line through the corners (1,0.5)
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [1, 0],
+          [2, 0],
+          [3, 0],
+          [3, 2],
+          [1.5, 2],
+          [0, 2],
+        ],
+      },
+      {
+        kind: 'solid',
+        points: [
+          [1, 0.5],
+          [2, 0.5],
+          [2, 1],
+          [1, 1],
+        ],
+      }, // its bottom edge lies on the line through the corners (1,0.5)
     ];
     const r = expectMatchesReference(polys);
     expect(f(r, 0, 1)).toBe(0); // collinear edges of one wall see nothing of each other

@@ -5,22 +5,26 @@ import { distanceChange } from '../../src/core/pairGeometry';
 
 describe('pair-integral helpers', () => {
   it('sortPrefix sorts the prefix like Array.prototype.sort and leaves the rest', () => {
-    fc.assert(fc.property(fc.array(fc.double({ noNaN: true }), { maxLength: 80 }), fc.nat(80), (values, cut) => {
-      const n = Math.min(cut, values.length);
-      const a = Float64Array.from(values);
-      sortPrefix(a, n);
-      expect(Array.from(a.subarray(0, n))).toEqual(values.slice(0, n).sort((x, y) => x - y));
-      expect(Array.from(a.subarray(n))).toEqual(values.slice(n));
-    }));
+    fc.assert(
+      fc.property(fc.array(fc.double({ noNaN: true }), { maxLength: 80 }), fc.nat(80), (values, cut) => {
+        const n = Math.min(cut, values.length);
+        const a = Float64Array.from(values);
+        sortPrefix(a, n);
+        expect(Array.from(a.subarray(0, n))).toEqual(values.slice(0, n).sort((x, y) => x - y));
+        expect(Array.from(a.subarray(n))).toEqual(values.slice(n));
+      }),
+    );
   });
 
   it('sortOrderByKey orders indices by their keys', () => {
-    fc.assert(fc.property(fc.array(fc.double({ noNaN: true }), { maxLength: 30 }), (keys) => {
-      const key = Float64Array.from(keys);
-      const order = Int32Array.from(keys.map((_, k) => k));
-      sortOrderByKey(order, key, keys.length);
-      for (let k = 1; k < keys.length; k++) expect(key[order[k - 1]]).toBeLessThanOrEqual(key[order[k]]);
-    }));
+    fc.assert(
+      fc.property(fc.array(fc.double({ noNaN: true }), { maxLength: 30 }), (keys) => {
+        const key = Float64Array.from(keys);
+        const order = Int32Array.from(keys.map((_, k) => k));
+        sortOrderByKey(order, key, keys.length);
+        for (let k = 1; k < keys.length; k++) expect(key[order[k - 1]]).toBeLessThanOrEqual(key[order[k]]);
+      }),
+    );
   });
 
   it('distanceChange equals |v - pb| - |v - pa| and keeps its digits for a tiny step', () => {

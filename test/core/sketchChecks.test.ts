@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { checkSketchGeometry, pointInPolygon, signedDoubleArea, type GeometryFinding } from '../../src/core/sketchChecks';
+import {
+  checkSketchGeometry,
+  pointInPolygon,
+  signedDoubleArea,
+  type GeometryFinding,
+} from '../../src/core/sketchChecks';
 import { orient as orientation } from '../../src/core/orient';
 import type { PolygonInput } from '../../src/core/scene';
 
@@ -9,8 +14,10 @@ import type { PolygonInput } from '../../src/core/scene';
 
 const enclosure = (...pts: number[][]): PolygonInput => ({ kind: 'enclosure', points: pts.flat() });
 const solid = (...pts: number[][]): PolygonInput => ({ kind: 'solid', points: pts.flat() });
-const rect = (kind: 'enclosure' | 'solid', x0: number, y0: number, x1: number, y1: number): PolygonInput =>
-  ({ kind, points: [x0, y0, x1, y0, x1, y1, x0, y1] });
+const rect = (kind: 'enclosure' | 'solid', x0: number, y0: number, x1: number, y1: number): PolygonInput => ({
+  kind,
+  points: [x0, y0, x1, y0, x1, y1, x0, y1],
+});
 const duct = rect('enclosure', 0, 0, 4, 2);
 const rules = (f: GeometryFinding[]) => f.map((x) => x.rule);
 
@@ -50,7 +57,9 @@ describe('checkSketchGeometry', () => {
 
   it('accepts collinear neighbouring edges (a wall split into two surfaces) and a concave enclosure', () => {
     expect(checkSketchGeometry([enclosure([0, 0], [2, 0], [4, 0], [4, 2], [0, 2])])).toEqual([]);
-    expect(checkSketchGeometry([enclosure([0, 0], [3, 0], [3, 3], [2, 3], [2, 1], [1, 1], [1, 3], [0, 3])])).toEqual([]);
+    expect(checkSketchGeometry([enclosure([0, 0], [3, 0], [3, 3], [2, 3], [2, 1], [1, 1], [1, 3], [0, 3])])).toEqual(
+      [],
+    );
   });
 
   it('refuses fewer than 3 points and zero area', () => {
@@ -111,7 +120,10 @@ describe('checkSketchGeometry', () => {
 
   it('finds solids that overlap, touch along an edge, touch at a corner, or nest', () => {
     const a = rect('solid', 1, 0.5, 2, 1.5);
-    expect(rules(checkSketchGeometry([duct, a, rect('solid', 1.5, 1, 2.5, 1.8)]))).toEqual(['edges-cross', 'edges-cross']);
+    expect(rules(checkSketchGeometry([duct, a, rect('solid', 1.5, 1, 2.5, 1.8)]))).toEqual([
+      'edges-cross',
+      'edges-cross',
+    ]);
     expect(checkSketchGeometry([duct, a, rect('solid', 2, 0.5, 3, 1.5)])).toEqual([
       { rule: 'edges-overlap', shape: 1, edge: 1, otherShape: 2, otherEdge: 3, at: [2, 0.5], to: [2, 1.5] },
     ]);
@@ -124,7 +136,9 @@ describe('checkSketchGeometry', () => {
   });
 
   it('refuses more than one enclosure', () => {
-    expect(checkSketchGeometry([duct, rect('enclosure', 10, 0, 11, 1)])).toEqual([{ rule: 'several-enclosures', shapes: [0, 1] }]);
+    expect(checkSketchGeometry([duct, rect('enclosure', 10, 0, 11, 1)])).toEqual([
+      { rule: 'several-enclosures', shapes: [0, 1] },
+    ]);
   });
 
   it('decides touching exactly at tiny separations and large offsets', () => {
@@ -133,7 +147,9 @@ describe('checkSketchGeometry', () => {
     // Coordinates around 1e6 with millimetre features.
     const big = rect('enclosure', 1e6, 1e6, 1e6 + 4, 1e6 + 2);
     expect(checkSketchGeometry([big, rect('solid', 1e6 + 1, 1e6 + 0.001, 1e6 + 1.001, 1e6 + 0.002)])).toEqual([]);
-    expect(rules(checkSketchGeometry([big, rect('solid', 1e6 + 1, 1e6, 1e6 + 1.001, 1e6 + 0.002)]))).toEqual(['edges-overlap']);
+    expect(rules(checkSketchGeometry([big, rect('solid', 1e6 + 1, 1e6, 1e6 + 1.001, 1e6 + 0.002)]))).toEqual([
+      'edges-overlap',
+    ]);
   });
 
   it('caps the number of reported contacts', () => {
@@ -144,12 +160,21 @@ describe('checkSketchGeometry', () => {
   });
 
   it('is invariant under reversing point order (property)', () => {
-    const shape = fc.array(fc.tuple(fc.integer({ min: 0, max: 6 }), fc.integer({ min: 0, max: 6 })), { minLength: 3, maxLength: 7 });
-    fc.assert(fc.property(fc.array(shape, { minLength: 1, maxLength: 3 }), (shapes) => {
-      const forward = shapes.map((pts, i): PolygonInput => ({ kind: i === 0 ? 'enclosure' : 'solid', points: pts.flat() }));
-      const backward = forward.map((p) => ({ kind: p.kind, points: reversePoints(p.points) }));
-      expect(checkSketchGeometry(forward).length === 0).toBe(checkSketchGeometry(backward).length === 0);
-    }), { numRuns: 300 });
+    const shape = fc.array(fc.tuple(fc.integer({ min: 0, max: 6 }), fc.integer({ min: 0, max: 6 })), {
+      minLength: 3,
+      maxLength: 7,
+    });
+    fc.assert(
+      fc.property(fc.array(shape, { minLength: 1, maxLength: 3 }), (shapes) => {
+        const forward = shapes.map((pts, i): PolygonInput => ({
+          kind: i === 0 ? 'enclosure' : 'solid',
+          points: pts.flat(),
+        }));
+        const backward = forward.map((p) => ({ kind: p.kind, points: reversePoints(p.points) }));
+        expect(checkSketchGeometry(forward).length === 0).toBe(checkSketchGeometry(backward).length === 0);
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('finds nothing wrong in a valid 1600-edge sketch (enclosure and 20 tubes; timed by npm run bench)', () => {
@@ -168,6 +193,7 @@ function reversePoints(points: ArrayLike<number>): number[] {
 
 function circle(kind: 'enclosure' | 'solid', cx: number, cy: number, r: number, n: number): PolygonInput {
   const points: number[] = [];
-  for (let k = 0; k < n; k++) points.push(cx + r * Math.cos((2 * Math.PI * k) / n), cy + r * Math.sin((2 * Math.PI * k) / n));
+  for (let k = 0; k < n; k++)
+    points.push(cx + r * Math.cos((2 * Math.PI * k) / n), cy + r * Math.sin((2 * Math.PI * k) / n));
   return { kind, points };
 }

@@ -10,11 +10,17 @@ import { METRES_PER_UNIT, UNITS, unitFactor } from '../../src/document/units';
 
 describe('at most one condition per surface', () => {
   it('reads each condition from the file keys; false flags are no condition', () => {
-    expect(conditionOf({ temperature: 400 })).toEqual({ ok: true, condition: { kind: 'temperature', temperature: 400 } });
+    expect(conditionOf({ temperature: 400 })).toEqual({
+      ok: true,
+      condition: { kind: 'temperature', temperature: 400 },
+    });
     expect(conditionOf({ heatFlux: -5 })).toEqual({ ok: true, condition: { kind: 'heatFlux', heatFlux: -5 } });
     expect(conditionOf({ adiabatic: true })).toEqual({ ok: true, condition: { kind: 'adiabatic' } });
     expect(conditionOf({ opening: true })).toEqual({ ok: true, condition: { kind: 'opening' } });
-    expect(conditionOf({ adiabatic: false, heatFlux: 5 })).toEqual({ ok: true, condition: { kind: 'heatFlux', heatFlux: 5 } });
+    expect(conditionOf({ adiabatic: false, heatFlux: 5 })).toEqual({
+      ok: true,
+      condition: { kind: 'heatFlux', heatFlux: 5 },
+    });
     expect(conditionOf({})).toEqual({ ok: true, condition: undefined });
     expect(conditionOf(undefined)).toEqual({ ok: true, condition: undefined });
   });
@@ -26,7 +32,12 @@ describe('at most one condition per surface', () => {
   });
 
   it('conditionProps writes exactly the key conditionOf reads back', () => {
-    for (const c of [{ kind: 'temperature', temperature: 350 }, { kind: 'heatFlux', heatFlux: 0 }, { kind: 'adiabatic' }, { kind: 'opening' }] as const) {
+    for (const c of [
+      { kind: 'temperature', temperature: 350 },
+      { kind: 'heatFlux', heatFlux: 0 },
+      { kind: 'adiabatic' },
+      { kind: 'opening' },
+    ] as const) {
       expect(givenConditions(conditionProps(c))).toEqual([c]);
     }
   });
@@ -35,13 +46,27 @@ describe('at most one condition per surface', () => {
     const file = {
       version: 1,
       units: 'm',
-      shapes: [{ kind: 'enclosure', points: [[0, 0], [1, 0], [1, 1], [0, 1]], surface: ['floor', 'wall', 'wall', 'wall'] }],
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [1, 0],
+            [1, 1],
+            [0, 1],
+          ],
+          surface: ['floor', 'wall', 'wall', 'wall'],
+        },
+      ],
       surfaces: { floor: { temperature: 300, heatFlux: 100 } },
     };
     const restored = restore(file);
     expect(restored.ok).toBe(false);
     const fileMessages = restored.ok ? [] : restored.errors.map((e) => (typeof e === 'string' ? e : e.message));
-    const solve = solveSketchExchange({ units: 'm', surfaces: file.surfaces }, ['floor', 'wall'], { F: [0, 1, 0.25, 0.75], surfaceLength: [1, 3] });
+    const solve = solveSketchExchange({ units: 'm', surfaces: file.surfaces }, ['floor', 'wall'], {
+      F: [0, 1, 0.25, 0.75],
+      surfaceLength: [1, 3],
+    });
     expect(solve.ok).toBe(false);
     if (!solve.ok) expect(fileMessages).toContain(solve.message);
   });
@@ -50,13 +75,22 @@ describe('at most one condition per surface', () => {
 describe('defaults and units', () => {
   it('a surface with no properties: emissivity 0.9, adiabatic; an opening is black; inherited keys are not properties', () => {
     const prepared = sketchExchangeInput(
-      { units: 'm', surfaces: { floor: { temperature: 1100, emissivity: 0.7 }, gap: { opening: true, emissivity: 0.3 } }, settings: { surroundingsTemperature: 300 } },
+      {
+        units: 'm',
+        surfaces: { floor: { temperature: 1100, emissivity: 0.7 }, gap: { opening: true, emissivity: 0.3 } },
+        settings: { surroundingsTemperature: 300 },
+      },
       ['floor', 'roof', 'gap', 'constructor'],
       { F: new Array(16).fill(0), surfaceLength: [1, 1, 1, 1] },
     );
     if (!prepared.ok) throw new Error(prepared.code);
     expect(Array.from(prepared.input.emissivity)).toEqual([0.7, 0.9, 1, 0.9]);
-    expect(prepared.input.conditions).toEqual([{ kind: 'temperature', temperature: 1100 }, { kind: 'adiabatic' }, { kind: 'opening' }, { kind: 'adiabatic' }]);
+    expect(prepared.input.conditions).toEqual([
+      { kind: 'temperature', temperature: 1100 },
+      { kind: 'adiabatic' },
+      { kind: 'opening' },
+      { kind: 'adiabatic' },
+    ]);
   });
 
   it('lengths in file units become metres (inch and foot exact by definition, 1959)', () => {
@@ -72,7 +106,11 @@ describe('defaults and units', () => {
   it('a strip in open space, drawn in inches: q = e sigma A (T^4 - Ts^4) with A in metres', () => {
     // Small convex object in large surroundings (Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., eq. 1.7).
     const outcome = solveSketchExchange(
-      { units: 'in', surfaces: { bar: { emissivity: 0.55, temperature: 700 } }, settings: { surroundingsTemperature: 295 } },
+      {
+        units: 'in',
+        surfaces: { bar: { emissivity: 0.55, temperature: 700 } },
+        settings: { surroundingsTemperature: 295 },
+      },
       ['bar'],
       { F: [0], surfaceLength: [10] },
     );

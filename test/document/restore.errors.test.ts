@@ -4,9 +4,32 @@ import { restore, MAX_EDGES } from '../../src/document';
 // Every bad input of the file reader gets a specific message naming what and
 // where (shapes, points and edges counted from 1) and the rule broken.
 
-const enclosure = { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] };
-const block = { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: 'block' };
-const minimal = { version: 1, units: 'm', shapes: [enclosure, block], surfaces: { floor: { emissivity: 0.9, temperature: 1100 } } };
+const enclosure = {
+  kind: 'enclosure',
+  points: [
+    [0, 0],
+    [4, 0],
+    [4, 2],
+    [0, 2],
+  ],
+  surface: ['floor', 'right', 'roof', 'left'],
+};
+const block = {
+  kind: 'solid',
+  points: [
+    [1.75, 0.75],
+    [2.25, 0.75],
+    [2.25, 1.25],
+    [1.75, 1.25],
+  ],
+  surface: 'block',
+};
+const minimal = {
+  version: 1,
+  units: 'm',
+  shapes: [enclosure, block],
+  surfaces: { floor: { emissivity: 0.9, temperature: 1100 } },
+};
 
 function errorsOf(input: unknown): string[] {
   const result = restore(input);
@@ -49,7 +72,9 @@ describe('restore refuses what is not a sketch file', () => {
     expect(only('<svg xmlns="http://www.w3.org/2000/svg"></svg>')).toMatch(/looks like an XML, SVG or HTML file/);
     expect(only('%PDF-1.7\n')).toMatch(/looks like a PDF document/);
     expect(only('\u0089PNG\r\n\u001a\n\u0000\u0000')).toMatch(/looks like a binary file/);
-    expect(only('{"name": "pkg", "dependencies": {}}')).toMatch(/^not a Tautline sketch: found fields "name", "dependencies"; .*"version", "units" and "shapes"/);
+    expect(only('{"name": "pkg", "dependencies": {}}')).toMatch(
+      /^not a Tautline sketch: found fields "name", "dependencies"; .*"version", "units" and "shapes"/,
+    );
     expect(only('{"type": "FeatureCollection", "features": []}')).toMatch(/not a Tautline sketch/);
     expect(only('[[0,0],[1,0],[0,1]]')).toMatch(/not a Tautline sketch: the file holds a list/);
     expect(only('42')).toMatch(/holds a single number/);
@@ -60,7 +85,9 @@ describe('restore refuses what is not a sketch file', () => {
 
 describe('restore refuses a bad version, units or structure', () => {
   it('a newer version, a missing or odd version', () => {
-    expect(only({ ...minimal, version: 2 })).toBe('version 2 is newer than this program reads (up to 1); open it with a newer Tautline');
+    expect(only({ ...minimal, version: 2 })).toBe(
+      'version 2 is newer than this program reads (up to 1); open it with a newer Tautline',
+    );
     expect(only({ ...minimal, version: undefined })).toMatch(/^version is missing/);
     expect(only({ ...minimal, version: '1' })).toBe('version must be a whole number from 1 (got "1")');
     expect(only({ ...minimal, version: 0 })).toMatch(/version must be a whole number from 1 \(got 0\)/);
@@ -74,33 +101,68 @@ describe('restore refuses a bad version, units or structure', () => {
   it('missing or mistyped fields, naming the shape', () => {
     expect(only({ version: 1, units: 'm' })).toBe('shapes is missing; it must be a list of shapes');
     expect(only({ ...minimal, shapes: 'none' })).toBe('shapes must be a list of shapes (got "none")');
-    expect(only(withShapes(enclosure, 'block'))).toBe('shape 2 must be an object with kind, points and surface (got "block")');
-    expect(only(withShapes(enclosure, { kind: 'solid', surface: 'block' }))).toBe("shape 2 (solid 'block'): points is missing; it must be a list of points [[x, y], ...]");
-    expect(only(withShapes(enclosure, { ...block, points: 'square' }))).toMatch(/^shape 2 \(solid 'block'\): points must be a list of points/);
-    expect(only(withShapes(enclosure, { ...block, surface: 5 }))).toBe("shape 2 (solid): surface must be a surface name, or a list of names with one per edge (got 5)");
-    expect(only(withShapes(enclosure, { ...block, surface: undefined }))).toMatch(/^shape 2 \(solid\): surface is missing/);
-    expect(only(withShapes({ ...enclosure, surface: ['floor', 'right', '', 'left'] }))).toMatch(/^shape 1 .*: surface name of edge 3 must not be empty/);
-    expect(only(withShapes(enclosure, { ...block, points: [[1.75, 0.75], [2.25], [2.25, 1.25]] }))).toMatch(/^shape 2 \(solid 'block'\): point 2 must be a pair of numbers \[x, y\]/);
+    expect(only(withShapes(enclosure, 'block'))).toBe(
+      'shape 2 must be an object with kind, points and surface (got "block")',
+    );
+    expect(only(withShapes(enclosure, { kind: 'solid', surface: 'block' }))).toBe(
+      "shape 2 (solid 'block'): points is missing; it must be a list of points [[x, y], ...]",
+    );
+    expect(only(withShapes(enclosure, { ...block, points: 'square' }))).toMatch(
+      /^shape 2 \(solid 'block'\): points must be a list of points/,
+    );
+    expect(only(withShapes(enclosure, { ...block, surface: 5 }))).toBe(
+      'shape 2 (solid): surface must be a surface name, or a list of names with one per edge (got 5)',
+    );
+    expect(only(withShapes(enclosure, { ...block, surface: undefined }))).toMatch(
+      /^shape 2 \(solid\): surface is missing/,
+    );
+    expect(only(withShapes({ ...enclosure, surface: ['floor', 'right', '', 'left'] }))).toMatch(
+      /^shape 1 .*: surface name of edge 3 must not be empty/,
+    );
+    expect(only(withShapes(enclosure, { ...block, points: [[1.75, 0.75], [2.25], [2.25, 1.25]] }))).toMatch(
+      /^shape 2 \(solid 'block'\): point 2 must be a pair of numbers \[x, y\]/,
+    );
     expect(only({ ...minimal, surfaces: [] })).toMatch(/^surfaces must be an object of surface names/);
     expect(only({ ...minimal, settings: { depth: -2 } })).toBe('settings: depth must be greater than 0 (got -2)');
   });
   it('surface names that are empty or reserved', () => {
     expect(only({ ...minimal, surfaces: { '': { emissivity: 0.5 } } })).toBe("surfaces: the name '' must not be empty");
-    expect(only('{"version": 1, "units": "m", "shapes": [], "surfaces": {"__proto__": {"emissivity": 0.5}}}')).toMatch(/^surfaces: the name '__proto__' must not be "__proto__"/);
-    expect(only(withShapes({ ...enclosure, surface: '__proto__' }))).toMatch(/^shape 1 \(enclosure '__proto__'\): surface must not be "__proto__" \(a reserved word\)/);
+    expect(only('{"version": 1, "units": "m", "shapes": [], "surfaces": {"__proto__": {"emissivity": 0.5}}}')).toMatch(
+      /^surfaces: the name '__proto__' must not be "__proto__"/,
+    );
+    expect(only(withShapes({ ...enclosure, surface: '__proto__' }))).toMatch(
+      /^shape 1 \(enclosure '__proto__'\): surface must not be "__proto__" \(a reserved word\)/,
+    );
   });
   it('an unknown kind', () => {
-    expect(only(withShapes(enclosure, { ...block, kind: 'tube' }))).toBe(`shape 2 ('block'): kind must be "enclosure" or "solid" (got "tube")`);
+    expect(only(withShapes(enclosure, { ...block, kind: 'tube' }))).toBe(
+      `shape 2 ('block'): kind must be "enclosure" or "solid" (got "tube")`,
+    );
   });
   it('one name per edge: the list must match the edges', () => {
     expect(only(withShapes({ ...enclosure, surface: ['floor', 'right', 'roof'] }))).toBe(
-      "shape 1 (enclosure 'floor'/'right'/'roof'): surface lists 3 names for 4 edges; give one name per edge, or a single name for all");
+      "shape 1 (enclosure 'floor'/'right'/'roof'): surface lists 3 names for 4 edges; give one name per edge, or a single name for all",
+    );
   });
 });
 
 describe('restore refuses bad numbers', () => {
   it('coordinates that are not finite numbers: strings, null, NaN, Infinity', () => {
-    const errors = errorsOf(withShapes(enclosure, solid([[1, '2'], [null, 1], [NaN, 1.5], [1, Infinity], [1, -Infinity]], 'block')));
+    const errors = errorsOf(
+      withShapes(
+        enclosure,
+        solid(
+          [
+            [1, '2'],
+            [null, 1],
+            [NaN, 1.5],
+            [1, Infinity],
+            [1, -Infinity],
+          ],
+          'block',
+        ),
+      ),
+    );
     expect(errors).toEqual([
       `shape 2 (solid 'block'): point 1 y must be a finite number (got "2")`,
       "shape 2 (solid 'block'): point 2 x must be a finite number (got null)",
@@ -114,92 +176,382 @@ describe('restore refuses bad numbers', () => {
     expect(many[4]).toBe('…and 5 more problems');
   });
   it('coordinates so large that lengths overflow', () => {
-    expect(only(withShapes(solid([[0, 0], [1e200, 0], [0, 1]])))).toBe("shape 1 (solid 'a'): point 2 (1e+200, 0) is beyond ±1e+100; lengths would overflow");
-    expect(only(withShapes(solid([[-1.7e308, 0], [1.7e308, 0], [0, 1]])))).toMatch(/point 1 .* lengths would overflow/);
+    expect(
+      only(
+        withShapes(
+          solid([
+            [0, 0],
+            [1e200, 0],
+            [0, 1],
+          ]),
+        ),
+      ),
+    ).toBe("shape 1 (solid 'a'): point 2 (1e+200, 0) is beyond ±1e+100; lengths would overflow");
+    expect(
+      only(
+        withShapes(
+          solid([
+            [-1.7e308, 0],
+            [1.7e308, 0],
+            [0, 1],
+          ]),
+        ),
+      ),
+    ).toMatch(/point 1 .* lengths would overflow/);
   });
   it('sketches so tiny that everything is below rounding', () => {
-    expect(only(withShapes(solid([[0, 0], [1e-200, 0], [0, 1e-200]])))).toBe(
-      "shape 1 (solid 'a'): edge 1 is 1e-200 m long, shorter than 1e-100: the sketch is too small to compute (below rounding)");
+    expect(
+      only(
+        withShapes(
+          solid([
+            [0, 0],
+            [1e-200, 0],
+            [0, 1e-200],
+          ]),
+        ),
+      ),
+    ).toBe(
+      "shape 1 (solid 'a'): edge 1 is 1e-200 m long, shorter than 1e-100: the sketch is too small to compute (below rounding)",
+    );
     // Features far below the rounding of their coordinates.
-    expect(only(withShapes(solid([[1e9, 0], [1e9 + 1e-4, 0], [1e9, 1]])))).toMatch(/^shape 1 \(solid 'a'\): edge 1 is 0\.0001\d* m long, too short for coordinates near 1000000000 \(below rounding/);
+    expect(
+      only(
+        withShapes(
+          solid([
+            [1e9, 0],
+            [1e9 + 1e-4, 0],
+            [1e9, 1],
+          ]),
+        ),
+      ),
+    ).toMatch(
+      /^shape 1 \(solid 'a'\): edge 1 is 0\.0001\d* m long, too short for coordinates near 1000000000 \(below rounding/,
+    );
     // ... and features that vanish entirely in rounding (1 + 1e-17 is 1) become repeated points.
-    expect(only(withShapes(solid([[1, 0], [1 + 1e-17, 0], [1, 1e-17]])))).toBe("shape 1 (solid 'a'): has 2 distinct (of 3 written) points; a shape needs at least 3");
+    expect(
+      only(
+        withShapes(
+          solid([
+            [1, 0],
+            [1 + 1e-17, 0],
+            [1, 1e-17],
+          ]),
+        ),
+      ),
+    ).toBe("shape 1 (solid 'a'): has 2 distinct (of 3 written) points; a shape needs at least 3");
   });
   it('surface properties out of range or not numbers', () => {
-    expect(only(surfaceOf({ emissivity: 0 }))).toBe("surface 'floor': emissivity must be greater than 0 (and at most 1) (got 0)");
+    expect(only(surfaceOf({ emissivity: 0 }))).toBe(
+      "surface 'floor': emissivity must be greater than 0 (and at most 1) (got 0)",
+    );
     expect(only(surfaceOf({ emissivity: 1.2 }))).toBe("surface 'floor': emissivity must be at most 1 (got 1.2)");
     expect(only(surfaceOf({ emissivity: -0.1 }))).toMatch(/emissivity must be greater than 0/);
-    expect(only(surfaceOf({ emissivity: 'high' }))).toBe(`surface 'floor': emissivity must be a number in (0, 1] (got "high")`);
+    expect(only(surfaceOf({ emissivity: 'high' }))).toBe(
+      `surface 'floor': emissivity must be a number in (0, 1] (got "high")`,
+    );
     expect(only(surfaceOf({ emissivity: NaN }))).toMatch(/emissivity must be a number in \(0, 1\] \(got NaN\)/);
     expect(only(surfaceOf({ temperature: 0 }))).toBe("surface 'floor': temperature must be above 0 K (got 0)");
     expect(only(surfaceOf({ temperature: -40 }))).toBe("surface 'floor': temperature must be above 0 K (got -40)");
-    expect(only(surfaceOf({ temperature: '1100 K' }))).toMatch(/temperature must be a number of kelvin \(got "1100 K"\)/);
+    expect(only(surfaceOf({ temperature: '1100 K' }))).toMatch(
+      /temperature must be a number of kelvin \(got "1100 K"\)/,
+    );
     expect(only(surfaceOf({ heatFlux: null }))).toMatch(/heatFlux must be a number of W\/m\^2 \(got null\)/);
     expect(only(surfaceOf({ adiabatic: 'yes' }))).toMatch(/adiabatic must be true or false \(got "yes"\)/);
     expect(only({ ...minimal, surfaces: { floor: 0.9 } })).toMatch(/^surface 'floor' must be an object of properties/);
-    expect(only({ ...minimal, settings: { surroundingsTemperature: -1 } })).toBe('settings: surroundingsTemperature must be above 0 K (got -1)');
+    expect(only({ ...minimal, settings: { surroundingsTemperature: -1 } })).toBe(
+      'settings: surroundingsTemperature must be above 0 K (got -1)',
+    );
   });
   it('more than one condition on a surface', () => {
-    expect(only(surfaceOf({ temperature: 300, heatFlux: 100 }))).toBe("surface 'floor': give one condition, not temperature and heatFlux together");
+    expect(only(surfaceOf({ temperature: 300, heatFlux: 100 }))).toBe(
+      "surface 'floor': give one condition, not temperature and heatFlux together",
+    );
     expect(only(surfaceOf({ adiabatic: true, opening: true }))).toMatch(/not adiabatic and opening together/);
   });
 });
 
 describe('restore refuses impossible geometry', () => {
   it('fewer than 3 points', () => {
-    expect(only(withShapes(enclosure, solid([[1, 1], [2, 1]], 'block')))).toBe("shape 2 (solid 'block'): has 2 points; a shape needs at least 3");
+    expect(
+      only(
+        withShapes(
+          enclosure,
+          solid(
+            [
+              [1, 1],
+              [2, 1],
+            ],
+            'block',
+          ),
+        ),
+      ),
+    ).toBe("shape 2 (solid 'block'): has 2 points; a shape needs at least 3");
     expect(only(withShapes(solid([])))).toBe("shape 1 (solid 'a'): has 0 points; a shape needs at least 3");
-    expect(only(withShapes(solid([[1, 1], [1, 1], [1, 1]])))).toBe("shape 1 (solid 'a'): has 1 distinct (of 3 written) point; a shape needs at least 3");
+    expect(
+      only(
+        withShapes(
+          solid([
+            [1, 1],
+            [1, 1],
+            [1, 1],
+          ]),
+        ),
+      ),
+    ).toBe("shape 1 (solid 'a'): has 1 distinct (of 3 written) point; a shape needs at least 3");
   });
   it('all points on one line (zero area)', () => {
-    expect(only(withShapes(enclosure, solid([[1, 1], [2, 1], [3, 1], [1.5, 1]], 'block')))).toBe("shape 2 (solid 'block'): all its points lie on one straight line (zero area)");
+    expect(
+      only(
+        withShapes(
+          enclosure,
+          solid(
+            [
+              [1, 1],
+              [2, 1],
+              [3, 1],
+              [1.5, 1],
+            ],
+            'block',
+          ),
+        ),
+      ),
+    ).toBe("shape 2 (solid 'block'): all its points lie on one straight line (zero area)");
     // Exactly collinear in decimal, not in a naive floating-point determinant.
-    expect(only(withShapes(solid([[0.1, 0.1], [0.3, 0.3], [0.7, 0.7]])))).toMatch(/zero area/);
+    expect(
+      only(
+        withShapes(
+          solid([
+            [0.1, 0.1],
+            [0.3, 0.3],
+            [0.7, 0.7],
+          ]),
+        ),
+      ),
+    ).toMatch(/zero area/);
   });
   it('a self-crossing polygon, with where it crosses', () => {
-    expect(only(withShapes(enclosure, solid([[1, 0.5], [2, 0.5], [1, 1.5], [2, 1.5]], 'bow')))).toBe(
-      "shape 2 (solid 'bow'): edge 2 crosses edge 4 at (1.5, 1); the outline must not cross or touch itself");
-    expect(only(withShapes(solid([[0, 0], [4, 0], [4, 2], [4, 1], [0, 2]])))).toMatch(/edges 2 and 3 fold back onto each other from \(4, 2\) to \(4, 1\)/);
+    expect(
+      only(
+        withShapes(
+          enclosure,
+          solid(
+            [
+              [1, 0.5],
+              [2, 0.5],
+              [1, 1.5],
+              [2, 1.5],
+            ],
+            'bow',
+          ),
+        ),
+      ),
+    ).toBe("shape 2 (solid 'bow'): edge 2 crosses edge 4 at (1.5, 1); the outline must not cross or touch itself");
+    expect(
+      only(
+        withShapes(
+          solid([
+            [0, 0],
+            [4, 0],
+            [4, 2],
+            [4, 1],
+            [0, 2],
+          ]),
+        ),
+      ),
+    ).toMatch(/edges 2 and 3 fold back onto each other from \(4, 2\) to \(4, 1\)/);
   });
   it('a solid crossing the enclosure wall, or outside it', () => {
-    expect(errorsOf(withShapes(enclosure, solid([[3.5, 0.5], [4.5, 0.5], [4.5, 1], [3.5, 1]], 'block')))).toEqual([
+    expect(
+      errorsOf(
+        withShapes(
+          enclosure,
+          solid(
+            [
+              [3.5, 0.5],
+              [4.5, 0.5],
+              [4.5, 1],
+              [3.5, 1],
+            ],
+            'block',
+          ),
+        ),
+      ),
+    ).toEqual([
       "shape 2 (solid 'block'): edge 1 crosses the enclosure wall (shape 1, edge 2) at (4, 0.5); solids must lie inside the enclosure without touching it",
       "shape 2 (solid 'block'): edge 3 crosses the enclosure wall (shape 1, edge 2) at (4, 1); solids must lie inside the enclosure without touching it",
     ]);
-    expect(only(withShapes(enclosure, solid([[3, 0.5], [4, 0.5], [4, 1], [3, 1]], 'block')))).toBe(
-      "shape 2 (solid 'block'): edge 2 runs along the enclosure wall (shape 1, edge 2) from (4, 0.5) to (4, 1); solids must lie inside the enclosure without touching it");
-    expect(only(withShapes(enclosure, solid([[5, 0.5], [6, 0.5], [6, 1]], 'block')))).toBe(
-      "shape 2 (solid 'block'): lies outside the enclosure (point 1 at (5, 0.5)); solids must be inside it");
-    expect(only(withShapes(solid([[-1, -1], [5, -1], [5, 3], [-1, 3]], 'box'), enclosure))).toMatch(/^shape 1 \(solid 'box'\): lies outside the enclosure/);
+    expect(
+      only(
+        withShapes(
+          enclosure,
+          solid(
+            [
+              [3, 0.5],
+              [4, 0.5],
+              [4, 1],
+              [3, 1],
+            ],
+            'block',
+          ),
+        ),
+      ),
+    ).toBe(
+      "shape 2 (solid 'block'): edge 2 runs along the enclosure wall (shape 1, edge 2) from (4, 0.5) to (4, 1); solids must lie inside the enclosure without touching it",
+    );
+    expect(
+      only(
+        withShapes(
+          enclosure,
+          solid(
+            [
+              [5, 0.5],
+              [6, 0.5],
+              [6, 1],
+            ],
+            'block',
+          ),
+        ),
+      ),
+    ).toBe("shape 2 (solid 'block'): lies outside the enclosure (point 1 at (5, 0.5)); solids must be inside it");
+    expect(
+      only(
+        withShapes(
+          solid(
+            [
+              [-1, -1],
+              [5, -1],
+              [5, 3],
+              [-1, 3],
+            ],
+            'box',
+          ),
+          enclosure,
+        ),
+      ),
+    ).toMatch(/^shape 1 \(solid 'box'\): lies outside the enclosure/);
   });
   it('solids that overlap, touch along an edge, or lie one inside the other', () => {
-    const a = solid([[1, 0.5], [2, 0.5], [2, 1.5], [1, 1.5]], 'a');
-    expect(errorsOf(withShapes(enclosure, a, solid([[1.5, 1], [2.5, 1], [2.5, 1.8], [1.5, 1.8]], 'b')))[0]).toBe(
-      "shape 3 (solid 'b'): edge 1 crosses shape 2 (solid 'a') edge 2 at (2, 1); solids must not overlap or touch");
-    expect(only(withShapes(enclosure, a, solid([[2, 0.5], [3, 0.5], [3, 1.5], [2, 1.5]], 'b')))).toBe(
-      "shape 3 (solid 'b'): edge 4 runs along shape 2 (solid 'a') edge 2 from (2, 0.5) to (2, 1.5); solids must not overlap or touch");
-    expect(only(withShapes(enclosure, a, solid([[2, 1.5], [3, 1.5], [3, 1.8]], 'b')))).toMatch(/^shape 3 \(solid 'b'\): edge \d touches shape 2 \(solid 'a'\) edge \d at \(2, 1.5\)/);
-    expect(only(withShapes(enclosure, a, solid([[1.2, 0.7], [1.8, 0.7], [1.8, 1.3]], 'b')))).toBe(
-      "shape 3 (solid 'b'): lies inside shape 2 (solid 'a') (point 1 at (1.2, 0.7)); solids must not overlap");
+    const a = solid(
+      [
+        [1, 0.5],
+        [2, 0.5],
+        [2, 1.5],
+        [1, 1.5],
+      ],
+      'a',
+    );
+    expect(
+      errorsOf(
+        withShapes(
+          enclosure,
+          a,
+          solid(
+            [
+              [1.5, 1],
+              [2.5, 1],
+              [2.5, 1.8],
+              [1.5, 1.8],
+            ],
+            'b',
+          ),
+        ),
+      )[0],
+    ).toBe(
+      "shape 3 (solid 'b'): edge 1 crosses shape 2 (solid 'a') edge 2 at (2, 1); solids must not overlap or touch",
+    );
+    expect(
+      only(
+        withShapes(
+          enclosure,
+          a,
+          solid(
+            [
+              [2, 0.5],
+              [3, 0.5],
+              [3, 1.5],
+              [2, 1.5],
+            ],
+            'b',
+          ),
+        ),
+      ),
+    ).toBe(
+      "shape 3 (solid 'b'): edge 4 runs along shape 2 (solid 'a') edge 2 from (2, 0.5) to (2, 1.5); solids must not overlap or touch",
+    );
+    expect(
+      only(
+        withShapes(
+          enclosure,
+          a,
+          solid(
+            [
+              [2, 1.5],
+              [3, 1.5],
+              [3, 1.8],
+            ],
+            'b',
+          ),
+        ),
+      ),
+    ).toMatch(/^shape 3 \(solid 'b'\): edge \d touches shape 2 \(solid 'a'\) edge \d at \(2, 1.5\)/);
+    expect(
+      only(
+        withShapes(
+          enclosure,
+          a,
+          solid(
+            [
+              [1.2, 0.7],
+              [1.8, 0.7],
+              [1.8, 1.3],
+            ],
+            'b',
+          ),
+        ),
+      ),
+    ).toBe("shape 3 (solid 'b'): lies inside shape 2 (solid 'a') (point 1 at (1.2, 0.7)); solids must not overlap");
   });
   it('more than one enclosure', () => {
-    const second = { ...enclosure, points: [[10, 0], [11, 0], [11, 1]], surface: 'other' };
-    expect(only(withShapes(enclosure, second))).toBe('shapes 1 and 2 are both enclosures; a sketch has at most one (draw the others as solids)');
+    const second = {
+      ...enclosure,
+      points: [
+        [10, 0],
+        [11, 0],
+        [11, 1],
+      ],
+      surface: 'other',
+    };
+    expect(only(withShapes(enclosure, second))).toBe(
+      'shapes 1 and 2 are both enclosures; a sketch has at most one (draw the others as solids)',
+    );
   });
   it('edge and point numbers follow the file even after repeated points were removed', () => {
     // Point 2 repeats point 1, so the file's edge 4 is the crossing edge.
-    const bow = solid([[1, 0.5], [1, 0.5], [2, 0.5], [1, 1.5], [2, 1.5]], 'bow');
+    const bow = solid(
+      [
+        [1, 0.5],
+        [1, 0.5],
+        [2, 0.5],
+        [1, 1.5],
+        [2, 1.5],
+      ],
+      'bow',
+    );
     expect(only(withShapes(enclosure, bow))).toMatch(/edge 3 crosses edge 5 at \(1.5, 1\)/);
   });
 });
 
 describe('restore refuses very large sketches before computing', () => {
   it(`more than ${MAX_EDGES} edges`, () => {
-    const ring = (n: number) => Array.from({ length: n }, (_, k) => [Math.cos((2 * Math.PI * k) / n), Math.sin((2 * Math.PI * k) / n)]);
+    const ring = (n: number) =>
+      Array.from({ length: n }, (_, k) => [Math.cos((2 * Math.PI * k) / n), Math.sin((2 * Math.PI * k) / n)]);
     expect(only(withShapes({ kind: 'enclosure', points: ring(MAX_EDGES + 1), surface: 'wall' }))).toBe(
-      `the sketch has ${MAX_EDGES + 1} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`);
+      `the sketch has ${MAX_EDGES + 1} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`,
+    );
     expect(restore(withShapes({ kind: 'enclosure', points: ring(MAX_EDGES), surface: 'wall' })).ok).toBe(true);
-    expect(only({ ...minimal, shapes: new Array(MAX_EDGES).fill(block) })).toMatch(/the sketch has 5000 shapes; the limit is 5000 edges/);
+    expect(only({ ...minimal, shapes: new Array(MAX_EDGES).fill(block) })).toMatch(
+      /the sketch has 5000 shapes; the limit is 5000 edges/,
+    );
   });
 });
 
@@ -209,7 +561,13 @@ describe('restore never throws', () => {
       const r = restore(v);
       expect(r.ok).toBe(false);
     }
-    const hostile = { version: 1, units: 'm', get shapes(): unknown { throw new Error('boom'); } };
+    const hostile = {
+      version: 1,
+      units: 'm',
+      get shapes(): unknown {
+        throw new Error('boom');
+      },
+    };
     expect(only(hostile)).toMatch(/could not read the sketch \(internal error: boom\)/);
   });
 });

@@ -35,8 +35,26 @@ describe('restore reads valid sketches', () => {
       version: 1,
       units: 'm',
       shapes: [
-        { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] },
-        { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: ['block', 'block', 'block', 'block'] },
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [4, 0],
+            [4, 2],
+            [0, 2],
+          ],
+          surface: ['floor', 'right', 'roof', 'left'],
+        },
+        {
+          kind: 'solid',
+          points: [
+            [1.75, 0.75],
+            [2.25, 0.75],
+            [2.25, 1.25],
+            [1.75, 1.25],
+          ],
+          surface: ['block', 'block', 'block', 'block'],
+        },
       ],
       surfaces: { floor: { emissivity: 0.9, temperature: 1100 } },
       settings: {},
@@ -59,16 +77,61 @@ describe('restore reads valid sketches', () => {
     for (const units of UNITS) expect(sketchOf({ ...JSON.parse(minimalText), units }).sketch.units).toBe(units);
     expect(METRES_PER_UNIT.in).toBe(0.0254); // exact by definition (international inch, 1959; common practice)
     expect(sketchOf(`\uFEFF${minimalText.replace(/\n/g, '\r\n')}`).sketch.shapes).toHaveLength(2);
-    const cw = { version: 1, units: 'mm', shapes: [{ kind: 'enclosure', points: [[0, 2], [4, 2], [4, 0], [0, 0]], surface: 'wall' }] };
+    const cw = {
+      version: 1,
+      units: 'mm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 2],
+            [4, 2],
+            [4, 0],
+            [0, 0],
+          ],
+          surface: 'wall',
+        },
+      ],
+    };
     expect(sketchOf(cw).warnings).toEqual([]);
-    const open = { version: 1, units: 'ft', shapes: [{ kind: 'solid', points: [[0, 0], [1, 0], [1, 1], [0, 1]], surface: 'a' }, { kind: 'solid', points: [[2, 0], [3, 0], [3, 1], [2, 1]], surface: 'b' }] };
+    const open = {
+      version: 1,
+      units: 'ft',
+      shapes: [
+        {
+          kind: 'solid',
+          points: [
+            [0, 0],
+            [1, 0],
+            [1, 1],
+            [0, 1],
+          ],
+          surface: 'a',
+        },
+        {
+          kind: 'solid',
+          points: [
+            [2, 0],
+            [3, 0],
+            [3, 1],
+            [2, 1],
+          ],
+          surface: 'b',
+        },
+      ],
+    };
     expect(sketchOf(open).sketch.shapes).toHaveLength(2);
   });
 
   it('keeps settings and all surface conditions', () => {
     const doc = {
       ...JSON.parse(minimalText),
-      surfaces: { floor: { emissivity: 1, temperature: 1100 }, roof: { heatFlux: -2500 }, left: { adiabatic: true, emissivity: 0.3 }, right: { opening: true } },
+      surfaces: {
+        floor: { emissivity: 1, temperature: 1100 },
+        roof: { heatFlux: -2500 },
+        left: { adiabatic: true, emissivity: 0.3 },
+        right: { opening: true },
+      },
       settings: { surroundingsTemperature: 293.15, depth: 3 },
     };
     const { sketch, warnings } = sketchOf(doc);
@@ -80,11 +143,37 @@ describe('restore reads valid sketches', () => {
   it('accepts shapes a hair apart and large offsets with millimetre features', () => {
     const base = 1e6;
     const doc = {
-      version: 1, units: 'mm',
+      version: 1,
+      units: 'mm',
       shapes: [
-        { kind: 'enclosure', points: [[base, base], [base + 4, base], [base + 4, base + 2], [base, base + 2]], surface: 'wall' },
-        { kind: 'solid', points: [[base + 1, base + 0.001], [base + 1.001, base + 0.001], [base + 1.001, base + 0.002]], surface: 'chip' },
-        { kind: 'solid', points: [[base + 2, base + 1], [base + 4 - 1e-9, base + 1], [base + 3, base + 1.5]], surface: 'close' },
+        {
+          kind: 'enclosure',
+          points: [
+            [base, base],
+            [base + 4, base],
+            [base + 4, base + 2],
+            [base, base + 2],
+          ],
+          surface: 'wall',
+        },
+        {
+          kind: 'solid',
+          points: [
+            [base + 1, base + 0.001],
+            [base + 1.001, base + 0.001],
+            [base + 1.001, base + 0.002],
+          ],
+          surface: 'chip',
+        },
+        {
+          kind: 'solid',
+          points: [
+            [base + 2, base + 1],
+            [base + 4 - 1e-9, base + 1],
+            [base + 3, base + 1.5],
+          ],
+          surface: 'close',
+        },
       ],
     };
     expect(sketchOf(doc).warnings).toEqual([]);
@@ -93,9 +182,31 @@ describe('restore reads valid sketches', () => {
 
 describe('restore repairs and warns', () => {
   it('removes repeated consecutive points (zero-length edges), keeping the names of the real edges', () => {
-    const doc = { version: 1, units: 'm', shapes: [{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 0], [4, 2], [0, 2], [0, 0]], surface: ['floor', 'gap', 'right', 'roof', 'left', 'closing'] }] };
+    const doc = {
+      version: 1,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [4, 0],
+            [4, 0],
+            [4, 2],
+            [0, 2],
+            [0, 0],
+          ],
+          surface: ['floor', 'gap', 'right', 'roof', 'left', 'closing'],
+        },
+      ],
+    };
     const { sketch, warnings } = sketchOf(doc);
-    expect(sketch.shapes[0].points).toEqual([[0, 0], [4, 0], [4, 2], [0, 2]]);
+    expect(sketch.shapes[0].points).toEqual([
+      [0, 0],
+      [4, 0],
+      [4, 2],
+      [0, 2],
+    ]);
     // Edge 2 (4,0)->(4,0) and edge 6 (0,0)->(0,0) had zero length; their names go with them.
     expect(sketch.shapes[0].surface).toEqual(['floor', 'right', 'roof', 'left']);
     expect(warnings).toEqual([
@@ -104,7 +215,12 @@ describe('restore repairs and warns', () => {
   });
 
   it('warns about properties on a surface name no edge uses, and unknown fields', () => {
-    const doc = { ...JSON.parse(minimalText), surfaces: { flor: { emissivity: 0.8 } }, colour: 'red', settings: { dpeth: 2 } };
+    const doc = {
+      ...JSON.parse(minimalText),
+      surfaces: { flor: { emissivity: 0.8 } },
+      colour: 'red',
+      settings: { dpeth: 2 },
+    };
     doc.shapes[1].label = 'bar';
     expect(sketchOf(doc).warnings).toEqual([
       "the sketch: ignored unknown field 'colour'",
@@ -116,22 +232,44 @@ describe('restore repairs and warns', () => {
 
   it('warns that an opening ignores emissivity (it acts as black)', () => {
     const doc = { ...JSON.parse(minimalText), surfaces: { right: { opening: true, emissivity: 0.5 } } };
-    expect(sketchOf(doc).warnings).toEqual(["surface 'right': emissivity 0.5 is ignored; an opening acts as a black surface"]);
+    expect(sketchOf(doc).warnings).toEqual([
+      "surface 'right': emissivity 0.5 is ignored; an opening acts as a black surface",
+    ]);
   });
 
   it('warns about an opening on a solid (openings are gaps in the enclosure wall)', () => {
     const doc = { ...JSON.parse(minimalText), surfaces: { block: { opening: true } } };
-    expect(sketchOf(doc).warnings).toEqual(["surface 'block' is an opening but lies on a solid (shape 2); openings are gaps in the enclosure wall"]);
+    expect(sketchOf(doc).warnings).toEqual([
+      "surface 'block' is an opening but lies on a solid (shape 2); openings are gaps in the enclosure wall",
+    ]);
   });
 });
 
 describe('toScene', () => {
   it('numbers surfaces by first appearance along the edges and flattens points', () => {
     const doc = {
-      version: 1, units: 'm',
+      version: 1,
+      units: 'm',
       shapes: [
-        { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['wall', 'hot', 'wall', 'cold'] },
-        { kind: 'solid', points: [[1, 1], [2, 1], [2, 1.5]], surface: ['tube', 'hot', 'tube'] },
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [4, 0],
+            [4, 2],
+            [0, 2],
+          ],
+          surface: ['wall', 'hot', 'wall', 'cold'],
+        },
+        {
+          kind: 'solid',
+          points: [
+            [1, 1],
+            [2, 1],
+            [2, 1.5],
+          ],
+          surface: ['tube', 'hot', 'tube'],
+        },
       ],
     };
     const { scene, surfaceNames } = toScene(sketchOf(doc).sketch);
@@ -154,7 +292,11 @@ describe('serialize', () => {
   });
 
   it('keeps every digit of the coordinates', () => {
-    const pts = [[0.1 + 0.2, 1 / 3], [Math.PI, 1e-7], [2 / 3, Math.E]];
+    const pts = [
+      [0.1 + 0.2, 1 / 3],
+      [Math.PI, 1e-7],
+      [2 / 3, Math.E],
+    ];
     const { sketch } = sketchOf({ version: 1, units: 'in', shapes: [{ kind: 'solid', points: pts, surface: 'x' }] });
     expect(sketchOf(serialize(sketch)).sketch.shapes[0].points).toEqual(pts);
   });

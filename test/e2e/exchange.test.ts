@@ -18,7 +18,9 @@ beforeAll(async () => {
   await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
 }, 180_000);
 
-afterAll(async () => { await app?.close(); });
+afterAll(async () => {
+  await app?.close();
+});
 
 const results = () => page.getByRole('table', { name: /heat exchange per surface/i });
 const netHeat = (surface: string) => page.locator(`.exchange-table tr[data-surface="${surface}"] td:nth-of-type(4)`);
@@ -28,7 +30,9 @@ const docOf = () => page.evaluate(() => (window as unknown as TestWindow).__taut
 async function openTab() {
   await page.getByRole('tab', { name: 'Heat exchange' }).click();
   await results().waitFor();
-  await page.waitForFunction(() => document.querySelector('[data-exchange-status]')?.getAttribute('data-exchange-status') === 'solved');
+  await page.waitForFunction(
+    () => document.querySelector('[data-exchange-status]')?.getAttribute('data-exchange-status') === 'solved',
+  );
 }
 
 describe('heat exchange in chromium', () => {
@@ -59,7 +63,10 @@ describe('heat exchange in chromium', () => {
     await page.getByRole('radio', { name: 'net flux' }).check();
     const legend = page.getByLabel('Colour legend');
     await expect.poll(() => legend.innerText()).toMatch(/Net flux, W\/m²/);
-    const [scrollW, clientW] = await page.evaluate(() => [document.documentElement.scrollWidth, document.documentElement.clientWidth]);
+    const [scrollW, clientW] = await page.evaluate(() => [
+      document.documentElement.scrollWidth,
+      document.documentElement.clientWidth,
+    ]);
     expect(scrollW).toBeLessThanOrEqual(clientW);
     mkdirSync('test-artifacts', { recursive: true });
     await page.screenshot({ path: 'test-artifacts/exchange.png' });

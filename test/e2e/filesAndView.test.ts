@@ -16,34 +16,65 @@ beforeAll(async () => {
   await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
 }, 180_000);
 
-afterAll(async () => { await app?.close(); });
-
-const state = () => page.evaluate(() => {
-  const s = (window as unknown as TestWindow).__tautline.store.getState();
-  return { doc: s.doc, camera: s.camera };
+afterAll(async () => {
+  await app?.close();
 });
+
+const state = () =>
+  page.evaluate(() => {
+    const s = (window as unknown as TestWindow).__tautline.store.getState();
+    return { doc: s.doc, camera: s.camera };
+  });
 
 const screenOf = (x: number, y: number) => screenPoint(page, x, y);
 
 describe('files and view', () => {
   it('saves the sketch file and opens it again; a bad file changes nothing and says why', async () => {
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Save' }).click(),
+    ]);
     const text = readFileSync(await download.path(), 'utf8');
     const saved = JSON.parse(text) as SketchFile;
     expect(saved.version).toBe(1);
     expect(saved.shapes).toHaveLength(5);
     const before = (await state()).doc;
-    await page.locator('input[type=file]').setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from('{"version": 7, "units": "m", "shapes": []}') });
-    await expect.poll(() => page.getByRole('alert').first().innerText()).toMatch(/Could not open "broken\.json".*version/s);
+    await page
+      .locator('input[type=file]')
+      .setInputFiles({
+        name: 'broken.json',
+        mimeType: 'application/json',
+        buffer: Buffer.from('{"version": 7, "units": "m", "shapes": []}'),
+      });
+    await expect
+      .poll(() => page.getByRole('alert').first().innerText())
+      .toMatch(/Could not open "broken\.json".*version/s);
     expect((await state()).doc).toEqual(before);
     await page.getByRole('button', { name: 'New' }).click();
-    await page.locator('input[type=file]').setInputFiles({ name: 'oven.json', mimeType: 'application/json', buffer: Buffer.from(text) });
+    await page
+      .locator('input[type=file]')
+      .setInputFiles({ name: 'oven.json', mimeType: 'application/json', buffer: Buffer.from(text) });
     await expect.poll(async () => (await state()).doc.shapes.length).toBe(5);
     expect((await state()).doc.shapes[0].points).toEqual(before.shapes[0].points);
   });
 
   it('opens a sketch file dropped on the page', async () => {
-    const dropped = JSON.stringify({ version: 1, units: 'mm', shapes: [{ kind: 'enclosure', points: [[0, 0], [300, 0], [300, 100], [0, 100]], surface: 'duct' }] });
+    const dropped = JSON.stringify({
+      version: 1,
+      units: 'mm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [300, 0],
+            [300, 100],
+            [0, 100],
+          ],
+          surface: 'duct',
+        },
+      ],
+    });
     await page.evaluate((content) => {
       const dt = new DataTransfer();
       dt.items.add(new File([content], 'duct.json', { type: 'application/json' }));
@@ -52,7 +83,12 @@ describe('files and view', () => {
     }, dropped);
     await expect.poll(async () => (await state()).doc.units).toBe('mm');
     await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
-    expect(await page.getByRole('table', { name: /view factor/i }).getByRole('rowheader').count()).toBe(1);
+    expect(
+      await page
+        .getByRole('table', { name: /view factor/i })
+        .getByRole('rowheader')
+        .count(),
+    ).toBe(1);
   });
 
   it('zooms around the pointer with the wheel and pans by dragging empty space', async () => {
@@ -97,6 +133,11 @@ describe('files and view', () => {
     await page.mouse.click(bx, by);
     await expect.poll(async () => (await state()).doc.shapes.length).toBe(3);
     await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
-    expect(await page.getByRole('table', { name: /view factor/i }).getByRole('rowheader').count()).toBe(1 + 10 + 4);
+    expect(
+      await page
+        .getByRole('table', { name: /view factor/i })
+        .getByRole('rowheader')
+        .count(),
+    ).toBe(1 + 10 + 4);
   });
 });

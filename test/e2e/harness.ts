@@ -26,7 +26,11 @@ function freePort(): Promise<number> {
 }
 
 /** The served app and a browser context with a fresh profile (1366 x 768, the laptop size the layout must fit). */
-export interface App { url: string; context: BrowserContext; close: () => Promise<void> }
+export interface App {
+  url: string;
+  context: BrowserContext;
+  close: () => Promise<void>;
+}
 
 export async function startApp(): Promise<App> {
   const outDir = mkdtempSync(join(tmpdir(), 'tautline-build-'));
@@ -40,15 +44,27 @@ export async function startApp(): Promise<App> {
     process.env.NODE_ENV = nodeEnv;
   }
   const port = await freePort();
-  const server: PreviewServer = await preview({ logLevel: 'error', build: { outDir }, preview: { host: '127.0.0.1', port, strictPort: true } });
+  const server: PreviewServer = await preview({
+    logLevel: 'error',
+    build: { outDir },
+    preview: { host: '127.0.0.1', port, strictPort: true },
+  });
   // The fresh profile directory is chromium's --user-data-dir (playwright passes it).
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM,
     headless: true,
     viewport: { width: 1366, height: 768 },
     acceptDownloads: true,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update',
-      '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
   });
   return {
     url: `http://127.0.0.1:${port}/`,
@@ -70,7 +86,12 @@ export async function screenOf(page: Page, x: number, y: number): Promise<[numbe
 }
 
 /** Press at sketch point `from`, move to `to` in `steps` pointer moves, release. */
-export async function dragOnCanvas(page: Page, from: [number, number], to: [number, number], steps: number): Promise<void> {
+export async function dragOnCanvas(
+  page: Page,
+  from: [number, number],
+  to: [number, number],
+  steps: number,
+): Promise<void> {
   const [ax, ay] = await screenOf(page, ...from);
   const [bx, by] = await screenOf(page, ...to);
   await page.mouse.move(ax, ay);

@@ -18,7 +18,9 @@ beforeAll(async () => {
   await page.goto(app.url);
 }, 180_000);
 
-afterAll(async () => { await app?.close(); });
+afterAll(async () => {
+  await app?.close();
+});
 
 const screenOf = (x: number, y: number) => screenPoint(page, x, y);
 
@@ -39,7 +41,10 @@ describe('sketcher in chromium', () => {
     await waitReady();
     await expect.poll(() => table().getByRole('rowheader').count()).toBe(7);
     expect(await tableText()).toContain('fired floor');
-    const [scrollW, clientW] = await page.evaluate(() => [document.documentElement.scrollWidth, document.documentElement.clientWidth]);
+    const [scrollW, clientW] = await page.evaluate(() => [
+      document.documentElement.scrollWidth,
+      document.documentElement.clientWidth,
+    ]);
     expect(scrollW).toBeLessThanOrEqual(clientW);
     const tableBox = (await page.locator('.matrix-scroll').boundingBox())!;
     expect(tableBox.x + tableBox.width).toBeLessThanOrEqual(1366);
@@ -52,7 +57,13 @@ describe('sketcher in chromium', () => {
     await page.evaluate(() => {
       const w = window as unknown as ProbeWindow;
       w.__lat = { lastMove: 0, samples: [], jobs: [], changes: 0 };
-      window.addEventListener('pointermove', () => { w.__lat.lastMove = performance.now(); }, true);
+      window.addEventListener(
+        'pointermove',
+        () => {
+          w.__lat.lastMove = performance.now();
+        },
+        true,
+      );
       new MutationObserver(() => {
         if (w.__lat.lastMove) {
           w.__lat.samples.push(performance.now() - w.__lat.lastMove);
@@ -74,13 +85,20 @@ describe('sketcher in chromium', () => {
     await page.mouse.up();
     await page.keyboard.press('Control+z');
     await waitReady();
-    await page.evaluate(() => { const l = (window as unknown as ProbeWindow).__lat; l.samples = []; l.jobs = []; l.lastMove = 0; });
+    await page.evaluate(() => {
+      const l = (window as unknown as ProbeWindow).__lat;
+      l.samples = [];
+      l.jobs = [];
+      l.lastMove = 0;
+    });
     await page.mouse.move(sx, sy);
     await page.mouse.down();
     for (let i = 1; i <= 40; i++) {
       const changes = await page.evaluate(() => (window as unknown as ProbeWindow).__lat.changes);
       await page.mouse.move(sx + i * 2, sy - i);
-      await page.waitForFunction((c) => (window as unknown as ProbeWindow).__lat.changes > c, changes, { timeout: 5000 });
+      await page.waitForFunction((c) => (window as unknown as ProbeWindow).__lat.changes > c, changes, {
+        timeout: 5000,
+      });
     }
     await page.mouse.up();
     await page.getByRole('checkbox', { name: 'snap' }).check();
@@ -89,7 +107,9 @@ describe('sketcher in chromium', () => {
     const sorted = [...samples].sort((a, b) => a - b);
     const jobMedian = [...jobs].sort((a, b) => a - b)[Math.floor(jobs.length / 2)];
     const median = sorted[Math.floor(sorted.length / 2)];
-    console.log(`drag-to-table latency on the demo: median ${median.toFixed(1)} ms, p90 ${sorted[Math.floor(sorted.length * 0.9)].toFixed(1)} ms over ${samples.length} moves (worker job alone: median ${jobMedian.toFixed(1)} ms)`);
+    console.log(
+      `drag-to-table latency on the demo: median ${median.toFixed(1)} ms, p90 ${sorted[Math.floor(sorted.length * 0.9)].toFixed(1)} ms over ${samples.length} moves (worker job alone: median ${jobMedian.toFixed(1)} ms)`,
+    );
     expect(samples.length).toBeGreaterThanOrEqual(35);
     // The target (under 50 ms on the dev machine) is reported, not asserted: CI shares its cores.
     // This bound only catches a pipeline that has stopped keeping up with a drag at all.
@@ -106,7 +126,13 @@ describe('sketcher in chromium', () => {
     await expect.poll(status).toBe('empty');
     await page.getByRole('button', { name: /^Enclosure/ }).click();
     // A 2 m x 1 m rectangle, clicked corner by corner (snapped to the 0.1 m grid), closed on the first point.
-    for (const [x, y] of [[0, 0], [2, 0], [2, 1], [0, 1], [0, 0]]) {
+    for (const [x, y] of [
+      [0, 0],
+      [2, 0],
+      [2, 1],
+      [0, 1],
+      [0, 0],
+    ]) {
       const [px, py] = await screenOf(x + 0.01, y - 0.01);
       await page.mouse.click(px, py);
     }
@@ -134,7 +160,10 @@ describe('sketcher in chromium', () => {
     // CSV: floor (wall 1) to roof (wall 3) of a 2 x 1 rectangle by crossed strings,
     // (sqrt(w^2 + h^2) - h) / w with w = 2, h = 1 (Hottel's crossed-strings method;
     // Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1.4).
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: /CSV/ }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: /CSV/ }).click(),
+    ]);
     const csv = readFileSync(await download.path(), 'utf8');
     const rows = Papa.parse<string[]>(csv.trim(), { newline: '\r\n' }).data;
     expect(rows[0]).toEqual(['from \\ to', 'wall 1', 'wall 2', 'wall 3', 'wall 4']);
@@ -146,14 +175,25 @@ describe('sketcher in chromium', () => {
     // The same text as the command line's --csv for the same sketch.
     const doc = await docOf();
     let cli = '';
-    runFactors(['s.json', '--csv'], { out: (t) => { cli += t; }, err: () => {}, readFile: () => documentApi.serialize(doc) });
+    runFactors(['s.json', '--csv'], {
+      out: (t) => {
+        cli += t;
+      },
+      err: () => {},
+      readFile: () => documentApi.serialize(doc),
+    });
     expect(csv).toBe(cli);
 
     // Reload: the autosave brings the drawn sketch back, not the demo.
     await page.reload();
     await waitReady();
     expect(await tableText()).toBe(drawn);
-    expect((await docOf()).shapes[0].points).toEqual([[0, 0], [2, 0], [2, 1], [0, 1]]);
+    expect((await docOf()).shapes[0].points).toEqual([
+      [0, 0],
+      [2, 0],
+      [2, 1],
+      [0, 1],
+    ]);
   });
 
   it('marks a body dragged through the wall as invalid and keeps the drawing', async () => {

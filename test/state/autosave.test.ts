@@ -8,8 +8,20 @@ import { MemoryStorage } from './memoryStorage';
 import type { SketchFile } from '../../src/state/sketchFile';
 
 const box: SketchFile = {
-  version: 1, units: 'cm',
-  shapes: [{ kind: 'enclosure', points: [[0, 0], [40, 0], [40, 20], [0, 20]], surface: ['floor', 'right', 'roof', 'left'] }],
+  version: 1,
+  units: 'cm',
+  shapes: [
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [40, 0],
+        [40, 20],
+        [0, 20],
+      ],
+      surface: ['floor', 'right', 'roof', 'left'],
+    },
+  ],
 };
 
 describe('autosave', () => {
@@ -46,7 +58,20 @@ describe('autosave', () => {
 
   it('sets aside an autosave whose geometry is invalid, naming the problem', () => {
     const storage = new MemoryStorage();
-    const crossed = { ...box, shapes: [{ ...box.shapes[0], points: [[0, 0], [40, 20], [40, 0], [0, 20]] }] };
+    const crossed = {
+      ...box,
+      shapes: [
+        {
+          ...box.shapes[0],
+          points: [
+            [0, 0],
+            [40, 20],
+            [40, 0],
+            [0, 20],
+          ],
+        },
+      ],
+    };
     storage.setItem(AUTOSAVE_KEY, JSON.stringify(crossed));
     const r = loadAutosave(storage, documentApi, demoSketch);
     expect(r.doc).toBe(demoSketch);

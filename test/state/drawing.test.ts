@@ -19,20 +19,38 @@ describe('polygon kernel', () => {
     d = clickPoint(d, [2, 0], 0.05).draft;
     d = clickPoint(d, [2, 0.01], 0.05).draft; // second click of a double-click
     d = clickPoint(d, [2, 1], 0.05).draft;
-    expect(d.points).toEqual([[0, 0], [2, 0], [2, 1]]);
+    expect(d.points).toEqual([
+      [0, 0],
+      [2, 0],
+      [2, 1],
+    ]);
     const closed = clickPoint(d, [0.02, -0.01], 0.05);
-    expect(closed.finished).toEqual([[0, 0], [2, 0], [2, 1]]);
+    expect(closed.finished).toEqual([
+      [0, 0],
+      [2, 0],
+      [2, 1],
+    ]);
     expect(closed.draft.points).toEqual([]);
   });
 
   it('does not finish with fewer than three points; removeLastPoint steps back', () => {
-    const d = { points: [[0, 0], [1, 0]] as Point[] };
+    const d = {
+      points: [
+        [0, 0],
+        [1, 0],
+      ] as Point[],
+    };
     expect(finish(d).finished).toBeUndefined();
     expect(removeLastPoint(d).points).toEqual([[0, 0]]);
   });
 
   it('makes rectangles and regular polygons, refusing zero size', () => {
-    expect(rectangleFromCorners([2, 1], [0, 0])).toEqual([[0, 0], [2, 0], [2, 1], [0, 1]]);
+    expect(rectangleFromCorners([2, 1], [0, 0])).toEqual([
+      [0, 0],
+      [2, 0],
+      [2, 1],
+      [0, 1],
+    ]);
     expect(rectangleFromCorners([0, 0], [0, 1])).toBeNull();
     const hex = regularPolygon([1, 1], [1.5, 1], 6)!;
     expect(hex).toHaveLength(6);
@@ -46,12 +64,25 @@ describe('drawing with the controller', () => {
     const store = createAppStore(emptySketch);
     const c = new CanvasController(store);
     store.getState().setTool('enclosure');
-    for (const p of [[0, 0], [3, 0], [3, 2], [0, 2]] as Point[]) { c.press(at(p)); c.release(at(p)); }
+    for (const p of [
+      [0, 0],
+      [3, 0],
+      [3, 2],
+      [0, 2],
+    ] as Point[]) {
+      c.press(at(p));
+      c.release(at(p));
+    }
     expect(store.getState().draft).toHaveLength(4);
     c.finishDraft();
     const shape = store.getState().doc.shapes[0];
     expect(shape.kind).toBe('enclosure');
-    expect(shape.points).toEqual([[0, 0], [3, 0], [3, 2], [0, 2]]);
+    expect(shape.points).toEqual([
+      [0, 0],
+      [3, 0],
+      [3, 2],
+      [0, 2],
+    ]);
     expect(shape.surface).toEqual(['wall 1', 'wall 2', 'wall 3', 'wall 4']);
     expect(store.getState().selection).toEqual([{ type: 'shape', shape: 0 }]);
     expect(restore(store.getState().doc).ok).toBe(true);
@@ -61,36 +92,91 @@ describe('drawing with the controller', () => {
     const store = createAppStore(emptySketch);
     const c = new CanvasController(store);
     store.getState().setTool('enclosure');
-    c.press(at([0, 0])); c.press(at([1, 0]));
+    c.press(at([0, 0]));
+    c.press(at([1, 0]));
     c.doubleClick(at([1, 0])); // the browser reports a double-click for quick clicks anywhere
     expect(store.getState().doc.shapes).toHaveLength(0);
-    c.press(at([1, 1])); c.press(at([1, 1]));
+    c.press(at([1, 1]));
+    c.press(at([1, 1]));
     c.doubleClick(at([1, 1]));
-    expect(store.getState().doc.shapes[0].points).toEqual([[0, 0], [1, 0], [1, 1]]);
+    expect(store.getState().doc.shapes[0].points).toEqual([
+      [0, 0],
+      [1, 0],
+      [1, 1],
+    ]);
   });
 
   it('snaps clicks to the grid and closes a body on its first point', () => {
-    const store = createAppStore({ version: 1, units: 'm', shapes: [{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 4], [0, 4]], surface: 'wall' }] });
+    const store = createAppStore({
+      version: 1,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [4, 0],
+            [4, 4],
+            [0, 4],
+          ],
+          surface: 'wall',
+        },
+      ],
+    });
     const c = new CanvasController(store);
     store.getState().setGridStep(0.5);
     store.getState().setTool('solid');
-    for (const p of [[1.1, 1.2], [2.9, 0.9], [2.1, 2.6], [1.04, 1.03]] as Point[]) c.press(at(p));
+    for (const p of [
+      [1.1, 1.2],
+      [2.9, 0.9],
+      [2.1, 2.6],
+      [1.04, 1.03],
+    ] as Point[])
+      c.press(at(p));
     const body = store.getState().doc.shapes[1];
     expect(body.kind).toBe('solid');
-    expect(body.points).toEqual([[1, 1], [3, 1], [2, 2.5]]);
+    expect(body.points).toEqual([
+      [1, 1],
+      [3, 1],
+      [2, 2.5],
+    ]);
     expect(body.surface).toEqual(['body 1 edge 1', 'body 1 edge 2', 'body 1 edge 3']);
   });
 
   it('drags a rectangle and a tube as bodies', () => {
-    const store = createAppStore({ version: 1, units: 'm', shapes: [{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 4], [0, 4]], surface: 'wall' }] });
+    const store = createAppStore({
+      version: 1,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [4, 0],
+            [4, 4],
+            [0, 4],
+          ],
+          surface: 'wall',
+        },
+      ],
+    });
     const c = new CanvasController(store);
     store.getState().setTool('rectangle');
-    c.press(at([0.5, 0.5])); c.move(at([1.5, 1.0])); c.release(at([1.5, 1.0]));
+    c.press(at([0.5, 0.5]));
+    c.move(at([1.5, 1.0]));
+    c.release(at([1.5, 1.0]));
     store.getState().setTool('tube');
     store.getState().setTubeSides(8);
-    c.press(at([3, 3])); c.move(at([3.5, 3])); c.release(at([3.5, 3]));
+    c.press(at([3, 3]));
+    c.move(at([3.5, 3]));
+    c.release(at([3.5, 3]));
     const shapes = store.getState().doc.shapes;
-    expect(shapes[1].points).toEqual([[0.5, 0.5], [1.5, 0.5], [1.5, 1], [0.5, 1]]);
+    expect(shapes[1].points).toEqual([
+      [0.5, 0.5],
+      [1.5, 0.5],
+      [1.5, 1],
+      [0.5, 1],
+    ]);
     expect(shapes[2].kind).toBe('solid');
     expect(shapes[2].points).toHaveLength(8);
     expect(restore(store.getState().doc).ok).toBe(true);
@@ -101,9 +187,17 @@ describe('drawing with the controller', () => {
     const c = new CanvasController(store);
     store.getState().setSelection([{ type: 'shape', shape: 0 }]);
     store.getState().setTool('enclosure');
-    for (const p of [[0, 0], [3, 0], [3, 2]] as Point[]) c.press(at(p));
+    for (const p of [
+      [0, 0],
+      [3, 0],
+      [3, 2],
+    ] as Point[])
+      c.press(at(p));
     expect(c.key('Backspace')).toBe(true);
-    expect(store.getState().draft).toEqual([[0, 0], [3, 0]]);
+    expect(store.getState().draft).toEqual([
+      [0, 0],
+      [3, 0],
+    ]);
     c.finishDraft(); // two points: not an outline yet, and the app says so
     expect(store.getState().doc.shapes).toHaveLength(0);
     expect(store.getState().notices.at(-1)?.text).toMatch(/at least three points/);
@@ -123,26 +217,52 @@ describe('drawing with the controller', () => {
     if (makes?.type !== 'choice') throw new Error('the rectangle tool has a makes setting');
     makes.write(store.getState(), 'enclosure');
     expect(store.getState().quickKind).toBe('enclosure');
-    c.press(at([0, 0])); c.release(at([0, 0])); // a click: waits for the second corner
+    c.press(at([0, 0]));
+    c.release(at([0, 0])); // a click: waits for the second corner
     c.move(at([4, 3]));
-    expect(store.getState().draft).toEqual([[0, 0], [4, 0], [4, 3], [0, 3]]);
-    c.press(at([4, 3])); c.release(at([4, 3]));
-    expect(store.getState().doc.shapes[0]).toMatchObject({ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 3], [0, 3]] });
+    expect(store.getState().draft).toEqual([
+      [0, 0],
+      [4, 0],
+      [4, 3],
+      [0, 3],
+    ]);
+    c.press(at([4, 3]));
+    c.release(at([4, 3]));
+    expect(store.getState().doc.shapes[0]).toMatchObject({
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 3],
+        [0, 3],
+      ],
+    });
     makes.write(store.getState(), 'solid');
     store.getState().setTool('tube');
     const sides = tubeTool.settings?.find((x) => x.type === 'integer');
     if (sides?.type !== 'integer') throw new Error('the tube tool has a sides setting');
     sides.write(store.getState(), 4);
     expect(sides.read(store.getState())).toBe(4);
-    c.press(at([2, 1.5])); c.move(at([2.5, 1.5]));
+    c.press(at([2, 1.5]));
+    c.move(at([2.5, 1.5]));
     expect(store.getState().draft).toHaveLength(4);
     c.cancel();
     expect(store.getState().draft).toEqual([]);
     c.release(at([2.5, 1.5])); // the dropped tube is not made on release
     expect(store.getState().doc.shapes).toHaveLength(1);
-    c.press(at([2, 1.5])); c.move(at([2.5, 1.5])); c.release(at([2.5, 1.5]));
+    c.press(at([2, 1.5]));
+    c.move(at([2.5, 1.5]));
+    c.release(at([2.5, 1.5]));
     // A square on the circle of radius 0.5 about (2, 1.5), first corner towards the rim point.
-    expect(store.getState().doc.shapes[1]).toMatchObject({ kind: 'solid', points: [[2.5, 1.5], [2, 2], [1.5, 1.5], [2, 1]] });
+    expect(store.getState().doc.shapes[1]).toMatchObject({
+      kind: 'solid',
+      points: [
+        [2.5, 1.5],
+        [2, 2],
+        [1.5, 1.5],
+        [2, 1],
+      ],
+    });
     expect(restore(store.getState().doc).ok).toBe(true);
   });
 });

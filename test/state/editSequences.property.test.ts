@@ -13,16 +13,46 @@ import { serialize } from '../../src/document';
 import type { SketchFile } from '../../src/state/sketchFile';
 
 const start: SketchFile = {
-  version: 1, units: 'm',
+  version: 1,
+  units: 'm',
   shapes: [
-    { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] },
-    { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: 'block' },
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 2],
+        [0, 2],
+      ],
+      surface: ['floor', 'right', 'roof', 'left'],
+    },
+    {
+      kind: 'solid',
+      points: [
+        [1.75, 0.75],
+        [2.25, 0.75],
+        [2.25, 1.25],
+        [1.75, 1.25],
+      ],
+      surface: 'block',
+    },
   ],
 };
 
 const edit = fc.oneof(
-  fc.record({ op: fc.constant('move' as const), shape: fc.nat(1), index: fc.nat(20), dx: fc.double({ min: -1, max: 1, noNaN: true }), dy: fc.double({ min: -1, max: 1, noNaN: true }) }),
-  fc.record({ op: fc.constant('insert' as const), shape: fc.nat(1), index: fc.nat(20), t: fc.double({ min: 0.05, max: 0.95, noNaN: true }) }),
+  fc.record({
+    op: fc.constant('move' as const),
+    shape: fc.nat(1),
+    index: fc.nat(20),
+    dx: fc.double({ min: -1, max: 1, noNaN: true }),
+    dy: fc.double({ min: -1, max: 1, noNaN: true }),
+  }),
+  fc.record({
+    op: fc.constant('insert' as const),
+    shape: fc.nat(1),
+    index: fc.nat(20),
+    t: fc.double({ min: 0.05, max: 0.95, noNaN: true }),
+  }),
   fc.record({ op: fc.constant('delete' as const), shape: fc.nat(1), index: fc.nat(20) }),
   fc.constant({ op: 'undo' as const }),
   fc.constant({ op: 'redo' as const }),
@@ -45,7 +75,8 @@ describe('random edit sequences', () => {
             const shape = doc.shapes[e.shape];
             if (!shape) continue;
             const k = e.index % shape.points.length;
-            if (e.op === 'move') s().edit((d) => moveSelection(d, [{ type: 'vertex', shape: e.shape, index: k }], e.dx, e.dy));
+            if (e.op === 'move')
+              s().edit((d) => moveSelection(d, [{ type: 'vertex', shape: e.shape, index: k }], e.dx, e.dy));
             if (e.op === 'delete') s().edit((d) => deleteVertices(d, [{ shape: e.shape, index: k }]));
             if (e.op === 'insert') {
               const a = shape.points[k];

@@ -19,7 +19,9 @@ import Papa from 'papaparse';
 // exact to rounding, so closed forms are checked to 1e-9.
 const REL = 1e-9;
 const flush = () => new Promise((r) => setTimeout(r, 0));
-const inThread: JobRunner = { run: async (job) => ({ kind: 'done', result: await viewFactorApi.compute(job), elapsedMs: 0 }) };
+const inThread: JobRunner = {
+  run: async (job) => ({ kind: 'done', result: await viewFactorApi.compute(job), elapsedMs: 0 }),
+};
 
 function live(doc: SketchFile): AppStore {
   const store = createAppStore(doc);
@@ -35,7 +37,8 @@ function solved(store: AppStore): ExchangeSolved {
 }
 
 const heatOf = (ex: ExchangeSolved, name: string) => ex.result.netHeat[ex.names.indexOf(name)];
-const close = (actual: number, expected: number, rel = REL) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
+const close = (actual: number, expected: number, rel = REL) =>
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
 
 // Two long concentric squares in millimetres: inner 200 mm (a solid, convex, so
 // F_12 = 1), outer 600 mm (the enclosure).
@@ -43,8 +46,26 @@ const squares: SketchFile = {
   version: 1,
   units: 'mm',
   shapes: [
-    { kind: 'enclosure', points: [[0, 0], [600, 0], [600, 600], [0, 600]], surface: 'outer' },
-    { kind: 'solid', points: [[200, 200], [400, 200], [400, 400], [200, 400]], surface: 'inner' },
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [600, 0],
+        [600, 600],
+        [0, 600],
+      ],
+      surface: 'outer',
+    },
+    {
+      kind: 'solid',
+      points: [
+        [200, 200],
+        [400, 200],
+        [400, 400],
+        [200, 400],
+      ],
+      surface: 'inner',
+    },
   ],
   surfaces: { inner: { emissivity: 0.6, temperature: 1000 }, outer: { emissivity: 0.8, temperature: 500 } },
 };
@@ -105,7 +126,9 @@ describe('exchange results in the store', () => {
   it('shows the solver message when the problem has no unique answer, and recovers when it has one', async () => {
     const store = live(squares);
     await flush();
-    store.getState().edit((d) => setCondition(setCondition(d, 'inner', { kind: 'adiabatic' }), 'outer', { kind: 'adiabatic' }));
+    store
+      .getState()
+      .edit((d) => setCondition(setCondition(d, 'inner', { kind: 'adiabatic' }), 'outer', { kind: 'adiabatic' }));
     const ex = store.getState().exchange;
     expect(ex.kind).toBe('error');
     if (ex.kind === 'error') expect(ex.message).toMatch(/no unique answer.*give at least one surface a temperature/);
@@ -118,8 +141,20 @@ describe('exchange results in the store', () => {
 
   it('names the surface when an open sketch or an opening needs a surroundings temperature', async () => {
     const plate: SketchFile = {
-      version: 1, units: 'm',
-      shapes: [{ kind: 'solid', points: [[0, 0], [1, 0], [1, 0.1], [0, 0.1]], surface: 'plate' }],
+      version: 1,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'solid',
+          points: [
+            [0, 0],
+            [1, 0],
+            [1, 0.1],
+            [0, 0.1],
+          ],
+          surface: 'plate',
+        },
+      ],
       surfaces: { plate: { emissivity: 0.5, temperature: 400 } },
     };
     const store = live(plate);
@@ -170,9 +205,17 @@ describe('exchange results in the store', () => {
   it('with more surfaces than a frame can solve, a drag waits for its end (stale meanwhile), then solves', async () => {
     // A regular 320-gon enclosure, every edge its own surface, one of them hot.
     const n = LIVE_SOLVE_LIMIT + 20;
-    const points = Array.from({ length: n }, (_, k): [number, number] => [Math.cos((2 * Math.PI * k) / n), Math.sin((2 * Math.PI * k) / n)]);
+    const points = Array.from({ length: n }, (_, k): [number, number] => [
+      Math.cos((2 * Math.PI * k) / n),
+      Math.sin((2 * Math.PI * k) / n),
+    ]);
     const names = points.map((_, k) => `wall ${k}`);
-    const ring: SketchFile = { version: 1, units: 'm', shapes: [{ kind: 'enclosure', points, surface: names }], surfaces: { 'wall 0': { temperature: 800 } } };
+    const ring: SketchFile = {
+      version: 1,
+      units: 'm',
+      shapes: [{ kind: 'enclosure', points, surface: names }],
+      surfaces: { 'wall 0': { temperature: 800 } },
+    };
     const store = live(ring);
     await flush();
     const first = solved(store);
@@ -198,10 +241,14 @@ describe('exchange results in the store', () => {
     const ex = solved(store);
     let out = '';
     const code = main(['exchange', 'demo.json', '--json'], {
-      out: (t) => void (out += t), err: () => {}, readFile: () => JSON.stringify(demoSketch),
+      out: (t) => void (out += t),
+      err: () => {},
+      readFile: () => JSON.stringify(demoSketch),
     });
     expect(code).toBe(0);
-    const cli = JSON.parse(out) as { surfaces: { name: string; netHeat: number; temperature: number; netFlux: number }[] };
+    const cli = JSON.parse(out) as {
+      surfaces: { name: string; netHeat: number; temperature: number; netFlux: number }[];
+    };
     expect(cli.surfaces.map((s) => s.name)).toEqual(ex.names);
     cli.surfaces.forEach((s, i) => {
       expect(ex.result.netHeat[i]).toBe(s.netHeat);
@@ -212,28 +259,42 @@ describe('exchange results in the store', () => {
 });
 
 describe('exchange export', () => {
-  it('the app\'s net heat CSV is exactly what the command line prints with exchange --csv', async () => {
+  it("the app's net heat CSV is exactly what the command line prints with exchange --csv", async () => {
     const store = live(demoSketch);
     await flush();
     let out = '';
     const code = main(['exchange', 'demo.json', '--csv'], {
-      out: (t) => void (out += t), err: () => {}, readFile: () => JSON.stringify(demoSketch),
+      out: (t) => void (out += t),
+      err: () => {},
+      readFile: () => JSON.stringify(demoSketch),
     });
     expect(code).toBe(0);
     // The two share a writer, so this is an agreement check; the next test checks the content.
     expect(solvedCsv(solved(store))).toBe(out);
   });
 
-  it('the app\'s net heat CSV holds the two-surface closed form in the right cells', async () => {
+  it("the app's net heat CSV holds the two-surface closed form in the right cells", async () => {
     const store = live(squares);
     await flush();
     const rows = Papa.parse<string[]>(solvedCsv(solved(store)).trim(), { newline: '\r\n' }).data;
     expect(rows[0]).toEqual([
-      'surface', 'length (mm)', 'emissivity', 'condition', 'temperature (K)', 'net heat (W/m)', 'net flux (W/m^2)', 'radiosity (W/m^2)',
+      'surface',
+      'length (mm)',
+      'emissivity',
+      'condition',
+      'temperature (K)',
+      'net heat (W/m)',
+      'net flux (W/m^2)',
+      'radiosity (W/m^2)',
     ]);
     const row = (name: string) => rows.find((r) => r[0] === name)!;
     // Outer square: 4 x 600 mm, emissivity 0.8, held at 500 K (the sketch's data).
-    expect([Number(row('outer')[1]), Number(row('outer')[2]), row('outer')[3], Number(row('outer')[4])]).toEqual([2400, 0.8, 'temperature', 500]);
+    expect([Number(row('outer')[1]), Number(row('outer')[2]), row('outer')[3], Number(row('outer')[4])]).toEqual([
+      2400,
+      0.8,
+      'temperature',
+      500,
+    ]);
     close(Number(row('inner')[5]), twoSurface(1000, 500, 0.6, 0.8, 0.8, 2.4));
     close(Number(row('outer')[5]), -twoSurface(1000, 500, 0.6, 0.8, 0.8, 2.4));
     // Net flux = net heat / length (0.8 m of inner surface per metre of depth).

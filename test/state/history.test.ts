@@ -6,10 +6,29 @@ import { setVertex } from '../../src/state/edits/shapeEdits';
 import type { Point, SketchFile } from '../../src/state/sketchFile';
 
 const box: SketchFile = {
-  version: 1, units: 'm',
+  version: 1,
+  units: 'm',
   shapes: [
-    { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] },
-    { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: 'block' },
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 2],
+        [0, 2],
+      ],
+      surface: ['floor', 'right', 'roof', 'left'],
+    },
+    {
+      kind: 'solid',
+      points: [
+        [1.75, 0.75],
+        [2.25, 0.75],
+        [2.25, 1.25],
+        [1.75, 1.25],
+      ],
+      surface: 'block',
+    },
   ],
 };
 const at = (p: Point, shift = false) => ({ at: p, shift, tolerance: 0.05 });
@@ -40,7 +59,8 @@ describe('undo and redo', () => {
     const store = createAppStore(box);
     store.getState().edit((d) => d);
     expect(store.getState().past).toHaveLength(0);
-    for (let i = 0; i < HISTORY_LIMIT + 20; i++) store.getState().edit((d) => setVertex(d, 0, 2, [4, 2 + i * 0.01 + 0.01]));
+    for (let i = 0; i < HISTORY_LIMIT + 20; i++)
+      store.getState().edit((d) => setVertex(d, 0, 2, [4, 2 + i * 0.01 + 0.01]));
     expect(store.getState().past).toHaveLength(HISTORY_LIMIT);
   });
 
@@ -69,7 +89,10 @@ describe('undo and redo', () => {
     c.press(at([2, 0.76])); // bottom edge of the block
     c.move(at([2, 0.62]));
     c.release(at([2, 0.62]));
-    expect(store.getState().doc.shapes[1].points.slice(0, 2)).toEqual([[1.75, 0.5], [2.25, 0.5]]);
+    expect(store.getState().doc.shapes[1].points.slice(0, 2)).toEqual([
+      [1.75, 0.5],
+      [2.25, 0.5],
+    ]);
     c.press(at([2, 1])); // inside the block: the whole shape
     c.move(at([2.6, 1.1]));
     c.release(at([2.6, 1.1]));
@@ -86,8 +109,10 @@ describe('undo and redo', () => {
     const store = createAppStore(box);
     const c = new CanvasController(store);
     store.getState().setSnap(false);
-    c.press(at([1.75, 0.75])); c.release(at([1.75, 0.75]));
-    c.press(at([2.25, 1.25], true)); c.release(at([2.25, 1.25], true));
+    c.press(at([1.75, 0.75]));
+    c.release(at([1.75, 0.75]));
+    c.press(at([2.25, 1.25], true));
+    c.release(at([2.25, 1.25], true));
     expect(store.getState().selection).toHaveLength(2);
     c.press(at([2.25, 1.25]));
     c.move(at([2.35, 1.25]));
@@ -102,15 +127,24 @@ describe('undo and redo', () => {
   it('double-click inserts a vertex on an edge; Delete removes vertices and shapes', () => {
     const store = createAppStore(box);
     const c = new CanvasController(store);
-    c.press(at([1.02, 0])); c.release(at([1.02, 0]));
-    c.press(at([1.02, 0])); c.release(at([1.02, 0]));
+    c.press(at([1.02, 0]));
+    c.release(at([1.02, 0]));
+    c.press(at([1.02, 0]));
+    c.release(at([1.02, 0]));
     c.doubleClick(at([1.02, 0]));
-    expect(store.getState().doc.shapes[0].points).toEqual([[0, 0], [1, 0], [4, 0], [4, 2], [0, 2]]);
+    expect(store.getState().doc.shapes[0].points).toEqual([
+      [0, 0],
+      [1, 0],
+      [4, 0],
+      [4, 2],
+      [0, 2],
+    ]);
     expect(store.getState().doc.shapes[0].surface).toEqual(['floor', 'floor', 'right', 'roof', 'left']);
     expect(store.getState().selection).toEqual([{ type: 'vertex', shape: 0, index: 1 }]);
     c.deleteSelection();
     expect(store.getState().doc.shapes[0].points).toEqual(box.shapes[0].points);
-    c.press(at([2, 1])); c.release(at([2, 1]));
+    c.press(at([2, 1]));
+    c.release(at([2, 1]));
     c.deleteSelection();
     expect(store.getState().doc.shapes).toHaveLength(1);
     store.getState().undo();
@@ -118,10 +152,25 @@ describe('undo and redo', () => {
   });
 
   it('refuses to take a shape below three points and says so', () => {
-    const tri: SketchFile = { version: 1, units: 'm', shapes: [{ kind: 'enclosure', points: [[0, 0], [1, 0], [0, 1]], surface: 'w' }] };
+    const tri: SketchFile = {
+      version: 1,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [1, 0],
+            [0, 1],
+          ],
+          surface: 'w',
+        },
+      ],
+    };
     const store = createAppStore(tri);
     const c = new CanvasController(store);
-    c.press(at([1, 0])); c.release(at([1, 0]));
+    c.press(at([1, 0]));
+    c.release(at([1, 0]));
     c.deleteSelection();
     expect(store.getState().doc.shapes[0].points).toHaveLength(3);
     expect(store.getState().notices.at(-1)?.text).toMatch(/at least three points/);

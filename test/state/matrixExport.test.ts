@@ -20,12 +20,25 @@ function checked(doc: unknown) {
 function shownFor(doc: SketchFile): ShownResult {
   const sketch = checked(doc);
   const { scene, surfaceNames } = documentApi.toScene(sketch);
-  return { sketch, names: surfaceNames, units: sketch.units, stale: false, result: computeViewFactors(scene), elapsedMs: 0 };
+  return {
+    sketch,
+    names: surfaceNames,
+    units: sketch.units,
+    stale: false,
+    result: computeViewFactors(scene),
+    elapsedMs: 0,
+  };
 }
 
 function cliCsv(doc: SketchFile): string {
   let out = '';
-  const code = runFactors(['sketch.json', '--csv'], { out: (t) => { out += t; }, err: () => {}, readFile: () => documentApi.serialize(doc) });
+  const code = runFactors(['sketch.json', '--csv'], {
+    out: (t) => {
+      out += t;
+    },
+    err: () => {},
+    readFile: () => documentApi.serialize(doc),
+  });
   expect(code).toBe(0);
   return out;
 }

@@ -2,14 +2,26 @@
 export class MemoryStorage implements Storage {
   private items = new Map<string, string>();
   refuseWrites = false;
-  get length() { return this.items.size; }
-  clear() { this.items.clear(); }
-  getItem(k: string) { return this.items.has(k) ? this.items.get(k)! : null; }
-  key(i: number) { return [...this.items.keys()][i] ?? null; }
-  removeItem(k: string) { this.items.delete(k); }
+  get length() {
+    return this.items.size;
+  }
+  clear() {
+    this.items.clear();
+  }
+  getItem(k: string) {
+    return this.items.has(k) ? this.items.get(k)! : null;
+  }
+  key(i: number) {
+    return [...this.items.keys()][i] ?? null;
+  }
+  removeItem(k: string) {
+    this.items.delete(k);
+  }
   setItem(k: string, v: string) {
     if (this.refuseWrites) throw new Error('QuotaExceededError');
     this.items.set(k, String(v));
   }
-  keys() { return [...this.items.keys()]; }
+  keys() {
+    return [...this.items.keys()];
+  }
 }

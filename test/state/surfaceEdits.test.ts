@@ -6,14 +6,35 @@ import { edgeNames } from '../../src/state/geometry/polygon';
 import { restore } from '../../src/document';
 import type { SketchFile } from '../../src/state/sketchFile';
 
-const base: SketchFile = addShape({ version: 1, units: 'm', shapes: [] }, 'enclosure', [[0, 0], [4, 0], [4, 2], [0, 2]]);
+const base: SketchFile = addShape({ version: 1, units: 'm', shapes: [] }, 'enclosure', [
+  [0, 0],
+  [4, 0],
+  [4, 2],
+  [0, 2],
+]);
 
 describe('named surfaces', () => {
   it('groups chosen edges into one surface, also across shapes', () => {
-    let doc = addShape(base, 'solid', [[1, 0.5], [2, 0.5], [2, 1], [1, 1]]);
-    doc = groupEdges(doc, [{ shape: 0, index: 1 }, { shape: 0, index: 3 }], 'side walls');
+    let doc = addShape(base, 'solid', [
+      [1, 0.5],
+      [2, 0.5],
+      [2, 1],
+      [1, 1],
+    ]);
+    doc = groupEdges(
+      doc,
+      [
+        { shape: 0, index: 1 },
+        { shape: 0, index: 3 },
+      ],
+      'side walls',
+    );
     expect(edgeNames(doc.shapes[0])).toEqual(['wall 1', 'side walls', 'wall 3', 'side walls']);
-    doc = groupEdges(doc, [0, 1, 2, 3].map((index) => ({ shape: 1, index })), 'block');
+    doc = groupEdges(
+      doc,
+      [0, 1, 2, 3].map((index) => ({ shape: 1, index })),
+      'block',
+    );
     expect(doc.shapes[1].surface).toBe('block'); // one name for the whole shape
     doc = groupEdges(doc, [{ shape: 0, index: 0 }], 'block'); // an existing name merges
     expect(edgeNames(doc.shapes[0])[0]).toBe('block');
@@ -21,7 +42,11 @@ describe('named surfaces', () => {
   });
 
   it('renames everywhere and carries the properties with the name', () => {
-    const doc: SketchFile = { ...base, shapes: [{ ...base.shapes[0], surface: ['floor', 'wall', 'roof', 'wall'] }], surfaces: { wall: { emissivity: 0.8 } } };
+    const doc: SketchFile = {
+      ...base,
+      shapes: [{ ...base.shapes[0], surface: ['floor', 'wall', 'roof', 'wall'] }],
+      surfaces: { wall: { emissivity: 0.8 } },
+    };
     const r = renameSurface(doc, 'wall', 'sides');
     expect(edgeNames(r.shapes[0])).toEqual(['floor', 'sides', 'roof', 'sides']);
     expect(r.surfaces).toEqual({ sides: { emissivity: 0.8 } });
@@ -29,7 +54,11 @@ describe('named surfaces', () => {
   });
 
   it('splits a surface into one name per edge, copying its properties', () => {
-    const doc: SketchFile = { ...base, shapes: [{ ...base.shapes[0], surface: 'box' }], surfaces: { box: { emissivity: 0.5, adiabatic: true } } };
+    const doc: SketchFile = {
+      ...base,
+      shapes: [{ ...base.shapes[0], surface: 'box' }],
+      surfaces: { box: { emissivity: 0.5, adiabatic: true } },
+    };
     const r = splitSurface(doc, 'box');
     expect(edgeNames(r.shapes[0])).toEqual(['box 1', 'box 2', 'box 3', 'box 4']);
     expect(Object.keys(r.surfaces!)).toEqual(['box 1', 'box 2', 'box 3', 'box 4']);
@@ -38,18 +67,45 @@ describe('named surfaces', () => {
   });
 
   it('gives new shapes unique automatic names', () => {
-    let doc = addShape(base, 'solid', [[1, 0.5], [2, 0.5], [1.5, 1]]);
-    doc = addShape(doc, 'solid', [[2.5, 0.5], [3, 0.5], [2.75, 1]]);
+    let doc = addShape(base, 'solid', [
+      [1, 0.5],
+      [2, 0.5],
+      [1.5, 1],
+    ]);
+    doc = addShape(doc, 'solid', [
+      [2.5, 0.5],
+      [3, 0.5],
+      [2.75, 1],
+    ]);
     expect(edgeNames(doc.shapes[2])).toEqual(['body 2 edge 1', 'body 2 edge 2', 'body 2 edge 3']);
     const clash = renameSurface(doc, 'wall 1', 'body 3 edge 1');
-    const next = addShape(clash, 'solid', [[0.2, 0.2], [0.6, 0.2], [0.4, 0.4]]);
+    const next = addShape(clash, 'solid', [
+      [0.2, 0.2],
+      [0.6, 0.2],
+      [0.4, 0.4],
+    ]);
     expect(edgeNames(next.shapes[3])[0]).toBe('body 3 edge 1 (2)');
   });
 });
 
 describe('units', () => {
   it('converts coordinates (1 in = 25.4 mm exactly) or only relabels', () => {
-    const doc: SketchFile = { version: 1, units: 'in', shapes: [{ kind: 'enclosure', points: [[0, 0], [10, 0], [10, 1], [0, 1]], surface: 'w' }] };
+    const doc: SketchFile = {
+      version: 1,
+      units: 'in',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [10, 0],
+            [10, 1],
+            [0, 1],
+          ],
+          surface: 'w',
+        },
+      ],
+    };
     const mm = changeUnits(doc, 'mm', 'convert');
     expect(mm.units).toBe('mm');
     expect(mm.shapes[0].points[1]).toEqual([254, 0]);

@@ -24,7 +24,9 @@ describe('the app', () => {
     await waitFor(() => expect(within(matrix()).getByRole('rowheader', { name: /fired floor/ })).toBeTruthy());
     expect(within(matrix()).getAllByRole('row')).toHaveLength(1 + 7);
     expect(screen.getByRole('button', { name: /CSV/ })).toBeTruthy();
-    expect(screen.getByRole('note', { name: /safety/i }).textContent).toMatch(/gray-diffuse radiation only.*licensed engineering practice/i);
+    expect(screen.getByRole('note', { name: /safety/i }).textContent).toMatch(
+      /gray-diffuse radiation only.*licensed engineering practice/i,
+    );
     await waitFor(() => expect(document.querySelector('[data-status]')?.textContent).toMatch(/Up to date/));
   });
 
@@ -33,13 +35,34 @@ describe('the app', () => {
     const { store } = renderApp();
     const before = store.getState().doc;
     const input = screen.getByLabelText<HTMLInputElement>('Sketch file to open');
-    const bad = new File(['{"version": 1, "units": "furlong", "shapes": []}'], 'colleague.json', { type: 'application/json' });
+    const bad = new File(['{"version": 1, "units": "furlong", "shapes": []}'], 'colleague.json', {
+      type: 'application/json',
+    });
     await user.upload(input, bad);
     const alert = await screen.findByRole('alert');
     expect(alert.textContent).toContain('Could not open "colleague.json"');
     expect(alert.textContent).toMatch(/units/);
     expect(store.getState().doc).toBe(before);
-    const good = new File([JSON.stringify({ version: 1, units: 'mm', shapes: [{ kind: 'enclosure', points: [[0, 0], [100, 0], [0, 100]], surface: 'w' }] })], 'ok.json');
+    const good = new File(
+      [
+        JSON.stringify({
+          version: 1,
+          units: 'mm',
+          shapes: [
+            {
+              kind: 'enclosure',
+              points: [
+                [0, 0],
+                [100, 0],
+                [0, 100],
+              ],
+              surface: 'w',
+            },
+          ],
+        }),
+      ],
+      'ok.json',
+    );
     await user.upload(input, good);
     await waitFor(() => expect(store.getState().doc.units).toBe('mm'));
     // Opening is one undo step.
@@ -59,10 +82,20 @@ describe('the app', () => {
   it('groups selected edges into a named surface and renames it in the Surfaces tab', async () => {
     const user = userEvent.setup();
     const { store } = renderApp();
-    store.getState().setSelection([{ type: 'edge', shape: 0, index: 0 }, { type: 'edge', shape: 0, index: 2 }]);
+    store.getState().setSelection([
+      { type: 'edge', shape: 0, index: 0 },
+      { type: 'edge', shape: 0, index: 2 },
+    ]);
     await user.type(await screen.findByLabelText('surface name'), 'hot faces');
     await user.click(screen.getByRole('button', { name: 'Group' }));
-    expect(store.getState().doc.shapes[0].surface).toEqual(['hot faces', 'side walls', 'hot faces', 'refractory roof', 'refractory roof', 'side walls']);
+    expect(store.getState().doc.shapes[0].surface).toEqual([
+      'hot faces',
+      'side walls',
+      'hot faces',
+      'refractory roof',
+      'refractory roof',
+      'side walls',
+    ]);
     await user.click(screen.getByRole('tab', { name: 'Surfaces' }));
     const name = screen.getByDisplayValue('hot faces');
     await user.clear(name);
@@ -110,12 +143,19 @@ describe('the app', () => {
     expect(store.getState().doc).toBe(demoSketch);
     // The next job hangs: after the time limit the app says so and is not stuck computing.
     // A change of geometry posts a job (units or names would not).
-    const shift = (dx: number) => (d: SketchFile): SketchFile => ({ ...d, shapes: d.shapes.map((sh) => ({ ...sh, points: sh.points.map(([x, y]): [number, number] => [x + dx, y]) })) });
+    const shift =
+      (dx: number) =>
+      (d: SketchFile): SketchFile => ({
+        ...d,
+        shapes: d.shapes.map((sh) => ({ ...sh, points: sh.points.map(([x, y]): [number, number] => [x + dx, y]) })),
+      });
     store.getState().edit(shift(0.5));
     // (The job reaching the new worker is checked rather than the brief "computing"
     // state, which a loaded machine can pass before the first poll.)
     await waitFor(() => expect(workers[1]?.calls).toHaveLength(1));
-    await waitFor(() => expect(screen.getAllByRole('alert').some((a) => /took too long/.test(a.textContent ?? ''))).toBe(true));
+    await waitFor(() =>
+      expect(screen.getAllByRole('alert').some((a) => /took too long/.test(a.textContent ?? ''))).toBe(true),
+    );
     expect(document.querySelector('[data-status]')?.getAttribute('data-status')).toBe('error');
     expect(store.getState().doc.shapes[0].points[0][0]).toBe(demoSketch.shapes[0].points[0][0] + 0.5);
     // A third, healthy worker answers the next edit.

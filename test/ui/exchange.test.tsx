@@ -12,7 +12,8 @@ configure({ asyncUtilTimeout: 8000 });
 afterEach(() => cleanup());
 
 const results = () => screen.getByRole('table', { name: /heat exchange per surface/i });
-const rowOf = (name: string) => within(results()).getByRole('row', { name: new RegExp(`^${name.replace(/[()]/g, '\\$&')}(\\s|$)`) });
+const rowOf = (name: string) =>
+  within(results()).getByRole('row', { name: new RegExp(`^${name.replace(/[()]/g, '\\$&')}(\\s|$)`) });
 /** Cells of a surface's row: condition, emissivity, T, net heat, net flux[, total]. */
 const cellsOf = (name: string) => within(rowOf(name)).getAllByRole('cell');
 const netHeatCell = (name: string) => cellsOf(name)[3];
@@ -33,10 +34,29 @@ async function type(user: ReturnType<typeof userEvent.setup>, field: HTMLElement
 
 // Two long concentric squares, inner 0.2 m (solid, convex: F_12 = 1) in outer 0.6 m.
 const squares: SketchFile = {
-  version: 1, units: 'm',
+  version: 1,
+  units: 'm',
   shapes: [
-    { kind: 'enclosure', points: [[0, 0], [0.6, 0], [0.6, 0.6], [0, 0.6]], surface: 'outer' },
-    { kind: 'solid', points: [[0.2, 0.2], [0.4, 0.2], [0.4, 0.4], [0.2, 0.4]], surface: 'inner' },
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [0.6, 0],
+        [0.6, 0.6],
+        [0, 0.6],
+      ],
+      surface: 'outer',
+    },
+    {
+      kind: 'solid',
+      points: [
+        [0.2, 0.2],
+        [0.4, 0.2],
+        [0.4, 0.4],
+        [0.2, 0.4],
+      ],
+      surface: 'inner',
+    },
   ],
   surfaces: { inner: { emissivity: 0.6, temperature: 1000 }, outer: { emissivity: 0.8, temperature: 500 } },
 };
@@ -59,9 +79,12 @@ describe('heat-exchange tab', () => {
     await openTab();
     expect(within(results()).getAllByRole('row')).toHaveLength(1 + 7);
     expect(screen.getByRole('img', { name: /bar chart of net heat/i })).toBeTruthy();
-    expect(screen.getByRole('note', { name: /caution about these results/i }).textContent)
-      .toMatch(/gray-diffuse radiation only.*no convection.*absorbing gas.*local codes and licensed engineering practice/i);
-    await waitFor(() => expect(document.querySelector('[data-exchange-status]')?.getAttribute('data-exchange-status')).toBe('solved'));
+    expect(screen.getByRole('note', { name: /caution about these results/i }).textContent).toMatch(
+      /gray-diffuse radiation only.*no convection.*absorbing gas.*local codes and licensed engineering practice/i,
+    );
+    await waitFor(() =>
+      expect(document.querySelector('[data-exchange-status]')?.getAttribute('data-exchange-status')).toBe('solved'),
+    );
     // The fired floor (1250 K) gives heat off; the 900 K tubes take it up; the roof is reradiating (net 0).
     expect(Number(netHeatCell('fired floor').getAttribute('data-value'))).toBeGreaterThan(0);
     expect(Number(netHeatCell('tube 1').getAttribute('data-value'))).toBeLessThan(0);
@@ -115,9 +138,13 @@ describe('heat-exchange tab', () => {
     await user.selectOptions(screen.getByLabelText('surface'), 'side walls');
     await user.click(screen.getByRole('button', { name: 'Use defaults' }));
     expect(Object.hasOwn(store.getState().doc.surfaces!, 'side walls')).toBe(false);
-    expect(screen.getByText(/No properties in the file: the defaults apply \(emissivity 0\.9, adiabatic\)/)).toBeTruthy();
+    expect(
+      screen.getByText(/No properties in the file: the defaults apply \(emissivity 0\.9, adiabatic\)/),
+    ).toBeTruthy();
     expect(screen.getByLabelText<HTMLInputElement>('emissivity').placeholder).toBe('0.9 (default)');
-    expect(screen.getByLabelText<HTMLSelectElement>('condition').selectedOptions[0].textContent).toBe('adiabatic (reradiating) (default)');
+    expect(screen.getByLabelText<HTMLSelectElement>('condition').selectedOptions[0].textContent).toBe(
+      'adiabatic (reradiating) (default)',
+    );
     expect(cellsOf('side walls')[1].textContent).toBe('0.9');
   });
 
@@ -126,7 +153,9 @@ describe('heat-exchange tab', () => {
     store.getState().edit(() => squares);
     const q = twoSurface(1000, 500, 0.6, 0.8, 0.8, 2.4);
     await waitFor(() => expect(within(results()).getAllByRole('row')).toHaveLength(3));
-    await waitFor(() => expect(document.querySelector('[data-exchange-status]')?.getAttribute('data-exchange-status')).toBe('solved'));
+    await waitFor(() =>
+      expect(document.querySelector('[data-exchange-status]')?.getAttribute('data-exchange-status')).toBe('solved'),
+    );
     const cell = netHeatCell('inner');
     expect(Math.abs(Number(cell.getAttribute('data-value')) - q)).toBeLessThanOrEqual(1e-9 * q);
     shownMatches(cell.textContent, q);
@@ -161,10 +190,29 @@ describe('heat-exchange tab', () => {
   it('names the surface that needs a surroundings temperature and sets one in degrees C', async () => {
     const { user, store } = await openTab();
     store.getState().edit(() => ({
-      version: 1, units: 'm',
+      version: 1,
+      units: 'm',
       shapes: [
-        { kind: 'solid', points: [[0, 0], [1, 0], [1, 0.1], [0, 0.1]], surface: 'plate' },
-        { kind: 'solid', points: [[0, 1], [1, 1], [1, 1.1], [0, 1.1]], surface: 'cover' },
+        {
+          kind: 'solid',
+          points: [
+            [0, 0],
+            [1, 0],
+            [1, 0.1],
+            [0, 0.1],
+          ],
+          surface: 'plate',
+        },
+        {
+          kind: 'solid',
+          points: [
+            [0, 1],
+            [1, 1],
+            [1, 1.1],
+            [0, 1.1],
+          ],
+          surface: 'cover',
+        },
       ],
       surfaces: { plate: { temperature: 400 } },
     }));

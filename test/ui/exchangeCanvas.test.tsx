@@ -14,7 +14,9 @@ import { demoSketch } from '../../src/state/demo';
 
 afterEach(() => cleanup());
 
-const inThread: JobRunner = { run: async (job) => ({ kind: 'done', result: await viewFactorApi.compute(job), elapsedMs: 0 }) };
+const inThread: JobRunner = {
+  run: async (job) => ({ kind: 'done', result: await viewFactorApi.compute(job), elapsedMs: 0 }),
+};
 
 function liveDemo() {
   const store = createAppStore(demoSketch);
@@ -70,7 +72,11 @@ describe('heat legend over the canvas', () => {
   it('toggles off / net flux / temperature and shows the scale with its unit', async () => {
     const user = userEvent.setup();
     const store = liveDemo();
-    render(<AppProvider store={store} api={documentApi}><HeatLegend /></AppProvider>);
+    render(
+      <AppProvider store={store} api={documentApi}>
+        <HeatLegend />
+      </AppProvider>,
+    );
     await waitFor(() => expect(store.getState().exchange.kind).toBe('solved'));
     expect(screen.queryByLabelText('Colour legend')).toBeNull();
     await user.click(screen.getByRole('radio', { name: 'net flux' }));

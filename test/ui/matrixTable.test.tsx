@@ -16,8 +16,11 @@ function shown(closed: boolean): ShownResult {
     stale: false,
     elapsedMs: 1,
     result: {
-      edgeCount: 2, surfaceCount: 2, closed,
-      edgeLength: Float64Array.from([1, 2]), surfaceLength: Float64Array.from([1, 2]),
+      edgeCount: 2,
+      surfaceCount: 2,
+      closed,
+      edgeLength: Float64Array.from([1, 2]),
+      surfaceLength: Float64Array.from([1, 2]),
       // L1 F12 = 1 but L2 F21 = 2 * 0.4 = 0.8: a reciprocity residual of 0.2.
       F: Float64Array.from([0, 1, 0.4, 0.6]),
       rowSumResidual: Float64Array.from([0, 1e-6]),
@@ -27,7 +30,18 @@ function shown(closed: boolean): ShownResult {
 }
 
 function renderTable(closed = true, onHover = vi.fn()) {
-  render(<MatrixTable view={matrixView(shown(closed))} digits={3} units="m" order={new Map()} selected={new Set(['outer'])} hoverPair={null} onHover={onHover} stale={false} />);
+  render(
+    <MatrixTable
+      view={matrixView(shown(closed))}
+      digits={3}
+      units="m"
+      order={new Map()}
+      selected={new Set(['outer'])}
+      hoverPair={null}
+      onHover={onHover}
+      stale={false}
+    />,
+  );
   return { table: screen.getByRole('table', { name: /view factor/i }), onHover };
 }
 
@@ -36,7 +50,9 @@ describe('matrix table', () => {
     const { table } = renderTable();
     const rows = within(table).getAllByRole('row');
     expect(rows).toHaveLength(3);
-    const cells = within(rows[2]).getAllByRole('cell').map((c) => c.textContent);
+    const cells = within(rows[2])
+      .getAllByRole('cell')
+      .map((c) => c.textContent);
     expect(cells[0]).toBe('2');
     expect(cells[1]).toMatch(/^0\.400/);
     expect(cells[2]).toMatch(/^0\.600/);
@@ -59,7 +75,9 @@ describe('matrix table', () => {
 
   it('reports the hovered pair and highlights the selected surface', () => {
     const { table, onHover } = renderTable();
-    const cell = within(table).getAllByRole('cell').find((c) => c.title.startsWith('F from inner to outer'))!;
+    const cell = within(table)
+      .getAllByRole('cell')
+      .find((c) => c.title.startsWith('F from inner to outer'))!;
     fireEvent.mouseEnter(cell);
     expect(onHover).toHaveBeenLastCalledWith(['inner', 'outer']);
     fireEvent.mouseLeave(table);

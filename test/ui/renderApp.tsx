@@ -11,11 +11,20 @@ import { viewFactorApi } from '../../src/worker/api';
 import type { WorkerHandle } from '../../src/worker/client';
 import { MemoryStorage } from '../state/memoryStorage';
 
-export const inThreadWorker = (): WorkerHandle => ({ compute: async (job) => viewFactorApi.compute(job), terminate: () => {} });
+export const inThreadWorker = (): WorkerHandle => ({
+  compute: async (job) => viewFactorApi.compute(job),
+  terminate: () => {},
+});
 
 export function renderApp(options: { storage?: MemoryStorage; spawn?: () => WorkerHandle; timeLimitMs?: number } = {}) {
   const storage = options.storage ?? new MemoryStorage();
-  const runtime = startRuntime({ storage, api: documentApi, spawn: options.spawn ?? inThreadWorker, demo: demoSketch, timeLimitMs: options.timeLimitMs });
+  const runtime = startRuntime({
+    storage,
+    api: documentApi,
+    spawn: options.spawn ?? inThreadWorker,
+    demo: demoSketch,
+    timeLimitMs: options.timeLimitMs,
+  });
   const view = render(
     <AppProvider store={runtime.store} api={documentApi}>
       <App />

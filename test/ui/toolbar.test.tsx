@@ -28,14 +28,24 @@ function setup() {
   let c: CanvasController | null = null;
   render(
     <AppProvider store={store} api={documentApi}>
-      <Toolbar /><Keys onController={(x) => { c = x; }} /><CanvasStatus /><HelpOverlay />
+      <Toolbar />
+      <Keys
+        onController={(x) => {
+          c = x;
+        }}
+      />
+      <CanvasStatus />
+      <HelpOverlay />
     </AppProvider>,
   );
   if (!c) throw new Error('the controller was not handed out');
   return { store, c: c as CanvasController };
 }
 
-const key = (k: string) => act(() => { fireEvent.keyDown(window, { key: k }); });
+const key = (k: string) =>
+  act(() => {
+    fireEvent.keyDown(window, { key: k });
+  });
 const at = (x: number, y: number) => ({ at: [x, y] as [number, number], shift: false, tolerance: 0.05 });
 
 describe('tools in the chrome', () => {
@@ -53,7 +63,13 @@ describe('tools in the chrome', () => {
   it('tool letters switch tools; the tube shows its settings, which write to the store', () => {
     const { store } = setup();
     expect(screen.queryByLabelText('sides')).toBeNull();
-    for (const [k, id] of [['e', 'enclosure'], ['B', 'solid'], ['r', 'rectangle'], ['t', 'tube'], ['v', 'select']] as const) {
+    for (const [k, id] of [
+      ['e', 'enclosure'],
+      ['B', 'solid'],
+      ['r', 'rectangle'],
+      ['t', 'tube'],
+      ['v', 'select'],
+    ] as const) {
       key(k);
       expect(store.getState().tool).toBe(id);
     }
@@ -73,13 +89,29 @@ describe('tools in the chrome', () => {
   it('Enter, Backspace and Escape reach the outline being drawn; the status line counts its points', () => {
     const { store, c } = setup();
     key('e');
-    act(() => { for (const [x, y] of [[0, 0], [2, 0], [2, 1], [1, 2]]) c.press(at(x, y)); });
-    expect(document.querySelector('.canvas-status')?.textContent).toMatch(/Click the corners of the enclosing wall.* — 4 points so far$/);
+    act(() => {
+      for (const [x, y] of [
+        [0, 0],
+        [2, 0],
+        [2, 1],
+        [1, 2],
+      ])
+        c.press(at(x, y));
+    });
+    expect(document.querySelector('.canvas-status')?.textContent).toMatch(
+      /Click the corners of the enclosing wall.* — 4 points so far$/,
+    );
     key('Backspace');
     expect(store.getState().draft).toHaveLength(3);
     key('Enter');
-    expect(store.getState().doc.shapes[0].points).toEqual([[0, 0], [2, 0], [2, 1]]);
-    act(() => { c.press(at(0, 0)); });
+    expect(store.getState().doc.shapes[0].points).toEqual([
+      [0, 0],
+      [2, 0],
+      [2, 1],
+    ]);
+    act(() => {
+      c.press(at(0, 0));
+    });
     key('Escape');
     expect(store.getState().draft).toEqual([]);
     expect(store.getState().selection).toHaveLength(1);
@@ -91,10 +123,15 @@ describe('tools in the chrome', () => {
     setup();
     key('?');
     const dialog = screen.getByRole('dialog');
-    const rows = within(dialog).getAllByRole('row').map((r) => r.textContent);
+    const rows = within(dialog)
+      .getAllByRole('row')
+      .map((r) => r.textContent);
     expect(rows.slice(0, 5)).toEqual([
-      expect.stringMatching(/^VSelect: /), expect.stringMatching(/^EEnclosure: /), expect.stringMatching(/^BBody: /),
-      expect.stringMatching(/^RRectangle: /), expect.stringMatching(/^TTube: /),
+      expect.stringMatching(/^VSelect: /),
+      expect.stringMatching(/^EEnclosure: /),
+      expect.stringMatching(/^BBody: /),
+      expect.stringMatching(/^RRectangle: /),
+      expect.stringMatching(/^TTube: /),
     ]);
   });
 });

@@ -16,7 +16,12 @@ describe('view-factor client', () => {
     const client = new ViewFactorClient(spawn, { timeLimitMs: 1000 });
     const w = workers[0];
     const outcomes: (JobOutcome | undefined)[] = [];
-    [1, 2, 3, 4].forEach((t, i) => void client.run(job(t)).then((o) => { outcomes[i] = o; }));
+    [1, 2, 3, 4].forEach(
+      (t, i) =>
+        void client.run(job(t)).then((o) => {
+          outcomes[i] = o;
+        }),
+    );
     await flush();
     expect(w.calls).toHaveLength(1); // job 1 runs; 2 and 3 were replaced by 4
     expect(outcomes[1]).toEqual({ kind: 'dropped' });
@@ -56,7 +61,9 @@ describe('view-factor client', () => {
     const { workers, spawn } = spawner();
     const client = new ViewFactorClient(spawn, { timeLimitMs: 500 });
     let outcome: JobOutcome | undefined;
-    void client.run(job(1)).then((o) => { outcome = o; });
+    void client.run(job(1)).then((o) => {
+      outcome = o;
+    });
     await vi.advanceTimersByTimeAsync(499);
     expect(outcome).toBeUndefined();
     await vi.advanceTimersByTimeAsync(2);
@@ -86,7 +93,15 @@ describe('view-factor client', () => {
   });
 
   it('a compute that throws synchronously fails the job instead of the caller', async () => {
-    const client = new ViewFactorClient(() => ({ compute: () => { throw new Error('boom'); }, terminate: () => {} }), { timeLimitMs: 1000 });
+    const client = new ViewFactorClient(
+      () => ({
+        compute: () => {
+          throw new Error('boom');
+        },
+        terminate: () => {},
+      }),
+      { timeLimitMs: 1000 },
+    );
     expect(await client.run(job(1))).toMatchObject({ kind: 'failed', reason: 'threw', message: 'boom' });
     client.dispose();
   });

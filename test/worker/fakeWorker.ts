@@ -3,7 +3,11 @@
 import type { WorkerHandle } from '../../src/worker/client';
 import type { EdgeViewFactors, ViewFactorJob } from '../../src/worker/job';
 
-export interface PendingCall { job: ViewFactorJob; resolve: (r: EdgeViewFactors) => void; reject: (e: unknown) => void }
+export interface PendingCall {
+  job: ViewFactorJob;
+  resolve: (r: EdgeViewFactors) => void;
+  reject: (e: unknown) => void;
+}
 
 export class FakeWorker implements WorkerHandle {
   calls: PendingCall[] = [];
@@ -12,18 +16,36 @@ export class FakeWorker implements WorkerHandle {
   compute(job: ViewFactorJob): Promise<EdgeViewFactors> {
     return new Promise((resolve, reject) => this.calls.push({ job, resolve, reject }));
   }
-  terminate() { this.terminated = true; }
-  onCrash(listener: (m: string) => void) { this.crash = listener; }
-  die(message: string) { this.crash?.(message); }
+  terminate() {
+    this.terminated = true;
+  }
+  onCrash(listener: (m: string) => void) {
+    this.crash = listener;
+  }
+  die(message: string) {
+    this.crash?.(message);
+  }
 }
 
 /** A result shaped like the core's, tagged with the job's first coordinate so tests can tell jobs apart. */
 export function fakeResult(job: ViewFactorJob): EdgeViewFactors {
   const n = job.polygons.reduce((sum, p) => sum + p.points.length / 2, 0);
-  return { edgeCount: n, edgeLength: new Float64Array(n).fill(job.polygons[0]?.points[0] ?? 0), F: new Float64Array(n * n), closed: true };
+  return {
+    edgeCount: n,
+    edgeLength: new Float64Array(n).fill(job.polygons[0]?.points[0] ?? 0),
+    F: new Float64Array(n * n),
+    closed: true,
+  };
 }
 
 export function spawner() {
   const workers: FakeWorker[] = [];
-  return { workers, spawn: () => { const w = new FakeWorker(); workers.push(w); return w; } };
+  return {
+    workers,
+    spawn: () => {
+      const w = new FakeWorker();
+      workers.push(w);
+      return w;
+    },
+  };
 }

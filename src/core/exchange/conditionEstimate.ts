@@ -14,7 +14,12 @@ export interface FactoredSystem {
  * a factored system; x, y, z are scratch arrays of length n. Returns +Infinity
  * when a solve overflows.
  */
-export function estimateInverseNormOne(system: FactoredSystem, x: Float64Array, y: Float64Array, z: Float64Array): number {
+export function estimateInverseNormOne(
+  system: FactoredSystem,
+  x: Float64Array,
+  y: Float64Array,
+  z: Float64Array,
+): number {
   const n = system.n;
   x.fill(1 / n);
   let est = 0;

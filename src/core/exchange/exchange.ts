@@ -171,7 +171,8 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
         Eb[i] = emissivePower(c.temperature);
         anchored = true;
       } else if (c.kind === 'heatFlux') {
-        if (!Number.isFinite(c.heatFlux)) return exchangeFailure('heat-flux-not-finite', { surface: i, value: c.heatFlux });
+        if (!Number.isFinite(c.heatFlux))
+          return exchangeFailure('heat-flux-not-finite', { surface: i, value: c.heatFlux });
         fixedFlux[i] = c.heatFlux;
       } else if (c.kind !== 'adiabatic') {
         return exchangeFailure('unknown-condition', { surface: i });
@@ -208,7 +209,8 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
     const w = c.kind === 'temperature' ? 1 - eps[i] : c.kind === 'opening' ? 0 : 1;
     for (let j = 0; j < n; j++) M[ri + j] = -w * F[ri + j];
     M[ri + i] += 1;
-    J[i] = c.kind === 'temperature' || c.kind === 'opening' ? eps[i] * Eb[i] + w * Fs[i] * Es : fixedFlux[i] + Fs[i] * Es;
+    J[i] =
+      c.kind === 'temperature' || c.kind === 'opening' ? eps[i] * Eb[i] + w * Fs[i] * Es : fixedFlux[i] + Fs[i] * Es;
   }
   let reciprocalCondition: number;
   try {

@@ -52,6 +52,9 @@ export interface ExchangeFailure {
 }
 
 /** Builds a failure; a helper so each refusal in the solver is one line. */
-export function exchangeFailure(code: ExchangeFailureCode, where: Omit<ExchangeFailure, 'ok' | 'code'> = {}): ExchangeFailure {
+export function exchangeFailure(
+  code: ExchangeFailureCode,
+  where: Omit<ExchangeFailure, 'ok' | 'code'> = {},
+): ExchangeFailure {
   return { ok: false, code, ...where };
 }

@@ -285,7 +285,15 @@ export class DenseLuSolver {
       const kb = Math.min(INNER_BLOCK, kMain - p0);
       for (let j0 = 0; j0 < wMain; j0 += COLUMN_BLOCK) {
         const wb = Math.min(COLUMN_BLOCK, wMain - j0);
-        kernel((rc * n + cc + j0) * 8, (rc * n + pa + p0) * 8, ((pa + p0) * n + cc + j0) * 8, m2, kb >> 2, wb >> 2, stride);
+        kernel(
+          (rc * n + cc + j0) * 8,
+          (rc * n + pa + p0) * 8,
+          ((pa + p0) * n + cc + j0) * 8,
+          m2,
+          kb >> 2,
+          wb >> 2,
+          stride,
+        );
       }
     }
     // Fringes the kernel's 2 x 4 x 4 blocks leave: leftover inner terms,

@@ -132,7 +132,14 @@ export function productKernelBytes(): Uint8Array<ArrayBuffer> {
   ]);
   const func = [...locals, ...body];
   return new Uint8Array([
-    0x00, 0x61, 0x73, 0x6d, 1, 0, 0, 0,
+    0x00,
+    0x61,
+    0x73,
+    0x6d,
+    1,
+    0,
+    0,
+    0,
     ...section(1, vec([[0x60, ...vec(Array.from({ length: 7 }, () => [I32])), 0]])),
     ...section(2, vec([[...name('env'), ...name('memory'), 0x02, 0x00, 0x01]])),
     ...section(3, vec([[0]])),

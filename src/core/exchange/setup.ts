@@ -34,7 +34,9 @@ export interface ExchangeSetup {
  */
 export function exchangeInputFor(setup: ExchangeSetup): ExchangeInput {
   const conditions = setup.conditions.map((c) => c ?? DEFAULT_CONDITION);
-  const emissivity = Float64Array.from(conditions, (c, i) => (c.kind === 'opening' ? 1 : (setup.emissivity[i] ?? DEFAULT_EMISSIVITY)));
+  const emissivity = Float64Array.from(conditions, (c, i) =>
+    c.kind === 'opening' ? 1 : (setup.emissivity[i] ?? DEFAULT_EMISSIVITY),
+  );
   return {
     viewFactors: setup.viewFactors,
     area: setup.lengthMetres,

@@ -24,7 +24,8 @@ export class WalkRanges {
   push(lo: number, hi: number): void {
     const k = this.count;
     if (k === this.lo.length) {
-      const lo2 = new Int32Array(2 * k), hi2 = new Int32Array(2 * k);
+      const lo2 = new Int32Array(2 * k),
+        hi2 = new Int32Array(2 * k);
       lo2.set(this.lo);
       hi2.set(this.hi);
       this.lo = lo2;
@@ -37,9 +38,17 @@ export class WalkRanges {
 }
 
 /** Append to `out` the walk positions in [0, n) whose angle A[first+m] lies in [a, b] (radians). */
-export function appendCornerWindow(A: Float64Array, first: number, n: number, a: number, b: number, out: WalkRanges): void {
+export function appendCornerWindow(
+  A: Float64Array,
+  first: number,
+  n: number,
+  a: number,
+  b: number,
+  out: WalkRanges,
+): void {
   const from = firstAtOrBelow(A, first, n, b);
-  let lo = from, hi = n; // first position below a
+  let lo = from,
+    hi = n; // first position below a
   while (lo < hi) {
     const mid = (lo + hi) >> 1;
     if (A[first + mid] < a) hi = mid;
@@ -57,7 +66,8 @@ export function intersectRanges(ranges: WalkRanges, other: WalkRanges, scratch: 
   scratch.count = 0;
   for (let x = 0; x < ranges.count; x++) {
     for (let y = 0; y < other.count; y++) {
-      const a = Math.max(ranges.lo[x], other.lo[y]), b = Math.min(ranges.hi[x], other.hi[y]);
+      const a = Math.max(ranges.lo[x], other.lo[y]),
+        b = Math.min(ranges.hi[x], other.hi[y]);
       if (a <= b) scratch.push(a, b);
     }
   }
@@ -86,7 +96,8 @@ export class ConvexWindows {
   find(ob: ObstacleIndex, b: number, region: ViewRegion, centreDist: Float64Array): boolean {
     const first = ob.bodyFirstEdge[b];
     const n = ob.bodyEdgeEnd[b] - first;
-    const r = ob.bodyR[b], rMin = ob.bodyRMin[b];
+    const r = ob.bodyR[b],
+      rMin = ob.bodyRMin[b];
     const ranges = this.ranges;
     ranges.count = 0;
     ranges.push(0, n - 1);

@@ -41,15 +41,27 @@ export class FixedPoints {
   chainCount = 0;
   private facing = new Uint8Array(64);
 
-  constructor(private readonly e: EdgeSet, private readonly ob: ObstacleIndex) {}
+  constructor(
+    private readonly e: EdgeSet,
+    private readonly ob: ObstacleIndex,
+  ) {}
 
   /**
    * Collect the fixed points for emitting piece a0-a1 and target piece b0-b1 from the
    * obstruction pieces: join them into chains (runs of one polygon's edges joined by
    * corners inside H) and keep each chain's ends and possible silhouette corners.
    */
-  build(pieces: ObstaclePieces, a0x: number, a0y: number, a1x: number, a1y: number,
-    b0x: number, b0y: number, b1x: number, b1y: number): void {
+  build(
+    pieces: ObstaclePieces,
+    a0x: number,
+    a0y: number,
+    a1x: number,
+    a1y: number,
+    b0x: number,
+    b0y: number,
+    b1x: number,
+    b1y: number,
+  ): void {
     this.count = 0;
     this.push(b0x, b0y, 0);
     this.push(b1x, b1y, 0);
@@ -58,7 +70,8 @@ export class FixedPoints {
     // Open chains start at a piece whose start is not inside H, or whose previous edge was not kept.
     const prevEdge = this.e.prevEdge;
     for (let s = 0; s < pieces.count; s++) {
-      if (!pieces.startInside[s] || !pieces.has(prevEdge[pieces.edge[s]])) this.walkChain(pieces, s, true, a0x, a0y, a1x, a1y);
+      if (!pieces.startInside[s] || !pieces.has(prevEdge[pieces.edge[s]]))
+        this.walkChain(pieces, s, true, a0x, a0y, a1x, a1y);
     }
     // What is left are closed chains: bodies lying wholly inside H.
     for (let s = 0; s < pieces.count; s++) {
@@ -67,7 +80,15 @@ export class FixedPoints {
     this.setChainStart(this.chainCount, this.count);
   }
 
-  private walkChain(pieces: ObstaclePieces, first: number, open: boolean, a0x: number, a0y: number, a1x: number, a1y: number): void {
+  private walkChain(
+    pieces: ObstaclePieces,
+    first: number,
+    open: boolean,
+    a0x: number,
+    a0y: number,
+    a1x: number,
+    a1y: number,
+  ): void {
     const E = this.e;
     this.setChainStart(this.chainCount++, this.count);
     if (open) this.push(pieces.px[first], pieces.py[first], 1);
@@ -81,8 +102,10 @@ export class FixedPoints {
         return;
       }
       // Corner b of `edge` lies inside H, and the next edge was kept too.
-      const wx = E.bx[edge], wy = E.by[edge];
-      if (silhouetteFromSegment(a0x, a0y, a1x, a1y, wx, wy, E.ax[edge], E.ay[edge], E.bx[next], E.by[next])) this.push(wx, wy, 0);
+      const wx = E.bx[edge],
+        wy = E.by[edge];
+      if (silhouetteFromSegment(a0x, a0y, a1x, a1y, wx, wy, E.ax[edge], E.ay[edge], E.bx[next], E.by[next]))
+        this.push(wx, wy, 0);
       s = pieces.pieceOf(next);
       if (pieces.walked[s]) return; // closed chain done
     }
@@ -95,14 +118,16 @@ export class FixedPoints {
    */
   private addWholeConvexBody(b: number, a0x: number, a0y: number, a1x: number, a1y: number): void {
     const E = this.e;
-    const first = this.ob.bodyFirstEdge[b], end = this.ob.bodyEdgeEnd[b];
+    const first = this.ob.bodyFirstEdge[b],
+      end = this.ob.bodyEdgeEnd[b];
     this.setChainStart(this.chainCount++, this.count);
     if (this.facing.length < end - first) this.facing = new Uint8Array(2 * (end - first));
     const facing = this.facing;
     for (let e = first; e < end; e++) facing[e - first] = facingOf(E, e, a0x, a0y, a1x, a1y);
     // Corner a of e sits between the edge before it (in the oriented walk) and e.
     for (let e = first; e < end; e++) {
-      if (cornerMayBeTangent(facing[E.prevEdge[e] - first] as Facing, facing[e - first] as Facing)) this.push(E.ax[e], E.ay[e], 0);
+      if (cornerMayBeTangent(facing[E.prevEdge[e] - first] as Facing, facing[e - first] as Facing))
+        this.push(E.ax[e], E.ay[e], 0);
     }
   }
 
@@ -141,11 +166,16 @@ export class FixedPoints {
 
 /** Facing of edge e seen from a0 and from a1 (front: the point lies strictly left of the edge's line). */
 function facingOf(E: EdgeSet, e: number, a0x: number, a0y: number, a1x: number, a1y: number): Facing {
-  const x0 = E.ax[e], y0 = E.ay[e];
-  const dx = E.bx[e] - x0, dy = E.by[e] - y0;
+  const x0 = E.ax[e],
+    y0 = E.ay[e];
+  const dx = E.bx[e] - x0,
+    dy = E.by[e] - y0;
   const f0 = dx * (a0y - y0) - dy * (a0x - x0);
   const f1 = dx * (a1y - y0) - dy * (a1x - x0);
-  const tol = 1e-12 * (Math.abs(dx) + Math.abs(dy)) * (Math.abs(a0x - x0) + Math.abs(a0y - y0) + Math.abs(a1x - x0) + Math.abs(a1y - y0));
+  const tol =
+    1e-12 *
+    (Math.abs(dx) + Math.abs(dy)) *
+    (Math.abs(a0x - x0) + Math.abs(a0y - y0) + Math.abs(a1x - x0) + Math.abs(a1y - y0));
   if (Math.abs(f0) <= tol || Math.abs(f1) <= tol) return IN_DOUBT;
   if (f0 > 0) return f1 > 0 ? FRONT : FRONT_AT_START;
   return f1 > 0 ? FRONT_AT_END : BACK;
@@ -162,17 +192,24 @@ export class Breakpoints {
    * cannot change.
    */
   find(points: FixedPoints, a0x: number, a0y: number, a1x: number, a1y: number): void {
-    const X = points.x, Y = points.y, boundary = points.onBoundary;
+    const X = points.x,
+      Y = points.y,
+      boundary = points.onBoundary;
     const n = points.count;
     let count = 0;
     for (let r = 0; r < n; r++) {
       if (boundary[r]) continue;
-      const rx = X[r], ry = Y[r];
+      const rx = X[r],
+        ry = Y[r];
       // orient(p, r, q) is affine along i': g0 at a0 and g1 at a1.
-      const r0x = rx - a0x, r0y = ry - a0y, r1x = rx - a1x, r1y = ry - a1y;
+      const r0x = rx - a0x,
+        r0y = ry - a0y,
+        r1x = rx - a1x,
+        r1y = ry - a1y;
       for (let q = r + 1; q < n; q++) {
         if (boundary[q]) continue;
-        const qx = X[q], qy = Y[q];
+        const qx = X[q],
+          qy = Y[q];
         const g0 = r0x * (qy - a0y) - r0y * (qx - a0x);
         const g1 = r1x * (qy - a1y) - r1y * (qx - a1x);
         if ((g0 < 0 && g1 > 0) || (g0 > 0 && g1 < 0)) {

@@ -28,7 +28,10 @@ export class PairIntegrator {
   private readonly breakpoints = new Breakpoints();
   private readonly gaps = new VisibleGaps();
 
-  constructor(private readonly e: EdgeSet, obstacles: ObstacleIndex) {
+  constructor(
+    private readonly e: EdgeSet,
+    obstacles: ObstacleIndex,
+  ) {
     let extent = 0;
     for (let k = 0; k < e.count; k++) extent = Math.max(extent, Math.abs(e.ax[k]), Math.abs(e.ay[k]));
     this.region = new ViewRegion(extent);
@@ -44,8 +47,14 @@ export class PairIntegrator {
   exchangeLength(i: number, j: number): number {
     if (i === j) return 0;
     const E = this.e;
-    let a0x = E.ax[i], a0y = E.ay[i], a1x = E.bx[i], a1y = E.by[i];
-    let b0x = E.ax[j], b0y = E.ay[j], b1x = E.bx[j], b1y = E.by[j];
+    let a0x = E.ax[i],
+      a0y = E.ay[i],
+      a1x = E.bx[i],
+      a1y = E.by[i];
+    let b0x = E.ax[j],
+      b0y = E.ay[j],
+      b1x = E.bx[j],
+      b1y = E.by[j];
     // Front tests: a point is in front of an edge when it lies strictly left of a -> b.
     const dB0 = orient(a0x, a0y, a1x, a1y, b0x, b0y);
     const dB1 = orient(a0x, a0y, a1x, a1y, b1x, b1y);
@@ -79,7 +88,8 @@ export class PairIntegrator {
     // since j's front faces i). Only obstructions inside H can block.
     this.region.set(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
     if (this.gatherer.gather(i, j)) return 0;
-    if (this.pieces.count === 0 && this.pieces.wholeCount === 0) return crossedStrings(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
+    if (this.pieces.count === 0 && this.pieces.wholeCount === 0)
+      return crossedStrings(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
     this.points.build(this.pieces, a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
     this.breakpoints.find(this.points, a0x, a0y, a1x, a1y);
     return this.integrate(a0x, a0y, a1x, a1y, li);
@@ -87,10 +97,14 @@ export class PairIntegrator {
 
   /** Sum of the piece integrals between consecutive breakpoints of i' = a0-a1 (length li). */
   private integrate(a0x: number, a0y: number, a1x: number, a1y: number, li: number): number {
-    const dxI = a1x - a0x, dyI = a1y - a0y;
-    const tx = dxI / li, ty = dyI / li;
-    const at = this.breakpoints.at, nBreaks = this.breakpoints.count;
-    const gaps = this.gaps, points = this.points;
+    const dxI = a1x - a0x,
+      dyI = a1y - a0y;
+    const tx = dxI / li,
+      ty = dyI / li;
+    const at = this.breakpoints.at,
+      nBreaks = this.breakpoints.count;
+    const gaps = this.gaps,
+      points = this.points;
     gaps.prepare(points);
     let total = 0;
     let sa = 0;
@@ -100,8 +114,16 @@ export class PairIntegrator {
       const sm = 0.5 * (sa + sb);
       gaps.find(points, a0x + sm * dxI, a0y + sm * dyI, tx, ty);
       if (gaps.count > 0) {
-        total += pieceIntegral(points, gaps,
-          a0x + sa * dxI, a0y + sa * dyI, a0x + sb * dxI, a0y + sb * dyI, (sb - sa) * dxI, (sb - sa) * dyI);
+        total += pieceIntegral(
+          points,
+          gaps,
+          a0x + sa * dxI,
+          a0y + sa * dyI,
+          a0x + sb * dxI,
+          a0y + sb * dyI,
+          (sb - sa) * dxI,
+          (sb - sa) * dyI,
+        );
       }
       sa = sb;
     }

@@ -60,7 +60,8 @@ export class ObstacleGatherer {
    * exchanges nothing, and the pieces are incomplete.
    */
   gather(i: number, j: number): boolean {
-    const ob = this.ob, R = this.region;
+    const ob = this.ob,
+      R = this.region;
     this.pieces.begin();
     this.pairI = i;
     this.pairJ = j;
@@ -81,7 +82,8 @@ export class ObstacleGatherer {
    * only ever says no in doubt.
    */
   private cutsView(b: number): boolean {
-    const ob = this.ob, R = this.region;
+    const ob = this.ob,
+      R = this.region;
     const rIn = ob.bodyRIn[b] * (1 - 1e-9);
     if (!(rIn > 0) || !R.on[1] || !R.on[3]) return false;
     return R.discMeetsSide(1, ob.bodyCx[b], ob.bodyCy[b], rIn) && R.discMeetsSide(3, ob.bodyCx[b], ob.bodyCy[b], rIn);
@@ -92,11 +94,14 @@ export class ObstacleGatherer {
    * when the circle lies wholly inside H, keep every edge whole without testing it.
    */
   private clipBody(b: number): void {
-    const ob = this.ob, R = this.region;
+    const ob = this.ob,
+      R = this.region;
     // A convex body lies wholly behind each of its own edges, so it cannot block a
     // view from or to one of them.
     if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return;
-    const cx = ob.bodyCx[b], cy = ob.bodyCy[b], r = ob.bodyR[b];
+    const cx = ob.bodyCx[b],
+      cy = ob.bodyCy[b],
+      r = ob.bodyR[b];
     // A relative margin of 1e-9 keeps these float tests on the safe side: a body kept
     // in vain costs only time, and "wholly inside" must be certain.
     const margin = r * 1e-9 + 1e-12 * (Math.abs(cx) + Math.abs(cy));
@@ -111,7 +116,8 @@ export class ObstacleGatherer {
     }
     this.crossCount = crossCount;
     const inside = crossCount === 0;
-    const first = ob.bodyFirstEdge[b], end = ob.bodyEdgeEnd[b];
+    const first = ob.bodyFirstEdge[b],
+      end = ob.bodyEdgeEnd[b];
     if (!inside) {
       if (ob.bodyConvex[b] && this.cutsView(b)) {
         this.blocked = true;
@@ -147,7 +153,8 @@ export class ObstacleGatherer {
 
   /** Clip a convex body that straddles H's boundary, looking only at edges its angular windows admit. */
   private clipConvexBody(b: number): void {
-    const ob = this.ob, E = this.e;
+    const ob = this.ob,
+      E = this.e;
     if (!this.windows.find(ob, b, this.region, this.centreDist)) return;
     const ranges = this.windows.ranges;
     const first = ob.bodyFirstEdge[b];
@@ -163,7 +170,10 @@ export class ObstacleGatherer {
 
   /** Write the SidePlace of (x, y) against each crossing side to places[at + c]. */
   private classifyCorner(x: number, y: number, at: number): void {
-    const R = this.region, P = this.places, crossing = this.crossing, count = this.crossCount;
+    const R = this.region,
+      P = this.places,
+      crossing = this.crossing,
+      count = this.crossCount;
     for (let c = 0; c < count; c++) P[at + c] = R.place(crossing[c], x, y);
   }
 
@@ -181,10 +191,12 @@ export class ObstacleGatherer {
 
   /** Sides that miss the body's circle hold it wholly inside: only crossing sides can drop or cut an edge. */
   private verdict(a: number, b: number): EdgeVerdict {
-    const P = this.places, count = this.crossCount;
+    const P = this.places,
+      count = this.crossCount;
     let whole = true;
     for (let c = 0; c < count; c++) {
-      const pa = P[a + c], pb = P[b + c];
+      const pa = P[a + c],
+        pb = P[b + c];
       if (pa === SURELY_OUTSIDE && pb === SURELY_OUTSIDE) return DROP;
       if (pa !== SURELY_INSIDE || pb !== SURELY_INSIDE) whole = false;
     }
@@ -194,9 +206,21 @@ export class ObstacleGatherer {
   /** Clip edge `edge` to H exactly; keep the piece if it passes through H's interior. */
   private clipEdge(edge: number): void {
     if (edge === this.pairI || edge === this.pairJ) return;
-    const E = this.e, c = this.clipOut;
-    const px = E.ax[edge], py = E.ay[edge], qx = E.bx[edge], qy = E.by[edge];
+    const E = this.e,
+      c = this.clipOut;
+    const px = E.ax[edge],
+      py = E.ay[edge],
+      qx = E.bx[edge],
+      qy = E.by[edge];
     if (!this.region.clipSegment(px, py, qx, qy, c)) return;
-    this.pieces.keep(edge, px + c.t0 * (qx - px), py + c.t0 * (qy - py), px + c.t1 * (qx - px), py + c.t1 * (qy - py), c.startInside, c.endInside);
+    this.pieces.keep(
+      edge,
+      px + c.t0 * (qx - px),
+      py + c.t0 * (qy - py),
+      px + c.t1 * (qx - px),
+      py + c.t1 * (qy - py),
+      c.startInside,
+      c.endInside,
+    );
   }
 }

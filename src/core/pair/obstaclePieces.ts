@@ -73,9 +73,21 @@ export class ObstaclePieces {
 
   private grow(): void {
     const n = 2 * this.edge.length;
-    const i32 = (a: Int32Array) => { const b = new Int32Array(n); b.set(a); return b; };
-    const f64 = (a: Float64Array) => { const b = new Float64Array(n); b.set(a); return b; };
-    const u8 = (a: Uint8Array) => { const b = new Uint8Array(n); b.set(a); return b; };
+    const i32 = (a: Int32Array) => {
+      const b = new Int32Array(n);
+      b.set(a);
+      return b;
+    };
+    const f64 = (a: Float64Array) => {
+      const b = new Float64Array(n);
+      b.set(a);
+      return b;
+    };
+    const u8 = (a: Uint8Array) => {
+      const b = new Uint8Array(n);
+      b.set(a);
+      return b;
+    };
     this.edge = i32(this.edge);
     this.px = f64(this.px);
     this.py = f64(this.py);

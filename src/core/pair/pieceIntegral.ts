@@ -13,13 +13,29 @@ import type { VisibleGaps } from './visibleGaps';
  * the piece's share of L_i F_ij, sketch units (length x dimensionless factor).
  * (dx, dy) = pb - pa, computed directly so that a short piece loses no digits.
  */
-export function pieceIntegral(points: FixedPoints, gaps: VisibleGaps,
-  pax: number, pay: number, pbx: number, pby: number, dx: number, dy: number): number {
-  const X = points.x, Y = points.y, LO = gaps.lo, HI = gaps.hi, count = gaps.count;
+export function pieceIntegral(
+  points: FixedPoints,
+  gaps: VisibleGaps,
+  pax: number,
+  pay: number,
+  pbx: number,
+  pby: number,
+  dx: number,
+  dy: number,
+): number {
+  const X = points.x,
+    Y = points.y,
+    LO = gaps.lo,
+    HI = gaps.hi,
+    count = gaps.count;
   let total = 0;
   for (let g = 0; g < count; g++) {
-    const lo = LO[g], hi = HI[g];
-    total += 0.5 * (distanceChange(X[lo], Y[lo], pax, pay, pbx, pby, dx, dy) - distanceChange(X[hi], Y[hi], pax, pay, pbx, pby, dx, dy));
+    const lo = LO[g],
+      hi = HI[g];
+    total +=
+      0.5 *
+      (distanceChange(X[lo], Y[lo], pax, pay, pbx, pby, dx, dy) -
+        distanceChange(X[hi], Y[hi], pax, pay, pbx, pby, dx, dy));
   }
   return total;
 }
@@ -29,8 +45,19 @@ export function pieceIntegral(points: FixedPoints, gaps: VisibleGaps,
  * 2 (Hottel), written as distance changes along a0-a1 so that a short edge loses no
  * digits. b0-b1 faces a0-a1 (a0 a1 b0 b1 anticlockwise).
  */
-export function crossedStrings(a0x: number, a0y: number, a1x: number, a1y: number,
-  b0x: number, b0y: number, b1x: number, b1y: number): number {
-  const dx = a1x - a0x, dy = a1y - a0y;
-  return 0.5 * (distanceChange(b1x, b1y, a0x, a0y, a1x, a1y, dx, dy) - distanceChange(b0x, b0y, a0x, a0y, a1x, a1y, dx, dy));
+export function crossedStrings(
+  a0x: number,
+  a0y: number,
+  a1x: number,
+  a1y: number,
+  b0x: number,
+  b0y: number,
+  b1x: number,
+  b1y: number,
+): number {
+  const dx = a1x - a0x,
+    dy = a1y - a0y;
+  return (
+    0.5 * (distanceChange(b1x, b1y, a0x, a0y, a1x, a1y, dx, dy) - distanceChange(b0x, b0y, a0x, a0y, a1x, a1y, dx, dy))
+  );
 }

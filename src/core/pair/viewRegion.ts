@@ -79,7 +79,8 @@ export class ViewRegion {
 
   /** Signed distance (sketch units) of (x, y) from side k, positive inside H. */
   signedDistance(k: number, x: number, y: number): number {
-    const dx = this.ex[k] - this.sx[k], dy = this.ey[k] - this.sy[k];
+    const dx = this.ex[k] - this.sx[k],
+      dy = this.ey[k] - this.sy[k];
     return (dx * (y - this.sy[k]) - dy * (x - this.sx[k])) * this.invLen[k];
   }
 
@@ -92,11 +93,14 @@ export class ViewRegion {
 
   /** Does the disc of radius r (sketch units) about (cx, cy) meet side k? Float test. */
   discMeetsSide(k: number, cx: number, cy: number, r: number): boolean {
-    const x0 = this.sx[k], y0 = this.sy[k];
-    const dx = this.ex[k] - x0, dy = this.ey[k] - y0;
+    const x0 = this.sx[k],
+      y0 = this.sy[k];
+    const dx = this.ex[k] - x0,
+      dy = this.ey[k] - y0;
     let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
     t = t < 0 ? 0 : t > 1 ? 1 : t;
-    const ux = cx - (x0 + t * dx), uy = cy - (y0 + t * dy);
+    const ux = cx - (x0 + t * dx),
+      uy = cy - (y0 + t * dy);
     return ux * ux + uy * uy < r * r;
   }
 
@@ -106,16 +110,25 @@ export class ViewRegion {
    * outside or along the boundary (it then blocks no sight line).
    */
   clipSegment(px: number, py: number, qx: number, qy: number, out: SegmentClip): boolean {
-    let t0 = 0, t1 = 1;
-    let pIn = true, qIn = true;
+    let t0 = 0,
+      t1 = 1;
+    let pIn = true,
+      qIn = true;
     for (let k = 0; k < 4; k++) {
       if (!this.on[k]) continue;
-      const x0 = this.sx[k], y0 = this.sy[k], x1 = this.ex[k], y1 = this.ey[k];
+      const x0 = this.sx[k],
+        y0 = this.sy[k],
+        x1 = this.ex[k],
+        y1 = this.ey[k];
       // Cheap float rejection first; robust signs only for what survives.
-      const dx = x1 - x0, dy = y1 - y0;
+      const dx = x1 - x0,
+        dy = y1 - y0;
       const fp = dx * (py - y0) - dy * (px - x0);
       const fq = dx * (qy - y0) - dy * (qx - x0);
-      const tol = 1e-12 * (Math.abs(dx) + Math.abs(dy)) * (Math.abs(px - x0) + Math.abs(py - y0) + Math.abs(qx - x0) + Math.abs(qy - y0));
+      const tol =
+        1e-12 *
+        (Math.abs(dx) + Math.abs(dy)) *
+        (Math.abs(px - x0) + Math.abs(py - y0) + Math.abs(qx - x0) + Math.abs(qy - y0));
       if (fp < -tol && fq < -tol) return false;
       const dP = orient(x0, y0, x1, y1, px, py);
       const dQ = orient(x0, y0, x1, y1, qx, qy);

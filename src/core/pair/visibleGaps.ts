@@ -26,40 +26,72 @@ export class VisibleGaps {
    * is (tx, ty), after prepare(points) for this pair. Fixed points 0 and 1 are j's ends b0 (high end) and b1 (low end).
    */
   find(points: FixedPoints, px: number, py: number, tx: number, ty: number): void {
-    const X = points.x, Y = points.y;
-    const nPts = points.count, nChains = points.chainCount, start = points.chainStart;
+    const X = points.x,
+      Y = points.y;
+    const nPts = points.count,
+      nChains = points.chainCount,
+      start = points.chainStart;
     const key = this.key;
     for (let k = 0; k < nPts; k++) {
-      const vx = X[k] - px, vy = Y[k] - py;
+      const vx = X[k] - px,
+        vy = Y[k] - py;
       key[k] = (vx * tx + vy * ty) / Math.sqrt(vx * vx + vy * vy);
     }
     this.count = 0;
-    const jHi = key[0], jLo = key[1];
+    const jHi = key[0],
+      jLo = key[1];
     if (!(jHi > jLo)) return;
-    const loKey = this.loKey, hiKey = this.hiKey, loPt = this.loPt, hiPt = this.hiPt, order = this.order;
+    const loKey = this.loKey,
+      hiKey = this.hiKey,
+      loPt = this.loPt,
+      hiPt = this.hiPt,
+      order = this.order;
     let nIv = 0;
     for (let g = 0; g < nChains; g++) {
-      const from = start[g], to = start[g + 1];
-      let lo = Infinity, hi = -Infinity, loP = -1, hiP = -1;
+      const from = start[g],
+        to = start[g + 1];
+      let lo = Infinity,
+        hi = -Infinity,
+        loP = -1,
+        hiP = -1;
       for (let k = from; k < to; k++) {
         const kk = key[k];
-        if (kk < lo) { lo = kk; loP = k; }
-        if (kk > hi) { hi = kk; hiP = k; }
+        if (kk < lo) {
+          lo = kk;
+          loP = k;
+        }
+        if (kk > hi) {
+          hi = kk;
+          hiP = k;
+        }
       }
       if (hi <= jLo || lo >= jHi) continue;
-      if (lo < jLo) { lo = jLo; loP = 1; }
-      if (hi > jHi) { hi = jHi; hiP = 0; }
-      loKey[nIv] = lo; hiKey[nIv] = hi; loPt[nIv] = loP; hiPt[nIv] = hiP;
+      if (lo < jLo) {
+        lo = jLo;
+        loP = 1;
+      }
+      if (hi > jHi) {
+        hi = jHi;
+        hiP = 0;
+      }
+      loKey[nIv] = lo;
+      hiKey[nIv] = hi;
+      loPt[nIv] = loP;
+      hiPt[nIv] = hiP;
       order[nIv] = nIv;
       nIv++;
     }
     sortOrderByKey(order, loKey, nIv);
     // Sweep the blocked intervals from j's low end; what they leave uncovered is seen.
-    let cur = jLo, curP = 1;
+    let cur = jLo,
+      curP = 1;
     for (let n = 0; n < nIv; n++) {
       const o = order[n];
       if (loKey[o] > cur) this.push(curP, loPt[o]);
-      if (hiKey[o] > cur) { cur = hiKey[o]; curP = hiPt[o]; }
+      if (hiKey[o] > cur) {
+        cur = hiKey[o];
+        curP = hiPt[o];
+      }
     }
     if (cur < jHi) this.push(curP, 0);
   }
@@ -73,7 +105,8 @@ export class VisibleGaps {
   private push(lo: number, hi: number): void {
     const g = this.count;
     if (g === this.lo.length) {
-      const lo2 = new Int32Array(2 * g), hi2 = new Int32Array(2 * g);
+      const lo2 = new Int32Array(2 * g),
+        hi2 = new Int32Array(2 * g);
       lo2.set(this.lo);
       hi2.set(this.hi);
       this.lo = lo2;

@@ -27,8 +27,10 @@ export function movedPoints(doc: SketchFile, picks: readonly Pick[]): Map<number
     if (!shape) continue;
     const n = shape.points.length;
     if (p.type === 'vertex') add(p.shape, p.index);
-    else if (p.type === 'edge') { add(p.shape, p.index); add(p.shape, (p.index + 1) % n); }
-    else for (let k = 0; k < n; k++) add(p.shape, k);
+    else if (p.type === 'edge') {
+      add(p.shape, p.index);
+      add(p.shape, (p.index + 1) % n);
+    } else for (let k = 0; k < n; k++) add(p.shape, k);
   }
   return moved;
 }
@@ -80,9 +82,15 @@ export function deleteVertices(doc: SketchFile, picks: readonly { shape: number;
   const keep: Shape[] = [];
   doc.shapes.forEach((shape, s) => {
     const drop = byShape.get(s);
-    if (!drop) { keep.push(shape); return; }
+    if (!drop) {
+      keep.push(shape);
+      return;
+    }
     const n = shape.points.length;
-    if (n - drop.size < 3) { keep.push(shape); return; }
+    if (n - drop.size < 3) {
+      keep.push(shape);
+      return;
+    }
     const names = edgeNames(shape);
     const points: Point[] = [];
     const surface: string[] = [];

@@ -4,7 +4,10 @@ import type { SketchFile, SurfaceProps } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
 import { compactSurface, uniqueName, usedSurfaceNames } from './surfaceNames';
 
-export interface EdgeRef { shape: number; index: number }
+export interface EdgeRef {
+  shape: number;
+  index: number;
+}
 
 /** Own properties only: a surface named "toString" must not find Object.prototype's. */
 function own(props: Record<string, SurfaceProps>, name: string): SurfaceProps | undefined {

@@ -72,7 +72,8 @@ export function setSettings(doc: SketchFile, patch: SettingsPatch): SketchFile {
     const v = Object.hasOwn(patch, k) ? patch[k] : old[k];
     if (v !== undefined) merged[k] = v;
   }
-  if (Object.is(merged.surroundingsTemperature, old.surroundingsTemperature) && Object.is(merged.depth, old.depth)) return doc;
+  if (Object.is(merged.surroundingsTemperature, old.surroundingsTemperature) && Object.is(merged.depth, old.depth))
+    return doc;
   const { settings: _old, ...rest } = doc;
   return Object.keys(merged).length ? { ...rest, settings: merged } : rest;
 }

@@ -4,5 +4,11 @@ import type { ExchangeSolved } from './slice';
 
 /** CSV of solved results: the same content as `npm run cli -- exchange FILE --csv` for the same sketch. */
 export function solvedCsv(ex: ExchangeSolved): string {
-  return exchangeCsv({ units: ex.units, names: ex.names, surfaceLength: ex.lengths, result: ex.result, conditions: ex.conditions });
+  return exchangeCsv({
+    units: ex.units,
+    names: ex.names,
+    surfaceLength: ex.lengths,
+    result: ex.result,
+    conditions: ex.conditions,
+  });
 }

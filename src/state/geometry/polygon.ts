@@ -62,7 +62,12 @@ export function closestOnSegment(p: Point, a: Point, b: Point): { point: Point; 
   return { point, t, distance: Math.hypot(p[0] - point[0], p[1] - point[1]) };
 }
 
-export interface Bounds { minX: number; minY: number; maxX: number; maxY: number }
+export interface Bounds {
+  minX: number;
+  minY: number;
+  maxX: number;
+  maxY: number;
+}
 
 export function sketchBounds(shapes: readonly Shape[]): Bounds | null {
   let b: Bounds | null = null;
@@ -70,8 +75,10 @@ export function sketchBounds(shapes: readonly Shape[]): Bounds | null {
     for (const [x, y] of s.points) {
       if (!b) b = { minX: x, minY: y, maxX: x, maxY: y };
       else {
-        b.minX = Math.min(b.minX, x); b.minY = Math.min(b.minY, y);
-        b.maxX = Math.max(b.maxX, x); b.maxY = Math.max(b.maxY, y);
+        b.minX = Math.min(b.minX, x);
+        b.minY = Math.min(b.minY, y);
+        b.maxX = Math.max(b.maxX, x);
+        b.maxY = Math.max(b.maxY, y);
       }
     }
   }

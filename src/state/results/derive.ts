@@ -38,7 +38,14 @@ export function surfaceFactors(edges: EdgeViewFactors, surfaces: SurfaceIndex, s
   const hit = bySurfaces.get(surfaces);
   if (hit && hit.scale === scale) return hit.result;
   const lengths = scale === 1 ? edges.edgeLength : edges.edgeLength.map((L) => L * scale);
-  const result = aggregateToSurfaces(edges.edgeCount, lengths, edges.F, surfaces.edgeSurface, surfaces.names.length, edges.closed);
+  const result = aggregateToSurfaces(
+    edges.edgeCount,
+    lengths,
+    edges.F,
+    surfaces.edgeSurface,
+    surfaces.names.length,
+    edges.closed,
+  );
   bySurfaces.set(surfaces, { scale, result });
   return result;
 }

@@ -19,7 +19,13 @@ interface Pending {
   basis: CheckedGeometry;
 }
 
-function refresh(store: AppStore, runner: JobRunner, api: DocumentApi, doc: SketchFile, pending: { job: Pending | null }): void {
+function refresh(
+  store: AppStore,
+  runner: JobRunner,
+  api: DocumentApi,
+  doc: SketchFile,
+  pending: { job: Pending | null },
+): void {
   const { setViewFactors, viewFactors } = store.getState();
   if (doc.shapes.length === 0) {
     setViewFactors({ status: 'empty', current: null, problems: [], error: null, edges: null });
@@ -37,7 +43,12 @@ function refresh(store: AppStore, runner: JobRunner, api: DocumentApi, doc: Sket
     return;
   }
   const waiting = pending.job;
-  setViewFactors({ status: waiting && sameKey(waiting.basis, current) ? viewFactors.status : 'computing', current, problems: [], error: null });
+  setViewFactors({
+    status: waiting && sameKey(waiting.basis, current) ? viewFactors.status : 'computing',
+    current,
+    problems: [],
+    error: null,
+  });
   if (waiting && sameKey(waiting.basis, current)) return;
   const job: Pending = { basis: current };
   pending.job = job;

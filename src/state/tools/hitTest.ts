@@ -12,17 +12,27 @@ export type Hit =
 export function hitTest(doc: SketchFile, p: Point, tolerance: number): Hit {
   let best: Hit = null;
   let bestD = tolerance;
-  doc.shapes.forEach((shape, s) => shape.points.forEach((q, k) => {
-    const d = Math.hypot(q[0] - p[0], q[1] - p[1]);
-    if (d <= bestD) { bestD = d; best = { type: 'vertex', shape: s, index: k }; }
-  }));
+  doc.shapes.forEach((shape, s) =>
+    shape.points.forEach((q, k) => {
+      const d = Math.hypot(q[0] - p[0], q[1] - p[1]);
+      if (d <= bestD) {
+        bestD = d;
+        best = { type: 'vertex', shape: s, index: k };
+      }
+    }),
+  );
   if (best) return best;
   bestD = tolerance;
-  doc.shapes.forEach((shape, s) => shape.points.forEach((_, k) => {
-    const [a, b] = edgeEnds(shape, k);
-    const c = closestOnSegment(p, a, b);
-    if (c.distance <= bestD) { bestD = c.distance; best = { type: 'edge', shape: s, index: k, at: c.point }; }
-  }));
+  doc.shapes.forEach((shape, s) =>
+    shape.points.forEach((_, k) => {
+      const [a, b] = edgeEnds(shape, k);
+      const c = closestOnSegment(p, a, b);
+      if (c.distance <= bestD) {
+        bestD = c.distance;
+        best = { type: 'edge', shape: s, index: k, at: c.point };
+      }
+    }),
+  );
   if (best) return best;
   // Solids lie inside the enclosure, so test them first: the innermost shape wins.
   const order = doc.shapes.map((_, i) => i).sort((a, b) => rank(doc, a) - rank(doc, b));

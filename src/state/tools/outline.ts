@@ -51,7 +51,10 @@ export function outlineTool<Id extends string>(spec: OutlineSpec<Id>): DrawingTo
 
     keyDown(ctx, key) {
       const s = ctx.get();
-      if (key === 'Enter') { finishOutline(ctx); return true; }
+      if (key === 'Enter') {
+        finishOutline(ctx);
+        return true;
+      }
       if ((key === 'Delete' || key === 'Backspace') && s.draft.length) {
         s.setDraft(removeLastPoint({ points: s.draft }).points);
         return true;

@@ -1,7 +1,9 @@
 // Polygon drawing kernel: clicks in, draft or finished outline out. No effects.
 import type { Point } from '../sketchFile';
 
-export interface PolygonDraft { points: Point[] }
+export interface PolygonDraft {
+  points: Point[];
+}
 export type PolygonStep = { draft: PolygonDraft; finished?: Point[] };
 
 export const emptyDraft: PolygonDraft = { points: [] };

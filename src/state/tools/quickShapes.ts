@@ -8,7 +8,12 @@ export function rectangleFromCorners(a: Point, b: Point): Point[] | null {
   const y0 = Math.min(a[1], b[1]);
   const y1 = Math.max(a[1], b[1]);
   if (!(x1 > x0) || !(y1 > y0)) return null;
-  return [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
+  return [
+    [x0, y0],
+    [x1, y0],
+    [x1, y1],
+    [x0, y1],
+  ];
 }
 
 /**

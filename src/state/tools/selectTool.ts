@@ -15,14 +15,25 @@ export interface DragPlan {
   reference: Point;
 }
 
-export interface PressResult { selection: Pick[]; drag: DragPlan | null }
+export interface PressResult {
+  selection: Pick[];
+  drag: DragPlan | null;
+}
 
 export function hitToPick(hit: Exclude<Hit, null>): Pick {
-  return hit.type === 'shape' ? { type: 'shape', shape: hit.shape } : { type: hit.type, shape: hit.shape, index: hit.index };
+  return hit.type === 'shape'
+    ? { type: 'shape', shape: hit.shape }
+    : { type: hit.type, shape: hit.shape, index: hit.index };
 }
 
 /** A press at `pointer` on `hit`; with shift, toggles the pick into the selection. */
-export function pressSelect(doc: SketchFile, selection: readonly Pick[], hit: Hit, pointer: Point, shift: boolean): PressResult {
+export function pressSelect(
+  doc: SketchFile,
+  selection: readonly Pick[],
+  hit: Hit,
+  pointer: Point,
+  shift: boolean,
+): PressResult {
   if (!hit) return { selection: shift ? [...selection] : [], drag: null };
   const pick = hitToPick(hit);
   const already = selection.some((s) => samePick(s, pick));

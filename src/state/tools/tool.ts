@@ -41,16 +41,20 @@ export interface DraftPicture {
 /** A setting shown beside the tools while the tool is active; values live in the store. */
 export type ToolSetting =
   | {
-    type: 'choice'; label: string; title: string;
-    options: readonly { value: string; label: string }[];
-    read: (s: AppState) => string;
-    write: (s: AppState, value: string) => void;
-  }
+      type: 'choice';
+      label: string;
+      title: string;
+      options: readonly { value: string; label: string }[];
+      read: (s: AppState) => string;
+      write: (s: AppState, value: string) => void;
+    }
   | {
-    type: 'integer'; label: string; title: string;
-    read: (s: AppState) => number;
-    write: (s: AppState, value: number) => void;
-  };
+      type: 'integer';
+      label: string;
+      title: string;
+      read: (s: AppState) => number;
+      write: (s: AppState, value: number) => void;
+    };
 
 /**
  * G is the tool's in-flight state (a drag plan, an anchor...). Methods use method

@@ -26,7 +26,10 @@ export const makesSetting: ToolSetting = {
   type: 'choice',
   label: 'makes',
   title: 'Whether the rectangle or tube becomes a solid body or the enclosure',
-  options: [{ value: 'solid', label: 'body' }, { value: 'enclosure', label: 'enclosure' }],
+  options: [
+    { value: 'solid', label: 'body' },
+    { value: 'enclosure', label: 'enclosure' },
+  ],
   read: (s) => s.quickKind,
   write: (s, v) => s.setQuickKind(v === 'enclosure' ? 'enclosure' : 'solid'),
 };
@@ -58,7 +61,10 @@ export function twoPointTool<Id extends string>(spec: TwoPointSpec<Id>): Drawing
 
     press(ctx, e) {
       if (ctx.gesture.anchor) complete(ctx, e, true);
-      else { ctx.gesture.anchor = ctx.snapped(e.at); ctx.get().setDraft([]); }
+      else {
+        ctx.gesture.anchor = ctx.snapped(e.at);
+        ctx.get().setDraft([]);
+      }
       return 'handled';
     },
 

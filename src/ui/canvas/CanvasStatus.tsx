@@ -9,8 +9,18 @@ export function CanvasStatus() {
   const draft = useApp(selectDraft);
   if (results.status === 'invalid' && results.problems.length) {
     const more = results.problems.length > 1 ? ` (+${results.problems.length - 1} more)` : '';
-    return <div className="canvas-status problem" role="alert">Geometry problem: {results.problems[0].message}{more}</div>;
+    return (
+      <div className="canvas-status problem" role="alert">
+        Geometry problem: {results.problems[0].message}
+        {more}
+      </div>
+    );
   }
   const active = toolRegistry.get(tool);
-  return <div className="canvas-status">{active.hint}{active.progress?.(draft) ?? ''}</div>;
+  return (
+    <div className="canvas-status">
+      {active.hint}
+      {active.progress?.(draft) ?? ''}
+    </div>
+  );
 }

@@ -5,7 +5,12 @@ import type { Point } from '../../state/sketchFile';
 import { toScreen } from '../../state/camera';
 import { toolRegistry } from '../../state/tools/registry';
 
-interface Props { tool: string; draft: Point[]; hover: Point | null; camera: Camera }
+interface Props {
+  tool: string;
+  draft: Point[];
+  hover: Point | null;
+  camera: Camera;
+}
 
 const TONES = { enclosure: '#1d2b36', body: '#5a4a2a' } as const;
 
@@ -18,10 +23,29 @@ export const DraftLayer = memo(function DraftLayer({ tool, draft, hover, camera 
   const dot = picture.dot && toScreen(camera, picture.dot);
   return (
     <Layer listening={false}>
-      {flat.length >= 4 && <Line points={flat} closed={picture.closed} stroke={colour} strokeWidth={1.5} dash={[6, 4]} fill={picture.closed ? 'rgba(90,74,42,0.08)' : undefined} />}
+      {flat.length >= 4 && (
+        <Line
+          points={flat}
+          closed={picture.closed}
+          stroke={colour}
+          strokeWidth={1.5}
+          dash={[6, 4]}
+          fill={picture.closed ? 'rgba(90,74,42,0.08)' : undefined}
+        />
+      )}
       {picture.marks.map((p, i) => {
         const [x, y] = toScreen(camera, p);
-        return <Circle key={i} x={x} y={y} radius={i === 0 ? 6 : 3.5} stroke={colour} strokeWidth={1.5} fill={i === 0 ? '#fff3d6' : '#ffffff'} />;
+        return (
+          <Circle
+            key={i}
+            x={x}
+            y={y}
+            radius={i === 0 ? 6 : 3.5}
+            stroke={colour}
+            strokeWidth={1.5}
+            fill={i === 0 ? '#fff3d6' : '#ffffff'}
+          />
+        );
       })}
       {dot && <Circle x={dot[0]} y={dot[1]} radius={3} fill={colour} />}
     </Layer>

@@ -4,7 +4,17 @@ import type { Camera } from '../../state/viewSlice';
 import { MARK } from '../palette';
 
 /** Grid lines at the grid step, thinned out (x2, x5, x10...) so they stay at least 12 px apart. */
-export const GridLayer = memo(function GridLayer({ camera, width, height, step }: { camera: Camera; width: number; height: number; step: number }) {
+export const GridLayer = memo(function GridLayer({
+  camera,
+  width,
+  height,
+  step,
+}: {
+  camera: Camera;
+  width: number;
+  height: number;
+  step: number;
+}) {
   let s = step;
   for (let i = 0; s * camera.scale < 12 && i < 30; i++) s *= i % 3 === 1 ? 2.5 : 2;
   const x0 = -camera.originX / camera.scale;

@@ -7,7 +7,12 @@ import { edgeEnds, edgeLength } from '../../state/geometry/polygon';
 import { toScreen } from '../../state/camera';
 import { MARK } from '../palette';
 
-interface Props { doc: SketchFile; camera: Camera; selection: Pick[]; showAll: boolean }
+interface Props {
+  doc: SketchFile;
+  camera: Camera;
+  selection: Pick[];
+  showAll: boolean;
+}
 
 function fmt(v: number): string {
   return String(Number(v.toPrecision(6)));
@@ -31,13 +36,37 @@ export const HandlesLayer = memo(function HandlesLayer({ doc, camera, selection,
     const shape = doc.shapes[p.shape];
     if (!shape) continue;
     if (p.type === 'shape') {
-      marks.push(<Line key={`s${p.shape}`} points={shape.points.flatMap((q) => toScreen(camera, q))} closed stroke={MARK.selection} strokeWidth={1.5} dash={[6, 4]} />);
+      marks.push(
+        <Line
+          key={`s${p.shape}`}
+          points={shape.points.flatMap((q) => toScreen(camera, q))}
+          closed
+          stroke={MARK.selection}
+          strokeWidth={1.5}
+          dash={[6, 4]}
+        />,
+      );
     } else if (p.type === 'edge') {
       const [a, b] = edgeEnds(shape, p.index);
       const [ax, ay] = toScreen(camera, a);
       const [bx, by] = toScreen(camera, b);
-      marks.push(<Line key={`e${p.shape}:${p.index}`} points={[ax, ay, bx, by]} stroke={MARK.selection} strokeWidth={1.5} dash={[5, 4]} />);
-      tips.push(<Tip key={`te${p.shape}:${p.index}`} x={(ax + bx) / 2} y={(ay + by) / 2} text={`length ${fmt(edgeLength(shape, p.index))} ${u}`} />);
+      marks.push(
+        <Line
+          key={`e${p.shape}:${p.index}`}
+          points={[ax, ay, bx, by]}
+          stroke={MARK.selection}
+          strokeWidth={1.5}
+          dash={[5, 4]}
+        />,
+      );
+      tips.push(
+        <Tip
+          key={`te${p.shape}:${p.index}`}
+          x={(ax + bx) / 2}
+          y={(ay + by) / 2}
+          text={`length ${fmt(edgeLength(shape, p.index))} ${u}`}
+        />,
+      );
     } else {
       const q = shape.points[p.index];
       if (!q) continue;
@@ -45,15 +74,38 @@ export const HandlesLayer = memo(function HandlesLayer({ doc, camera, selection,
       tips.push(<Tip key={`tv${p.shape}:${p.index}`} x={x} y={y} text={`(${fmt(q[0])}, ${fmt(q[1])}) ${u}`} />);
     }
   }
-  const selectedVertex = new Set(selection.filter((p) => p.type === 'vertex').map((p) => `${p.shape}:${(p as { index: number }).index}`));
+  const selectedVertex = new Set(
+    selection.filter((p) => p.type === 'vertex').map((p) => `${p.shape}:${(p as { index: number }).index}`),
+  );
   const handles: ReactElement[] = [];
-  doc.shapes.forEach((shape, s) => shape.points.forEach((q, k) => {
-    const on = selectedVertex.has(`${s}:${k}`);
-    if (!showAll && !on) return;
-    const [x, y] = toScreen(camera, q);
-    handles.push(on
-      ? <Circle key={`${s}:${k}`} x={x} y={y} radius={5.5} fill={MARK.selection} stroke="#ffffff" strokeWidth={1.5} />
-      : <Rect key={`${s}:${k}`} x={x - 3} y={y - 3} width={6} height={6} fill="#ffffff" stroke="#1d2b36" strokeWidth={1} />);
-  }));
-  return <Layer listening={false}>{marks}{handles}{tips}</Layer>;
+  doc.shapes.forEach((shape, s) =>
+    shape.points.forEach((q, k) => {
+      const on = selectedVertex.has(`${s}:${k}`);
+      if (!showAll && !on) return;
+      const [x, y] = toScreen(camera, q);
+      handles.push(
+        on ? (
+          <Circle key={`${s}:${k}`} x={x} y={y} radius={5.5} fill={MARK.selection} stroke="#ffffff" strokeWidth={1.5} />
+        ) : (
+          <Rect
+            key={`${s}:${k}`}
+            x={x - 3}
+            y={y - 3}
+            width={6}
+            height={6}
+            fill="#ffffff"
+            stroke="#1d2b36"
+            strokeWidth={1}
+          />
+        ),
+      );
+    }),
+  );
+  return (
+    <Layer listening={false}>
+      {marks}
+      {handles}
+      {tips}
+    </Layer>
+  );
 });

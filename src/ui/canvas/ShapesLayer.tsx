@@ -19,7 +19,9 @@ interface Props {
 const SIDE_PX = 4;
 
 export function ShapesLayer({ doc, camera, order, emphasis, problemShapes }: Props) {
-  const enclosureFirst = doc.shapes.map((_, i) => i).sort((a, b) => Number(doc.shapes[a].kind === 'solid') - Number(doc.shapes[b].kind === 'solid'));
+  const enclosureFirst = doc.shapes
+    .map((_, i) => i)
+    .sort((a, b) => Number(doc.shapes[a].kind === 'solid') - Number(doc.shapes[b].kind === 'solid'));
   return (
     <Layer listening={false}>
       {enclosureFirst.map((s) => {
@@ -28,21 +30,38 @@ export function ShapesLayer({ doc, camera, order, emphasis, problemShapes }: Pro
         // Plain strings as props, so shapes a drag does not touch skip re-rendering.
         const colours = names.map((n) => order.get(n) ?? 0).join(',');
         const hot = names.map((n) => (emphasis.has(n) ? 1 : 0)).join('');
-        return <ShapeNode key={s} shape={shape} camera={camera} colours={colours} hot={hot} problem={problemShapes.has(s)} />;
+        return (
+          <ShapeNode key={s} shape={shape} camera={camera} colours={colours} hot={hot} problem={problemShapes.has(s)} />
+        );
       })}
     </Layer>
   );
 }
 
-const ShapeNode = memo(function ShapeNode({ shape, camera, colours, hot, problem }: {
-  shape: Shape; camera: Camera; colours: string; hot: string; problem: boolean;
+const ShapeNode = memo(function ShapeNode({
+  shape,
+  camera,
+  colours,
+  hot,
+  problem,
+}: {
+  shape: Shape;
+  camera: Camera;
+  colours: string;
+  hot: string;
+  problem: boolean;
 }) {
   const flat = shape.points.flatMap((p) => toScreen(camera, p));
   const colourOf = colours.split(',').map(Number);
   return (
     <Fragment>
-      <Line points={flat} closed fill={shape.kind === 'enclosure' ? '#fffdf6' : '#d9d3c3'}
-        stroke={problem ? MARK.problem : undefined} strokeWidth={problem ? 8 : 0} />
+      <Line
+        points={flat}
+        closed
+        fill={shape.kind === 'enclosure' ? '#fffdf6' : '#d9d3c3'}
+        stroke={problem ? MARK.problem : undefined}
+        strokeWidth={problem ? 8 : 0}
+      />
       {shape.points.map((_, k) => {
         const [a, b] = edgeEnds(shape, k);
         const [ax, ay] = toScreen(camera, a);
@@ -57,7 +76,13 @@ const ShapeNode = memo(function ShapeNode({ shape, camera, colours, hot, problem
           <Fragment key={k}>
             {on && <Line points={[ax, ay, bx, by]} stroke={MARK.highlight} strokeWidth={11} lineCap="round" />}
             <Line points={[ax + ox, ay + oy, bx + ox, by + oy]} stroke={st.colour} strokeWidth={4} opacity={0.3} />
-            <Line points={[ax, ay, bx, by]} stroke={st.colour} strokeWidth={on ? 4 : 2.5} dash={st.dash} lineCap="round" />
+            <Line
+              points={[ax, ay, bx, by]}
+              stroke={st.colour}
+              strokeWidth={on ? 4 : 2.5}
+              dash={st.dash}
+              lineCap="round"
+            />
           </Fragment>
         );
       })}

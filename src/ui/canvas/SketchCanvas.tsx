@@ -2,7 +2,15 @@ import { useEffect, useMemo, useRef } from 'react';
 import { Stage } from 'react-konva';
 import { useApp, useAppStore } from '../AppContext';
 import {
-  selectCamera, selectDoc, selectDraft, selectFitRequest, selectHoverPair, selectHoverPoint, selectSelection, selectTool, selectViewFactors,
+  selectCamera,
+  selectDoc,
+  selectDraft,
+  selectFitRequest,
+  selectHoverPair,
+  selectHoverPoint,
+  selectSelection,
+  selectTool,
+  selectViewFactors,
 } from '../../state/selectors';
 import type { AppState } from '../../state/store';
 import { fitCamera } from '../../state/camera';
@@ -52,7 +60,10 @@ export function SketchCanvas() {
   // from zero size; not on resizes or edits, so it reads the document from the store.
   const fitted = useRef<number | null>(null);
   useEffect(() => {
-    if (width <= 0 || height <= 0) { fitted.current = null; return; }
+    if (width <= 0 || height <= 0) {
+      fitted.current = null;
+      return;
+    }
     if (fitted.current === fitRequest) return;
     fitted.current = fitRequest;
     setCamera(fitCamera(sketchBounds(store.getState().doc.shapes), width, height));
@@ -60,7 +71,13 @@ export function SketchCanvas() {
 
   const active = toolRegistry.get(tool);
   return (
-    <div ref={ref} className="canvas-box" tabIndex={0} aria-label="Sketch canvas: draw with the mouse; the side panel edits the same sketch numerically" style={{ cursor: active.cursor }}>
+    <div
+      ref={ref}
+      className="canvas-box"
+      tabIndex={0}
+      aria-label="Sketch canvas: draw with the mouse; the side panel edits the same sketch numerically"
+      style={{ cursor: active.cursor }}
+    >
       {width > 0 && height > 0 && (
         <Stage width={width} height={height} {...handlers}>
           <GridLayer camera={camera} width={width} height={height} step={gridStep} />

@@ -32,7 +32,8 @@ export function problemMarks(problems: readonly SketchProblem[], shapes: readonl
     for (const s of place.shapes) if (s >= 0 && s < shapes.length) marks.shapes.add(s);
     for (const { shape, edge } of place.edges) {
       const key = `${shape}:${edge}`;
-      if (shape < 0 || shape >= shapes.length || edge < 0 || edge >= shapes[shape].points.length || seenEdges.has(key)) continue;
+      if (shape < 0 || shape >= shapes.length || edge < 0 || edge >= shapes[shape].points.length || seenEdges.has(key))
+        continue;
       seenEdges.add(key);
       marks.edges.push(edgeEnds(shapes[shape], edge));
     }
@@ -47,6 +48,10 @@ export function problemMarks(problems: readonly SketchProblem[], shapes: readonl
 }
 
 /** The marks the canvas shows for the results state: problems only while the document is invalid. */
-export function canvasProblemMarks(status: string, problems: readonly SketchProblem[], shapes: readonly Shape[]): ProblemMarks {
+export function canvasProblemMarks(
+  status: string,
+  problems: readonly SketchProblem[],
+  shapes: readonly Shape[],
+): ProblemMarks {
   return status === 'invalid' ? problemMarks(problems, shapes) : NO_MARKS;
 }

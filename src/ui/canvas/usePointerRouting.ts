@@ -28,11 +28,20 @@ export function usePointerRouting() {
   }, [controller]);
 
   useEffect(() => {
-    const down = (e: KeyboardEvent) => { if (e.code === 'Space' && !(e.target instanceof HTMLInputElement)) { space.current = true; } };
-    const up = (e: KeyboardEvent) => { if (e.code === 'Space') space.current = false; };
+    const down = (e: KeyboardEvent) => {
+      if (e.code === 'Space' && !(e.target instanceof HTMLInputElement)) {
+        space.current = true;
+      }
+    };
+    const up = (e: KeyboardEvent) => {
+      if (e.code === 'Space') space.current = false;
+    };
     window.addEventListener('keydown', down);
     window.addEventListener('keyup', up);
-    return () => { window.removeEventListener('keydown', down); window.removeEventListener('keyup', up); };
+    return () => {
+      window.removeEventListener('keydown', down);
+      window.removeEventListener('keyup', up);
+    };
   }, []);
 
   const info = (e: Konva.KonvaEventObject<MouseEvent | PointerEvent | WheelEvent>) => {
@@ -40,7 +49,12 @@ export function usePointerRouting() {
     const p = stage.getPointerPosition() ?? { x: 0, y: 0 };
     const cam = store.getState().camera;
     last.current = { at: toSketch(cam, [p.x, p.y]), shift: e.evt.shiftKey, tolerance: PICK_PX / cam.scale };
-    return { screen: [p.x, p.y] as Point, at: toSketch(cam, [p.x, p.y]), shift: e.evt.shiftKey, tolerance: PICK_PX / cam.scale };
+    return {
+      screen: [p.x, p.y] as Point,
+      at: toSketch(cam, [p.x, p.y]),
+      shift: e.evt.shiftKey,
+      tolerance: PICK_PX / cam.scale,
+    };
   };
 
   const startPan = (screen: Point) => {
@@ -52,7 +66,10 @@ export function usePointerRouting() {
     onPointerDown: (e: Konva.KonvaEventObject<PointerEvent>) => {
       const i = info(e);
       (e.target.getStage()?.container() as HTMLElement | undefined)?.focus({ preventScroll: true });
-      if (e.evt.button === 1 || space.current) { startPan(i.screen); return; }
+      if (e.evt.button === 1 || space.current) {
+        startPan(i.screen);
+        return;
+      }
       if (e.evt.button !== 0) return;
       if (controller.press(i) === 'pan') startPan(i.screen);
     },
@@ -61,13 +78,22 @@ export function usePointerRouting() {
       if (pan.current) {
         const p = pan.current;
         const c = store.getState().camera;
-        store.getState().setCamera({ scale: c.scale, originX: p.originX + i.screen[0] - p.from[0], originY: p.originY + i.screen[1] - p.from[1] });
+        store
+          .getState()
+          .setCamera({
+            scale: c.scale,
+            originX: p.originX + i.screen[0] - p.from[0],
+            originY: p.originY + i.screen[1] - p.from[1],
+          });
         return;
       }
       controller.move(i);
     },
     onPointerUp: (e: Konva.KonvaEventObject<PointerEvent>) => {
-      if (pan.current) { pan.current = null; return; }
+      if (pan.current) {
+        pan.current = null;
+        return;
+      }
       controller.release(info(e));
     },
     onDblClick: (e: Konva.KonvaEventObject<MouseEvent>) => controller.doubleClick(info(e)),

@@ -16,10 +16,36 @@ export function FileButtons() {
   };
   return (
     <div className="group" role="group" aria-label="File">
-      <button type="button" title="Start an empty sketch (undo brings the old one back)" onClick={() => newSketch(store)}>New</button>
-      <button type="button" title="Open a sketch file (.json), or drop one on the page (Ctrl+O)" onClick={() => input.current?.click()}>Open…</button>
-      <input id={OPEN_INPUT_ID} ref={input} type="file" accept=".json,application/json" hidden aria-label="Sketch file to open" onChange={(e) => void onFile(e.target.files?.[0])} />
-      <button type="button" title="Download the sketch file (Ctrl+S)" onClick={() => downloadText('sketch.json', sketchFileText(store, api), 'application/json')}>Save</button>
+      <button
+        type="button"
+        title="Start an empty sketch (undo brings the old one back)"
+        onClick={() => newSketch(store)}
+      >
+        New
+      </button>
+      <button
+        type="button"
+        title="Open a sketch file (.json), or drop one on the page (Ctrl+O)"
+        onClick={() => input.current?.click()}
+      >
+        Open…
+      </button>
+      <input
+        id={OPEN_INPUT_ID}
+        ref={input}
+        type="file"
+        accept=".json,application/json"
+        hidden
+        aria-label="Sketch file to open"
+        onChange={(e) => void onFile(e.target.files?.[0])}
+      />
+      <button
+        type="button"
+        title="Download the sketch file (Ctrl+S)"
+        onClick={() => downloadText('sketch.json', sketchFileText(store, api), 'application/json')}
+      >
+        Save
+      </button>
     </div>
   );
 }

@@ -15,7 +15,14 @@ export function Header() {
       </div>
       <FileButtons />
       <HistoryButtons />
-      <button type="button" className="help-button" title="Keyboard shortcuts and how to draw (?)" onClick={() => setHelp(true)}>Help ?</button>
+      <button
+        type="button"
+        className="help-button"
+        title="Keyboard shortcuts and how to draw (?)"
+        onClick={() => setHelp(true)}
+      >
+        Help ?
+      </button>
     </header>
   );
 }

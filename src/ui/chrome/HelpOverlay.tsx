@@ -10,28 +10,54 @@ export function HelpOverlay() {
   const open = useApp(selectHelpOpen);
   const setOpen = useApp(selectSetHelp);
   const close = useRef<HTMLButtonElement>(null);
-  useEffect(() => { if (open) close.current?.focus(); }, [open]);
+  useEffect(() => {
+    if (open) close.current?.focus();
+  }, [open]);
   if (!open) return null;
   return (
     <div className="overlay" onClick={() => setOpen(false)}>
-      <div className="help" role="dialog" aria-modal="true" aria-labelledby="help-title" onClick={(e) => e.stopPropagation()}
-        onKeyDown={(e) => { if (e.key === 'Escape') setOpen(false); }}>
+      <div
+        className="help"
+        role="dialog"
+        aria-modal="true"
+        aria-labelledby="help-title"
+        onClick={(e) => e.stopPropagation()}
+        onKeyDown={(e) => {
+          if (e.key === 'Escape') setOpen(false);
+        }}
+      >
         <h2 id="help-title">Drawing and shortcuts</h2>
-        <p>Draw one enclosure (the walls, radiating inwards) and any number of bodies inside it (radiating outwards).
-          Every edge starts as its own surface; select edges with shift and group them into one named surface in the Edit tab.
-          The matrix updates while you drag.</p>
+        <p>
+          Draw one enclosure (the walls, radiating inwards) and any number of bodies inside it (radiating outwards).
+          Every edge starts as its own surface; select edges with shift and group them into one named surface in the
+          Edit tab. The matrix updates while you drag.
+        </p>
         <table className="keys">
           <caption>Keyboard shortcuts</caption>
           <tbody>
             {toolRegistry.tools.map((t) => (
-              <tr key={t.id}><th scope="row"><kbd>{t.shortcut.toUpperCase()}</kbd></th><td><strong>{t.label}</strong>: {t.hint}</td></tr>
+              <tr key={t.id}>
+                <th scope="row">
+                  <kbd>{t.shortcut.toUpperCase()}</kbd>
+                </th>
+                <td>
+                  <strong>{t.label}</strong>: {t.hint}
+                </td>
+              </tr>
             ))}
             {OTHER_KEYS.map(([k, what]) => (
-              <tr key={k}><th scope="row"><kbd>{k}</kbd></th><td>{what}</td></tr>
+              <tr key={k}>
+                <th scope="row">
+                  <kbd>{k}</kbd>
+                </th>
+                <td>{what}</td>
+              </tr>
             ))}
           </tbody>
         </table>
-        <button ref={close} type="button" onClick={() => setOpen(false)}>Close</button>
+        <button ref={close} type="button" onClick={() => setOpen(false)}>
+          Close
+        </button>
       </div>
     </div>
   );

@@ -11,8 +11,12 @@ export function HistoryButtons() {
   const redo = useApp(selectRedo);
   return (
     <div className="group" role="group" aria-label="History">
-      <button type="button" title="Undo (Ctrl+Z)" disabled={!canUndo} onClick={undo}>Undo</button>
-      <button type="button" title="Redo (Ctrl+Shift+Z or Ctrl+Y)" disabled={!canRedo} onClick={redo}>Redo</button>
+      <button type="button" title="Undo (Ctrl+Z)" disabled={!canUndo} onClick={undo}>
+        Undo
+      </button>
+      <button type="button" title="Redo (Ctrl+Shift+Z or Ctrl+Y)" disabled={!canRedo} onClick={redo}>
+        Redo
+      </button>
     </div>
   );
 }

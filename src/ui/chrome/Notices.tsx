@@ -11,7 +11,15 @@ export function Notices() {
       {notices.map((n) => (
         <div key={n.id} className={`notice notice-${n.level}`} role={n.level === 'error' ? 'alert' : 'status'}>
           <span className="notice-text">{n.text}</span>
-          <button type="button" className="notice-close" title="Dismiss this message" aria-label="Dismiss message" onClick={() => dismiss(n.id)}>×</button>
+          <button
+            type="button"
+            className="notice-close"
+            title="Dismiss this message"
+            aria-label="Dismiss message"
+            onClick={() => dismiss(n.id)}
+          >
+            ×
+          </button>
         </div>
       ))}
     </div>

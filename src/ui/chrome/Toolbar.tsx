@@ -6,8 +6,14 @@ import { toolRegistry } from '../../state/tools/registry';
 import { NumberField } from '../inspector/NumberField';
 
 const selectToolbar = (s: AppState) => ({
-  tool: s.tool, snap: s.snap, gridStep: s.gridStep, units: s.doc.units,
-  setTool: s.setTool, setSnap: s.setSnap, setGridStep: s.setGridStep, requestFit: s.requestFit,
+  tool: s.tool,
+  snap: s.snap,
+  gridStep: s.gridStep,
+  units: s.doc.units,
+  setTool: s.setTool,
+  setSnap: s.setSnap,
+  setGridStep: s.setGridStep,
+  requestFit: s.requestFit,
 });
 
 type Setting<T extends ToolSetting['type']> = Extract<ToolSetting, { type: T }>;
@@ -16,7 +22,16 @@ type Setting<T extends ToolSetting['type']> = Extract<ToolSetting, { type: T }>;
 function IntegerSetting({ setting }: { setting: Setting<'integer'> }) {
   const store = useAppStore();
   const value = useApp(setting.read);
-  return <NumberField label={setting.label} title={setting.title} value={value} onCommit={(n) => setting.write(store.getState(), n)} width="3.5em" integer />;
+  return (
+    <NumberField
+      label={setting.label}
+      title={setting.title}
+      value={value}
+      onCommit={(n) => setting.write(store.getState(), n)}
+      width="3.5em"
+      integer
+    />
+  );
 }
 
 function ChoiceSetting({ setting }: { setting: Setting<'choice'> }) {
@@ -26,7 +41,11 @@ function ChoiceSetting({ setting }: { setting: Setting<'choice'> }) {
     <label className="inline" title={setting.title}>
       {setting.label}
       <select value={value} onChange={(e) => setting.write(store.getState(), e.target.value)}>
-        {setting.options.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+        {setting.options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
       </select>
     </label>
   );
@@ -39,20 +58,38 @@ export function Toolbar() {
     <div className="toolbar" role="toolbar" aria-label="Drawing tools">
       <div className="group" role="group" aria-label="Tool">
         {toolRegistry.tools.map((k) => (
-          <button key={k.id} type="button" className="tool" aria-pressed={t.tool === k.id}
-            title={`${k.label} (${k.shortcut.toUpperCase()}): ${k.hint}`} onClick={() => t.setTool(k.id)}>
+          <button
+            key={k.id}
+            type="button"
+            className="tool"
+            aria-pressed={t.tool === k.id}
+            title={`${k.label} (${k.shortcut.toUpperCase()}): ${k.hint}`}
+            onClick={() => t.setTool(k.id)}
+          >
             {k.label}
           </button>
         ))}
       </div>
-      {active.settings?.map((setting) => (setting.type === 'integer'
-        ? <IntegerSetting key={setting.label} setting={setting} />
-        : <ChoiceSetting key={setting.label} setting={setting} />))}
+      {active.settings?.map((setting) =>
+        setting.type === 'integer' ? (
+          <IntegerSetting key={setting.label} setting={setting} />
+        ) : (
+          <ChoiceSetting key={setting.label} setting={setting} />
+        ),
+      )}
       <label className="inline" title="Snap points to the grid (G)">
         <input type="checkbox" checked={t.snap} onChange={(e) => t.setSnap(e.target.checked)} /> snap
       </label>
-      <NumberField label={`grid (${t.units})`} title="Grid step in the sketch's units" value={t.gridStep} onCommit={t.setGridStep} width="4.5em" />
-      <button type="button" title="Fit the sketch in view (F)" onClick={t.requestFit}>Fit</button>
+      <NumberField
+        label={`grid (${t.units})`}
+        title="Grid step in the sketch's units"
+        value={t.gridStep}
+        onCommit={t.setGridStep}
+        width="4.5em"
+      />
+      <button type="button" title="Fit the sketch in view (F)" onClick={t.requestFit}>
+        Fit
+      </button>
     </div>
   );
 }

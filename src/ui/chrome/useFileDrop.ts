@@ -7,7 +7,9 @@ export function useFileDrop(): void {
   const store = useAppStore();
   const api = useDocumentApi();
   useEffect(() => {
-    const over = (e: DragEvent) => { if (e.dataTransfer?.types.includes('Files')) e.preventDefault(); };
+    const over = (e: DragEvent) => {
+      if (e.dataTransfer?.types.includes('Files')) e.preventDefault();
+    };
     const drop = (e: DragEvent) => {
       const file = e.dataTransfer?.files?.[0];
       if (!file) return;
@@ -16,6 +18,9 @@ export function useFileDrop(): void {
     };
     window.addEventListener('dragover', over);
     window.addEventListener('drop', drop);
-    return () => { window.removeEventListener('dragover', over); window.removeEventListener('drop', drop); };
+    return () => {
+      window.removeEventListener('dragover', over);
+      window.removeEventListener('drop', drop);
+    };
   }, [store, api]);
 }

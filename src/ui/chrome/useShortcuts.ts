@@ -9,7 +9,8 @@ import { sketchFileText } from '../../state/files';
 function typingInField(target: EventTarget | null): boolean {
   const el = target as HTMLElement | null;
   if (!el) return false;
-  if (el.tagName === 'INPUT') return !['checkbox', 'radio', 'button', 'file', 'range'].includes((el as HTMLInputElement).type);
+  if (el.tagName === 'INPUT')
+    return !['checkbox', 'radio', 'button', 'file', 'range'].includes((el as HTMLInputElement).type);
   return el.tagName === 'TEXTAREA' || el.tagName === 'SELECT' || el.isContentEditable;
 }
 
@@ -23,20 +24,53 @@ export function useShortcuts(): void {
       const s = store.getState();
       const key = e.key.toLowerCase();
       const mod = e.ctrlKey || e.metaKey;
-      if (mod && key === 'z') { e.preventDefault(); if (e.shiftKey) s.redo(); else s.undo(); return; }
-      if (mod && key === 'y') { e.preventDefault(); s.redo(); return; }
-      if (mod && key === 's') { e.preventDefault(); downloadText('sketch.json', sketchFileText(store, api), 'application/json'); return; }
-      if (mod && key === 'o') { e.preventDefault(); document.getElementById(OPEN_INPUT_ID)?.click(); return; }
+      if (mod && key === 'z') {
+        e.preventDefault();
+        if (e.shiftKey) s.redo();
+        else s.undo();
+        return;
+      }
+      if (mod && key === 'y') {
+        e.preventDefault();
+        s.redo();
+        return;
+      }
+      if (mod && key === 's') {
+        e.preventDefault();
+        downloadText('sketch.json', sketchFileText(store, api), 'application/json');
+        return;
+      }
+      if (mod && key === 'o') {
+        e.preventDefault();
+        document.getElementById(OPEN_INPUT_ID)?.click();
+        return;
+      }
       if (mod || e.altKey) return;
-      if (e.key === '?') { s.setHelpOpen(!s.helpOpen); return; }
-      if (e.key === 'Escape') { if (s.helpOpen) s.setHelpOpen(false); else controller.cancel(); return; }
+      if (e.key === '?') {
+        s.setHelpOpen(!s.helpOpen);
+        return;
+      }
+      if (e.key === 'Escape') {
+        if (s.helpOpen) s.setHelpOpen(false);
+        else controller.cancel();
+        return;
+      }
       const deleting = e.key === 'Delete' || e.key === 'Backspace';
       if (deleting) e.preventDefault();
       // The active tool first: Enter finishes an outline, Delete while drawing drops its last point.
       if (controller.key(e.key)) return;
-      if (deleting) { controller.deleteSelection(); return; }
-      if (key === 'g') { s.setSnap(!s.snap); return; }
-      if (key === 'f') { s.requestFit(); return; }
+      if (deleting) {
+        controller.deleteSelection();
+        return;
+      }
+      if (key === 'g') {
+        s.setSnap(!s.snap);
+        return;
+      }
+      if (key === 'f') {
+        s.requestFit();
+        return;
+      }
       const tool = toolRegistry.byShortcut(key);
       if (tool) s.setTool(tool.id);
     };

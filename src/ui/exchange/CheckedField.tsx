@@ -52,16 +52,34 @@ export function CheckedField({ label, title, value, placeholder, optional, check
   return (
     <span className="field checked-field" title={title}>
       <label htmlFor={id}>{label}</label>
-      <input id={id} type="text" inputMode="decimal" value={text} placeholder={placeholder} disabled={disabled}
-        aria-invalid={problem ? true : undefined} aria-describedby={problem ? `${id}-problem` : undefined}
+      <input
+        id={id}
+        type="text"
+        inputMode="decimal"
+        value={text}
+        placeholder={placeholder}
+        disabled={disabled}
+        aria-invalid={problem ? true : undefined}
+        aria-describedby={problem ? `${id}-problem` : undefined}
         onFocus={() => setDraft(text)}
-        onChange={(e) => { setProblem(null); setDraft(e.target.value); }}
+        onChange={(e) => {
+          setProblem(null);
+          setDraft(e.target.value);
+        }}
         onBlur={() => commit(true)}
         onKeyDown={(e) => {
           if (e.key === 'Enter') commit(false);
-          if (e.key === 'Escape') { setDraft(null); setProblem(null); }
-        }} />
-      {problem && <span id={`${id}-problem`} className="field-problem">not applied: {label} {problem}</span>}
+          if (e.key === 'Escape') {
+            setDraft(null);
+            setProblem(null);
+          }
+        }}
+      />
+      {problem && (
+        <span id={`${id}-problem`} className="field-problem">
+          not applied: {label} {problem}
+        </span>
+      )}
     </span>
   );
 }

@@ -26,12 +26,18 @@ export function ExchangeResults() {
         <h3 id={`${id}-title`}>Net heat</h3>
         <ExchangeStatus />
       </div>
-      <p className="exchange-caution" role="note" aria-label="Caution about these results"><strong>Caution:</strong> {SAFETY_TEXT}</p>
+      <p className="exchange-caution" role="note" aria-label="Caution about these results">
+        <strong>Caution:</strong> {SAFETY_TEXT}
+      </p>
       {ex.kind === 'error' && (
         <div className="exchange-error" role="alert">
-          <p><strong>No results:</strong> {ex.message}</p>
+          <p>
+            <strong>No results:</strong> {ex.message}
+          </p>
           {ex.surface !== undefined && (
-            <button type="button" title="Show this surface in the properties above" onClick={() => choose(ex.surface!)}>Edit “{ex.surface}”</button>
+            <button type="button" title="Show this surface in the properties above" onClick={() => choose(ex.surface!)}>
+              Edit “{ex.surface}”
+            </button>
           )}
         </div>
       )}
@@ -39,17 +45,28 @@ export function ExchangeResults() {
         <>
           <ExchangeTable ex={ex} current={current} onChoose={choose} />
           <div className="matrix-notes">
-            <span className={ex.result.energyBalance > BALANCE_TOLERANCE ? 'warn' : undefined}
-              title="|sum of the net heats, surroundings included| relative to the largest; rounding is about 1e-14">
-              energy balance residual: {fmtResidual(ex.result.energyBalance)}{ex.result.energyBalance > BALANCE_TOLERANCE ? ' — above rounding' : ''}
+            <span
+              className={ex.result.energyBalance > BALANCE_TOLERANCE ? 'warn' : undefined}
+              title="|sum of the net heats, surroundings included| relative to the largest; rounding is about 1e-14"
+            >
+              energy balance residual: {fmtResidual(ex.result.energyBalance)}
+              {ex.result.energyBalance > BALANCE_TOLERANCE ? ' — above rounding' : ''}
             </span>
             {ex.result.reciprocalCondition < CONDITION_WARNING && (
-              <span className="warn">the radiosity equations are nearly singular (reciprocal condition {fmtResidual(ex.result.reciprocalCondition)}): digits may be lost</span>
+              <span className="warn">
+                the radiosity equations are nearly singular (reciprocal condition{' '}
+                {fmtResidual(ex.result.reciprocalCondition)}): digits may be lost
+              </span>
             )}
             {ex.result.depth === undefined && <span>Set a depth below to see totals in W.</span>}
           </div>
-          <button type="button" title="Download the net heat per surface as CSV (same as the command line's exchange --csv)"
-            onClick={() => downloadText('net-heat.csv', solvedCsv(ex), 'text/csv')}>Download net heat CSV</button>
+          <button
+            type="button"
+            title="Download the net heat per surface as CSV (same as the command line's exchange --csv)"
+            onClick={() => downloadText('net-heat.csv', solvedCsv(ex), 'text/csv')}
+          >
+            Download net heat CSV
+          </button>
           <NetHeatChart ex={ex} />
         </>
       )}

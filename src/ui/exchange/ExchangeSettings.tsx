@@ -16,15 +16,28 @@ export function ExchangeSettings() {
     <section className="exchange-settings" aria-labelledby={`${id}-title`}>
       <h3 id={`${id}-title`}>Sketch settings</h3>
       <div className="row">
-        <CheckedField label={`surroundings temperature (${TEMPERATURE_LABEL[unit]})`} value={Ts === undefined ? undefined : fromKelvin(Ts, unit)}
-          placeholder="not set" optional
+        <CheckedField
+          label={`surroundings temperature (${TEMPERATURE_LABEL[unit]})`}
+          value={Ts === undefined ? undefined : fromKelvin(Ts, unit)}
+          placeholder="not set"
+          optional
           title="Temperature of the surroundings seen through openings and around an open sketch (black); kept in kelvin in the file"
           check={(v) => temperatureProblem(v, unit)}
-          onCommit={(v) => store.getState().edit((d) => setSettings(d, { surroundingsTemperature: v === undefined ? undefined : toKelvin(v, unit) }))} />
-        <CheckedField label="depth (m)" value={settings?.depth} placeholder="not set" optional
+          onCommit={(v) =>
+            store
+              .getState()
+              .edit((d) => setSettings(d, { surroundingsTemperature: v === undefined ? undefined : toKelvin(v, unit) }))
+          }
+        />
+        <CheckedField
+          label="depth (m)"
+          value={settings?.depth}
+          placeholder="not set"
+          optional
           title="Length of the long dimension (duct or furnace length), metres: turns W per metre into W"
           check={(v) => (v > 0 ? null : 'must be greater than 0')}
-          onCommit={(v) => store.getState().edit((d) => setSettings(d, { depth: v }))} />
+          onCommit={(v) => store.getState().edit((d) => setSettings(d, { depth: v }))}
+        />
       </div>
     </section>
   );

@@ -9,7 +9,12 @@ export function ExchangeStatus() {
   let text: string;
   let tone: string;
   if (ex.kind === 'none') {
-    text = vf.status === 'empty' ? 'Nothing to compute yet.' : vf.status === 'invalid' ? 'Sketch is invalid: no results.' : 'Waiting for the view factors…';
+    text =
+      vf.status === 'empty'
+        ? 'Nothing to compute yet.'
+        : vf.status === 'invalid'
+          ? 'Sketch is invalid: no results.'
+          : 'Waiting for the view factors…';
     tone = vf.status === 'invalid' ? 'warn' : 'idle';
   } else if (!ex.stale) {
     text = ex.kind === 'error' ? 'No answer for these properties: see the message.' : 'Up to date';
@@ -25,8 +30,14 @@ export function ExchangeStatus() {
     tone = 'busy';
   }
   return (
-    <p className={`result-status ${tone}`} role="status" aria-live="polite" data-exchange-status={ex.kind === 'none' ? 'none' : ex.stale ? 'stale' : ex.kind}>
-      <span className="dot" aria-hidden="true" />{text}
+    <p
+      className={`result-status ${tone}`}
+      role="status"
+      aria-live="polite"
+      data-exchange-status={ex.kind === 'none' ? 'none' : ex.stale ? 'stale' : ex.kind}
+    >
+      <span className="dot" aria-hidden="true" />
+      {text}
     </p>
   );
 }

@@ -9,8 +9,16 @@ import './exchange.css';
 
 const MODES: { mode: HeatColouring; label: string; title: string }[] = [
   { mode: 'off', label: 'off', title: 'Surface colours' },
-  { mode: 'netFlux', label: 'net flux', title: 'Colour edges by net radiative flux (blue takes heat up, orange gives heat off)' },
-  { mode: 'temperature', label: 'temperature', title: 'Colour edges by surface temperature (blue cooler, orange hotter)' },
+  {
+    mode: 'netFlux',
+    label: 'net flux',
+    title: 'Colour edges by net radiative flux (blue takes heat up, orange gives heat off)',
+  },
+  {
+    mode: 'temperature',
+    label: 'temperature',
+    title: 'Colour edges by surface temperature (blue cooler, orange hotter)',
+  },
 ];
 
 /** Over the canvas: the heat colouring toggle and, when on, its legend. */
@@ -26,7 +34,12 @@ export function HeatLegend() {
         <legend id={`${id}-legend`}>Heat colours</legend>
         {MODES.map((m) => (
           <label key={m.mode} title={m.title}>
-            <input type="radio" name={`${id}-mode`} checked={mode === m.mode} onChange={() => store.getState().setHeatColouring(m.mode)} />
+            <input
+              type="radio"
+              name={`${id}-mode`}
+              checked={mode === m.mode}
+              onChange={() => store.getState().setHeatColouring(m.mode)}
+            />
             {m.label}
           </label>
         ))}
@@ -35,12 +48,18 @@ export function HeatLegend() {
         <div aria-label="Colour legend">
           <div className="scale-title">{scale.title}</div>
           <div className="bar" style={{ background: SCALE_GRADIENT }} aria-hidden="true" />
-          <div className="ticks"><span>{fmtHeat(scale.low)}</span><span>{fmtHeat(scale.centre)}</span><span>{fmtHeat(scale.high)}</span></div>
+          <div className="ticks">
+            <span>{fmtHeat(scale.low)}</span>
+            <span>{fmtHeat(scale.centre)}</span>
+            <span>{fmtHeat(scale.high)}</span>
+          </div>
           {stale && <p className="hint">one step behind the sketch</p>}
         </div>
       )}
       {mode !== 'off' && !scale && (
-        <p className="hint">{ex.kind === 'error' ? 'No heat results: see the Heat exchange tab.' : 'No heat results yet.'}</p>
+        <p className="hint">
+          {ex.kind === 'error' ? 'No heat results: see the Heat exchange tab.' : 'No heat results yet.'}
+        </p>
       )}
     </div>
   );

@@ -23,7 +23,14 @@ export function NetHeatChart({ ex }: { ex: ExchangeSolved }) {
   return (
     <figure className="net-heat-chart">
       <figcaption>Net heat per surface, W per metre of depth</figcaption>
-      <svg viewBox={`0 0 ${WIDTH} ${height}`} width={WIDTH} height={height} style={{ maxWidth: '100%', height: 'auto' }} role="img" aria-label="Bar chart of net heat per surface, W per metre of depth">
+      <svg
+        viewBox={`0 0 ${WIDTH} ${height}`}
+        width={WIDTH}
+        height={height}
+        style={{ maxWidth: '100%', height: 'auto' }}
+        role="img"
+        aria-label="Bar chart of net heat per surface, W per metre of depth"
+      >
         <line x1={zero} x2={zero} y1={0} y2={height} stroke="#6a747b" strokeWidth={1} />
         {rows.map((r, k) => {
           const w = largest > 0 ? ((plot / 2) * Math.abs(r.netHeat)) / largest : 0;
@@ -33,9 +40,20 @@ export function NetHeatChart({ ex }: { ex: ExchangeSolved }) {
           return (
             <g key={r.name} data-surface={r.name}>
               <title>{`${r.name}: ${fmtHeat(r.netHeat)} W/m`}</title>
-              <text x={LABEL - 6} y={y + ROW / 2 + 4} textAnchor="end" fontSize={11}>{name}</text>
-              <rect x={x} y={y + 2} width={Math.max(w, 0.5)} height={ROW - 5} fill={divergingColour(r.netHeat >= 0 ? 0.9 : 0.1)} data-value={r.netHeat} />
-              <text x={WIDTH - 4} y={y + ROW / 2 + 4} textAnchor="end" fontSize={11}>{fmtHeat(r.netHeat)}</text>
+              <text x={LABEL - 6} y={y + ROW / 2 + 4} textAnchor="end" fontSize={11}>
+                {name}
+              </text>
+              <rect
+                x={x}
+                y={y + 2}
+                width={Math.max(w, 0.5)}
+                height={ROW - 5}
+                fill={divergingColour(r.netHeat >= 0 ? 0.9 : 0.1)}
+                data-value={r.netHeat}
+              />
+              <text x={WIDTH - 4} y={y + ROW / 2 + 4} textAnchor="end" fontSize={11}>
+                {fmtHeat(r.netHeat)}
+              </text>
             </g>
           );
         })}

@@ -2,7 +2,16 @@ import { useId } from 'react';
 import { useApp, useAppStore } from '../AppContext';
 import { selectDoc } from '../../state/selectors';
 import { selectExchange, selectTemperatureUnit } from '../../state/exchange/selectors';
-import { conditionIn, DEFAULT_CONDITION, DEFAULT_EMISSIVITY, setCondition, setEmissivity, setSurfaceProps, surfacePropsOf, type ConditionChoice } from '../../state/exchange/edits';
+import {
+  conditionIn,
+  DEFAULT_CONDITION,
+  DEFAULT_EMISSIVITY,
+  setCondition,
+  setEmissivity,
+  setSurfaceProps,
+  surfacePropsOf,
+  type ConditionChoice,
+} from '../../state/exchange/edits';
 import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchange/units';
 import type { SurfaceProps } from '../../state/sketchFile';
 import type { AppState } from '../../state/store';
@@ -56,7 +65,10 @@ export function SurfaceProperties() {
   // A new condition starts from the surface's current result, so switching keeps the answer where it is.
   const startValue = (k: Kind): ConditionChoice => {
     if (k === 'temperature') {
-      const T = solvedIndex >= 0 && exchange.kind === 'solved' ? exchange.result.temperature[solvedIndex] : surroundings ?? ROOM_TEMPERATURE;
+      const T =
+        solvedIndex >= 0 && exchange.kind === 'solved'
+          ? exchange.result.temperature[solvedIndex]
+          : (surroundings ?? ROOM_TEMPERATURE);
       return { kind: k, temperature: Number(T.toFixed(2)) };
     }
     if (k === 'heatFlux') {
@@ -74,48 +86,91 @@ export function SurfaceProperties() {
       </div>
       <div className="row">
         <label htmlFor={`${id}-surface`}>surface</label>
-        <select id={`${id}-surface`} value={current} title="Surface to edit (selecting an edge on the canvas picks its surface)"
-          onChange={(e) => choose(e.target.value)}>
-          {names.map((n) => <option key={n} value={n}>{n}</option>)}
+        <select
+          id={`${id}-surface`}
+          value={current}
+          title="Surface to edit (selecting an edge on the canvas picks its surface)"
+          onChange={(e) => choose(e.target.value)}
+        >
+          {names.map((n) => (
+            <option key={n} value={n}>
+              {n}
+            </option>
+          ))}
         </select>
-        <button type="button" disabled={!props} title="Remove this surface's properties from the file, so the defaults apply"
-          onClick={() => edit((d) => setSurfaceProps(d, current, undefined))}>Use defaults</button>
+        <button
+          type="button"
+          disabled={!props}
+          title="Remove this surface's properties from the file, so the defaults apply"
+          onClick={() => edit((d) => setSurfaceProps(d, current, undefined))}
+        >
+          Use defaults
+        </button>
       </div>
       {!props && (
-        <p className="hint">No properties in the file: the defaults apply (emissivity {DEFAULT_EMISSIVITY}, adiabatic).</p>
+        <p className="hint">
+          No properties in the file: the defaults apply (emissivity {DEFAULT_EMISSIVITY}, adiabatic).
+        </p>
       )}
       <div className="row">
-        <CheckedField label="emissivity" value={kind === 'opening' ? 1 : props?.emissivity}
-          placeholder={`${DEFAULT_EMISSIVITY} (default)`} optional disabled={kind === 'opening'}
+        <CheckedField
+          label="emissivity"
+          value={kind === 'opening' ? 1 : props?.emissivity}
+          placeholder={`${DEFAULT_EMISSIVITY} (default)`}
+          optional
+          disabled={kind === 'opening'}
           title="Hemispherical emissivity, in (0, 1]; leave empty for the default"
           check={(v) => (v > 0 && v <= 1 ? null : 'must be in (0, 1]')}
-          onCommit={(v) => edit((d) => setEmissivity(d, current, v))} />
+          onCommit={(v) => edit((d) => setEmissivity(d, current, v))}
+        />
         <label htmlFor={`${id}-condition`}>condition</label>
-        <select id={`${id}-condition`} value={kind} title={KIND_TITLE[kind]}
-          onChange={(e) => edit((d) => setCondition(d, current, startValue(e.target.value as Kind)))}>
+        <select
+          id={`${id}-condition`}
+          value={kind}
+          title={KIND_TITLE[kind]}
+          onChange={(e) => edit((d) => setCondition(d, current, startValue(e.target.value as Kind)))}
+        >
           {(Object.keys(KIND_LABEL) as Kind[]).map((k) => (
-            <option key={k} value={k} title={KIND_TITLE[k]}>{KIND_LABEL[k]}{isDefault && k === 'adiabatic' ? ' (default)' : ''}</option>
+            <option key={k} value={k} title={KIND_TITLE[k]}>
+              {KIND_LABEL[k]}
+              {isDefault && k === 'adiabatic' ? ' (default)' : ''}
+            </option>
           ))}
         </select>
       </div>
       <div className="row">
         {kind === 'temperature' && props?.temperature !== undefined && (
-          <CheckedField label={`temperature (${TEMPERATURE_LABEL[unit]})`} value={fromKelvin(props.temperature, unit)}
+          <CheckedField
+            label={`temperature (${TEMPERATURE_LABEL[unit]})`}
+            value={fromKelvin(props.temperature, unit)}
             title="Temperature held at the surface; kept in kelvin in the file"
             check={(v) => temperatureProblem(v, unit)}
-            onCommit={(v) => v !== undefined && edit((d) => setCondition(d, current, { kind: 'temperature', temperature: toKelvin(v, unit) }))} />
+            onCommit={(v) =>
+              v !== undefined &&
+              edit((d) => setCondition(d, current, { kind: 'temperature', temperature: toKelvin(v, unit) }))
+            }
+          />
         )}
         {kind === 'heatFlux' && props?.heatFlux !== undefined && (
           <>
-            <CheckedField label="heat flux (W/m²)" value={props.heatFlux}
+            <CheckedField
+              label="heat flux (W/m²)"
+              value={props.heatFlux}
               title="Net radiative flux imposed on the surface, W/m²; > 0 when heat leaves the surface"
-              onCommit={(v) => v !== undefined && edit((d) => setCondition(d, current, { kind: 'heatFlux', heatFlux: v }))} />
+              onCommit={(v) =>
+                v !== undefined && edit((d) => setCondition(d, current, { kind: 'heatFlux', heatFlux: v }))
+              }
+            />
             <span className="hint">&gt; 0: heat leaves the surface; temperature solved</span>
           </>
         )}
-        {kind === 'adiabatic' && <span className="hint">Net heat zero, temperature solved; the emissivity has no effect on it.</span>}
+        {kind === 'adiabatic' && (
+          <span className="hint">Net heat zero, temperature solved; the emissivity has no effect on it.</span>
+        )}
         {kind === 'opening' && (
-          <span className="hint">Black, at the surroundings temperature{surroundings === undefined ? ' — set one below' : ''}.</span>
+          <span className="hint">
+            Black, at the surroundings temperature{surroundings === undefined ? ' — set one below' : ''}.
+          </span>
         )}
       </div>
     </section>

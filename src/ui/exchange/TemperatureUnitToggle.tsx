@@ -10,8 +10,20 @@ export function TemperatureUnitToggle() {
   return (
     <div className="segmented" role="radiogroup" aria-label="Temperature unit">
       {(['K', 'C'] as TemperatureUnit[]).map((u) => (
-        <label key={u} title={u === 'K' ? 'Show and type temperatures in kelvin' : 'Show and type temperatures in degrees Celsius (the file keeps kelvin)'}>
-          <input type="radio" name="temperature-unit" checked={unit === u} onChange={() => store.getState().setTemperatureUnit(u)} />
+        <label
+          key={u}
+          title={
+            u === 'K'
+              ? 'Show and type temperatures in kelvin'
+              : 'Show and type temperatures in degrees Celsius (the file keeps kelvin)'
+          }
+        >
+          <input
+            type="radio"
+            name="temperature-unit"
+            checked={unit === u}
+            onChange={() => store.getState().setTemperatureUnit(u)}
+          />
           {TEMPERATURE_LABEL[u]}
         </label>
       ))}

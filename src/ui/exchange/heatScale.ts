@@ -20,7 +20,11 @@ export function divergingColour(t: number): string {
   const x = Math.min(1, Math.max(0, Number.isFinite(t) ? t : 0.5)) * (STOPS.length - 1);
   const k = Math.min(STOPS.length - 2, Math.floor(x));
   const f = x - k;
-  const hex = STOPS[k].map((a, c) => Math.round(a + f * (STOPS[k + 1][c] - a)).toString(16).padStart(2, '0'));
+  const hex = STOPS[k].map((a, c) =>
+    Math.round(a + f * (STOPS[k + 1][c] - a))
+      .toString(16)
+      .padStart(2, '0'),
+  );
   return `#${hex.join('')}`;
 }
 
@@ -52,7 +56,10 @@ export function heatScale(mode: HeatColouring, view: ExchangeView, unit: Tempera
   const T = result.temperature;
   let lo = Infinity;
   let hi = -Infinity;
-  for (const v of T) { lo = Math.min(lo, v); hi = Math.max(hi, v); }
+  for (const v of T) {
+    lo = Math.min(lo, v);
+    hi = Math.max(hi, v);
+  }
   const span = hi - lo;
   // A spread below rounding is one temperature: all at the centre.
   const flat = !(span > 1e-9 * hi);

@@ -30,8 +30,14 @@ export function exchangeRows(ex: ExchangeSolved): ExchangeRow[] {
   }));
   if (seesSurroundings(r) && r.surroundingsTemperature !== undefined) {
     rows.push({
-      name: SURROUNDINGS_LABEL.name, index: null, condition: SURROUNDINGS_LABEL.condition, emissivity: 1, temperature: r.surroundingsTemperature,
-      netHeat: r.surroundingsNetHeat, netFlux: undefined, total: r.surroundingsNetHeatTotal,
+      name: SURROUNDINGS_LABEL.name,
+      index: null,
+      condition: SURROUNDINGS_LABEL.condition,
+      emissivity: 1,
+      temperature: r.surroundingsTemperature,
+      netHeat: r.surroundingsNetHeat,
+      netFlux: undefined,
+      total: r.surroundingsNetHeatTotal,
     });
   }
   return rows;

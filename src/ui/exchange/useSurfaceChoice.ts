@@ -19,7 +19,9 @@ export function useSurfaceChoice(): { names: string[]; current: string | null; c
   // selection changes, even when the names change. The effect below reads the
   // latest names through this ref (updated first, effects run in order).
   const latestNames = useRef(names);
-  useEffect(() => { latestNames.current = names; }, [names]);
+  useEffect(() => {
+    latestNames.current = names;
+  }, [names]);
   useEffect(() => {
     if (selected.size === 0) return;
     const current = store.getState().exchangeSurface;

@@ -5,10 +5,20 @@ import { SketchSettings } from './SketchSettings';
 import { ExchangeSlot } from '../exchange/ExchangeSlot';
 
 const TABS = [
-  { id: 'selection', label: 'Edit', title: 'Coordinates, lengths and actions for what is selected', Panel: SelectionPanel },
+  {
+    id: 'selection',
+    label: 'Edit',
+    title: 'Coordinates, lengths and actions for what is selected',
+    Panel: SelectionPanel,
+  },
   { id: 'surfaces', label: 'Surfaces', title: 'Named surfaces: rename, group, split', Panel: SurfacesPanel },
   { id: 'sketch', label: 'Sketch', title: 'Units of the sketch', Panel: SketchSettings },
-  { id: 'exchange', label: 'Heat exchange', title: 'Surface properties and net heat (gray-diffuse)', Panel: ExchangeSlot },
+  {
+    id: 'exchange',
+    label: 'Heat exchange',
+    title: 'Surface properties and net heat (gray-diffuse)',
+    Panel: ExchangeSlot,
+  },
 ] as const;
 
 export function Inspector() {
@@ -24,8 +34,19 @@ export function Inspector() {
     <section className="panel inspector" aria-label="Inspector">
       <div className="tabs" role="tablist" aria-label="Inspector sections" onKeyDown={onKey}>
         {TABS.map((t) => (
-          <button key={t.id} type="button" role="tab" id={`${base}-${t.id}`} aria-selected={tab === t.id} aria-controls={`${base}-panel`}
-            tabIndex={tab === t.id ? 0 : -1} title={t.title} onClick={() => setTab(t.id)}>{t.label}</button>
+          <button
+            key={t.id}
+            type="button"
+            role="tab"
+            id={`${base}-${t.id}`}
+            aria-selected={tab === t.id}
+            aria-controls={`${base}-panel`}
+            tabIndex={tab === t.id ? 0 : -1}
+            title={t.title}
+            onClick={() => setTab(t.id)}
+          >
+            {t.label}
+          </button>
         ))}
       </div>
       <div className="tab-panel" role="tabpanel" id={`${base}-panel`} aria-labelledby={`${base}-${tab}`}>

@@ -29,7 +29,12 @@ export function NumberField({ label, title, value, onCommit, width, integer, pre
   return (
     <span className="field" title={title}>
       <label htmlFor={id}>{label}</label>
-      <input id={id} type="text" inputMode="decimal" value={text} aria-invalid={bad || undefined}
+      <input
+        id={id}
+        type="text"
+        inputMode="decimal"
+        value={text}
+        aria-invalid={bad || undefined}
         style={width ? { width } : undefined}
         onFocus={() => setDraft(text)}
         onChange={(e) => setDraft(e.target.value)}
@@ -37,7 +42,8 @@ export function NumberField({ label, title, value, onCommit, width, integer, pre
         onKeyDown={(e) => {
           if (e.key === 'Enter') commit();
           if (e.key === 'Escape') setDraft(null);
-        }} />
+        }}
+      />
     </span>
   );
 }

@@ -16,7 +16,11 @@ export function SelectionPanel() {
   const [groupName, setGroupName] = useState('');
   const u = doc.units;
   if (!selection.length) {
-    return <p className="hint">Nothing selected. Click a vertex, an edge or inside a shape with the Select tool (V); shift-click to add more.</p>;
+    return (
+      <p className="hint">
+        Nothing selected. Click a vertex, an edge or inside a shape with the Select tool (V); shift-click to add more.
+      </p>
+    );
   }
   const edges = selection.filter((p) => p.type === 'edge');
   const vertices = selection.filter((p) => p.type === 'vertex');
@@ -24,7 +28,13 @@ export function SelectionPanel() {
   const group = () => {
     const name = groupName.trim();
     if (!name) return;
-    store.getState().edit((d) => groupEdges(d, edges.map((e) => ({ shape: e.shape, index: e.index })), name));
+    store.getState().edit((d) =>
+      groupEdges(
+        d,
+        edges.map((e) => ({ shape: e.shape, index: e.index })),
+        name,
+      ),
+    );
     setGroupName('');
   };
   return (
@@ -45,10 +55,20 @@ export function SelectionPanel() {
         const [a, b] = edgeEnds(shape, e.index);
         return (
           <div key={`e${e.shape}:${e.index}`} className="item">
-            <h3>{shapeTitle(doc, e.shape)}, edge {e.index + 1}</h3>
-            <p>surface <strong className="name">{edgeNames(shape)[e.index]}</strong>; length {fmtLength(edgeLength(shape, e.index))} {u}</p>
-            <button type="button" title="Split this edge in two at its midpoint (also: double-click the edge)"
-              onClick={() => store.getState().edit((d) => insertVertex(d, e.shape, e.index, [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2]))}>
+            <h3>
+              {shapeTitle(doc, e.shape)}, edge {e.index + 1}
+            </h3>
+            <p>
+              surface <strong className="name">{edgeNames(shape)[e.index]}</strong>; length{' '}
+              {fmtLength(edgeLength(shape, e.index))} {u}
+            </p>
+            <button
+              type="button"
+              title="Split this edge in two at its midpoint (also: double-click the edge)"
+              onClick={() =>
+                store.getState().edit((d) => insertVertex(d, e.shape, e.index, [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2]))
+              }
+            >
               Insert vertex at midpoint
             </button>
           </div>
@@ -57,14 +77,32 @@ export function SelectionPanel() {
       {edges.length > 6 && <p>…and {edges.length - 6} more edges</p>}
       {edges.length > 0 && (
         <div className="item group-box">
-          <h3>Group {edges.length} edge{edges.length > 1 ? 's' : ''} into one surface</h3>
+          <h3>
+            Group {edges.length} edge{edges.length > 1 ? 's' : ''} into one surface
+          </h3>
           <span className="field">
             <label htmlFor="group-name">surface name</label>
-            <input id="group-name" type="text" value={groupName} maxLength={200} placeholder="e.g. roof"
+            <input
+              id="group-name"
+              type="text"
+              value={groupName}
+              maxLength={200}
+              placeholder="e.g. roof"
               title="Name of the surface the selected edges will form (an existing name merges them into it)"
-              onChange={(ev) => setGroupName(ev.target.value)} onKeyDown={(ev) => { if (ev.key === 'Enter') group(); }} />
+              onChange={(ev) => setGroupName(ev.target.value)}
+              onKeyDown={(ev) => {
+                if (ev.key === 'Enter') group();
+              }}
+            />
           </span>
-          <button type="button" disabled={!groupName.trim()} title="Give the selected edges this surface name" onClick={group}>Group</button>
+          <button
+            type="button"
+            disabled={!groupName.trim()}
+            title="Give the selected edges this surface name"
+            onClick={group}
+          >
+            Group
+          </button>
         </div>
       )}
       {shapes.slice(0, 2).map((p) => {
@@ -72,15 +110,24 @@ export function SelectionPanel() {
         if (!shape) return null;
         return (
           <div key={`s${p.shape}`} className="item">
-            <h3>{shapeTitle(doc, p.shape)}: {shape.points.length} points</h3>
+            <h3>
+              {shapeTitle(doc, p.shape)}: {shape.points.length} points
+            </h3>
             <div className="vertex-list">
-              {shape.points.map((q, k) => <VertexRow key={k} shape={p.shape} index={k} point={q} units={u} />)}
+              {shape.points.map((q, k) => (
+                <VertexRow key={k} shape={p.shape} index={k} point={q} units={u} />
+              ))}
             </div>
           </div>
         );
       })}
       {(shapes.length > 0 || vertices.length > 0) && (
-        <button type="button" className="danger" title="Delete the selected shapes and vertices (Delete key)" onClick={() => controller.deleteSelection()}>
+        <button
+          type="button"
+          className="danger"
+          title="Delete the selected shapes and vertices (Delete key)"
+          onClick={() => controller.deleteSelection()}
+        >
           Delete selected
         </button>
       )}

@@ -33,18 +33,34 @@ export function MatrixPanel() {
       <MatrixControls shown={shown} view={view} digits={digits} />
       <div className="matrix-scroll">
         {view ? (
-          <MatrixTable view={view} digits={digits} units={units} order={order} selected={selected} hoverPair={hoverPair} onHover={setHover} stale={stale} />
+          <MatrixTable
+            view={view}
+            digits={digits}
+            units={units}
+            order={order}
+            selected={selected}
+            hoverPair={hoverPair}
+            onHover={setHover}
+            stale={stale}
+          />
         ) : (
           <p className="empty">No results to show.</p>
         )}
       </div>
       {view && (
         <div id="matrix-notes" className="matrix-notes">
-          <span className={recipBad ? 'warn' : undefined} title="Largest |L_i F_ij − L_j F_ji| relative to the larger term, over all pairs">
-            reciprocity residual (largest): {fmtResidual(view.reciprocityResidual)}{recipBad ? ' — above rounding, cells marked ⚠' : ''}
+          <span
+            className={recipBad ? 'warn' : undefined}
+            title="Largest |L_i F_ij − L_j F_ji| relative to the larger term, over all pairs"
+          >
+            reciprocity residual (largest): {fmtResidual(view.reciprocityResidual)}
+            {recipBad ? ' — above rounding, cells marked ⚠' : ''}
           </span>
           {view.closed ? (
-            <span className={rowBad ? 'warn' : undefined}>largest row-sum residual: {fmtResidual(view.worstRowResidual)}{rowBad ? ' — above rounding' : ''}</span>
+            <span className={rowBad ? 'warn' : undefined}>
+              largest row-sum residual: {fmtResidual(view.worstRowResidual)}
+              {rowBad ? ' — above rounding' : ''}
+            </span>
           ) : (
             <span>open sketch: the last column is the factor to the surroundings</span>
           )}

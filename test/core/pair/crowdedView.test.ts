@@ -12,11 +12,25 @@ import { perEdge, type Poly } from '../helpers';
 // sec. 13.1, eq. 13.5), summed here.
 const TOL = 1e-9;
 
-const square = (x: number, y: number, s: number): number[][] => [[x, y], [x + s, y], [x + s, y + s], [x, y + s]];
-const ell = (x: number, y: number, s: number): number[][] =>
-  [[x, y], [x + s, y], [x + s, y + s / 3], [x + s / 3, y + s / 3], [x + s / 3, y + s], [x, y + s]];
+const square = (x: number, y: number, s: number): number[][] => [
+  [x, y],
+  [x + s, y],
+  [x + s, y + s],
+  [x, y + s],
+];
+const ell = (x: number, y: number, s: number): number[][] => [
+  [x, y],
+  [x + s, y],
+  [x + s, y + s / 3],
+  [x + s / 3, y + s / 3],
+  [x + s / 3, y + s],
+  [x, y + s],
+];
 const tube = (cx: number, cy: number, r: number, sides: number): number[][] =>
-  Array.from({ length: sides }, (_, k) => [cx + r * Math.cos((2 * Math.PI * k) / sides + 0.1), cy + r * Math.sin((2 * Math.PI * k) / sides + 0.1)]);
+  Array.from({ length: sides }, (_, k) => [
+    cx + r * Math.cos((2 * Math.PI * k) / sides + 0.1),
+    cy + r * Math.sin((2 * Math.PI * k) / sides + 0.1),
+  ]);
 
 /**
  * A duct 8 x 3 holding three staggered rows of small squares and L-shaped bars (convex
@@ -31,7 +45,9 @@ function crowdedDuct(): Poly[] {
     const x = 0.2 + 0.5 * k;
     comb.push([x, 0], [x + 0.05, 0.3], [x + 0.15, 0.3], [x + 0.2, 0]);
   }
-  const polys: Poly[] = [{ kind: 'enclosure', points: [[0, 0], ...comb, [3.95, 0], [4.05, 0], [8, 0], [8, 3], [0, 3]] }];
+  const polys: Poly[] = [
+    { kind: 'enclosure', points: [[0, 0], ...comb, [3.95, 0], [4.05, 0], [8, 0], [8, 3], [0, 3]] },
+  ];
   for (let c = 0; c < 14; c++) {
     const x = 2.2 + 0.26 * c;
     polys.push({ kind: 'solid', points: square(x, 0.7 + 0.08 * (c % 3), 0.12) });
@@ -46,11 +62,12 @@ const SPOT = 1 + 24;
 /** Edge id of the roof, from (8, 3) to (0, 3). */
 const ROOF = SPOT + 3;
 
-const rowSums = (F: Float64Array, n: number, rows: number[]) => rows.map((i) => {
-  let s = 0;
-  for (let j = 0; j < n; j++) s += F[i * n + j];
-  return s;
-});
+const rowSums = (F: Float64Array, n: number, rows: number[]) =>
+  rows.map((i) => {
+    let s = 0;
+    for (let j = 0; j < n; j++) s += F[i * n + j];
+    return s;
+  });
 
 describe('crowded views (every scratch buffer grows within one pair)', () => {
   const polys = crowdedDuct();
@@ -60,11 +77,17 @@ describe('crowded views (every scratch buffer grows within one pair)', () => {
 
   it('the scene really is crowded: the view from SPOT to the roof holds more bodies than the buffers start with', () => {
     // The view region of SPOT and the roof: the quadrilateral (3.95, 0) (4.05, 0) (8, 3) (0, 3).
-    const H = [[3.95, 0], [4.05, 0], [8, 3], [0, 3]];
-    const inside = ([x, y]: number[]) => H.every(([ax, ay], k) => {
-      const [bx, by] = H[(k + 1) % 4];
-      return (bx - ax) * (y - ay) - (by - ay) * (x - ax) > 0;
-    });
+    const H = [
+      [3.95, 0],
+      [4.05, 0],
+      [8, 3],
+      [0, 3],
+    ];
+    const inside = ([x, y]: number[]) =>
+      H.every(([ax, ay], k) => {
+        const [bx, by] = H[(k + 1) % 4];
+        return (bx - ax) * (y - ay) - (by - ay) * (x - ax) > 0;
+      });
     const whole = polys.slice(1).filter((p) => p.points.every(inside));
     expect(whole.length).toBeGreaterThan(32); // chains start with room for 32, kept pieces and fixed points for 64
     expect(whole.reduce((s, p) => s + p.points.length, 0)).toBeGreaterThan(128);
@@ -74,7 +97,11 @@ describe('crowded views (every scratch buffer grows within one pair)', () => {
   });
 
   it('every row sums to one (closed duct), factors lie in [0, 1]', () => {
-    const sums = rowSums(r.F, n, segs.map((_, k) => k));
+    const sums = rowSums(
+      r.F,
+      n,
+      segs.map((_, k) => k),
+    );
     for (let i = 0; i < n; i++) {
       expect(Math.abs(1 - sums[i]), `row ${i}`).toBeLessThan(TOL);
       for (let j = 0; j < n; j++) {
@@ -99,7 +126,9 @@ describe('crowded views (every scratch buffer grows within one pair)', () => {
 describe('walk-position ranges of the angular windows', () => {
   it('intersecting many ranges keeps every product (more than any fixed buffer held), merged, as a brute-force set intersection', () => {
     // 60 short ranges against 9 overlapping windows: over 400 products before merging.
-    const a = new WalkRanges(2), b = new WalkRanges(2), scratch = new WalkRanges(2);
+    const a = new WalkRanges(2),
+      b = new WalkRanges(2),
+      scratch = new WalkRanges(2);
     for (let k = 0; k < 60; k++) a.push(10 * k, 10 * k + 6);
     for (let k = 0; k < 9; k++) b.push(3 + 7 * k, 3 + 7 * k + 500);
     const inA = (m: number) => m % 10 <= 6 && m < 600;

@@ -32,7 +32,18 @@ function countingRunner(): JobRunner & { jobs: ViewFactorJob[] } {
 const duct: SketchFile = {
   version: 1,
   units: 'm',
-  shapes: [{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] }],
+  shapes: [
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 2],
+        [0, 2],
+      ],
+      surface: ['floor', 'right', 'roof', 'left'],
+    },
+  ],
   surfaces: { floor: { emissivity: 0.8, temperature: 1000 } },
 };
 

@@ -11,15 +11,36 @@ import type { SketchFile } from '../../../src/state/sketchFile';
 import { spawner } from '../../worker/fakeWorker';
 
 const box: SketchFile = {
-  version: 1, units: 'm',
+  version: 1,
+  units: 'm',
   shapes: [
-    { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: ['floor', 'right', 'roof', 'left'] },
-    { kind: 'solid', points: [[1.75, 0.75], [2.25, 0.75], [2.25, 1.25], [1.75, 1.25]], surface: 'block' },
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 2],
+        [0, 2],
+      ],
+      surface: ['floor', 'right', 'roof', 'left'],
+    },
+    {
+      kind: 'solid',
+      points: [
+        [1.75, 0.75],
+        [2.25, 0.75],
+        [2.25, 1.25],
+        [1.75, 1.25],
+      ],
+      surface: 'block',
+    },
   ],
 };
 const flush = () => new Promise((r) => setTimeout(r, 0));
 /** The real core, run in-thread. */
-const inThread: JobRunner = { run: async (job) => ({ kind: 'done', result: await viewFactorApi.compute(job), elapsedMs: 0 }) };
+const inThread: JobRunner = {
+  run: async (job) => ({ kind: 'done', result: await viewFactorApi.compute(job), elapsedMs: 0 }),
+};
 
 describe('live results', () => {
   it('computes for the current document and files the result with it', async () => {

@@ -11,10 +11,29 @@ import type { SketchFile } from '../../../src/state/sketchFile';
 
 // A 4 x 2 enclosure with a 1 x 1 block whose lower-left corner is at (1, 0.5).
 const doc: SketchFile = {
-  version: 1, units: 'm',
+  version: 1,
+  units: 'm',
   shapes: [
-    { kind: 'enclosure', points: [[0, 0], [4, 0], [4, 2], [0, 2]], surface: 'wall' },
-    { kind: 'solid', points: [[1, 0.5], [2, 0.5], [2, 1.5], [1, 1.5]], surface: 'block' },
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 2],
+        [0, 2],
+      ],
+      surface: 'wall',
+    },
+    {
+      kind: 'solid',
+      points: [
+        [1, 0.5],
+        [2, 0.5],
+        [2, 1.5],
+        [1, 1.5],
+      ],
+      surface: 'block',
+    },
   ],
 };
 
@@ -29,7 +48,21 @@ describe('hitTest', () => {
   });
 
   it('takes the nearer of two vertices within reach, and nothing beyond the tolerance', () => {
-    const close: SketchFile = { version: 1, units: 'm', shapes: [{ kind: 'solid', points: [[0, 0], [0.06, 0], [0, 1]], surface: 's' }] };
+    const close: SketchFile = {
+      version: 1,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'solid',
+          points: [
+            [0, 0],
+            [0.06, 0],
+            [0, 1],
+          ],
+          surface: 's',
+        },
+      ],
+    };
     expect(hitTest(close, [0.04, 0], 0.05)).toEqual({ type: 'vertex', shape: 0, index: 1 });
     expect(hitTest(doc, [5.06, 1], 0.05)).toBeNull();
   });
@@ -37,7 +70,13 @@ describe('hitTest', () => {
 
 describe('pressSelect and dragOffset', () => {
   it('a press on an unselected edge selects it alone and plans a drag from its first end', () => {
-    const r = pressSelect(doc, [{ type: 'shape', shape: 0 }], { type: 'edge', shape: 1, index: 0, at: [1.5, 0.5] }, [1.5, 0.52], false);
+    const r = pressSelect(
+      doc,
+      [{ type: 'shape', shape: 0 }],
+      { type: 'edge', shape: 1, index: 0, at: [1.5, 0.5] },
+      [1.5, 0.52],
+      false,
+    );
     expect(r.selection).toEqual([{ type: 'edge', shape: 1, index: 0 }]);
     expect(r.drag).toEqual({ picks: r.selection, anchor: [1.5, 0.52], reference: [1, 0.5] });
   });
@@ -74,18 +113,67 @@ describe('pressSelect and dragOffset', () => {
 describe('draft pictures', () => {
   it('outline tools: open rubber band to the pointer, handles on the clicked points, a dot before the first click', () => {
     expect(enclosureTool.draft([], null)).toBeNull();
-    expect(enclosureTool.draft([], [1, 1])).toEqual({ points: [], closed: false, marks: [], dot: [1, 1], tone: 'enclosure' });
-    expect(bodyTool.draft([[0, 0], [1, 0]], [1, 1])).toEqual({
-      points: [[0, 0], [1, 0], [1, 1]], closed: false, marks: [[0, 0], [1, 0]], dot: null, tone: 'body',
+    expect(enclosureTool.draft([], [1, 1])).toEqual({
+      points: [],
+      closed: false,
+      marks: [],
+      dot: [1, 1],
+      tone: 'enclosure',
+    });
+    expect(
+      bodyTool.draft(
+        [
+          [0, 0],
+          [1, 0],
+        ],
+        [1, 1],
+      ),
+    ).toEqual({
+      points: [
+        [0, 0],
+        [1, 0],
+        [1, 1],
+      ],
+      closed: false,
+      marks: [
+        [0, 0],
+        [1, 0],
+      ],
+      dot: null,
+      tone: 'body',
     });
     expect(enclosureTool.progress?.([[0, 0]])).toBe(' — 1 point so far');
-    expect(enclosureTool.progress?.([[0, 0], [1, 0]])).toBe(' — 2 points so far');
+    expect(
+      enclosureTool.progress?.([
+        [0, 0],
+        [1, 0],
+      ]),
+    ).toBe(' — 2 points so far');
     expect(enclosureTool.progress?.([])).toBe('');
   });
 
   it('quick shapes: a closed outline while dragging, nothing before; select draws nothing', () => {
     expect(rectangleTool.draft([], null)).toBeNull();
-    expect(tubeTool.draft([[0, 0], [1, 0], [0, 1]], null)).toEqual({ points: [[0, 0], [1, 0], [0, 1]], closed: true, marks: [], dot: null, tone: 'body' });
+    expect(
+      tubeTool.draft(
+        [
+          [0, 0],
+          [1, 0],
+          [0, 1],
+        ],
+        null,
+      ),
+    ).toEqual({
+      points: [
+        [0, 0],
+        [1, 0],
+        [0, 1],
+      ],
+      closed: true,
+      marks: [],
+      dot: null,
+      tone: 'body',
+    });
     expect(selectTool.draft([], [1, 1])).toBeNull();
   });
 

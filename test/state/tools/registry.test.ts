@@ -24,7 +24,11 @@ const stampTool: DrawingTool<{ stamps: number }, 'stamp'> = {
   init: () => ({ stamps: 0 }),
   press(ctx, e) {
     const [x, y] = ctx.snapped(e.at);
-    placeShape(ctx.get, 'solid', [[x, y], [x + 1, y], [x, y + 1]]);
+    placeShape(ctx.get, 'solid', [
+      [x, y],
+      [x + 1, y],
+      [x, y + 1],
+    ]);
     ctx.gesture.stamps += 1;
     return 'handled';
   },
@@ -50,7 +54,11 @@ describe('a tool joins through the registry alone', () => {
     c.release(at([1.1, 2.2]));
     const shape = store.getState().doc.shapes[0];
     expect(shape.kind).toBe('solid');
-    expect(shape.points).toEqual([[1, 2], [2, 2], [1, 3]]); // (1.1, 2.2) snaps to (1, 2) on a 0.5 grid
+    expect(shape.points).toEqual([
+      [1, 2],
+      [2, 2],
+      [1, 3],
+    ]); // (1.1, 2.2) snaps to (1, 2) on a 0.5 grid
     expect(restore(store.getState().doc).ok).toBe(true);
     expect(store.getState().selection).toEqual([{ type: 'shape', shape: 0 }]);
     c.press(at([3, 3]));
@@ -75,22 +83,51 @@ describe('a tool joins through the registry alone', () => {
     store.setState({ tool: 'stamp' });
     expect(() => c.press(at([0, 0]))).toThrow(/No drawing tool "stamp"; the tools are select/);
     expect(() => createToolRegistry([selectTool, { ...stampTool, id: 'select' }])).toThrow(/id "select"/);
-    expect(() => createToolRegistry([selectTool, { ...stampTool, shortcut: 'v' }])).toThrow(/"select" and "stamp" share the shortcut "v"/);
+    expect(() => createToolRegistry([selectTool, { ...stampTool, shortcut: 'v' }])).toThrow(
+      /"select" and "stamp" share the shortcut "v"/,
+    );
     expect(() => createToolRegistry([])).toThrow(/at least one tool/);
   });
 });
 
 describe('the app registry', () => {
   it('lists the tools in toolbar order with their shortcuts, select first and active at start', () => {
-    expect(TOOLS.map((t) => [t.id, t.shortcut])).toEqual([['select', 'v'], ['enclosure', 'e'], ['solid', 'b'], ['rectangle', 'r'], ['tube', 't']]);
+    expect(TOOLS.map((t) => [t.id, t.shortcut])).toEqual([
+      ['select', 'v'],
+      ['enclosure', 'e'],
+      ['solid', 'b'],
+      ['rectangle', 'r'],
+      ['tube', 't'],
+    ]);
     expect(toolRegistry.tools.map((t) => t.label)).toEqual(['Select', 'Enclosure', 'Body', 'Rectangle', 'Tube']);
     expect(createAppStore(emptySketch).getState().tool).toBe('select');
     expect(toolRegistry.tools.filter((t) => t.showsAllHandles).map((t) => t.id)).toEqual(['select']);
-    expect(toolRegistry.tools.map((t) => t.cursor)).toEqual(['default', 'crosshair', 'crosshair', 'crosshair', 'crosshair']);
+    expect(toolRegistry.tools.map((t) => t.cursor)).toEqual([
+      'default',
+      'crosshair',
+      'crosshair',
+      'crosshair',
+      'crosshair',
+    ]);
   });
 
   it('switching tools mid-drag drops the drag as Escape does, leaving no gesture open', () => {
-    const store = createAppStore({ version: 1, units: 'm', shapes: [{ kind: 'enclosure', points: [[0, 0], [4, 0], [4, 4], [0, 4]], surface: 'wall' }] });
+    const store = createAppStore({
+      version: 1,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [4, 0],
+            [4, 4],
+            [0, 4],
+          ],
+          surface: 'wall',
+        },
+      ],
+    });
     const before = store.getState().doc;
     const c = new CanvasController(store);
     store.getState().setSnap(false);
