@@ -1,5 +1,5 @@
 // The sketcher end to end in headless chromium: demo, drawing with the mouse,
-// dragging, undo, CSV export, reload. Also logs the drag-to-table latency.
+// dragging, undo, CSV export, reload.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync, readFileSync } from 'node:fs';
 import Papa from 'papaparse';
@@ -28,8 +28,8 @@ const table = () => page.getByRole('table', { name: /view factor/i });
 const tableText = () => table().locator('tbody').innerText();
 const docOf = () => page.evaluate(() => (window as unknown as TestWindow).__tautline.store.getState().doc);
 
-/** The drag-latency probe the latency test puts in the page (times in ms, from performance.now()). */
-type ProbeWindow = TestWindow & { __lat: { lastMove: number; samples: number[]; jobs: number[]; changes: number } };
+/** The page with a counter of changes to the view-factor table, put there by the drag test. */
+type ProbeWindow = TestWindow & { __changes: number };
 const status = () => page.locator('[data-status]').getAttribute('data-status');
 
 async function waitReady() {
@@ -52,70 +52,31 @@ describe('sketcher in chromium', () => {
     await page.screenshot({ path: 'test-artifacts/demo.png' });
   });
 
-  it('measures the time from a drag event to the updated table on the demo', async () => {
-    // Count every change of the table body, stamped with the time of the pointer event before it.
+  it('a drag updates the table as the shape moves, and the whole drag is one undo step', async () => {
+    // Latency is measured by `npm run bench:browser`, not asserted here.
     await page.evaluate(() => {
       const w = window as unknown as ProbeWindow;
-      w.__lat = { lastMove: 0, samples: [], jobs: [], changes: 0 };
-      window.addEventListener(
-        'pointermove',
-        () => {
-          w.__lat.lastMove = performance.now();
-        },
-        true,
-      );
+      w.__changes = 0;
       new MutationObserver(() => {
-        if (w.__lat.lastMove) {
-          w.__lat.samples.push(performance.now() - w.__lat.lastMove);
-          w.__lat.jobs.push(w.__tautline.store.getState().viewFactors.edges?.elapsedMs ?? NaN);
-        }
-        w.__lat.lastMove = 0;
-        w.__lat.changes++;
+        w.__changes++;
       }).observe(document.querySelector('.matrix-scroll')!, { subtree: true, childList: true, characterData: true });
     });
     const before = await tableText();
-    // Snapping off, so every pointer move changes the geometry (the worst case for keeping up).
+    // Snapping off, so every pointer move changes the geometry.
     await page.getByRole('checkbox', { name: 'snap' }).uncheck();
     const [sx, sy] = await screenOf(2.1, 1.5); // a roof corner of the oven
-    // A first drag warms up the compiler in page and worker, as any real session does.
     await page.mouse.move(sx, sy);
     await page.mouse.down();
-    for (let i = 1; i <= 20; i++) await page.mouse.move(sx + i, sy - i / 2);
-    await page.mouse.move(sx, sy);
-    await page.mouse.up();
-    await page.keyboard.press('Control+z');
-    await waitReady();
-    await page.evaluate(() => {
-      const l = (window as unknown as ProbeWindow).__lat;
-      l.samples = [];
-      l.jobs = [];
-      l.lastMove = 0;
-    });
-    await page.mouse.move(sx, sy);
-    await page.mouse.down();
-    for (let i = 1; i <= 40; i++) {
-      const changes = await page.evaluate(() => (window as unknown as ProbeWindow).__lat.changes);
+    for (let i = 1; i <= 10; i++) {
+      const changes = await page.evaluate(() => (window as unknown as ProbeWindow).__changes);
       await page.mouse.move(sx + i * 2, sy - i);
-      await page.waitForFunction((c) => (window as unknown as ProbeWindow).__lat.changes > c, changes, {
-        timeout: 5000,
-      });
+      // The table follows each move while the button is still down.
+      await page.waitForFunction((c) => (window as unknown as ProbeWindow).__changes > c, changes, { timeout: 10000 });
     }
     await page.mouse.up();
     await page.getByRole('checkbox', { name: 'snap' }).check();
-    const samples = await page.evaluate(() => (window as unknown as ProbeWindow).__lat.samples);
-    const jobs = await page.evaluate(() => (window as unknown as ProbeWindow).__lat.jobs);
-    const sorted = [...samples].sort((a, b) => a - b);
-    const jobMedian = [...jobs].sort((a, b) => a - b)[Math.floor(jobs.length / 2)];
-    const median = sorted[Math.floor(sorted.length / 2)];
-    console.log(
-      `drag-to-table latency on the demo: median ${median.toFixed(1)} ms, p90 ${sorted[Math.floor(sorted.length * 0.9)].toFixed(1)} ms over ${samples.length} moves (worker job alone: median ${jobMedian.toFixed(1)} ms)`,
-    );
-    expect(samples.length).toBeGreaterThanOrEqual(35);
-    // The target (under 50 ms on the dev machine) is reported, not asserted: CI shares its cores.
-    // This bound only catches a pipeline that has stopped keeping up with a drag at all.
-    expect(median).toBeLessThan(300);
+    await waitReady();
     expect(await tableText()).not.toBe(before);
-    // The whole drag is one undo step.
     await page.keyboard.press('Control+z');
     await waitReady();
     expect(await tableText()).toBe(before);
