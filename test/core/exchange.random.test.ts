@@ -58,7 +58,7 @@ function oracle(input: ExchangeInput): { q: number[]; T: number[] } {
   }
   const x = mlSolve(A, b).to1DArray();
   const q = x.map((v, j) => (knownE[j] !== undefined ? v : knownQ[j]!));
-  const T = x.map((v, j) => ((knownE[j] !== undefined ? knownE[j]! : v) / SIGMA) ** 0.25);
+  const T = x.map((v, j) => ((knownE[j] ?? v) / SIGMA) ** 0.25);
   return { q, T };
 }
 

@@ -143,7 +143,7 @@ describe('handbook view factors (unobstructed)', () => {
       { kind: 'enclosure' as const, points: ring(2, 0.1) },
       { kind: 'solid' as const, points: ring(0.7, 0.3) },
     ];
-    const edgeSurface = [...Array(sides).fill(0), ...Array(sides).fill(1)];
+    const edgeSurface: number[] = [...new Array<number>(sides).fill(0), ...new Array<number>(sides).fill(1)];
     const r = withSurfaces(polys, edgeSurface, 2);
     expect(Math.abs(f(r, 1, 0) - 1)).toBeLessThan(TOL);
     expect(f(r, 1, 1)).toBe(0);
