@@ -4,8 +4,7 @@ import * as Comlink from 'comlink';
 import { MessageChannel } from 'node:worker_threads';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter';
 import { viewFactorApi } from '../../src/worker/api';
-import { jobFromPolygons, type ViewFactorApi } from '../../src/worker/job';
-import { computeViewFactors } from '../../src/core/viewFactors';
+import { jobFromPolygons, type EdgeViewFactors, type ViewFactorApi } from '../../src/worker/job';
 import { documentApi } from '../../src/state/documentApi';
 import { surfaceFactors } from '../../src/state/results/derive';
 import { surfaceIndex } from '../../src/document/surfaceIndex';
@@ -18,22 +17,100 @@ function checked(doc: unknown) {
   return r.sketch;
 }
 
+/** The worker's api behind a real channel; close() frees both ports. */
+function overChannel() {
+  const { port1, port2 } = new MessageChannel();
+  Comlink.expose(viewFactorApi, nodeEndpoint(port1));
+  const remote = Comlink.wrap<ViewFactorApi>(nodeEndpoint(port2));
+  return {
+    remote,
+    close: () => {
+      port1.close();
+      port2.close();
+    },
+  };
+}
+
+/**
+ * Independent of the code under test: surfaces numbered by first appearance, and
+ * F_IJ = sum_{i in I, j in J} L_i F_ij / L_I (the area-weighted sum of the summation
+ * rule; Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1).
+ */
+function sumToSurfaces(edges: EdgeViewFactors, shapes: readonly { surface: readonly string[] }[]) {
+  const names: string[] = [];
+  const of: number[] = [];
+  for (const shape of shapes)
+    for (const name of shape.surface) {
+      if (!names.includes(name)) names.push(name);
+      of.push(names.indexOf(name));
+    }
+  const m = names.length;
+  const n = edges.edgeCount;
+  const length = new Array<number>(m).fill(0);
+  const exchange = new Array<number>(m * m).fill(0);
+  for (let i = 0; i < n; i++) {
+    length[of[i]] += edges.edgeLength[i];
+    for (let j = 0; j < n; j++) exchange[of[i] * m + of[j]] += edges.edgeLength[i] * edges.F[i * n + j];
+  }
+  return { names, length, F: exchange.map((g, k) => g / length[Math.floor(k / m)]) };
+}
+
 describe('worker api', () => {
-  it('returns edge factors through the channel that sum to the surface matrix the core gives directly', async () => {
-    const { port1, port2 } = new MessageChannel();
-    Comlink.expose(viewFactorApi, nodeEndpoint(port1));
-    const remote = Comlink.wrap<ViewFactorApi>(nodeEndpoint(port2));
+  it('returns edge factors through the channel; summed to surfaces they match an independent area-weighted sum', async () => {
+    const { remote, close } = overChannel();
     const sketch = checked(demoSketch);
     const { scene } = documentApi.toScene(sketch);
-    const direct = computeViewFactors(scene);
     const viaWorker = await remote.compute(jobFromPolygons(scene.polygons));
+    close();
+    const edgeCount = sketch.shapes.reduce((k, s) => k + s.points.length, 0); // 6 + 4 x 12
+    expect(edgeCount).toBe(54);
+    expect(viaWorker.edgeCount).toBe(edgeCount);
     expect(viaWorker.F).toBeInstanceOf(Float64Array);
-    expect(viaWorker.F).toHaveLength(direct.edgeCount * direct.edgeCount);
+    expect(viaWorker.F).toHaveLength(edgeCount * edgeCount);
     expect(viaWorker.closed).toBe(true);
+    const expected = sumToSurfaces(viaWorker, sketch.shapes);
+    expect(expected.names).toEqual([
+      'fired floor',
+      'side walls',
+      'refractory roof',
+      'tube 1',
+      'tube 2',
+      'tube 3',
+      'tube 4',
+    ]);
     const summed = surfaceFactors(viaWorker, surfaceIndex(sketch.shapes));
-    expect(Array.from(summed.F)).toEqual(Array.from(direct.F));
-    expect(Array.from(summed.surfaceLength)).toEqual(Array.from(direct.surfaceLength));
-    port1.close();
-    port2.close();
+    const m = expected.names.length;
+    expect(summed.surfaceCount).toBe(m);
+    // Same sums in another order: rounding only (factors are at most 1).
+    for (let k = 0; k < m * m; k++) expect(Math.abs(summed.F[k] - expected.F[k])).toBeLessThanOrEqual(1e-12);
+    for (let I = 0; I < m; I++) {
+      expect(Math.abs(summed.surfaceLength[I] - expected.length[I])).toBeLessThanOrEqual(1e-12);
+      // Closed enclosure: every row sums to one (summation rule, Incropera et al., 6th ed., eq. 13.4).
+      let row = 0;
+      for (let J = 0; J < m; J++) row += expected.F[I * m + J];
+      expect(Math.abs(1 - row)).toBeLessThanOrEqual(1e-9);
+    }
+    // Floor: 2.4 m; roof: 1.8 m flat plus two 0.3 m x 0.3 m chamfers (the demo's own coordinates).
+    expect(Math.abs(expected.length[0] - 2.4)).toBeLessThanOrEqual(1e-12);
+    expect(Math.abs(expected.length[2] - (1.8 + 2 * 0.3 * Math.SQRT2))).toBeLessThanOrEqual(1e-12);
+  });
+
+  it('a unit square duct through the channel: adjacent walls 1 - sqrt(2)/2, opposite walls sqrt(2) - 1', async () => {
+    // Hottel's crossed strings (Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., Table 13.1):
+    // adjacent (1 + 1 - sqrt 2) / 2, opposite (2 sqrt 2 - 2) / 2; a flat wall does not see itself.
+    const { remote, close } = overChannel();
+    const r = await remote.compute({
+      polygons: [{ kind: 'enclosure', points: Float64Array.from([0, 0, 1, 0, 1, 1, 0, 1]) }],
+    });
+    close();
+    expect(r.edgeCount).toBe(4);
+    expect(Array.from(r.edgeLength)).toEqual([1, 1, 1, 1]);
+    const adjacent = 1 - Math.SQRT2 / 2;
+    const opposite = Math.SQRT2 - 1;
+    for (let i = 0; i < 4; i++)
+      for (let j = 0; j < 4; j++) {
+        const expected = i === j ? 0 : (i - j + 4) % 2 === 0 ? opposite : adjacent;
+        expect(Math.abs(r.F[i * 4 + j] - expected)).toBeLessThanOrEqual(1e-12);
+      }
   });
 });
