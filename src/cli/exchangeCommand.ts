@@ -12,12 +12,15 @@ import { computeViewFactors } from '../core/viewFactors';
 import { toScene, type Sketch } from '../document';
 import { SURROUNDINGS_LABEL, conditionInTable, exchangeCsv, seesSurroundings } from '../document/exchangeCsv';
 import { solveSketchExchange } from '../document/exchangeInput';
+import { exchangeJson } from '../document/exchangeJson';
 import type { CliIO } from './io';
 import { parseArgs } from './args';
 import { readSketchFile } from './readSketch';
 import { displayName, usageError as reportUsage } from './terminalText';
 
 export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --csv] [--depth METRES]';
+// The --json object is built in src/document (shared with the design studies and the library).
+export { exchangeJson };
 const usageError = (io: CliIO, problem: string) => reportUsage(io, 'exchange', EXCHANGE_USAGE, problem);
 
 const CAUTION =
@@ -100,42 +103,6 @@ interface Report {
   factors: ViewFactorResult;
   result: ExchangeResult;
   conditions: ReadonlyArray<SurfaceCondition>;
-}
-
-/**
- * The --json object. Per surface: length (file units), emissivity, temperature
- * (K), netHeat (W per metre of depth), netFlux and radiosity (W/m^2), and with
- * a depth netHeatTotal (W). exchange[i][j]: net heat from surface i to j, W per
- * metre of depth. Open sketches add `surroundings`.
- */
-export function exchangeJson({ names, factors, result: r }: Report) {
-  const n = r.surfaceCount;
-  const withDepth = r.depth !== undefined;
-  const json: Record<string, unknown> = {
-    surfaces: names.map((name, i) => ({
-      name,
-      length: factors.surfaceLength[i],
-      emissivity: r.emissivity[i],
-      temperature: r.temperature[i],
-      netHeat: r.netHeat[i],
-      netFlux: r.netFlux[i],
-      radiosity: r.radiosity[i],
-      ...(withDepth ? { netHeatTotal: r.netHeatTotal![i] } : {}),
-    })),
-    exchange: Array.from({ length: n }, (_, i) => Array.from(r.exchange.subarray(i * n, (i + 1) * n))),
-    energyBalance: r.energyBalance,
-  };
-  if (withDepth) json.depth = r.depth;
-  if (seesSurroundings(r)) {
-    json.surroundings = {
-      temperature: r.surroundingsTemperature,
-      viewFactors: Array.from(r.surroundingsViewFactor),
-      exchange: Array.from(r.surroundingsExchange),
-      netHeat: r.surroundingsNetHeat,
-      ...(withDepth ? { netHeatTotal: r.surroundingsNetHeatTotal } : {}),
-    };
-  }
-  return json;
 }
 
 function exchangeTable({ file, sketch, names, factors, result: r, conditions }: Report): string {
