@@ -43,9 +43,49 @@ function cliCsv(doc: SketchFile): string {
   return out;
 }
 
+/** A 4 x 2 rectangular duct, one named surface per wall, anticlockwise from the floor. */
+const duct: SketchFile = {
+  version: 1,
+  units: 'm',
+  shapes: [
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 2],
+        [0, 2],
+      ],
+      surface: ['floor', 'right', 'roof', 'left'],
+    },
+  ],
+};
+
 describe('matrix CSV', () => {
   it('is the same text the command line prints with --csv', () => {
+    // The two share a writer, so this is an agreement check; the next test checks the content.
     expect(shownCsv(shownFor(demoSketch))).toBe(cliCsv(demoSketch));
+    expect(shownCsv(shownFor(duct))).toBe(cliCsv(duct));
+  });
+
+  it("holds the rectangle's crossed-string factors in the right cells", () => {
+    // Hottel's crossed strings, F_ij = (crossed - uncrossed) / (2 L_i) (Incropera et al., Fundamentals of
+    // Heat and Mass Transfer, 6th ed., Table 13.1 and sec. 13.1): the diagonal is sqrt(20); adjacent walls
+    // (L_i + L_j - diagonal) / (2 L_i); opposite walls (2 diagonal - 2 gap) / (2 L_i); flat walls F_ii = 0.
+    const d = Math.sqrt(20);
+    const L = [4, 2, 4, 2];
+    const F = (i: number, j: number) =>
+      i === j ? 0 : (i - j + 4) % 2 === 0 ? (2 * d - 2 * L[(i + 1) % 4]) / (2 * L[i]) : (L[i] + L[j] - d) / (2 * L[i]);
+    const rows = Papa.parse<string[]>(shownCsv(shownFor(duct)).trim(), { newline: '\r\n' }).data;
+    expect(rows.map((r) => r[0])).toEqual(['from \\ to', 'floor', 'right', 'roof', 'left']);
+    expect(rows[0]).toEqual(['from \\ to', 'floor', 'right', 'roof', 'left']);
+    for (let i = 0; i < 4; i++) {
+      expect(rows[i + 1]).toHaveLength(5);
+      for (let j = 0; j < 4; j++) expect(Math.abs(Number(rows[i + 1][j + 1]) - F(i, j))).toBeLessThanOrEqual(1e-12);
+    }
+    // Spot values by hand: floor to roof (2 sqrt 20 - 4) / 8 = 0.618..., right to floor (6 - sqrt 20) / 4 = 0.381...
+    expect(Number(rows[1][3])).toBeCloseTo(0.6180339887, 9);
+    expect(Number(rows[2][1])).toBeCloseTo(0.3819660113, 9);
   });
 
   it('has a header of names, a first column of names and every factor in full precision', () => {
