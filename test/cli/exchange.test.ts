@@ -24,11 +24,29 @@ function run(files: Record<string, unknown>, ...args: string[]) {
   return { code, out, err };
 }
 
-function json(files: Record<string, unknown>, ...args: string[]) {
+/** What `exchange FILE --json` prints (README, "The command line"). */
+interface ExchangeJson {
+  surfaces: {
+    name: string;
+    length: number;
+    emissivity: number;
+    temperature: number;
+    netHeat: number;
+    netFlux: number;
+    radiosity: number;
+    netHeatTotal?: number;
+  }[];
+  exchange: number[][];
+  energyBalance: number;
+  depth?: number;
+  surroundings?: { viewFactors: number[]; netHeat: number; temperature: number; exchange: number[] };
+}
+
+function json(files: Record<string, unknown>, ...args: string[]): ExchangeJson {
   const r = run(files, ...args, '--json');
   expect(r.err).toBe('');
   expect(r.code).toBe(0);
-  return JSON.parse(r.out);
+  return JSON.parse(r.out) as ExchangeJson;
 }
 
 type Pt = [number, number];
@@ -68,6 +86,8 @@ describe('exchange FILE --json: physics through the whole chain', () => {
     close(duct.netHeat, -q);
     close(tube.netFlux, q / A1);
     close(j.exchange[1][0], q);
+    // Energy balance summed here from the printed net heats (closed enclosure: what the tube gives off the duct takes up).
+    expect(Math.abs(tube.netHeat + duct.netHeat)).toBeLessThanOrEqual(1e-12 * q);
     expect(j.energyBalance).toBeLessThan(1e-12);
   });
 
@@ -182,10 +202,12 @@ describe('exchange FILE --json: physics through the whole chain', () => {
     const j = json({ 'bar.json': file }, 'bar.json');
     const q = 0.55 * SIGMA * 0.3 * (700 ** 4 - 295 ** 4);
     close(j.surfaces[0].netHeat, q);
-    close(j.surroundings.viewFactors[0], 1);
-    close(j.surroundings.netHeat, -q);
-    expect(j.surroundings.temperature).toBe(295);
-    close(j.surroundings.exchange[0], q);
+    const surroundings = j.surroundings;
+    if (!surroundings) throw new Error('an open sketch reports its surroundings');
+    close(surroundings.viewFactors[0], 1);
+    close(surroundings.netHeat, -q);
+    expect(surroundings.temperature).toBe(295);
+    close(surroundings.exchange[0], q);
   });
 
   it('an opening in a black isothermal cavity passes A sigma (T^4 - Ts^4) (common practice: a black cavity emits as a blackbody)', () => {
@@ -213,8 +235,12 @@ describe('exchange FILE --json: physics through the whole chain', () => {
       settings: { surroundingsTemperature: 300 },
     };
     const j = json({ 'c.json': file }, 'c.json');
-    const mouth = j.surfaces.find((s: { name: string }) => s.name === 'mouth');
-    close(mouth.netHeat, mouth.length * SIGMA * (300 ** 4 - 1000 ** 4));
+    const mouth = j.surfaces.find((s) => s.name === 'mouth');
+    if (!mouth) throw new Error('the mouth is a surface of the output');
+    // The mouth runs from (1, 0.6) to (0.5, 1.2) m (the file above): its length from the points, not the output.
+    const width = Math.hypot(0.5, 0.6);
+    close(mouth.length, width);
+    close(mouth.netHeat, width * SIGMA * (300 ** 4 - 1000 ** 4));
     expect(mouth.temperature).toBe(300);
     expect(mouth.emissivity).toBe(1);
     expect(j.surroundings).toBeUndefined(); // closed sketch: the opening is a surface of the matrix
@@ -412,6 +438,7 @@ describe('exchange FILE: options and formats', () => {
     const withFileDepth = { ...duct, settings: { depth: 10 } };
     const j = json({ 'd.json': withFileDepth }, 'd.json', '--depth', '2.5');
     expect(j.depth).toBe(2.5);
+    expect(j.surfaces).toHaveLength(5);
     for (const s of j.surfaces) expect(s.netHeatTotal).toBe(s.netHeat * 2.5);
     const k = json({ 'd.json': withFileDepth }, 'd.json');
     expect(k.depth).toBe(10);

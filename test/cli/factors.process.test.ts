@@ -23,12 +23,29 @@ describe('factors as a process', () => {
     const r = cli(['factors', 'public/examples/duct-with-block.json', '--json']);
     expect(r.err).toBe('');
     expect(r.code).toBe(0);
-    const out = JSON.parse(r.out);
-    expect(out.surfaces.map((s: { name: string }) => s.name)).toEqual(['floor', 'right', 'roof', 'left', 'block']);
-    // Closed enclosure: every row sums to one (summation rule, Incropera et al., 6th ed., sec. 13.1; eq. 13.4 from memory).
-    for (const residual of out.rowSumResidual) expect(Math.abs(residual)).toBeLessThan(1e-12);
+    const out = JSON.parse(r.out) as {
+      surfaces: { name: string; length: number }[];
+      viewFactors: number[][];
+      rowSumResidual: number[];
+    };
+    expect(out.surfaces.map((s) => s.name)).toEqual(['floor', 'right', 'roof', 'left', 'block']);
+    // The example's own geometry: a 4 x 2 duct around a 0.5 x 0.5 block.
+    expect(out.surfaces.map((s) => s.length)).toEqual([4, 2, 4, 2, 2]);
+    const L = [4, 2, 4, 2, 2];
+    expect(out.viewFactors.map((row) => row.length)).toEqual([5, 5, 5, 5, 5]);
+    out.viewFactors.forEach((row, i) => {
+      // Closed enclosure: every row sums to one (summation rule, Incropera et al., 6th ed., sec. 13.1; eq. 13.4 from memory),
+      // summed here from the printed factors; the printed residual is 1 minus that sum.
+      const sum = row.reduce((a, f) => a + f, 0);
+      expect(Math.abs(1 - sum)).toBeLessThan(1e-12);
+      expect(Math.abs(out.rowSumResidual[i] - (1 - sum))).toBeLessThan(1e-15);
+      // Reciprocity, L_i F_ij = L_j F_ji (Incropera et al., 6th ed., eq. 13.3).
+      row.forEach((f, j) => expect(Math.abs(L[i] * f - L[j] * out.viewFactors[j][i])).toBeLessThan(1e-12));
+    });
     // The sketch is symmetric left/right: floor sees both side walls equally.
     expect(out.viewFactors[0][1]).toBeCloseTo(out.viewFactors[0][3], 12);
+    // Flat walls do not see themselves; the convex block does not either.
+    for (let i = 0; i < 5; i++) expect(out.viewFactors[i][i]).toBe(0);
   });
 
   it('reads standard input when FILE is -', () => {

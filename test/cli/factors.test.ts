@@ -90,13 +90,21 @@ describe('factors --json', () => {
       { name: 'c', length: 5 },
     ]);
     const L = [3, 4, 5];
+    expect(r.viewFactors).toHaveLength(3);
     for (let i = 0; i < 3; i++) {
+      expect(r.viewFactors[i]).toHaveLength(3);
+      let row = 0;
       for (let j = 0; j < 3; j++) {
         const k = 3 - i - j;
         const expected = i === j ? 0 : (L[i] + L[j] - L[k]) / (2 * L[i]);
         expect(r.viewFactors[i][j]).toBeCloseTo(expected, 12);
+        row += r.viewFactors[i][j];
+        // Reciprocity, L_i F_ij = L_j F_ji (Incropera et al., 6th ed., eq. 13.3), from the printed factors.
+        expect(Math.abs(L[i] * r.viewFactors[i][j] - L[j] * r.viewFactors[j][i])).toBeLessThan(1e-12);
       }
-      expect(Math.abs(r.rowSumResidual[i])).toBeLessThan(1e-12);
+      // The printed residual is 1 - the row sum of the printed factors, and that sum is one (closed).
+      expect(Math.abs(1 - row)).toBeLessThan(1e-12);
+      expect(Math.abs(r.rowSumResidual[i] - (1 - row))).toBeLessThan(1e-15);
     }
     expect(r.viewFactors[0][1]).toBeCloseTo(1 / 3, 12); // (3 + 4 - 5) / 6
     expect(r.reciprocityResidual).toBeLessThan(1e-12);
@@ -117,6 +125,7 @@ describe('factors --json', () => {
       [opposite, adjacent, 0, adjacent],
       [adjacent, opposite, adjacent, 0],
     ];
+    expect(r.viewFactors.map((row) => row.length)).toEqual([4, 4, 4, 4]);
     r.viewFactors.forEach((row, i) => row.forEach((f, j) => expect(f).toBeCloseTo(expected[i][j], 12)));
   });
 
