@@ -111,8 +111,12 @@ describe('solveSketchExchange: a message and the surface index, never an excepti
   });
 
   it('a refusal without a surface has surface undefined', () => {
+    // No properties: every surface is adiabatic by default, so no temperature anywhere.
     const outcome = solveSketchExchange(part({}), NAMES, factors);
-    expect(outcome.ok).toBe(false);
-    if (!outcome.ok) expect(outcome.surface).toBeUndefined();
+    if (outcome.ok) throw new Error('a sketch with no temperature must be refused');
+    expect(outcome.surface).toBeUndefined();
+    expect(outcome.message).toMatch(
+      /^no unique answer: no surface has a temperature .* give at least one surface a temperature$/,
+    );
   });
 });

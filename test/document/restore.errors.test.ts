@@ -543,6 +543,8 @@ describe('restore refuses impossible geometry', () => {
 
 describe('restore refuses very large sketches before computing', () => {
   it(`more than ${MAX_EDGES} edges`, () => {
+    // The documented limit (README, "What the reader checks"), so the message below is not only the constant echoed.
+    expect(MAX_EDGES).toBe(5000);
     const ring = (n: number) =>
       Array.from({ length: n }, (_, k) => [Math.cos((2 * Math.PI * k) / n), Math.sin((2 * Math.PI * k) / n)]);
     expect(only(withShapes({ kind: 'enclosure', points: ring(MAX_EDGES + 1), surface: 'wall' }))).toBe(
