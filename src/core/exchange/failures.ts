@@ -36,7 +36,44 @@ export type ExchangeFailureCode =
   /** The radiosity equations have a non-finite coefficient (overflow). */
   | 'not-finite'
   /** `surface`'s imposed heat flux `value` (W/m^2) would need a temperature below absolute zero. */
-  | 'flux-below-absolute-zero';
+  | 'flux-below-absolute-zero'
+  // The whole surface balance (src/core/balance): convection and the conditions behind a surface.
+  /** `surface`'s convection coefficient (W/(m^2 K)) not a finite number >= 0: `value`. */
+  | 'convection-out-of-range'
+  /** `surface` is an opening and has a convection coefficient `value` (an opening has no front to convect from). */
+  | 'convection-on-opening'
+  /** `surface` has a convection coefficient `value` > 0 and no gas temperature is set. */
+  | 'convection-without-gas'
+  /** Gas temperature not a finite number of K above 0: `value`. */
+  | 'gas-temperature-out-of-range'
+  /** `surface`'s wall has no layers. */
+  | 'wall-without-layers'
+  /** `surface`'s wall layer `layer` has a thickness (m) not finite and above 0: `value`. */
+  | 'layer-thickness-out-of-range'
+  /** `surface`'s wall layer `layer` has a conductivity (W/(m K)) not finite and above 0: `value`. */
+  | 'layer-conductivity-out-of-range'
+  /** `surface`'s wall outside temperature not a finite number of K above 0: `value`. */
+  | 'outside-temperature-out-of-range'
+  /** `surface`'s wall outside coefficient (W/(m^2 K)) not finite and above 0: `value`. */
+  | 'outside-coefficient-out-of-range'
+  /** `surface`'s wall outside emissivity not in (0, 1]: `value`. */
+  | 'outside-emissivity-out-of-range'
+  /** `surface`'s tube fluid temperature not a finite number of K above 0: `value`. */
+  | 'fluid-temperature-out-of-range'
+  /** `surface`'s tube inside coefficient (W/(m^2 K)) not finite and above 0: `value`. */
+  | 'inside-coefficient-out-of-range'
+  /** `surface`'s tube wall conductivity (W/(m K)) not finite and above 0: `value`. */
+  | 'tube-conductivity-out-of-range'
+  /** `surface`'s tube outer diameter (m) not finite and above 0: `value`. */
+  | 'outer-diameter-out-of-range'
+  /** `surface`'s tube inner diameter (m) not finite, above 0 and below the outer diameter `expected`: `value`. */
+  | 'inner-diameter-out-of-range'
+  /** `surface` is linked to `other`, which is not a surface linked back to it (`other` absent: no such surface). */
+  | 'link-not-mutual'
+  /** Damped Newton stopped without meeting the balance: `value` = largest residual / sum of A_i J_i, `expected` = iterations. */
+  | 'no-convergence'
+  /** `surface`'s balance would need a temperature below absolute zero (it must give off more than it can): `value` = the last temperature tried, K. */
+  | 'balance-below-absolute-zero';
 
 export interface ExchangeFailure {
   ok: false;
@@ -47,8 +84,10 @@ export interface ExchangeFailure {
   other?: number;
   /** The offending number (units per code). */
   value?: number;
-  /** The number wanted (array sizes). */
+  /** The number wanted (array sizes), or a limit. */
   expected?: number;
+  /** Index of a wall's layer concerned, from 0 (inside out). */
+  layer?: number;
 }
 
 /** Builds a failure; a helper so each refusal in the solver is one line. */

@@ -4,6 +4,7 @@
 // known, else counted from 1 as everywhere in messages.
 import type { ExchangeFailure } from '../../core/exchange';
 import { formatNumber, quoteName } from '../labels';
+import { balanceFailureMessage } from './balanceMessages';
 import type { ConditionKind } from './conditions';
 
 /** Two or more conditions on one surface (src/document/exchange/conditions.ts): `kinds` in file order. */
@@ -75,5 +76,7 @@ export function exchangeFailureMessage(failure: SketchExchangeFailure, names?: R
       return `no unique answer: the radiosity equations are not finite (a coefficient overflows); ${NO_LEVEL_HINT}`;
     case 'flux-below-absolute-zero':
       return `${at}: no physical answer: the imposed heat flux of ${got} W/m^2 would need a temperature below absolute zero (it takes up more than the surface can receive)`;
+    default:
+      return balanceFailureMessage(failure, at, got, surface);
   }
 }

@@ -1,0 +1,17 @@
+// The whole surface balance: radiation, convection to a transparent gas, and
+// what lies behind each surface (lined walls, tubes, thin linked plates).
+export {
+  layerResistance,
+  layerTemperatures,
+  tubeResistance,
+  tubeWallResistance,
+  wallFlux,
+  type BalanceCondition,
+  type LinkedCondition,
+  type TubeCondition,
+  type WallCondition,
+  type WallLayer,
+} from './conditions';
+export { balanceInputFor, type BalanceSetup } from './setup';
+export { BALANCE_TOLERANCE, MAX_ITERATIONS, solveBalance } from './solve';
+export type { BalanceInput, BalanceOutcome, BalanceResult } from './types';

@@ -1,0 +1,113 @@
+// The radiosity network of the whole surface balance, written so that its
+// matrix does not depend on temperature: every surface's row is
+//   J_i - (1 - e_i) G_i = e_i E_i,   G_i = sum_j F_ij J_j + F_i,s E_s,
+// (openings: e = 1, E = E_s), so M = I - diag(1 - e) F is factored once per
+// solve and each new set of emissive powers E = sigma T^4 costs two triangular
+// solves. Fluxes and powers in W/m^2.
+import { DenseLuSolver } from '../exchange/linearSolve';
+
+export class RadiosityNetwork {
+  readonly n: number;
+  /** Estimated reciprocal condition number of M (dimensionless). */
+  readonly reciprocalCondition: number;
+  private readonly solver: DenseLuSolver;
+
+  /**
+   * Builds and factors M (throws LinearSolveError when it is singular or not
+   * finite). F: n x n view factors row-major; eps: emissivity (1 for openings);
+   * Fs: view factor to the surroundings; Es: their emissive power, W/m^2.
+   */
+  constructor(
+    private readonly F: ArrayLike<number>,
+    private readonly eps: Float64Array,
+    private readonly Fs: Float64Array,
+    private readonly Es: number,
+    workspace?: DenseLuSolver,
+  ) {
+    const n = eps.length;
+    this.n = n;
+    this.solver = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
+    const M = this.solver.matrix;
+    for (let i = 0; i < n; i++) {
+      const ri = i * n;
+      const w = 1 - eps[i];
+      for (let j = 0; j < n; j++) M[ri + j] = -w * F[ri + j];
+      M[ri + i] += 1;
+    }
+    this.reciprocalCondition = this.solver.factor();
+  }
+
+  /** Radiosity J and irradiation G (W/m^2) for the emissive powers E (W/m^2); J and G are overwritten. */
+  solve(E: Float64Array, J: Float64Array, G: Float64Array): void {
+    const { n, eps, Fs, Es, F } = this;
+    for (let i = 0; i < n; i++) J[i] = eps[i] * E[i] + (1 - eps[i]) * Fs[i] * Es;
+    this.solver.solve(J);
+    for (let i = 0; i < n; i++) {
+      const ri = i * n;
+      let g = Fs[i] * Es;
+      for (let j = 0; j < n; j++) g += F[ri + j] * J[j];
+      G[i] = g;
+    }
+  }
+
+  /**
+   * dG_r/dE_c for the surfaces `rows` and `cols` (dimensionless, >= 0),
+   * rows.length x cols.length row-major: F M^-1 diag(e) restricted to them.
+   * Costs n^2 x cols.length for the solves (all right-hand sides at once, by
+   * rows, so the inner loops run along contiguous memory) and n x rows x cols.
+   */
+  sensitivity(rows: ArrayLike<number>, cols: ArrayLike<number>): Float64Array {
+    const { n, eps, F } = this;
+    const u = cols.length;
+    const a = this.solver.matrix;
+    const pivot = this.solver.pivot;
+    const X = new Float64Array(n * u); // n x u: right-hand sides, then M^-1 diag(e) columns
+    for (let c = 0; c < u; c++) X[cols[c] * u + c] = eps[cols[c]];
+    for (let k = 0; k < n; k++) {
+      const p = pivot[k];
+      if (p !== k) {
+        for (let c = 0; c < u; c++) {
+          const t = X[k * u + c];
+          X[k * u + c] = X[p * u + c];
+          X[p * u + c] = t;
+        }
+      }
+    }
+    // L (unit lower) forward, row by row: X_i -= L_ik X_k.
+    for (let i = 1; i < n; i++) {
+      const ri = i * n;
+      const xi = i * u;
+      for (let k = 0; k < i; k++) {
+        const l = a[ri + k];
+        if (l === 0) continue;
+        const xk = k * u;
+        for (let c = 0; c < u; c++) X[xi + c] -= l * X[xk + c];
+      }
+    }
+    // U backward.
+    for (let i = n - 1; i >= 0; i--) {
+      const ri = i * n;
+      const xi = i * u;
+      for (let k = i + 1; k < n; k++) {
+        const v = a[ri + k];
+        if (v === 0) continue;
+        const xk = k * u;
+        for (let c = 0; c < u; c++) X[xi + c] -= v * X[xk + c];
+      }
+      const d = 1 / a[ri + i];
+      for (let c = 0; c < u; c++) X[xi + c] *= d;
+    }
+    const Y = new Float64Array(rows.length * u);
+    for (let r = 0; r < rows.length; r++) {
+      const fr = rows[r] * n;
+      const yr = r * u;
+      for (let k = 0; k < n; k++) {
+        const f = F[fr + k];
+        if (f === 0) continue;
+        const xk = k * u;
+        for (let c = 0; c < u; c++) Y[yr + c] += f * X[xk + c];
+      }
+    }
+    return Y;
+  }
+}

@@ -1,0 +1,347 @@
+// The whole surface balance: on every surface, heat supplied from behind =
+// net radiation leaving the front + convection leaving the front, with the
+// radiation by the net-radiation method (radiosity.ts) and the back by its
+// condition (conditions.ts). Unknowns are the temperatures of "nodes": one per
+// surface whose temperature is not given, one per linked plate (two faces, one
+// temperature). A gas node that radiates can later join as one more node with
+// its own balance. Units SI (m, K, W/m^2, W per metre of depth).
+//
+// Numeric choices: radiation goes with T^4 and the rest linearly, so damped
+// Newton in T: the Jacobian is dense through the radiosity matrix M, whose
+// sensitivity F M^-1 diag(e) is computed once per solve (M does not depend on
+// temperature); each step is limited so every temperature stays above a tenth
+// of its value (above 0 K), then halved until the largest residual falls
+// (backtracking). Converged when every node's residual is at most 1e-10 of
+// sum A_i J_i; at most 100 iterations; one more full step then polishes to rounding.
+import { CLOSURE_TOLERANCE, STEFAN_BOLTZMANN, emissivePower } from '../exchange/exchange';
+import { exchangeFailure, type ExchangeFailure } from '../exchange/failures';
+import { DenseLuSolver, LinearSolveError } from '../exchange/linearSolve';
+import { checkCondition, checkConvection } from './check';
+import { tubeResistance, wallFlux, type BalanceCondition } from './conditions';
+import { RadiosityNetwork } from './radiosity';
+import { balanceResult, type Solved } from './results';
+import type { BalanceInput, BalanceOutcome } from './types';
+
+/** Dimensionless: converged when every residual is at most this fraction of sum A_i J_i. */
+export const BALANCE_TOLERANCE = 1e-10;
+/** Newton iterations allowed before the case is refused. */
+export const MAX_ITERATIONS = 100;
+
+/** Kinds whose temperature is solved for (their own node). */
+const SOLVED_KINDS = new Set<BalanceCondition['kind']>(['heatFlux', 'adiabatic', 'wall', 'tube']);
+
+/**
+ * Solves the whole surface balance of a 2D section (see the file header).
+ * Results per metre of depth in SI; energyBalance = |sum suppliedHeat +
+ * gasConvectionHeat + surroundingsNetHeat| / sum A_i J_i. Out-of-range input
+ * and cases without a unique answer, or where Newton does not converge, come
+ * back as an ExchangeFailure (a code, the surface, the number), never a wrong answer.
+ * `workspace`: an n x n solver to reuse for the radiosity matrix.
+ */
+export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): BalanceOutcome {
+  const setup = prepare(input);
+  if ('ok' in setup) return setup;
+  const { n, eps, Fs, Es, h, Tg, known } = setup;
+  let network: RadiosityNetwork;
+  try {
+    network = new RadiosityNetwork(input.viewFactors, eps, Fs, Es, workspace);
+  } catch (err) {
+    if (err instanceof LinearSolveError) {
+      return err.problem === 'not-finite'
+        ? exchangeFailure('not-finite')
+        : exchangeFailure('singular', { value: Number.isNaN(err.reciprocalCondition) ? 0 : err.reciprocalCondition });
+    }
+    throw err;
+  }
+
+  // Nodes: the surfaces whose temperature is solved, a linked pair as one node.
+  const nodeOf = new Int32Array(n).fill(-1);
+  const members: number[][] = [];
+  for (let i = 0; i < n; i++) {
+    const c = input.conditions[i];
+    if (SOLVED_KINDS.has(c.kind)) {
+      nodeOf[i] = members.length;
+      members.push([i]);
+    } else if (c.kind === 'linked' && c.other > i) {
+      nodeOf[i] = nodeOf[c.other] = members.length;
+      members.push([i, c.other]);
+    }
+  }
+  const m = members.length;
+  const unknown = Int32Array.from(members.flat());
+  const A = input.area;
+  const E = new Float64Array(n);
+  const T = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    T[i] = known[i];
+    E[i] = emissivePower(known[i]);
+  }
+  const J = new Float64Array(n);
+  const G = new Float64Array(n);
+  const nodeT = new Float64Array(m).fill(startTemperature(input, setup));
+  const residual = new Float64Array(m);
+  const slope = new Float64Array(m); // d(back + convection terms)/dT per node, W/(m K)
+
+  // Residual per node: supplied from behind - A (q + h (T - Tg)), W/m; returns the largest |r| and sum A J.
+  const evaluate = (temps: Float64Array): { worst: number; scale: number } => {
+    for (let a = 0; a < m; a++) {
+      for (const i of members[a]) {
+        T[i] = temps[a];
+        E[i] = emissivePower(temps[a]);
+      }
+    }
+    network.solve(E, J, G);
+    let scale = 0;
+    for (let i = 0; i < n; i++) scale += A[i] * Math.abs(J[i]);
+    let worst = 0;
+    for (let a = 0; a < m; a++) {
+      let r = 0;
+      let s = 0;
+      for (const i of members[a]) {
+        const back = backHeat(input.conditions[i], T[i], A[i]);
+        r += back.heat - A[i] * (eps[i] * (E[i] - G[i]) + h[i] * (T[i] - Tg));
+        s += back.slope - A[i] * h[i];
+      }
+      residual[a] = r;
+      slope[a] = s;
+      worst = Math.max(worst, Math.abs(r));
+    }
+    return { worst: Number.isFinite(worst) ? worst : Number.POSITIVE_INFINITY, scale };
+  };
+
+  let state = evaluate(nodeT);
+  let iterations = 0;
+  if (m > 0) {
+    const Y = network.sensitivity(unknown, unknown); // dG/dE among the unknown surfaces
+    const position = new Int32Array(n).fill(-1);
+    unknown.forEach((i, k) => (position[i] = k));
+    const jacobian = new DenseLuSolver(m);
+    const step = new Float64Array(m);
+    const trial = new Float64Array(m);
+    let polished = false;
+    for (;;) {
+      const converged = state.worst <= BALANCE_TOLERANCE * state.scale;
+      if (converged && polished) break;
+      if (iterations >= MAX_ITERATIONS) {
+        return exchangeFailure('no-convergence', {
+          value: state.worst / state.scale,
+          expected: MAX_ITERATIONS,
+        });
+      }
+      // Jacobian d r_a / d T_b = -sum_{i in a} A_i e_i (delta_ib - sum_{k in b} Y_ik) 4 sigma T_b^3 + slope_a delta_ab.
+      const Jm = jacobian.matrix;
+      Jm.fill(0);
+      for (let a = 0; a < m; a++) {
+        for (const i of members[a]) {
+          const yi = position[i] * unknown.length;
+          const w = A[i] * eps[i];
+          for (let b = 0; b < m; b++) {
+            let dG = 0;
+            for (const k of members[b]) dG += Y[yi + position[k]];
+            Jm[a * m + b] += w * dG * 4 * STEFAN_BOLTZMANN * nodeT[b] ** 3;
+          }
+          Jm[a * m + a] -= w * 4 * STEFAN_BOLTZMANN * nodeT[a] ** 3;
+        }
+        Jm[a * m + a] += slope[a];
+      }
+      try {
+        jacobian.factor({ minReciprocalCondition: 1e-15 });
+      } catch (err) {
+        if (err instanceof LinearSolveError)
+          return exchangeFailure('singular', { value: err.reciprocalCondition || 0 });
+        throw err;
+      }
+      for (let a = 0; a < m; a++) step[a] = -residual[a];
+      jacobian.solve(step);
+      // Keep every temperature above a tenth of its value: above 0 K.
+      let lambda = 1;
+      for (let a = 0; a < m; a++) if (step[a] < 0) lambda = Math.min(lambda, (-0.9 * nodeT[a]) / step[a]);
+      const before = state.worst;
+      const saved = Float64Array.from(residual);
+      const savedSlope = Float64Array.from(slope);
+      let accepted = false;
+      for (let halving = 0; halving < 60; halving++) {
+        for (let a = 0; a < m; a++) trial[a] = nodeT[a] + lambda * step[a];
+        const next = evaluate(trial);
+        if (next.worst <= (1 - 1e-4 * lambda) * before || (converged && next.worst <= before)) {
+          nodeT.set(trial);
+          state = next;
+          accepted = true;
+          break;
+        }
+        lambda *= 0.5;
+      }
+      iterations++;
+      if (!accepted) {
+        // Restore the last accepted point; converged already means rounding stops further progress.
+        residual.set(saved);
+        slope.set(savedSlope);
+        state = evaluate(nodeT);
+        if (converged) break;
+        return stuck(nodeT, members, state, iterations);
+      }
+      if (converged) polished = true;
+    }
+  }
+  const solved: Solved = {
+    T,
+    E,
+    J,
+    G,
+    eps,
+    Fs,
+    Es,
+    h,
+    Tg,
+    iterations,
+    reciprocalCondition: network.reciprocalCondition,
+  };
+  return { ok: true, result: balanceResult(input, solved) };
+}
+
+/** What cannot converge: a temperature driven towards 0 K names its surface; otherwise the residual left. */
+function stuck(
+  nodeT: Float64Array,
+  members: number[][],
+  state: { worst: number; scale: number },
+  iterations: number,
+): ExchangeFailure {
+  let low = 0;
+  for (let a = 1; a < nodeT.length; a++) if (nodeT[a] < nodeT[low]) low = a;
+  if (nodeT.length > 0 && nodeT[low] < 1) {
+    return exchangeFailure('balance-below-absolute-zero', { surface: members[low][0], value: nodeT[low] });
+  }
+  return exchangeFailure('no-convergence', { value: state.worst / state.scale, expected: iterations });
+}
+
+/** Heat supplied from behind at temperature T (W/m) and its derivative in T (W/(m K)). */
+function backHeat(c: BalanceCondition, T: number, area: number): { heat: number; slope: number } {
+  switch (c.kind) {
+    case 'heatFlux':
+      return { heat: area * c.heatFlux, slope: 0 };
+    case 'wall': {
+      const w = wallFlux(c, T);
+      return { heat: -area * w.flux, slope: -area * w.slope };
+    }
+    case 'tube': {
+      const R = tubeResistance(c);
+      return { heat: (-area * (T - c.fluidTemperature)) / R, slope: -area / R };
+    }
+    default:
+      return { heat: 0, slope: 0 };
+  }
+}
+
+interface Prepared {
+  n: number;
+  eps: Float64Array;
+  Fs: Float64Array;
+  Es: number;
+  h: Float64Array;
+  Tg: number;
+  /** Known temperatures (held, openings), K; 0 where solved. */
+  known: Float64Array;
+}
+
+/** Checks every input and gathers per-surface values, or the first failure. */
+function prepare(input: BalanceInput): Prepared | ExchangeFailure {
+  const n = input.conditions.length;
+  const sizes = [
+    ['view-factors-size', input.viewFactors.length, n * n],
+    ['area-size', input.area.length, n],
+    ['emissivity-size', input.emissivity.length, n],
+  ] as const;
+  for (const [code, got, want] of sizes) {
+    if (got !== want) return exchangeFailure(code, { value: got, expected: want });
+  }
+  const Ts = input.surroundingsTemperature;
+  if (Ts !== undefined && !(Number.isFinite(Ts) && Ts > 0)) {
+    return exchangeFailure('surroundings-temperature-out-of-range', { value: Ts });
+  }
+  const depth = input.depth;
+  if (depth !== undefined && !(Number.isFinite(depth) && depth > 0)) {
+    return exchangeFailure('depth-out-of-range', { value: depth });
+  }
+  const convection = checkConvection(input.convectionCoefficient, input.gasTemperature, input.conditions);
+  if (convection) return convection;
+  const h = Float64Array.from({ length: n }, (_, i) => input.convectionCoefficient?.[i] ?? 0);
+  const eps = new Float64Array(n);
+  const Fs = new Float64Array(n);
+  const known = new Float64Array(n);
+  const F = input.viewFactors;
+  let anchored = false; // a surface tied to a known temperature
+  for (let i = 0; i < n; i++) {
+    const c = input.conditions[i];
+    const area = input.area[i];
+    if (!(Number.isFinite(area) && area > 0))
+      return exchangeFailure('length-out-of-range', { surface: i, value: area });
+    const e = input.emissivity[i];
+    if (c.kind === 'opening') {
+      if (Ts === undefined) return exchangeFailure('opening-without-surroundings', { surface: i });
+      eps[i] = 1;
+      known[i] = Ts;
+      anchored = true;
+    } else if (!(Number.isFinite(e) && e > 0 && e <= 1)) {
+      return exchangeFailure('emissivity-out-of-range', { surface: i, value: e });
+    } else {
+      eps[i] = e;
+    }
+    if (c.kind === 'temperature') {
+      if (!(Number.isFinite(c.temperature) && c.temperature > 0)) {
+        return exchangeFailure('temperature-out-of-range', { surface: i, value: c.temperature });
+      }
+      known[i] = c.temperature;
+      anchored = true;
+    } else if (c.kind === 'heatFlux') {
+      if (!Number.isFinite(c.heatFlux))
+        return exchangeFailure('heat-flux-not-finite', { surface: i, value: c.heatFlux });
+    } else if (!['adiabatic', 'opening', 'wall', 'tube', 'linked'].includes(c.kind)) {
+      return exchangeFailure('unknown-condition', { surface: i });
+    }
+    const problem = checkCondition(c, i, input.conditions);
+    if (problem) return problem;
+    if (c.kind === 'wall' || c.kind === 'tube' || h[i] > 0) anchored = true;
+    let rowSum = 0;
+    for (let j = 0; j < n; j++) {
+      const f = F[i * n + j];
+      if (!(Number.isFinite(f) && f >= -CLOSURE_TOLERANCE && f <= 1 + CLOSURE_TOLERANCE)) {
+        return exchangeFailure('view-factor-out-of-range', { surface: i, other: j, value: f });
+      }
+      rowSum += f;
+    }
+    const toSurroundings = 1 - rowSum;
+    if (toSurroundings < -CLOSURE_TOLERANCE)
+      return exchangeFailure('view-factor-sum-above-one', { surface: i, value: rowSum });
+    if (toSurroundings > CLOSURE_TOLERANCE) {
+      if (Ts === undefined) return exchangeFailure('open-without-surroundings', { surface: i, value: toSurroundings });
+      Fs[i] = toSurroundings;
+      anchored = true;
+    }
+  }
+  if (n > 0 && !anchored) return exchangeFailure('no-fixed-temperature');
+  return { n, eps, Fs, Es: Ts === undefined ? 0 : emissivePower(Ts), h, Tg: input.gasTemperature ?? 0, known };
+}
+
+/**
+ * Where Newton starts, K: above every temperature the answer can have from
+ * the known ones, and above what an imposed flux needs (sigma T^4 e >= q),
+ * so the convex T^4 terms are approached from above.
+ */
+function startTemperature(input: BalanceInput, p: Prepared): number {
+  let T = 0;
+  let flux = 0;
+  let minEps = 1;
+  input.conditions.forEach((c, i) => {
+    if (c.kind === 'temperature') T = Math.max(T, c.temperature);
+    if (c.kind === 'wall') T = Math.max(T, c.outsideTemperature);
+    if (c.kind === 'tube') T = Math.max(T, c.fluidTemperature);
+    if (c.kind === 'heatFlux') flux += Math.abs(c.heatFlux) * input.area[i];
+    if (c.kind !== 'opening') minEps = Math.min(minEps, p.eps[i]);
+    if (p.Fs[i] > 0 || c.kind === 'opening') T = Math.max(T, input.surroundingsTemperature ?? 0);
+    if (p.h[i] > 0) T = Math.max(T, p.Tg);
+  });
+  let minArea = Number.POSITIVE_INFINITY;
+  for (let i = 0; i < input.area.length; i++) minArea = Math.min(minArea, input.area[i]);
+  const needed = flux > 0 ? Math.sqrt(Math.sqrt(flux / (minArea * minEps * STEFAN_BOLTZMANN))) : 0;
+  return Math.max(T, needed, 1);
+}
