@@ -90,6 +90,15 @@ describe('heat-exchange tab', () => {
     expect(Number(netHeatCell('tube 1').getAttribute('data-value'))).toBeLessThan(0);
     expect(netHeatCell('refractory roof').textContent).toBe('0');
     expect(cellsOf('refractory roof')[0].textContent).toBe('adiabatic (T solved)');
+    // The oven is closed: the shown net heats, summed here, balance to rounding (energy conservation),
+    // and the tubes, in mirror-image pairs about the oven's mid-plane, take up the same heat pairwise.
+    const heat = ['fired floor', 'side walls', 'refractory roof', 'tube 1', 'tube 2', 'tube 3', 'tube 4'].map((name) =>
+      Number(netHeatCell(name).getAttribute('data-value')),
+    );
+    const floor = heat[0];
+    expect(Math.abs(heat.reduce((a, q) => a + q, 0))).toBeLessThanOrEqual(1e-9 * floor);
+    expect(Math.abs(heat[3] - heat[6])).toBeLessThanOrEqual(1e-9 * floor);
+    expect(Math.abs(heat[4] - heat[5])).toBeLessThanOrEqual(1e-9 * floor);
   });
 
   it('edits a temperature in degrees C, stores kelvin, updates the table, and undo restores it', async () => {
