@@ -5,7 +5,10 @@ import { realpathSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { runExchange } from './exchangeCommand';
 import { runFactors } from './factorsCommand';
+import { runReport } from './reportCommand';
 import { nodeIO, type CliIO } from './io';
+import { runSolveFor } from './solveForCommand';
+import { runSweepCommand } from './sweepCommand';
 
 const HELP = `Tautline command line: view factors and radiation exchange of a sketch file.
 
@@ -14,15 +17,23 @@ usage: npm run cli -- <command> FILE [options]
 commands:
   factors FILE [--json | --csv]                     view factors between the named surfaces
   exchange FILE [--json | --csv] [--depth METRES]   gray-diffuse heat exchange per surface
+  sweep FILE --vary S.P --from A --to B --steps N   the exchange at N values of one parameter
+  solve-for FILE --vary S.P --from A --to B --target S.Q=V
+                                                    the parameter value that meets a target
+  report FILE [--out PATH]                          one self-contained HTML report (print it to PDF)
 
 Run a command with --help for its options. FILE '-' reads standard input.
 `;
 
-const SHORT_USAGE = 'usage: npm run cli -- <command> FILE [options]   (commands: factors, exchange; --help for more)';
+const SHORT_USAGE =
+  'usage: npm run cli -- <command> FILE [options]   (commands: factors, exchange, sweep, solve-for, report; --help for more)';
 
 const commands: Record<string, (args: string[], io: CliIO) => number> = {
   factors: runFactors,
   exchange: runExchange,
+  sweep: runSweepCommand,
+  'solve-for': runSolveFor,
+  report: runReport,
 };
 
 /** Run one command line (arguments after the program name); returns the exit code. */

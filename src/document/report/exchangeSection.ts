@@ -1,0 +1,142 @@
+// The report's heat exchange: the net heat per surface, the exchange matrix and
+// the energy balance, printed as `npm run cli -- exchange FILE` prints them, and
+// flux profiles along split walls. The per-surface table is a list of columns,
+// so a new result (say, convection) is one more entry in NET_HEAT_COLUMNS.
+import type { ExchangeResult, SurfaceCondition } from '../../core/exchange';
+import { conditionInTable, SURROUNDINGS_LABEL, seesSurroundings } from '../exchange/labels';
+import type { Units } from '../units';
+import { escapeMarkup } from './escape';
+import { kelvin2, residual, sig6 } from './format';
+import type { WallProfile } from './profiles';
+import { htmlTable, num, rowHead, text, type Cell } from './table';
+import { SIGN_NOTE } from './wording';
+
+export interface SolvedExchange {
+  names: ReadonlyArray<string>;
+  units: Units;
+  /** Surface lengths in `units`. */
+  lengths: ArrayLike<number>;
+  conditions: ReadonlyArray<SurfaceCondition>;
+  result: ExchangeResult;
+}
+
+export interface SurfaceColumn {
+  head: (ex: SolvedExchange) => string;
+  /** Shown only when this says so (default: always). */
+  when?: (ex: SolvedExchange) => boolean;
+  /** The cell of surface i. */
+  cell: (ex: SolvedExchange, i: number) => Cell;
+  /** The cell of the surroundings row of an open sketch. */
+  surroundings: (ex: SolvedExchange) => Cell;
+}
+
+const blank = () => text('');
+const n6 = (x: number) => num(sig6(x), x);
+
+/** The per-surface columns, in the command line's order. */
+export const NET_HEAT_COLUMNS: SurfaceColumn[] = [
+  { head: (ex) => `length (${ex.units})`, cell: (ex, i) => n6(ex.lengths[i]), surroundings: blank },
+  { head: () => 'ε', cell: (ex, i) => n6(ex.result.emissivity[i]), surroundings: () => num('1', 1) },
+  {
+    head: () => 'condition',
+    cell: (ex, i) => text(conditionInTable(ex.conditions[i].kind)),
+    surroundings: () => text(SURROUNDINGS_LABEL.condition),
+  },
+  {
+    head: () => 'T (K)',
+    cell: (ex, i) => num(kelvin2(ex.result.temperature[i]), ex.result.temperature[i]),
+    surroundings: (ex) => num(kelvin2(ex.result.surroundingsTemperature!), ex.result.surroundingsTemperature!),
+  },
+  {
+    head: () => 'net heat (W/m)',
+    cell: (ex, i) => n6(ex.result.netHeat[i]),
+    surroundings: (ex) => n6(ex.result.surroundingsNetHeat),
+  },
+  { head: () => 'net flux (W/m²)', cell: (ex, i) => n6(ex.result.netFlux[i]), surroundings: blank },
+  { head: () => 'radiosity (W/m²)', cell: (ex, i) => n6(ex.result.radiosity[i]), surroundings: blank },
+  {
+    head: (ex) => `total (W) over ${sig6(ex.result.depth!)} m`,
+    when: (ex) => ex.result.depth !== undefined,
+    cell: (ex, i) => n6(ex.result.netHeatTotal![i]),
+    surroundings: (ex) => n6(ex.result.surroundingsNetHeatTotal!),
+  },
+];
+
+function netHeatTable(ex: SolvedExchange): string {
+  const columns = NET_HEAT_COLUMNS.filter((c) => c.when?.(ex) ?? true);
+  const rows = ex.names.map((name, i) => [rowHead(name), ...columns.map((c) => c.cell(ex, i))]);
+  const keys = [...ex.names];
+  if (seesSurroundings(ex.result)) {
+    rows.push([rowHead(SURROUNDINGS_LABEL.name), ...columns.map((c) => c.surroundings(ex))]);
+    keys.push(SURROUNDINGS_LABEL.name);
+  }
+  return htmlTable({
+    name: 'net-heat',
+    head: [text('surface'), ...columns.map((c) => text(c.head(ex)))],
+    rows,
+    rowKeys: keys,
+  });
+}
+
+function exchangeMatrix(ex: SolvedExchange): string {
+  const r = ex.result;
+  const n = r.surfaceCount;
+  const open = seesSurroundings(r);
+  const head: Cell[] = [text('from \\ to'), ...ex.names.map(text)];
+  if (open) head.push(text(SURROUNDINGS_LABEL.name));
+  const rows = ex.names.map((name, i) => {
+    const row: Cell[] = [rowHead(name)];
+    for (let j = 0; j < n; j++) row.push(n6(r.exchange[i * n + j]));
+    if (open) row.push(n6(r.surroundingsExchange[i]));
+    return row;
+  });
+  return htmlTable({ name: 'exchange', className: 'matrix', head, rows, rowKeys: ex.names });
+}
+
+function profileTable(ex: SolvedExchange, p: WallProfile): string {
+  const r = ex.result;
+  const rows = p.parts.map(({ surface: i, position, length }) => [
+    rowHead(ex.names[i]),
+    n6(position),
+    n6(length),
+    num(kelvin2(r.temperature[i]), r.temperature[i]),
+    n6(r.netFlux[i]),
+    n6(r.netHeat[i]),
+  ]);
+  return htmlTable({
+    name: `profile:${p.wall}`,
+    caption: `${p.wall}: ${p.parts.length} parts, position of each part's middle from the start of the first`,
+    head: [
+      text('part'),
+      text(`position (${ex.units})`),
+      text(`length (${ex.units})`),
+      text('T (K)'),
+      text('net flux (W/m²)'),
+      text('net heat (W/m)'),
+    ],
+    rows,
+    rowKeys: p.parts.map((q) => ex.names[q.surface]),
+  });
+}
+
+/** Net heat, exchange matrix, energy balance and profiles of a solved sketch. */
+export function exchangeSection(ex: SolvedExchange, profiles: ReadonlyArray<WallProfile>): string {
+  const r = ex.result;
+  const per = r.depth === undefined ? 'per metre of depth' : `per metre of depth; totals over ${sig6(r.depth)} m`;
+  const balance = `Energy balance: |sum of net heat| / largest = <span data-value="${r.energyBalance}" data-name="energy-balance">${residual(r.energyBalance)}</span>.`;
+  const parts = [
+    `<section class="exchange"><h2>Heat exchange</h2><p class="note">Gray-diffuse, ${escapeMarkup(per)}.</p>`,
+    netHeatTable(ex),
+    `<h3>Net exchange q'<sub>ij</sub>, W per metre of depth, from row to column</h3>`,
+    exchangeMatrix(ex),
+    `<p class="note">${balance} ${escapeMarkup(SIGN_NOTE)}</p></section>`,
+  ];
+  if (profiles.length > 0) {
+    parts.push(
+      `<section class="profiles"><h2>Flux profiles along split walls</h2>`,
+      ...profiles.map((p) => profileTable(ex, p)),
+      '</section>',
+    );
+  }
+  return parts.join('');
+}
