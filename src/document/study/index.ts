@@ -1,0 +1,23 @@
+// Design studies of a sketch: sweeps, solving for a target, and sensitivity
+// tables, with every message worded here.
+export {
+  QUANTITIES,
+  QUANTITY_UNIT,
+  SETTINGS,
+  SHAPE_MEASURES,
+  SURFACE_PROPERTIES,
+  describeParameter,
+  describeQuantity,
+  parameterProblem,
+  parameterUnit,
+  parseParameter,
+  parseTarget,
+  type Quantity,
+  type StudyParameter,
+  type StudyTarget,
+} from './parameter';
+export { parameterValue, withParameterValue } from './apply';
+export { editedSketch, studyRunner, type StudyRun, type StudyRunOutcome } from './run';
+export { MAX_STUDY_STEPS, rangeProblem, runSweep, type SweepOutcome } from './sweep';
+export { DEFAULT_SCAN_STEPS, solveForTarget, targetQuantity, type SolveForOutcome } from './solveFor';
+export { sweepCsv, sweepRows } from './tables';

@@ -1,0 +1,156 @@
+// What a design study varies and what it aims at, addressed as the command
+// line writes them: `SURFACE.PROPERTY` (split on the last '.', so surface names
+// may hold dots and spaces), `settings.surroundingsTemperature`, `settings.depth`,
+// and `SURFACE.QUANTITY=VALUE` for a target (split on the last '=').
+import { formatNumber, quoteName } from '../labels';
+import type { Sketch } from '../schema';
+import type { Units } from '../units';
+
+export const SURFACE_PROPERTIES = ['temperature', 'emissivity', 'heatFlux'] as const;
+export const SETTINGS = ['surroundingsTemperature', 'depth'] as const;
+/** A shape's position (x, y: the centre of its bounding box) and, for circles, the radius. */
+export const SHAPE_MEASURES = ['x', 'y', 'radius'] as const;
+export const QUANTITIES = ['netHeat', 'netFlux', 'temperature', 'radiosity'] as const;
+
+export type StudyParameter =
+  | { kind: 'surface'; surface: string; property: (typeof SURFACE_PROPERTIES)[number] }
+  | { kind: 'setting'; setting: (typeof SETTINGS)[number] }
+  | { kind: 'shape'; surface: string; measure: (typeof SHAPE_MEASURES)[number] };
+
+export type Quantity = (typeof QUANTITIES)[number];
+
+/** A result of one surface that a solve aims at: quantity of `surface` equal to `value` (units of the quantity). */
+export interface StudyTarget {
+  surface: string;
+  quantity: Quantity;
+  value: number;
+}
+
+type Parsed<T> = { ok: true; value: T } | { ok: false; message: string };
+
+const listed = (names: readonly string[]) => names.join(', ');
+const isOneOf = <T extends string>(list: readonly T[], word: string): word is T =>
+  (list as readonly string[]).includes(word);
+
+/** Read `SURFACE.PROPERTY` or `settings.NAME`. */
+export function parseParameter(text: string): Parsed<StudyParameter> {
+  const dot = text.lastIndexOf('.');
+  if (dot <= 0 || dot === text.length - 1)
+    return { ok: false, message: `'${text.slice(0, 40)}' is not SURFACE.PROPERTY (for example "hearth.temperature")` };
+  const [owner, word] = [text.slice(0, dot), text.slice(dot + 1)];
+  if (owner === 'settings' && isOneOf(SETTINGS, word)) return { ok: true, value: { kind: 'setting', setting: word } };
+  if (isOneOf(SURFACE_PROPERTIES, word))
+    return { ok: true, value: { kind: 'surface', surface: owner, property: word } };
+  if (isOneOf(SHAPE_MEASURES, word)) return { ok: true, value: { kind: 'shape', surface: owner, measure: word } };
+  return {
+    ok: false,
+    message: `'${word.slice(0, 40)}' cannot be varied; choose one of ${listed([...SURFACE_PROPERTIES, ...SHAPE_MEASURES])} of a surface, or settings.${listed(SETTINGS)}`,
+  };
+}
+
+/** Read `SURFACE.QUANTITY=VALUE`. */
+export function parseTarget(text: string): Parsed<StudyTarget> {
+  const eq = text.lastIndexOf('=');
+  const dot = eq < 0 ? -1 : text.lastIndexOf('.', eq);
+  if (eq < 0 || dot <= 0)
+    return {
+      ok: false,
+      message: `'${text.slice(0, 40)}' is not SURFACE.QUANTITY=VALUE (for example "load.netHeat=-40000")`,
+    };
+  const [surface, word, number] = [text.slice(0, dot), text.slice(dot + 1, eq), text.slice(eq + 1)];
+  if (!isOneOf(QUANTITIES, word))
+    return {
+      ok: false,
+      message: `'${word.slice(0, 40)}' is not a result to aim at; choose one of ${listed(QUANTITIES)}`,
+    };
+  const value = number.trim() === '' ? Number.NaN : Number(number);
+  if (!Number.isFinite(value))
+    return { ok: false, message: `the target value must be a number, got '${number.slice(0, 40)}'` };
+  return { ok: true, value: { surface, quantity: word, value } };
+}
+
+/** The unit of a parameter's values (the file's length units for positions). */
+export function parameterUnit(p: StudyParameter, units: Units): string {
+  if (p.kind === 'setting') return p.setting === 'depth' ? 'm' : 'K';
+  if (p.kind === 'shape') return units;
+  return p.property === 'temperature' ? 'K' : p.property === 'heatFlux' ? 'W/m^2' : '';
+}
+
+export const QUANTITY_UNIT: Readonly<Record<Quantity, string>> = {
+  netHeat: 'W/m',
+  netFlux: 'W/m^2',
+  temperature: 'K',
+  radiosity: 'W/m^2',
+};
+
+const PROPERTY_WORDS = { temperature: 'temperature', emissivity: 'emissivity', heatFlux: 'heat flux' } as const;
+const MEASURE_WORDS = { x: 'position x', y: 'position y', radius: 'radius' } as const;
+const QUANTITY_WORDS: Readonly<Record<Quantity, string>> = {
+  netHeat: 'net heat',
+  netFlux: 'net flux',
+  temperature: 'temperature',
+  radiosity: 'radiosity',
+};
+
+/** "temperature of 'hearth'", "the surroundings temperature", "position x of the shape of 'block'". */
+export function describeParameter(p: StudyParameter): string {
+  if (p.kind === 'setting') return p.setting === 'depth' ? 'the depth' : 'the surroundings temperature';
+  if (p.kind === 'shape') return `${MEASURE_WORDS[p.measure]} of the shape of ${quoteName(p.surface)}`;
+  return `${PROPERTY_WORDS[p.property]} of ${quoteName(p.surface)}`;
+}
+
+/** "net heat of 'load'". */
+export function describeQuantity(surface: string, quantity: Quantity): string {
+  return `${QUANTITY_WORDS[quantity]} of ${quoteName(surface)}`;
+}
+
+/** A value with its unit, for messages. */
+export function withUnit(value: number, unit: string): string {
+  return unit === '' ? formatNumber(value) : `${formatNumber(value)} ${unit}`;
+}
+
+/** Where `surface` names edges: the indices of the shapes (0-based). */
+export function shapesOfSurface(sketch: Pick<Sketch, 'shapes'>, surface: string): number[] {
+  const found: number[] = [];
+  sketch.shapes.forEach((shape, k) => {
+    if (shape.surface.includes(surface)) found.push(k);
+  });
+  return found;
+}
+
+/**
+ * Why the parameter cannot be varied in this sketch, or null. Temperature and
+ * heat flux are varied only where the surface is held at one (the file must give
+ * that condition: varying it must not add a second); an opening has no emissivity
+ * of its own; a position names a surface of exactly one shape.
+ */
+export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[], p: StudyParameter): string | null {
+  if (p.kind === 'setting') return null;
+  if (!surfaceNames.includes(p.surface)) {
+    const some = surfaceNames.slice(0, 6).map(quoteName).join(', ');
+    return `the sketch has no surface named ${quoteName(p.surface)}; its surfaces: ${some}${surfaceNames.length > 6 ? ', …' : ''}`;
+  }
+  if (p.kind === 'shape') {
+    if (p.measure === 'radius')
+      return `${quoteName(p.surface)} is not a circle: only a round tube has a radius to vary (this sketch file has polygons only)`;
+    const shapes = shapesOfSurface(sketch, p.surface);
+    if (shapes.length > 1)
+      return `${quoteName(p.surface)} names edges of ${shapes.length} shapes (${shapes.map((k) => k + 1).join(', ')}); to move one, give it a surface name of its own`;
+    return null;
+  }
+  const props = Object.hasOwn(sketch.surfaces, p.surface) ? sketch.surfaces[p.surface] : undefined;
+  if (p.property === 'temperature' && props?.temperature === undefined)
+    return `${quoteName(p.surface)} has no temperature condition to vary; give it a temperature in the file first (it is ${conditionWords(props)})`;
+  if (p.property === 'heatFlux' && props?.heatFlux === undefined)
+    return `${quoteName(p.surface)} has no heat-flux condition to vary; give it a heatFlux in the file first (it is ${conditionWords(props)})`;
+  if (p.property === 'emissivity' && props?.opening === true)
+    return `${quoteName(p.surface)} is an opening: it is black (emissivity 1) whatever the file says, so its emissivity has no effect`;
+  return null;
+}
+
+function conditionWords(props: Sketch['surfaces'][string] | undefined): string {
+  if (props?.temperature !== undefined) return 'held at a temperature';
+  if (props?.heatFlux !== undefined) return 'given a heat flux';
+  if (props?.opening === true) return 'an opening';
+  return 'adiabatic';
+}

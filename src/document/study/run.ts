@@ -1,0 +1,75 @@
+// One case of a study: the sketch with the parameter at one value, checked as
+// a file would be (restore of its text), then view factors and the exchange,
+// and the object `exchange --json` prints for that file. Property and settings
+// studies keep the view factors of the first case (the geometry is the same);
+// position studies compute them again for every value.
+import type { ExchangeResult, SurfaceCondition } from '../../core/exchange';
+import type { ViewFactorResult } from '../../core/scene';
+import { computeViewFactors } from '../../core/viewFactors';
+import { solveSketchExchange } from '../exchangeInput';
+import { exchangeJson } from '../exchangeJson';
+import { restore } from '../restore';
+import type { Sketch } from '../schema';
+import { serialize } from '../serialize';
+import { toScene } from '../toScene';
+import { withParameterValue } from './apply';
+import { describeParameter, parameterUnit, withUnit, type StudyParameter } from './parameter';
+
+/** One solved case: the checked edited sketch, its surfaces in matrix order, view factors and exchange (SI). */
+export interface StudyRun {
+  value: number;
+  sketch: Sketch;
+  names: string[];
+  factors: ViewFactorResult;
+  result: ExchangeResult;
+  conditions: ReadonlyArray<SurfaceCondition>;
+  /** Exactly what `exchange --json` prints for the edited file. */
+  json: Record<string, unknown>;
+}
+
+export type StudyRunOutcome = { ok: true; run: StudyRun } | { ok: false; message: string };
+
+/** The edited sketch as a file, read back: what the command line would read from it. */
+export function editedSketch(
+  sketch: Sketch,
+  p: StudyParameter,
+  value: number,
+): { ok: true; sketch: Sketch } | { ok: false; message: string } {
+  const read = restore(serialize(withParameterValue(sketch, p, value)));
+  if (read.ok) return { ok: true, sketch: read.sketch };
+  return { ok: false, message: read.errors.map((e) => e.message).join('; ') };
+}
+
+/** A function that solves the case at one value of the parameter, reusing view factors where the geometry is fixed. */
+export function studyRunner(sketch: Sketch, p: StudyParameter): (value: number) => StudyRunOutcome {
+  const sameGeometry = p.kind !== 'shape';
+  let kept: { names: string[]; factors: ViewFactorResult } | undefined;
+  const unit = parameterUnit(p, sketch.units);
+  const at = (value: number, message: string): StudyRunOutcome => ({
+    ok: false,
+    message: `with ${describeParameter(p)} = ${withUnit(value, unit)}: ${message}`,
+  });
+  return (value) => {
+    if (!Number.isFinite(value)) return at(value, 'the value is not a finite number');
+    const edited = editedSketch(sketch, p, value);
+    if (!edited.ok) return at(value, edited.message);
+    let shared = sameGeometry ? kept : undefined;
+    if (!shared) {
+      const { scene, surfaceNames } = toScene(edited.sketch);
+      const factors = computeViewFactors(scene);
+      if (!factors.F.every(Number.isFinite) || !factors.surfaceLength.every(Number.isFinite))
+        return at(value, 'internal error: the view factors came out non-finite; please report this file');
+      shared = { names: surfaceNames, factors };
+      if (sameGeometry) kept = shared;
+    }
+    const { names, factors } = shared;
+    const outcome = solveSketchExchange(edited.sketch, names, factors);
+    if (!outcome.ok) return at(value, outcome.message);
+    const { result } = outcome;
+    const json = exchangeJson({ names, factors, result });
+    return {
+      ok: true,
+      run: { value, sketch: edited.sketch, names, factors, result, conditions: outcome.input.conditions, json },
+    };
+  };
+}
