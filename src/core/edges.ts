@@ -1,4 +1,5 @@
-import type { PolygonInput } from './scene';
+import { buildArcs, circlesLowerLeft, type ArcSet } from './arc/arcs';
+import type { CircleInput, PolygonInput } from './scene';
 
 /**
  * The edges of a sketch, oriented so that the radiating side is on the LEFT of a -> b
@@ -30,6 +31,21 @@ export interface EdgeSet {
   polygonIsEnclosure: Uint8Array;
   originX: number;
   originY: number;
+  /** The exact circles' arcs; arc a is edge count + a in edge matrices. */
+  arcs: ArcSet;
+}
+
+/** Straight edges plus arcs: the size of an edge matrix's side. */
+export function totalEdgeCount(edges: EdgeSet): number {
+  return edges.count + edges.arcs.count;
+}
+
+/** Lengths of every edge, straight ones then arcs (sketch units). */
+export function allEdgeLengths(edges: EdgeSet): Float64Array {
+  const out = new Float64Array(totalEdgeCount(edges));
+  out.set(edges.length);
+  out.set(edges.arcs.length, edges.count);
+  return out;
 }
 
 /** Twice the signed area of a flat [x0,y0,x1,y1,...] polygon; > 0 when anticlockwise (y up). */
@@ -44,7 +60,7 @@ export function signedArea2(points: ArrayLike<number>): number {
 }
 
 /** Build the oriented edge set of a sketch. Throws on a polygon with fewer than 3 points. */
-export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
+export function buildEdges(polygons: readonly PolygonInput[], circles: readonly CircleInput[] = []): EdgeSet {
   let count = 0;
   for (const poly of polygons) {
     const n = poly.points.length >> 1;
@@ -59,7 +75,7 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
   const polygon = new Int32Array(count);
   const prevEdge = new Int32Array(count);
   const nextEdge = new Int32Array(count);
-  let hasEnclosure = false;
+  let hasEnclosure = circles.some((c) => c.kind === 'enclosure');
   let originX = Infinity,
     originY = Infinity;
   for (const poly of polygons) {
@@ -68,7 +84,8 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
       originY = Math.min(originY, poly.points[k + 1]);
     }
   }
-  if (count === 0) originX = originY = 0;
+  [originX, originY] = circlesLowerLeft(circles, originX, originY);
+  if (count === 0 && circles.length === 0) originX = originY = 0;
   const polygonStart = new Int32Array(polygons.length + 1);
   const polygonIsEnclosure = new Uint8Array(polygons.length);
   let base = 0;
@@ -115,5 +132,6 @@ export function buildEdges(polygons: readonly PolygonInput[]): EdgeSet {
     polygonIsEnclosure,
     originX,
     originY,
+    arcs: buildArcs(circles, originX, originY),
   };
 }

@@ -9,9 +9,27 @@ export interface PolygonInput {
   points: ArrayLike<number>;
 }
 
+/**
+ * One exact circle of the cross-section, split into `arcs` equal arcs running
+ * anticlockwise from the +x direction about the centre (arc k spans angles
+ * [2 pi k / arcs, 2 pi (k+1) / arcs], radians).
+ */
+export interface CircleInput {
+  /** 'enclosure' radiates to its inside (a cylindrical shell), 'solid' to its outside (a tube). */
+  kind: 'enclosure' | 'solid';
+  cx: number;
+  cy: number;
+  /** Radius, sketch units, > 0. */
+  radius: number;
+  /** Number of equal arcs (each its own edge), >= 1. */
+  arcs: number;
+}
+
 export interface SceneInput {
   polygons: PolygonInput[];
-  /** Surface index of every edge, edges numbered polygon by polygon in input order. */
+  /** Exact circles; their arcs are numbered after every polygon edge, circle by circle. */
+  circles?: CircleInput[];
+  /** Surface index of every edge (polygon edges polygon by polygon in input order, then the arcs). */
   edgeSurface: ArrayLike<number>;
   /** Number of surfaces; surface indices run 0..surfaceCount-1. */
   surfaceCount: number;

@@ -1,4 +1,5 @@
-import { buildEdges, type EdgeSet } from './edges';
+import { CurvedPairIntegrator } from './arc/curvedPair';
+import { allEdgeLengths, buildEdges, totalEdgeCount, type EdgeSet } from './edges';
 import { buildObstacleIndex } from './obstacles';
 import { PairIntegrator } from './pair/integrator';
 import type { SceneInput, ViewFactorResult } from './scene';
@@ -20,13 +21,28 @@ export interface ViewFactorOptions {
  * arrives at edge j unobstructed; dimensionless, exact to rounding.
  */
 export function edgeViewFactors(edges: EdgeSet, options: ViewFactorOptions = {}): Float64Array {
-  const n = edges.count;
+  const n = totalEdgeCount(edges);
   const F = options.edgeMatrix && options.edgeMatrix.length >= n * n ? options.edgeMatrix : new Float64Array(n * n);
   F.fill(0, 0, n * n);
-  const integrator = new PairIntegrator(edges, buildObstacleIndex(edges));
-  const L = edges.length;
+  const obstacles = buildObstacleIndex(edges);
+  const straight = new PairIntegrator(edges, obstacles);
+  // Sketches with exact circles: pairs with an arc, or with a solid circle near their
+  // view, go through the curved integrator; polygon pairs keep the polygon one.
+  const curved = edges.arcs.circleCount > 0 ? new CurvedPairIntegrator(edges, obstacles) : null;
+  const integrator = curved
+    ? {
+        exchangeLength: (i: number, j: number) =>
+          curved.needed(i, j) ? curved.exchangeLength(i, j) : straight.exchangeLength(i, j),
+      }
+    : straight;
+  const L = edges.arcs.count > 0 ? allEdgeLengths(edges) : edges.length;
   for (let i = 0; i < n; i++) {
     if (L[i] === 0) continue;
+    // Only a concave arc sees itself (straight edges and solid arcs never do).
+    if (curved && i >= edges.count) {
+      const g = curved.exchangeLength(i, i);
+      if (g > 0) F[i * n + i] = g / L[i];
+    }
     for (let j = i + 1; j < n; j++) {
       if (L[j] === 0) continue;
       // g = L_i F_ij = L_j F_ji. Integrating along the shorter edge keeps its rounding
@@ -53,10 +69,11 @@ export function edgeViewFactors(edges: EdgeSet, options: ViewFactorOptions = {})
  * reciprocity residuals. Lengths are in sketch units; factors are dimensionless.
  */
 export function computeViewFactors(scene: SceneInput, options: ViewFactorOptions = {}): ViewFactorResult {
-  const edges = buildEdges(scene.polygons);
-  if (scene.edgeSurface.length !== edges.count) {
-    throw new Error(`edgeSurface has ${scene.edgeSurface.length} entries for ${edges.count} edges`);
+  const edges = buildEdges(scene.polygons, scene.circles);
+  const n = totalEdgeCount(edges);
+  if (scene.edgeSurface.length !== n) {
+    throw new Error(`edgeSurface has ${scene.edgeSurface.length} entries for ${n} edges`);
   }
   const F = edgeViewFactors(edges, options);
-  return aggregateToSurfaces(edges.count, edges.length, F, scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
+  return aggregateToSurfaces(n, allEdgeLengths(edges), F, scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
 }

@@ -1,0 +1,86 @@
+import type { EdgeSet } from '../edges';
+
+// One edge of a pair as a curve: a straight segment or an arc of an exact circle.
+// Sketch units, angles in radians anticlockwise from +x.
+
+export class Curve {
+  isArc = false;
+  /** Segment a -> b, radiating side on the left. */
+  ax = 0;
+  ay = 0;
+  bx = 0;
+  by = 0;
+  /** Arc: circle index, centre, radius, start angle and span (anticlockwise), and whether it radiates outward. */
+  circle = -1;
+  cx = 0;
+  cy = 0;
+  r = 0;
+  start = 0;
+  span = 0;
+  solid = false;
+  length = 0;
+
+  /** Load edge `id` of `E` (straight edges first, then arcs). */
+  load(E: EdgeSet, id: number): void {
+    if (id < E.count) {
+      this.isArc = false;
+      this.circle = -1;
+      this.ax = E.ax[id];
+      this.ay = E.ay[id];
+      this.bx = E.bx[id];
+      this.by = E.by[id];
+      this.length = E.length[id];
+      return;
+    }
+    const A = E.arcs,
+      a = id - E.count,
+      c = A.circle[a];
+    this.isArc = true;
+    this.circle = c;
+    this.cx = A.cx[c];
+    this.cy = A.cy[c];
+    this.r = A.r[c];
+    this.start = A.start[a];
+    this.span = A.span[a];
+    this.solid = A.circleIsEnclosure[c] === 0;
+    this.length = A.length[a];
+    // Arc end points, used as the arc's fixed points when it is the target.
+    this.ax = this.cx + this.r * Math.cos(this.start);
+    this.ay = this.cy + this.r * Math.sin(this.start);
+    this.bx = this.cx + this.r * Math.cos(this.start + this.span);
+    this.by = this.cy + this.r * Math.sin(this.start + this.span);
+  }
+
+  /** Is the angle `t` (radians) on the arc? (Closed range, angle taken modulo 2 pi.) */
+  holdsAngle(t: number): boolean {
+    return angleOffset(t, this.start) <= this.span;
+  }
+
+  /**
+   * Append to `out` (flat x, y) a convex outer bound of the curve: a segment's ends, or
+   * an arc's ends plus the corners where the tangents of each sub-arc of at most a
+   * quarter turn meet (the arc lies inside that polygon).
+   */
+  outerPoints(out: number[]): void {
+    if (!this.isArc) {
+      out.push(this.ax, this.ay, this.bx, this.by);
+      return;
+    }
+    const m = Math.max(1, Math.ceil(this.span / (Math.PI / 2) - 1e-12));
+    const step = this.span / m;
+    const far = this.r / Math.cos(step / 2);
+    for (let k = 0; k <= m; k++) {
+      const t = this.start + k * step;
+      out.push(this.cx + this.r * Math.cos(t), this.cy + this.r * Math.sin(t));
+      if (k < m) out.push(this.cx + far * Math.cos(t + step / 2), this.cy + far * Math.sin(t + step / 2));
+    }
+  }
+}
+
+/** (t - from) reduced to [0, 2 pi), radians. */
+export function angleOffset(t: number, from: number): number {
+  const turn = 2 * Math.PI;
+  let u = (t - from) % turn;
+  if (u < 0) u += turn;
+  return u;
+}

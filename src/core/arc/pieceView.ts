@@ -1,0 +1,238 @@
+import { distanceChange } from '../pairGeometry';
+import { orient } from '../orient';
+import type { ArcSet } from './arcs';
+import type { Curve } from './curve';
+import type { PairScene } from './pairScene';
+
+// The visible runs of the target from the middle of one emitter piece, and their
+// exact integral over the piece. Directions from p are angles b from the emitter's
+// normal n (positive towards its tangent t), in [-pi/2, pi/2]. Objects bounding a
+// run: fixed points (ids 0 .. nP-1), lines touching circle k on side +1 / -1 (ids
+// nP + 2x and nP + 2x + 1 for the x-th circle with a tangent), and the horizon
+// (HORIZON_LO at b = -pi/2, HORIZON_HI at b = +pi/2). Sketch units.
+
+const HORIZON_LO = -1;
+const HORIZON_HI = -2;
+
+export class PieceView {
+  private tg!: Curve;
+  private em!: Curve;
+  private scene!: PairScene;
+  /** Circles whose tangents are objects: the blockers, then the target's own if solid. */
+  private tanCircles: number[] = [];
+  private angle: number[] = [];
+  private id: number[] = [];
+  private order: number[] = [];
+  private targetFront = true;
+
+  constructor(private readonly A: ArcSet) {}
+
+  begin(tg: Curve, scene: PairScene, em: Curve): void {
+    this.tg = tg;
+    this.em = em;
+    this.scene = scene;
+    this.tanCircles = scene.circles.slice();
+    if (tg.isArc && tg.solid) this.tanCircles.push(tg.circle);
+  }
+
+  /**
+   * The integral over the emitter piece pa -> pb (length ds, middle pm, unit normal n
+   * and tangent t at pm) of 1/2 (sin b_hi - sin b_lo) summed over the visible runs:
+   * the piece's share of L_i F_ij, sketch units.
+   */
+  piece(
+    pax: number,
+    pay: number,
+    pbx: number,
+    pby: number,
+    pmx: number,
+    pmy: number,
+    nx: number,
+    ny: number,
+    tx: number,
+    ty: number,
+    ds: number,
+  ): number {
+    const tg = this.tg,
+      A = this.A;
+    this.targetFront = tg.isArc || orient(tg.ax, tg.ay, tg.bx, tg.by, pmx, pmy) > 0;
+    if (!this.targetFront) return 0;
+    const angle = this.angle,
+      id = this.id,
+      order = this.order;
+    angle.length = 0;
+    id.length = 0;
+    const P = this.scene.pts,
+      nP = P.length >> 1;
+    for (let k = 0; k < nP; k++) {
+      const ux = P[2 * k] - pmx,
+        uy = P[2 * k + 1] - pmy;
+      const c = ux * nx + uy * ny;
+      if (c > 0) {
+        angle.push(Math.atan2(ux * tx + uy * ty, c));
+        id.push(k);
+      }
+    }
+    const T = this.tanCircles;
+    for (let x = 0; x < T.length; x++) {
+      const k = T[x];
+      const fx = pmx - A.cx[k],
+        fy = pmy - A.cy[k],
+        r = A.r[k];
+      const d = Math.hypot(fx, fy);
+      if (!(d > r)) continue;
+      const alpha = Math.atan2(fy, fx),
+        beta = Math.atan2(Math.sqrt((d - r) * (d + r)), r);
+      for (let s = 0; s < 2; s++) {
+        const th = s === 0 ? alpha + beta : alpha - beta;
+        const ux = A.cx[k] + r * Math.cos(th) - pmx,
+          uy = A.cy[k] + r * Math.sin(th) - pmy;
+        const c = ux * nx + uy * ny;
+        if (c > 0) {
+          angle.push(Math.atan2(ux * tx + uy * ty, c));
+          id.push(nP + 2 * x + s);
+        }
+      }
+    }
+    const m = angle.length;
+    order.length = m;
+    for (let k = 0; k < m; k++) order[k] = k;
+    order.sort((a, b) => angle[a] - angle[b]);
+    // Sweep the elementary intervals; one ray each decides what is seen first there.
+    let total = 0;
+    let runLo = 0,
+      inRun = false;
+    let prevB = -Math.PI / 2,
+      prevId = HORIZON_LO;
+    for (let q = 0; q <= m; q++) {
+      const b = q < m ? angle[order[q]] : Math.PI / 2;
+      const bid = q < m ? id[order[q]] : HORIZON_HI;
+      if (b > prevB) {
+        const bm = 0.5 * (prevB + b);
+        const cb = Math.cos(bm),
+          sb = Math.sin(bm);
+        const seen = this.seesTarget(pmx, pmy, cb * nx + sb * tx, cb * ny + sb * ty);
+        if (seen && !inRun) {
+          inRun = true;
+          runLo = prevId;
+        } else if (!seen && inRun) {
+          inRun = false;
+          total += this.delta(prevId, nP, pax, pay, pbx, pby, ds) - this.delta(runLo, nP, pax, pay, pbx, pby, ds);
+        }
+      }
+      prevB = Math.max(prevB, b);
+      prevId = bid;
+    }
+    if (inRun)
+      total += this.delta(HORIZON_HI, nP, pax, pay, pbx, pby, ds) - this.delta(runLo, nP, pax, pay, pbx, pby, ds);
+    return 0.5 * total;
+  }
+
+  /**
+   * Change over the piece of F, the antiderivative of sin b along the emitter towards
+   * object `obj`: -|v - p| for a point, minus the taut-string length for a tangent,
+   * +-s at the horizon. Sketch units.
+   */
+  private delta(obj: number, nP: number, pax: number, pay: number, pbx: number, pby: number, ds: number): number {
+    if (obj === HORIZON_HI) return ds;
+    if (obj === HORIZON_LO) return -ds;
+    const dx = pbx - pax,
+      dy = pby - pay;
+    if (obj < nP) {
+      const P = this.scene.pts;
+      return -distanceChange(P[2 * obj], P[2 * obj + 1], pax, pay, pbx, pby, dx, dy);
+    }
+    const x = (obj - nP) >> 1;
+    const sigma = (obj - nP) & 1 ? -1 : 1;
+    const A = this.A,
+      k = this.tanCircles[x];
+    const cx = A.cx[k],
+      cy = A.cy[k],
+      r = A.r[k];
+    const fax = pax - cx,
+      fay = pay - cy,
+      fbx = pbx - cx,
+      fby = pby - cy;
+    const da = Math.hypot(fax, fay),
+      db = Math.hypot(fbx, fby);
+    const ta = Math.sqrt((da - r) * (da + r)),
+      tb = Math.sqrt((db - r) * (db + r));
+    // Turn of p about the centre along the piece; an arc piece that passes on the far
+    // side of the centre (centre between its chord and the arc) turns the other way round.
+    let dAlpha = Math.atan2(fax * fby - fay * fbx, fax * fbx + fay * fby);
+    if (this.em.isArc && this.centreInsideSegment(cx, cy, pax, pay, pbx, pby))
+      dAlpha -= 2 * Math.PI * Math.sign(dAlpha);
+    const dBeta = Math.atan2(tb, r) - Math.atan2(ta, r);
+    // Taut string from p touching at alpha + sigma beta, then wrapped anticlockwise
+    // (sigma = +1) or clockwise (sigma = -1) to a fixed point: dS = dt - sigma r d(alpha + sigma beta).
+    const dS = tb - ta - sigma * r * dAlpha - r * dBeta;
+    return -dS;
+  }
+
+  /** Is (cx, cy) strictly between the chord pa-pb of the emitter arc and the arc itself? */
+  private centreInsideSegment(cx: number, cy: number, pax: number, pay: number, pbx: number, pby: number): boolean {
+    const em = this.em;
+    if (Math.hypot(cx - em.cx, cy - em.cy) >= em.r) return false;
+    // The arc lies on the side of the chord away from the emitter's centre (pieces span < pi).
+    const side = (pbx - pax) * (cy - pay) - (pby - pay) * (cx - pax);
+    const centreSide = (pbx - pax) * (em.cy - pay) - (pby - pay) * (em.cx - pax);
+    return side * centreSide < 0;
+  }
+
+  /** Does the ray from (px, py) along the unit direction (dx, dy) reach the target before any blocker? */
+  private seesTarget(px: number, py: number, dx: number, dy: number): boolean {
+    const tg = this.tg,
+      A = this.A;
+    let tT: number;
+    if (!tg.isArc) {
+      tT = raySegment(px, py, dx, dy, tg.ax, tg.ay, tg.bx, tg.by);
+    } else {
+      const k = tg.circle;
+      const fx = px - A.cx[k],
+        fy = py - A.cy[k];
+      const b = fx * dx + fy * dy;
+      const disc = b * b - (fx * fx + fy * fy - A.r[k] * A.r[k]);
+      if (!(disc > 0)) return false;
+      const h = Math.sqrt(disc);
+      tT = tg.solid ? -b - h : -b + h;
+      if (!(tT > 0)) return false;
+      if (!tg.holdsAngle(Math.atan2(fy + tT * dy, fx + tT * dx))) return false;
+    }
+    if (!(tT < Infinity)) return false;
+    const S = this.scene.seg;
+    for (let k = 0; k < S.length; k += 4) {
+      if (raySegment(px, py, dx, dy, S[k], S[k + 1], S[k + 2], S[k + 3]) < tT) return false;
+    }
+    for (const k of this.scene.circles) {
+      const fx = px - A.cx[k],
+        fy = py - A.cy[k];
+      const b = fx * dx + fy * dy;
+      if (b >= 0) continue;
+      const disc = b * b - (fx * fx + fy * fy - A.r[k] * A.r[k]);
+      if (disc > 0 && -b - Math.sqrt(disc) < tT) return false;
+    }
+    return true;
+  }
+}
+
+/** Distance along the ray p + t d (t > 0) to segment a-b, or Infinity. */
+function raySegment(
+  px: number,
+  py: number,
+  dx: number,
+  dy: number,
+  ax: number,
+  ay: number,
+  bx: number,
+  by: number,
+): number {
+  const ex = bx - ax,
+    ey = by - ay;
+  const den = dx * ey - dy * ex;
+  if (den === 0) return Infinity;
+  const wx = ax - px,
+    wy = ay - py;
+  const t = (wx * ey - wy * ex) / den;
+  const u = (wx * dy - wy * dx) / den;
+  return t > 0 && u >= 0 && u <= 1 ? t : Infinity;
+}

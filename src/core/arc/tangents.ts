@@ -1,0 +1,126 @@
+import { angleOffset, type Curve } from './curve';
+
+// Lines that touch circles, and where such lines cross the emitting curve. Sketch
+// units, angles in radians anticlockwise from +x.
+
+/**
+ * Up to four common tangent lines of circles (c1, r1) and (c2, r2), written to `out`
+ * as (nx, ny, w) triples of the line n . x + w = 0 (|n| = 1); returns how many.
+ * Circle 1 touches the line at c1 - r1 n; circle 2 at c2 - s r2 n, s = +1 for the
+ * two outer tangents and -1 for the two crossing ones.
+ */
+export function commonTangents(
+  c1x: number,
+  c1y: number,
+  r1: number,
+  c2x: number,
+  c2y: number,
+  r2: number,
+  out: Float64Array,
+): number {
+  const dx = c2x - c1x,
+    dy = c2y - c1y;
+  const d = Math.hypot(dx, dy);
+  if (!(d > 0)) return 0;
+  const phi = Math.atan2(dy, dx);
+  let n = 0;
+  for (let s = 1; s >= -1; s -= 2) {
+    const c = (s * r2 - r1) / d;
+    if (c > 1 || c < -1) continue;
+    const w = Math.acos(c);
+    for (let side = -1; side <= 1; side += 2) {
+      const psi = phi + side * w;
+      const nx = Math.cos(psi),
+        ny = Math.sin(psi);
+      out[3 * n] = nx;
+      out[3 * n + 1] = ny;
+      out[3 * n + 2] = r1 - (nx * c1x + ny * c1y);
+      n++;
+    }
+  }
+  return n;
+}
+
+/**
+ * Angles (radians) of the two points where lines from (px, py) touch circle (cx, cy, r):
+ * alpha +- beta, alpha the angle of p about the centre, beta = atan2(t, r) with t the
+ * tangent length. Returns false when p lies inside the circle.
+ */
+export function touchAngles(px: number, py: number, cx: number, cy: number, r: number, out: Float64Array): boolean {
+  const fx = px - cx,
+    fy = py - cy;
+  const d = Math.hypot(fx, fy);
+  if (!(d >= r)) return false;
+  const alpha = Math.atan2(fy, fx);
+  const beta = Math.atan2(Math.sqrt((d - r) * (d + r)), r);
+  out[0] = alpha + beta;
+  out[1] = alpha - beta;
+  return true;
+}
+
+/** Breakpoints along an emitting curve: parameters (segment: fraction from a; arc: angle from its start). */
+export class CurveBreaks {
+  at = new Float64Array(64);
+  count = 0;
+
+  reset(): void {
+    this.count = 0;
+  }
+
+  private push(u: number): void {
+    if (this.count === this.at.length) {
+      const g = new Float64Array(2 * this.count);
+      g.set(this.at);
+      this.at = g;
+    }
+    this.at[this.count++] = u;
+  }
+
+  /** Where the line through (px, py) with direction (ux, uy) crosses the curve's interior. */
+  addLine(cur: Curve, px: number, py: number, ux: number, uy: number): void {
+    if (!cur.isArc) {
+      const ex = cur.bx - cur.ax,
+        ey = cur.by - cur.ay;
+      const den = ex * uy - ey * ux;
+      if (den === 0) return;
+      const s = ((px - cur.ax) * uy - (py - cur.ay) * ux) / den;
+      if (s > 0 && s < 1) this.push(s);
+      return;
+    }
+    const len = Math.hypot(ux, uy);
+    if (!(len > 0)) return;
+    const dx = ux / len,
+      dy = uy / len;
+    const fx = px - cur.cx,
+      fy = py - cur.cy;
+    // Foot of the perpendicular from the centre, then +- half the chord.
+    const b = fx * dx + fy * dy;
+    const mx = fx - b * dx,
+      my = fy - b * dy;
+    const h2 = (cur.r - Math.hypot(mx, my)) * (cur.r + Math.hypot(mx, my));
+    if (!(h2 > 0)) return;
+    const h = Math.sqrt(h2);
+    this.addAngle(cur, Math.atan2(my + h * dy, mx + h * dx));
+    this.addAngle(cur, Math.atan2(my - h * dy, mx - h * dx));
+  }
+
+  /** A point of the arc given by its angle about the arc's centre. */
+  addAngle(cur: Curve, t: number): void {
+    const u = angleOffset(t, cur.start);
+    if (u > 0 && u < cur.span) this.push(u);
+  }
+
+  /** Sort the breakpoints ascending (short lists: insertion sort). */
+  sort(): void {
+    const a = this.at;
+    for (let k = 1; k < this.count; k++) {
+      const v = a[k];
+      let m = k - 1;
+      while (m >= 0 && a[m] > v) {
+        a[m + 1] = a[m];
+        m--;
+      }
+      a[m + 1] = v;
+    }
+  }
+}
