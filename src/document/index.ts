@@ -1,5 +1,5 @@
 // The sketch file: schema (version 1), reading, writing, and CSV export.
-export { restore, type RestoreResult } from './restore';
+export { restore, readDraft, type RestoreResult, type DraftResult } from './restore';
 export { serialize } from './serialize';
 export { toScene } from './toScene';
 export { toCsv, matrixCsv, type CsvCell } from './csv';
@@ -15,5 +15,13 @@ export type {
   ShapeV1,
 } from './schema';
 export { UNITS, METRES_PER_UNIT, type Units } from './units';
-export { MAX_EDGES, MAX_COORDINATE, MIN_EDGE_LENGTH, MIN_RELATIVE_EDGE_LENGTH, MAX_NAME_LENGTH } from './limits';
+export {
+  MAX_EDGES,
+  MAX_COORDINATE,
+  MIN_EDGE_LENGTH,
+  MIN_RELATIVE_EDGE_LENGTH,
+  MAX_NAME_LENGTH,
+  MAX_FILE_CHARS,
+  MAX_JSON_DEPTH,
+} from './limits';
 export type { SketchProblem, ProblemPlace, ProblemKind } from './problems';

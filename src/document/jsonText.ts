@@ -1,18 +1,52 @@
 // Reading the text of a file: JSON with a message that says what kind of
 // trouble and where (line and column), and a guess when it is another kind of file.
+// Size and nesting are bounded before JSON.parse runs (limits.ts).
+import { MAX_FILE_CHARS, MAX_JSON_DEPTH } from './limits';
 
 export type ParseResult = { ok: true; value: unknown } | { ok: false; error: string };
 
 export function parseJsonText(text: string): ParseResult {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text; // byte-order mark from some editors
+  if (body.length > MAX_FILE_CHARS) {
+    const mb = (n: number) => `${Math.round(n / 1e5) / 10} MB`;
+    return {
+      ok: false,
+      error: `the file is ${mb(body.length)}; the limit for a sketch file is ${mb(MAX_FILE_CHARS)} (a sketch at the edge limit takes under 1 MB)`,
+    };
+  }
   if (body.trim() === '') return { ok: false, error: 'the file is empty' };
   const other = otherKindOfFile(body);
   if (other) return { ok: false, error: `not a Tautline sketch: this looks like ${other}, not a JSON sketch file` };
+  const deep = tooDeep(body);
+  if (deep !== null) {
+    return {
+      ok: false,
+      error: `not a Tautline sketch: lists and objects nest more than ${MAX_JSON_DEPTH} deep at ${lineColumn(body, deep)} (a sketch nests 4 deep)`,
+    };
+  }
   try {
     return { ok: true, value: JSON.parse(body) };
   } catch (error) {
     return { ok: false, error: describeJsonError(body, error) };
   }
+}
+
+/** Offset of the first bracket that opens past MAX_JSON_DEPTH (outside strings), else null. One pass, no recursion. */
+function tooDeep(text: string): number | null {
+  let depth = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 0x5c)
+        i++; // backslash: skip the escaped character
+      else if (c === 0x22) inString = false;
+    } else if (c === 0x22) inString = true;
+    else if (c === 0x5b || c === 0x7b) {
+      if (++depth > MAX_JSON_DEPTH) return i;
+    } else if (c === 0x5d || c === 0x7d) depth--;
+  }
+  return null;
 }
 
 function otherKindOfFile(text: string): string | null {

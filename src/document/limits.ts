@@ -21,6 +21,20 @@ export const MIN_EDGE_LENGTH = 1e-100;
  */
 export const MIN_RELATIVE_EDGE_LENGTH = 2 ** -40;
 
+/**
+ * Longest sketch file, in characters (20 MB of ASCII text). A sketch at the edge
+ * limit takes well under 1 MB; the limit is checked before the text is parsed,
+ * so a huge or runaway file is turned away at once instead of filling memory.
+ */
+export const MAX_FILE_CHARS = 20_000_000;
+
+/**
+ * Deepest nesting of lists and objects in a sketch file. A sketch needs 4
+ * (sketch, shapes, shape, points, point); deeper text is not a sketch, and
+ * refusing it up front keeps every later step (messages, warnings) shallow.
+ */
+export const MAX_JSON_DEPTH = 32;
+
 /** Longest surface name, in characters. */
 export const MAX_NAME_LENGTH = 200;
 

@@ -10,11 +10,22 @@ import { MAX_EDGES, MAX_MESSAGES } from './limits';
 import { migrate } from './migrate';
 import { normalise } from './normalise';
 import { mergePlaces, problemAt, type SketchProblem } from './problems';
-import { sketchFileSchemaV1, type Sketch } from './schema';
+import { sketchFileSchemaV1, type Sketch, type SketchFileV1 } from './schema';
 import { schemaProblem } from './zodMessages';
 import { unknownFieldWarnings } from './unknownFields';
 
 export type RestoreResult = { ok: true; sketch: Sketch; warnings: string[] } | { ok: false; errors: SketchProblem[] };
+
+/**
+ * A document read as a draft: the file format is right (JSON, version, schema),
+ * but the sketch may break a rule of its own (crossing outlines, overlapping
+ * bodies, a surface list of the wrong length, too many edges). `doc` is the
+ * sketch as written (normalised when `problems` is empty); `problems` are what
+ * `restore` would refuse it for, with their places.
+ */
+export type DraftResult =
+  | { ok: true; doc: SketchFileV1; problems: SketchProblem[]; warnings: string[] }
+  | { ok: false; errors: SketchProblem[] };
 
 /**
  * Read a sketch from JSON text or from an already-parsed value; validate it
@@ -23,16 +34,51 @@ export type RestoreResult = { ok: true; sketch: Sketch; warnings: string[] } | {
  * its geometry. Warnings describe repairs and ignored content.
  */
 export function restore(input: unknown): RestoreResult {
+  return guarded(() => {
+    const read = readFormat(input, true);
+    if (!read.ok) return read;
+    const checked = checkSketch(read.doc, read.raw);
+    if (!checked.ok) return refuse(checked.problems);
+    return { ok: true, sketch: checked.sketch, warnings: [...read.warnings, ...checked.warnings] };
+  });
+}
+
+/**
+ * Read a sketch the way the app opens one: everything `restore` reads, and also
+ * a sketch whose file format is right but whose drawing breaks a rule, as a
+ * draft with its problems (so a sketch saved mid-edit opens again as it was).
+ * Refuses only what is not a sketch file at all (not JSON, wrong version,
+ * fields of the wrong type, past the file-size limit).
+ */
+export function readDraft(input: unknown): DraftResult {
+  return guarded(() => {
+    const read = readFormat(input, false);
+    if (!read.ok) return read;
+    const checked = checkSketch(read.doc, read.raw);
+    if (checked.ok)
+      return { ok: true, doc: checked.sketch, problems: [], warnings: [...read.warnings, ...checked.warnings] };
+    return { ok: true, doc: read.doc, problems: refuse(checked.problems).errors, warnings: read.warnings };
+  });
+}
+
+function guarded<T>(
+  read: () => T | { ok: false; errors: SketchProblem[] },
+): T | { ok: false; errors: SketchProblem[] } {
   try {
-    return restoreUnsafe(input);
+    return read();
   } catch (error) {
     // A fault here is a bug, but the caller (app or command line) must still get a message, not an exception.
-    const detail = error instanceof Error ? error.message.split('\n', 1)[0] : String(error);
+    const detail = error instanceof Error ? error.message.split('\n', 1)[0].slice(0, 200) : String(error).slice(0, 200);
     return { ok: false, errors: [problemAt('internal', `could not read the sketch (internal error: ${detail})`)] };
   }
 }
 
-function restoreUnsafe(input: unknown): RestoreResult {
+type FormatRead =
+  | { ok: true; doc: SketchFileV1; raw: Record<string, unknown>; warnings: string[] }
+  | { ok: false; errors: SketchProblem[] };
+
+/** From text or value to a schema-valid document, or the reasons it is not a sketch file. */
+function readFormat(input: unknown, quickLimit: boolean): FormatRead {
   let value = input;
   if (typeof input === 'string') {
     const parsed = parseJsonText(input);
@@ -45,24 +91,10 @@ function restoreUnsafe(input: unknown): RestoreResult {
   if (!migrated.ok) return refuse([problemAt('version', migrated.error)]);
   const doc = migrated.doc;
 
-  const shapeCount = Array.isArray(doc.shapes) ? doc.shapes.length : 0;
-  if (shapeCount > MAX_EDGES / 3) {
-    return refuse([
-      problemAt(
-        'limit',
-        `the sketch has ${shapeCount} shapes; the limit is ${MAX_EDGES} edges in all, and each shape has at least 3`,
-      ),
-    ]);
-  }
-  const edges = countEdges(doc.shapes);
-  if (edges > MAX_EDGES) {
-    return refuse([
-      problemAt(
-        'limit',
-        `the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`,
-      ),
-    ]);
-  }
+  // Refused before the schema runs, so a huge file is turned away quickly; a
+  // draft is still read whole (the file-size limit bounds the work).
+  const limit = edgeLimitProblem(doc.shapes);
+  if (limit && quickLimit) return refuse([limit]);
 
   const surfaces = doc.surfaces;
   if (surfaces !== null && typeof surfaces === 'object' && Object.hasOwn(surfaces, '__proto__')) {
@@ -76,25 +108,51 @@ function restoreUnsafe(input: unknown): RestoreResult {
   }
   const parsed = sketchFileSchemaV1.safeParse(doc, { reportInput: true });
   if (!parsed.success) return refuse(parsed.error.issues.map((issue) => schemaProblem(issue, doc)));
+  return { ok: true, doc: parsed.data, raw: doc, warnings: unknownFieldWarnings(doc) };
+}
 
-  const normalised = normalise(parsed.data);
-  if (normalised.errors.length > 0) return refuse(normalised.errors);
+type SketchCheck = { ok: true; sketch: Sketch; warnings: string[] } | { ok: false; problems: SketchProblem[] };
+
+/** The rules of a drawing: edge limit, one name per edge, coordinate range, geometry. */
+function checkSketch(doc: SketchFileV1, raw: Record<string, unknown>): SketchCheck {
+  const limit = edgeLimitProblem(raw.shapes);
+  if (limit) return { ok: false, problems: [limit] };
+  const normalised = normalise(doc);
+  if (normalised.errors.length > 0) return { ok: false, problems: normalised.errors };
   const { sketch, fileIndex, filePointCount } = normalised;
 
   const polygons: PolygonInput[] = sketch.shapes.map((s) => ({ kind: s.kind, points: s.points.flat() }));
   const findings = checkSketchGeometry(polygons);
   if (findings.length > 0) {
-    const ctx = { shapes: sketch.shapes, fileShapes: parsed.data.shapes, fileIndex, filePointCount };
-    return refuse(findings.map((f) => geometryProblem(f, ctx)));
+    const ctx = { shapes: sketch.shapes, fileShapes: doc.shapes, fileIndex, filePointCount };
+    return { ok: false, problems: findings.map((f) => geometryProblem(f, ctx)) };
   }
-  return { ok: true, sketch, warnings: [...unknownFieldWarnings(doc), ...normalised.warnings] };
+  return { ok: true, sketch, warnings: normalised.warnings };
+}
+
+function edgeLimitProblem(shapes: unknown): SketchProblem | null {
+  const shapeCount = Array.isArray(shapes) ? shapes.length : 0;
+  if (shapeCount > MAX_EDGES / 3) {
+    return problemAt(
+      'limit',
+      `the sketch has ${shapeCount} shapes; the limit is ${MAX_EDGES} edges in all, and each shape has at least 3`,
+    );
+  }
+  const edges = countEdges(shapes);
+  if (edges > MAX_EDGES) {
+    return problemAt(
+      'limit',
+      `the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`,
+    );
+  }
+  return null;
 }
 
 /**
  * At most MAX_MESSAGES problems, one per message; past that the last counts
  * the rest, and its place covers theirs so the canvas still marks every one.
  */
-function refuse(problems: SketchProblem[]): RestoreResult {
+function refuse(problems: SketchProblem[]): { ok: false; errors: SketchProblem[] } {
   // One entry per message; a repeated message adds its place to the first.
   const byMessage = new Map<string, SketchProblem>();
   for (const p of problems) {
@@ -107,7 +165,6 @@ function refuse(problems: SketchProblem[]): RestoreResult {
   const more = problemAt('more', `…and ${rest.length} more problems`, mergePlaces(rest.map((p) => p.place)));
   return { ok: false, errors: [...unique.slice(0, MAX_MESSAGES - 1), more] };
 }
-
 /** A message when the value is plainly not a sketch document (another kind of file), else null. */
 function notASketch(value: unknown): string | null {
   const expected = 'a Tautline sketch is a JSON object with "version", "units" and "shapes"';

@@ -2,7 +2,7 @@
 // the live pipeline and autosave can be tested with stand-ins for faults.
 import type { SceneInput } from '../core/scene';
 import type { SketchFile } from './sketchFile';
-import { restore, serialize, toScene, type Sketch, type SketchProblem } from '../document';
+import { CURRENT_VERSION, readDraft, restore, serialize, toScene, type Sketch, type SketchProblem } from '../document';
 
 export type { SketchProblem, ProblemPlace } from '../document';
 
@@ -12,9 +12,15 @@ export type CheckedSketch = Sketch;
 export type RestoreOutcome =
   { ok: true; sketch: CheckedSketch; warnings: string[] } | { ok: false; errors: SketchProblem[] };
 
+/** A file read as the app opens it: a sketch, perhaps a draft with problems, or the reasons it is not a sketch file. */
+export type DraftOutcome =
+  { ok: true; doc: SketchFile; problems: SketchProblem[]; warnings: string[] } | { ok: false; errors: SketchProblem[] };
+
 export interface DocumentApi {
   /** Parse (from text) or validate (an object) a sketch file, with messages for people. */
   restore(input: unknown): RestoreOutcome;
+  /** Like restore, but a sketch whose drawing breaks a rule is read as a draft with its problems. */
+  readDraft(input: unknown): DraftOutcome;
   /** Core input for a sketch that `restore` accepted. */
   toScene(sketch: CheckedSketch): { scene: SceneInput; surfaceNames: string[] };
   /** File text; a sketch that fails validation is still written (as plain JSON), so work is never lost. */
@@ -36,11 +42,46 @@ function restoreOnce(input: unknown): RestoreOutcome {
   return verdict;
 }
 
+/** The sketch in serialize's form without changing what it says: a single name stands for every edge. */
+function asWritten(doc: SketchFile): Sketch {
+  const shapes = doc.shapes.map((shape) => ({
+    ...shape,
+    surface:
+      typeof shape.surface === 'string'
+        ? new Array<string>(Math.max(1, shape.points.length)).fill(shape.surface)
+        : shape.surface,
+  }));
+  // serialize writes the current version whatever the sketch says.
+  return {
+    version: CURRENT_VERSION,
+    units: doc.units,
+    shapes,
+    surfaces: doc.surfaces ?? {},
+    settings: doc.settings ?? {},
+  };
+}
+
+const drafts = new WeakMap<object, DraftOutcome>();
+
+function readDraftOnce(input: unknown): DraftOutcome {
+  if (typeof input !== 'object' || input === null) return readDraft(input);
+  let read = drafts.get(input);
+  if (!read) {
+    read = readDraft(input);
+    drafts.set(input, read);
+  }
+  return read;
+}
+
 export const documentApi: DocumentApi = {
   restore: restoreOnce,
+  readDraft: readDraftOnce,
   toScene: (sketch) => toScene(sketch),
   serialize: (sketch) => {
     const read = restoreOnce(sketch);
-    return read.ok ? serialize(read.sketch) : `${JSON.stringify(sketch, null, 2)}\n`;
+    if (read.ok) return serialize(read.sketch);
+    // A draft is written in the same layout, as it stands (it reads back as the same draft).
+    if (readDraftOnce(sketch).ok) return serialize(asWritten(sketch));
+    return `${JSON.stringify(sketch, null, 2)}\n`;
   },
 };
