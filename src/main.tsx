@@ -6,6 +6,7 @@ import { startRuntime } from './state/runtime';
 import { documentApi } from './state/documentApi';
 import { demoSketch } from './state/demo';
 import { spawnViewFactorWorker } from './worker/spawn';
+import { browserTabChannel } from './state/tabs/lease';
 import './ui/styles.css';
 
 const runtime = startRuntime({
@@ -13,6 +14,7 @@ const runtime = startRuntime({
   api: documentApi,
   spawn: spawnViewFactorWorker,
   demo: demoSketch,
+  channel: browserTabChannel(),
 });
 // Browser tests read the store through this handle (never used by the app itself).
 (window as unknown as { __tautline?: unknown }).__tautline = runtime;

@@ -6,6 +6,7 @@ import { loadAutosave, startAutosave } from './autosave';
 import { startLiveResults } from './results/live';
 import { startLiveExchange } from './exchange/live';
 import { ViewFactorClient, type WorkerHandle } from '../worker/client';
+import type { TabChannel } from './tabs/lease';
 
 /** Seconds a job may run before the worker counts as hung (the benchmark's largest sketch takes ~2 s). */
 export const WORKER_TIME_LIMIT_MS = 15000;
@@ -22,12 +23,14 @@ export function startRuntime(options: {
   spawn: () => WorkerHandle;
   demo: SketchFile;
   timeLimitMs?: number;
+  /** Channel to other tabs, so only one autosaves the sketch (none in tests unless given). */
+  channel?: TabChannel | null;
 }): Runtime {
   const start = loadAutosave(options.storage, options.api, options.demo);
   const store = createAppStore(start.doc);
   if (start.notice) store.getState().notify(start.notice.level, start.notice.text);
   const client = new ViewFactorClient(options.spawn, { timeLimitMs: options.timeLimitMs ?? WORKER_TIME_LIMIT_MS });
-  const stopSave = startAutosave(store, options.storage, options.api);
+  const stopSave = startAutosave(store, options.storage, options.api, { channel: options.channel ?? null });
   const stopLive = startLiveResults(store, client, options.api);
   const stopExchange = startLiveExchange(store);
   return {

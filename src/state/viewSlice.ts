@@ -13,10 +13,14 @@ export interface Camera {
   originY: number;
 }
 
+/** A button on a notice: save the sketch to a file (the page downloads it), or run an action of the state. */
+export type NoticeAction = { kind: 'save-file'; label: string } | { kind: 'run'; label: string; run: () => void };
+
 export interface Notice {
   id: number;
   level: 'info' | 'warning' | 'error';
   text: string;
+  action?: NoticeAction;
 }
 
 export interface ViewSlice {
@@ -53,7 +57,8 @@ export interface ViewSlice {
   setHoverPair: (pair: [string, string] | null) => void;
   setHelpOpen: (open: boolean) => void;
   requestFit: () => void;
-  notify: (level: Notice['level'], text: string) => void;
+  /** Show a notice; returns its id (to dismiss it when it no longer holds). */
+  notify: (level: Notice['level'], text: string, action?: NoticeAction) => number;
   dismissNotice: (id: number) => void;
 }
 
@@ -89,6 +94,11 @@ export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) 
   setHoverPair: (hoverPair) => set({ hoverPair }),
   setHelpOpen: (helpOpen) => set({ helpOpen }),
   requestFit: () => set((s) => ({ fitRequest: s.fitRequest + 1 })),
-  notify: (level, text) => set((s) => ({ notices: [...s.notices.slice(-4), { id: nextNoticeId++, level, text }] })),
+  notify: (level, text, action) => {
+    const id = nextNoticeId++;
+    const notice: Notice = action ? { id, level, text, action } : { id, level, text };
+    set((s) => ({ notices: [...s.notices.slice(-4), notice] }));
+    return id;
+  },
   dismissNotice: (id) => set((s) => ({ notices: s.notices.filter((n) => n.id !== id) })),
 });

@@ -1,11 +1,22 @@
 import { describe, expect, it } from 'vitest';
-import { AUTOSAVE_KEY, SET_ASIDE_PREFIX, loadAutosave, saveAutosave, startAutosave } from '../../src/state/autosave';
+import {
+  AUTOSAVE_KEY,
+  FULL_TEXT,
+  SET_ASIDE_PREFIX,
+  loadAutosave,
+  saveAutosave,
+  startAutosave,
+} from '../../src/state/autosave';
 import { documentApi } from '../../src/state/documentApi';
 import { demoSketch } from '../../src/state/demo';
 import { createAppStore } from '../../src/state/store';
 import { setVertex } from '../../src/state/edits/shapeEdits';
 import { MemoryStorage } from './memoryStorage';
 import type { SketchFile } from '../../src/state/sketchFile';
+
+/** Point 3 of the first shape in the autosaved text. */
+const savedCorner = (storage: MemoryStorage): unknown =>
+  (JSON.parse(storage.getItem(AUTOSAVE_KEY) ?? 'null') as SketchFile).shapes[0].points[2];
 
 const box: SketchFile = {
   version: 1,
@@ -56,9 +67,9 @@ describe('autosave', () => {
     expect(r.notice?.text).toContain(key);
   });
 
-  it('sets aside an autosave whose geometry is invalid, naming the problem', () => {
+  it('restores an autosave whose geometry is invalid as a draft, naming the problem', () => {
     const storage = new MemoryStorage();
-    const crossed = {
+    const crossed: SketchFile = {
       ...box,
       shapes: [
         {
@@ -74,23 +85,44 @@ describe('autosave', () => {
     };
     storage.setItem(AUTOSAVE_KEY, JSON.stringify(crossed));
     const r = loadAutosave(storage, documentApi, demoSketch);
-    expect(r.doc).toBe(demoSketch);
-    expect(r.notice?.text).toMatch(/shape 1.*cross/);
+    expect(r.fromAutosave).toBe(true);
+    expect(r.doc.units).toBe('cm');
+    expect(r.doc.shapes).toEqual(crossed.shapes);
+    expect(r.notice?.level).toBe('warning');
+    expect(r.notice?.text).toMatch(/as a draft.*shape 1.*cross/);
+    expect(storage.keys().some((k) => k.startsWith(SET_ASIDE_PREFIX))).toBe(false);
   });
 
-  it('saves every valid change but never overwrites the last good copy with an invalid one', () => {
+  it('saves every change, a sketch that breaks a rule too, and it comes back as that draft', () => {
+    const storage = new MemoryStorage();
+    const store = createAppStore(box);
+    const stop = startAutosave(store, storage, documentApi);
+    store.getState().edit((d) => setVertex(d, 0, 2, [40, 30]));
+    expect(savedCorner(storage)).toEqual([40, 30]);
+    // A self-crossing outline (the corner dragged across the opposite wall): saved as it is.
+    store.getState().edit((d) => setVertex(d, 0, 2, [-10, 10]));
+    const draft = store.getState().doc;
+    stop();
+    const back = loadAutosave(storage, documentApi, demoSketch);
+    expect(back.doc.shapes).toEqual(draft.shapes);
+    expect(back.doc.shapes[0].points[2]).toEqual([-10, 10]);
+    expect(back.notice?.text).toContain('as a draft');
+  });
+
+  it('never overwrites the last good copy with a sketch the reader would refuse, and says so once', () => {
     const storage = new MemoryStorage();
     const store = createAppStore(box);
     const stop = startAutosave(store, storage, documentApi);
     store.getState().edit((d) => setVertex(d, 0, 2, [40, 30]));
     const good = storage.getItem(AUTOSAVE_KEY)!;
-    expect(JSON.parse(good).shapes[0].points[2]).toEqual([40, 30]);
-    // A self-crossing outline (the corner dragged across the opposite wall) fails validation.
-    store.getState().edit((d) => setVertex(d, 0, 2, [-10, 10]));
+    // '__proto__' is a name the file format refuses (it would replace an object's prototype).
+    store.getState().edit((d) => ({ ...d, shapes: [{ ...d.shapes[0], surface: '__proto__' }] }));
+    store.getState().edit((d) => setVertex(d, 0, 2, [40, 31]));
     expect(storage.getItem(AUTOSAVE_KEY)).toBe(good);
-    store.getState().undo();
-    store.getState().edit((d) => setVertex(d, 0, 2, [40, 25]));
-    expect(JSON.parse(storage.getItem(AUTOSAVE_KEY)!).shapes[0].points[2]).toEqual([40, 25]);
+    const paused = store.getState().notices.filter((n) => n.text.startsWith('Autosave paused'));
+    expect(paused).toHaveLength(1);
+    expect(paused[0].text).toContain('__proto__');
+    expect(paused[0].action?.kind).toBe('save-file');
     stop();
   });
 
@@ -102,18 +134,28 @@ describe('autosave', () => {
     store.getState().updateGesture(setVertex(box, 0, 2, [41, 21]));
     expect(storage.getItem(AUTOSAVE_KEY)).toBeNull();
     store.getState().endGesture();
-    expect(JSON.parse(storage.getItem(AUTOSAVE_KEY)!).shapes[0].points[2]).toEqual([41, 21]);
+    expect(savedCorner(storage)).toEqual([41, 21]);
     stop();
   });
 
-  it('tells the user once when storage refuses the write', () => {
+  it('storage full: says so once, keeps the last copy, offers a file, and says when it works again', () => {
     const storage = new MemoryStorage();
-    storage.refuseWrites = true;
     const store = createAppStore(box);
     const stop = startAutosave(store, storage, documentApi);
     store.getState().edit((d) => setVertex(d, 0, 2, [40, 30]));
+    const good = storage.getItem(AUTOSAVE_KEY);
+    storage.refuseWrites = true;
     store.getState().edit((d) => setVertex(d, 0, 2, [40, 31]));
-    expect(store.getState().notices.filter((n) => n.text.startsWith('Autosave failed'))).toHaveLength(1);
+    store.getState().edit((d) => setVertex(d, 0, 2, [40, 32]));
+    expect(storage.getItem(AUTOSAVE_KEY)).toBe(good);
+    const full = store.getState().notices.filter((n) => n.text === FULL_TEXT);
+    expect(full).toHaveLength(1);
+    expect(full[0].action).toEqual({ kind: 'save-file', label: 'Save to a file' });
+    storage.refuseWrites = false;
+    store.getState().edit((d) => setVertex(d, 0, 2, [40, 33]));
+    expect(savedCorner(storage)).toEqual([40, 33]);
+    expect(store.getState().notices.some((n) => n.text === FULL_TEXT)).toBe(false);
+    expect(store.getState().notices.some((n) => n.text.startsWith('Autosave works again'))).toBe(true);
     stop();
   });
 });

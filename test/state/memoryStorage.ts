@@ -18,7 +18,8 @@ export class MemoryStorage implements Storage {
     this.items.delete(k);
   }
   setItem(k: string, v: string) {
-    if (this.refuseWrites) throw new Error('QuotaExceededError');
+    // What browsers throw when the quota is used up; the old value stays.
+    if (this.refuseWrites) throw new DOMException('The quota has been exceeded.', 'QuotaExceededError');
     this.items.set(k, String(v));
   }
   keys() {

@@ -1,7 +1,7 @@
 import { useRef } from 'react';
 import { useAppStore, useDocumentApi } from '../AppContext';
-import { newSketch, openSketchText, sketchFileText } from '../../state/files';
-import { downloadText } from './download';
+import { newSketch, openSketchText } from '../../state/files';
+import { saveSketchFile } from './saveFile';
 
 export const OPEN_INPUT_ID = 'open-sketch-input';
 
@@ -14,6 +14,7 @@ export function FileButtons() {
     openSketchText(store, api, await file.text(), file.name);
     if (input.current) input.current.value = '';
   };
+  const save = () => saveSketchFile(store, api);
   return (
     <div className="group" role="group" aria-label="File">
       <button
@@ -39,11 +40,7 @@ export function FileButtons() {
         aria-label="Sketch file to open"
         onChange={(e) => void onFile(e.target.files?.[0])}
       />
-      <button
-        type="button"
-        title="Download the sketch file (Ctrl+S)"
-        onClick={() => downloadText('sketch.json', sketchFileText(store, api), 'application/json')}
-      >
+      <button type="button" title="Download the sketch file (Ctrl+S)" onClick={save}>
         Save
       </button>
     </div>

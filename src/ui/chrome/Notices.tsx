@@ -1,16 +1,31 @@
-import { useApp } from '../AppContext';
+import { useApp, useAppStore, useDocumentApi } from '../AppContext';
 import { selectNotices } from '../../state/selectors';
+import type { Notice } from '../../state/viewSlice';
+import { saveSketchFile } from './saveFile';
 
 const selectDismiss = (s: { dismissNotice: (id: number) => void }) => s.dismissNotice;
 
 export function Notices() {
   const notices = useApp(selectNotices);
   const dismiss = useApp(selectDismiss);
+  const store = useAppStore();
+  const api = useDocumentApi();
+  const act = (n: Notice) => {
+    if (!n.action) return;
+    if (n.action.kind === 'save-file') saveSketchFile(store, api);
+    else n.action.run();
+    dismiss(n.id);
+  };
   return (
     <div className="notices" aria-live="polite">
       {notices.map((n) => (
         <div key={n.id} className={`notice notice-${n.level}`} role={n.level === 'error' ? 'alert' : 'status'}>
           <span className="notice-text">{n.text}</span>
+          {n.action && (
+            <button type="button" className="notice-action" onClick={() => act(n)}>
+              {n.action.label}
+            </button>
+          )}
           <button
             type="button"
             className="notice-close"

@@ -2,8 +2,7 @@ import { useEffect } from 'react';
 import { useAppStore, useController, useDocumentApi } from '../AppContext';
 import { toolRegistry } from '../../state/tools/registry';
 import { OPEN_INPUT_ID } from './FileButtons';
-import { downloadText } from './download';
-import { sketchFileText } from '../../state/files';
+import { saveSketchFile } from './saveFile';
 
 /** Keys typed into a text field belong to the field; a focused checkbox or button does not take letters. */
 function typingInField(target: EventTarget | null): boolean {
@@ -37,7 +36,7 @@ export function useShortcuts(): void {
       }
       if (mod && key === 's') {
         e.preventDefault();
-        downloadText('sketch.json', sketchFileText(store, api), 'application/json');
+        saveSketchFile(store, api);
         return;
       }
       if (mod && key === 'o') {
