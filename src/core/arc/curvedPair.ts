@@ -131,7 +131,10 @@ export class CurvedPairIntegrator {
           dy = P[2 * b + 1] - ay;
         if (dx !== 0 || dy !== 0) B.addLine(em, ax, ay, dx, dy);
       }
+      // The target arc's own ends lie on its circle: their tangent lines are added below.
+      const ownEnd = tg.isArc && a >= nP - 2 && tg.span < 2 * Math.PI;
       for (const c of circles) {
+        if (ownEnd && c === tg.circle) continue;
         if (!touchAngles(ax, ay, A.cx[c], A.cy[c], A.r[c], this.touch)) continue;
         for (let s = 0; s < 2; s++) {
           const tx = A.cx[c] + A.r[c] * Math.cos(this.touch[s]) - ax,
@@ -144,6 +147,11 @@ export class CurvedPairIntegrator {
         B.addAngle(em, this.touch[0]);
         B.addAngle(em, this.touch[1]);
       }
+    }
+    if (tg.isArc && tg.solid && tg.span < 2 * Math.PI) {
+      // Where p lies on the tangent at an end of the target arc, the end takes over from the tangent.
+      B.addLine(em, tg.ax, tg.ay, -Math.sin(tg.start), Math.cos(tg.start));
+      B.addLine(em, tg.bx, tg.by, -Math.sin(tg.start + tg.span), Math.cos(tg.start + tg.span));
     }
     const L = this.lines;
     for (let x = 0; x < circles.length; x++) {
