@@ -1,8 +1,9 @@
 // The report's heat exchange: the net heat per surface, the exchange matrix and
 // the energy balance, printed as `npm run cli -- exchange FILE` prints them, and
-// flux profiles along split walls. The per-surface table is a list of columns,
-// so a new result (say, convection) is one more entry in NET_HEAT_COLUMNS.
-import type { ExchangeResult, SurfaceCondition } from '../../core/exchange';
+// flux profiles along split walls. The per-surface table is a list of columns
+// headed as the command line heads them, so a new result (say, convection) is
+// one more entry in NET_HEAT_COLUMNS.
+import type { SketchExchangeOutcome } from '../exchangeInput';
 import { conditionInTable, SURROUNDINGS_LABEL, seesSurroundings } from '../exchange/labels';
 import type { Units } from '../units';
 import { escapeMarkup } from './escape';
@@ -11,13 +12,16 @@ import type { WallProfile } from './profiles';
 import { htmlTable, num, rowHead, text, type Cell } from './table';
 import { SIGN_NOTE } from './wording';
 
+/** What solveSketchExchange gives (so the tables follow the solver's result as it grows). */
+type Solved = Extract<SketchExchangeOutcome, { ok: true }>;
+
 export interface SolvedExchange {
   names: ReadonlyArray<string>;
   units: Units;
   /** Surface lengths in `units`. */
   lengths: ArrayLike<number>;
-  conditions: ReadonlyArray<SurfaceCondition>;
-  result: ExchangeResult;
+  conditions: Solved['input']['conditions'];
+  result: Solved['result'];
 }
 
 export interface SurfaceColumn {
@@ -35,8 +39,8 @@ const n6 = (x: number) => num(sig6(x), x);
 
 /** The per-surface columns, in the command line's order. */
 export const NET_HEAT_COLUMNS: SurfaceColumn[] = [
-  { head: (ex) => `length (${ex.units})`, cell: (ex, i) => n6(ex.lengths[i]), surroundings: blank },
-  { head: () => 'ε', cell: (ex, i) => n6(ex.result.emissivity[i]), surroundings: () => num('1', 1) },
+  { head: () => 'length', cell: (ex, i) => n6(ex.lengths[i]), surroundings: blank },
+  { head: () => 'emissivity', cell: (ex, i) => n6(ex.result.emissivity[i]), surroundings: () => num('1', 1) },
   {
     head: () => 'condition',
     cell: (ex, i) => text(conditionInTable(ex.conditions[i].kind)),
@@ -72,6 +76,7 @@ function netHeatTable(ex: SolvedExchange): string {
   }
   return htmlTable({
     name: 'net-heat',
+    caption: `Per surface; lengths in ${ex.units}.`,
     head: [text('surface'), ...columns.map((c) => text(c.head(ex)))],
     rows,
     rowKeys: keys,

@@ -46,8 +46,13 @@ export interface HeatColours {
  * degrees Celsius with `celsius`) over its range. A spread below rounding is
  * one temperature: every surface at the centre.
  */
-export function heatColours(quantity: HeatQuantity, result: ExchangeResult, celsius = false): HeatColours {
+export function heatColours(
+  quantity: HeatQuantity,
+  result: Pick<ExchangeResult, 'surfaceCount' | 'netFlux' | 'temperature'>,
+  celsius = false,
+): HeatColours {
   const n = result.surfaceCount;
+  if (n === 0) return { title: '', low: 0, centre: 0, high: 0, colours: [] };
   if (quantity === 'netFlux') {
     const q = result.netFlux;
     let largest = 0;

@@ -5,8 +5,11 @@ import { solvedCsv } from '../../state/exchange/export';
 import { downloadText } from '../chrome/download';
 import { SAFETY_TEXT } from '../chrome/SafetyNote';
 import { fmtResidual } from '../matrix/format';
+import { GAS_CAUTION, WALL_TUBE_CAUTION } from '../../state/exchange/labels';
+import { exchangeRows } from './rows';
 import { ExchangeStatus } from './ExchangeStatus';
 import { ExchangeTable } from './ExchangeTable';
+import { ExchangeDetails } from './ExchangeDetails';
 import { NetHeatChart } from './NetHeatChart';
 import { useSurfaceChoice } from './useSurfaceChoice';
 
@@ -44,10 +47,11 @@ export function ExchangeResults() {
       {ex.kind === 'solved' && (
         <>
           <ExchangeTable ex={ex} current={current} onChoose={choose} />
+          <BalanceCautions ex={ex} />
           <div className="matrix-notes">
             <span
               className={ex.result.energyBalance > BALANCE_TOLERANCE ? 'warn' : undefined}
-              title="|sum of the net heats, surroundings included| relative to the largest; rounding is about 1e-14"
+              title="|sum of the heat supplied to every surface, the gas and the surroundings| relative to the radiation leaving all surfaces; rounding is about 1e-14"
             >
               energy balance residual: {fmtResidual(ex.result.energyBalance)}
               {ex.result.energyBalance > BALANCE_TOLERANCE ? ' — above rounding' : ''}
@@ -67,9 +71,37 @@ export function ExchangeResults() {
           >
             Download net heat CSV
           </button>
+          <ExchangeDetails ex={ex} />
           <NetHeatChart ex={ex} />
         </>
       )}
     </section>
+  );
+}
+
+/** Burn warnings beside hot casings, and the cautions on the gas and on walls and tubes when they are modelled. */
+function BalanceCautions({ ex }: { ex: Extract<ReturnType<typeof selectExchange>, { kind: 'solved' }> }) {
+  const burns = exchangeRows(ex).flatMap((row) => (row.burn ? [row.burn] : []));
+  const kinds = new Set(ex.conditions.map((c) => c.kind));
+  return (
+    <>
+      {burns.length > 0 && (
+        <ul className="exchange-burns warn" role="alert" aria-label="Burn hazards">
+          {burns.map((b) => (
+            <li key={b}>{b}</li>
+          ))}
+        </ul>
+      )}
+      {ex.result.gasTemperature !== undefined && (
+        <p className="hint" role="note" aria-label="Caution about the gas">
+          {GAS_CAUTION}
+        </p>
+      )}
+      {(kinds.has('wall') || kinds.has('tube')) && (
+        <p className="hint" role="note" aria-label="Caution about walls and tubes">
+          {WALL_TUBE_CAUTION}
+        </p>
+      )}
+    </>
   );
 }

@@ -3,6 +3,7 @@ import { SelectionPanel } from './SelectionPanel';
 import { SurfacesPanel } from './SurfacesPanel';
 import { SketchSettings } from './SketchSettings';
 import { ExchangeSlot } from '../exchange/ExchangeSlot';
+import { ReportPanel } from '../report/ReportPanel';
 
 const TABS = [
   {
@@ -19,6 +20,7 @@ const TABS = [
     title: 'Surface properties and net heat (gray-diffuse)',
     Panel: ExchangeSlot,
   },
+  { id: 'report', label: 'Report', title: 'Printable report, and the picture as SVG or PNG', Panel: ReportPanel },
 ] as const;
 
 export function Inspector() {

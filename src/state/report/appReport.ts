@@ -1,0 +1,78 @@
+// The report and pictures from the app: the same HTML builder and SVG picture as
+// the command line (src/document/report), fed with what is on screen.
+import { reportFileName, reportHtml, sketchSvg, heatColours, type SketchPicture } from '../../document/report';
+import { edgeSurfaceNames } from '../../document/surfaceIndex';
+import type { DocumentApi } from '../documentApi';
+import { shownResult } from '../results/derive';
+import type { AppState, AppStore } from '../store';
+
+/** The name Save gives the sketch file; the report is named after it. */
+export const SKETCH_FILE_NAME = 'sketch.json';
+
+export type AppReport = { ok: true; html: string; fileName: string } | { ok: false; message: string };
+
+/** Lowercase hex SHA-256 of a text's UTF-8 bytes (Web Crypto). */
+export async function sha256Hex(text: string): Promise<string> {
+  const digest = await crypto.subtle.digest('SHA-256', new TextEncoder().encode(text));
+  return Array.from(new Uint8Array(digest), (b) => b.toString(16).padStart(2, '0')).join('');
+}
+
+/**
+ * The report of the sketch on screen, or why there is none: results must be for
+ * the current sketch (not a step behind, no problems), as the command line would
+ * compute them from the saved file. The hash is of the file Save would write.
+ */
+export async function appReport(store: AppStore, api: DocumentApi, now = new Date()): Promise<AppReport> {
+  const s = store.getState();
+  const shown = shownResult(s.viewFactors);
+  if (!shown) return { ok: false, message: 'No results yet: draw an enclosure or solids, then make the report.' };
+  if (shown.stale)
+    return {
+      ok: false,
+      message:
+        'The results are not for the sketch as it is now: fix the problems or wait for the results, then make the report.',
+    };
+  const text = api.serialize(s.doc);
+  const html = reportHtml({
+    source: {
+      fileName: SKETCH_FILE_NAME,
+      sha256: await sha256Hex(text),
+      hashOf: 'the sketch file as Save writes it',
+      date: now,
+    },
+    sketch: shown.sketch,
+    names: shown.names,
+    factors: shown.result,
+  });
+  return { ok: true, html, fileName: reportFileName(SKETCH_FILE_NAME) };
+}
+
+export interface PictureOptions {
+  names: boolean;
+  dimensions: boolean;
+  /** Colour by the canvas's heat colouring (net flux when it is off). */
+  heat: boolean;
+}
+
+/** Whether heat colours can be drawn: there is a solved exchange. */
+export const canColourHeat = (s: AppState): boolean => s.exchange.kind === 'solved';
+
+/** The current sketch as SVG text: names, dimensions and heat colours as asked. */
+export function appPictureSvg(s: AppState, options: PictureOptions): string {
+  const doc = s.doc;
+  const picture: SketchPicture = {
+    shapes: doc.shapes.map((shape) => ({ kind: shape.kind, points: shape.points, surface: edgeSurfaceNames(shape) })),
+    units: doc.units,
+    names: options.names,
+    dimensions: options.dimensions,
+    title: 'Cross-section',
+    idPrefix: 'picture',
+  };
+  const ex = s.exchange;
+  if (options.heat && ex.kind === 'solved' && ex.names.length > 0) {
+    const quantity = s.heatColouring === 'temperature' ? 'temperature' : 'netFlux';
+    const h = heatColours(quantity, ex.result, s.temperatureUnit === 'C');
+    picture.heat = { colours: new Map(ex.names.map((n, i) => [n, h.colours[i]])), legend: h };
+  }
+  return sketchSvg(picture);
+}
