@@ -7,6 +7,7 @@ import { runExchange } from './exchangeCommand';
 import { runFactors } from './factorsCommand';
 import { runReport } from './reportCommand';
 import { nodeIO, type CliIO } from './io';
+import { runSensitivity } from './sensitivityCommand';
 import { runSolveFor } from './solveForCommand';
 import { runSweepCommand } from './sweepCommand';
 
@@ -20,19 +21,21 @@ commands:
   sweep FILE --vary S.P --from A --to B --steps N   the exchange at N values of one parameter
   solve-for FILE --vary S.P --from A --to B --target S.Q=V
                                                     the parameter value that meets a target
+  sensitivity FILE [--json | --csv]                 change of net heat per emissivity and temperature
   report FILE [--out PATH]                          one self-contained HTML report (print it to PDF)
 
 Run a command with --help for its options. FILE '-' reads standard input.
 `;
 
 const SHORT_USAGE =
-  'usage: npm run cli -- <command> FILE [options]   (commands: factors, exchange, sweep, solve-for, report; --help for more)';
+  'usage: npm run cli -- <command> FILE [options]   (commands: factors, exchange, sweep, solve-for, sensitivity, report; --help for more)';
 
 const commands: Record<string, (args: string[], io: CliIO) => number> = {
   factors: runFactors,
   exchange: runExchange,
   sweep: runSweepCommand,
   'solve-for': runSolveFor,
+  sensitivity: runSensitivity,
   report: runReport,
 };
 

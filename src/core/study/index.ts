@@ -3,4 +3,10 @@
 export { evenlySpaced } from './scan';
 export { brentRoot, type RootOutcome, type RootTolerance } from './brent';
 export { ROOT_RELATIVE_TOLERANCE, rootsByScan, type RootsOutcome } from './roots';
-export { netHeatSensitivity, type SensitivityOutcome, type SensitivityParameter } from './sensitivity';
+export {
+  netHeatSensitivity,
+  type SensitivityBase,
+  type SensitivityInput,
+  type SensitivityOutcome,
+  type SensitivityParameter,
+} from './sensitivity';

@@ -13,14 +13,31 @@
 //   q'_i = A_i q_i  (fixed) for flux and adiabatic rows, whose derivative is zero.
 // Emissivity e_k of a temperature surface: row k only, d(b_k - sum_j M_kj J_j)/de_k = E_k - G_k.
 // Temperature T_k: dE_k/dT_k = 4 sigma T_k^3 in row k. Surroundings T_s: dE_s = 4 sigma T_s^3.
-import {
-  DenseLuSolver,
-  LinearSolveError,
-  STEFAN_BOLTZMANN,
-  emissivePower,
-  type ExchangeInput,
-  type ExchangeResult,
-} from '../exchange';
+import { DenseLuSolver, LinearSolveError, STEFAN_BOLTZMANN, emissivePower, type ExchangeResult } from '../exchange';
+
+/** What the derivatives need of the solver's input (an ExchangeInput or the whole balance's input). */
+export interface SensitivityInput {
+  /** n x n row-major, row = from (dimensionless). */
+  viewFactors: ArrayLike<number>;
+  /** Length of each surface, m (area per metre of depth). */
+  area: ArrayLike<number>;
+  /** Condition kind per surface: only 'temperature', 'heatFlux', 'adiabatic' and 'opening' are linear. */
+  conditions: ReadonlyArray<{ readonly kind: string }>;
+  /** Film coefficients, W/(m^2 K): above 0 on a surface whose temperature is solved makes the system non-linear. */
+  convectionCoefficient?: ArrayLike<number>;
+}
+
+/** What the derivatives need of the solved exchange (SI units, as ExchangeResult). */
+export type SensitivityBase = Pick<
+  ExchangeResult,
+  | 'surfaceCount'
+  | 'emissivity'
+  | 'surroundingsViewFactor'
+  | 'irradiation'
+  | 'radiosity'
+  | 'surroundingsTemperature'
+  | 'temperature'
+>;
 
 /** What a row of the sensitivity table is taken with respect to. */
 export type SensitivityParameter =
@@ -45,7 +62,12 @@ export type SensitivityOutcome =
       surroundingsNetHeat: Float64Array;
     }
   /** The radiosity equations could not be factored (the solve that gave `result` would have failed too). */
-  | { ok: false; code: 'singular' };
+  | { ok: false; code: 'singular' }
+  /**
+   * `surface` has a condition other than temperature, heat flux, adiabatic or
+   * opening, or convection where its temperature is solved: the equations are not linear.
+   */
+  | { ok: false; code: 'unsupported-condition'; surface: number };
 
 /**
  * Derivatives of every surface's net heat (W per metre of depth) with respect to
@@ -54,13 +76,19 @@ export type SensitivityOutcome =
  * surroundings temperature when the sketch sees the surroundings (per K).
  * `input` and `result` are one solved exchange (solveExchange(input) gave result).
  */
-export function netHeatSensitivity(input: ExchangeInput, result: ExchangeResult): SensitivityOutcome {
+export function netHeatSensitivity(input: SensitivityInput, result: SensitivityBase): SensitivityOutcome {
   const n = result.surfaceCount;
   const F = input.viewFactors;
   const { emissivity: eps, surroundingsViewFactor: Fs, irradiation: G, radiosity: J } = result;
   const conditions = input.conditions;
   const area = input.area;
   const Ts = result.surroundingsTemperature;
+  const linear: readonly string[] = ['temperature', 'heatFlux', 'adiabatic', 'opening'];
+  const h = input.convectionCoefficient;
+  const unsupported = conditions.findIndex(
+    (c, i) => !linear.includes(c.kind) || (c.kind !== 'temperature' && h !== undefined && h[i] > 0),
+  );
+  if (unsupported >= 0) return { ok: false, code: 'unsupported-condition', surface: unsupported };
   const weight = (i: number) => {
     const kind = conditions[i].kind;
     return kind === 'temperature' ? 1 - eps[i] : kind === 'opening' ? 0 : 1;
@@ -88,7 +116,11 @@ export function netHeatSensitivity(input: ExchangeInput, result: ExchangeResult)
 
   const emissive = (i: number) => {
     const c = conditions[i];
-    return c.kind === 'temperature' ? emissivePower(c.temperature) : c.kind === 'opening' ? emissivePower(Ts!) : J[i];
+    return c.kind === 'temperature'
+      ? emissivePower(result.temperature[i])
+      : c.kind === 'opening'
+        ? emissivePower(Ts!)
+        : J[i];
   };
   const netHeat: Float64Array[] = [];
   const surroundingsNetHeat = new Float64Array(parameters.length);
@@ -100,7 +132,7 @@ export function netHeatSensitivity(input: ExchangeInput, result: ExchangeResult)
     if (p.kind === 'emissivity') {
       if (conditions[p.surface].kind === 'temperature') rhs[p.surface] = emissive(p.surface) - G[p.surface];
     } else if (p.kind === 'temperature') {
-      const T = (conditions[p.surface] as { temperature: number }).temperature;
+      const T = result.temperature[p.surface]; // as given, for a surface held at a temperature
       dE[p.surface] = 4 * STEFAN_BOLTZMANN * T ** 3;
       rhs[p.surface] = eps[p.surface] * dE[p.surface];
     } else {

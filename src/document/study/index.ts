@@ -21,3 +21,11 @@ export { editedSketch, studyRunner, type StudyRun, type StudyRunOutcome } from '
 export { MAX_STUDY_STEPS, rangeProblem, runSweep, type SweepOutcome } from './sweep';
 export { DEFAULT_SCAN_STEPS, solveForTarget, targetQuantity, type SolveForOutcome } from './solveFor';
 export { sweepCsv, sweepRows } from './tables';
+export { sensitivityTable, type SensitivityRow, type SensitivityTableOutcome } from './sensitivity';
+export {
+  MAX_RANGES,
+  emissivityBounds,
+  parseEmissivityRange,
+  type EmissivityBounds,
+  type EmissivityRange,
+} from './bounds';

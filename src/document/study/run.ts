@@ -3,7 +3,6 @@
 // and the object `exchange --json` prints for that file. Property and settings
 // studies keep the view factors of the first case (the geometry is the same);
 // position studies compute them again for every value.
-import type { ExchangeResult, SurfaceCondition } from '../../core/exchange';
 import type { ViewFactorResult } from '../../core/scene';
 import { computeViewFactors } from '../../core/viewFactors';
 import { solveSketchExchange } from '../exchangeInput';
@@ -15,14 +14,16 @@ import { toScene } from '../toScene';
 import { withParameterValue } from './apply';
 import { describeParameter, parameterUnit, withUnit, type StudyParameter } from './parameter';
 
+type Solved = Extract<ReturnType<typeof solveSketchExchange>, { ok: true }>;
+
 /** One solved case: the checked edited sketch, its surfaces in matrix order, view factors and exchange (SI). */
 export interface StudyRun {
   value: number;
   sketch: Sketch;
   names: string[];
   factors: ViewFactorResult;
-  result: ExchangeResult;
-  conditions: ReadonlyArray<SurfaceCondition>;
+  result: Solved['result'];
+  conditions: Solved['input']['conditions'];
   /** Exactly what `exchange --json` prints for the edited file. */
   json: Record<string, unknown>;
 }
