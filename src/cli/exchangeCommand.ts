@@ -1,16 +1,26 @@
-// `exchange FILE [--json | --csv] [--depth METRES]`: gray-diffuse radiation
-// exchange between the named surfaces of a sketch file, per metre of depth.
-// Units: lengths in the file's units; temperature K; net heat W per metre of
+// `exchange FILE [--json | --csv] [--depth METRES]`: the surface heat balance
+// of a sketch file (gray-diffuse radiation, convection to a transparent gas,
+// walls, tubes, linked plates), per metre of depth.
+// Units: lengths in the file's units; temperature K; heat W per metre of
 // depth; net flux and radiosity W/m^2; totals W. Net heat and net flux are
 // positive when a surface gives off more radiation than it absorbs.
 // A surface without properties gets emissivity 0.9 and is adiabatic
 // (reradiating), see src/core/exchange/setup.ts; the sketch-to-solver mapping
 // and the wording of failures are shared with the app (src/document/exchangeInput.ts).
-import type { ExchangeResult, SurfaceCondition } from '../core/exchange';
+import type { BalanceCondition, BalanceResult } from '../core/balance';
 import type { ViewFactorResult } from '../core/scene';
 import { computeViewFactors } from '../core/viewFactors';
 import { toScene, type Sketch } from '../document';
-import { SURROUNDINGS_LABEL, conditionInTable, exchangeCsv, seesSurroundings } from '../document/exchangeCsv';
+import {
+  GAS_LABEL,
+  SURROUNDINGS_LABEL,
+  conditionInTable,
+  exchangeCsv,
+  hasGas,
+  layerTemperaturesCell,
+  seesSurroundings,
+} from '../document/exchangeCsv';
+import { GAS_CAUTION, WALL_TUBE_CAUTION, burnWarning } from '../document/exchange/cautions';
 import { solveSketchExchange } from '../document/exchangeInput';
 import { exchangeJson } from '../document/exchangeJson';
 import type { CliIO } from './io';
@@ -24,21 +34,26 @@ export { exchangeJson };
 const usageError = (io: CliIO, problem: string) => reportUsage(io, 'exchange', EXCHANGE_USAGE, problem);
 
 const CAUTION =
-  'Gray-diffuse radiation only: no convection or absorbing gas unless modelled. Results support, not replace, local codes and licensed engineering practice.';
+  'Gray-diffuse radiation; convection only where a coefficient is given, and no absorbing gas. Results support, not replace, local codes and licensed engineering practice.';
 
 const EXCHANGE_HELP = `${EXCHANGE_USAGE}
 
-Gray-diffuse radiation exchange (net-radiation method) between the named
-surfaces of a sketch file, per metre of depth.
+The surface heat balance of a sketch file, per metre of depth: gray-diffuse
+radiation (net-radiation method) between the named surfaces, convection to
+the gas, and what lies behind each surface (held temperature, heat flux,
+adiabatic, opening, wall, tube, linked plate).
   --json            one JSON object: surfaces (name, length, emissivity,
-                    temperature, netHeat, netFlux, radiosity), exchange
-                    (net heat from row to column), energyBalance
+                    temperature, netHeat, netFlux, radiosity, convectionHeat,
+                    suppliedHeat; walls: layerTemperatures,
+                    coldFaceTemperature; tubes: innerTemperature), exchange
+                    (net heat from row to column), gas, energyBalance
   --csv             one row per surface
   --depth METRES    length of the long dimension; adds totals in W
                     (default: the file's settings.depth, if any)
-Units: length in the file's units, temperature K, netHeat W per metre of
+Units: length in the file's units, temperature K, heat W per metre of
 depth, netFlux and radiosity W/m^2, totals W. netHeat > 0: the surface gives
-off more radiation than it absorbs. A surface with no properties has
+off more radiation than it absorbs; suppliedHeat = netHeat + convectionHeat,
+the heat supplied from behind. A surface with no properties has
 emissivity 0.9 and is adiabatic. Open sketches and openings need
 settings.surroundingsTemperature (K). FILE '-' reads standard input.
 ${CAUTION}
@@ -101,8 +116,8 @@ interface Report {
   sketch: Sketch;
   names: string[];
   factors: ViewFactorResult;
-  result: ExchangeResult;
-  conditions: ReadonlyArray<SurfaceCondition>;
+  result: BalanceResult;
+  conditions: ReadonlyArray<BalanceCondition>;
 }
 
 function exchangeTable({ file, sketch, names, factors, result: r, conditions }: Report): string {
@@ -124,8 +139,22 @@ function exchangeTable({ file, sketch, names, factors, result: r, conditions }: 
     'net heat (W/m)',
     'net flux (W/m^2)',
     'radiosity (W/m^2)',
+    'convection (W/m)',
+    'supplied (W/m)',
   ];
+  const walls = conditions.some((c) => c.kind === 'wall');
+  const tubes = conditions.some((c) => c.kind === 'tube');
+  if (walls) head.push('cold face (K)', 'layers (K)');
+  if (tubes) head.push('inner (K)');
   if (withDepth) head.push(`total (W) over ${fmt(r.depth!)} m`);
+  const extras = (i: number | null): string[] => [
+    ...(walls
+      ? i !== null && conditions[i].kind === 'wall'
+        ? [r.coldFaceTemperature[i].toFixed(2), layerTemperaturesCell(r.layerTemperatures[i])]
+        : ['', '']
+      : []),
+    ...(tubes ? [i !== null && conditions[i].kind === 'tube' ? r.innerTemperature[i].toFixed(2) : ''] : []),
+  ];
   const body: string[][] = names.map((_, i) => {
     const row = [
       shown[i],
@@ -136,6 +165,9 @@ function exchangeTable({ file, sketch, names, factors, result: r, conditions }: 
       fmt(r.netHeat[i]),
       fmt(r.netFlux[i]),
       fmt(r.radiosity[i]),
+      fmt(r.convectionHeat[i]),
+      fmt(r.suppliedHeat[i]),
+      ...extras(i),
     ];
     if (withDepth) row.push(fmt(r.netHeatTotal![i]));
     return row;
@@ -150,8 +182,17 @@ function exchangeTable({ file, sketch, names, factors, result: r, conditions }: 
       fmt(r.surroundingsNetHeat),
       '',
       '',
+      '0',
+      fmt(r.surroundingsNetHeat),
+      ...extras(null),
     ];
     if (withDepth) row.push(fmt(r.surroundingsNetHeatTotal!));
+    body.push(row);
+  }
+  if (hasGas(r)) {
+    const row = [GAS_LABEL.name, '', '', GAS_LABEL.condition, r.gasTemperature!.toFixed(2), '', '', ''];
+    row.push(fmt(r.gasConvectionHeat), fmt(r.gasConvectionHeat), ...extras(null));
+    if (withDepth) row.push('');
     body.push(row);
   }
   lines.push(...columns([head, ...body]));
@@ -165,10 +206,16 @@ function exchangeTable({ file, sketch, names, factors, result: r, conditions }: 
     return row;
   });
   lines.push(...columns([matrixHead, ...matrixRows]));
+  const burns = names.flatMap((name, i) =>
+    conditions[i].kind === 'wall' ? (burnWarning(name, r.coldFaceTemperature[i]) ?? []) : [],
+  );
   lines.push(
     '',
-    `Energy balance: |sum of net heat| / largest = ${r.energyBalance.toExponential(1)}`,
-    'Net heat > 0: the surface gives off more radiation than it absorbs; < 0: it takes heat up.',
+    `Energy balance: |sum of supplied heat, gas and surroundings| / sum of radiation leaving the surfaces = ${r.energyBalance.toExponential(1)}`,
+    'Net heat > 0: the surface gives off more radiation than it absorbs; < 0: it takes heat up. Supplied = net heat + convection: the heat from behind.',
+    ...burns.map((b) => `Warning: ${b}.`),
+    ...(hasGas(r) ? [GAS_CAUTION] : []),
+    ...(walls || tubes ? [WALL_TUBE_CAUTION] : []),
     CAUTION,
   );
   return `${lines.join('\n')}\n`;

@@ -3,8 +3,15 @@
 import { CURRENT_VERSION } from './schema';
 import { describeValue } from './labels';
 
-/** migrations[v] turns a version-v document into a version-(v+1) one. None yet: version 1 is the first. */
-const migrations: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {};
+/**
+ * migrations[v] turns a version-v document into a version-(v+1) one (the
+ * caller sets the new version number).
+ * 1 -> 2: version 2 only adds fields (the surface balance's), so a version-1
+ * file means the same unchanged.
+ */
+const migrations: Record<number, (doc: Record<string, unknown>) => Record<string, unknown>> = {
+  1: (doc) => doc,
+};
 
 export type MigrateResult = { ok: true; doc: Record<string, unknown>; from: number } | { ok: false; error: string };
 

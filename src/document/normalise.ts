@@ -1,12 +1,19 @@
 // From a schema-valid version-1 file to the form the program works with: one
 // surface name per edge, zero-length edges removed (with a warning), numbers
 // within the documented limits, one thermal condition per surface.
-import { conditionOf } from './exchange/conditions';
-import { moreThanOneConditionMessage } from './exchange/messages';
+import { conditionOf, surfaceRuleProblems } from './exchange/conditions';
+import { moreThanOneConditionMessage, surfaceRuleMessage } from './exchange/messages';
 import { formatNumber, formatPoint, quoteName, shapeLabel } from './labels';
 import { MAX_COORDINATE, MIN_EDGE_LENGTH, MIN_RELATIVE_EDGE_LENGTH } from './limits';
 import { problemAt, type SketchProblem } from './problems';
-import type { Point, Shape, Sketch, SketchFileV1, SurfaceProperties } from './schema';
+import {
+  CURRENT_VERSION,
+  type Point,
+  type Shape,
+  type Sketch,
+  type SketchFileV1,
+  type SurfaceProperties,
+} from './schema';
 
 export interface Normalised {
   sketch: Sketch;
@@ -100,8 +107,17 @@ export function normalise(file: SketchFileV1): Normalised {
     }
     if (!used.has(name)) warnings.push(`surface ${quoteName(name)} has properties but no edge uses that name`);
   }
+  for (const p of surfaceRuleProblems(surfaces, file.settings, used)) {
+    errors.push(problemAt('conditions', surfaceRuleMessage(p), { edges: edgesNamed(shapes, fileIndex, p.surface) }));
+  }
 
-  const sketch: Sketch = { version: 1, units: file.units, shapes, surfaces, settings: { ...(file.settings ?? {}) } };
+  const sketch: Sketch = {
+    version: CURRENT_VERSION,
+    units: file.units,
+    shapes,
+    surfaces,
+    settings: { ...(file.settings ?? {}) },
+  };
   return { sketch, fileIndex, filePointCount, errors, warnings };
 }
 

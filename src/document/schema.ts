@@ -1,5 +1,7 @@
-// The sketch file, version 1, as a zod schema; the TypeScript types are
-// derived from it. Every node carries its rule as a short message, which the
+// The sketch file, version 2, as a zod schema; the TypeScript types are
+// derived from it. Version 2 is version 1 plus the surface balance's fields
+// (wall, tube, linked, convectionCoefficient, settings.gasTemperature); older
+// files are migrated (migrate.ts) before this schema reads them. Every node carries its rule as a short message, which the
 // reader prefixes with where it applies ("shape 2 (solid 'block'): point 4 x
 // must be a finite number").
 import { z } from 'zod';
@@ -7,7 +9,7 @@ import { MAX_NAME_LENGTH } from './limits';
 import { UNITS } from './units';
 
 /** The newest file version this program reads and the one it writes. */
-export const CURRENT_VERSION = 1;
+export const CURRENT_VERSION = 2;
 
 const coordinate = z.number({ error: 'must be a finite number' });
 
@@ -33,7 +35,68 @@ export const shapeSchema = z.object(
   { error: 'must be an object with kind, points and surface' },
 );
 
-/** Radiative properties and the one thermal condition of a named surface (used by heat exchange). */
+const kelvin = z.number({ error: 'must be a number of kelvin' }).gt(0, { error: 'must be above 0 K' });
+const positive = (unit: string) =>
+  z.number({ error: `must be a number of ${unit}` }).gt(0, { error: 'must be greater than 0' });
+
+/** One layer of a lined wall; lengths in metres whatever the sketch's units. */
+export const wallLayerSchema = z.object(
+  {
+    /** Thickness, m. */
+    thickness: positive('metres'),
+    /** Conductivity, W/(m·K), constant (take it at the layer's mean temperature). */
+    conductivity: positive('W/(m·K)'),
+  },
+  { error: 'must be an object with thickness and conductivity' },
+);
+
+/** A plane lining behind the surface, to outside air. */
+export const wallSchema = z.object(
+  {
+    /** Layers from the hot face outwards. */
+    layers: z
+      .array(wallLayerSchema, { error: 'must be a list of layers [{thickness, conductivity}, ...]' })
+      .min(1, { error: 'must list at least one layer' }),
+    /** Outside air temperature, K. */
+    outsideTemperature: kelvin,
+    /** Outside coefficient, W/(m²·K): convection and casing radiation combined, or convection alone with outsideEmissivity. */
+    outsideCoefficient: positive('W/(m²·K)'),
+    /** Casing emissivity; when given the casing also radiates to outsideTemperature. */
+    outsideEmissivity: z
+      .number({ error: 'must be a number in (0, 1]' })
+      .gt(0, { error: 'must be greater than 0 (and at most 1)' })
+      .lte(1, { error: 'must be at most 1' })
+      .optional(),
+  },
+  { error: 'must be an object with layers, outsideTemperature and outsideCoefficient' },
+);
+
+/** A tube carrying a fluid behind the surface; diameters in metres whatever the sketch's units. */
+export const tubeSchema = z
+  .object(
+    {
+      /** Fluid temperature, K. */
+      fluidTemperature: kelvin,
+      /** Inside film coefficient, W/(m²·K). */
+      insideCoefficient: positive('W/(m²·K)'),
+      /** Outer diameter, m. */
+      outerDiameter: positive('metres'),
+      /** Inner diameter, m, below the outer. */
+      innerDiameter: positive('metres'),
+      /** Tube wall conductivity, W/(m·K). */
+      wallConductivity: positive('W/(m·K)'),
+    },
+    {
+      error:
+        'must be an object with fluidTemperature, insideCoefficient, outerDiameter, innerDiameter and wallConductivity',
+    },
+  )
+  .refine((t) => t.innerDiameter < t.outerDiameter, {
+    error: 'must be below outerDiameter',
+    path: ['innerDiameter'],
+  });
+
+/** Radiative properties, the one condition behind a named surface, and convection on its front (used by heat exchange). */
 export const surfacePropertiesSchema = z.object(
   {
     /** Hemispherical emissivity, dimensionless, in (0, 1]. */
@@ -42,14 +105,25 @@ export const surfacePropertiesSchema = z.object(
       .gt(0, { error: 'must be greater than 0 (and at most 1)' })
       .lte(1, { error: 'must be at most 1' })
       .optional(),
-    /** Imposed temperature, kelvin. */
-    temperature: z.number({ error: 'must be a number of kelvin' }).gt(0, { error: 'must be above 0 K' }).optional(),
-    /** Imposed net radiative flux, W/m^2, positive when heat leaves the surface by radiation. */
+    /** Held temperature, kelvin. */
+    temperature: kelvin.optional(),
+    /** Heat supplied from behind, W/m², > 0 when it enters from behind and leaves the front (with no convection: the net radiation leaving, as in version 1). */
     heatFlux: z.number({ error: 'must be a number of W/m^2' }).optional(),
-    /** Insulated, reradiating surface (net flux zero). */
+    /** Insulated: nothing passes through the back. */
     adiabatic: z.boolean({ error: 'must be true or false' }).optional(),
     /** An opening to the surroundings: black, at the surroundings temperature. */
     opening: z.boolean({ error: 'must be true or false' }).optional(),
+    /** A lined wall to outside air. */
+    wall: wallSchema.optional(),
+    /** A tube carrying a fluid. */
+    tube: tubeSchema.optional(),
+    /** The other face of the same thin plate (a surface name); that face gives no condition of its own. */
+    linked: surfaceNameSchema.optional(),
+    /** Film coefficient to the gas, W/(m²·K), >= 0; above 0 needs settings.gasTemperature. */
+    convectionCoefficient: z
+      .number({ error: 'must be a number of W/(m²·K)' })
+      .gte(0, { error: 'must be 0 or more' })
+      .optional(),
   },
   { error: 'must be an object of properties (emissivity, temperature, ...)' },
 );
@@ -61,14 +135,16 @@ export const settingsSchema = z.object(
       .number({ error: 'must be a number of kelvin' })
       .gt(0, { error: 'must be above 0 K' })
       .optional(),
+    /** Temperature of the gas in the section, kelvin (transparent: it exchanges heat by convection only). */
+    gasTemperature: kelvin.optional(),
     /** Length of the long dimension (duct or furnace length), metres; turns per-metre results into totals. */
     depth: z.number({ error: 'must be a number of metres' }).gt(0, { error: 'must be greater than 0' }).optional(),
   },
   { error: 'must be an object' },
 );
 
-export const sketchFileSchemaV1 = z.object({
-  version: z.literal(1, { error: 'must be 1' }),
+export const sketchFileSchema = z.object({
+  version: z.literal(2, { error: 'must be 2' }),
   units: z.enum(UNITS, { error: `must be one of ${UNITS.join(', ')}` }),
   shapes: z.array(shapeSchema, { error: 'must be a list of shapes' }),
   surfaces: z
@@ -77,11 +153,21 @@ export const sketchFileSchemaV1 = z.object({
   settings: settingsSchema.optional(),
 });
 
-/** A version-1 file as written (surface may be one name or a list). */
-export type SketchFileV1 = z.infer<typeof sketchFileSchemaV1>;
+/** A file of the current version as written (surface may be one name or a list). */
+export type SketchFileV2 = z.infer<typeof sketchFileSchema>;
+/** Older name still imported elsewhere: the schema of the current version (2), which version-1 files migrate to. */
+export const sketchFileSchemaV1 = sketchFileSchema;
+/**
+ * A document as the app holds it and as files are written: version 2's
+ * fields, and version 1 or 2 (version 1 has a subset of the fields and means
+ * the same; `restore` brings it to 2, and the program writes 2).
+ */
+export type SketchFileV1 = Omit<SketchFileV2, 'version'> & { version: 1 | 2 };
 export type ShapeV1 = z.infer<typeof shapeSchema>;
 export type Point = z.infer<typeof pointSchema>;
 export type SurfaceProperties = z.infer<typeof surfacePropertiesSchema>;
+export type WallProperties = z.infer<typeof wallSchema>;
+export type TubeProperties = z.infer<typeof tubeSchema>;
 export type SketchSettings = z.infer<typeof settingsSchema>;
 export type ShapeKind = ShapeV1['kind'];
 export type { Units } from './units';

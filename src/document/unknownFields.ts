@@ -4,8 +4,21 @@ import { quoteName, shapeLabel } from './labels';
 
 const TOP = ['version', 'units', 'shapes', 'surfaces', 'settings'];
 const SHAPE = ['kind', 'points', 'surface'];
-const SURFACE = ['emissivity', 'temperature', 'heatFlux', 'adiabatic', 'opening'];
-const SETTINGS = ['surroundingsTemperature', 'depth'];
+const SURFACE = [
+  'emissivity',
+  'temperature',
+  'heatFlux',
+  'adiabatic',
+  'opening',
+  'wall',
+  'tube',
+  'linked',
+  'convectionCoefficient',
+];
+const WALL = ['layers', 'outsideTemperature', 'outsideCoefficient', 'outsideEmissivity'];
+const LAYER = ['thickness', 'conductivity'];
+const TUBE = ['fluidTemperature', 'insideCoefficient', 'outerDiameter', 'innerDiameter', 'wallConductivity'];
+const SETTINGS = ['surroundingsTemperature', 'gasTemperature', 'depth'];
 
 /** Warnings for unknown fields of a document that passed the schema. */
 export function unknownFieldWarnings(doc: Record<string, unknown>): string[] {
@@ -22,6 +35,11 @@ export function unknownFieldWarnings(doc: Record<string, unknown>): string[] {
   (Array.isArray(doc.shapes) ? doc.shapes : []).forEach((shape, i) => note(shapeLabel(i, shape), shape, SHAPE));
   for (const [name, props] of Object.entries((doc.surfaces ?? {}) as Record<string, unknown>)) {
     note(`surface ${quoteName(name)}`, props, SURFACE);
+    const { wall, tube } = (props ?? {}) as { wall?: { layers?: unknown }; tube?: unknown };
+    note(`surface ${quoteName(name)} wall`, wall, WALL);
+    note(`surface ${quoteName(name)} tube`, tube, TUBE);
+    const layers = Array.isArray(wall?.layers) ? (wall.layers as unknown[]) : [];
+    layers.forEach((layer, k) => note(`surface ${quoteName(name)} wall layer ${k + 1}`, layer, LAYER));
   }
   note('settings', doc.settings, SETTINGS);
   return warnings;

@@ -44,10 +44,15 @@ function describePath(path: PropertyKey[], file: unknown): { subject: string; fi
     return { subject: shapeLabel(rest[0], shapes[rest[0]]), field: shapeField(rest.slice(1)) };
   }
   if (head === 'surfaces' && rest.length > 0) {
-    return { subject: `surface ${quoteName(String(rest[0]))}`, field: rest.slice(1).map(String).join(' ') };
+    return { subject: `surface ${quoteName(String(rest[0]))}`, field: fieldPath(rest.slice(1)) };
   }
   if (head === 'settings' && rest.length > 0) return { subject: 'settings', field: rest.map(String).join(' ') };
   return { subject: [head, ...rest].map(String).join(' '), field: '' };
+}
+
+/** A nested field as the file writes it, lists counted from 1: wall.layers[2].thickness. */
+function fieldPath(keys: PropertyKey[]): string {
+  return keys.map((k, i) => (typeof k === 'number' ? `[${k + 1}]` : `${i > 0 ? '.' : ''}${String(k)}`)).join('');
 }
 
 function shapeField(rest: PropertyKey[]): string {

@@ -14,7 +14,7 @@ function tube(x: number): Point[] {
 }
 
 export const demoSketch: SketchFile = {
-  version: 1,
+  version: 2,
   units: 'm',
   shapes: [
     {

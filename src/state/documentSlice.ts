@@ -10,7 +10,7 @@ export interface DocumentSlice {
   edit: (fn: (doc: SketchFile) => SketchFile) => void;
 }
 
-export const emptySketch: SketchFile = { version: 1, units: 'm', shapes: [] };
+export const emptySketch: SketchFile = { version: 2, units: 'm', shapes: [] };
 
 export const createDocumentSlice =
   (initial: SketchFile): StateCreator<AppState, [], [], DocumentSlice> =>

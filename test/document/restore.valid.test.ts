@@ -302,7 +302,7 @@ describe('serialize', () => {
   });
 
   it('writes an empty sketch that reads back', () => {
-    const empty: Sketch = { version: 1, units: 'm', shapes: [], surfaces: {}, settings: {} };
+    const empty: Sketch = { version: 2, units: 'm', shapes: [], surfaces: {}, settings: {} };
     expect(sketchOf(serialize(empty)).sketch).toEqual(empty);
   });
 });

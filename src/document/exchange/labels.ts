@@ -1,5 +1,6 @@
 // How heat-exchange results name conditions and the surroundings, the same
 // words in the command line's table and CSV and in the app's table.
+import type { BalanceResult } from '../../core/balance';
 import type { ExchangeResult } from '../../core/exchange';
 import type { ConditionKind } from './conditions';
 
@@ -9,11 +10,14 @@ export const CONDITION_LABEL: Readonly<Record<ConditionKind, string>> = {
   heatFlux: 'heat flux',
   adiabatic: 'adiabatic',
   opening: 'opening',
+  wall: 'wall',
+  tube: 'tube',
+  linked: 'linked plate',
 };
 
 /** The condition as results tables name it: "(T solved)" where the temperature is an answer, not an input. */
 export function conditionInTable(kind: ConditionKind): string {
-  return kind === 'adiabatic' || kind === 'heatFlux' ? `${CONDITION_LABEL[kind]} (T solved)` : CONDITION_LABEL[kind];
+  return kind === 'temperature' || kind === 'opening' ? CONDITION_LABEL[kind] : `${CONDITION_LABEL[kind]} (T solved)`;
 }
 
 /**
@@ -24,3 +28,9 @@ export const SURROUNDINGS_LABEL = { name: '(surroundings)', condition: 'black' }
 
 /** True when some surface sees the surroundings (an open sketch). */
 export const seesSurroundings = (r: ExchangeResult): boolean => r.surroundingsViewFactor.some((f) => f > 0);
+
+/** The row for the gas when it has a temperature: transparent, exchanging heat by convection only. */
+export const GAS_LABEL = { name: '(gas)', condition: 'transparent gas' } as const;
+
+/** True when the sketch sets a gas temperature. */
+export const hasGas = (r: BalanceResult): boolean => r.gasTemperature !== undefined;

@@ -5,7 +5,7 @@
 import type { ExchangeFailure } from '../../core/exchange';
 import { formatNumber, quoteName } from '../labels';
 import { balanceFailureMessage } from './balanceMessages';
-import type { ConditionKind } from './conditions';
+import type { ConditionKind, SurfaceRuleProblem } from './conditions';
 
 /** Two or more conditions on one surface (src/document/exchange/conditions.ts): `kinds` in file order. */
 export interface ConditionsFailure {
@@ -24,6 +24,26 @@ const NO_LEVEL_HINT =
 /** "give one condition, not temperature and heatFlux together" for a named surface. */
 export function moreThanOneConditionMessage(name: string, kinds: readonly ConditionKind[]): string {
   return `surface ${quoteName(name)}: give one condition, not ${kinds.join(' and ')} together`;
+}
+
+/** A rule between surfaces (links, convection and the gas) in words, naming the surface and the field. */
+export function surfaceRuleMessage(p: SurfaceRuleProblem): string {
+  const at = `surface ${quoteName(p.surface)}`;
+  const other = quoteName(p.other ?? '');
+  switch (p.code) {
+    case 'link-to-itself':
+      return `${at}: linked names the surface itself; name the other face of the plate`;
+    case 'link-to-unused-name':
+      return `${at}: linked names ${other}, which no edge uses; name the other face of the plate`;
+    case 'link-target-has-condition':
+      return `${at}: linked names ${other}, which gives a condition of its own; the other face of a plate gives none (only its emissivity and convectionCoefficient)`;
+    case 'linked-twice':
+      return `${at}: linked names ${other}, which another surface already links to; a plate has two faces`;
+    case 'convection-on-opening':
+      return `${at}: an opening takes no convectionCoefficient; remove it`;
+    case 'convection-without-gas':
+      return `${at}: convectionCoefficient above 0 needs a gas temperature; set settings.gasTemperature`;
+  }
 }
 
 /** The failure in words: what is wrong, where (surface names from `names`, in matrix order) and the number concerned. */

@@ -1,17 +1,18 @@
 // Document edits for heat exchange: a surface's emissivity and condition, and
 // the sketch settings. Pure functions for store.edit, so each is one undo step
 // and autosaves; an edit that changes nothing returns the same document (no step).
-// Units as in the file: temperatures K, heat flux W/m^2 (positive leaving), depth m.
+// Units as in the file: temperatures K, heat flux W/m^2 (supplied from behind),
+// lengths in walls and tubes m, coefficients W/(m^2 K), conductivities W/(m K), depth m.
 import type { SketchFile, SurfaceProps } from '../sketchFile';
 import { usedSurfaceNames } from '../edits/surfaceNames';
-import { conditionOf, conditionProps } from '../../document/exchange/conditions';
-import type { SurfaceCondition } from '../../document/exchangeInput';
+import { conditionCount as givenCount, conditionOf, conditionProps } from '../../document/exchange/conditions';
+import type { SketchCondition } from '../../document/exchange/conditions';
 
 /** The defaults for a surface with no properties (emissivity 0.9, adiabatic), as the solver applies them. */
 export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY } from '../../document/exchangeInput';
 
-/** The one condition a surface can be given in the app. */
-export type ConditionChoice = SurfaceCondition;
+/** The one condition a surface can be given in the app (a linked face names its plate's other face). */
+export type ConditionChoice = SketchCondition;
 
 /** The condition a surface's properties give (the first, if a file broke the rule), or undefined: the default applies. */
 export function conditionIn(props: SurfaceProps | undefined): ConditionChoice | undefined {
@@ -19,14 +20,30 @@ export function conditionIn(props: SurfaceProps | undefined): ConditionChoice | 
   return given.ok ? given.condition : undefined;
 }
 
-export type SettingsPatch = { surroundingsTemperature?: number | undefined; depth?: number | undefined };
+export type SettingsPatch = {
+  surroundingsTemperature?: number | undefined;
+  gasTemperature?: number | undefined;
+  depth?: number | undefined;
+};
+
+const SETTING_KEYS = ['surroundingsTemperature', 'gasTemperature', 'depth'] as const;
 
 /** The file's properties for a surface, or undefined when it has none (the defaults apply). */
 export function surfacePropsOf(doc: SketchFile, name: string): SurfaceProps | undefined {
   return doc.surfaces && Object.hasOwn(doc.surfaces, name) ? doc.surfaces[name] : undefined;
 }
 
-const KEYS = ['emissivity', 'temperature', 'heatFlux', 'adiabatic', 'opening'] as const;
+const KEYS = [
+  'emissivity',
+  'temperature',
+  'heatFlux',
+  'adiabatic',
+  'opening',
+  'wall',
+  'tube',
+  'linked',
+  'convectionCoefficient',
+] as const;
 
 /** Properties in the file's key order, without undefined entries. */
 function tidy(props: SurfaceProps): SurfaceProps {
@@ -37,7 +54,8 @@ function tidy(props: SurfaceProps): SurfaceProps {
 
 function sameProps(a: SurfaceProps | undefined, b: SurfaceProps | undefined): boolean {
   if (!a || !b) return a === b;
-  return KEYS.every((k) => Object.is(a[k], b[k]));
+  // Walls and tubes are small plain objects: compare what they say.
+  return KEYS.every((k) => Object.is(a[k], b[k]) || JSON.stringify(a[k]) === JSON.stringify(b[k]));
 }
 
 /** Replace a surface's properties; undefined or {} removes its entry (back to the defaults). Names no edge uses are left alone. */
@@ -58,22 +76,40 @@ export function setEmissivity(doc: SketchFile, name: string, emissivity: number 
   return setSurfaceProps(doc, name, { ...surfacePropsOf(doc, name), emissivity });
 }
 
-/** Give a surface one condition, replacing any other; the emissivity is kept. */
+/** Give a surface one condition, replacing any other; the emissivity and convection coefficient are kept. */
 export function setCondition(doc: SketchFile, name: string, condition: ConditionChoice): SketchFile {
   const old = surfacePropsOf(doc, name);
-  return setSurfaceProps(doc, name, { emissivity: old?.emissivity, ...conditionProps(condition) });
+  const kept = { emissivity: old?.emissivity, convectionCoefficient: old?.convectionCoefficient };
+  return setSurfaceProps(doc, name, { ...kept, ...conditionProps(condition) });
 }
 
-/** Set or clear (undefined) the surroundings temperature (K) and the depth (m). */
+/** Set (W/(m^2 K), >= 0) or clear (undefined: no convection) a surface's convection coefficient; the rest is kept. */
+export function setConvection(doc: SketchFile, name: string, coefficient: number | undefined): SketchFile {
+  return setSurfaceProps(doc, name, { ...surfacePropsOf(doc, name), convectionCoefficient: coefficient });
+}
+
+/** Set or clear (undefined) the surroundings and gas temperatures (K) and the depth (m). */
 export function setSettings(doc: SketchFile, patch: SettingsPatch): SketchFile {
   const old = doc.settings ?? {};
   const merged: Record<string, number> = {};
-  for (const k of ['surroundingsTemperature', 'depth'] as const) {
+  for (const k of SETTING_KEYS) {
     const v = Object.hasOwn(patch, k) ? patch[k] : old[k];
     if (v !== undefined) merged[k] = v;
   }
-  if (Object.is(merged.surroundingsTemperature, old.surroundingsTemperature) && Object.is(merged.depth, old.depth))
-    return doc;
+  if (SETTING_KEYS.every((k) => Object.is(merged[k], old[k]))) return doc;
   const { settings: _old, ...rest } = doc;
   return Object.keys(merged).length ? { ...rest, settings: merged } : rest;
+}
+
+/**
+ * Surfaces that can be the other face of `current`'s plate: used by an edge,
+ * not `current`, giving no condition of their own, and not named by another link.
+ */
+export function linkChoices(doc: SketchFile, current: string): string[] {
+  const surfaces = doc.surfaces ?? {};
+  const named = new Set(
+    Object.entries(surfaces).flatMap(([n, p]) => (n !== current && p.linked !== undefined ? [p.linked] : [])),
+  );
+  const free = (n: string) => !Object.hasOwn(surfaces, n) || givenCount(surfaces[n]) === 0;
+  return [...usedSurfaceNames(doc)].filter((n) => n !== current && !named.has(n) && free(n));
 }

@@ -3,7 +3,7 @@
 // the exchange's view state: how the canvas is coloured, the temperature unit
 // shown, and which surface the properties panel edits.
 import type { StateCreator } from 'zustand';
-import type { ExchangeResult, SurfaceCondition } from '../../document/exchangeInput';
+import type { BalanceCondition, ExchangeResult } from '../../document/exchangeInput';
 import type { Units } from '../sketchFile';
 import type { AppState } from '../store';
 
@@ -19,8 +19,9 @@ export interface ExchangeSolved {
   /** Surface lengths in `units` (the file units of the geometry solved). */
   lengths: Float64Array;
   units: Units;
-  conditions: SurfaceCondition[];
-  /** SI results: K, W per metre of depth, W/m^2, W. */
+  /** Conditions as solved (a linked plate's faces name each other by index). */
+  conditions: BalanceCondition[];
+  /** SI results: K, W per metre of depth, W/m^2, W (the whole surface balance). */
   result: ExchangeResult;
   /** True while the geometry solved is not the current document's (a step behind, or the last valid sketch). */
   stale: boolean;

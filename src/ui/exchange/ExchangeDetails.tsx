@@ -48,7 +48,7 @@ export function ExchangeDetails({ ex }: { ex: ExchangeSolved }) {
           </tbody>
         </table>
       </div>
-      <CopyTableButton what="Exchange matrix" tsv={() => exchangeMatrixTsv(ex)} />
+      <CopyTableButton what="Exchange matrix" tsv={() => exchangeMatrixTsv(ex)} label="Copy matrix" />
       <h4 id={`${id}-radiosity`}>Radiosity and irradiation, W/m²</h4>
       <div className="matrix-scroll exchange-scroll">
         <table className={`matrix radiosity-table${stale}`} aria-labelledby={`${id}-radiosity`}>
@@ -78,7 +78,7 @@ export function ExchangeDetails({ ex }: { ex: ExchangeSolved }) {
           </tbody>
         </table>
       </div>
-      <CopyTableButton what="Radiosity table" tsv={() => radiosityTsv(ex)} />
+      <CopyTableButton what="Radiosity table" tsv={() => radiosityTsv(ex)} label="Copy radiosities" />
     </div>
   );
 }

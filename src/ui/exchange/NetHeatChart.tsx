@@ -14,7 +14,8 @@ const VALUE = 64;
  * carried by direction and the printed value as well as by colour.
  */
 export function NetHeatChart({ ex }: { ex: ExchangeSolved }) {
-  const rows = exchangeRows(ex);
+  // Net radiation only: the gas row has none.
+  const rows = exchangeRows(ex).flatMap((r) => (r.netHeat === undefined ? [] : [{ ...r, netHeat: r.netHeat }]));
   let largest = 0;
   for (const r of rows) largest = Math.max(largest, Math.abs(r.netHeat));
   const plot = WIDTH - LABEL - VALUE;
@@ -22,7 +23,7 @@ export function NetHeatChart({ ex }: { ex: ExchangeSolved }) {
   const height = rows.length * ROW + 8;
   return (
     <figure className="net-heat-chart">
-      <figcaption>Net heat per surface, W per metre of depth</figcaption>
+      <figcaption>Net radiation per surface, W per metre of depth</figcaption>
       <svg
         viewBox={`0 0 ${WIDTH} ${height}`}
         width={WIDTH}

@@ -6,7 +6,9 @@ import {
   conditionIn,
   DEFAULT_CONDITION,
   DEFAULT_EMISSIVITY,
+  linkChoices,
   setCondition,
+  setConvection,
   setEmissivity,
   setSurfaceProps,
   surfacePropsOf,
@@ -16,6 +18,7 @@ import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../
 import type { SurfaceProps } from '../../state/sketchFile';
 import type { AppState } from '../../state/store';
 import { CheckedField } from './CheckedField';
+import { LinkedEditor, TubeEditor, WallEditor } from './ConditionEditors';
 import { useSurfaceChoice } from './useSurfaceChoice';
 import { TemperatureUnitToggle } from './TemperatureUnitToggle';
 
@@ -26,17 +29,29 @@ const KIND_LABEL: Record<Kind, string> = {
   heatFlux: 'heat flux',
   adiabatic: 'adiabatic (reradiating)',
   opening: 'opening to the surroundings',
+  wall: 'lined wall to outside air',
+  tube: 'tube with a fluid inside',
+  linked: 'thin plate (linked face)',
 };
 
 const KIND_TITLE: Record<Kind, string> = {
-  temperature: 'The surface is held at a temperature; its net heat is solved',
-  heatFlux: 'A net radiative flux is imposed (> 0: heat leaves the surface); its temperature is solved',
-  adiabatic: 'Insulated, reradiating wall (net heat zero), such as a refractory; its temperature is solved',
+  temperature: 'The surface is held at a temperature; the heat supplied from behind is solved',
+  heatFlux: 'Heat is supplied from behind (> 0: into the surface, leaving its front); its temperature is solved',
+  adiabatic: 'Insulated: nothing passes through the back; its temperature is solved',
   opening: 'A gap to the outside: black, at the surroundings temperature',
+  wall: 'A plane lining of layers to the outside air; hot-face, interface and casing temperatures are solved',
+  tube: 'A tube carrying a fluid; the outer metal temperature and the heat the fluid takes up are solved',
+  linked: 'One face of a thin plate (a baffle, a shield): one temperature for both faces',
 };
 
 /** Temperature a surface starts at when it is first given one, K (room temperature, common practice). */
 const ROOM_TEMPERATURE = 293.15;
+
+/** Starting values of a new wall: one 0.2 m layer of a dense refractory (about 1 W/(m·K)), still air outside (10 W/(m²·K)); edit them. */
+const START_LAYER = { thickness: 0.2, conductivity: 1 };
+const START_OUTSIDE_COEFFICIENT = 10;
+/** Starting values of a new tube: a 4-inch schedule 40 steel pipe (114.3 mm by 6.02 mm wall, about 45 W/(m·K)) and a liquid film of 1000 W/(m²·K); edit them. */
+const START_TUBE = { insideCoefficient: 1000, outerDiameter: 0.1143, innerDiameter: 0.10226, wallConductivity: 45 };
 
 /** The condition the file gives a surface, or the default (kinds from the one rule in document/exchange/conditions.ts). */
 function kindOf(props: SurfaceProps | undefined): { kind: Kind; isDefault: boolean } {
@@ -45,6 +60,7 @@ function kindOf(props: SurfaceProps | undefined): { kind: Kind; isDefault: boole
 }
 
 const selectSurroundings = (s: AppState) => s.doc.settings?.surroundingsTemperature;
+const selectGas = (s: AppState) => s.doc.settings?.gasTemperature;
 
 /** Emissivity and the one condition of the surface chosen on the canvas or in the list. */
 export function SurfaceProperties() {
@@ -53,6 +69,7 @@ export function SurfaceProperties() {
   const unit = useApp(selectTemperatureUnit);
   const exchange = useApp(selectExchange);
   const surroundings = useApp(selectSurroundings);
+  const gas = useApp(selectGas);
   const store = useAppStore();
   const { names, current, choose } = useSurfaceChoice();
   if (current === null) return <p className="hint">No surfaces yet: draw an enclosure or a body first.</p>;
@@ -75,8 +92,22 @@ export function SurfaceProperties() {
       const q = solvedIndex >= 0 && exchange.kind === 'solved' ? exchange.result.netFlux[solvedIndex] : 0;
       return { kind: k, heatFlux: Number(q.toPrecision(6)) };
     }
+    const outside = surroundings ?? ROOM_TEMPERATURE;
+    if (k === 'wall') {
+      return {
+        kind: k,
+        layers: [{ ...START_LAYER }],
+        outsideTemperature: outside,
+        outsideCoefficient: START_OUTSIDE_COEFFICIENT,
+      };
+    }
+    if (k === 'tube') return { kind: k, fluidTemperature: outside, ...START_TUBE };
+    if (k === 'linked') return { kind: k, surface: linkChoices(doc, current)[0] ?? '' };
     return { kind: k };
   };
+  const condition = conditionIn(props);
+  const setTo = (next: ConditionChoice) => edit((d) => setCondition(d, current, next));
+  const choices = linkChoices(doc, current);
 
   return (
     <section key={current} className="exchange-props" aria-labelledby={`${id}-title`}>
@@ -131,7 +162,7 @@ export function SurfaceProperties() {
           onChange={(e) => edit((d) => setCondition(d, current, startValue(e.target.value as Kind)))}
         >
           {(Object.keys(KIND_LABEL) as Kind[]).map((k) => (
-            <option key={k} value={k} title={KIND_TITLE[k]}>
+            <option key={k} value={k} title={KIND_TITLE[k]} disabled={k === 'linked' && choices.length === 0}>
               {KIND_LABEL[k]}
               {isDefault && k === 'adiabatic' ? ' (default)' : ''}
             </option>
@@ -165,7 +196,10 @@ export function SurfaceProperties() {
           </>
         )}
         {kind === 'adiabatic' && (
-          <span className="hint">Net heat zero, temperature solved; the emissivity has no effect on it.</span>
+          <span className="hint">
+            Nothing passes through the back; temperature solved. Without convection its net radiation is zero and its
+            emissivity has no effect on the rest.
+          </span>
         )}
         {kind === 'opening' && (
           <span className="hint">
@@ -173,6 +207,27 @@ export function SurfaceProperties() {
           </span>
         )}
       </div>
+      {condition?.kind === 'wall' && <WallEditor condition={condition} unit={unit} onChange={setTo} />}
+      {condition?.kind === 'tube' && <TubeEditor condition={condition} unit={unit} onChange={setTo} />}
+      {condition?.kind === 'linked' && (
+        <LinkedEditor id={id} current={current} other={condition.surface} choices={choices} onChange={setTo} />
+      )}
+      {kind !== 'opening' && (
+        <div className="row">
+          <CheckedField
+            label="convection coefficient (W/(m²·K))"
+            value={props?.convectionCoefficient}
+            placeholder="none"
+            optional
+            title="Film coefficient between this surface's front and the gas; empty: no convection"
+            check={(v) => (v >= 0 ? null : 'must be 0 or more')}
+            onCommit={(v) => edit((d) => setConvection(d, current, v))}
+          />
+          {props?.convectionCoefficient !== undefined && props.convectionCoefficient > 0 && gas === undefined && (
+            <span className="hint">Set a gas temperature below.</span>
+          )}
+        </div>
+      )}
     </section>
   );
 }
