@@ -187,7 +187,10 @@ export function oracleRow(scene: OracleScene, from: number, tol = 1e-11, cuts: n
   const kron = new Float64Array(n),
     gauss = new Float64Array(n);
   const total = new Float64Array(n);
-  const edges = [0, ...cuts.filter((c) => c > 0 && c < 1).sort((a, b) => a - b), 1];
+  // A kink near an end of a wide interval can hide between all 15 nodes, and the error
+  // estimate then never sees it: start from 64 equal intervals so every interval is short.
+  const uniform = Array.from({ length: 63 }, (_, k) => (k + 1) / 64);
+  const edges = [0, ...[...uniform, ...cuts.filter((c) => c > 0 && c < 1)].sort((a, b) => a - b), 1];
   const stack: [number, number, number][] = [];
   for (let k = 0; k + 1 < edges.length; k++) stack.push([edges[k], edges[k + 1], 0]);
   while (stack.length) {
