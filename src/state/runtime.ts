@@ -7,6 +7,7 @@ import { startLiveResults } from './results/live';
 import { startLiveExchange } from './exchange/live';
 import { ViewFactorClient, type WorkerHandle } from '../worker/client';
 import type { TabChannel } from './tabs/lease';
+import { restartNotice } from './workerRestart';
 
 /** Seconds a job may run before the worker counts as hung (the benchmark's largest sketch takes ~2 s). */
 export const WORKER_TIME_LIMIT_MS = 15000;
@@ -29,7 +30,13 @@ export function startRuntime(options: {
   const start = loadAutosave(options.storage, options.api, options.demo);
   const store = createAppStore(start.doc);
   if (start.notice) store.getState().notify(start.notice.level, start.notice.text);
-  const client = new ViewFactorClient(options.spawn, { timeLimitMs: options.timeLimitMs ?? WORKER_TIME_LIMIT_MS });
+  const client = new ViewFactorClient(options.spawn, {
+    timeLimitMs: options.timeLimitMs ?? WORKER_TIME_LIMIT_MS,
+    onRestart: (event) => {
+      const notice = restartNotice(event);
+      if (notice) store.getState().notify(notice.level, notice.text);
+    },
+  });
   const stopSave = startAutosave(store, options.storage, options.api, { channel: options.channel ?? null });
   const stopLive = startLiveResults(store, client, options.api);
   const stopExchange = startLiveExchange(store);

@@ -2,6 +2,9 @@
 // at most one job runs and at most one waits; a newer request replaces the
 // waiting one (its caller gets 'dropped'). A job that throws, or does not answer
 // within the time limit, fails, and the worker is replaced before the next job.
+// A worker that crashes or hangs is replaced and the job tried once more on the
+// new one (unless a newer job is waiting, which replaces it); a job that throws
+// is not retried (the same input would throw again).
 import type { EdgeViewFactors, ViewFactorJob } from './job';
 
 /** One live worker. `onCrash` reports an uncaught error that killed it. */
@@ -16,15 +19,28 @@ export type JobOutcome =
   | { kind: 'dropped' }
   | { kind: 'failed'; reason: 'threw' | 'timeout' | 'crashed'; message: string };
 
+export type FailReason = 'threw' | 'timeout' | 'crashed';
+
 interface Entry {
   job: ViewFactorJob;
   resolve: (o: JobOutcome) => void;
+  /** 1 on the first try, 2 on the retry after a crash or a hang. */
+  attempt: number;
+}
+
+/** A worker was replaced after a failure; `retrying` says whether its job runs again on the new one. */
+export interface RestartEvent {
+  reason: FailReason;
+  message: string;
+  retrying: boolean;
 }
 
 export interface ClientOptions {
   /** Longest a job may run before the worker is considered hung, ms. */
   timeLimitMs: number;
   now?: () => number;
+  /** Told each time a worker is replaced (so the page can say so). */
+  onRestart?: (event: RestartEvent) => void;
 }
 
 export class ViewFactorClient {
@@ -50,7 +66,7 @@ export class ViewFactorClient {
         resolve({ kind: 'dropped' });
         return;
       }
-      const entry = { job, resolve };
+      const entry = { job, resolve, attempt: 1 };
       if (!this.running) {
         this.launch(entry);
         return;
@@ -79,9 +95,18 @@ export class ViewFactorClient {
   private start(): WorkerHandle {
     const w = this.spawn();
     w.onCrash?.((message) => {
-      if (this.worker === w) this.fail('crashed', message);
+      if (this.worker !== w) return;
+      if (this.running) this.fail('crashed', message);
+      else this.replace({ reason: 'crashed', message, retrying: false }); // died idle: never hand it a job
     });
     return w;
+  }
+
+  private replace(event: RestartEvent): void {
+    this.worker.terminate();
+    this.restarts++;
+    if (!this.disposed) this.worker = this.start();
+    this.options.onRestart?.(event);
   }
 
   private launch(entry: Entry): void {
@@ -115,16 +140,25 @@ export class ViewFactorClient {
     );
   }
 
-  private fail(reason: 'threw' | 'timeout' | 'crashed', message: string): void {
+  private fail(reason: FailReason, message: string): void {
     const current = this.running;
     if (!current) return;
     clearTimeout(current.timer);
     this.running = null;
+    // A crash or a hang may be the worker's, not the job's: try once more on a
+    // fresh worker, unless a newer job waits (it replaces this one anyway).
+    const retry = reason !== 'threw' && current.attempt === 1 && !this.waiting && !this.disposed;
     // A worker that threw may hold broken state; a hung one cannot be interrupted.
-    this.worker.terminate();
-    this.restarts++;
-    if (!this.disposed) this.worker = this.start();
-    current.resolve({ kind: 'failed', reason, message });
+    this.replace({ reason, message, retrying: retry });
+    if (retry) {
+      this.launch({ job: current.job, resolve: current.resolve, attempt: 2 });
+      return;
+    }
+    if (reason !== 'threw' && current.attempt === 1 && this.waiting) current.resolve({ kind: 'dropped' });
+    else {
+      const again = current.attempt > 1 ? '; it failed again on a fresh worker' : '';
+      current.resolve({ kind: 'failed', reason, message: `${message}${again}` });
+    }
     this.next();
   }
 
