@@ -294,6 +294,8 @@ describe('exchange FILE --csv: every cell against closed forms, not against anot
       'net heat (W/m)',
       'net flux (W/m^2)',
       'radiosity (W/m^2)',
+      'convection heat (W/m)',
+      'supplied heat (W/m)',
       'net heat total (W) over 2 m',
     ]);
     expect(rows.slice(1).map((row) => row.slice(0, 4))).toEqual([
@@ -301,10 +303,11 @@ describe('exchange FILE --csv: every cell against closed forms, not against anot
       ['b', '4', '0.4', 'temperature'],
       ['r', '5', '0.9', 'adiabatic'],
     ]);
+    // T, net heat, net flux, radiosity, convection (none: 0), supplied (= net heat without convection), total.
     const expected = [
-      [1000, q, q / 3, J1, 2 * q],
-      [500, -q, -q / 4, J2, -2 * q],
-      [(JR / SIGMA) ** 0.25, 0, 0, JR, 0],
+      [1000, q, q / 3, J1, 0, q, 2 * q],
+      [500, -q, -q / 4, J2, 0, -q, -2 * q],
+      [(JR / SIGMA) ** 0.25, 0, 0, JR, 0, 0, 0],
     ];
     expected.forEach((values, i) => {
       const cells = rows[i + 1].slice(4).map(Number);
@@ -348,6 +351,8 @@ describe('exchange FILE --csv: every cell against closed forms, not against anot
       'net heat (W/m)',
       'net flux (W/m^2)',
       'radiosity (W/m^2)',
+      'convection heat (W/m)',
+      'supplied heat (W/m)',
     ]);
     expect(rows[1].slice(0, 5)).toEqual(['bar', '30', '0.55', 'temperature', '700']);
     close(Number(rows[1][5]), q);
@@ -460,6 +465,8 @@ describe('exchange FILE: options and formats', () => {
       'net heat (W/m)',
       'net flux (W/m^2)',
       'radiosity (W/m^2)',
+      'convection heat (W/m)',
+      'supplied heat (W/m)',
       'net heat total (W) over 3 m',
     ]);
     expect(rows.map((row) => row[0])).toEqual(['surface', 'floor', 'right', 'roof', 'left', 'block']);
@@ -480,7 +487,9 @@ describe('exchange FILE: options and formats', () => {
     expect(r.out).toMatch(/net heat \(W\/m\)/);
     expect(r.out).toMatch(/adiabatic \(T solved\)/);
     expect(r.out).toMatch(/Net heat > 0: the surface gives off more radiation than it absorbs/);
-    expect(r.out).toMatch(/Gray-diffuse radiation only.*licensed engineering practice/);
+    expect(r.out).toMatch(
+      /Gray-diffuse radiation; convection only where a coefficient is given.*licensed engineering practice/,
+    );
   });
 
   it('--help explains units and defaults', () => {

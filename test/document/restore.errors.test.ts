@@ -85,8 +85,8 @@ describe('restore refuses what is not a sketch file', () => {
 
 describe('restore refuses a bad version, units or structure', () => {
   it('a newer version, a missing or odd version', () => {
-    expect(only({ ...minimal, version: 2 })).toBe(
-      'version 2 is newer than this program reads (up to 1); open it with a newer Tautline',
+    expect(only({ ...minimal, version: 3 })).toBe(
+      'version 3 is newer than this program reads (up to 2); open it with a newer Tautline',
     );
     expect(only({ ...minimal, version: undefined })).toMatch(/^version is missing/);
     expect(only({ ...minimal, version: '1' })).toBe('version must be a whole number from 1 (got "1")');

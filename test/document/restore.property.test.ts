@@ -86,7 +86,7 @@ function expectPlaceInDocument(place: ProblemPlace, doc: Doc): void {
 /** Ways to break a valid document, each a rule of the format. */
 const corruptions: ((d: Doc, pick: number) => void)[] = [
   (d) => {
-    d.version = 2 + (d.shapes.length % 5);
+    d.version = 3 + (d.shapes.length % 5); // newer than version 2, the newest this program reads
   },
   (d) => {
     (d as Partial<Doc>).version = undefined;

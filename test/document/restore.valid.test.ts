@@ -31,8 +31,9 @@ describe('restore reads valid sketches', () => {
   it('reads the minimal file and expands a single surface name to every edge', () => {
     const { sketch, warnings } = sketchOf(minimalText);
     expect(warnings).toEqual([]);
+    // A version-1 file reads as version 2 (version 2 only adds fields), meaning the same.
     expect(sketch).toEqual({
-      version: 1,
+      version: 2,
       units: 'm',
       shapes: [
         {
@@ -282,10 +283,10 @@ describe('toScene', () => {
 });
 
 describe('serialize', () => {
-  it('writes version 1 that reads back to the same sketch', () => {
+  it('writes version 2 that reads back to the same sketch', () => {
     const { sketch } = sketchOf({ ...JSON.parse(minimalText), settings: { depth: 2.5 } });
     const text = serialize(sketch);
-    expect(JSON.parse(text).version).toBe(1);
+    expect(JSON.parse(text).version).toBe(2);
     expect(text).toContain('"surface": "block"'); // one name when all edges share it
     expect(text).toContain('"points": [[0, 0], [4, 0], [4, 2], [0, 2]]');
     expect(sketchOf(text).sketch).toEqual(sketch);

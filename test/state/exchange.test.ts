@@ -305,6 +305,8 @@ describe('exchange export', () => {
       'net heat (W/m)',
       'net flux (W/m^2)',
       'radiosity (W/m^2)',
+      'convection heat (W/m)',
+      'supplied heat (W/m)',
     ]);
     const row = (name: string) => rows.find((r) => r[0] === name)!;
     // Outer square: 4 x 600 mm, emissivity 0.8, held at 500 K (the sketch's data).

@@ -168,14 +168,14 @@ describe('heat-exchange tab', () => {
     const cell = netHeatCell('inner');
     expect(Math.abs(Number(cell.getAttribute('data-value')) - q)).toBeLessThanOrEqual(1e-9 * q);
     shownMatches(cell.textContent, q);
-    shownMatches(cellsOf('inner')[4].textContent, q / 0.8); // net flux, W/m^2
+    shownMatches(cellsOf('inner')[6].textContent, q / 0.8); // net flux, W/m^2 (after radiation, convection and back)
     shownMatches(netHeatCell('outer').textContent, -q);
     expect(screen.getByText(/energy balance residual:/).textContent).not.toMatch(/above rounding/);
     // A depth of 3 m adds totals in W.
     await type(user, screen.getByLabelText('depth (m)'), '3');
     expect(store.getState().doc.settings).toEqual({ depth: 3 });
     expect(within(results()).getByRole('columnheader', { name: 'total (W)' })).toBeTruthy();
-    shownMatches(cellsOf('inner')[5].textContent, 3 * q);
+    shownMatches(cellsOf('inner')[7].textContent, 3 * q);
   });
 
   it('shows the solver message for a problem with no unique answer and stays usable', async () => {

@@ -4,6 +4,9 @@
 import { layerTemperatures, tubeResistance, tubeWallResistance, wallFlux } from './conditions';
 import type { BalanceInput, BalanceResult } from './types';
 
+/** Conditions whose back fixes the heat supplied at the solved temperature. */
+const BACK_KINDS = new Set(['heatFlux', 'adiabatic', 'wall', 'tube']);
+
 /** The converged state (per surface: T K, E J G W/m^2, emissivity, view to the surroundings, h W/(m^2 K)). */
 export interface Solved {
   T: Float64Array;
@@ -38,7 +41,6 @@ export function balanceResult(input: BalanceInput, s: Solved): BalanceResult {
   for (let i = 0; i < n; i++) {
     // e (E - G) equals J - G without its cancellation when e is small.
     q[i] = eps[i] * (E[i] - G[i]);
-    netHeat[i] = A[i] * q[i];
     convectionHeat[i] = h[i] > 0 ? A[i] * h[i] * (T[i] - Tg) : 0;
     gasConvectionHeat -= convectionHeat[i];
     const c = input.conditions[i];
@@ -55,7 +57,15 @@ export function balanceResult(input: BalanceInput, s: Solved): BalanceResult {
       const flux = (T[i] - c.fluidTemperature) / tubeResistance(c);
       suppliedHeat[i] = -A[i] * flux;
       inner[i] = T[i] - flux * tubeWallResistance(c);
-    } else suppliedHeat[i] = netHeat[i] + convectionHeat[i];
+    }
+    if (BACK_KINDS.has(c.kind)) {
+      // The back fixes the heat; the solve meets it to the tolerance (then polished to rounding), so report it exactly.
+      q[i] = (suppliedHeat[i] - convectionHeat[i]) / A[i];
+      netHeat[i] = suppliedHeat[i] - convectionHeat[i];
+    } else {
+      netHeat[i] = A[i] * q[i];
+      suppliedHeat[i] = netHeat[i] + convectionHeat[i];
+    }
     const ri = i * n;
     for (let j = 0; j < n; j++) exchange[ri + j] = A[i] * F[ri + j] * (J[i] - J[j]);
     toSurr[i] = A[i] * Fs[i] * (J[i] - Es);

@@ -78,7 +78,8 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
   }
   const J = new Float64Array(n);
   const G = new Float64Array(n);
-  const nodeT = new Float64Array(m).fill(startTemperature(input, setup));
+  const start = startTemperature(input, setup);
+  const nodeT = new Float64Array(m).fill(start);
   const residual = new Float64Array(m);
   const slope = new Float64Array(m); // d(back + convection terms)/dT per node, W/(m K)
 
@@ -117,16 +118,19 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
     unknown.forEach((i, k) => (position[i] = k));
     const jacobian = new DenseLuSolver(m);
     const step = new Float64Array(m);
+    const colScale = new Float64Array(m);
     const trial = new Float64Array(m);
     let polished = false;
     for (;;) {
       const converged = state.worst <= BALANCE_TOLERANCE * state.scale;
       if (converged && polished) break;
+      const zero = stuck(input, nodeT, members, start);
+      if (zero) return zero;
       if (iterations >= MAX_ITERATIONS) {
-        return exchangeFailure('no-convergence', {
-          value: state.worst / state.scale,
-          expected: MAX_ITERATIONS,
-        });
+        return (
+          stuck(input, nodeT, members, start) ??
+          exchangeFailure('no-convergence', { value: state.worst / state.scale, expected: MAX_ITERATIONS })
+        );
       }
       // Jacobian d r_a / d T_b = -sum_{i in a} A_i e_i (delta_ib - sum_{k in b} Y_ik) 4 sigma T_b^3 + slope_a delta_ab.
       const Jm = jacobian.matrix;
@@ -144,6 +148,10 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
         }
         Jm[a * m + a] += slope[a];
       }
+      // Solve for changes of emissive power (columns times 1/(4 sigma T^3)): a temperature near 0 K
+      // then leaves its column well scaled instead of vanishing like T^3.
+      for (let b = 0; b < m; b++) colScale[b] = 1 / (4 * STEFAN_BOLTZMANN * nodeT[b] ** 3);
+      for (let a = 0; a < m; a++) for (let b = 0; b < m; b++) Jm[a * m + b] *= colScale[b];
       try {
         jacobian.factor({ minReciprocalCondition: 1e-15 });
       } catch (err) {
@@ -153,6 +161,7 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
       }
       for (let a = 0; a < m; a++) step[a] = -residual[a];
       jacobian.solve(step);
+      for (let a = 0; a < m; a++) step[a] *= colScale[a];
       // Keep every temperature above a tenth of its value: above 0 K.
       let lambda = 1;
       for (let a = 0; a < m; a++) if (step[a] < 0) lambda = Math.min(lambda, (-0.9 * nodeT[a]) / step[a]);
@@ -178,7 +187,10 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
         slope.set(savedSlope);
         state = evaluate(nodeT);
         if (converged) break;
-        return stuck(nodeT, members, state, iterations);
+        return (
+          stuck(input, nodeT, members, start) ??
+          exchangeFailure('no-convergence', { value: state.worst / state.scale, expected: iterations })
+        );
       }
       if (converged) polished = true;
     }
@@ -199,19 +211,23 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
   return { ok: true, result: balanceResult(input, solved) };
 }
 
-/** What cannot converge: a temperature driven towards 0 K names its surface; otherwise the residual left. */
-function stuck(
-  nodeT: Float64Array,
-  members: number[][],
-  state: { worst: number; scale: number },
-  iterations: number,
-): ExchangeFailure {
-  let low = 0;
-  for (let a = 1; a < nodeT.length; a++) if (nodeT[a] < nodeT[low]) low = a;
-  if (nodeT.length > 0 && nodeT[low] < 1) {
-    return exchangeFailure('balance-below-absolute-zero', { surface: members[low][0], value: nodeT[low] });
-  }
-  return exchangeFailure('no-convergence', { value: state.worst / state.scale, expected: iterations });
+/** Below this fraction of the starting temperature a node is taken as driven to 0 K (no physical answer). */
+const ZERO_FRACTION = 1e-6;
+
+/**
+ * Why Newton cannot go on, when a temperature is being driven to 0 K: its
+ * surface must give off more than it can receive. A heat-flux surface is named
+ * with its flux (W/m^2), others with the last temperature tried (K). Null otherwise.
+ */
+function stuck(input: BalanceInput, nodeT: Float64Array, members: number[][], start: number): ExchangeFailure | null {
+  let low = -1;
+  for (let a = 0; a < nodeT.length; a++) if (low < 0 || nodeT[a] < nodeT[low]) low = a;
+  if (low < 0 || !(nodeT[low] < ZERO_FRACTION * start)) return null;
+  const i = members[low][0];
+  const c = input.conditions[i];
+  return c.kind === 'heatFlux'
+    ? exchangeFailure('flux-below-absolute-zero', { surface: i, value: c.heatFlux })
+    : exchangeFailure('balance-below-absolute-zero', { surface: i, value: nodeT[low] });
 }
 
 /** Heat supplied from behind at temperature T (W/m) and its derivative in T (W/(m K)). */
