@@ -29,9 +29,14 @@ table.data td.num{text-align:right;font-variant-numeric:tabular-nums;white-space
 .refs{font-size:8pt;color:#37434b;margin:1mm 0;padding-left:5mm}
 .caution{margin-top:3mm;border:1pt solid #b5651d;background:#fff6ec;padding:1.5mm 2.5mm;font-size:8.5pt}
 .failed{border-left:2pt solid #b5651d;padding-left:2mm}
+.pair{display:flex;flex-wrap:wrap;gap:0 5mm;align-items:flex-start}
+.pair>section{flex:1 1 80mm;min-width:0}
+.pair>section.profiles{flex:0 1 auto}
 @page{margin:9mm}
 @media print{
-  body{font-size:7.5pt}
+  body{font-size:7.5pt;line-height:1.2}
+  .meta{grid-template-columns:auto 1fr auto 1fr}
+  .meta dd.wide{grid-column:2 / 5}
   .report{max-width:none;padding:0}
   h1{font-size:12pt;margin-bottom:1mm}
   h2{font-size:9pt;margin:2mm 0 0.8mm}
@@ -39,9 +44,9 @@ table.data td.num{text-align:right;font-variant-numeric:tabular-nums;white-space
   .meta{font-size:7.5pt}
   .hash{font-size:7pt}
   .top figure{flex-basis:78mm}
-  .top figure svg{max-height:58mm}
-  table.data{font-size:7pt;margin:0.5mm 0}
-  table.data th,table.data td{padding:0.15mm 1mm}
+  .top figure svg{max-height:50mm}
+  table.data{font-size:7pt;line-height:1.1;margin:0.5mm 0}
+  table.data th,table.data td{padding:0.1mm 1mm}
   .note,.method p,.refs,.caution,table.data caption{font-size:7pt}
   .caution{margin-top:1.5mm;padding:1mm 2mm}
   table.data,figure,.caution{break-inside:avoid}

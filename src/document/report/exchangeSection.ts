@@ -76,7 +76,6 @@ function netHeatTable(ex: SolvedExchange): string {
   }
   return htmlTable({
     name: 'net-heat',
-    caption: `Per surface; lengths in ${ex.units}.`,
     head: [text('surface'), ...columns.map((c) => text(c.head(ex)))],
     rows,
     rowKeys: keys,
@@ -124,24 +123,26 @@ function profileTable(ex: SolvedExchange, p: WallProfile): string {
   });
 }
 
-/** Net heat, exchange matrix, energy balance and profiles of a solved sketch. */
-export function exchangeSection(ex: SolvedExchange, profiles: ReadonlyArray<WallProfile>): string {
+/** Net heat, exchange matrix and energy balance (main), and the profiles of split walls, of a solved sketch. */
+export function exchangeSection(
+  ex: SolvedExchange,
+  profiles: ReadonlyArray<WallProfile>,
+): { main: string; profiles: string } {
   const r = ex.result;
-  const per = r.depth === undefined ? 'per metre of depth' : `per metre of depth; totals over ${sig6(r.depth)} m`;
+  const per =
+    (r.depth === undefined ? 'per metre of depth' : `per metre of depth; totals over ${sig6(r.depth)} m`) +
+    `; lengths in ${ex.units}`;
   const balance = `Energy balance: |sum of net heat| / largest = <span data-value="${r.energyBalance}" data-name="energy-balance">${residual(r.energyBalance)}</span>.`;
-  const parts = [
+  const main = [
     `<section class="exchange"><h2>Heat exchange</h2><p class="note">Gray-diffuse, ${escapeMarkup(per)}.</p>`,
     netHeatTable(ex),
     `<h3>Net exchange q'<sub>ij</sub>, W per metre of depth, from row to column</h3>`,
     exchangeMatrix(ex),
     `<p class="note">${balance} ${escapeMarkup(SIGN_NOTE)}</p></section>`,
-  ];
-  if (profiles.length > 0) {
-    parts.push(
-      `<section class="profiles"><h2>Flux profiles along split walls</h2>`,
-      ...profiles.map((p) => profileTable(ex, p)),
-      '</section>',
-    );
-  }
-  return parts.join('');
+  ].join('');
+  const tables = profiles.map((p) => profileTable(ex, p)).join('');
+  return {
+    main,
+    profiles: tables && `<section class="profiles"><h2>Flux profiles along split walls</h2>${tables}</section>`,
+  };
 }

@@ -82,10 +82,10 @@ export function reportHtml({ source, sketch, names, factors }: ReportInput): str
   const picture = sketchPicture(sketch, names, solved?.result);
   const svg = sketchSvg({ ...picture, title: `Cross-section of ${title}`, idPrefix: 'report', width: 520 });
   const caption = solved
-    ? 'Surfaces coloured by net flux (blue takes heat up, orange gives heat off).'
-    : 'Every surface labelled on the side it radiates from.';
+    ? 'Coloured by net flux: blue takes heat up, orange gives it off.'
+    : 'Each surface named on the side it radiates from.';
 
-  let heat: string;
+  let heat: { main: string; profiles: string };
   if (solved) {
     const ex = {
       names,
@@ -96,24 +96,31 @@ export function reportHtml({ source, sketch, names, factors }: ReportInput): str
     };
     heat = exchangeSection(ex, wallProfiles(sketch.shapes, names, factors.surfaceLength));
   } else if (outcome && !outcome.ok) {
-    heat = `<section class="exchange failed"><h2>Heat exchange</h2><p><strong>No results:</strong> ${escapeMarkup(outcome.message)}</p></section>`;
+    heat = {
+      main: `<section class="exchange failed"><h2>Heat exchange</h2><p><strong>No results:</strong> ${escapeMarkup(outcome.message)}</p></section>`,
+      profiles: '',
+    };
   } else {
-    heat =
-      '<section class="exchange"><h2>Heat exchange</h2><p class="note">No surface has properties in the file, ' +
-      'so no heat exchange was computed.</p></section>';
+    heat = {
+      main:
+        '<section class="exchange"><h2>Heat exchange</h2><p class="note">No surface has properties in the file, ' +
+        'so no heat exchange was computed.</p></section>',
+      profiles: '',
+    };
   }
 
   const n = names.length;
   const version = source.version ?? PROGRAM_VERSION;
+  // In print the list runs in two columns: date and program, file and units, then the hash.
   const meta: [string, string][] = [
     ['Date', escapeMarkup(reportDate(source.date))],
     ['Program', `${PROGRAM_NAME} ${escapeMarkup(version)}`],
     ['File', escapeMarkup(source.fileName)],
+    ['Units', `lengths in ${escapeMarkup(sketch.units)}; ${n} surface${n === 1 ? '' : 's'}`],
     [
       'SHA-256',
       `<span class="hash" data-sha256>${escapeMarkup(source.sha256)}</span> (${escapeMarkup(source.hashOf)})`,
     ],
-    ['Units', `lengths in ${escapeMarkup(sketch.units)}; ${n} surface${n === 1 ? '' : 's'}`],
   ];
   return [
     '<!doctype html>',
@@ -123,16 +130,19 @@ export function reportHtml({ source, sketch, names, factors }: ReportInput): str
     `<title>Radiation report: ${escapeMarkup(title)}</title>`,
     `<style>${REPORT_CSS}</style></head><body><main class="report">`,
     `<header><h1>Radiation report: ${escapeMarkup(title)}</h1><dl class="meta">`,
-    meta.map(([k, v]) => `<dt>${k}</dt><dd>${v}</dd>`).join(''),
+    meta.map(([k, v]) => `<dt>${k}</dt><dd${k === 'SHA-256' ? ' class="wide"' : ''}>${v}</dd>`).join(''),
     '</dl></header>',
     `<div class="top"><figure>${svg}<figcaption>${caption}</figcaption></figure>`,
     inputsSection(sketch, names, factors.surfaceLength),
     '</div>',
     factorsSection(names, factors),
-    heat,
+    heat.main,
+    // Profiles beside the method, so a small sketch stays on one printed page.
+    '<div class="pair">',
+    heat.profiles,
     '<section class="method"><h2>Method</h2>',
     METHOD_TEXT.map((s) => `<p>${escapeMarkup(s)}</p>`).join(''),
-    `<ol class="refs">${REFERENCES.map((r) => `<li>${escapeMarkup(r)}</li>`).join('')}</ol></section>`,
+    `<ol class="refs">${REFERENCES.map((r) => `<li>${escapeMarkup(r)}</li>`).join('')}</ol></section></div>`,
     `<aside class="caution" role="note"><strong>Caution:</strong> ${escapeMarkup(REPORT_CAUTION)}</aside>`,
     '</main></body></html>',
     '',
