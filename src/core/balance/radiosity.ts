@@ -53,15 +53,45 @@ export class RadiosityNetwork {
   /**
    * dG_r/dE_c for the surfaces `rows` and `cols` (dimensionless, >= 0),
    * rows.length x cols.length row-major: F M^-1 diag(e) restricted to them.
-   * Costs n^2 x cols.length for the solves (all right-hand sides at once, by
-   * rows, so the inner loops run along contiguous memory) and n x rows x cols.
+   * X = M^-1 diag(e) costs n^2 x cols.length (all right-hand sides at once, by
+   * rows, so the inner loops run along contiguous memory). Since
+   * M X = diag(e) gives diag(1 - e) F X = X - diag(e), a row of F X is
+   * (X_r - e_r delta_r)/(1 - e_r) where 1 - e_r is not small (the loss of digits is
+   * 1/(1 - e_r), at most 1e3 here: harmless in a Jacobian, whose residual is
+   * computed exactly); nearly black rows take the product with F.
    */
   sensitivity(rows: ArrayLike<number>, cols: ArrayLike<number>): Float64Array {
     const { n, eps, F } = this;
     const u = cols.length;
+    const X = this.inverseColumns(cols);
+    const Y = new Float64Array(rows.length * u);
+    for (let r = 0; r < rows.length; r++) {
+      const i = rows[r];
+      const yr = r * u;
+      const w = 1 - eps[i];
+      if (w >= 1e-3) {
+        const xi = i * u;
+        for (let c = 0; c < u; c++) Y[yr + c] = (X[xi + c] - (cols[c] === i ? eps[i] : 0)) / w;
+        continue;
+      }
+      const fr = i * n;
+      for (let k = 0; k < n; k++) {
+        const f = F[fr + k];
+        if (f === 0) continue;
+        const xk = k * u;
+        for (let c = 0; c < u; c++) Y[yr + c] += f * X[xk + c];
+      }
+    }
+    return Y;
+  }
+
+  /** M^-1 diag(e) restricted to the columns `cols`: n x cols.length, row-major. */
+  private inverseColumns(cols: ArrayLike<number>): Float64Array {
+    const { n, eps } = this;
+    const u = cols.length;
     const a = this.solver.matrix;
     const pivot = this.solver.pivot;
-    const X = new Float64Array(n * u); // n x u: right-hand sides, then M^-1 diag(e) columns
+    const X = new Float64Array(n * u);
     for (let c = 0; c < u; c++) X[cols[c] * u + c] = eps[cols[c]];
     for (let k = 0; k < n; k++) {
       const p = pivot[k];
@@ -79,9 +109,7 @@ export class RadiosityNetwork {
       const xi = i * u;
       for (let k = 0; k < i; k++) {
         const l = a[ri + k];
-        if (l === 0) continue;
-        const xk = k * u;
-        for (let c = 0; c < u; c++) X[xi + c] -= l * X[xk + c];
+        if (l !== 0) axpy(X, xi, k * u, u, l);
       }
     }
     // U backward.
@@ -90,24 +118,23 @@ export class RadiosityNetwork {
       const xi = i * u;
       for (let k = i + 1; k < n; k++) {
         const v = a[ri + k];
-        if (v === 0) continue;
-        const xk = k * u;
-        for (let c = 0; c < u; c++) X[xi + c] -= v * X[xk + c];
+        if (v !== 0) axpy(X, xi, k * u, u, v);
       }
       const d = 1 / a[ri + i];
       for (let c = 0; c < u; c++) X[xi + c] *= d;
     }
-    const Y = new Float64Array(rows.length * u);
-    for (let r = 0; r < rows.length; r++) {
-      const fr = rows[r] * n;
-      const yr = r * u;
-      for (let k = 0; k < n; k++) {
-        const f = F[fr + k];
-        if (f === 0) continue;
-        const xk = k * u;
-        for (let c = 0; c < u; c++) Y[yr + c] += f * X[xk + c];
-      }
-    }
-    return Y;
+    return X;
   }
+}
+
+/** X[to + c] -= s X[from + c] for c < len: one row update, unrolled by four. */
+function axpy(X: Float64Array, to: number, from: number, len: number, s: number): void {
+  let c = 0;
+  for (; c + 3 < len; c += 4) {
+    X[to + c] -= s * X[from + c];
+    X[to + c + 1] -= s * X[from + c + 1];
+    X[to + c + 2] -= s * X[from + c + 2];
+    X[to + c + 3] -= s * X[from + c + 3];
+  }
+  for (; c < len; c++) X[to + c] -= s * X[from + c];
 }
