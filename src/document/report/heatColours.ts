@@ -1,7 +1,7 @@
 // Heat colours for pictures of a sketch: a diverging scale, cool blue through a
 // warm grey to burnt orange (blue against orange stays apart for red-green
 // colour blindness; lightness rises from both ends to the middle, so it also
-// reads in grey). The same stops as the app's canvas colouring.
+// reads in grey). The app's canvas colouring uses this scale too (src/state/exchange/heatColours.ts).
 import type { ExchangeResult } from '../../core/exchange';
 
 /** sRGB stops at t = 0, 0.25, 0.5, 0.75, 1. */

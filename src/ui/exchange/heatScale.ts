@@ -5,28 +5,10 @@
 // up, orange: gives heat off); temperature on the middle of its range.
 import type { ExchangeView, HeatColouring, TemperatureUnit } from '../../state/exchange/slice';
 import { fromKelvin, TEMPERATURE_LABEL } from '../../state/exchange/units';
+import { HEAT_STOPS as STOPS, heatColour } from '../../state/exchange/heatColours';
 
-/** sRGB stops at t = 0, 0.25, 0.5, 0.75, 1. */
-const STOPS: ReadonlyArray<readonly [number, number, number]> = [
-  [33, 62, 138],
-  [108, 156, 210],
-  [238, 234, 224],
-  [236, 159, 86],
-  [138, 56, 12],
-];
-
-/** Colour at t in [0, 1] (clamped) as #rrggbb. */
-export function divergingColour(t: number): string {
-  const x = Math.min(1, Math.max(0, Number.isFinite(t) ? t : 0.5)) * (STOPS.length - 1);
-  const k = Math.min(STOPS.length - 2, Math.floor(x));
-  const f = x - k;
-  const hex = STOPS[k].map((a, c) =>
-    Math.round(a + f * (STOPS[k + 1][c] - a))
-      .toString(16)
-      .padStart(2, '0'),
-  );
-  return `#${hex.join('')}`;
-}
+/** Colour at t in [0, 1] (clamped) as #rrggbb: the scale the pictures and the report use too. */
+export const divergingColour = heatColour;
 
 /** CSS gradient of the whole scale, for the legend. */
 export const SCALE_GRADIENT = `linear-gradient(90deg, ${STOPS.map((s, i) => `rgb(${s.join(',')}) ${(100 * i) / (STOPS.length - 1)}%`).join(', ')})`;
