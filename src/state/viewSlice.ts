@@ -5,6 +5,11 @@ import type { Point, Shape } from './sketchFile';
 import type { Pick } from './selection';
 import type { AppState } from './store';
 import { DEFAULT_TOOL, type ToolId } from './tools/registry';
+import { DIGITS_RULE, GRID_STEP_RULE, TUBE_SIDES_RULE, readNumber } from './edits/numberInput';
+import type { Clipboard } from './edits/shapeCopies';
+
+/** At most this many notices show at once; the oldest goes first. */
+export const MAX_NOTICES = 3;
 
 /** Screen = origin + scale * (x, -y): y points up in the sketch, down on screen. */
 export interface Camera {
@@ -44,6 +49,18 @@ export interface ViewSlice {
   /** Bumped to ask the canvas to fit the sketch in view (the canvas knows its size). */
   fitRequest: number;
   notices: Notice[];
+  /** Surface names written beside each surface on the canvas. */
+  showNames: boolean;
+  /** Pointer position in sketch units while it is over the canvas, for the status line. */
+  pointer: Point | null;
+  /** What is typed for the next point of an outline ("1.2" or "1.2,90"; first point "x,y"). */
+  entry: string;
+  /** Shapes copied with their surfaces' properties, for paste. */
+  clipboard: Clipboard | null;
+  setShowNames: (show: boolean) => void;
+  setPointer: (p: Point | null) => void;
+  setEntry: (entry: string) => void;
+  setClipboard: (clipboard: Clipboard | null) => void;
   setTool: (tool: ToolId) => void;
   setSelection: (selection: Pick[]) => void;
   setCamera: (camera: Camera) => void;
@@ -79,25 +96,38 @@ export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) 
   helpOpen: false,
   fitRequest: 0,
   notices: [],
-  setTool: (tool) => set({ tool, draft: [], hoverPoint: null }),
+  showNames: true,
+  pointer: null,
+  entry: '',
+  clipboard: null,
+  setShowNames: (showNames) => set({ showNames }),
+  setPointer: (pointer) => set({ pointer }),
+  setEntry: (entry) => set({ entry }),
+  setClipboard: (clipboard) => set({ clipboard }),
+  setTool: (tool) => set({ tool, draft: [], hoverPoint: null, entry: '' }),
   setSelection: (selection) => set({ selection }),
   setCamera: (camera) => set({ camera }),
   setSnap: (snap) => set({ snap }),
+  // Values outside a rule are refused (the field says why), never clamped.
   setGridStep: (gridStep) => {
-    if (gridStep > 0 && Number.isFinite(gridStep)) set({ gridStep });
+    if (readNumber(String(gridStep), GRID_STEP_RULE).ok) set({ gridStep });
   },
   setQuickKind: (quickKind) => set({ quickKind }),
-  setTubeSides: (n) => set({ tubeSides: Math.max(3, Math.min(256, Math.round(n) || 3)) }),
+  setTubeSides: (n) => {
+    if (readNumber(String(n), TUBE_SIDES_RULE).ok) set({ tubeSides: n });
+  },
   setDraft: (draft) => set({ draft }),
   setHoverPoint: (hoverPoint) => set({ hoverPoint }),
-  setDigits: (digits) => set({ digits: Math.max(1, Math.min(15, Math.round(digits) || 1)) }),
+  setDigits: (digits) => {
+    if (readNumber(String(digits), DIGITS_RULE).ok) set({ digits });
+  },
   setHoverPair: (hoverPair) => set({ hoverPair }),
   setHelpOpen: (helpOpen) => set({ helpOpen }),
   requestFit: () => set((s) => ({ fitRequest: s.fitRequest + 1 })),
   notify: (level, text, action) => {
     const id = nextNoticeId++;
     const notice: Notice = action ? { id, level, text, action } : { id, level, text };
-    set((s) => ({ notices: [...s.notices.slice(-4), notice] }));
+    set((s) => ({ notices: [...s.notices.slice(-(MAX_NOTICES - 1)), notice] }));
     return id;
   },
   dismissNotice: (id) => set((s) => ({ notices: s.notices.filter((n) => n.id !== id) })),

@@ -60,7 +60,7 @@ describe('polygon kernel', () => {
 });
 
 describe('drawing with the controller', () => {
-  it('draws an enclosure by clicks and Enter, each edge its own named surface', () => {
+  it('draws an enclosure by clicks and Enter, its sides named by where they are', () => {
     const store = createAppStore(emptySketch);
     const c = new CanvasController(store);
     store.getState().setTool('enclosure');
@@ -83,7 +83,8 @@ describe('drawing with the controller', () => {
       [3, 2],
       [0, 2],
     ]);
-    expect(shape.surface).toEqual(['wall 1', 'wall 2', 'wall 3', 'wall 4']);
+    // Drawn anticlockwise from the lower left: bottom, right, top, left.
+    expect(shape.surface).toEqual(['floor', 'right wall', 'roof', 'left wall']);
     expect(store.getState().selection).toEqual([{ type: 'shape', shape: 0 }]);
     expect(restore(store.getState().doc).ok).toBe(true);
   });
@@ -140,7 +141,7 @@ describe('drawing with the controller', () => {
       [3, 1],
       [2, 2.5],
     ]);
-    expect(body.surface).toEqual(['body 1 edge 1', 'body 1 edge 2', 'body 1 edge 3']);
+    expect(body.surface).toBe('body 1'); // one shape, one surface
   });
 
   it('drags a rectangle and a tube as bodies', () => {

@@ -29,7 +29,7 @@ describe('named surfaces', () => {
       ],
       'side walls',
     );
-    expect(edgeNames(doc.shapes[0])).toEqual(['wall 1', 'side walls', 'wall 3', 'side walls']);
+    expect(edgeNames(doc.shapes[0])).toEqual(['floor', 'side walls', 'roof', 'side walls']);
     doc = groupEdges(
       doc,
       [0, 1, 2, 3].map((index) => ({ shape: 1, index })),
@@ -77,14 +77,29 @@ describe('named surfaces', () => {
       [3, 0.5],
       [2.75, 1],
     ]);
-    expect(edgeNames(doc.shapes[2])).toEqual(['body 2 edge 1', 'body 2 edge 2', 'body 2 edge 3']);
-    const clash = renameSurface(doc, 'wall 1', 'body 3 edge 1');
-    const next = addShape(clash, 'solid', [
+    expect(doc.shapes[1].surface).toBe('body 1');
+    expect(doc.shapes[2].surface).toBe('body 2');
+    // A name in use is never given again: with "body 7" typed by the user, the next body is "body 8".
+    const typed = renameSurface(doc, 'body 1', 'body 7');
+    const next = addShape(typed, 'solid', [
       [0.2, 0.2],
       [0.6, 0.2],
       [0.4, 0.4],
     ]);
-    expect(edgeNames(next.shapes[3])[0]).toBe('body 3 edge 1 (2)');
+    expect(next.shapes[3].surface).toBe('body 8');
+    expect(next.shapes[1].surface).toBe('body 7'); // the typed name is left as typed
+    // Deleting body 2 and adding a tube: tubes count on their own.
+    const tube = addShape(
+      next,
+      'solid',
+      [
+        [3.2, 1.2],
+        [3.6, 1.2],
+        [3.4, 1.6],
+      ],
+      'tube',
+    );
+    expect(tube.shapes[4].surface).toBe('tube 1');
   });
 });
 
@@ -118,10 +133,10 @@ describe('units', () => {
 
 describe('awkward names', () => {
   it('treats names like "toString" and "__proto__" as plain names', () => {
-    const doc: SketchFile = { ...base, surfaces: { 'wall 1': { emissivity: 0.3 } } };
-    const a = renameSurface(doc, 'wall 2', 'toString');
+    const doc: SketchFile = { ...base, surfaces: { floor: { emissivity: 0.3 } } };
+    const a = renameSurface(doc, 'right wall', 'toString');
     expect(edgeNames(a.shapes[0])[1]).toBe('toString');
-    expect(a.surfaces).toEqual({ 'wall 1': { emissivity: 0.3 } });
+    expect(a.surfaces).toEqual({ floor: { emissivity: 0.3 } });
     const b = groupEdges(doc, [{ shape: 0, index: 0 }], '__proto__');
     expect(Object.getPrototypeOf(b.surfaces ?? {})).toBe(Object.prototype);
     const read = restore(b);

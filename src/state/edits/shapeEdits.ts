@@ -3,10 +3,11 @@
 import type { Point, Shape, SketchFile } from '../sketchFile';
 import type { Pick } from '../selection';
 import { edgeNames } from '../geometry/polygon';
-import { autoEdgeNames } from './surfaceNames';
+import { newShapeSurface, type ShapeStem } from './surfaceNames';
 
-export function addShape(doc: SketchFile, kind: Shape['kind'], points: Point[]): SketchFile {
-  const surface = autoEdgeNames(doc, kind, doc.shapes.length, points.length);
+/** A new shape as one surface ("body 2", "tube 3"), or an enclosure with its sides named by place. */
+export function addShape(doc: SketchFile, kind: Shape['kind'], points: Point[], stem: ShapeStem = 'body'): SketchFile {
+  const surface = newShapeSurface(doc, kind, points, stem);
   return { ...doc, shapes: [...doc.shapes, { kind, points, surface }] };
 }
 

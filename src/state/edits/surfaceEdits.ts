@@ -1,6 +1,6 @@
 // Grouping, renaming and splitting named surfaces. Surface properties
 // (doc.surfaces) follow their name and are dropped when no edge uses it.
-import type { SketchFile, SurfaceProps } from '../sketchFile';
+import type { Point, SketchFile, SurfaceProps } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
 import { compactSurface, uniqueName, usedSurfaceNames } from './surfaceNames';
 
@@ -75,4 +75,46 @@ export function splitSurface(doc: SketchFile, name: string): SketchFile {
   if (count < 2) return doc;
   delete props[name];
   return pruneProps(next, doc.surfaces ? props : undefined);
+}
+
+/**
+ * Cut every edge of a surface into `parts` equal edges (new points on the
+ * edges) and name each piece "name 1", "name 2"... along the shape, copying the
+ * properties: a wall whose flux varies along it becomes a profile. parts = 1
+ * gives each existing edge its own name (as splitSurface). Null when parts is
+ * not a whole number from 1 to 1000.
+ */
+export function splitSurfaceParts(doc: SketchFile, name: string, parts: number): SketchFile | null {
+  if (!Number.isInteger(parts) || parts < 1 || parts > 1000) return null;
+  if (parts === 1) return splitSurface(doc, name);
+  const shapes = doc.shapes.map((shape) => {
+    const names = edgeNames(shape);
+    if (!names.includes(name)) return shape;
+    const points: Point[] = [];
+    const surface: string[] = [];
+    shape.points.forEach((a, k) => {
+      points.push(a);
+      surface.push(names[k]);
+      if (names[k] !== name) return;
+      const b = shape.points[(k + 1) % shape.points.length];
+      for (let i = 1; i < parts; i++) {
+        const t = i / parts;
+        points.push([a[0] + (b[0] - a[0]) * t, a[1] + (b[1] - a[1]) * t]);
+        surface.push(name);
+      }
+    });
+    return { ...shape, points, surface };
+  });
+  return splitSurface({ ...doc, shapes }, name);
+}
+
+/** Join several surfaces into the first one's name; the others' properties are dropped. */
+export function joinSurfaces(doc: SketchFile, names: readonly string[]): SketchFile {
+  if (names.length < 2) return doc;
+  const [target, ...rest] = names;
+  const others = new Set(rest.filter((n) => n !== target));
+  const props = doc.surfaces ? { ...doc.surfaces } : undefined;
+  if (props) for (const n of others) delete props[n];
+  const next = relabel(doc, (_s, _k, old) => (others.has(old) ? target : old));
+  return pruneProps(next, props);
 }

@@ -7,6 +7,7 @@ export const rectangleTool = twoPointTool({
   label: 'Rectangle',
   shortcut: 'r',
   hint: 'Drag from corner to corner (or click twice)',
+  stem: 'body',
   settings: [makesSetting],
   outline: (a, b) => rectangleFromCorners(a, b),
 });

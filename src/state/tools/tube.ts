@@ -17,6 +17,7 @@ export const tubeTool = twoPointTool({
   label: 'Tube',
   shortcut: 't',
   hint: 'Drag from the centre out to the radius; the number of sides is set beside the tools',
+  stem: 'tube',
   settings: [makesSetting, sidesSetting],
   outline: (centre, rim, s) => regularPolygon(centre, rim, s.tubeSides),
 });

@@ -5,6 +5,7 @@ import type { Point } from '../sketchFile';
 import type { AppState } from '../store';
 import type { DrawingTool, ToolContext, ToolSetting } from './tool';
 import { placeShape } from './placeShape';
+import type { ShapeStem } from '../edits/surfaceNames';
 
 interface TwoPointGesture {
   /** First point (snapped), sketch units; null before the first press. */
@@ -17,6 +18,8 @@ interface TwoPointSpec<Id extends string> {
   shortcut: string;
   hint: string;
   settings: readonly ToolSetting[];
+  /** What a body made by the tool is called ("body 2", "tube 3"). */
+  stem: ShapeStem;
   /** The outline from the first and second points, or null when it has no area. */
   outline(first: Point, second: Point, s: AppState): Point[] | null;
 }
@@ -47,7 +50,7 @@ export function twoPointTool<Id extends string>(spec: TwoPointSpec<Id>): Drawing
     const outline = preview(ctx, anchor, e.at);
     ctx.gesture.anchor = null;
     ctx.get().setDraft([]);
-    if (outline) placeShape(ctx.get, ctx.get().quickKind, outline);
+    if (outline) placeShape(ctx.get, ctx.get().quickKind, outline, spec.stem);
   };
 
   return {

@@ -19,7 +19,7 @@ import { toolRegistry } from '../../state/tools/registry';
 import { useElementSize } from './useElementSize';
 import { usePointerRouting } from './usePointerRouting';
 import { useSelectedSurfaces } from './useSelectedSurfaces';
-import { useSurfaceOrder } from './useSurfaceOrder';
+import { useSurfaceColours } from './useSurfaceColours';
 import { canvasProblemMarks } from './problems';
 import { GridLayer } from './GridLayer';
 import { ShapesLayer } from './ShapesLayer';
@@ -49,7 +49,7 @@ export function SketchCanvas() {
   const selected = useSelectedSurfaces();
   const handlers = usePointerRouting();
 
-  const order = useSurfaceOrder();
+  const order = useSurfaceColours();
   const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
   const problems = useMemo(
     () => canvasProblemMarks(results.status, results.problems, doc.shapes),

@@ -1,4 +1,5 @@
 import { useId, useState } from 'react';
+import { readNumber, type NumberRule } from '../../state/edits/numberInput';
 
 interface Props {
   label: string;
@@ -7,24 +8,38 @@ interface Props {
   onCommit: (v: number) => void;
   width?: string;
   integer?: boolean;
+  /** Allowed range; a value outside is refused with a message, never clamped. */
+  rule?: NumberRule;
   /** Digits shown when not editing. */
   precision?: number;
 }
 
-/** A labelled number input that commits on Enter or leaving the field, and refuses non-numbers. */
-export function NumberField({ label, title, value, onCommit, width, integer, precision = 10 }: Props) {
+/**
+ * A labelled number input that commits on Enter or leaving the field. Letters,
+ * non-finite and out-of-range values are refused: the reason shows beside the
+ * field and the old value stays.
+ */
+export function NumberField({ label, title, value, onCommit, width, integer, rule, precision = 10 }: Props) {
   const id = useId();
   const shown = integer ? String(value) : String(Number(value.toPrecision(precision)));
   // What the user is typing, or null when not editing: then the field shows the stored value as it is now.
   const [draft, setDraft] = useState<string | null>(null);
+  const [problem, setProblem] = useState<string | null>(null);
   const text = draft ?? shown;
-  const parsed = Number(text.trim().replace(',', '.'));
-  const bad = text.trim() === '' || !Number.isFinite(parsed);
   const commit = () => {
     setDraft(null);
-    if (bad) return;
     // Only what the user typed counts: leaving an untouched field must not round the stored value.
-    if (text.trim() !== shown && parsed !== value) onCommit(integer ? Math.round(parsed) : parsed);
+    if (text.trim() === shown) {
+      setProblem(null);
+      return;
+    }
+    const r = readNumber(text, { ...rule, integer: integer ?? rule?.integer });
+    if (!r.ok) {
+      setProblem(r.problem);
+      return;
+    }
+    setProblem(null);
+    if (r.value !== value) onCommit(r.value);
   };
   return (
     <span className="field" title={title}>
@@ -34,16 +49,25 @@ export function NumberField({ label, title, value, onCommit, width, integer, pre
         type="text"
         inputMode="decimal"
         value={text}
-        aria-invalid={bad || undefined}
+        aria-invalid={problem ? true : undefined}
+        aria-describedby={problem ? `${id}-problem` : undefined}
         style={width ? { width } : undefined}
         onFocus={() => setDraft(text)}
         onChange={(e) => setDraft(e.target.value)}
         onBlur={commit}
         onKeyDown={(e) => {
           if (e.key === 'Enter') commit();
-          if (e.key === 'Escape') setDraft(null);
+          if (e.key === 'Escape') {
+            setDraft(null);
+            setProblem(null);
+          }
         }}
       />
+      {problem && (
+        <span id={`${id}-problem`} className="field-problem" role="alert">
+          not applied: {label} {problem}
+        </span>
+      )}
     </span>
   );
 }

@@ -2,7 +2,7 @@ import { useApp } from '../AppContext';
 import { selectDigits, selectHoverPair, selectShown, selectUnits } from '../../state/selectors';
 import { matrixView, RESIDUAL_TOLERANCE } from '../../state/matrixView';
 import type { AppState } from '../../state/store';
-import { useSurfaceOrder } from '../canvas/useSurfaceOrder';
+import { useSurfaceColours } from '../canvas/useSurfaceColours';
 import { useSelectedSurfaces } from '../canvas/useSelectedSurfaces';
 import { MatrixTable } from './MatrixTable';
 import { MatrixControls } from './MatrixControls';
@@ -19,7 +19,7 @@ export function MatrixPanel() {
   const stale = shown?.stale ?? false;
   const setHover = useApp(selectSetHover);
   const selected = useSelectedSurfaces();
-  const order = useSurfaceOrder();
+  const order = useSurfaceColours();
   const view = shown ? matrixView(shown) : null;
   const units = shown?.units ?? docUnits;
   const recipBad = view ? view.reciprocityResidual > RESIDUAL_TOLERANCE : false;

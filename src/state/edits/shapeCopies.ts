@@ -1,0 +1,123 @@
+// Copies of shapes: paste, repeat (n copies at a pitch along a direction) and
+// flip. A copy is its own surface: generated names take the next number
+// ("tube 4"), typed names get " (2)"; the copy keeps the original's properties.
+import type { Point, Shape, SketchFile, SurfaceProps } from '../sketchFile';
+import { edgeNames } from '../geometry/polygon';
+import { compactSurface, copyName, usedSurfaceNames } from './surfaceNames';
+
+/** Shapes as copied, with the properties of their surfaces (own names, never a prototype's). */
+export interface Clipboard {
+  shapes: Shape[];
+  surfaces: Record<string, SurfaceProps>;
+}
+
+export function copyShapes(doc: SketchFile, indices: readonly number[]): Clipboard | null {
+  const shapes = [...new Set(indices)]
+    .sort((a, b) => a - b)
+    .map((i) => doc.shapes[i])
+    .filter((s): s is Shape => s !== undefined);
+  if (!shapes.length) return null;
+  const surfaces: Record<string, SurfaceProps> = {};
+  const props = doc.surfaces ?? {};
+  for (const s of shapes)
+    for (const n of edgeNames(s)) if (n !== '__proto__' && Object.hasOwn(props, n)) surfaces[n] = props[n];
+  return { shapes, surfaces };
+}
+
+const shift = (points: readonly Point[], dx: number, dy: number): Point[] =>
+  points.map(([x, y]): Point => [x + dx, y + dy]);
+
+/**
+ * Add the clipboard's shapes moved by (dx, dy), sketch units, each with new
+ * surface names; returns the new document and the new shapes' indices.
+ */
+export function pasteShapes(
+  doc: SketchFile,
+  clip: Clipboard,
+  dx: number,
+  dy: number,
+): { doc: SketchFile; added: number[] } {
+  const taken = usedSurfaceNames(doc);
+  const props: Record<string, SurfaceProps> = { ...(doc.surfaces ?? {}) };
+  let copied = false;
+  const added: Shape[] = clip.shapes.map((shape) => {
+    // Edges sharing a name in the original share the new name in the copy.
+    const renamed = new Map<string, string>();
+    const names = edgeNames(shape).map((n) => {
+      let m = renamed.get(n);
+      if (m === undefined) {
+        m = copyName(n, taken);
+        taken.add(m);
+        renamed.set(n, m);
+        if (Object.hasOwn(clip.surfaces, n) && m !== '__proto__') {
+          props[m] = { ...clip.surfaces[n] };
+          copied = true;
+        }
+      }
+      return m;
+    });
+    return { kind: shape.kind, points: shift(shape.points, dx, dy), surface: compactSurface(names) };
+  });
+  const first = doc.shapes.length;
+  const next: SketchFile = { ...doc, shapes: [...doc.shapes, ...added] };
+  if (copied) next.surfaces = props;
+  return { doc: next, added: added.map((_, i) => first + i) };
+}
+
+/** Limit on copies made by one repeat, so a mistyped count cannot freeze the page. */
+export const MAX_REPEAT = 500;
+
+/**
+ * n copies of the chosen shapes, copy k moved by k × pitch along (ux, uy)
+ * (normalised here), sketch units. Null when n is not a whole number in
+ * 1..MAX_REPEAT, the pitch is not finite or the direction has no length.
+ */
+export function repeatShapes(
+  doc: SketchFile,
+  indices: readonly number[],
+  n: number,
+  pitch: number,
+  direction: Point,
+): { doc: SketchFile; added: number[] } | null {
+  const len = Math.hypot(direction[0], direction[1]);
+  if (!Number.isInteger(n) || n < 1 || n > MAX_REPEAT || !Number.isFinite(pitch) || !(len > 0)) return null;
+  const clip = copyShapes(doc, indices);
+  if (!clip) return null;
+  let next = doc;
+  const added: number[] = [];
+  for (let k = 1; k <= n; k++) {
+    const r = pasteShapes(next, clip, (direction[0] / len) * pitch * k, (direction[1] / len) * pitch * k);
+    next = r.doc;
+    added.push(...r.added);
+  }
+  return { doc: next, added };
+}
+
+/**
+ * Flip the chosen shapes about a line through the middle of their bounds:
+ * 'left-right' mirrors x, 'upside-down' mirrors y. The point order is
+ * reversed so the outline keeps its winding; names stay with their edges.
+ */
+export function flipShapes(doc: SketchFile, indices: readonly number[], how: 'left-right' | 'upside-down'): SketchFile {
+  const chosen = new Set(indices.filter((i) => doc.shapes[i]));
+  if (!chosen.size) return doc;
+  const axis = how === 'left-right' ? 0 : 1;
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const i of chosen)
+    for (const p of doc.shapes[i].points) {
+      lo = Math.min(lo, p[axis]);
+      hi = Math.max(hi, p[axis]);
+    }
+  const mid2 = lo + hi;
+  const shapes = doc.shapes.map((shape, i) => {
+    if (!chosen.has(i)) return shape;
+    const n = shape.points.length;
+    const names = edgeNames(shape);
+    // Reversed: new point j is old point n-1-j; new edge j (j -> j+1) is old edge n-2-j.
+    const points = shape.points.map((p): Point => (axis === 0 ? [mid2 - p[0], p[1]] : [p[0], mid2 - p[1]])).reverse();
+    const surface = points.map((_, j) => names[(2 * n - 2 - j) % n]);
+    return { ...shape, points, surface: compactSurface(surface) };
+  });
+  return { ...doc, shapes };
+}
