@@ -1,11 +1,8 @@
 // The solved balance as results per surface: net radiation (as the exchange
 // reports it), convection, the heat supplied from behind, and the temperatures
 // inside walls and tubes. SI units, heat per metre of depth.
-import { layerTemperatures, tubeResistance, tubeWallResistance, wallFlux } from './conditions';
+import { layerTemperatures, tubeWallResistance, wallFlux } from './conditions';
 import type { BalanceInput, BalanceResult } from './types';
-
-/** Conditions whose back fixes the heat supplied at the solved temperature. */
-const BACK_KINDS = new Set(['heatFlux', 'adiabatic', 'wall', 'tube']);
 
 /** The converged state (per surface: T K, E J G W/m^2, emissivity, view to the surroundings, h W/(m^2 K)). */
 export interface Solved {
@@ -44,27 +41,25 @@ export function balanceResult(input: BalanceInput, s: Solved): BalanceResult {
     convectionHeat[i] = h[i] > 0 ? A[i] * h[i] * (T[i] - Tg) : 0;
     gasConvectionHeat -= convectionHeat[i];
     const c = input.conditions[i];
-    if (c.kind === 'heatFlux') suppliedHeat[i] = A[i] * c.heatFlux;
-    else if (c.kind === 'adiabatic') suppliedHeat[i] = 0;
-    else if (c.kind === 'wall') {
-      const w = wallFlux(c, T[i]);
-      suppliedHeat[i] = -A[i] * w.flux;
-      layers[i] = layerTemperatures(c, T[i], w.flux);
-      // With casing radiation the casing temperature comes from its own balance; equal to the last layer to rounding.
-      coldFace[i] = c.outsideEmissivity === undefined ? layers[i]![c.layers.length] : w.casingTemperature;
-      if (c.outsideEmissivity !== undefined) layers[i]![c.layers.length] = w.casingTemperature;
-    } else if (c.kind === 'tube') {
-      const flux = (T[i] - c.fluidTemperature) / tubeResistance(c);
-      suppliedHeat[i] = -A[i] * flux;
-      inner[i] = T[i] - flux * tubeWallResistance(c);
-    }
-    if (BACK_KINDS.has(c.kind)) {
-      // The back fixes the heat; the solve meets it to the tolerance (then polished to rounding), so report it exactly.
-      q[i] = (suppliedHeat[i] - convectionHeat[i]) / A[i];
+    if (c.kind === 'heatFlux' || c.kind === 'adiabatic') {
+      // The back fixes the heat exactly; the solve meets it to the tolerance (then polished to rounding).
+      suppliedHeat[i] = c.kind === 'heatFlux' ? A[i] * c.heatFlux : 0;
       netHeat[i] = suppliedHeat[i] - convectionHeat[i];
+      q[i] = netHeat[i] / A[i];
     } else {
+      // Elsewhere the radiation is the accurate side: a stiff back (a film of 1e12 W/(m^2 K)) magnifies the rounding of T.
       netHeat[i] = A[i] * q[i];
       suppliedHeat[i] = netHeat[i] + convectionHeat[i];
+    }
+    // Flux through a wall or a tube, W/m^2 outwards: what the balance sends through the back.
+    const through = -suppliedHeat[i] / A[i];
+    if (c.kind === 'wall') {
+      layers[i] = layerTemperatures(c, T[i], through);
+      // With casing radiation the casing temperature comes from its own balance; equal to the last layer to rounding.
+      if (c.outsideEmissivity !== undefined) layers[i]![c.layers.length] = wallFlux(c, T[i]).casingTemperature;
+      coldFace[i] = layers[i]![c.layers.length];
+    } else if (c.kind === 'tube') {
+      inner[i] = T[i] - through * tubeWallResistance(c);
     }
     const ri = i * n;
     for (let j = 0; j < n; j++) exchange[ri + j] = A[i] * F[ri + j] * (J[i] - J[j]);

@@ -12,7 +12,8 @@
 // temperature); each step is limited so every temperature stays above a tenth
 // of its value (above 0 K), then halved until the largest residual falls
 // (backtracking). Converged when every node's residual is at most 1e-10 of
-// sum A_i J_i; at most 100 iterations; one more full step then polishes to rounding.
+// sum A_i J_i (plus the rounding of its own back and convection terms); at most
+// 100 iterations; one more step then polishes to rounding.
 import { CLOSURE_TOLERANCE, STEFAN_BOLTZMANN, emissivePower } from '../exchange/exchange';
 import { exchangeFailure, type ExchangeFailure } from '../exchange/failures';
 import { DenseLuSolver, LinearSolveError } from '../exchange/linearSolve';
@@ -83,8 +84,10 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
   const residual = new Float64Array(m);
   const slope = new Float64Array(m); // d(back + convection terms)/dT per node, W/(m K)
 
-  // Residual per node: supplied from behind - A (q + h (T - Tg)), W/m; returns the largest |r| and sum A J.
-  const evaluate = (temps: Float64Array): { worst: number; scale: number } => {
+  // Residual per node: supplied from behind - A (q + h (T - Tg)), W/m; returns the largest |r|, sum A J, and
+  // whether every |r| is within the tolerance plus its own rounding (|slope| T x 64 eps: a film of 1e12 W/(m^2 K)
+  // cannot place T closer than its last bit allows).
+  const evaluate = (temps: Float64Array): { worst: number; scale: number; met: boolean } => {
     for (let a = 0; a < m; a++) {
       for (const i of members[a]) {
         T[i] = temps[a];
@@ -95,6 +98,7 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
     let scale = 0;
     for (let i = 0; i < n; i++) scale += A[i] * Math.abs(J[i]);
     let worst = 0;
+    let met = true;
     for (let a = 0; a < m; a++) {
       let r = 0;
       let s = 0;
@@ -106,8 +110,9 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
       residual[a] = r;
       slope[a] = s;
       worst = Math.max(worst, Math.abs(r));
+      if (!(Math.abs(r) <= BALANCE_TOLERANCE * scale + 64 * Number.EPSILON * Math.abs(s) * temps[a])) met = false;
     }
-    return { worst: Number.isFinite(worst) ? worst : Number.POSITIVE_INFINITY, scale };
+    return { worst: Number.isFinite(worst) ? worst : Number.POSITIVE_INFINITY, scale, met };
   };
 
   let state = evaluate(nodeT);
@@ -122,7 +127,7 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
     const trial = new Float64Array(m);
     let polished = false;
     for (;;) {
-      const converged = state.worst <= BALANCE_TOLERANCE * state.scale;
+      const converged = state.met;
       if (converged && polished) break;
       const zero = stuck(input, nodeT, members, start);
       if (zero) return zero;

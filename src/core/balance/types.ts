@@ -29,8 +29,10 @@ export interface BalanceResult extends ExchangeResult {
   /**
    * Heat supplied to each surface from behind, W per metre of depth: the
    * firing a held surface needs, a heat-flux surface's A q, 0 when adiabatic,
-   * minus a wall's loss, minus what a tube's fluid takes up; a linked face and
-   * an opening: netHeat + convectionHeat. Equals netHeat + convectionHeat to the balance tolerance.
+   * minus a wall's loss, minus what a tube's fluid takes up. Reported as
+   * netHeat + convectionHeat, except for heat-flux and adiabatic surfaces,
+   * where it is the condition (netHeat then follows from it); the back's own
+   * formula agrees to the balance tolerance.
    */
   suppliedHeat: Float64Array;
   /** Per surface: a wall's temperatures from the hot face through each interface to the cold face (K); undefined otherwise. */
