@@ -4,6 +4,7 @@ import { SurfacesPanel } from './SurfacesPanel';
 import { SketchSettings } from './SketchSettings';
 import { ExchangeSlot } from '../exchange/ExchangeSlot';
 import { ReportPanel } from '../report/ReportPanel';
+import { StudyPanel } from '../study/StudyPanel';
 
 const TABS = [
   {
@@ -19,6 +20,12 @@ const TABS = [
     label: 'Heat exchange',
     title: 'Surface properties and net heat (gray-diffuse)',
     Panel: ExchangeSlot,
+  },
+  {
+    id: 'study',
+    label: 'What if',
+    title: 'Vary one input over a range, or aim a result at a value',
+    Panel: StudyPanel,
   },
   { id: 'report', label: 'Report', title: 'Printable report, and the picture as SVG or PNG', Panel: ReportPanel },
 ] as const;

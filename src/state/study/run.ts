@@ -1,0 +1,100 @@
+// A study as the app runs it: a request (plain data, so it can go to a worker)
+// in, a reply (plain data) out. The same document functions as the command
+// line, so the panel shows what `sweep` and `solve-for` print.
+import {
+  QUANTITY_UNIT,
+  describeParameter,
+  describeQuantity,
+  parameterProblem,
+  parameterUnit,
+  parseParameter,
+  parseTarget,
+  runSweep,
+  solveForTarget,
+  sweepCsv,
+  targetQuantity,
+  type Quantity,
+} from '../../document/study';
+import { toScene } from '../../document';
+import type { CheckedSketch } from '../documentApi';
+
+export type StudyRequest =
+  | { kind: 'sweep'; sketch: CheckedSketch; address: string; from: number; to: number; steps: number }
+  | {
+      kind: 'solve';
+      sketch: CheckedSketch;
+      address: string;
+      from: number;
+      to: number;
+      steps: number;
+      surface: string;
+      quantity: Quantity;
+      target: number;
+    };
+
+/** One sweep, ready for a plot, a table and a CSV file. */
+export interface SweepTable {
+  label: string;
+  unit: string;
+  names: string[];
+  values: number[];
+  /** netHeat[k][i]: surface i at values[k], W per metre of depth. */
+  netHeat: number[][];
+  /** temperature[k][i], K. */
+  temperature: number[][];
+  /** The command line's `sweep --csv` for the same study. */
+  csv: string;
+}
+
+export interface SolveAnswer {
+  /** The lowest value found and every one found, ascending (unit of the parameter). */
+  value: number;
+  values: number[];
+  /** "temperature of 'hearth' = 1180.238 K gives net heat of 'ware' = -150000 W/m". */
+  summary: string;
+}
+
+export type StudyReply =
+  | { kind: 'progress'; done: number; total: number }
+  | { kind: 'sweep'; table: SweepTable }
+  | { kind: 'solve'; answer: SolveAnswer }
+  | { kind: 'failed'; message: string };
+
+const shown = (x: number) => String(Number(x.toPrecision(10)));
+
+/** Runs the request to the end; `onProgress(done, total)` after each case of a sweep. */
+export function runStudy(
+  request: StudyRequest,
+  onProgress: (done: number, total: number) => void = () => {},
+): StudyReply {
+  const { sketch } = request;
+  const parsed = parseParameter(request.address);
+  if (!parsed.ok) return { kind: 'failed', message: parsed.message };
+  const p = parsed.value;
+  const names = toScene(sketch).surfaceNames;
+  const problem = parameterProblem(sketch, names, p);
+  if (problem) return { kind: 'failed', message: problem };
+  const unit = parameterUnit(p, sketch.units);
+  if (request.kind === 'sweep') {
+    const out = runSweep(sketch, p, request.from, request.to, request.steps, { onProgress });
+    if (!out.ok) return { kind: 'failed', message: out.message };
+    const table: SweepTable = {
+      label: describeParameter(p),
+      unit,
+      names,
+      values: out.values,
+      netHeat: out.runs.map((r) => Array.from(r.result.netHeat)),
+      temperature: out.runs.map((r) => Array.from(r.result.temperature)),
+      csv: sweepCsv(p, sketch.units, out.runs),
+    };
+    return { kind: 'sweep', table };
+  }
+  const target = parseTarget(`${request.surface}.${request.quantity}=${request.target}`);
+  if (!target.ok) return { kind: 'failed', message: target.message };
+  const out = solveForTarget(sketch, names, p, request.from, request.to, target.value, request.steps);
+  if (!out.ok) return { kind: 'failed', message: out.message };
+  const got = targetQuantity(out.run, target.value);
+  const withUnit = (x: number, u: string) => (u ? `${shown(x)} ${u}` : shown(x));
+  const summary = `${describeParameter(p)} = ${withUnit(out.value, unit)} gives ${describeQuantity(request.surface, request.quantity)} = ${withUnit(got, QUANTITY_UNIT[request.quantity])}`;
+  return { kind: 'solve', answer: { value: out.value, values: out.values, summary } };
+}

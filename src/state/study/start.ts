@@ -1,0 +1,59 @@
+// Starting a study from the page: in a worker where the browser has them (so a
+// long sweep that moves a shape never freezes the page), and in-line, after
+// the page has drawn, where it has none (tests, old browsers). Either way the
+// caller gets progress and one final reply, and can stop it.
+import { runStudy, type StudyReply, type StudyRequest } from './run';
+
+export interface RunningStudy {
+  /** Stop now; no further reply comes. */
+  stop(): void;
+}
+
+/** Start the study; `onReply` gets progress replies and then exactly one final reply (unless stopped). */
+export function startStudy(request: StudyRequest, onReply: (reply: StudyReply) => void): RunningStudy {
+  if (typeof Worker === 'undefined') return startInline(request, onReply);
+  const worker = new Worker(new URL('./worker.ts', import.meta.url), { type: 'module' });
+  let over = false;
+  worker.onmessage = (event: MessageEvent<StudyReply>) => {
+    if (over) return;
+    if (event.data.kind !== 'progress') {
+      over = true;
+      worker.terminate();
+    }
+    onReply(event.data);
+  };
+  worker.onerror = (event) => {
+    if (over) return;
+    over = true;
+    worker.terminate();
+    onReply({
+      kind: 'failed',
+      message: `the study stopped with an internal error (${event.message || 'worker failed'})`,
+    });
+  };
+  worker.postMessage(request);
+  return {
+    stop: () => {
+      over = true;
+      worker.terminate();
+    },
+  };
+}
+
+function startInline(request: StudyRequest, onReply: (reply: StudyReply) => void): RunningStudy {
+  let stopped = false;
+  // Let the page draw "running" before the work starts.
+  const timer = setTimeout(() => {
+    if (stopped) return;
+    const reply = runStudy(request, (done, total) => {
+      if (!stopped) onReply({ kind: 'progress', done, total });
+    });
+    if (!stopped) onReply(reply);
+  }, 0);
+  return {
+    stop: () => {
+      stopped = true;
+      clearTimeout(timer);
+    },
+  };
+}
