@@ -36,7 +36,11 @@ export function syntheticFactors(
   for (let i = 0; i < n; i++) {
     let s = 0;
     for (let j = 0; j < n; j++) s += S[i * n + j];
-    area[i] = (s > 0 ? s : 1) / closure;
+    if (s === 0) {
+      S[i * n + i] = 0.5; // sees nothing else: let it see itself, so its row still sums to `closure`
+      s = 0.5;
+    }
+    area[i] = s / closure;
   }
   const F = new Float64Array(n * n);
   for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) F[i * n + j] = S[i * n + j] / area[i];

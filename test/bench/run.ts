@@ -8,6 +8,8 @@ import { tubeScene } from './scenes';
 import { demoSketch } from '../../src/state/demo';
 import { restore, toScene } from '../../src/document';
 import { DenseLuSolver } from '../../src/core/exchange';
+import { solveBalance } from '../../src/core/balance';
+import { mixedSection } from './balanceScene';
 
 function demoScene(): SceneInput {
   const r = restore(demoSketch);
@@ -131,5 +133,27 @@ for (const v of verdicts) console.log(v);
   const med = solves[solves.length >> 1];
   console.log(
     `dense solve, ${N} surfaces (${solver.accelerated ? 'SIMD kernel' : 'plain JavaScript'}): min ${solves[0].toFixed(0)} ms, median ${med.toFixed(0)} ms (target well under 1000 ms): ${med < 1000 ? 'met' : 'NOT met'}`,
+  );
+}
+
+// The whole surface balance with the factors known: 200 surfaces, every kind of
+// condition (held, heat flux, adiabatic, walls with and without casing
+// radiation, tubes, linked plates), convection on about half, an open section.
+{
+  const input = mixedSection(200, 7, 0.95);
+  const times: number[] = [];
+  let iterations = 0;
+  for (let r = 0; r < 5; r++) solveBalance(input); // untimed: let the engine compile the loops first
+  for (let r = 0; r < (quick ? 10 : 40); r++) {
+    const t0 = performance.now();
+    const out = solveBalance(input);
+    times.push(performance.now() - t0);
+    if (!out.ok) throw new Error(`bench balance refused: ${out.code}`);
+    iterations = out.result.iterations;
+  }
+  times.sort((p, q) => p - q);
+  const med = times[times.length >> 1];
+  console.log(
+    `surface balance, 200 surfaces, every condition (${iterations} Newton steps): min ${times[0].toFixed(1)} ms, median ${med.toFixed(1)} ms (target <= 50 ms): ${med <= 50 ? 'met' : 'NOT met'}`,
   );
 }

@@ -118,9 +118,29 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
   let state = evaluate(nodeT);
   let iterations = 0;
   if (m > 0) {
-    const Y = network.sensitivity(unknown, unknown); // dG/dE among the unknown surfaces
-    const position = new Int32Array(n).fill(-1);
-    unknown.forEach((i, k) => (position[i] = k));
+    // In emissive powers the Jacobian is constant but for its diagonal: d r_a / d E_b =
+    // Z_ab - delta_ab W_a + delta_ab slope_a / (4 sigma T_a^3), with Z_ab = sum_{i in a} A_i e_i sum_{k in b} dG_i/dE_k
+    // and W_a = sum_{i in a} A_i e_i. Z is formed once per solve. Newton solves for changes of E (a temperature
+    // near 0 K then leaves its column well scaled instead of vanishing like T^3) and steps T by dE / (4 sigma T^3).
+    const Y = network.sensitivity(unknown, unknown); // dG/dE among the unknown surfaces, in `unknown` order
+    const u = unknown.length;
+    const Z = new Float64Array(m * m);
+    const W = new Float64Array(m);
+    let row = 0;
+    for (let a = 0; a < m; a++) {
+      for (const i of members[a]) {
+        const w = A[i] * eps[i];
+        W[a] += w;
+        let col = 0;
+        for (let b = 0; b < m; b++) {
+          let dG = 0;
+          for (let k = 0; k < members[b].length; k++) dG += Y[row * u + col + k];
+          Z[a * m + b] += w * dG;
+          col += members[b].length;
+        }
+        row++;
+      }
+    }
     const jacobian = new DenseLuSolver(m);
     const step = new Float64Array(m);
     const colScale = new Float64Array(m);
@@ -132,31 +152,14 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
       const zero = stuck(input, nodeT, members, start);
       if (zero) return zero;
       if (iterations >= MAX_ITERATIONS) {
-        return (
-          stuck(input, nodeT, members, start) ??
-          exchangeFailure('no-convergence', { value: state.worst / state.scale, expected: MAX_ITERATIONS })
-        );
+        return exchangeFailure('no-convergence', { value: state.worst / state.scale, expected: MAX_ITERATIONS });
       }
-      // Jacobian d r_a / d T_b = -sum_{i in a} A_i e_i (delta_ib - sum_{k in b} Y_ik) 4 sigma T_b^3 + slope_a delta_ab.
       const Jm = jacobian.matrix;
-      Jm.fill(0);
+      Jm.set(Z);
       for (let a = 0; a < m; a++) {
-        for (const i of members[a]) {
-          const yi = position[i] * unknown.length;
-          const w = A[i] * eps[i];
-          for (let b = 0; b < m; b++) {
-            let dG = 0;
-            for (const k of members[b]) dG += Y[yi + position[k]];
-            Jm[a * m + b] += w * dG * 4 * STEFAN_BOLTZMANN * nodeT[b] ** 3;
-          }
-          Jm[a * m + a] -= w * 4 * STEFAN_BOLTZMANN * nodeT[a] ** 3;
-        }
-        Jm[a * m + a] += slope[a];
+        colScale[a] = 1 / (4 * STEFAN_BOLTZMANN * nodeT[a] ** 3);
+        Jm[a * m + a] += slope[a] * colScale[a] - W[a];
       }
-      // Solve for changes of emissive power (columns times 1/(4 sigma T^3)): a temperature near 0 K
-      // then leaves its column well scaled instead of vanishing like T^3.
-      for (let b = 0; b < m; b++) colScale[b] = 1 / (4 * STEFAN_BOLTZMANN * nodeT[b] ** 3);
-      for (let a = 0; a < m; a++) for (let b = 0; b < m; b++) Jm[a * m + b] *= colScale[b];
       try {
         jacobian.factor({ minReciprocalCondition: 1e-15 });
       } catch (err) {
@@ -166,7 +169,7 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
       }
       for (let a = 0; a < m; a++) step[a] = -residual[a];
       jacobian.solve(step);
-      for (let a = 0; a < m; a++) step[a] *= colScale[a];
+      for (let a = 0; a < m; a++) step[a] *= colScale[a]; // dE to dT
       // Keep every temperature above a tenth of its value: above 0 K.
       let lambda = 1;
       for (let a = 0; a < m; a++) if (step[a] < 0) lambda = Math.min(lambda, (-0.9 * nodeT[a]) / step[a]);
