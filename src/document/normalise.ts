@@ -1,6 +1,7 @@
 // From a schema-valid version-1 file to the form the program works with: one
 // surface name per edge, zero-length edges removed (with a warning), numbers
 // within the documented limits, one thermal condition per surface.
+import { normaliseCircle } from './circles';
 import { conditionOf, surfaceRuleProblems } from './exchange/conditions';
 import { moreThanOneConditionMessage, surfaceRuleMessage } from './exchange/messages';
 import { formatNumber, formatPoint, quoteName, shapeLabel } from './labels';
@@ -31,6 +32,12 @@ export function normalise(file: SketchFileV1): Normalised {
   const fileIndex: number[][] = [];
   const filePointCount: number[] = [];
   const shapes: Shape[] = file.shapes.map((shape, s) => {
+    if (shape.circle) {
+      const circle = normaliseCircle({ ...shape, circle: shape.circle }, s, file.units, errors);
+      filePointCount.push(0);
+      fileIndex.push(circle.surface.map((_, k) => k));
+      return circle;
+    }
     const label = shapeLabel(s, shape);
     const n = shape.points.length;
     filePointCount.push(n);

@@ -1,6 +1,7 @@
 // A reason a sketch was refused: the wording for people (made here, in the
 // document layer, once) and the place it concerns as data, so the canvas can
 // mark it without reading the words.
+import type { CircleFinding } from '../core/arc/circleChecks';
 import type { GeometryFinding } from '../core/sketchChecks';
 
 /**
@@ -18,6 +19,7 @@ export interface ProblemPlace {
 /** Which rule a problem breaks: a geometry rule of the core, or a stage of reading the file. */
 export type ProblemKind =
   | GeometryFinding['rule']
+  | CircleFinding['rule']
   | 'json' // the text is not JSON (or is empty, or another kind of file)
   | 'not-a-sketch'
   | 'version'

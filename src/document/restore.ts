@@ -2,8 +2,10 @@
 // Never throws; a refused document comes back as problems: short messages that
 // say what is wrong and where (shapes, points and edges counted from 1), each
 // with the place it concerns as data (counted from 0) for the canvas.
+import { checkCircles } from '../core/arc/circleChecks';
 import { checkSketchGeometry } from '../core/sketchChecks';
 import type { PolygonInput } from '../core/scene';
+import { circleProblem, renumberFinding, splitShapes } from './circles';
 import { geometryProblem } from './geometryMessages';
 import { parseJsonText } from './jsonText';
 import { MAX_EDGES, MAX_MESSAGES } from './limits';
@@ -121,12 +123,17 @@ function checkSketch(doc: SketchFileV1, raw: Record<string, unknown>): SketchChe
   if (normalised.errors.length > 0) return { ok: false, problems: normalised.errors };
   const { sketch, fileIndex, filePointCount } = normalised;
 
-  const polygons: PolygonInput[] = sketch.shapes.map((s) => ({ kind: s.kind, points: s.points.flat() }));
-  const findings = checkSketchGeometry(polygons);
+  const { polygons, circles } = splitShapes(sketch.shapes);
+  const polygonInputs: PolygonInput[] = polygons.map((p) => p.polygon);
+  const shapeOf = polygons.map((p) => p.shape);
+  const findings = checkSketchGeometry(polygonInputs).map((f) => renumberFinding(f, shapeOf));
   if (findings.length > 0) {
     const ctx = { shapes: sketch.shapes, fileShapes: doc.shapes, fileIndex, filePointCount };
     return { ok: false, problems: findings.map((f) => geometryProblem(f, ctx)) };
   }
+  const circleFindings = checkCircles(polygons, circles);
+  if (circleFindings.length > 0)
+    return { ok: false, problems: circleFindings.map((f) => circleProblem(f, doc.shapes, fileIndex, sketch.shapes)) };
   return { ok: true, sketch, warnings: normalised.warnings };
 }
 
@@ -191,8 +198,10 @@ function countEdges(shapes: unknown): number {
   if (!Array.isArray(shapes)) return 0;
   let total = 0;
   for (const s of shapes) {
-    const points = (s as { points?: unknown } | null)?.points;
+    const { points, circle, surface } = (s ?? {}) as { points?: unknown; circle?: unknown; surface?: unknown };
     if (Array.isArray(points)) total += points.length;
+    // A circle has one edge (arc) per surface name.
+    if (circle !== undefined) total += Array.isArray(surface) ? surface.length : 1;
   }
   return total;
 }

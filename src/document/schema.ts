@@ -22,17 +22,44 @@ export const surfaceNameSchema = z
   // Would replace an object's prototype instead of naming a surface.
   .refine((name) => name !== '__proto__', { error: 'must not be "__proto__" (a reserved word); choose another name' });
 
-export const shapeSchema = z.object(
+/** An exact circle (version 2): centre [x, y] and radius in file units. */
+export const circleSchema = z.object(
   {
-    kind: z.enum(['enclosure', 'solid'], { error: 'must be "enclosure" or "solid"' }),
-    /** Vertices [x, y] in file units, either winding; edge k runs from point k to point k+1, the last edge closes the polygon. */
-    points: z.array(pointSchema, { error: 'must be a list of points [[x, y], ...]' }),
-    /** One surface name for every edge, or one name per edge. */
-    surface: z.union([surfaceNameSchema, z.array(surfaceNameSchema)], {
-      error: 'must be a surface name, or a list of names with one per edge',
-    }),
+    center: pointSchema,
+    radius: z
+      .number({ error: 'must be a positive finite number' })
+      .gt(0, { error: 'must be a positive finite number' }),
   },
-  { error: 'must be an object with kind, points and surface' },
+  { error: 'must be an object with center [x, y] and radius' },
+);
+
+/** A circle shape may leave out points (it has none); a polygon must give them. */
+const circleWithoutPoints = (v: unknown): unknown =>
+  v !== null && typeof v === 'object' && !Array.isArray(v) && 'circle' in v && !('points' in v)
+    ? { ...v, points: [] }
+    : v;
+
+export const shapeSchema = z.preprocess(
+  circleWithoutPoints,
+  z
+    .object(
+      {
+        kind: z.enum(['enclosure', 'solid'], { error: 'must be "enclosure" or "solid"' }),
+        /** Vertices [x, y] in file units, either winding; edge k runs from point k to point k+1, the last edge closes the polygon. Empty for a circle. */
+        points: z.array(pointSchema, { error: 'must be a list of points [[x, y], ...]' }),
+        /** Instead of points: an exact circle, split into one arc per surface name (anticlockwise from +x). */
+        circle: circleSchema.optional(),
+        /** One surface name for every edge, or one name per edge (per arc for a circle). */
+        surface: z.union([surfaceNameSchema, z.array(surfaceNameSchema)], {
+          error: 'must be a surface name, or a list of names with one per edge',
+        }),
+      },
+      { error: 'must be an object with kind, points (or circle) and surface' },
+    )
+    .refine((s) => !(s.circle && s.points.length > 0), {
+      error: 'must have either points or circle, not both',
+      path: ['circle'],
+    }),
 );
 
 const kelvin = z.number({ error: 'must be a number of kelvin' }).gt(0, { error: 'must be above 0 K' });
@@ -165,6 +192,7 @@ export const sketchFileSchemaV1 = sketchFileSchema;
 export type SketchFileV1 = Omit<SketchFileV2, 'version'> & { version: 1 | 2 };
 export type ShapeV1 = z.infer<typeof shapeSchema>;
 export type Point = z.infer<typeof pointSchema>;
+export type CircleShape = z.infer<typeof circleSchema>;
 export type SurfaceProperties = z.infer<typeof surfacePropertiesSchema>;
 export type WallProperties = z.infer<typeof wallSchema>;
 export type TubeProperties = z.infer<typeof tubeSchema>;

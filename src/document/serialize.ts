@@ -4,15 +4,23 @@ import { CURRENT_VERSION, type Sketch } from './schema';
 
 export function serialize(sketch: Sketch): string {
   const shapes = sketch.shapes.map((shape) => {
-    const same = shape.surface.length > 0 && shape.surface.every((n) => n === shape.surface[0]);
+    // A circle's list of names also gives its number of arcs, so it is kept as a list.
+    const same =
+      shape.surface.length > 0 &&
+      shape.surface.every((n) => n === shape.surface[0]) &&
+      !(shape.circle && shape.surface.length > 1);
     const surface = same
       ? JSON.stringify(shape.surface[0])
       : `[${shape.surface.map((n) => JSON.stringify(n)).join(', ')}]`;
     const points = `[${shape.points.map(([x, y]) => `[${num(x)}, ${num(y)}]`).join(', ')}]`;
+    const c = shape.circle;
+    const geometry = c
+      ? `      "circle": { "center": [${num(c.center[0])}, ${num(c.center[1])}], "radius": ${num(c.radius)} },`
+      : `      "points": ${points},`;
     return [
       '    {',
       `      "kind": ${JSON.stringify(shape.kind)},`,
-      `      "points": ${points},`,
+      geometry,
       `      "surface": ${surface}`,
       '    }',
     ].join('\n');

@@ -6,6 +6,8 @@
 export interface NamedShape {
   points: readonly unknown[];
   surface: string | readonly string[];
+  /** An exact circle has one edge (arc) per surface name and no points. */
+  circle?: unknown;
 }
 
 export interface SurfaceIndex {
@@ -19,8 +21,9 @@ export interface SurfaceIndex {
 
 /** The surface name of each edge of a shape; a list shorter than the edges names the rest "edge k". */
 export function edgeSurfaceNames(shape: NamedShape): string[] {
-  const n = shape.points.length;
   const s = shape.surface;
+  if (shape.circle !== undefined) return typeof s === 'string' ? [s] : [...s];
+  const n = shape.points.length;
   if (typeof s === 'string') return new Array<string>(n).fill(s);
   return shape.points.map((_, k) => s[k] ?? `edge ${k + 1}`);
 }
@@ -29,7 +32,9 @@ export function edgeSurfaceNames(shape: NamedShape): string[] {
 export function surfaceIndex(shapes: readonly NamedShape[]): SurfaceIndex {
   const order = new Map<string, number>();
   const edgeSurface: number[] = [];
-  for (const shape of shapes) {
+  // Edges in the core's order: every polygon's edges first, then the circles' arcs.
+  const ordered = [...shapes.filter((s) => s.circle === undefined), ...shapes.filter((s) => s.circle !== undefined)];
+  for (const shape of ordered) {
     for (const name of edgeSurfaceNames(shape)) {
       let id = order.get(name);
       if (id === undefined) order.set(name, (id = order.size));

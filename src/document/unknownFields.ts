@@ -3,7 +3,8 @@
 import { quoteName, shapeLabel } from './labels';
 
 const TOP = ['version', 'units', 'shapes', 'surfaces', 'settings'];
-const SHAPE = ['kind', 'points', 'surface'];
+const SHAPE = ['kind', 'points', 'circle', 'surface'];
+const CIRCLE = ['center', 'radius'];
 const SURFACE = [
   'emissivity',
   'temperature',
@@ -32,7 +33,10 @@ export function unknownFieldWarnings(doc: Record<string, unknown>): string[] {
     }
   };
   note('the sketch', doc, TOP);
-  (Array.isArray(doc.shapes) ? doc.shapes : []).forEach((shape, i) => note(shapeLabel(i, shape), shape, SHAPE));
+  (Array.isArray(doc.shapes) ? doc.shapes : []).forEach((shape, i) => {
+    note(shapeLabel(i, shape), shape, SHAPE);
+    note(`${shapeLabel(i, shape)} circle`, (shape as { circle?: unknown } | null)?.circle, CIRCLE);
+  });
   for (const [name, props] of Object.entries((doc.surfaces ?? {}) as Record<string, unknown>)) {
     note(`surface ${quoteName(name)}`, props, SURFACE);
     const { wall, tube } = (props ?? {}) as { wall?: { layers?: unknown }; tube?: unknown };

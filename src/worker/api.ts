@@ -2,15 +2,15 @@
 // Summing edges to surfaces is a cheap stage of its own on the main thread, so
 // renaming or grouping surfaces never needs the worker.
 import * as Comlink from 'comlink';
-import { buildEdges } from '../core/edges';
+import { allEdgeLengths, buildEdges, totalEdgeCount } from '../core/edges';
 import { edgeViewFactors } from '../core/viewFactors';
 import type { EdgeViewFactors, ViewFactorApi, ViewFactorJob } from './job';
 
-/** Edge view factors of a job's polygons (lengths in sketch units). */
+/** Edge view factors of a job's polygons and circles (lengths in sketch units; arcs after polygon edges). */
 export function computeEdgeViewFactors(job: ViewFactorJob): EdgeViewFactors {
-  const edges = buildEdges(job.polygons);
+  const edges = buildEdges(job.polygons, job.circles ?? []);
   const F = edgeViewFactors(edges);
-  return { edgeCount: edges.count, edgeLength: edges.length, F, closed: edges.hasEnclosure };
+  return { edgeCount: totalEdgeCount(edges), edgeLength: allEdgeLengths(edges), F, closed: edges.hasEnclosure };
 }
 
 export const viewFactorApi: ViewFactorApi = {

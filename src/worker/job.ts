@@ -2,14 +2,17 @@
 // numbers only, so they cross postMessage cheaply. The job is the geometry and
 // nothing else: surface names, properties and units never reach the worker, so
 // editing them never needs a job.
-import type { PolygonInput } from '../core/scene';
+import type { CircleInput, PolygonInput } from '../core/scene';
 
 export interface ViewFactorJob {
   polygons: { kind: 'enclosure' | 'solid'; points: Float64Array }[];
+  /** Exact circles; their arcs are numbered after every polygon edge. */
+  circles?: CircleInput[];
 }
 
 /** Edge-level view factors: the one costly stage, computed in the worker. */
 export interface EdgeViewFactors {
+  /** Polygon edges and arcs. */
   edgeCount: number;
   /** Edge lengths (area per unit depth), sketch units. */
   edgeLength: Float64Array;
@@ -23,6 +26,12 @@ export interface ViewFactorApi {
   compute(job: ViewFactorJob): Promise<EdgeViewFactors> | EdgeViewFactors;
 }
 
-export function jobFromPolygons(polygons: readonly PolygonInput[]): ViewFactorJob {
-  return { polygons: polygons.map((p) => ({ kind: p.kind, points: Float64Array.from(p.points) })) };
+export function jobFromPolygons(
+  polygons: readonly PolygonInput[],
+  circles: readonly CircleInput[] = [],
+): ViewFactorJob {
+  return {
+    polygons: polygons.map((p) => ({ kind: p.kind, points: Float64Array.from(p.points) })),
+    circles: circles.map((c) => ({ kind: c.kind, cx: c.cx, cy: c.cy, radius: c.radius, arcs: c.arcs })),
+  };
 }

@@ -102,7 +102,7 @@ describe('restore refuses a bad version, units or structure', () => {
     expect(only({ version: 1, units: 'm' })).toBe('shapes is missing; it must be a list of shapes');
     expect(only({ ...minimal, shapes: 'none' })).toBe('shapes must be a list of shapes (got "none")');
     expect(only(withShapes(enclosure, 'block'))).toBe(
-      'shape 2 must be an object with kind, points and surface (got "block")',
+      'shape 2 must be an object with kind, points (or circle) and surface (got "block")',
     );
     expect(only(withShapes(enclosure, { kind: 'solid', surface: 'block' }))).toBe(
       "shape 2 (solid 'block'): points is missing; it must be a list of points [[x, y], ...]",

@@ -1,8 +1,8 @@
 // Stage 1 of the results pipeline: the checked geometry of a document. Kept per
 // shapes array (documents are immutable, and a property edit keeps the shapes),
 // so an emissivity or temperature edit reuses the same key and surface index.
-import type { PolygonInput } from '../../core/scene';
-import { scenePolygons } from '../../document/toScene';
+import type { CircleInput, PolygonInput } from '../../core/scene';
+import { sceneCircles, scenePolygons } from '../../document/toScene';
 import { sameSurfaceIndex, surfaceIndex, type SurfaceIndex } from '../../document/surfaceIndex';
 import type { CheckedSketch } from '../documentApi';
 import { geometryKey, type GeometryKey } from './geometry';
@@ -11,6 +11,8 @@ import { geometryKey, type GeometryKey } from './geometry';
 export interface CheckedGeometry {
   sketch: CheckedSketch;
   polygons: PolygonInput[];
+  /** Exact circles (their arcs follow every polygon edge). */
+  circles: CircleInput[];
   key: GeometryKey;
   /** The same object while the names of the edges stay the same (a drag keeps it). */
   surfaces: SurfaceIndex;
@@ -27,10 +29,11 @@ export function checkedGeometry(rawShapes: object, sketch: CheckedSketch): Check
   const hit = byShapes.get(rawShapes);
   if (hit) return { ...hit, sketch };
   const polygons = scenePolygons(sketch);
+  const circles = sceneCircles(sketch);
   let surfaces = surfaceIndex(sketch.shapes);
   if (lastSurfaces && sameSurfaceIndex(lastSurfaces, surfaces)) surfaces = lastSurfaces;
   lastSurfaces = surfaces;
-  const geometry: CheckedGeometry = { sketch, polygons, key: geometryKey(polygons), surfaces };
+  const geometry: CheckedGeometry = { sketch, polygons, circles, key: geometryKey(polygons, circles), surfaces };
   byShapes.set(rawShapes, geometry);
   return geometry;
 }

@@ -3,7 +3,7 @@
 // dimensionless and do not change under a uniform change of scale, so a
 // geometry that is another one scaled about the origin (a change of units by
 // 'convert') keys to the same factors.
-import type { PolygonInput } from '../../core/scene';
+import type { CircleInput, PolygonInput } from '../../core/scene';
 
 export interface GeometryKey {
   /** 1 for an enclosure, 0 for a solid, per polygon. */
@@ -14,15 +14,21 @@ export interface GeometryKey {
   coords: Float64Array;
 }
 
-export function geometryKey(polygons: readonly PolygonInput[]): GeometryKey {
-  const enclosure = Uint8Array.from(polygons, (p) => (p.kind === 'enclosure' ? 1 : 0));
-  const pointCount = Int32Array.from(polygons, (p) => p.points.length >> 1);
-  let total = 0;
+export function geometryKey(polygons: readonly PolygonInput[], circles: readonly CircleInput[] = []): GeometryKey {
+  // A circle enters as -arcs "points" and its centre and radius (all scale alike).
+  const enclosure = Uint8Array.from([...polygons, ...circles], (p) => (p.kind === 'enclosure' ? 1 : 0));
+  const pointCount = Int32Array.from([...polygons.map((p) => p.points.length >> 1), ...circles.map((c) => -c.arcs)]);
+  let total = 3 * circles.length;
   for (const p of polygons) total += p.points.length;
   const coords = new Float64Array(total);
   let at = 0;
   for (const p of polygons) {
     for (let k = 0; k < p.points.length; k++) coords[at++] = p.points[k];
+  }
+  for (const c of circles) {
+    coords[at++] = c.cx;
+    coords[at++] = c.cy;
+    coords[at++] = c.radius;
   }
   return { enclosure, pointCount, coords };
 }

@@ -52,7 +52,7 @@ function refresh(
   if (waiting && sameKey(waiting.basis, current)) return;
   const job: Pending = { basis: current };
   pending.job = job;
-  void runner.run(jobFromPolygons(current.polygons)).then((outcome) => {
+  void runner.run(jobFromPolygons(current.polygons, current.circles)).then((outcome) => {
     if (pending.job === job) pending.job = null;
     file(store, job.basis, outcome);
   });
