@@ -1,6 +1,14 @@
 // The command line's only contact with the outside world, so commands can be
 // run in tests with a fake (collecting output, serving files from memory).
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
+import { MAX_FILE_CHARS } from '../document';
+
+/**
+ * Largest file read, in bytes: UTF-8 takes at most 3 bytes per character the
+ * reader counts, so a longer file is surely past the reader's limit. Checked
+ * before reading, so a huge file never fills memory.
+ */
+const MAX_FILE_BYTES = 3 * MAX_FILE_CHARS;
 
 export interface CliIO {
   /** Write text to standard output exactly as given (include the trailing newline). */
@@ -16,7 +24,15 @@ export function nodeIO(): CliIO {
   return {
     out: (text) => void process.stdout.write(text),
     err: (text) => void process.stderr.write(text),
-    readFile: (path) => readFileSync(path === '-' ? 0 : path, 'utf8'),
+    readFile: (path) => {
+      const size = path === '-' ? 0 : statSync(path).size;
+      if (size > MAX_FILE_BYTES) {
+        const mb = (n: number) => `${Math.round(n / 1e5) / 10} MB`;
+        const message = `the file is ${mb(size)}; the limit for a sketch file is ${mb(MAX_FILE_CHARS)}`;
+        throw Object.assign(new Error(message), { code: 'EFBIG' });
+      }
+      return readFileSync(path === '-' ? 0 : path, 'utf8');
+    },
   };
 }
 

@@ -6,7 +6,10 @@
 import { describe, expect, it } from 'vitest';
 import { readDraft, restore, serialize, MAX_FILE_CHARS, MAX_JSON_DEPTH, MAX_NAME_LENGTH } from '../../src/document';
 import { main } from '../../src/cli/main';
-import type { CliIO } from '../../src/cli/io';
+import { nodeIO, type CliIO } from '../../src/cli/io';
+import { mkdtempSync, rmSync, truncateSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 
 function run(args: string[], files: Record<string, string>) {
   let out = '';
@@ -148,5 +151,22 @@ describe('bounded reading', () => {
     // Just under the limit still reads.
     const under = `{"version":1,"units":"m","shapes":[]${' '.repeat(MAX_FILE_CHARS - 40)}}`;
     expect(restore(under).ok).toBe(true);
+  });
+
+  it('the command line does not even read a file far past the limit (a sparse 100 MB file)', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'tautline-'));
+    try {
+      const path = join(dir, 'huge.json');
+      writeFileSync(path, '');
+      truncateSync(path, 100_000_000); // sparse: no disk space used
+      const io = nodeIO();
+      expect(() => io.readFile(path)).toThrow(/the file is 100 MB; the limit for a sketch file is 20 MB/);
+      let err = '';
+      const code = main(['factors', path], { ...io, out: () => {}, err: (t) => void (err += t) });
+      expect(code).toBe(1);
+      expect(err).toBe(`factors: cannot read '${path}': the file is 100 MB; the limit for a sketch file is 20 MB\n`);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });
