@@ -87,7 +87,7 @@ describe('the What if tab', () => {
   it('refuses a range it cannot use, before running', async () => {
     const { user } = await openStudies();
     await setField(user, /^steps/i, '1');
-    expect((screen.getByRole('button', { name: 'Run' }) as HTMLButtonElement).disabled).toBe(true);
+    expect(screen.getByRole<HTMLButtonElement>('button', { name: 'Run' }).disabled).toBe(true);
     expect(screen.getByText(/Steps: a whole number from 2 to 1000/)).toBeTruthy();
     await waitFor(() => expect(screen.queryByRole('table', { name: 'Study results per value' })).toBeNull());
   });
