@@ -93,7 +93,7 @@ export function circleProblem(
       const list = f.shapes.map((k) => k + 1);
       return problemAt(
         f.rule,
-        `shapes ${list.slice(0, -1).join(', ')} and ${list[list.length - 1]} are all enclosures; a sketch has at most one (draw the others as solids)`,
+        `shapes ${list.slice(0, -1).join(', ')} and ${list[list.length - 1]} are ${list.length === 2 ? 'both' : 'all'} enclosures; a sketch has at most one (draw the others as solids)`,
         { shapes: [...f.shapes] },
       );
     }
