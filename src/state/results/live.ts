@@ -69,6 +69,8 @@ function file(store: AppStore, basis: CheckedGeometry, outcome: JobOutcome): voi
   const current = s.viewFactors.current;
   const forCurrent = current !== null && sameKey(basis, current);
   if (outcome.kind === 'done') {
+    // A draft opened while this job ran (results cleared, sketch invalid): the answer is another drawing's.
+    if (!current && !s.viewFactors.edges && s.viewFactors.status === 'invalid') return;
     // Never trade factors that fit the current geometry for older ones (a drag that came back).
     const held = s.viewFactors.edges;
     if (!forCurrent && held && current && sameKey(held.basis, current)) return;

@@ -5,6 +5,10 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, configure, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { renderApp } from '../renderApp';
+import { spawner } from '../../worker/fakeWorker';
+import { viewFactorApi } from '../../../src/worker/api';
+import { documentApi } from '../../../src/state/documentApi';
+import { openSketchText } from '../../../src/state/files';
 
 vi.mock('../../../src/ui/canvas/SketchCanvas', () => ({ SketchCanvas: () => <div data-testid="canvas-stub" /> }));
 
@@ -59,5 +63,20 @@ describe('opening a draft', () => {
     expect(vf.edges).toBeNull();
     expect(document.querySelector('[data-status]')?.textContent).toMatch(/invalid: no results/);
     expect(screen.queryByRole('table', { name: /view factor/i })).toBeNull();
+  });
+});
+
+describe('opening a draft while a calculation runs', () => {
+  it('the late answer for the old sketch is not shown for the draft', async () => {
+    const { workers, spawn } = spawner();
+    const { store } = renderApp({ spawn });
+    await waitFor(() => expect(workers[0]?.calls).toHaveLength(1)); // the demo's job, not answered yet
+    expect(openSketchText(store, documentApi, JSON.stringify(overlapping), 'half-done.json')).toBe(true);
+    expect(store.getState().viewFactors.status).toBe('invalid');
+    const call = workers[0].calls[0];
+    call.resolve(await viewFactorApi.compute(call.job));
+    await new Promise((r) => setTimeout(r, 0));
+    expect(store.getState().viewFactors.edges).toBeNull();
+    expect(document.querySelector('[data-status]')?.textContent).toMatch(/invalid: no results/);
   });
 });
