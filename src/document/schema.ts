@@ -118,9 +118,14 @@ export const tubeSchema = z
         'must be an object with fluidTemperature, insideCoefficient, outerDiameter, innerDiameter and wallConductivity',
     },
   )
-  .refine((t) => t.innerDiameter < t.outerDiameter, {
-    error: 'must be below outerDiameter',
-    path: ['innerDiameter'],
+  .superRefine((t, ctx) => {
+    if (t.innerDiameter < t.outerDiameter) return;
+    ctx.addIssue({
+      code: 'custom',
+      message: `must be below outerDiameter (${t.outerDiameter} m)`,
+      path: ['innerDiameter'],
+      input: t.innerDiameter,
+    });
   });
 
 /** Radiative properties, the one condition behind a named surface, and convection on its front (used by heat exchange). */
