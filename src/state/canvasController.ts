@@ -7,7 +7,9 @@ import type { Pick } from './selection';
 import type { DrawingTool, PointerInfo, PressAnswer, ToolContext } from './tools/tool';
 import { toolRegistry, type ToolRegistry } from './tools/registry';
 import { snapPoint } from './geometry/snap';
-import { deleteShapes, deleteVertices } from './edits/shapeEdits';
+import { deleteShapes, deleteVertices, moveSelection } from './edits/shapeEdits';
+import { copyShapes, flipShapes, pasteShapes, repeatShapes } from './edits/shapeCopies';
+import { addTubeRow, type RowPlace, type RowSpec } from './edits/tubeRow';
 
 export type { PointerInfo, PressAnswer } from './tools/tool';
 
@@ -57,6 +59,18 @@ export class CanvasController {
     tool.release(ctx, e);
   }
 
+  /**
+   * The button came up outside the canvas: a drag ends where the pointer last
+   * was on the canvas (a drawn shape is placed there if it has a size) and
+   * whatever is left in flight is dropped, so no stray draft stays behind.
+   */
+  releaseOutside(e: PointerInfo): void {
+    const { tool, ctx } = this.active();
+    if (!(tool.holding?.(ctx.gesture) ?? false)) return;
+    tool.release(ctx, e);
+    tool.cancel(ctx);
+  }
+
   doubleClick(e: PointerInfo): void {
     // Two quick clicks at different places are two clicks, not a double-click.
     const [p, q] = this.presses;
@@ -97,6 +111,88 @@ export class CanvasController {
     s.commit(doc);
     s.setSelection([]);
     if (left.length) s.notify('warning', 'A shape needs at least three points; delete the whole shape instead.');
+  }
+
+  /** Shapes the selection touches (a picked vertex or edge counts for its shape), in order. */
+  selectedShapes(): number[] {
+    const s = this.store.getState();
+    return [...new Set(s.selection.map((p) => p.shape))].filter((i) => s.doc.shapes[i]).sort((a, b) => a - b);
+  }
+
+  private selectShapes(indices: readonly number[]): void {
+    this.store.getState().setSelection(indices.map((shape) => ({ type: 'shape', shape })));
+  }
+
+  /** Copy: the selected shapes and their surfaces' properties; false when nothing is selected. */
+  copy(): boolean {
+    const s = this.store.getState();
+    const clip = copyShapes(s.doc, this.selectedShapes());
+    if (!clip) return false;
+    s.setClipboard(clip);
+    this.pastes = 0;
+    return true;
+  }
+
+  private pastes = 0;
+
+  /** Paste: the copied shapes, one grid step right and down per paste so each copy shows; the copies selected. */
+  paste(): boolean {
+    const s = this.store.getState();
+    if (!s.clipboard) return false;
+    this.pastes++;
+    const step = s.gridStep * this.pastes;
+    const r = pasteShapes(s.doc, s.clipboard, step, -step);
+    s.commit(r.doc);
+    this.selectShapes(r.added);
+    return true;
+  }
+
+  /** Duplicate: copy and paste in one step, leaving the clipboard as it was. */
+  duplicate(): boolean {
+    const s = this.store.getState();
+    const clip = copyShapes(s.doc, this.selectedShapes());
+    if (!clip) return false;
+    const r = pasteShapes(s.doc, clip, s.gridStep, -s.gridStep);
+    s.commit(r.doc);
+    this.selectShapes(r.added);
+    return true;
+  }
+
+  /** Move what is selected by (dx, dy), sketch units, as one step. */
+  moveBy(dx: number, dy: number): boolean {
+    const s = this.store.getState();
+    if (!s.selection.length || !Number.isFinite(dx) || !Number.isFinite(dy)) return false;
+    s.commit(moveSelection(s.doc, s.selection, dx, dy));
+    return true;
+  }
+
+  /** Flip the selected shapes about the middle of their bounds. */
+  flip(how: 'left-right' | 'upside-down'): boolean {
+    const s = this.store.getState();
+    const shapes = this.selectedShapes();
+    if (!shapes.length) return false;
+    s.commit(flipShapes(s.doc, shapes, how));
+    return true;
+  }
+
+  /** Repeat: n copies of the selected shapes at a pitch along a direction; the copies selected. */
+  repeat(n: number, pitch: number, direction: Point): boolean {
+    const s = this.store.getState();
+    const r = repeatShapes(s.doc, this.selectedShapes(), n, pitch, direction);
+    if (!r) return false;
+    s.commit(r.doc);
+    this.selectShapes(r.added);
+    return true;
+  }
+
+  /** Tube row: add it (one step) and select its tubes; the problem in words when it cannot be placed. */
+  addRow(spec: RowSpec, place: RowPlace): string | null {
+    const s = this.store.getState();
+    const r = addTubeRow(s.doc, spec, place);
+    if (!r.ok) return r.problem;
+    s.commit(r.doc);
+    this.selectShapes(r.added);
+    return null;
   }
 
   /** True while a press is held that must end even if released outside the canvas (a drag). */

@@ -24,8 +24,10 @@ export function copyShapes(doc: SketchFile, indices: readonly number[]): Clipboa
   return { shapes, surfaces };
 }
 
+/** 15 digits trim float noise from sums (0.1 + 0.2 reads 0.3), as the file shows typed values. */
+const tidy = (v: number) => Number(v.toPrecision(15));
 const shift = (points: readonly Point[], dx: number, dy: number): Point[] =>
-  points.map(([x, y]): Point => [x + dx, y + dy]);
+  points.map(([x, y]): Point => [tidy(x + dx), tidy(y + dy)]);
 
 /**
  * Add the clipboard's shapes moved by (dx, dy), sketch units, each with new
@@ -115,7 +117,9 @@ export function flipShapes(doc: SketchFile, indices: readonly number[], how: 'le
     const n = shape.points.length;
     const names = edgeNames(shape);
     // Reversed: new point j is old point n-1-j; new edge j (j -> j+1) is old edge n-2-j.
-    const points = shape.points.map((p): Point => (axis === 0 ? [mid2 - p[0], p[1]] : [p[0], mid2 - p[1]])).reverse();
+    const points = shape.points
+      .map((p): Point => (axis === 0 ? [tidy(mid2 - p[0]), p[1]] : [p[0], tidy(mid2 - p[1])]))
+      .reverse();
     const surface = points.map((_, j) => names[(2 * n - 2 - j) % n]);
     return { ...shape, points, surface: compactSurface(surface) };
   });

@@ -6,6 +6,7 @@ import type { Shape } from '../sketchFile';
 import type { DrawingTool, ToolContext } from './tool';
 import { clickPoint, finish, removeLastPoint } from './polygonTool';
 import { placeShape } from './placeShape';
+import { editEntry, nextOutlinePoint } from './typedEntry';
 
 interface OutlineSpec<Id extends string> {
   id: Id;
@@ -51,6 +52,23 @@ export function outlineTool<Id extends string>(spec: OutlineSpec<Id>): DrawingTo
 
     keyDown(ctx, key) {
       const s = ctx.get();
+      const typed = editEntry(s.entry, key);
+      if (typed !== null) {
+        s.setEntry(typed);
+        return true;
+      }
+      if (key === 'Enter' && s.entry) {
+        const p = nextOutlinePoint(s.entry, s.draft, s.hoverPoint ?? s.pointer);
+        if ('problem' in p) {
+          s.notify('warning', `Not placed: ${p.problem}.`);
+          return true;
+        }
+        s.setEntry('');
+        const step = clickPoint({ points: s.draft }, p, 0);
+        s.setDraft(step.draft.points);
+        if (step.finished) placeShape(ctx.get, kind, step.finished);
+        return true;
+      }
       if (key === 'Enter') {
         finishOutline(ctx);
         return true;
@@ -64,6 +82,10 @@ export function outlineTool<Id extends string>(spec: OutlineSpec<Id>): DrawingTo
 
     cancel(ctx) {
       const s = ctx.get();
+      if (s.entry) {
+        s.setEntry('');
+        return true;
+      }
       if (!s.draft.length) return false;
       s.setDraft([]);
       return true;
@@ -89,7 +111,7 @@ export const enclosureTool = outlineTool({
   kind: 'enclosure',
   label: 'Enclosure',
   shortcut: 'e',
-  hint: 'Click the corners of the enclosing wall; finish on the first point, with Enter or a double-click',
+  hint: 'Click the corners of the enclosing wall, or type x,y then length or length,angle and Enter; finish on the first point, with Enter or a double-click',
 });
 
 export const bodyTool = outlineTool({
@@ -97,5 +119,5 @@ export const bodyTool = outlineTool({
   kind: 'solid',
   label: 'Body',
   shortcut: 'b',
-  hint: 'Click the corners of a solid body inside the enclosure; finish like the enclosure',
+  hint: 'Click the corners of a solid body (or type them like the enclosure); finish like the enclosure',
 });

@@ -17,11 +17,11 @@ export function usePointerRouting() {
 
   const last = useRef<{ at: Point; shift: boolean; tolerance: number } | null>(null);
 
-  // A drag that ends outside the canvas still ends.
+  // A drag that ends outside the canvas still ends, and leaves no draft behind.
   useEffect(() => {
     const up = () => {
       pan.current = null;
-      if (controller.dragging && last.current) controller.release(last.current);
+      if (controller.dragging && last.current) controller.releaseOutside(last.current);
     };
     window.addEventListener('pointerup', up);
     return () => window.removeEventListener('pointerup', up);
@@ -75,16 +75,15 @@ export function usePointerRouting() {
     },
     onPointerMove: (e: Konva.KonvaEventObject<PointerEvent>) => {
       const i = info(e);
+      store.getState().setPointer(i.at);
       if (pan.current) {
         const p = pan.current;
         const c = store.getState().camera;
-        store
-          .getState()
-          .setCamera({
-            scale: c.scale,
-            originX: p.originX + i.screen[0] - p.from[0],
-            originY: p.originY + i.screen[1] - p.from[1],
-          });
+        store.getState().setCamera({
+          scale: c.scale,
+          originX: p.originX + i.screen[0] - p.from[0],
+          originY: p.originY + i.screen[1] - p.from[1],
+        });
         return;
       }
       controller.move(i);
@@ -106,6 +105,7 @@ export function usePointerRouting() {
     onPointerLeave: () => {
       if (pan.current) pan.current = null;
       store.getState().setHoverPoint(null);
+      store.getState().setPointer(null);
     },
   };
 }
