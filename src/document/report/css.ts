@@ -29,6 +29,7 @@ table.data td.num{text-align:right;font-variant-numeric:tabular-nums;white-space
 .refs{font-size:8pt;color:#37434b;margin:1mm 0;padding-left:5mm}
 .caution{margin-top:3mm;border:1pt solid #b5651d;background:#fff6ec;padding:1.5mm 2.5mm;font-size:8.5pt}
 .failed{border-left:2pt solid #b5651d;padding-left:2mm}
+.warning{font-size:8.5pt;color:#7a2e00;margin:1mm 0}
 .pair{display:flex;flex-wrap:wrap;gap:0 5mm;align-items:flex-start}
 .pair>section{flex:1 1 80mm;min-width:0}
 .pair>section.profiles{flex:0 1 auto}
@@ -47,7 +48,7 @@ table.data td.num{text-align:right;font-variant-numeric:tabular-nums;white-space
   .top figure svg{max-height:50mm}
   table.data{font-size:7pt;line-height:1.1;margin:0.5mm 0}
   table.data th,table.data td{padding:0.1mm 1mm}
-  .note,.method p,.refs,.caution,table.data caption{font-size:7pt}
+  .note,.warning,.method p,.refs,.caution,table.data caption{font-size:7pt}
   .caution{margin-top:1.5mm;padding:1mm 2mm}
   table.data,figure,.caution{break-inside:avoid}
   h2,h3{break-after:avoid}

@@ -4,7 +4,9 @@
 // headed as the command line heads them, so a new result (say, convection) is
 // one more entry in NET_HEAT_COLUMNS.
 import type { SketchExchangeOutcome } from '../exchangeInput';
-import { conditionInTable, SURROUNDINGS_LABEL, seesSurroundings } from '../exchange/labels';
+import { conditionInTable, GAS_LABEL, hasGas, SURROUNDINGS_LABEL, seesSurroundings } from '../exchange/labels';
+import { GAS_CAUTION, WALL_TUBE_CAUTION, burnWarning } from '../exchange/cautions';
+import { layerTemperaturesCell } from '../exchangeCsv';
 import type { Units } from '../units';
 import { escapeMarkup } from './escape';
 import { kelvin2, residual, sig6 } from './format';
@@ -32,10 +34,14 @@ export interface SurfaceColumn {
   cell: (ex: SolvedExchange, i: number) => Cell;
   /** The cell of the surroundings row of an open sketch. */
   surroundings: (ex: SolvedExchange) => Cell;
+  /** The cell of the gas row, when the sketch sets a gas temperature (default: blank). */
+  gas?: (ex: SolvedExchange) => Cell;
 }
 
 const blank = () => text('');
 const n6 = (x: number) => num(sig6(x), x);
+const k2 = (x: number) => num(kelvin2(x), x);
+const some = (ex: SolvedExchange, kind: string) => ex.conditions.some((c) => c.kind === kind);
 
 /** The per-surface columns, in the command line's order. */
 export const NET_HEAT_COLUMNS: SurfaceColumn[] = [
@@ -45,11 +51,13 @@ export const NET_HEAT_COLUMNS: SurfaceColumn[] = [
     head: () => 'condition',
     cell: (ex, i) => text(conditionInTable(ex.conditions[i].kind)),
     surroundings: () => text(SURROUNDINGS_LABEL.condition),
+    gas: () => text(GAS_LABEL.condition),
   },
   {
     head: () => 'T (K)',
     cell: (ex, i) => num(kelvin2(ex.result.temperature[i]), ex.result.temperature[i]),
-    surroundings: (ex) => num(kelvin2(ex.result.surroundingsTemperature!), ex.result.surroundingsTemperature!),
+    surroundings: (ex) => k2(ex.result.surroundingsTemperature!),
+    gas: (ex) => k2(ex.result.gasTemperature!),
   },
   {
     head: () => 'net heat (W/m)',
@@ -58,6 +66,37 @@ export const NET_HEAT_COLUMNS: SurfaceColumn[] = [
   },
   { head: () => 'net flux (W/m²)', cell: (ex, i) => n6(ex.result.netFlux[i]), surroundings: blank },
   { head: () => 'radiosity (W/m²)', cell: (ex, i) => n6(ex.result.radiosity[i]), surroundings: blank },
+  {
+    head: () => 'convection (W/m)',
+    cell: (ex, i) => n6(ex.result.convectionHeat[i]),
+    surroundings: () => num('0', 0),
+    gas: (ex) => n6(ex.result.gasConvectionHeat),
+  },
+  {
+    head: () => 'supplied (W/m)',
+    cell: (ex, i) => n6(ex.result.suppliedHeat[i]),
+    surroundings: (ex) => n6(ex.result.surroundingsNetHeat),
+    gas: (ex) => n6(ex.result.gasConvectionHeat),
+  },
+  {
+    head: () => 'cold face (K)',
+    when: (ex) => some(ex, 'wall'),
+    cell: (ex, i) => (ex.conditions[i].kind === 'wall' ? k2(ex.result.coldFaceTemperature[i]) : blank()),
+    surroundings: blank,
+  },
+  {
+    head: () => 'layers (K)',
+    when: (ex) => some(ex, 'wall'),
+    cell: (ex, i) =>
+      ex.conditions[i].kind === 'wall' ? text(layerTemperaturesCell(ex.result.layerTemperatures[i])) : blank(),
+    surroundings: blank,
+  },
+  {
+    head: () => 'inner (K)',
+    when: (ex) => some(ex, 'tube'),
+    cell: (ex, i) => (ex.conditions[i].kind === 'tube' ? k2(ex.result.innerTemperature[i]) : blank()),
+    surroundings: blank,
+  },
   {
     head: (ex) => `total (W) over ${sig6(ex.result.depth!)} m`,
     when: (ex) => ex.result.depth !== undefined,
@@ -73,6 +112,11 @@ function netHeatTable(ex: SolvedExchange): string {
   if (seesSurroundings(ex.result)) {
     rows.push([rowHead(SURROUNDINGS_LABEL.name), ...columns.map((c) => c.surroundings(ex))]);
     keys.push(SURROUNDINGS_LABEL.name);
+  }
+  if (hasGas(ex.result)) {
+    // The gas row: its temperature and the heat it takes by convection (the command line's row).
+    rows.push([rowHead(GAS_LABEL.name), ...columns.map((c) => c.gas?.(ex) ?? blank())]);
+    keys.push(GAS_LABEL.name);
   }
   return htmlTable({
     name: 'net-heat',
@@ -132,13 +176,22 @@ export function exchangeSection(
   const per =
     (r.depth === undefined ? 'per metre of depth' : `per metre of depth; totals over ${sig6(r.depth)} m`) +
     `; lengths in ${ex.units}`;
-  const balance = `Energy balance: |sum of net heat| / largest = <span data-value="${r.energyBalance}" data-name="energy-balance">${residual(r.energyBalance)}</span>.`;
+  const balance = `Energy balance: |sum of supplied heat, gas and surroundings| / sum of radiation leaving the surfaces = <span data-value="${r.energyBalance}" data-name="energy-balance">${residual(r.energyBalance)}</span>.`;
+  // The command line's warnings and cautions for walls, tubes and gas, in the same words.
+  const burns = ex.names.flatMap((name, i) =>
+    ex.conditions[i].kind === 'wall' ? (burnWarning(name, r.coldFaceTemperature[i]) ?? []) : [],
+  );
+  const cautions = [
+    ...burns.map((b) => `<p class="warning" role="alert"><strong>Warning:</strong> ${escapeMarkup(b)}.</p>`),
+    ...(hasGas(r) ? [`<p class="note">${escapeMarkup(GAS_CAUTION)}</p>`] : []),
+    ...(some(ex, 'wall') || some(ex, 'tube') ? [`<p class="note">${escapeMarkup(WALL_TUBE_CAUTION)}</p>`] : []),
+  ].join('');
   const main = [
     `<section class="exchange"><h2>Heat exchange</h2><p class="note">Gray-diffuse, ${escapeMarkup(per)}.</p>`,
     netHeatTable(ex),
     `<h3>Net exchange q'<sub>ij</sub>, W per metre of depth, from row to column</h3>`,
     exchangeMatrix(ex),
-    `<p class="note">${balance} ${escapeMarkup(SIGN_NOTE)}</p></section>`,
+    `<p class="note">${balance} ${escapeMarkup(SIGN_NOTE)}</p>${cautions}</section>`,
   ].join('');
   const tables = profiles.map((p) => profileTable(ex, p)).join('');
   return {

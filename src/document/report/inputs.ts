@@ -34,17 +34,36 @@ export function defaultUses(sketch: Pick<Sketch, 'surfaces'>, names: ReadonlyArr
   return out;
 }
 
+/** What the file gives behind a surface, in words with units (the numbers as written). */
 function givenValue(p: SurfaceProperties | undefined): Cell {
   if (p?.temperature !== undefined) return num(`${sig6(p.temperature)} K`, p.temperature);
   if (p?.heatFlux !== undefined) return num(`${sig6(p.heatFlux)} W/m²`, p.heatFlux);
+  if (p?.wall) {
+    const w = p.wall;
+    const layers = w.layers.map((l) => `${sig6(l.thickness)} m at ${sig6(l.conductivity)} W/(m·K)`).join(', ');
+    const casing = w.outsideEmissivity === undefined ? '' : `, casing ε ${sig6(w.outsideEmissivity)}`;
+    return text(
+      `layers ${layers}; outside ${sig6(w.outsideTemperature)} K, ${sig6(w.outsideCoefficient)} W/(m²·K)${casing}`,
+    );
+  }
+  if (p?.tube) {
+    const t = p.tube;
+    return text(
+      `fluid ${sig6(t.fluidTemperature)} K, ${sig6(t.insideCoefficient)} W/(m²·K); diameters ${sig6(t.outerDiameter)} / ` +
+        `${sig6(t.innerDiameter)} m; wall ${sig6(t.wallConductivity)} W/(m·K)`,
+    );
+  }
+  if (p?.linked !== undefined) return text(`back faces ${p.linked}`);
   return text('');
 }
 
 export function inputsSection(sketch: Sketch, names: ReadonlyArray<string>, lengths: ArrayLike<number>): string {
   const edges = new Map<string, number>();
   for (const shape of sketch.shapes) for (const n of shape.surface) edges.set(n, (edges.get(n) ?? 0) + 1);
+  const convection = names.some((n) => propsOf(sketch, n)?.convectionCoefficient !== undefined);
   const rows = names.map((name, i) => {
     const p = propsOf(sketch, name);
+    const h = p?.convectionCoefficient;
     const c = conditionOf(p);
     const kind = c.ok ? (c.condition ?? DEFAULT_CONDITION).kind : undefined;
     const isDefault = c.ok && c.condition === undefined;
@@ -62,6 +81,7 @@ export function inputsSection(sketch: Sketch, names: ReadonlyArray<string>, leng
       emissivity,
       text(isDefault ? `${condition} (default)` : condition),
       givenValue(p),
+      ...(convection ? [h === undefined ? text('') : num(sig6(h), h)] : []),
     ];
   });
   const table = htmlTable({
@@ -73,6 +93,7 @@ export function inputsSection(sketch: Sketch, names: ReadonlyArray<string>, leng
       text('ε'),
       text('condition'),
       text('given'),
+      ...(convection ? [text('h (W/(m²·K))')] : []),
     ],
     rows,
     rowKeys: names,
@@ -92,6 +113,7 @@ export function inputsSection(sketch: Sketch, names: ReadonlyArray<string>, leng
   const st = sketch.settings ?? {};
   const settings = [
     `Surroundings temperature: ${st.surroundingsTemperature === undefined ? 'not set' : `${sig6(st.surroundingsTemperature)} K`}`,
+    `gas temperature: ${st.gasTemperature === undefined ? 'not set' : `${sig6(st.gasTemperature)} K`}`,
     `depth: ${st.depth === undefined ? 'not set (results per metre of depth)' : `${sig6(st.depth)} m`}`,
   ].join('; ');
   return (

@@ -17,10 +17,10 @@ export const REFERENCES = [
 ];
 
 export const REPORT_CAUTION =
-  'Gray-diffuse radiation only: no convection, and no absorbing gas unless modelled. Hot equipment can burn ' +
-  'people and start fires. These results support, and do not replace, local codes and licensed engineering practice; ' +
-  'have them checked before they are used for design or safety decisions.';
+  'Gray-diffuse radiation; convection only where a coefficient is given, and no absorbing gas. Hot equipment can ' +
+  'burn people and start fires. These results support, and do not replace, local codes and licensed engineering ' +
+  'practice; have them checked before they are used for design or safety decisions.';
 
 /** Sign and unit conventions under the heat tables. */
 export const SIGN_NOTE =
-  "Net heat > 0: the surface gives off more radiation than it absorbs; < 0: it takes heat up. q'_ij is the net heat from the row's surface to the column's.";
+  "Net heat > 0: the surface gives off more radiation than it absorbs; < 0: it takes heat up. Supplied = net heat + convection: the heat from behind. q'_ij is the net heat from the row's surface to the column's.";
