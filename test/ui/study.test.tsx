@@ -5,12 +5,14 @@ import userEvent from '@testing-library/user-event';
 import { renderApp } from './renderApp';
 import { cliJson, kiln, runCli } from '../cli/studyHelpers';
 import type { SketchFile } from '../../src/state/sketchFile';
+import { resetStudies } from '../../src/state/study';
 
 vi.mock('../../src/ui/canvas/SketchCanvas', () => ({ SketchCanvas: () => <div data-testid="canvas-stub" /> }));
 
 configure({ asyncUtilTimeout: 8000 });
 afterEach(() => {
   cleanup();
+  resetStudies(); // studies outlive the panel (module state): each test starts with none
   vi.restoreAllMocks();
 });
 
@@ -90,5 +92,18 @@ describe('the What if tab', () => {
     expect(screen.getByRole<HTMLButtonElement>('button', { name: 'Run' }).disabled).toBe(true);
     expect(screen.getByText(/Steps: a whole number from 2 to 1000/)).toBeTruthy();
     await waitFor(() => expect(screen.queryByRole('table', { name: 'Study results per value' })).toBeNull());
+  });
+
+  it('keeps the study and the fields typed while another tab is open', async () => {
+    const { user } = await openStudies();
+    await user.selectOptions(screen.getByRole('combobox', { name: /vary/i }), "emissivity of 'crown'");
+    await setField(user, /^steps/i, '3');
+    await user.click(screen.getByRole('button', { name: 'Run' }));
+    await user.click(screen.getByRole('tab', { name: 'Surfaces' }));
+    await user.click(screen.getByRole('tab', { name: 'What if' }));
+    const table = await screen.findByRole('table', { name: 'Study results per value' });
+    expect(within(table).getAllByRole('row')).toHaveLength(4);
+    expect(screen.getByRole<HTMLInputElement>('textbox', { name: /^steps/i }).value).toBe('3');
+    expect(screen.getByRole<HTMLSelectElement>('combobox', { name: /vary/i }).value).toBe('crown.emissivity');
   });
 });

@@ -4,3 +4,13 @@ export { studyChoices, suggestedRange, type StudyChoice } from './choices';
 export { runStudy, type SolveAnswer, type StudyReply, type StudyRequest, type SweepTable } from './run';
 export { startStudy, type RunningStudy } from './start';
 export { QUANTITIES, QUANTITY_UNIT, type Quantity } from '../../document/study';
+export {
+  resetStudies,
+  startStudyRun,
+  stopStudyRun,
+  useStudyField,
+  useStudyPart,
+  type FinalReply,
+  type PartState,
+  type StudyPart,
+} from './runs';

@@ -1,7 +1,7 @@
 // "Aim for a value": the value of the chosen parameter, within the range, at
 // which one surface's result equals a number (scan, then Brent's method).
 import { useId, useState } from 'react';
-import { QUANTITIES, QUANTITY_UNIT, type Quantity } from '../../state/study';
+import { QUANTITIES, QUANTITY_UNIT, useStudyField, type Quantity } from '../../state/study';
 import type { CheckedSketch } from '../../state/documentApi';
 import { useStudyRun } from './useStudyRun';
 
@@ -22,11 +22,12 @@ interface Props {
 
 export function AimForValue({ sketch, doc, names, address, range }: Props) {
   const id = useId();
-  const [surface, setSurface] = useState(names[0] ?? '');
-  const [quantity, setQuantity] = useState<Quantity>('netHeat');
-  const [target, setTarget] = useState('');
+  const [surface, setSurface] = useStudyField('aim surface', names[0] ?? '');
+  const [quantityText, setQuantity] = useStudyField('aim quantity', 'netHeat');
+  const quantity: Quantity = QUANTITIES.find((q) => q === quantityText) ?? 'netHeat';
+  const [target, setTarget] = useStudyField('aim value', '');
   const [problem, setProblem] = useState<string | null>(null);
-  const run = useStudyRun();
+  const run = useStudyRun('aim');
   const chosen = names.includes(surface) ? surface : (names[0] ?? '');
 
   const find = () => {
@@ -67,7 +68,7 @@ export function AimForValue({ sketch, doc, names, address, range }: Props) {
         </label>
         <label>
           Result{' '}
-          <select value={quantity} onChange={(e) => setQuantity(e.target.value as Quantity)}>
+          <select value={quantity} onChange={(e) => setQuantity(e.target.value)}>
             {QUANTITIES.map((q) => (
               <option key={q} value={q}>
                 {QUANTITY_WORDS[q]} ({QUANTITY_UNIT[q]})

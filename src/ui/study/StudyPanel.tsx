@@ -4,7 +4,7 @@
 import { useId, useMemo, useState } from 'react';
 import { useApp, useDocumentApi } from '../AppContext';
 import { selectDoc } from '../../state/selectors';
-import { studyChoices, suggestedRange } from '../../state/study';
+import { studyChoices, suggestedRange, useStudyField } from '../../state/study';
 import { downloadText } from '../chrome/download';
 import { AimForValue } from './AimForValue';
 import { StudyPlot } from './StudyPlot';
@@ -30,13 +30,14 @@ export function StudyPanel() {
   const sketch = read.ok ? read.sketch : null;
   const choices = useMemo(() => (sketch ? studyChoices(sketch) : []), [sketch]);
   const names = useMemo(() => (sketch ? api.toScene(sketch).surfaceNames : []), [api, sketch]);
-  const [address, setAddress] = useState('');
+  const [address, setAddress] = useStudyField('address', '');
   const choice = choices.find((c) => c.address === address) ?? choices[0];
-  const [texts, setTexts] = useState<{ address: string; from: string; to: string } | null>(null);
-  const [stepsText, setStepsText] = useState('11');
+  // The range typed, for the parameter it was typed for ("address\nfrom\nto").
+  const [rangeText, setRangeText] = useStudyField('range', '');
+  const [stepsText, setStepsText] = useStudyField('steps', '11');
   const [result, setResult] = useState<'netHeat' | 'temperature'>('netHeat');
   const [hidden, setHidden] = useState<ReadonlySet<string>>(new Set());
-  const run = useStudyRun();
+  const run = useStudyRun('sweep');
 
   if (!sketch)
     return <p className="hint">The sketch has problems to fix first (see the canvas); then studies can run.</p>;
@@ -44,10 +45,12 @@ export function StudyPanel() {
 
   // The range fields follow the chosen parameter until the user types in them.
   const suggested = suggestedRange(choice).map((v) => String(Number(v.toPrecision(6))));
+  const typed = rangeText.split('\n');
   const fields =
-    texts && texts.address === choice.address
-      ? texts
-      : { address: choice.address, from: suggested[0], to: suggested[1] };
+    typed.length === 3 && typed[0] === choice.address
+      ? { from: typed[1], to: typed[2] }
+      : { from: suggested[0], to: suggested[1] };
+  const setFields = (from: string, to: string) => setRangeText([choice.address, from, to].join('\n'));
   const range = readRange(fields.from, fields.to, stepsText);
   const reply = run.final?.reply;
   const table = reply?.kind === 'sweep' ? reply.table : null;
@@ -94,7 +97,7 @@ export function StudyPanel() {
               value={fields.from}
               size={8}
               aria-label={`From${unitText}`}
-              onChange={(e) => setTexts({ ...fields, from: e.target.value })}
+              onChange={(e) => setFields(e.target.value, fields.to)}
             />
           </label>
           <label>
@@ -103,7 +106,7 @@ export function StudyPanel() {
               value={fields.to}
               size={8}
               aria-label={`To${unitText}`}
-              onChange={(e) => setTexts({ ...fields, to: e.target.value })}
+              onChange={(e) => setFields(fields.from, e.target.value)}
             />
           </label>
           <label>
