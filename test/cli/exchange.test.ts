@@ -418,6 +418,8 @@ describe('exchange FILE: options and formats', () => {
       'netHeat',
       'netFlux',
       'radiosity',
+      'convectionHeat',
+      'suppliedHeat',
     ]);
     expect(j.surfaces.map((s: { name: string }) => s.name)).toEqual(['floor', 'right', 'roof', 'left', 'block']);
     expect(j.exchange).toHaveLength(5);
