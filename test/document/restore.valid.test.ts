@@ -2,6 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { readdirSync, readFileSync } from 'node:fs';
 import { restore, serialize, toScene, UNITS, METRES_PER_UNIT, type Sketch } from '../../src/document';
 
+/** The parsed JSON of a sketch text, typed loosely for editing in a test. */
+type LooseDoc = Record<string, unknown> & { shapes: Record<string, unknown>[]; version?: unknown };
+const parsed = (text: string): LooseDoc => JSON.parse(text) as LooseDoc;
+
 // The minimal file of the format description (README, "The sketch file").
 const minimalText = `{
   "version": 1,
@@ -70,12 +74,12 @@ describe('restore reads valid sketches', () => {
   });
 
   it('reads an object as well as text, without changing it', () => {
-    const doc = deepFreeze(JSON.parse(minimalText));
+    const doc = deepFreeze(parsed(minimalText));
     expect(sketchOf(doc).sketch).toEqual(sketchOf(minimalText).sketch);
   });
 
   it('accepts every unit, a byte-order mark, CRLF line ends, either winding, and an open sketch', () => {
-    for (const units of UNITS) expect(sketchOf({ ...JSON.parse(minimalText), units }).sketch.units).toBe(units);
+    for (const units of UNITS) expect(sketchOf({ ...parsed(minimalText), units }).sketch.units).toBe(units);
     expect(METRES_PER_UNIT.in).toBe(0.0254); // exact by definition (international inch, 1959; common practice)
     expect(sketchOf(`\uFEFF${minimalText.replace(/\n/g, '\r\n')}`).sketch.shapes).toHaveLength(2);
     const cw = {
@@ -126,7 +130,7 @@ describe('restore reads valid sketches', () => {
 
   it('keeps settings and all surface conditions', () => {
     const doc = {
-      ...JSON.parse(minimalText),
+      ...parsed(minimalText),
       surfaces: {
         floor: { emissivity: 1, temperature: 1100 },
         roof: { heatFlux: -2500 },
@@ -217,7 +221,7 @@ describe('restore repairs and warns', () => {
 
   it('warns about properties on a surface name no edge uses, and unknown fields', () => {
     const doc = {
-      ...JSON.parse(minimalText),
+      ...parsed(minimalText),
       surfaces: { flor: { emissivity: 0.8 } },
       colour: 'red',
       settings: { dpeth: 2 },
@@ -232,14 +236,14 @@ describe('restore repairs and warns', () => {
   });
 
   it('warns that an opening ignores emissivity (it acts as black)', () => {
-    const doc = { ...JSON.parse(minimalText), surfaces: { right: { opening: true, emissivity: 0.5 } } };
+    const doc = { ...parsed(minimalText), surfaces: { right: { opening: true, emissivity: 0.5 } } };
     expect(sketchOf(doc).warnings).toEqual([
       "surface 'right': emissivity 0.5 is ignored; an opening acts as a black surface",
     ]);
   });
 
   it('warns about an opening on a solid (openings are gaps in the enclosure wall)', () => {
-    const doc = { ...JSON.parse(minimalText), surfaces: { block: { opening: true } } };
+    const doc = { ...parsed(minimalText), surfaces: { block: { opening: true } } };
     expect(sketchOf(doc).warnings).toEqual([
       "surface 'block' is an opening but lies on a solid (shape 2); openings are gaps in the enclosure wall",
     ]);
@@ -284,9 +288,9 @@ describe('toScene', () => {
 
 describe('serialize', () => {
   it('writes version 2 that reads back to the same sketch', () => {
-    const { sketch } = sketchOf({ ...JSON.parse(minimalText), settings: { depth: 2.5 } });
+    const { sketch } = sketchOf({ ...parsed(minimalText), settings: { depth: 2.5 } });
     const text = serialize(sketch);
-    expect(JSON.parse(text).version).toBe(2);
+    expect(parsed(text).version).toBe(2);
     expect(text).toContain('"surface": "block"'); // one name when all edges share it
     expect(text).toContain('"points": [[0, 0], [4, 0], [4, 2], [0, 2]]');
     expect(sketchOf(text).sketch).toEqual(sketch);
