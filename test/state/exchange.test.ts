@@ -4,7 +4,14 @@ import { startLiveResults, type JobRunner } from '../../src/state/results/live';
 import { LIVE_SOLVE_LIMIT, startLiveExchange } from '../../src/state/exchange/live';
 import { documentApi } from '../../src/state/documentApi';
 import { setVertex } from '../../src/state/edits/shapeEdits';
-import { setCondition, setEmissivity, setSettings, setSurfaceProps } from '../../src/state/exchange/edits';
+import {
+  linkChoices,
+  setCondition,
+  setConvection,
+  setEmissivity,
+  setSettings,
+  setSurfaceProps,
+} from '../../src/state/exchange/edits';
 import type { ExchangeSolved } from '../../src/state/exchange/slice';
 import { demoSketch } from '../../src/state/demo';
 import type { SketchFile } from '../../src/state/sketchFile';
@@ -359,5 +366,59 @@ describe('exchange edits', () => {
     expect(doc.settings).toEqual({ surroundingsTemperature: 293.15 });
     doc = setSettings(doc, { surroundingsTemperature: undefined });
     expect('settings' in doc).toBe(false);
+  });
+});
+
+describe('surface balance edits', () => {
+  const wall = {
+    kind: 'wall' as const,
+    layers: [{ thickness: 0.2, conductivity: 1 }],
+    outsideTemperature: 300,
+    outsideCoefficient: 10,
+  };
+
+  it('a wall, a tube and a link are conditions like the others: one at a time, emissivity and convection kept', () => {
+    let doc = setConvection(squares, 'outer', 12);
+    doc = setCondition(doc, 'outer', wall);
+    expect(doc.surfaces?.outer).toEqual({
+      emissivity: 0.8,
+      convectionCoefficient: 12,
+      wall: { layers: [{ thickness: 0.2, conductivity: 1 }], outsideTemperature: 300, outsideCoefficient: 10 },
+    });
+    const tube = {
+      fluidTemperature: 600,
+      insideCoefficient: 900,
+      outerDiameter: 0.1,
+      innerDiameter: 0.08,
+      wallConductivity: 40,
+    };
+    doc = setCondition(doc, 'outer', { kind: 'tube', ...tube });
+    expect(doc.surfaces?.outer).toEqual({ emissivity: 0.8, convectionCoefficient: 12, tube });
+    doc = setConvection(doc, 'outer', undefined);
+    expect(doc.surfaces?.outer).toEqual({ emissivity: 0.8, tube });
+    // The same wall again is no change (no undo step), though it is a new object.
+    const walled = setCondition(squares, 'outer', wall);
+    expect(setCondition(walled, 'outer', { ...wall, layers: [{ thickness: 0.2, conductivity: 1 }] })).toBe(walled);
+  });
+
+  it('a linked face may name only a used face with no condition of its own that no other face names', () => {
+    const plate: SketchFile = {
+      ...squares,
+      shapes: [squares.shapes[0], { ...squares.shapes[1], surface: ['bottom', 'end', 'top', 'end'] }],
+      surfaces: { outer: { temperature: 500 } },
+    };
+    expect(linkChoices(plate, 'top')).toEqual(['bottom', 'end']);
+    const linked = setCondition(plate, 'top', { kind: 'linked', surface: 'bottom' });
+    expect(linked.surfaces?.top).toEqual({ linked: 'bottom' });
+    expect(linkChoices(linked, 'end')).toEqual([]); // bottom is taken, top has its own condition, outer is held
+    expect(linkChoices(linked, 'top')).toEqual(['bottom', 'end']);
+    expect(documentApi.restore(linked).ok).toBe(true);
+  });
+
+  it('the gas temperature is a setting like the others', () => {
+    let doc = setSettings(squares, { gasTemperature: 1400, depth: 2 });
+    expect(doc.settings).toEqual({ gasTemperature: 1400, depth: 2 });
+    doc = setSettings(doc, { gasTemperature: undefined });
+    expect(doc.settings).toEqual({ depth: 2 });
   });
 });
