@@ -21,7 +21,7 @@ export type RestoreResult = { ok: true; sketch: Sketch; warnings: string[] } | {
 /**
  * A document read as a draft: the file format is right (JSON, version, schema),
  * but the sketch may break a rule of its own (crossing outlines, overlapping
- * bodies, a surface list of the wrong length, too many edges). `doc` is the
+ * bodies, a surface list of the wrong length, a coordinate out of range). `doc` is the
  * sketch as written (normalised when `problems` is empty); `problems` are what
  * `restore` would refuse it for, with their places.
  */
@@ -37,9 +37,9 @@ export type DraftResult =
  */
 export function restore(input: unknown): RestoreResult {
   return guarded(() => {
-    const read = readFormat(input, true);
+    const read = readFormat(input);
     if (!read.ok) return read;
-    const checked = checkSketch(read.doc, read.raw);
+    const checked = checkSketch(read.doc);
     if (!checked.ok) return refuse(checked.problems);
     return { ok: true, sketch: checked.sketch, warnings: [...read.warnings, ...checked.warnings] };
   });
@@ -50,13 +50,13 @@ export function restore(input: unknown): RestoreResult {
  * a sketch whose file format is right but whose drawing breaks a rule, as a
  * draft with its problems (so a sketch saved mid-edit opens again as it was).
  * Refuses only what is not a sketch file at all (not JSON, wrong version,
- * fields of the wrong type, past the file-size limit).
+ * fields of the wrong type) or is past the file-size or edge limit.
  */
 export function readDraft(input: unknown): DraftResult {
   return guarded(() => {
-    const read = readFormat(input, false);
+    const read = readFormat(input);
     if (!read.ok) return read;
-    const checked = checkSketch(read.doc, read.raw);
+    const checked = checkSketch(read.doc);
     if (checked.ok)
       return { ok: true, doc: checked.sketch, problems: [], warnings: [...read.warnings, ...checked.warnings] };
     return { ok: true, doc: read.doc, problems: refuse(checked.problems).errors, warnings: read.warnings };
@@ -75,12 +75,10 @@ function guarded<T>(
   }
 }
 
-type FormatRead =
-  | { ok: true; doc: SketchFileV1; raw: Record<string, unknown>; warnings: string[] }
-  | { ok: false; errors: SketchProblem[] };
+type FormatRead = { ok: true; doc: SketchFileV1; warnings: string[] } | { ok: false; errors: SketchProblem[] };
 
 /** From text or value to a schema-valid document, or the reasons it is not a sketch file. */
-function readFormat(input: unknown, quickLimit: boolean): FormatRead {
+function readFormat(input: unknown): FormatRead {
   let value = input;
   if (typeof input === 'string') {
     const parsed = parseJsonText(input);
@@ -93,10 +91,10 @@ function readFormat(input: unknown, quickLimit: boolean): FormatRead {
   if (!migrated.ok) return refuse([problemAt('version', migrated.error)]);
   const doc = migrated.doc;
 
-  // Refused before the schema runs, so a huge file is turned away quickly; a
-  // draft is still read whole (the file-size limit bounds the work).
+  // Refused before the schema runs, so a huge file is turned away quickly. Not
+  // even a draft: the canvas could not draw it (the app warns when a sketch grows past it).
   const limit = edgeLimitProblem(doc.shapes);
-  if (limit && quickLimit) return refuse([limit]);
+  if (limit) return refuse([limit]);
 
   const surfaces = doc.surfaces;
   if (surfaces !== null && typeof surfaces === 'object' && Object.hasOwn(surfaces, '__proto__')) {
@@ -110,15 +108,13 @@ function readFormat(input: unknown, quickLimit: boolean): FormatRead {
   }
   const parsed = sketchFileSchemaV1.safeParse(doc, { reportInput: true });
   if (!parsed.success) return refuse(parsed.error.issues.map((issue) => schemaProblem(issue, doc)));
-  return { ok: true, doc: parsed.data, raw: doc, warnings: unknownFieldWarnings(doc) };
+  return { ok: true, doc: parsed.data, warnings: unknownFieldWarnings(doc) };
 }
 
 type SketchCheck = { ok: true; sketch: Sketch; warnings: string[] } | { ok: false; problems: SketchProblem[] };
 
-/** The rules of a drawing: edge limit, one name per edge, coordinate range, geometry. */
-function checkSketch(doc: SketchFileV1, raw: Record<string, unknown>): SketchCheck {
-  const limit = edgeLimitProblem(raw.shapes);
-  if (limit) return { ok: false, problems: [limit] };
+/** The rules of a drawing: one name per edge, coordinate range, edge lengths, geometry. */
+function checkSketch(doc: SketchFileV1): SketchCheck {
   const normalised = normalise(doc);
   if (normalised.errors.length > 0) return { ok: false, problems: normalised.errors };
   const { sketch, fileIndex, filePointCount } = normalised;

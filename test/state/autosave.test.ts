@@ -126,6 +126,25 @@ describe('autosave', () => {
     stop();
   });
 
+  it('a sketch grown past the edge limit is not written (it would not open); the user is told, with the limit', () => {
+    const storage = new MemoryStorage();
+    const store = createAppStore(box);
+    const stop = startAutosave(store, storage, documentApi);
+    store.getState().edit((d) => setVertex(d, 0, 2, [40, 30]));
+    const good = storage.getItem(AUTOSAVE_KEY);
+    // A 5001-sided polygon: one edge past the documented limit of 5000.
+    const n = 5001;
+    const ring = Array.from({ length: n }, (_, k): [number, number] => [
+      Math.cos((2 * Math.PI * k) / n),
+      Math.sin((2 * Math.PI * k) / n),
+    ]);
+    store.getState().edit((d) => ({ ...d, shapes: [{ kind: 'enclosure', points: ring, surface: 'wall' }] }));
+    expect(storage.getItem(AUTOSAVE_KEY)).toBe(good);
+    const paused = store.getState().notices.find((n) => n.text.startsWith('Autosave paused'));
+    expect(paused?.text).toContain('5001 edges; the limit is 5000');
+    stop();
+  });
+
   it('saves a drag once, when it ends', () => {
     const storage = new MemoryStorage();
     const store = createAppStore(box);
