@@ -22,18 +22,21 @@ table.data{border-collapse:collapse;font-size:8.5pt;margin:1mm 0}
 table.data caption{text-align:left;font-size:8.5pt;color:#55616a;padding-bottom:0.5mm}
 table.data th,table.data td{border:0.5pt solid #c3c9cc;padding:0.4mm 1.4mm;vertical-align:top}
 table.data thead th{background:#eef1f2;font-weight:600;text-align:left;max-width:24mm;overflow-wrap:break-word}
-table.data tbody th{text-align:left;font-weight:600;max-width:34mm;overflow-wrap:break-word}
-table.data td.num{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}
+table.data tbody th{text-align:left;font-weight:600;max-width:42mm;overflow-wrap:break-word}
+table.data td{white-space:nowrap}
+table.data td.wrap{white-space:normal;min-width:24mm}
+table.data th.nowrap{white-space:nowrap}
+table.data td.num{text-align:right;font-variant-numeric:tabular-nums}
 .note{font-size:8.5pt;color:#37434b;margin:1mm 0}
 .method p{margin:1mm 0;font-size:8.5pt}
-.refs{font-size:8pt;color:#37434b;margin:1mm 0;padding-left:5mm}
+.refs{font-size:8pt;color:#37434b;margin:1mm 0}
 .caution{margin-top:3mm;border:1pt solid #b5651d;background:#fff6ec;padding:1.5mm 2.5mm;font-size:8.5pt}
 .failed{border-left:2pt solid #b5651d;padding-left:2mm}
 .warning{font-size:8.5pt;color:#7a2e00;margin:1mm 0}
 .pair{display:flex;flex-wrap:wrap;gap:0 5mm;align-items:flex-start}
 .pair>section{flex:1 1 80mm;min-width:0}
 .pair>section.profiles{flex:0 1 auto}
-@page{margin:9mm}
+@page{margin:8mm}
 @media print{
   body{font-size:7.5pt;line-height:1.2}
   .meta{grid-template-columns:auto 1fr auto 1fr}
@@ -48,6 +51,8 @@ table.data td.num{text-align:right;font-variant-numeric:tabular-nums;white-space
   .top figure svg{max-height:50mm}
   table.data{font-size:7pt;line-height:1.1;margin:0.5mm 0}
   table.data th,table.data td{padding:0.1mm 1mm}
+  table.data.wide{font-size:6.5pt}
+  table.data.wide th,table.data.wide td{padding:0.1mm 0.6mm}
   .note,.warning,.method p,.refs,.caution,table.data caption{font-size:7pt}
   .caution{margin-top:1.5mm;padding:1mm 2mm}
   table.data,figure,.caution{break-inside:avoid}

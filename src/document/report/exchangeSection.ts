@@ -88,7 +88,9 @@ export const NET_HEAT_COLUMNS: SurfaceColumn[] = [
     head: () => 'layers (K)',
     when: (ex) => some(ex, 'wall'),
     cell: (ex, i) =>
-      ex.conditions[i].kind === 'wall' ? text(layerTemperaturesCell(ex.result.layerTemperatures[i])) : blank(),
+      ex.conditions[i].kind === 'wall'
+        ? { text: layerTemperaturesCell(ex.result.layerTemperatures[i]), wrap: true }
+        : blank(),
     surroundings: blank,
   },
   {

@@ -57,6 +57,11 @@ function givenValue(p: SurfaceProperties | undefined): Cell {
   return text('');
 }
 
+/** The given value as a cell that may wrap (walls and tubes take a sentence). */
+function givenCell(p: SurfaceProperties | undefined): Cell {
+  return { ...givenValue(p), wrap: true };
+}
+
 export function inputsSection(sketch: Sketch, names: ReadonlyArray<string>, lengths: ArrayLike<number>): string {
   const edges = new Map<string, number>();
   for (const shape of sketch.shapes) for (const n of shape.surface) edges.set(n, (edges.get(n) ?? 0) + 1);
@@ -80,7 +85,7 @@ export function inputsSection(sketch: Sketch, names: ReadonlyArray<string>, leng
       num(length8(lengths[i]), lengths[i]),
       emissivity,
       text(isDefault ? `${condition} (default)` : condition),
-      givenValue(p),
+      givenCell(p),
       ...(convection ? [h === undefined ? text('') : num(sig6(h), h)] : []),
     ];
   });

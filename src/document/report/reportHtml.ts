@@ -142,7 +142,7 @@ export function reportHtml({ source, sketch, names, factors }: ReportInput): str
     heat.profiles,
     '<section class="method"><h2>Method</h2>',
     METHOD_TEXT.map((s) => `<p>${escapeMarkup(s)}</p>`).join(''),
-    `<ol class="refs">${REFERENCES.map((r) => `<li>${escapeMarkup(r)}</li>`).join('')}</ol></section></div>`,
+    `<p class="refs">References: ${REFERENCES.map((r, k) => `[${k + 1}] ${escapeMarkup(r)}`).join(' ')}</p></section></div>`,
     `<aside class="caution" role="note"><strong>Caution:</strong> ${escapeMarkup(REPORT_CAUTION)}</aside>`,
     '</main></body></html>',
     '',

@@ -12,6 +12,8 @@ export interface Cell {
   header?: boolean;
   /** Hover text. */
   title?: string;
+  /** Long text that may wrap (other cells stay on one line). */
+  wrap?: boolean;
 }
 
 export const text = (t: string): Cell => ({ text: t });
@@ -30,10 +32,15 @@ export interface TableSpec {
   rowKeys?: ReadonlyArray<string>;
 }
 
+/** Names longer than this may wrap in a row header; shorter ones stay on one line (fewer, shorter rows in print). */
+const SHORT_NAME = 18;
+
 function cell(c: Cell, tag: 'th' | 'td', scope?: string): string {
   const attrs: string[] = [];
+  if (scope === 'row' && c.text.length <= SHORT_NAME) attrs.push('class="nowrap"');
   if (scope) attrs.push(`scope="${scope}"`);
   if (c.value !== undefined) attrs.push(`class="num" data-value="${String(c.value)}"`);
+  else if (c.wrap) attrs.push('class="wrap"');
   if (c.title) attrs.push(`title="${escapeMarkup(c.title)}"`);
   return `<${tag}${attrs.length ? ` ${attrs.join(' ')}` : ''}>${escapeMarkup(c.text)}</${tag}>`;
 }
@@ -45,7 +52,9 @@ export function htmlTable(spec: TableSpec): string {
     const open = key === undefined ? '<tr>' : `<tr data-surface="${escapeMarkup(key)}">`;
     return `${open}${row.map((c) => (c.header ? cell(c, 'th', 'row') : cell(c, 'td'))).join('')}</tr>`;
   });
-  const cls = ['data', spec.className].filter(Boolean).join(' ');
+  // Many columns: smaller type in print, so the table keeps to the page's width.
+  const wide = spec.head.length > 10 ? 'wide' : '';
+  const cls = ['data', spec.className, wide].filter(Boolean).join(' ');
   const caption = spec.caption ? `<caption>${escapeMarkup(spec.caption)}</caption>` : '';
   return `<table class="${cls}" data-table="${escapeMarkup(spec.name)}">${caption}${head}<tbody>${rows.join('')}</tbody></table>`;
 }
