@@ -5,8 +5,8 @@ import { shapesOfSurface, type StudyParameter } from './parameter';
 
 /**
  * The sketch with the parameter set to `value` (units: K, W/m^2, m, or the file's
- * length units for positions). A position moves the whole shape so that the
- * centre of its bounding box is at `value`. The input is not changed; the
+ * length units for positions and radii). A position moves the whole shape so that
+ * the centre of its bounding box (a circle's centre) is at `value`; a radius is a circle's. The input is not changed; the
  * result still has to be checked (restore) like any edited file.
  */
 export function withParameterValue(sketch: Sketch, p: StudyParameter, value: number): Sketch {
@@ -19,6 +19,13 @@ export function withParameterValue(sketch: Sketch, p: StudyParameter, value: num
   const [index] = shapesOfSurface(sketch, p.surface);
   const shapes = sketch.shapes.map((shape, k) => {
     if (k !== index) return shape;
+    const circle = shape.circle;
+    if (circle) {
+      // A circle: its radius, or its centre.
+      if (p.measure === 'radius') return { ...shape, circle: { ...circle, radius: value } };
+      const center: [number, number] = axis === 0 ? [value, circle.center[1]] : [circle.center[0], value];
+      return { ...shape, circle: { ...circle, center } };
+    }
     const shift = value - boundingBoxCentre(shape.points, axis);
     return {
       ...shape,
@@ -36,8 +43,10 @@ export function parameterValue(sketch: Sketch, p: StudyParameter): number | unde
   if (p.kind === 'surface')
     return Object.hasOwn(sketch.surfaces, p.surface) ? sketch.surfaces[p.surface][p.property] : undefined;
   const [index] = shapesOfSurface(sketch, p.surface);
-  if (index === undefined || p.measure === 'radius') return undefined;
-  return boundingBoxCentre(sketch.shapes[index].points, p.measure === 'y' ? 1 : 0);
+  if (index === undefined) return undefined;
+  const { circle, points } = sketch.shapes[index];
+  if (circle) return p.measure === 'radius' ? circle.radius : circle.center[p.measure === 'y' ? 1 : 0];
+  return p.measure === 'radius' ? undefined : boundingBoxCentre(points, p.measure === 'y' ? 1 : 0);
 }
 
 /** Middle of the points' extent along one axis (0 = x, 1 = y), file units. */

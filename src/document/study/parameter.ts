@@ -2,6 +2,8 @@
 // line writes them: `SURFACE.PROPERTY` (split on the last '.', so surface names
 // may hold dots and spaces), `settings.surroundingsTemperature`, `settings.depth`,
 // and `SURFACE.QUANTITY=VALUE` for a target (split on the last '=').
+import { conditionOf } from '../exchange/conditions';
+import { CONDITION_LABEL } from '../exchange/labels';
 import { formatNumber, quoteName } from '../labels';
 import type { Sketch } from '../schema';
 import type { Units } from '../units';
@@ -131,11 +133,11 @@ export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[]
     return `the sketch has no surface named ${quoteName(p.surface)}; its surfaces: ${some}${surfaceNames.length > 6 ? ', …' : ''}`;
   }
   if (p.kind === 'shape') {
-    if (p.measure === 'radius')
-      return `${quoteName(p.surface)} is not a circle: only a round tube has a radius to vary (this sketch file has polygons only)`;
     const shapes = shapesOfSurface(sketch, p.surface);
     if (shapes.length > 1)
       return `${quoteName(p.surface)} names edges of ${shapes.length} shapes (${shapes.map((k) => k + 1).join(', ')}); to move one, give it a surface name of its own`;
+    if (p.measure === 'radius' && !sketch.shapes[shapes[0]].circle)
+      return `${quoteName(p.surface)} is not on a circle: only a round tube (a circle shape) has a radius to vary`;
     return null;
   }
   const props = Object.hasOwn(sketch.surfaces, p.surface) ? sketch.surfaces[p.surface] : undefined;
@@ -149,8 +151,12 @@ export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[]
 }
 
 function conditionWords(props: Sketch['surfaces'][string] | undefined): string {
-  if (props?.temperature !== undefined) return 'held at a temperature';
-  if (props?.heatFlux !== undefined) return 'given a heat flux';
-  if (props?.opening === true) return 'an opening';
-  return 'adiabatic';
+  const given = conditionOf(props);
+  if (!given.ok) return `given ${given.kinds.length} conditions`;
+  const kind = given.condition?.kind ?? 'adiabatic';
+  return kind === 'temperature'
+    ? 'held at a temperature'
+    : kind === 'heatFlux'
+      ? 'given a heat flux'
+      : `${CONDITION_LABEL[kind]}`;
 }

@@ -1,6 +1,6 @@
 // What the studies panel offers to vary in the current sketch: each surface's
 // emissivity and held temperature or heat flux, the position of each shape
-// that has a surface name of its own, and the settings. Addresses are those of
+// that has a surface name of its own (and a circle's radius), and the settings. Addresses are those of
 // the command line (`hearth.temperature`), so a study reads the same in both.
 import {
   describeParameter,
@@ -31,7 +31,7 @@ export function studyChoices(sketch: CheckedSketch): StudyChoice[] {
   const names = documentApi.toScene(sketch).surfaceNames;
   const addresses: string[] = [];
   for (const name of names) for (const p of ['temperature', 'heatFlux', 'emissivity']) addresses.push(`${name}.${p}`);
-  for (const name of names) for (const p of ['x', 'y']) addresses.push(`${name}.${p}`);
+  for (const name of names) for (const p of ['x', 'y', 'radius']) addresses.push(`${name}.${p}`);
   addresses.push('settings.surroundingsTemperature', 'settings.depth');
   const choices: StudyChoice[] = [];
   for (const address of addresses) {
