@@ -99,7 +99,11 @@ export function splitSurfaceParts(doc: SketchFile, name: string, parts: number):
       const b = shape.points[(k + 1) % shape.points.length];
       for (let i = 1; i < parts; i++) {
         const t = i / parts;
-        points.push([a[0] + (b[0] - a[0]) * t, a[1] + (b[1] - a[1]) * t]);
+        // 15 digits: a third of 2.4 reads 0.8, not 0.7999999999999999.
+        points.push([
+          Number((a[0] + (b[0] - a[0]) * t).toPrecision(15)),
+          Number((a[1] + (b[1] - a[1]) * t).toPrecision(15)),
+        ]);
         surface.push(name);
       }
     });

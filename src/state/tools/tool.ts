@@ -4,6 +4,7 @@
 // A new tool is a module implementing DrawingTool plus a line in registry.ts.
 import type { Point } from '../sketchFile';
 import type { AppState } from '../store';
+import type { NumberRule } from '../edits/numberInput';
 
 export interface PointerInfo {
   /** Pointer position in sketch units. */
@@ -52,6 +53,8 @@ export type ToolSetting =
       type: 'integer';
       label: string;
       title: string;
+      /** Allowed values; the field refuses others with a message. */
+      rule?: NumberRule;
       read: (s: AppState) => number;
       write: (s: AppState, value: number) => void;
     };
@@ -69,7 +72,7 @@ export interface DrawingTool<G extends object = object, Id extends string = stri
   /** What the tool expects, for the status line, the tooltip and the help. */
   hint: string;
   cursor: 'default' | 'crosshair';
-  /** Show every vertex handle, not only the selected ones. */
+  /** Show every vertex handle of the selected shapes, not only the picked vertices. */
   showsAllHandles?: boolean;
   settings?: readonly ToolSetting[];
   init(): G;

@@ -3,11 +3,13 @@
 import { twoPointTool, makesSetting } from './twoPointTool';
 import { regularPolygon } from './quickShapes';
 import type { ToolSetting } from './tool';
+import { TUBE_SIDES_RULE } from '../edits/numberInput';
 
 const sidesSetting: ToolSetting = {
   type: 'integer',
   label: 'sides',
   title: 'Number of sides of the tube polygon (3 to 256)',
+  rule: TUBE_SIDES_RULE,
   read: (s) => s.tubeSides,
   write: (s, n) => s.setTubeSides(n),
 };

@@ -11,6 +11,7 @@ interface Props {
   doc: SketchFile;
   camera: Camera;
   selection: Pick[];
+  /** Show every vertex handle of the shapes the selection touches (the select tool); else only picked vertices. */
   showAll: boolean;
 }
 
@@ -77,11 +78,13 @@ export const HandlesLayer = memo(function HandlesLayer({ doc, camera, selection,
   const selectedVertex = new Set(
     selection.filter((p) => p.type === 'vertex').map((p) => `${p.shape}:${(p as { index: number }).index}`),
   );
+  // Handles only on the selected shapes: unselected tubes show their outline, not a ring of squares.
+  const touched = new Set(selection.map((p) => p.shape));
   const handles: ReactElement[] = [];
   doc.shapes.forEach((shape, s) =>
     shape.points.forEach((q, k) => {
       const on = selectedVertex.has(`${s}:${k}`);
-      if (!showAll && !on) return;
+      if (!on && !(showAll && touched.has(s))) return;
       const [x, y] = toScreen(camera, q);
       handles.push(
         on ? (

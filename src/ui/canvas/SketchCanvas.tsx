@@ -25,12 +25,14 @@ import { GridLayer } from './GridLayer';
 import { ShapesLayer } from './ShapesLayer';
 import { HandlesLayer } from './HandlesLayer';
 import { DraftLayer } from './DraftLayer';
+import { NamesLayer } from './NamesLayer';
 import { ProblemLayer } from './ProblemLayer';
 import { HeatLayer } from '../exchange/HeatLayer';
 import { HeatLegend } from '../exchange/HeatLegend';
 
 const selectGridStep = (s: AppState) => s.gridStep;
 const selectSetCamera = (s: AppState) => s.setCamera;
+const selectShowNames = (s: AppState) => s.showNames;
 
 export function SketchCanvas() {
   const { ref, width, height } = useElementSize<HTMLDivElement>();
@@ -44,6 +46,7 @@ export function SketchCanvas() {
   const gridStep = useApp(selectGridStep);
   const fitRequest = useApp(selectFitRequest);
   const setCamera = useApp(selectSetCamera);
+  const showNames = useApp(selectShowNames);
   const store = useAppStore();
   const results = useApp(selectViewFactors);
   const selected = useSelectedSurfaces();
@@ -83,6 +86,7 @@ export function SketchCanvas() {
           <GridLayer camera={camera} width={width} height={height} step={gridStep} />
           <ShapesLayer doc={doc} camera={camera} order={order} emphasis={emphasis} problemShapes={problems.shapes} />
           <HeatLayer doc={doc} camera={camera} />
+          {showNames && <NamesLayer doc={doc} camera={camera} colours={order} emphasis={emphasis} />}
           <HandlesLayer doc={doc} camera={camera} selection={selection} showAll={active.showsAllHandles ?? false} />
           <DraftLayer tool={tool} draft={draft} hover={hover} camera={camera} />
           <ProblemLayer marks={problems} camera={camera} />

@@ -29,8 +29,9 @@ export function HelpOverlay() {
         <h2 id="help-title">Drawing and shortcuts</h2>
         <p>
           Draw one enclosure (the walls, radiating inwards) and any number of bodies inside it (radiating outwards).
-          Every edge starts as its own surface; select edges with shift and group them into one named surface in the
-          Edit tab. The matrix updates while you drag.
+          Each drawn body or tube is one surface ("body 2", "tube 3"); the enclosure's sides are named by where they are
+          (floor, roof, left wall, right wall). Split a surface into its edges or into equal parts, or join surfaces, in
+          the Surfaces tab. Copy, repeat, flip and the tube row are in the Edit tab. The matrix updates while you drag.
         </p>
         <table className="keys">
           <caption>Keyboard shortcuts</caption>

@@ -4,12 +4,15 @@ import type { AppState } from '../../state/store';
 import type { ToolSetting } from '../../state/tools/tool';
 import { toolRegistry } from '../../state/tools/registry';
 import { NumberField } from '../inspector/NumberField';
+import { GRID_STEP_RULE } from '../../state/edits/numberInput';
 
 const selectToolbar = (s: AppState) => ({
   tool: s.tool,
   snap: s.snap,
   gridStep: s.gridStep,
   units: s.doc.units,
+  showNames: s.showNames,
+  setShowNames: s.setShowNames,
   setTool: s.setTool,
   setSnap: s.setSnap,
   setGridStep: s.setGridStep,
@@ -29,6 +32,7 @@ function IntegerSetting({ setting }: { setting: Setting<'integer'> }) {
       value={value}
       onCommit={(n) => setting.write(store.getState(), n)}
       width="3.5em"
+      rule={setting.rule}
       integer
     />
   );
@@ -82,11 +86,15 @@ export function Toolbar() {
       </label>
       <NumberField
         label={`grid (${t.units})`}
-        title="Grid step in the sketch's units"
+        title={`Grid step in the sketch's units (${GRID_STEP_RULE.min} to ${GRID_STEP_RULE.max})`}
         value={t.gridStep}
         onCommit={t.setGridStep}
+        rule={GRID_STEP_RULE}
         width="4.5em"
       />
+      <label className="inline" title="Surface names beside each surface on the canvas (N)">
+        <input type="checkbox" checked={t.showNames} onChange={(e) => t.setShowNames(e.target.checked)} /> names
+      </label>
       <button type="button" title="Fit the sketch in view (F)" onClick={t.requestFit}>
         Fit
       </button>

@@ -39,6 +39,12 @@ export function useShortcuts(): void {
         saveSketchFile(store, api);
         return;
       }
+      if (mod && (key === 'c' || key === 'v' || key === 'd')) {
+        // Copy and paste act on shapes here; text fields (returned above) keep the browser's own.
+        const done = key === 'c' ? controller.copy() : key === 'v' ? controller.paste() : controller.duplicate();
+        if (done || key === 'd') e.preventDefault();
+        return;
+      }
       if (mod && key === 'o') {
         e.preventDefault();
         document.getElementById(OPEN_INPUT_ID)?.click();
@@ -68,6 +74,10 @@ export function useShortcuts(): void {
       }
       if (key === 'f') {
         s.requestFit();
+        return;
+      }
+      if (key === 'n') {
+        s.setShowNames(!s.showNames);
         return;
       }
       const tool = toolRegistry.byShortcut(key);

@@ -7,6 +7,9 @@ import { groupEdges } from '../../state/edits/surfaceEdits';
 import { shapeTitle } from './shapeTitle';
 import { VertexRow } from './VertexRow';
 import { fmtLength } from '../matrix/format';
+import { ShapeCommands } from './ShapeCommands';
+import { TubeRowForm } from './TubeRowForm';
+import { PointsPaste } from './PointsPaste';
 
 export function SelectionPanel() {
   const doc = useApp(selectDoc);
@@ -17,11 +20,16 @@ export function SelectionPanel() {
   const u = doc.units;
   if (!selection.length) {
     return (
-      <p className="hint">
-        Nothing selected. Click a vertex, an edge or inside a shape with the Select tool (V); shift-click to add more.
-      </p>
+      <div className="selection-panel">
+        <p className="hint">
+          Nothing selected. Click a vertex, an edge or inside a shape with the Select tool (V); shift-click to add more.
+        </p>
+        <ShapeCommands shapes={0} />
+        <TubeRowForm />
+      </div>
     );
   }
+  const touched = new Set(selection.map((p) => p.shape)).size;
   const edges = selection.filter((p) => p.type === 'edge');
   const vertices = selection.filter((p) => p.type === 'vertex');
   const shapes = selection.filter((p) => p.type === 'shape');
@@ -118,6 +126,7 @@ export function SelectionPanel() {
                 <VertexRow key={k} shape={p.shape} index={k} point={q} units={u} />
               ))}
             </div>
+            <PointsPaste shape={p.shape} />
           </div>
         );
       })}
@@ -131,6 +140,8 @@ export function SelectionPanel() {
           Delete selected
         </button>
       )}
+      <ShapeCommands shapes={touched} />
+      <TubeRowForm />
     </div>
   );
 }

@@ -1,0 +1,61 @@
+import { memo } from 'react';
+import { Layer, Text } from 'react-konva';
+import type { Camera } from '../../state/viewSlice';
+import type { SketchFile } from '../../state/sketchFile';
+import { edgeEnds, edgeLength, edgeNames, radiatingNormal } from '../../state/geometry/polygon';
+import { toScreen } from '../../state/camera';
+import { surfaceStyle } from '../palette';
+
+interface Props {
+  doc: SketchFile;
+  camera: Camera;
+  colours: ReadonlyMap<string, number>;
+  emphasis: Set<string>;
+}
+
+/** Label box width, px; the text is centred in it. */
+const BOX = 180;
+/** Distance of a label from its edge, px, on the radiating side. */
+const GAP = 14;
+
+/** Each surface's name once, beside the middle of its longest edge on the side that radiates. */
+export const NamesLayer = memo(function NamesLayer({ doc, camera, colours, emphasis }: Props) {
+  const best = new Map<string, { shape: number; edge: number; length: number }>();
+  doc.shapes.forEach((shape, s) =>
+    edgeNames(shape).forEach((name, k) => {
+      const length = edgeLength(shape, k);
+      const b = best.get(name);
+      if (!b || length > b.length) best.set(name, { shape: s, edge: k, length });
+    }),
+  );
+  return (
+    <Layer listening={false}>
+      {[...best].map(([name, b]) => {
+        const shape = doc.shapes[b.shape];
+        const [a, c] = edgeEnds(shape, b.edge);
+        const [x, y] = toScreen(camera, [(a[0] + c[0]) / 2, (a[1] + c[1]) / 2]);
+        const n = radiatingNormal(shape, b.edge);
+        const st = surfaceStyle(colours.get(name) ?? 0);
+        return (
+          <Text
+            key={name}
+            text={name}
+            x={x + n[0] * GAP - BOX / 2}
+            y={y - n[1] * GAP - 7}
+            width={BOX}
+            align="center"
+            fontSize={12}
+            fontStyle={emphasis.has(name) ? 'bold' : 'normal'}
+            fontFamily="system-ui, sans-serif"
+            fill={st.colour}
+            stroke="#ffffff"
+            strokeWidth={3}
+            fillAfterStrokeEnabled
+            wrap="none"
+            ellipsis
+          />
+        );
+      })}
+    </Layer>
+  );
+});
