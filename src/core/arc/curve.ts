@@ -84,3 +84,28 @@ export function angleOffset(t: number, from: number): number {
   if (u < 0) u += turn;
   return u;
 }
+
+/**
+ * May the direction (ux, uy) (any length) from p meet target `tg`? Visible runs lie
+ * inside the target's cone of directions, so objects and alignments outside it cannot
+ * bound one. Angles in radians, with a margin of 1e-9 that keeps directions in doubt.
+ */
+export function towardTarget(tg: Curve, px: number, py: number, ux: number, uy: number): boolean {
+  const slack = 1e-9;
+  if (tg.isArc && !tg.solid) return true; // a shell surrounds p
+  if (tg.isArc) {
+    const fx = tg.cx - px,
+      fy = tg.cy - py;
+    const d = Math.hypot(fx, fy);
+    if (!(d > tg.r)) return true;
+    const off = Math.abs(Math.atan2(fx * uy - fy * ux, fx * ux + fy * uy));
+    return off <= Math.asin(tg.r / d) + slack;
+  }
+  const ax = tg.ax - px,
+    ay = tg.ay - py,
+    bx = tg.bx - px,
+    by = tg.by - py;
+  const span = Math.atan2(ax * by - ay * bx, ax * bx + ay * by);
+  const toDir = Math.atan2(ax * uy - ay * ux, ax * ux + ay * uy);
+  return span >= 0 ? toDir >= -slack && toDir <= span + slack : toDir <= slack && toDir >= span - slack;
+}

@@ -1,10 +1,10 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient } from '../orient';
-import { Curve } from './curve';
+import { Curve, towardTarget } from './curve';
 import { convexHull, PairScene } from './pairScene';
 import { PieceView } from './pieceView';
-import { commonTangents, CurveBreaks, touchAngles } from './tangents';
+import { commonTangents, CurveBreaks, touchAngles, type EventFilter } from './tangents';
 
 // Exact view factor between two curves (segments or arcs of exact circles), blocked
 // by circles and polygons. Seen from a point p of the emitter, the target's visible
@@ -18,7 +18,7 @@ import { commonTangents, CurveBreaks, touchAngles } from './tangents';
 // change of a taut string wrapped on the circle, at the horizon to +-1/2 ds
 // (crossed strings generalised; Hottel; Modest, Radiative Heat Transfer, ch. 4).
 
-export class CurvedPairIntegrator {
+export class CurvedPairIntegrator implements EventFilter {
   private readonly em = new Curve();
   private readonly tg = new Curve();
   private readonly scene: PairScene;
@@ -32,6 +32,7 @@ export class CurvedPairIntegrator {
     obstacles: ObstacleIndex,
   ) {
     this.scene = new PairScene(E, obstacles);
+    this.breaks.filter = this;
     this.view = new PieceView(E.arcs);
   }
 
@@ -129,7 +130,7 @@ export class CurvedPairIntegrator {
       for (let b = a + 1; b < nP; b++) {
         const dx = P[2 * b] - ax,
           dy = P[2 * b + 1] - ay;
-        if (dx !== 0 || dy !== 0) B.addLine(em, ax, ay, dx, dy);
+        if (dx !== 0 || dy !== 0) B.addEvent(em, ax, ay, dx, dy, P[2 * b], P[2 * b + 1]);
       }
       // The target arc's own ends lie on its circle: their tangent lines are added below.
       const ownEnd = tg.isArc && a >= nP - 2 && tg.span < 2 * Math.PI;
@@ -139,19 +140,19 @@ export class CurvedPairIntegrator {
         for (let s = 0; s < 2; s++) {
           const tx = A.cx[c] + A.r[c] * Math.cos(this.touch[s]) - ax,
             ty = A.cy[c] + A.r[c] * Math.sin(this.touch[s]) - ay;
-          if (tx !== 0 || ty !== 0) B.addLine(em, ax, ay, tx, ty);
+          if (tx !== 0 || ty !== 0) B.addEvent(em, ax, ay, tx, ty, ax + tx, ay + ty);
         }
       }
       // The horizon of an arc (its tangent at p) meets the point.
       if (em.isArc && touchAngles(ax, ay, em.cx, em.cy, em.r, this.touch)) {
-        B.addAngle(em, this.touch[0]);
-        B.addAngle(em, this.touch[1]);
+        B.addHorizonEvent(em, this.touch[0], ax, ay);
+        B.addHorizonEvent(em, this.touch[1], ax, ay);
       }
     }
     if (tg.isArc && tg.solid && tg.span < 2 * Math.PI) {
       // Where p lies on the tangent at an end of the target arc, the end takes over from the tangent.
-      B.addLine(em, tg.ax, tg.ay, -Math.sin(tg.start), Math.cos(tg.start));
-      B.addLine(em, tg.bx, tg.by, -Math.sin(tg.start + tg.span), Math.cos(tg.start + tg.span));
+      B.addEvent(em, tg.ax, tg.ay, -Math.sin(tg.start), Math.cos(tg.start), tg.ax, tg.ay);
+      B.addEvent(em, tg.bx, tg.by, -Math.sin(tg.start + tg.span), Math.cos(tg.start + tg.span), tg.bx, tg.by);
     }
     const L = this.lines;
     for (let x = 0; x < circles.length; x++) {
@@ -159,18 +160,74 @@ export class CurvedPairIntegrator {
       for (let y = x + 1; y < circles.length; y++) {
         const d = circles[y];
         const n = commonTangents(A.cx[c], A.cy[c], A.r[c], A.cx[d], A.cy[d], A.r[d], L);
-        for (let k = 0; k < n; k++)
-          B.addLine(em, -L[3 * k + 2] * L[3 * k], -L[3 * k + 2] * L[3 * k + 1], -L[3 * k + 1], L[3 * k]);
+        for (let k = 0; k < n; k++) {
+          const nx = L[3 * k],
+            ny = L[3 * k + 1],
+            w = L[3 * k + 2];
+          // Each circle touches the line at the foot of the perpendicular from its centre.
+          const fc = nx * A.cx[c] + ny * A.cy[c] + w,
+            fd = nx * A.cx[d] + ny * A.cy[d] + w;
+          const tcx = A.cx[c] - fc * nx,
+            tcy = A.cy[c] - fc * ny;
+          B.addEvent(em, tcx, tcy, -ny, nx, A.cx[d] - fd * nx, A.cy[d] - fd * ny);
+        }
       }
       if (em.isArc) {
         // Circles whose common tangent with the emitter's circle is the horizon at p.
         const n = commonTangents(em.cx, em.cy, em.r, A.cx[c], A.cy[c], A.r[c], L);
-        for (let k = 0; k < n; k++) B.addAngle(em, Math.atan2(-L[3 * k + 1], -L[3 * k]));
+        for (let k = 0; k < n; k++) {
+          const nx = L[3 * k],
+            ny = L[3 * k + 1];
+          const fc = nx * A.cx[c] + ny * A.cy[c] + L[3 * k + 2];
+          B.addHorizonEvent(em, Math.atan2(-ny, -nx), A.cx[c] - fc * nx, A.cy[c] - fc * ny);
+        }
       }
     }
     // Arc pieces span at most a quarter turn, so each chord is shorter than its arc's diameter.
     if (em.isArc) for (let k = 1; k < 4; k++) B.addAngle(em, em.start + (k * em.span) / 4);
     B.sort();
+  }
+
+  /**
+   * Can the alignment of objects at (x1, y1) and (x2, y2) seen from p change the
+   * visible runs? Not when an object lies clearly behind the emitter, when the two
+   * lie in opposite directions from p, or when the nearer one is hidden strictly
+   * behind a solid circle (then, near p and near that direction, neither object can
+   * bound a run). Float tests with margins that keep the event in doubt.
+   */
+  keeps(px: number, py: number, nx: number, ny: number, x1: number, y1: number, x2: number, y2: number): boolean {
+    const u1x = x1 - px,
+      u1y = y1 - py,
+      u2x = x2 - px,
+      u2y = y2 - py;
+    const d1 = Math.hypot(u1x, u1y),
+      d2 = Math.hypot(u2x, u2y);
+    const slack = 1e-9;
+    if (u1x * nx + u1y * ny < -slack * d1 || u2x * nx + u2y * ny < -slack * d2) return false;
+    if (u1x * u2x + u1y * u2y < -slack * d1 * d2) return false;
+    const near = d1 <= d2;
+    const t = near ? d1 : d2;
+    if (!(t > 0)) return true;
+    const ux = (near ? u1x : u2x) / t,
+      uy = (near ? u1y : u2y) / t;
+    if (!towardTarget(this.tg, px, py, ux, uy)) return false;
+    const circles = this.scene.circles;
+    for (let q = 0; q < circles.length; q++) if (this.hides(circles[q], px, py, ux, uy, t)) return false;
+    if (this.tg.isArc && this.tg.solid && this.hides(this.tg.circle, px, py, ux, uy, t)) return false;
+    return true;
+  }
+
+  /** Does solid circle k strictly hide the point at distance t along the unit direction (ux, uy) from p? */
+  private hides(k: number, px: number, py: number, ux: number, uy: number, t: number): boolean {
+    const A = this.E.arcs,
+      slack = 1e-9;
+    const fx = A.cx[k] - px,
+      fy = A.cy[k] - py;
+    const along = fx * ux + fy * uy;
+    if (along <= 0) return false;
+    const h = Math.abs(fx * uy - fy * ux),
+      r = A.r[k] * (1 - slack);
+    return h < r && along - Math.sqrt((r - h) * (r + h)) < t * (1 - slack);
   }
 
   /** Sum of the exact piece integrals between consecutive breakpoints. */

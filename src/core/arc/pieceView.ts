@@ -1,7 +1,7 @@
 import { distanceChange } from '../pairGeometry';
 import { orient } from '../orient';
 import type { ArcSet } from './arcs';
-import type { Curve } from './curve';
+import { towardTarget, type Curve } from './curve';
 import type { PairScene } from './pairScene';
 
 // The visible runs of the target from the middle of one emitter piece, and their
@@ -68,7 +68,7 @@ export class PieceView {
       const ux = P[2 * k] - pmx,
         uy = P[2 * k + 1] - pmy;
       const c = ux * nx + uy * ny;
-      if (c > 0) {
+      if (c > 0 && towardTarget(tg, pmx, pmy, ux, uy)) {
         angle.push(Math.atan2(ux * tx + uy * ty, c));
         id.push(k);
       }
@@ -88,7 +88,7 @@ export class PieceView {
         const ux = A.cx[k] + r * Math.cos(th) - pmx,
           uy = A.cy[k] + r * Math.sin(th) - pmy;
         const c = ux * nx + uy * ny;
-        if (c > 0) {
+        if (c > 0 && (k === tg.circle || towardTarget(tg, pmx, pmy, ux, uy))) {
           angle.push(Math.atan2(ux * tx + uy * ty, c));
           id.push(nP + 2 * x + s);
         }

@@ -1,3 +1,4 @@
+import { sortPrefix } from '../scratch';
 import { angleOffset, type Curve } from './curve';
 
 // Lines that touch circles, and where such lines cross the emitting curve. Sketch
@@ -58,10 +59,69 @@ export function touchAngles(px: number, py: number, cx: number, cy: number, r: n
   return true;
 }
 
+/**
+ * Decides whether an alignment event can matter: p on the emitter (unit normal n
+ * there; zero for a horizon event) lines up with objects at (x1, y1) and (x2, y2).
+ */
+export interface EventFilter {
+  keeps(px: number, py: number, nx: number, ny: number, x1: number, y1: number, x2: number, y2: number): boolean;
+}
+
 /** Breakpoints along an emitting curve: parameters (segment: fraction from a; arc: angle from its start). */
 export class CurveBreaks {
   at = new Float64Array(64);
   count = 0;
+  /** Set per pair: events it rejects make no breakpoint. */
+  filter: EventFilter | null = null;
+  // The objects of the event being added.
+  private x1 = 0;
+  private y1 = 0;
+  private x2 = 0;
+  private y2 = 0;
+
+  /** The line through (x1, y1) with direction (ux, uy), lining up objects at (x1, y1) and (x2, y2). */
+  addEvent(cur: Curve, x1: number, y1: number, ux: number, uy: number, x2: number, y2: number): void {
+    this.x1 = x1;
+    this.y1 = y1;
+    this.x2 = x2;
+    this.y2 = y2;
+    this.addLine(cur, x1, y1, ux, uy);
+  }
+
+  /** A point of an arc emitter whose horizon lines up with the object at (x, y). */
+  addHorizonEvent(cur: Curve, t: number, x: number, y: number): void {
+    const u = angleOffset(t, cur.start);
+    if (!(u > 0 && u < cur.span)) return;
+    const px = cur.cx + cur.r * Math.cos(t),
+      py = cur.cy + cur.r * Math.sin(t);
+    if (this.filter && !this.filter.keeps(px, py, 0, 0, x, y, x, y)) return;
+    this.push(u);
+  }
+
+  private consider(cur: Curve, u: number): void {
+    const f = this.filter;
+    if (!f) {
+      this.push(u);
+      return;
+    }
+    let px: number, py: number, nx: number, ny: number;
+    if (cur.isArc) {
+      const t = cur.start + u;
+      const c = Math.cos(t),
+        s = Math.sin(t);
+      px = cur.cx + cur.r * c;
+      py = cur.cy + cur.r * s;
+      const side = cur.solid ? 1 : -1;
+      nx = side * c;
+      ny = side * s;
+    } else {
+      px = cur.ax + u * (cur.bx - cur.ax);
+      py = cur.ay + u * (cur.by - cur.ay);
+      nx = -(cur.by - cur.ay) / cur.length;
+      ny = (cur.bx - cur.ax) / cur.length;
+    }
+    if (f.keeps(px, py, nx, ny, this.x1, this.y1, this.x2, this.y2)) this.push(u);
+  }
 
   reset(): void {
     this.count = 0;
@@ -84,7 +144,7 @@ export class CurveBreaks {
       const den = ex * uy - ey * ux;
       if (den === 0) return;
       const s = ((px - cur.ax) * uy - (py - cur.ay) * ux) / den;
-      if (s > 0 && s < 1) this.push(s);
+      if (s > 0 && s < 1) this.consider(cur, s);
       return;
     }
     const len = Math.hypot(ux, uy);
@@ -100,8 +160,10 @@ export class CurveBreaks {
     const h2 = (cur.r - Math.hypot(mx, my)) * (cur.r + Math.hypot(mx, my));
     if (!(h2 > 0)) return;
     const h = Math.sqrt(h2);
-    this.addAngle(cur, Math.atan2(my + h * dy, mx + h * dx));
-    this.addAngle(cur, Math.atan2(my - h * dy, mx - h * dx));
+    for (let side = -1; side <= 1; side += 2) {
+      const u = angleOffset(Math.atan2(my + side * h * dy, mx + side * h * dx), cur.start);
+      if (u > 0 && u < cur.span) this.consider(cur, u);
+    }
   }
 
   /** A point of the arc given by its angle about the arc's centre. */
@@ -110,17 +172,8 @@ export class CurveBreaks {
     if (u > 0 && u < cur.span) this.push(u);
   }
 
-  /** Sort the breakpoints ascending (short lists: insertion sort). */
+  /** Sort the breakpoints ascending. */
   sort(): void {
-    const a = this.at;
-    for (let k = 1; k < this.count; k++) {
-      const v = a[k];
-      let m = k - 1;
-      while (m >= 0 && a[m] > v) {
-        a[m + 1] = a[m];
-        m--;
-      }
-      a[m + 1] = v;
-    }
+    sortPrefix(this.at, this.count);
   }
 }
