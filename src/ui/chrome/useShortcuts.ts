@@ -63,7 +63,11 @@ export function useShortcuts(): void {
       const deleting = e.key === 'Delete' || e.key === 'Backspace';
       if (deleting) e.preventDefault();
       // The active tool first: Enter finishes an outline, Delete while drawing drops its last point.
-      if (controller.key(e.key)) return;
+      if (controller.key(e.key)) {
+        // The tool took it (Enter placing a typed point): a focused button must not also be pressed.
+        e.preventDefault();
+        return;
+      }
       if (deleting) {
         controller.deleteSelection();
         return;
