@@ -7,6 +7,7 @@ import { checkSketchGeometry } from '../core/sketchChecks';
 import type { PolygonInput } from '../core/scene';
 import { circleProblem, renumberFinding, splitShapes } from './circles';
 import { geometryProblem } from './geometryMessages';
+import { plainName } from './labels';
 import { parseJsonText } from './jsonText';
 import { MAX_EDGES, MAX_MESSAGES } from './limits';
 import { migrate } from './migrate';
@@ -182,7 +183,7 @@ function notASketch(value: unknown): string | null {
         ? 'an empty object'
         : `fields ${keys
             .slice(0, 4)
-            .map((k) => JSON.stringify(k))
+            .map((k) => JSON.stringify(plainName(k, 40)))
             .join(', ')}${keys.length > 4 ? ', …' : ''}`;
     return `not a Tautline sketch: found ${found}; ${expected}`;
   }

@@ -139,6 +139,10 @@ describe('bounded reading', () => {
     );
   });
 
+  it('a megabyte field name in a file that is not a sketch: a short message', () => {
+    refusedWith(`{"${'k'.repeat(1 << 20)}":1}`, /not a Tautline sketch: found fields "k+…"/);
+  });
+
   it('a megabyte unknown field name is only a short warning', () => {
     const read = restore(`{"version":1,"units":"m","shapes":[],"${'k'.repeat(1 << 20)}":1}`);
     expect(read.ok).toBe(true);

@@ -37,6 +37,8 @@ export const STACK_LINE = /^\s+at .+:\d+/m;
 /** A message for people: some words, no leaked internals. */
 export function expectMessage(text: string): void {
   expect(text.trim().length).toBeGreaterThan(5);
+  // Bounded: long names are cut in messages (a notice lists at most a few messages).
+  expect(text.length).toBeLessThan(2000);
   expect(text).not.toMatch(/\bundefined\b|\[object Object\]/);
   expect(text).not.toMatch(STACK_LINE);
 }
