@@ -2,6 +2,7 @@ import type { MatrixView } from '../../state/matrixView';
 import { matrixTsv, shownCsv } from '../../state/matrixExport';
 import type { ShownResult } from '../../state/results/derive';
 import { NumberField } from '../inspector/NumberField';
+import { DIGITS_RULE } from '../../state/edits/numberInput';
 import { downloadText } from '../chrome/download';
 import { useApp } from '../AppContext';
 import type { AppState } from '../../state/store';
@@ -37,6 +38,7 @@ export function MatrixControls({
         value={digits}
         onCommit={setDigits}
         width="3em"
+        rule={DIGITS_RULE}
         integer
       />
       <button
