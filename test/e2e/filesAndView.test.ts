@@ -39,13 +39,11 @@ describe('files and view', () => {
     expect(saved.version).toBe(1);
     expect(saved.shapes).toHaveLength(5);
     const before = (await state()).doc;
-    await page
-      .locator('input[type=file]')
-      .setInputFiles({
-        name: 'broken.json',
-        mimeType: 'application/json',
-        buffer: Buffer.from('{"version": 7, "units": "m", "shapes": []}'),
-      });
+    await page.locator('input[type=file]').setInputFiles({
+      name: 'broken.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from('{"version": 7, "units": "m", "shapes": []}'),
+    });
     await expect
       .poll(() => page.getByRole('alert').first().innerText())
       .toMatch(/Could not open "broken\.json".*version/s);
