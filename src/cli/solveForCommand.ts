@@ -27,8 +27,9 @@ const SOLVE_FOR_HELP = `${SOLVE_FOR_USAGE}
 The value of one parameter, between A and B, at which a result of one surface
 equals VALUE.
   --vary SURFACE.PROPERTY   as for sweep: temperature, emissivity, heatFlux,
-                            x, y of a surface, or settings.surroundingsTemperature,
-                            settings.depth
+                            convectionCoefficient, x, y, radius of a surface,
+                            or settings.surroundingsTemperature,
+                            settings.gasTemperature, settings.depth
   --target SURFACE.QUANTITY=VALUE
                             QUANTITY: netHeat (W/m), netFlux (W/m^2),
                             temperature (K), radiosity (W/m^2); split on the

@@ -31,10 +31,13 @@ const SWEEP_HELP = `${SWEEP_USAGE}
 The gray-diffuse heat exchange at N evenly spaced values of one parameter,
 from A to B (both included).
   --vary SURFACE.PROPERTY   PROPERTY: temperature (K), emissivity, heatFlux
-                            (W/m^2) of a surface, or x, y (the centre of the
-                            shape's bounding box, file units) to move the shape
-                            that SURFACE belongs to; or settings.surroundingsTemperature
-                            (K), settings.depth (m). Quote names with spaces.
+                            (W/m^2), convectionCoefficient (W/(m^2 K)) of a
+                            surface; x, y (the centre of the shape's bounding
+                            box, a circle's centre; file units) to move the
+                            shape SURFACE belongs to; radius of a circle; or
+                            settings.surroundingsTemperature (K),
+                            settings.gasTemperature (K), settings.depth (m).
+                            Quote names with spaces.
   --from A --to B           the range, in the parameter's unit
   --steps N                 number of values, at least 2
   --json                    {"values": [...], "runs": [...]}: each run is what

@@ -101,6 +101,25 @@ describe('sweep --json: each run is exchange --json of the edited file', () => {
   });
 });
 
+describe('sweep --json over convection inputs (file version 2)', () => {
+  // The hearth and the ware lose heat to a gas at 900 K as well as by radiation.
+  function convective(h = 15, gas = 900) {
+    const file = kiln() as Kiln & { version: number };
+    file.version = 2;
+    (file.surfaces.hearth as Record<string, number>).convectionCoefficient = h;
+    (file.surfaces['ware stack.2'] as Record<string, number>).convectionCoefficient = 8;
+    file.settings.gasTemperature = gas;
+    return file;
+  }
+  it.each([
+    ['hearth.convectionCoefficient', 5, 40, (v: number) => convective(v)],
+    ['settings.gasTemperature', 800, 1000, (v: number) => convective(15, v)],
+  ] as const)('%s', (vary, from, to, edited) => {
+    const got = sweep(convective(), vary, from, to, 3);
+    got.values.forEach((v, k) => expect(got.runs[k]).toEqual(exchangeOf(edited(v))));
+  });
+});
+
 describe('sweep --csv and the table', () => {
   it('one row per value with every surface net heat and temperature, matching --json', () => {
     const argv = [

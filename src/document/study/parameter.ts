@@ -8,8 +8,8 @@ import { formatNumber, quoteName } from '../labels';
 import type { Sketch } from '../schema';
 import type { Units } from '../units';
 
-export const SURFACE_PROPERTIES = ['temperature', 'emissivity', 'heatFlux'] as const;
-export const SETTINGS = ['surroundingsTemperature', 'depth'] as const;
+export const SURFACE_PROPERTIES = ['temperature', 'emissivity', 'heatFlux', 'convectionCoefficient'] as const;
+export const SETTINGS = ['surroundingsTemperature', 'depth', 'gasTemperature'] as const;
 /** A shape's position (x, y: the centre of its bounding box) and, for circles, the radius. */
 export const SHAPE_MEASURES = ['x', 'y', 'radius'] as const;
 export const QUANTITIES = ['netHeat', 'netFlux', 'temperature', 'radiosity'] as const;
@@ -75,6 +75,7 @@ export function parseTarget(text: string): Parsed<StudyTarget> {
 export function parameterUnit(p: StudyParameter, units: Units): string {
   if (p.kind === 'setting') return p.setting === 'depth' ? 'm' : 'K';
   if (p.kind === 'shape') return units;
+  if (p.property === 'convectionCoefficient') return 'W/(m^2 K)';
   return p.property === 'temperature' ? 'K' : p.property === 'heatFlux' ? 'W/m^2' : '';
 }
 
@@ -85,7 +86,17 @@ export const QUANTITY_UNIT: Readonly<Record<Quantity, string>> = {
   radiosity: 'W/m^2',
 };
 
-const PROPERTY_WORDS = { temperature: 'temperature', emissivity: 'emissivity', heatFlux: 'heat flux' } as const;
+const PROPERTY_WORDS = {
+  temperature: 'temperature',
+  emissivity: 'emissivity',
+  heatFlux: 'heat flux',
+  convectionCoefficient: 'convection coefficient',
+} as const;
+const SETTING_WORDS = {
+  surroundingsTemperature: 'the surroundings temperature',
+  depth: 'the depth',
+  gasTemperature: 'the gas temperature',
+} as const;
 const MEASURE_WORDS = { x: 'position x', y: 'position y', radius: 'radius' } as const;
 const QUANTITY_WORDS: Readonly<Record<Quantity, string>> = {
   netHeat: 'net heat',
@@ -96,7 +107,7 @@ const QUANTITY_WORDS: Readonly<Record<Quantity, string>> = {
 
 /** "temperature of 'hearth'", "the surroundings temperature", "position x of the shape of 'block'". */
 export function describeParameter(p: StudyParameter): string {
-  if (p.kind === 'setting') return p.setting === 'depth' ? 'the depth' : 'the surroundings temperature';
+  if (p.kind === 'setting') return SETTING_WORDS[p.setting];
   if (p.kind === 'shape') return `${MEASURE_WORDS[p.measure]} of the shape of ${quoteName(p.surface)}`;
   return `${PROPERTY_WORDS[p.property]} of ${quoteName(p.surface)}`;
 }

@@ -30,19 +30,23 @@ export interface StudyChoice {
 export function studyChoices(sketch: CheckedSketch): StudyChoice[] {
   const names = documentApi.toScene(sketch).surfaceNames;
   const addresses: string[] = [];
-  for (const name of names) for (const p of ['temperature', 'heatFlux', 'emissivity']) addresses.push(`${name}.${p}`);
+  for (const name of names)
+    for (const p of ['temperature', 'heatFlux', 'emissivity', 'convectionCoefficient']) addresses.push(`${name}.${p}`);
   for (const name of names) for (const p of ['x', 'y', 'radius']) addresses.push(`${name}.${p}`);
-  addresses.push('settings.surroundingsTemperature', 'settings.depth');
+  addresses.push('settings.surroundingsTemperature', 'settings.depth', 'settings.gasTemperature');
   const choices: StudyChoice[] = [];
   for (const address of addresses) {
     const parsed = parseParameter(address);
     if (!parsed.ok || parameterProblem(sketch, names, parsed.value)) continue;
     const p: StudyParameter = parsed.value;
+    const current = parameterValue(sketch, p);
+    // Convection and the gas temperature are offered where the file uses them (one needs the other).
+    if (current === undefined && /\.(convectionCoefficient|gasTemperature)$/.test(address)) continue;
     choices.push({
       address,
       label: describeParameter(p),
       unit: parameterUnit(p, sketch.units),
-      current: parameterValue(sketch, p),
+      current,
       geometry: p.kind === 'shape',
     });
   }
