@@ -26,7 +26,8 @@ export function syntheticFactors(
   const S = new Float64Array(n * n);
   for (let i = 0; i < n; i++) {
     for (let j = i + 1; j < n; j++) {
-      const v = random() < 0.3 ? 0 : random() * random();
+      // Neighbours always see each other, so the section is one connected enclosure.
+      const v = j !== i + 1 && random() < 0.3 ? 0 : 1e-3 + random() * random();
       S[i * n + j] = v;
       S[j * n + i] = v;
     }

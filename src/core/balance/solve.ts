@@ -164,7 +164,7 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
         jacobian.factor({ minReciprocalCondition: 1e-15 });
       } catch (err) {
         if (err instanceof LinearSolveError)
-          return exchangeFailure('singular', { value: err.reciprocalCondition || 0 });
+          return exchangeFailure('balance-singular', { value: err.reciprocalCondition || 0 });
         throw err;
       }
       for (let a = 0; a < m; a++) step[a] = -residual[a];

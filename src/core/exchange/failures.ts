@@ -70,6 +70,8 @@ export type ExchangeFailureCode =
   | 'inner-diameter-out-of-range'
   /** `surface` is linked to `other`, which is not a surface linked back to it (`other` absent: no such surface). */
   | 'link-not-mutual'
+  /** The balance's Jacobian is singular: some surfaces that see only each other are tied to no known temperature. `value` = its estimated reciprocal condition number. */
+  | 'balance-singular'
   /** Damped Newton stopped without meeting the balance: `value` = largest residual / sum of A_i J_i, `expected` = iterations. */
   | 'no-convergence'
   /** `surface`'s balance would need a temperature below absolute zero (it must give off more than it can): `value` = the last temperature tried, K. */

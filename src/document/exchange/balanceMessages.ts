@@ -50,6 +50,8 @@ export function balanceFailureMessage(
       return failure.other === undefined
         ? `${at}: linked names no surface of the sketch`
         : `${at}: linked to ${surface(failure.other)}, which is not linked back to it (a plate has two faces, each linked once)`;
+    case 'balance-singular':
+      return 'no unique answer: the surface balance is singular; check that every group of surfaces that see only each other has a surface held at a temperature, a wall, a tube, convection, an opening or a view to the surroundings';
     case 'no-convergence':
       return `no answer: the surface balance did not converge in ${formatNumber(failure.expected ?? Number.NaN)} iterations (largest residual ${(failure.value ?? Number.NaN).toExponential(1)} of the radiation leaving all surfaces); check for conditions that contradict each other`;
     case 'balance-below-absolute-zero':

@@ -182,6 +182,17 @@ describe('refusals are codes with the surface and the number', () => {
     expect(solveBalance({ ...base, conditions: [flux, { kind: 'adiabatic' }, flux], ...gas }).ok).toBe(true);
   });
 
+  it('a surface that sees only itself and is tied to nothing known has no unique answer', () => {
+    // Surface 1 sees only itself (F11 = 1): its net radiation is 0 whatever its temperature, so a supplied flux cannot balance.
+    const r = solveBalance({
+      viewFactors: [1, 0, 0, 1],
+      area: [1, 1],
+      emissivity: [0.5, 0.5],
+      conditions: [held, { kind: 'heatFlux', heatFlux: 100 }],
+    });
+    expect(r.ok ? 'solved' : r.code).toBe('balance-singular');
+  });
+
   it('a surface that must give off more than it receives is named, not answered', () => {
     expect(refuse([held, { kind: 'heatFlux', heatFlux: -1e7 }, { kind: 'adiabatic' }])).toMatchObject({
       code: 'flux-below-absolute-zero',
