@@ -1,10 +1,10 @@
 // Seeded benchmark of the view-factor core: `npm run bench`.
 // Prints min and median wall time of a full edge matrix per scene size, the growth
 // from one size to the next, and the memory of the edge matrix.
-import { buildEdges } from '../../src/core/edges';
+import { buildEdges, totalEdgeCount } from '../../src/core/edges';
 import { edgeViewFactors } from '../../src/core/viewFactors';
 import type { SceneInput } from '../../src/core/scene';
-import { tubeScene } from './scenes';
+import { furnaceScene, tubeScene } from './scenes';
 import { demoSketch } from '../../src/state/demo';
 import { restore, toScene } from '../../src/document';
 import { DenseLuSolver } from '../../src/core/exchange';
@@ -18,8 +18,8 @@ function demoScene(): SceneInput {
 }
 
 function time(scene: SceneInput, repeats: number): { min: number; median: number; edges: number; rowWorst: number } {
-  const edges = buildEdges(scene.polygons);
-  const n = edges.count;
+  const edges = buildEdges(scene.polygons, scene.circles);
+  const n = totalEdgeCount(edges);
   const matrix = new Float64Array(n * n);
   const times: number[] = [];
   // Untimed runs first, so the engine has compiled the hot loop (as in a long drag).
@@ -83,6 +83,26 @@ console.log(
   `peak resident memory ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (the 1600-edge matrix is ${((1600 * 1600 * 8) / 1e6).toFixed(1)} MB)`,
 );
 for (const v of verdicts) console.log(v);
+
+// Exact circles against polygon tubes: the same 50-tube furnace section, timed in
+// alternation (one round each, in turn) so a busy machine slows both alike.
+{
+  const rounds = quick ? 3 : 9;
+  const exact: number[] = [],
+    polygon: number[] = [];
+  const circles = furnaceScene(0),
+    gons = furnaceScene(24);
+  for (let r = 0; r < rounds; r++) {
+    exact.push(time(circles, 1).min);
+    polygon.push(time(gons, 1).min);
+  }
+  const median = (a: number[]) => [...a].sort((x, y) => x - y)[a.length >> 1];
+  const e = median(exact),
+    g = median(polygon);
+  console.log(
+    `50-tube furnace section: exact circles median ${e.toFixed(0)} ms, 24-sided tubes median ${g.toFixed(0)} ms (target: circles no slower): ${e <= g ? 'met' : 'NOT met'}`,
+  );
+}
 
 // Other targets: reading a 1600-edge sketch file (validation included) and the
 // dense solve behind heat exchange at 2000 surfaces ("well under a second").

@@ -53,3 +53,31 @@ export function tubeScene(seed: number, tubes: number, sides: number, wallEdges:
   const count = polygons.reduce((n, p) => n + p.points.length / 2, 0);
   return { polygons, edgeSurface: Array.from({ length: count }, (_, k) => k), surfaceCount: count };
 }
+
+/**
+ * A furnace section: a 12 x 4 box with one row of 50 tubes (diameter 0.12, pitch 0.24,
+ * centre line 0.2 below the top wall, as in a wall-fired heater). Tubes are exact
+ * circles (`sides` = 0) or regular polygons of `sides` sides, one surface per tube;
+ * the four walls are a surface each.
+ */
+export function furnaceScene(sides: number): SceneInput {
+  const polygons: SceneInput['polygons'] = [{ kind: 'enclosure', points: [0, 0, 12, 0, 12, 4, 0, 4] }];
+  const circles: NonNullable<SceneInput['circles']> = [];
+  const edgeSurface = [0, 1, 2, 3];
+  const r = 0.06;
+  for (let k = 0; k < 50; k++) {
+    const cx = 0.12 + 0.24 * k,
+      cy = 3.8;
+    if (sides === 0) {
+      circles.push({ kind: 'solid', cx, cy, radius: r, arcs: 1 });
+      edgeSurface.push(4 + k);
+      continue;
+    }
+    const pts: number[] = [];
+    for (let m = 0; m < sides; m++)
+      pts.push(cx + r * Math.cos((2 * Math.PI * m) / sides), cy + r * Math.sin((2 * Math.PI * m) / sides));
+    polygons.push({ kind: 'solid', points: pts });
+    for (let m = 0; m < sides; m++) edgeSurface.push(4 + k);
+  }
+  return { polygons, circles, edgeSurface, surfaceCount: 54 };
+}

@@ -109,3 +109,35 @@ export function towardTarget(tg: Curve, px: number, py: number, ux: number, uy: 
   const toDir = Math.atan2(ax * uy - ay * ux, ax * ux + ay * uy);
   return span >= 0 ? toDir >= -slack && toDir <= span + slack : toDir <= slack && toDir >= span - slack;
 }
+
+/**
+ * May the cone of directions within `half` (radians) of (ux, uy) from p meet the
+ * target's cone? Same margin as towardTarget.
+ */
+export function coneMeetsTarget(tg: Curve, px: number, py: number, ux: number, uy: number, half: number): boolean {
+  const slack = 1e-9;
+  if (tg.isArc && !tg.solid) return true;
+  if (tg.isArc) {
+    const fx = tg.cx - px,
+      fy = tg.cy - py;
+    const d = Math.hypot(fx, fy);
+    if (!(d > tg.r)) return true;
+    const off = Math.abs(Math.atan2(fx * uy - fy * ux, fx * ux + fy * uy));
+    return off <= Math.asin(tg.r / d) + half + slack;
+  }
+  const ax = tg.ax - px,
+    ay = tg.ay - py,
+    bx = tg.bx - px,
+    by = tg.by - py;
+  const span = Math.atan2(ax * by - ay * bx, ax * bx + ay * by);
+  const toDir = Math.atan2(ax * uy - ay * ux, ax * ux + ay * uy);
+  const lo = Math.min(0, span) - half - slack,
+    hi = Math.max(0, span) + half + slack;
+  // The widened cone may pass +-pi: try the direction a turn either way too.
+  const turn = 2 * Math.PI;
+  return (
+    (toDir >= lo && toDir <= hi) ||
+    (toDir + turn >= lo && toDir + turn <= hi) ||
+    (toDir - turn >= lo && toDir - turn <= hi)
+  );
+}

@@ -1,7 +1,7 @@
 import { distanceChange } from '../pairGeometry';
 import { orient } from '../orient';
 import type { ArcSet } from './arcs';
-import { towardTarget, type Curve } from './curve';
+import { coneMeetsTarget, towardTarget, type Curve } from './curve';
 import type { PairScene } from './pairScene';
 
 // The visible runs of the target from the middle of one emitter piece, and their
@@ -81,6 +81,8 @@ export class PieceView {
         r = A.r[k];
       const d = Math.hypot(fx, fy);
       if (!(d > r)) continue;
+      // A blocker whose cone misses the target's cone bounds no run: skip its tangents.
+      if (k !== tg.circle && !coneMeetsTarget(tg, pmx, pmy, -fx, -fy, Math.asin(r / d))) continue;
       const alpha = Math.atan2(fy, fx),
         beta = Math.atan2(Math.sqrt((d - r) * (d + r)), r);
       for (let s = 0; s < 2; s++) {
