@@ -51,10 +51,18 @@ export function allEdgeLengths(edges: EdgeSet): Float64Array {
 /** Twice the signed area of a flat [x0,y0,x1,y1,...] polygon; > 0 when anticlockwise (y up). */
 export function signedArea2(points: ArrayLike<number>): number {
   const n = points.length >> 1;
+  if (n < 3) return 0;
+  // Relative to the first point: a small polygon far from the origin (0.1 m at 1e9 m)
+  // would otherwise lose its area in the rounding of products near 1e18.
+  const x0 = points[0];
+  const y0 = points[1];
   let s = 0;
-  for (let k = 0; k < n; k++) {
-    const m = k + 1 === n ? 0 : k + 1;
-    s += points[2 * k] * points[2 * m + 1] - points[2 * m] * points[2 * k + 1];
+  for (let k = 1; k + 1 < n; k++) {
+    const ax = points[2 * k] - x0;
+    const ay = points[2 * k + 1] - y0;
+    const bx = points[2 * k + 2] - x0;
+    const by = points[2 * k + 3] - y0;
+    s += ax * by - bx * ay;
   }
   return s;
 }

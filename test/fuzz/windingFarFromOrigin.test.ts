@@ -1,12 +1,10 @@
-// Faults the fuzz suite found that are not fixed yet, pinned so they are not
-// forgotten: each `it.fails` passes while the fault is there and fails (asking
-// to be turned into a plain test) once it is fixed.
+// Faults the fuzz suite found, kept as fixtures named after the bug.
 //
-// Far from the origin: src/core/edges.ts takes each polygon's winding from its
-// signed area in unshifted coordinates. A 0.1 m square at -1e9 m has products
-// near 1e18 whose rounding (~1e2) swamps its area (0.01), so the winding comes
-// out wrong and every factor is 0; the same cancellation flips small bodies at
-// 1e6. The reader accepts both (edges are above 2^-40 of their coordinates).
+// Winding lost far from the origin: src/core/edges.ts took each polygon's
+// winding from its signed area in unshifted coordinates. A 0.1 m square at
+// -1e9 m has products near 1e18 whose rounding (~1e2) swamps its area (0.01),
+// so the winding came out wrong and every factor was 0; the same cancellation
+// flipped small bodies at 1e6. The area is now taken relative to the first point.
 // Expected values: a closed enclosure's rows sum to one (Incropera et al.,
 // Fundamentals of Heat and Mass Transfer, 6th ed., eq. 13.4).
 import { describe, expect, it } from 'vitest';
@@ -28,8 +26,8 @@ const square = (x0: number, y0: number, side: number): [number, number][] => [
   [x0, y0 + side],
 ];
 
-describe('known faults (far from the origin)', () => {
-  it.fails('a 0.1 square enclosure at -1e9 sums its row to one', () => {
+describe('winding lost far from the origin (fixed)', () => {
+  it('a 0.1 square enclosure at -1e9 sums its row to one', () => {
     const sums = rowSums({
       version: 1,
       units: 'm',
@@ -54,7 +52,7 @@ describe('known faults (far from the origin)', () => {
     ],
   });
 
-  it.fails('a 1 mm body in a 0.1 enclosure at 1e6: every row sums to one', () => {
+  it('a 1 mm body in a 0.1 enclosure at 1e6: every row sums to one', () => {
     for (const s of rowSums(withBody(1e6))) expect(Math.abs(1 - s)).toBeLessThan(1e-9);
   });
 
