@@ -321,6 +321,45 @@ describe('report FILE: the surface balance (walls, tubes, gas)', () => {
   });
 });
 
+describe('report FILE: an exact circle split into arcs', () => {
+  it('draws the tube and gives the profile around it, positions along the arcs', () => {
+    const R = 0.1;
+    const file = {
+      version: 2,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [1, 0],
+            [1, 1],
+            [0, 1],
+          ],
+          surface: ['floor', 'right', 'roof', 'left'],
+        },
+        { kind: 'solid', circle: { center: [0.5, 0.5], radius: R }, surface: ['tube 1', 'tube 2', 'tube 3', 'tube 4'] },
+      ],
+      surfaces: { floor: { temperature: 1200, emissivity: 0.9 }, 'tube 1': { temperature: 500, emissivity: 0.8 } },
+    };
+    const r = cli({ 'c.json': file }, 'report', 'c.json', '--out', 'c.html');
+    expect(r.err).toBe('');
+    const doc = parse(r.written['c.html']);
+    const labels = [...doc.querySelectorAll('svg text[data-surface]')].map((t) => t.textContent);
+    expect(labels).toEqual(expect.arrayContaining(['tube 1', 'tube 2', 'tube 3', 'tube 4']));
+    const rows = [...doc.querySelectorAll('table[data-table="profile:tube"] tbody tr')];
+    expect(rows.map((tr) => tr.querySelector('th')!.textContent)).toEqual(['tube 1', 'tube 2', 'tube 3', 'tube 4']);
+    // Four equal arcs of a circle: each pi R / 2 long, middles at (k + 1/2) pi R / 2 from the start of arc 1.
+    rows.forEach((tr, k) => {
+      const [position, length] = [...tr.querySelectorAll('td')]
+        .slice(0, 2)
+        .map((td) => Number(td.getAttribute('data-value')));
+      expect(Math.abs(length - (Math.PI * R) / 2)).toBeLessThan(1e-12);
+      expect(Math.abs(position - ((k + 0.5) * Math.PI * R) / 2)).toBeLessThan(1e-12);
+    });
+  });
+});
+
 describe('report FILE: names from a hostile file stay text', () => {
   const evil = '<img src=x onerror="alert(1)">&\'';
   const file = {

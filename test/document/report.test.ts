@@ -90,6 +90,32 @@ describe('sketchSvg', () => {
     expect(doc.querySelectorAll('linearGradient stop').length).toBe(HEAT_STOPS.length);
   });
 
+  it('draws an exact circle: one label per arc, outside a solid, and its diameter', () => {
+    const tube: PictureShape = {
+      kind: 'solid',
+      points: [],
+      circle: { center: [1, 0.5], radius: 0.2 },
+      surface: ['t 1', 't 2', 't 3', 't 4'],
+    };
+    const doc = parseSvg(sketchSvg({ shapes: [square, tube], units: 'm', dimensions: true }));
+    expect(doc.getElementsByTagName('parsererror').length).toBe(0);
+    const path = doc.querySelectorAll('path')[1].getAttribute('d')!;
+    const pts = [...path.matchAll(/[ML]([\d.]+) ([\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
+    const cx = pts.reduce((a, p) => a + p[0], 0) / pts.length;
+    const cy = pts.reduce((a, p) => a + p[1], 0) / pts.length;
+    const r = Math.max(...pts.map((p) => Math.hypot(p[0] - cx, p[1] - cy)));
+    for (const name of ['t 1', 't 2', 't 3', 't 4']) {
+      const t = doc.querySelector(`text[data-surface="${name}"]`)!;
+      const d = Math.hypot(Number(t.getAttribute('x')) - cx, Number(t.getAttribute('y')) - cy);
+      expect(d).toBeGreaterThan(r);
+    }
+    // Arc 1 runs from +x anticlockwise to +y: its label is up and to the right of the centre (screen y points down).
+    const first = doc.querySelector('text[data-surface="t 1"]')!;
+    expect(Number(first.getAttribute('x'))).toBeGreaterThan(cx);
+    expect(Number(first.getAttribute('y'))).toBeLessThan(cy);
+    expect([...doc.querySelectorAll('text')].map((t) => t.textContent)).toContain('⌀ 0.4 m');
+  });
+
   it('an empty sketch is still a picture', () => {
     const doc = parseSvg(sketchSvg({ shapes: [], units: 'm' }));
     expect(doc.getElementsByTagName('parsererror').length).toBe(0);

@@ -10,8 +10,72 @@ export interface PictureShape {
   kind: 'enclosure' | 'solid';
   /** Vertices [x, y] in the sketch's units, either winding. */
   points: ReadonlyArray<readonly [number, number]>;
-  /** Surface name of each edge (edge k runs from point k to point k + 1). */
+  /** Surface name of each edge (edge k runs from point k to point k + 1), or of each arc of a circle. */
   surface: ReadonlyArray<string>;
+  /** An exact circle instead of points: one arc per surface name, anticlockwise from +x (file version 2). */
+  circle?: { center: readonly [number, number]; radius: number };
+}
+
+/** A shape as drawn: circles as fine polygons, and where each surface's label and dimension go. */
+interface Drawn {
+  kind: PictureShape['kind'];
+  points: (readonly [number, number])[];
+  /** Name of each drawn edge. */
+  surface: string[];
+  /** Label anchors: middle of each edge, or of each arc of a circle (sketch units), with the outward-facing length. */
+  anchors: { name: string; at: readonly [number, number]; normal: readonly [number, number]; length: number }[];
+  /** Dimension labels: [where (sketch units), offset direction, text]. */
+  dims: { at: readonly [number, number]; normal: readonly [number, number]; text: string }[];
+}
+
+/** Segments a full circle is drawn with (a circle split into n arcs gets at least 4 per arc). */
+const CIRCLE_SEGMENTS = 72;
+
+function drawn(shape: PictureShape, units: string): Drawn {
+  const c = shape.circle;
+  if (!c) {
+    const pts = shape.points;
+    const area = signedArea(pts);
+    // Left of a -> b is inside when the points run anticlockwise; enclosures radiate inwards, solids outwards.
+    const side = (area > 0 ? 1 : -1) * (shape.kind === 'enclosure' ? 1 : -1);
+    const anchors: Drawn['anchors'] = [];
+    const dims: Drawn['dims'] = [];
+    pts.forEach((a, k) => {
+      const b = pts[(k + 1) % pts.length];
+      const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
+      if (!(len > 0)) return;
+      const normal = [(-(b[1] - a[1]) / len) * side, ((b[0] - a[0]) / len) * side] as const;
+      const at = [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2] as const;
+      anchors.push({ name: shape.surface[k], at, normal, length: len });
+      dims.push({ at, normal: [-normal[0], -normal[1]], text: `${short(len)} ${units}` });
+    });
+    return { kind: shape.kind, points: [...pts], surface: [...shape.surface], anchors, dims };
+  }
+  const n = Math.max(1, shape.surface.length);
+  const per = Math.max(4, Math.ceil(CIRCLE_SEGMENTS / n));
+  const [cx, cy] = c.center;
+  const points: (readonly [number, number])[] = [];
+  const surface: string[] = [];
+  const anchors: Drawn['anchors'] = [];
+  const out = shape.kind === 'enclosure' ? -1 : 1; // radiating side: outwards for a solid
+  for (let k = 0; k < n; k++) {
+    const name = shape.surface[k] ?? shape.surface[0];
+    for (let j = 0; j < per; j++) {
+      const t = (2 * Math.PI * (k * per + j)) / (n * per);
+      points.push([cx + c.radius * Math.cos(t), cy + c.radius * Math.sin(t)]);
+      surface.push(name);
+    }
+    const mid = (2 * Math.PI * (k + 0.5)) / n;
+    const u = [Math.cos(mid), Math.sin(mid)] as const;
+    anchors.push({
+      name,
+      at: [cx + c.radius * u[0], cy + c.radius * u[1]],
+      normal: [out * u[0], out * u[1]],
+      length: (2 * Math.PI * c.radius) / n,
+    });
+  }
+  const dims = [{ at: c.center, normal: [0, 0] as const, text: `⌀ ${short(2 * c.radius)} ${units}` }];
+  return { kind: shape.kind, points, surface, anchors, dims };
 }
 
 export interface PictureLegend {
@@ -68,11 +132,12 @@ export function sketchSvg(picture: SketchPicture): string {
   const width = picture.width ?? 640;
   const id = picture.idPrefix ?? 'sketch';
   const showNames = picture.names ?? true;
+  const shapes = picture.shapes.map((s) => drawn(s, picture.units));
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
   let maxY = -Infinity;
-  for (const s of picture.shapes)
+  for (const s of shapes)
     for (const [x, y] of s.points) {
       minX = Math.min(minX, x);
       maxX = Math.max(maxX, x);
@@ -100,7 +165,7 @@ export function sketchSvg(picture: SketchPicture): string {
 
   const body: string[] = [title];
   // Enclosures under solids, so a solid inside an enclosure stays visible.
-  const ordered = [...picture.shapes].sort((a, b) => (a.kind === b.kind ? 0 : a.kind === 'enclosure' ? -1 : 1));
+  const ordered = [...shapes].sort((a, b) => (a.kind === b.kind ? 0 : a.kind === 'enclosure' ? -1 : 1));
   for (const s of ordered) {
     const d = s.points.map(([x, y], k) => `${k === 0 ? 'M' : 'L'}${px(toX(x))} ${px(toY(y))}`).join(' ') + ' Z';
     const fill = s.kind === 'solid' ? '#d8d3ca' : '#fbfaf7';
@@ -108,7 +173,7 @@ export function sketchSvg(picture: SketchPicture): string {
   }
   // Heat bands per edge: a dark rim so pale mid-scale colours still show.
   if (picture.heat) {
-    for (const s of picture.shapes)
+    for (const s of shapes)
       s.points.forEach((a, k) => {
         const colour = picture.heat!.colours.get(s.surface[k]);
         if (!colour) return;
@@ -120,8 +185,8 @@ export function sketchSvg(picture: SketchPicture): string {
         );
       });
   }
-  if (picture.dimensions) body.push(...edgeLabels(picture, toX, toY, width, 'dimensions'));
-  if (showNames) body.push(...edgeLabels(picture, toX, toY, width, 'names'));
+  if (picture.dimensions) body.push(...dimensionLabels(shapes, toX, toY));
+  if (showNames) body.push(...nameLabels(shapes, toX, toY, width));
   if (picture.heat) body.push(legend(picture.heat.legend, id, width, height - legendH + 8));
   return svgOpen(width, height, picture.title) + body.join('') + '</svg>';
 }
@@ -135,56 +200,37 @@ function svgOpen(width: number, height: number, label: string | undefined): stri
   );
 }
 
-/**
- * Names: one label per surface, at the middle of its longest edge, offset to the
- * side it radiates from (inside an enclosure, outside a solid). Dimensions: every
- * edge's length on the other side.
- */
-function edgeLabels(
-  picture: SketchPicture,
-  toX: (x: number) => number,
-  toY: (y: number) => number,
-  width: number,
-  what: 'names' | 'dimensions',
-): string[] {
-  const best = new Map<string, { len: number; x: number; y: number; nx: number; ny: number }>();
+/** Every edge's length beside it on the side it does not radiate from; a circle's diameter at its centre. */
+function dimensionLabels(shapes: Drawn[], toX: (x: number) => number, toY: (y: number) => number): string[] {
+  return shapes.flatMap((s) =>
+    s.dims.map(({ at, normal, text }) => {
+      const x = toX(at[0]) + normal[0] * NAME_OFFSET;
+      const y = toY(at[1]) - normal[1] * NAME_OFFSET;
+      return (
+        `<text x="${px(x)}" y="${px(y)}" text-anchor="middle" dominant-baseline="middle" font-size="10" ` +
+        `fill="#555" stroke="#fff" stroke-width="3" paint-order="stroke">${escapeMarkup(text)}</text>`
+      );
+    }),
+  );
+}
+
+/** One label per surface, at the middle of its longest edge or arc, offset to the side it radiates from. */
+function nameLabels(shapes: Drawn[], toX: (x: number) => number, toY: (y: number) => number, width: number): string[] {
+  const best = new Map<string, Drawn['anchors'][number]>();
+  for (const s of shapes)
+    for (const a of s.anchors) {
+      const old = best.get(a.name);
+      if (!old || a.length > old.length) best.set(a.name, a);
+    }
   const out: string[] = [];
-  for (const s of picture.shapes) {
-    const area = signedArea(s.points);
-    // Left of a -> b is inside when the points run anticlockwise; enclosures radiate inwards, solids outwards.
-    const side = (area > 0 ? 1 : -1) * (s.kind === 'enclosure' ? 1 : -1);
-    s.points.forEach((a, k) => {
-      const b = s.points[(k + 1) % s.points.length];
-      const ex = b[0] - a[0];
-      const ey = b[1] - a[1];
-      const len = Math.hypot(ex, ey);
-      if (!(len > 0)) return;
-      // Left normal in sketch coordinates, then y flipped for the screen.
-      const nx = (-ey / len) * side;
-      const ny = (ex / len) * side;
-      const mx = toX((a[0] + b[0]) / 2);
-      const my = toY((a[1] + b[1]) / 2);
-      if (what === 'dimensions') {
-        const x = mx - nx * NAME_OFFSET;
-        const y = my + ny * NAME_OFFSET;
-        out.push(
-          `<text x="${px(x)}" y="${px(y)}" text-anchor="middle" dominant-baseline="middle" font-size="10" ` +
-            `fill="#555" stroke="#fff" stroke-width="3" paint-order="stroke">${escapeMarkup(`${short(len)} ${picture.units}`)}</text>`,
-        );
-        return;
-      }
-      const name = s.surface[k];
-      const old = best.get(name);
-      if (!old || len > old.len) best.set(name, { len, x: mx, y: my, nx, ny });
-    });
-  }
-  for (const [name, at] of best) {
+  for (const [name, a] of best) {
     const label = plainName(name, 28);
     // Offset grows with the label's slant so text beside a steep edge clears it; kept inside the picture
     // (about 7 px per character at 12 px bold).
     const half = Math.min(width / 2, 3.6 * label.length + 2);
-    const x = Math.min(width - half, Math.max(half, at.x + at.nx * (NAME_OFFSET + 18 * Math.abs(at.nx))));
-    const y = at.y - at.ny * NAME_OFFSET;
+    const [nx, ny] = a.normal;
+    const x = Math.min(width - half, Math.max(half, toX(a.at[0]) + nx * (NAME_OFFSET + 18 * Math.abs(nx))));
+    const y = toY(a.at[1]) - ny * NAME_OFFSET;
     out.push(
       `<text x="${px(x)}" y="${px(y)}" text-anchor="middle" dominant-baseline="middle" font-weight="600" ` +
         `fill="#1d2a33" stroke="#fff" stroke-width="3" paint-order="stroke" data-surface="${escapeMarkup(name)}">` +

@@ -61,7 +61,12 @@ export const canColourHeat = (s: AppState): boolean => s.exchange.kind === 'solv
 export function appPictureSvg(s: AppState, options: PictureOptions): string {
   const doc = s.doc;
   const picture: SketchPicture = {
-    shapes: doc.shapes.map((shape) => ({ kind: shape.kind, points: shape.points, surface: edgeSurfaceNames(shape) })),
+    shapes: doc.shapes.map((shape) => ({
+      kind: shape.kind,
+      points: shape.points,
+      surface: edgeSurfaceNames(shape),
+      circle: shape.circle,
+    })),
     units: doc.units,
     names: options.names,
     dimensions: options.dimensions,
