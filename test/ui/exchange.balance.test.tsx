@@ -4,6 +4,9 @@ import { cleanup, configure, screen, waitFor, within } from '@testing-library/re
 import userEvent from '@testing-library/user-event';
 import { renderApp } from './renderApp';
 import type { SketchFile } from '../../src/state/sketchFile';
+import { heatScale } from '../../src/ui/exchange/heatScale';
+import { solveBalance } from '../../src/core/balance';
+import type { ExchangeSolved } from '../../src/state/exchange/slice';
 
 // The condition picker's wall, tube and linked plate; convection and the gas;
 // the heat table split into radiation, convection and back; the burn warning.
@@ -157,5 +160,47 @@ describe('surface balance in the heat-exchange tab', () => {
     expect(Math.abs(value(cellsOf('top')[4]) - 15 * 0.6 * (T - 1300))).toBeLessThanOrEqual(1e-9 * 15 * 0.6 * 1300);
     expect(Math.abs(value(cellsOf('(gas)')[4]) + value(cellsOf('top')[4]))).toBeLessThanOrEqual(1e-9 * 15 * 0.6 * 1300);
     expect(screen.getByRole('note', { name: 'Caution about the gas' }).textContent).toMatch(/transparent.*no gas flow/);
+  });
+});
+
+describe('heat colours by cold face and tube inner wall', () => {
+  it('colours walls by their casing and tubes by their inner wall, and leaves other surfaces uncoloured', () => {
+    const out = solveBalance({
+      viewFactors: [0, 0.5, 0.5, 0.5, 0, 0.5, 0.5, 0.5, 0],
+      area: [1, 1, 1],
+      emissivity: [0.9, 0.8, 0.7],
+      conditions: [
+        { kind: 'temperature', temperature: 1400 },
+        {
+          kind: 'wall',
+          layers: [{ thickness: 0.2, conductivity: 1 }],
+          outsideTemperature: 300,
+          outsideCoefficient: 10,
+        },
+        {
+          kind: 'tube',
+          fluidTemperature: 600,
+          insideCoefficient: 900,
+          outerDiameter: 0.1,
+          innerDiameter: 0.08,
+          wallConductivity: 40,
+        },
+      ],
+    });
+    if (!out.ok) throw new Error(out.code);
+    const view: ExchangeSolved = {
+      kind: 'solved',
+      names: ['hot', 'roof', 'tube'],
+      lengths: Float64Array.from([1, 1, 1]),
+      units: 'm',
+      conditions: [],
+      result: out.result,
+      stale: false,
+    };
+    const scale = heatScale('inside', view, 'K');
+    expect(scale && [...scale.colours.keys()]).toEqual(['roof', 'tube']);
+    // The legend spans the cold face (lowest here) to the tube's inner wall.
+    expect(scale?.low).toBe(Math.min(out.result.coldFaceTemperature[1], out.result.innerTemperature[2]));
+    expect(scale?.high).toBe(Math.max(out.result.coldFaceTemperature[1], out.result.innerTemperature[2]));
   });
 });

@@ -7,7 +7,8 @@ import type { BalanceCondition, ExchangeResult } from '../../document/exchangeIn
 import type { Units } from '../sketchFile';
 import type { AppState } from '../store';
 
-export type HeatColouring = 'off' | 'netFlux' | 'temperature';
+/** 'inside': a wall's cold face and a tube's inner wall temperature (other surfaces uncoloured). */
+export type HeatColouring = 'off' | 'netFlux' | 'temperature' | 'inside';
 
 /** Temperatures are kept in kelvin in the file; the app shows and accepts K or degrees Celsius. */
 export type TemperatureUnit = 'K' | 'C';

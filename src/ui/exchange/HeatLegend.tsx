@@ -19,6 +19,12 @@ const MODES: { mode: HeatColouring; label: string; title: string }[] = [
     label: 'temperature',
     title: 'Colour edges by surface temperature (blue cooler, orange hotter)',
   },
+  {
+    mode: 'inside',
+    label: 'cold face / tube inner',
+    title:
+      'Colour walls by their cold face (casing) and tubes by their inner wall temperature; other surfaces stay uncoloured',
+  },
 ];
 
 /** Over the canvas: the heat colouring toggle and, when on, its legend. */

@@ -35,19 +35,30 @@ export function heatScale(mode: HeatColouring, view: ExchangeView, unit: Tempera
     names.forEach((n, i) => colours.set(n, divergingColour(largest > 0 ? 0.5 + (0.5 * q[i]) / largest : 0.5)));
     return { title: 'Net flux, W/m² (> 0 gives heat off)', low: -largest, centre: 0, high: largest, colours };
   }
-  const T = result.temperature;
+  // 'inside': a wall's cold face or a tube's inner wall; NaN (other surfaces) leaves a surface uncoloured.
+  const T =
+    mode === 'inside'
+      ? result.temperature.map((_, i) => {
+          const cold = result.coldFaceTemperature[i];
+          return Number.isNaN(cold) ? result.innerTemperature[i] : cold;
+        })
+      : result.temperature;
   let lo = Infinity;
   let hi = -Infinity;
   for (const v of T) {
+    if (Number.isNaN(v)) continue;
     lo = Math.min(lo, v);
     hi = Math.max(hi, v);
   }
+  if (!(hi >= lo)) return null; // no wall or tube to colour
   const span = hi - lo;
   // A spread below rounding is one temperature: all at the centre.
   const flat = !(span > 1e-9 * hi);
-  names.forEach((n, i) => colours.set(n, divergingColour(flat ? 0.5 : (T[i] - lo) / span)));
+  names.forEach((n, i) => {
+    if (!Number.isNaN(T[i])) colours.set(n, divergingColour(flat ? 0.5 : (T[i] - lo) / span));
+  });
   return {
-    title: `Temperature, ${TEMPERATURE_LABEL[unit]}`,
+    title: `${mode === 'inside' ? 'Cold face (walls) and inner wall (tubes)' : 'Temperature'}, ${TEMPERATURE_LABEL[unit]}`,
     low: fromKelvin(lo, unit),
     centre: fromKelvin((lo + hi) / 2, unit),
     high: fromKelvin(hi, unit),
