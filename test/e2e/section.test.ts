@@ -6,7 +6,7 @@
 // The saved file is then run through the command line, and the app's net heat
 // table must show the same numbers.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { readFileSync } from 'node:fs';
+import { mkdirSync, readFileSync } from 'node:fs';
 import type { Locator, Page } from 'playwright-core';
 import { startApp, type App, type TestWindow } from './harness';
 import { main } from '../../src/cli/main';
@@ -155,4 +155,35 @@ describe('a furnace section in minutes', () => {
     for (const s of cli.surfaces.slice(4)) expect(s.netHeat).toBeLessThan(0);
     expect(errors).toEqual([]);
   }, 120_000);
+
+  it('fits 1366 x 768: the toolbar on one row, the drawing steady as panels change, table and chart without page scroll', async () => {
+    const tops = await page
+      .locator('.toolbar > *')
+      .evaluateAll((els) => els.map((e) => Math.round(e.getBoundingClientRect().top)));
+    const toolbar = (await page.locator('.toolbar').boundingBox())!;
+    // One row: every item starts within a few pixels of the first, and the bar is one control high.
+    for (const t of tops) expect(Math.abs(t - tops[0])).toBeLessThanOrEqual(6);
+    expect(toolbar.height).toBeLessThan(48);
+    // Nothing hidden past its right end (the tube tool, active here, has the most settings).
+    const [scrollW, clientW] = await page.locator('.toolbar').evaluate((e) => [e.scrollWidth, e.clientWidth]);
+    expect(scrollW).toBeLessThanOrEqual(clientW);
+    const canvas = async () => page.locator('.canvas-box').boundingBox();
+    const first = await canvas();
+    for (const tab of ['Edit', 'Surfaces', 'Sketch', 'Heat exchange']) {
+      await page.getByRole('tab', { name: tab }).click();
+      expect(await canvas()).toEqual(first);
+    }
+    await page.getByRole('img', { name: /bar chart of net heat/i }).scrollIntoViewIfNeeded();
+    await page.locator('.exchange-table').scrollIntoViewIfNeeded();
+    const scroll = await page.evaluate(() => [window.scrollY, document.documentElement.scrollHeight, innerHeight]);
+    expect(scroll[0]).toBe(0);
+    expect(scroll[1]).toBeLessThanOrEqual(scroll[2]);
+    // The caution's sentence about codes and licensed practice stands once on screen.
+    const said = await page
+      .getByText(/licensed engineering practice/i)
+      .evaluateAll((els) => els.filter((e) => (e as HTMLElement).offsetParent !== null).length);
+    mkdirSync('test-artifacts', { recursive: true });
+    await page.screenshot({ path: 'test-artifacts/section.png' });
+    expect(said).toBe(1);
+  });
 });

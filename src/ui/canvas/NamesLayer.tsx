@@ -32,10 +32,21 @@ export const NamesLayer = memo(function NamesLayer({ doc, camera, colours, empha
     <Layer listening={false}>
       {[...best].map(([name, b]) => {
         const shape = doc.shapes[b.shape];
-        const [a, c] = edgeEnds(shape, b.edge);
-        const [x, y] = toScreen(camera, [(a[0] + c[0]) / 2, (a[1] + c[1]) / 2]);
-        const n = radiatingNormal(shape, b.edge);
         const st = surfaceStyle(colours.get(name) ?? 0);
+        let x: number;
+        let y: number;
+        let n: readonly [number, number];
+        if (shape.kind === 'solid' && typeof shape.surface === 'string') {
+          // A body that is one surface (a tube): centred above it, so names in a row do not run together.
+          const xs = shape.points.map((p) => p[0]);
+          const top = Math.max(...shape.points.map((p) => p[1]));
+          [x, y] = toScreen(camera, [(Math.min(...xs) + Math.max(...xs)) / 2, top]);
+          n = [0, 1];
+        } else {
+          const [a, c] = edgeEnds(shape, b.edge);
+          [x, y] = toScreen(camera, [(a[0] + c[0]) / 2, (a[1] + c[1]) / 2]);
+          n = radiatingNormal(shape, b.edge);
+        }
         return (
           <Text
             key={name}

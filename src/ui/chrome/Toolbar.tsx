@@ -31,7 +31,7 @@ function IntegerSetting({ setting }: { setting: Setting<'integer'> }) {
       title={setting.title}
       value={value}
       onCommit={(n) => setting.write(store.getState(), n)}
-      width="3.5em"
+      width="2.8em"
       rule={setting.rule}
       integer
     />
@@ -90,7 +90,7 @@ export function Toolbar() {
         value={t.gridStep}
         onCommit={t.setGridStep}
         rule={GRID_STEP_RULE}
-        width="4.5em"
+        width="4em"
       />
       <label className="inline" title="Surface names beside each surface on the canvas (N)">
         <input type="checkbox" checked={t.showNames} onChange={(e) => t.setShowNames(e.target.checked)} /> names
