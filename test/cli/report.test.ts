@@ -360,6 +360,33 @@ describe('report FILE: an exact circle split into arcs', () => {
   });
 });
 
+describe('report FILE: many surfaces', () => {
+  it('leaves out the two matrices above 60 surfaces, says so and names the commands that give them', () => {
+    const n = 61;
+    const points = Array.from({ length: n }, (_, k) => [
+      Math.cos((2 * Math.PI * k) / n),
+      Math.sin((2 * Math.PI * k) / n),
+    ]);
+    const names = points.map((_, k) => `s${k + 1}`);
+    const file = {
+      version: 1,
+      units: 'm',
+      shapes: [{ kind: 'enclosure', points, surface: names }],
+      surfaces: { s1: { temperature: 1000 }, s2: { temperature: 300 } },
+    };
+    const r = cli({ 'n.json': file }, 'report', 'n.json', '--out', 'n.html');
+    expect(r.code).toBe(0);
+    const doc = parse(r.written['n.html']);
+    const notes = [...doc.querySelectorAll('[data-left-out]')].map((p) => p.textContent);
+    expect(notes).toEqual([
+      expect.stringMatching(/view-factor matrix has 61 × 61 entries.*factors FILE --csv/),
+      expect.stringMatching(/exchange matrix has 61 × 61 entries.*exchange FILE --json/),
+    ]);
+    expect(doc.querySelector('table[data-table="view-factors"]')).toBeNull();
+    expect(tableCells(doc, 'net-heat').map((row) => row[0])).toEqual(names);
+  });
+});
+
 describe('report FILE: names from a hostile file stay text', () => {
   const evil = '<img src=x onerror="alert(1)">&\'';
   const file = {

@@ -12,7 +12,7 @@ import { escapeMarkup } from './escape';
 import { kelvin2, residual, sig6 } from './format';
 import type { WallProfile } from './profiles';
 import { htmlTable, num, rowHead, text, type Cell } from './table';
-import { SIGN_NOTE } from './wording';
+import { MAX_MATRIX_SURFACES, SIGN_NOTE, matrixLeftOut } from './wording';
 
 /** What solveSketchExchange gives (so the tables follow the solver's result as it grows). */
 type Solved = Extract<SketchExchangeOutcome, { ok: true }>;
@@ -131,6 +131,8 @@ function netHeatTable(ex: SolvedExchange): string {
 function exchangeMatrix(ex: SolvedExchange): string {
   const r = ex.result;
   const n = r.surfaceCount;
+  if (n > MAX_MATRIX_SURFACES)
+    return `<p class="note" data-left-out>${escapeMarkup(matrixLeftOut('exchange matrix', n, 'npm run cli -- exchange FILE --json'))}</p>`;
   const open = seesSurroundings(r);
   const head: Cell[] = [text('from \\ to'), ...ex.names.map(text)];
   if (open) head.push(text(SURROUNDINGS_LABEL.name));

@@ -4,22 +4,28 @@ import type { ViewFactorResult } from '../../core/scene';
 import { SURROUNDINGS_LABEL } from '../exchange/labels';
 import { fixed6, residual } from './format';
 import { htmlTable, num, rowHead, text, type Cell } from './table';
+import { escapeMarkup } from './escape';
+import { MAX_MATRIX_SURFACES, matrixLeftOut } from './wording';
 
 export function factorsSection(names: ReadonlyArray<string>, r: ViewFactorResult): string {
   const n = r.surfaceCount;
   const head: Cell[] = [text('from \\ to'), ...names.map(text)];
   if (!r.closed) head.push(text(SURROUNDINGS_LABEL.name));
   head.push(text('row sum'));
-  const rows = names.map((name, i) => {
-    const row: Cell[] = [rowHead(name)];
-    for (let j = 0; j < n; j++) row.push(num(fixed6(r.F[i * n + j]), r.F[i * n + j]));
-    if (!r.closed) row.push(num(fixed6(r.rowSumResidual[i]), r.rowSumResidual[i]));
-    // Sum over the surfaces only (1 - residual, as the command line's JSON gives it).
-    const sum = 1 - r.rowSumResidual[i];
-    row.push(num(fixed6(sum), sum));
-    return row;
-  });
-  const table = htmlTable({ name: 'view-factors', className: 'matrix', head, rows, rowKeys: names });
+  const rows = () =>
+    names.map((name, i) => {
+      const row: Cell[] = [rowHead(name)];
+      for (let j = 0; j < n; j++) row.push(num(fixed6(r.F[i * n + j]), r.F[i * n + j]));
+      if (!r.closed) row.push(num(fixed6(r.rowSumResidual[i]), r.rowSumResidual[i]));
+      // Sum over the surfaces only (1 - residual, as the command line's JSON gives it).
+      const sum = 1 - r.rowSumResidual[i];
+      row.push(num(fixed6(sum), sum));
+      return row;
+    });
+  const table =
+    n > MAX_MATRIX_SURFACES
+      ? `<p class="note" data-left-out>${escapeMarkup(matrixLeftOut('view-factor matrix', n, 'npm run cli -- factors FILE --csv'))}</p>`
+      : htmlTable({ name: 'view-factors', className: 'matrix', head, rows: rows(), rowKeys: names });
   const worst = Math.max(0, ...Array.from(r.rowSumResidual, Math.abs));
   const notes = [
     r.closed

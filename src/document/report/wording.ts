@@ -10,6 +10,17 @@ export const METHOD_TEXT = [
     'as a black surface at the surroundings temperature.',
 ];
 
+/**
+ * Above this many surfaces the report leaves out the two n x n matrices (they would
+ * run to many pages and megabytes) and says so, naming the commands that give them.
+ */
+export const MAX_MATRIX_SURFACES = 60;
+
+/** Said in place of a matrix left out. */
+export function matrixLeftOut(what: string, n: number, command: string): string {
+  return `The ${what} has ${n} × ${n} entries; the report lists matrices up to ${MAX_MATRIX_SURFACES} surfaces. Get it with ${command}.`;
+}
+
 export const REFERENCES = [
   'H. C. Hottel and A. F. Sarofim, Radiative Transfer, McGraw-Hill, 1967 (crossed strings).',
   'M. F. Modest, Radiative Heat Transfer, 3rd ed., Academic Press, 2013, ch. 4 (view factors).',

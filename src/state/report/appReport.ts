@@ -11,9 +11,14 @@ export const SKETCH_FILE_NAME = 'sketch.json';
 
 export type AppReport = { ok: true; html: string; fileName: string } | { ok: false; message: string };
 
-/** Lowercase hex SHA-256 of a text's UTF-8 bytes (Web Crypto). */
-export async function sha256Hex(text: string): Promise<string> {
-  const digest = await crypto.subtle.digest('SHA-256', new TextEncoder().encode(text));
+/**
+ * Lowercase hex SHA-256 of a text's UTF-8 bytes (Web Crypto), or null where the
+ * browser offers no hashing (pages not served over https or from localhost).
+ */
+export async function sha256Hex(text: string): Promise<string | null> {
+  const subtle = globalThis.crypto?.subtle as SubtleCrypto | undefined;
+  if (!subtle) return null;
+  const digest = await subtle.digest('SHA-256', new TextEncoder().encode(text));
   return Array.from(new Uint8Array(digest), (b) => b.toString(16).padStart(2, '0')).join('');
 }
 
@@ -33,11 +38,14 @@ export async function appReport(store: AppStore, api: DocumentApi, now = new Dat
         'The results are not for the sketch as it is now: fix the problems or wait for the results, then make the report.',
     };
   const text = api.serialize(s.doc);
+  const hash = await sha256Hex(text);
   const html = reportHtml({
     source: {
       fileName: SKETCH_FILE_NAME,
-      sha256: await sha256Hex(text),
-      hashOf: 'the sketch file as Save writes it',
+      sha256: hash ?? 'not available',
+      hashOf: hash
+        ? 'the sketch file as Save writes it'
+        : 'the browser hashes only on pages served over https or from this computer',
       date: now,
     },
     sketch: shown.sketch,

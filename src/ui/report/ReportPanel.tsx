@@ -39,6 +39,8 @@ export function ReportPanel() {
       const opened = window.open(url, '_blank');
       setTimeout(() => URL.revokeObjectURL(url), 60_000);
       if (!opened) notify('warning', 'The browser blocked the new tab; use Download report instead.');
+    } catch (error) {
+      notify('error', `No report: ${error instanceof Error ? error.message : 'the browser could not make it'}.`);
     } finally {
       setBusy(false);
     }
