@@ -106,4 +106,22 @@ describe('the What if tab', () => {
     expect(screen.getByRole<HTMLInputElement>('textbox', { name: /^steps/i }).value).toBe('3');
     expect(screen.getByRole<HTMLSelectElement>('combobox', { name: /vary/i }).value).toBe('crown.emissivity');
   });
+
+  it('works out which input matters: the table is sensitivity --json, to four digits', async () => {
+    const { user } = await openStudies();
+    await user.click(screen.getByRole('button', { name: 'Work it out' }));
+    const table = await screen.findByRole('table', { name: 'Change of net heat per input' });
+    const cli = cliJson({ 'k.json': kiln() }, 'sensitivity', 'k.json') as {
+      rows: { parameter: string; unit: string; netHeat: number[] }[];
+    };
+    const rows = within(table).getAllByRole('row').slice(1);
+    expect(rows.map((r) => within(r).getByRole('rowheader').textContent)).toEqual(cli.rows.map((r) => r.parameter));
+    rows.forEach((row, k) => {
+      const cells = within(row)
+        .getAllByRole('cell')
+        .map((c) => c.textContent);
+      expect(cells[0]).toBe(cli.rows[k].unit);
+      expect(cells.slice(1).map(Number)).toEqual(cli.rows[k].netHeat.map((d) => Number(d.toPrecision(4))));
+    });
+  });
 });

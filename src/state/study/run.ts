@@ -10,16 +10,21 @@ import {
   parseParameter,
   parseTarget,
   runSweep,
+  sensitivityTable,
   solveForTarget,
   sweepCsv,
   targetQuantity,
   type Quantity,
 } from '../../document/study';
 import { toScene } from '../../document';
+import { computeViewFactors } from '../../core/viewFactors';
+import { solveSketchExchange } from '../../document/exchangeInput';
 import type { CheckedSketch } from '../documentApi';
 
 export type StudyRequest =
   | { kind: 'sweep'; sketch: CheckedSketch; address: string; from: number; to: number; steps: number }
+  /** How each net heat changes with each emissivity and fixed temperature (no parameter, no range). */
+  | { kind: 'effects'; sketch: CheckedSketch }
   | {
       kind: 'solve';
       sketch: CheckedSketch;
@@ -54,8 +59,15 @@ export interface SolveAnswer {
   summary: string;
 }
 
+/** Rows of derivatives of each surface's net heat, signed as net heat (see src/document/study/sensitivity.ts). */
+export interface EffectsTable {
+  names: string[];
+  rows: { parameter: string; unit: string; netHeat: number[] }[];
+}
+
 export type StudyReply =
   | { kind: 'progress'; done: number; total: number }
+  | { kind: 'effects'; table: EffectsTable }
   | { kind: 'sweep'; table: SweepTable }
   | { kind: 'solve'; answer: SolveAnswer }
   | { kind: 'failed'; message: string };
@@ -68,6 +80,7 @@ export function runStudy(
   onProgress: (done: number, total: number) => void = () => {},
 ): StudyReply {
   const { sketch } = request;
+  if (request.kind === 'effects') return effects(sketch);
   const parsed = parseParameter(request.address);
   if (!parsed.ok) return { kind: 'failed', message: parsed.message };
   const p = parsed.value;
@@ -97,4 +110,17 @@ export function runStudy(
   const withUnit = (x: number, u: string) => (u ? `${shown(x)} ${u}` : shown(x));
   const summary = `${describeParameter(p)} = ${withUnit(out.value, unit)} gives ${describeQuantity(request.surface, request.quantity)} = ${withUnit(got, QUANTITY_UNIT[request.quantity])}`;
   return { kind: 'solve', answer: { value: out.value, values: out.values, summary } };
+}
+
+function effects(sketch: CheckedSketch): StudyReply {
+  const { scene, surfaceNames: names } = toScene(sketch);
+  const factors = computeViewFactors(scene);
+  const solved = solveSketchExchange(sketch, names, factors);
+  if (!solved.ok) return { kind: 'failed', message: solved.message };
+  const table = sensitivityTable(names, solved.input, solved.result);
+  if (!table.ok) return { kind: 'failed', message: table.message };
+  return {
+    kind: 'effects',
+    table: { names, rows: table.rows.map(({ parameter, unit, netHeat }) => ({ parameter, unit, netHeat })) },
+  };
 }

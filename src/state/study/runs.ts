@@ -1,11 +1,11 @@
 // The panel's studies outlive the panel: a run goes on, and its result and the
 // fields typed stay, while another tab is open. One running study per part of
-// the panel ('sweep', 'aim'); starting one stops the one before it.
+// the panel ('sweep', 'aim', 'effects'); starting one stops the one before it.
 import { createStore, useStore } from 'zustand';
 import { startStudy, type RunningStudy } from './start';
 import type { StudyReply, StudyRequest } from './run';
 
-export type StudyPart = 'sweep' | 'aim';
+export type StudyPart = 'sweep' | 'aim' | 'effects';
 export type FinalReply = Exclude<StudyReply, { kind: 'progress' }>;
 
 export interface PartState {
@@ -22,7 +22,7 @@ interface StudyRuns {
 }
 
 const idle: PartState = { busy: false, progress: null, final: null };
-const store = createStore<StudyRuns>(() => ({ parts: { sweep: idle, aim: idle }, fields: {} }));
+const store = createStore<StudyRuns>(() => ({ parts: { sweep: idle, aim: idle, effects: idle }, fields: {} }));
 const running = new Map<StudyPart, RunningStudy>();
 
 function setPart(part: StudyPart, change: Partial<PartState>) {
@@ -67,5 +67,5 @@ export function useStudyField(name: string, initial: string): [string, (text: st
 /** Stop everything and forget results and fields (a new document, tests). */
 export function resetStudies(): void {
   for (const part of running.keys()) stopStudyRun(part);
-  store.setState({ parts: { sweep: idle, aim: idle }, fields: {} });
+  store.setState({ parts: { sweep: idle, aim: idle, effects: idle }, fields: {} });
 }

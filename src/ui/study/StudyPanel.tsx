@@ -7,6 +7,7 @@ import { selectDoc } from '../../state/selectors';
 import { studyChoices, suggestedRange, useStudyField } from '../../state/study';
 import { downloadText } from '../chrome/download';
 import { AimForValue } from './AimForValue';
+import { InputEffects } from './InputEffects';
 import { StudyPlot } from './StudyPlot';
 import { StudyTable } from './StudyTable';
 import { useStudyRun } from './useStudyRun';
@@ -177,6 +178,7 @@ export function StudyPanel() {
         address={choice.address}
         range={'problem' in range ? null : range}
       />
+      <InputEffects sketch={sketch} doc={doc} />
       <p className="hint">
         Net heat &gt; 0: the surface gives off more radiation than it takes up. Results support, not replace, local
         codes and licensed engineering practice.
