@@ -63,6 +63,14 @@ describe('sensitivity --json against central differences of exchange runs', () =
     expect(got.rows[0].unit).toBe('W/m per unit emissivity');
   });
 
+  it('convection on surfaces held at a temperature leaves the radiosity equations linear', () => {
+    const file = kiln() as Kiln & { version: number };
+    file.version = 2;
+    file.surfaces.hearth.convectionCoefficient = 12;
+    file.settings.gasTemperature = 950;
+    checkAgainstDifferences(file);
+  });
+
   it('kiln with a door slot to a 300 K room: the surroundings temperature is a parameter too', () => {
     const got = checkAgainstDifferences(kiln(true));
     expect(got.rows.at(-1)?.parameter).toBe('settings.surroundingsTemperature');
@@ -124,5 +132,17 @@ describe('sensitivity with emissivity ranges', () => {
     const open = runCli({ 'k.json': kiln(true) }, 'sensitivity', 'k.json', '--emissivity-range', 'door=0.5:0.6');
     expect(open.code).toBe(1);
     expect(open.err).toMatch(/'door' is an opening/);
+  });
+
+  it('is refused where the equations are not linear: convection on a surface whose temperature is solved', () => {
+    const file = kiln() as ReturnType<typeof kiln> & { version: number };
+    file.version = 2;
+    file.surfaces.crown.convectionCoefficient = 10;
+    file.settings.gasTemperature = 900;
+    const r = runCli({ 'k.json': file }, 'sensitivity', 'k.json');
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(
+      /sensitivities are worked out where the radiosity equations are linear .*'crown' is outside that/,
+    );
   });
 });
