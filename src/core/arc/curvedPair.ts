@@ -191,9 +191,10 @@ export class CurvedPairIntegrator implements EventFilter {
   /**
    * Can the alignment of objects at (x1, y1) and (x2, y2) seen from p change the
    * visible runs? Not when an object lies clearly behind the emitter, when the two
-   * lie in opposite directions from p, or when the nearer one is hidden strictly
-   * behind a solid circle (then, near p and near that direction, neither object can
-   * bound a run). Float tests with margins that keep the event in doubt.
+   * lie in opposite directions from p, when their direction misses the target, or
+   * when one of them is hidden strictly behind a solid circle (then, near p and near
+   * that direction, it bounds no run). Float tests with margins that keep the event
+   * in doubt.
    */
   keeps(px: number, py: number, nx: number, ny: number, x1: number, y1: number, x2: number, y2: number): boolean {
     const u1x = x1 - px,
@@ -205,11 +206,14 @@ export class CurvedPairIntegrator implements EventFilter {
     const slack = 1e-9;
     if (u1x * nx + u1y * ny < -slack * d1 || u2x * nx + u2y * ny < -slack * d2) return false;
     if (u1x * u2x + u1y * u2y < -slack * d1 * d2) return false;
-    const near = d1 <= d2;
-    const t = near ? d1 : d2;
-    if (!(t > 0)) return true;
-    const ux = (near ? u1x : u2x) / t,
-      uy = (near ? u1y : u2y) / t;
+    // Only objects that can bound a run matter, and a swap with one that cannot (hidden
+    // strictly behind a circle) leaves the runs as they were. What hides the nearer
+    // object hides the farther too, so the farther one is tested.
+    const far = d1 >= d2;
+    const t = far ? d1 : d2;
+    if (!(Math.min(d1, d2) > 0)) return true;
+    const ux = (far ? u1x : u2x) / t,
+      uy = (far ? u1y : u2y) / t;
     if (!towardTarget(this.tg, px, py, ux, uy)) return false;
     const circles = this.scene.circles;
     for (let q = 0; q < circles.length; q++) if (this.hides(circles[q], px, py, ux, uy, t)) return false;

@@ -104,6 +104,8 @@ export class CurveBreaks {
       this.push(u);
       return;
     }
+    // Many alignments repeat exactly (the outer tangents of tubes in a row are one line).
+    if (this.seen.has(u)) return;
     let px: number, py: number, nx: number, ny: number;
     if (cur.isArc) {
       const t = cur.start + u;
@@ -120,11 +122,18 @@ export class CurveBreaks {
       nx = -(cur.by - cur.ay) / cur.length;
       ny = (cur.bx - cur.ax) / cur.length;
     }
-    if (f.keeps(px, py, nx, ny, this.x1, this.y1, this.x2, this.y2)) this.push(u);
+    if (f.keeps(px, py, nx, ny, this.x1, this.y1, this.x2, this.y2)) {
+      this.seen.add(u);
+      this.push(u);
+    }
   }
+
+  /** Breakpoints already kept for this pair. */
+  private readonly seen = new Set<number>();
 
   reset(): void {
     this.count = 0;
+    this.seen.clear();
   }
 
   private push(u: number): void {
