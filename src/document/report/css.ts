@@ -53,6 +53,8 @@ table.data td.num{text-align:right;font-variant-numeric:tabular-nums}
   table.data th,table.data td{padding:0.1mm 1mm}
   table.data.wide{font-size:6.5pt}
   table.data.wide th,table.data.wide td{padding:0.1mm 0.6mm}
+  table.data.wider{font-size:5.5pt}
+  table.data.wider th,table.data.wider td{padding:0 0.4mm}
   .note,.warning,.method p,.refs,.caution,table.data caption{font-size:7pt}
   .caution{margin-top:1.5mm;padding:1mm 2mm}
   table.data,figure,.caution{break-inside:avoid}

@@ -53,7 +53,7 @@ export function htmlTable(spec: TableSpec): string {
     return `${open}${row.map((c) => (c.header ? cell(c, 'th', 'row') : cell(c, 'td'))).join('')}</tr>`;
   });
   // Many columns: smaller type in print, so the table keeps to the page's width.
-  const wide = spec.head.length > 10 ? 'wide' : '';
+  const wide = spec.head.length > 16 ? 'wide wider' : spec.head.length > 10 ? 'wide' : '';
   const cls = ['data', spec.className, wide].filter(Boolean).join(' ');
   const caption = spec.caption ? `<caption>${escapeMarkup(spec.caption)}</caption>` : '';
   return `<table class="${cls}" data-table="${escapeMarkup(spec.name)}">${caption}${head}<tbody>${rows.join('')}</tbody></table>`;
