@@ -163,5 +163,13 @@ describe('notices', () => {
     expect(screen.queryByText('I2')).toBeNull();
     expect(screen.queryByText('W1')).toBeNull();
     expect(s().notices.map((n) => n.text)).toEqual(['E2']);
+    // A notice that offers a button stays until it is used or closed.
+    act(() => {
+      s().notify('warning', 'Offer', { kind: 'run', label: 'Do it', run: () => {} });
+    });
+    act(() => {
+      vi.advanceTimersByTime(10 * NOTICE_SHOW_MS);
+    });
+    expect(screen.getByRole('button', { name: 'Do it' })).toBeTruthy();
   });
 });
