@@ -6,6 +6,7 @@
 import type { Sketch } from '../document';
 import { toScene } from '../document';
 import {
+  MAX_STUDY_STEPS,
   describeParameter,
   parameterProblem,
   parameterUnit,
@@ -85,6 +86,8 @@ export function studyOptions(into: StudyArgs, withTarget: boolean): OwnOption {
     if (!Number.isFinite(value)) return `${name} must be a number, got '${text.slice(0, 40)}'`;
     if (name === '--from') into.from = value;
     else if (name === '--to') into.to = value;
+    else if (!Number.isInteger(value) || value < 2 || value > MAX_STUDY_STEPS)
+      return `--steps must be a whole number from 2 to ${MAX_STUDY_STEPS}, got '${text.slice(0, 40)}'`;
     else into.steps = value;
     return null;
   };

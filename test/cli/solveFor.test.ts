@@ -160,6 +160,27 @@ describe('solve-for refusals', () => {
     expect(Math.abs(Number(m![2]) - q(700))).toBeLessThanOrEqual(1e-9 * q(700));
   });
 
+  it('a result that does not change with the parameter is refused, not answered with every value', () => {
+    // The ware is held at 700 K: its temperature is the target whatever the hearth emissivity.
+    const r = runCli(
+      { 'k.json': kiln() },
+      'solve-for',
+      'k.json',
+      '--vary',
+      'hearth.emissivity',
+      '--from',
+      '0.2',
+      '--to',
+      '1',
+      '--target',
+      'ware stack.2.temperature=700',
+    );
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(
+      /temperature of 'ware stack.2' equals 700 K at every value scanned: it does not change with emissivity of 'hearth'/,
+    );
+  });
+
   it('varying the temperature of a surface without a temperature condition is refused', () => {
     const r = runCli(
       { 'k.json': kiln() },

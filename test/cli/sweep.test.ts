@@ -196,8 +196,8 @@ describe('sweep refusals', () => {
       '--steps',
       '1001',
     );
-    expect(many.code).toBe(1);
-    expect(many.err).toMatch(/at most 1000 steps/);
+    expect(many.code).toBe(2);
+    expect(many.err).toMatch(/--steps must be a whole number from 2 to 1000, got '1001'/);
     const zero = runCli(
       files,
       'sweep',

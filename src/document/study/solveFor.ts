@@ -72,6 +72,11 @@ export function solveForTarget(
     residuals.push(residual(v));
     if (failure !== undefined) return { ok: false, message: failure };
   }
+  if (residuals.every((r) => r === 0))
+    return {
+      ok: false,
+      message: `${describeQuantity(target.surface, target.quantity)} equals ${withUnit(target.value, QUANTITY_UNIT[target.quantity])} at every value scanned: it does not change with ${describeParameter(p)}, so no one value answers`,
+    };
   const found = rootsByScan(residual, values, residuals);
   if (failure !== undefined) return { ok: false, message: failure };
   const unit = parameterUnit(p, sketch.units);
