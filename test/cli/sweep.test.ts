@@ -212,7 +212,7 @@ describe('sweep refusals', () => {
       '3',
     );
     expect(zero.code).toBe(1);
-    expect(zero.err).toMatch(/with emissivity of 'hearth' = 0: .*emissivity.*greater than 0/);
+    expect(zero.err).toMatch(/with emissivity of 'hearth' = 0: surface 'hearth': emissivity must be/);
     const overlap = runCli(
       files,
       'sweep',
