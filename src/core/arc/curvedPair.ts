@@ -121,8 +121,7 @@ export class CurvedPairIntegrator implements EventFilter {
     B.reset();
     const P = S.pts,
       nP = P.length >> 1;
-    const circles = S.circles.slice();
-    if (tg.isArc && tg.solid) circles.push(tg.circle);
+    const circles = S.tangentCircles;
     const A = this.E.arcs;
     for (let a = 0; a < nP; a++) {
       const ax = P[2 * a],

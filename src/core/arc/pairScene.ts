@@ -13,9 +13,12 @@ export class PairScene {
   seg: number[] = [];
   /** Solid circles that may block (circle indices). */
   circles: number[] = [];
+  /** Circles whose tangents bound views: the blockers, then the target's own circle if it is a solid. */
+  tangentCircles: number[] = [];
   /** Fixed points (flat x, y): ends of blocking segments and of the target. */
   pts: number[] = [];
   private hull: number[] = [];
+  private kept: number[] = [];
   private outer: number[] = [];
   private readonly stamp: Int32Array;
   private pass = 0;
@@ -44,8 +47,12 @@ export class PairScene {
       if (A.circleIsEnclosure[c] || c === em.circle || c === tg.circle) continue;
       if (this.discMeets(A.cx[c], A.cy[c], A.r[c] + margin)) this.circles.push(c);
     }
+    this.tangentCircles.length = 0;
+    for (const c of this.circles) this.tangentCircles.push(c);
+    if (tg.isArc && tg.solid) this.tangentCircles.push(tg.circle);
     const pass = ++this.pass;
-    const kept: number[] = [];
+    const kept = this.kept;
+    kept.length = 0;
     const bodyI = i < E.count ? ob.bodyOfPolygon[E.polygon[i]] : -1;
     const bodyJ = j < E.count ? ob.bodyOfPolygon[E.polygon[j]] : -1;
     for (let b = 0; b < ob.bodyCount; b++) {

@@ -31,8 +31,7 @@ export class PieceView {
     this.tg = tg;
     this.em = em;
     this.scene = scene;
-    this.tanCircles = scene.circles.slice();
-    if (tg.isArc && tg.solid) this.tanCircles.push(tg.circle);
+    this.tanCircles = scene.tangentCircles;
   }
 
   /**
