@@ -86,4 +86,24 @@ describe('exact circles against the ray-cast reference', () => {
       [0, 3, 4, 6, 7, 9, 11],
     );
   });
+
+  it('the profile around a tube over a strip: each of 24 arcs against quadrature of the point-to-strip kernel', () => {
+    // A cold black tube over a hot black strip, open to cold surroundings: the net flux
+    // into arc k is sigma T^4 times F(arc k -> strip), so the profile is this row of factors.
+    compare(
+      [
+        {
+          kind: 'solid',
+          points: [
+            [-1, 0],
+            [1.5, 0],
+            [1.5, -0.1],
+            [-1, -0.1],
+          ],
+        },
+      ],
+      [{ kind: 'solid', cx: 0, cy: 0.8, radius: 0.3, arcs: 24 }],
+      Array.from({ length: 24 }, (_, k) => 4 + k),
+    );
+  });
 });
