@@ -181,4 +181,25 @@ describe('exact circles against closed forms', () => {
       expect(errors[k] / errors[k + 1]).toBeLessThan(4.5);
     }
   });
+
+  it('arcs of one cylindrical shell, far from the origin: crossed strings between chords', () => {
+    // Hottel's crossed strings (Modest, Radiative Heat Transfer, ch. 4): inside a circle every
+    // string is a chord, 2 r sin(angle / 2). An arc of angle t sees itself: 1 - 2 sin(t/2) / t.
+    const r = 1e-3,
+      n = 5,
+      t = (2 * Math.PI) / n;
+    const chord = (a: number) => 2 * r * Math.abs(Math.sin(a / 2));
+    const shell: CircleInput = { kind: 'enclosure', cx: 1e6, cy: -3e5, radius: r, arcs: n };
+    const edgeSurface = Array.from({ length: n }, (_, k) => k);
+    const res = computeViewFactors({ polygons: [], circles: [shell], edgeSurface, surfaceCount: n });
+    for (let j = 0; j < n; j++) {
+      // Arc 0 spans [0, t], arc j spans [j t, (j + 1) t]: the crossed strings are chords of
+      // j t, the uncrossed ones of (j - 1) t and (j + 1) t; crossed minus uncrossed over 2 L.
+      const expected =
+        j === 0
+          ? 1 - (2 * Math.sin(t / 2)) / t
+          : (2 * chord(j * t) - chord((j + 1) * t) - chord((j - 1) * t)) / (2 * r * t);
+      expect(Math.abs(res.F[j] - expected)).toBeLessThan(1e-12);
+    }
+  });
 });
