@@ -1,6 +1,7 @@
 // From a schema-valid version-1 file to the form the program works with: one
 // surface name per edge, zero-length edges removed (with a warning), numbers
 // within the documented limits, one thermal condition per surface.
+import { unusualPropertyWarnings, unusualSettingWarnings } from './unusualValues';
 import { normaliseCircle } from './circles';
 import { conditionOf, surfaceRuleProblems } from './exchange/conditions';
 import { moreThanOneConditionMessage, surfaceRuleMessage } from './exchange/messages';
@@ -113,7 +114,9 @@ export function normalise(file: SketchFileV1): Normalised {
       );
     }
     if (!used.has(name)) warnings.push(`surface ${quoteName(name)} has properties but no edge uses that name`);
+    warnings.push(...unusualPropertyWarnings(name, props));
   }
+  warnings.push(...unusualSettingWarnings(file.settings));
   for (const p of surfaceRuleProblems(surfaces, file.settings, used)) {
     errors.push(problemAt('conditions', surfaceRuleMessage(p), { edges: edgesNamed(shapes, fileIndex, p.surface) }));
   }

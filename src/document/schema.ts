@@ -6,6 +6,17 @@
 // must be a finite number").
 import { z } from 'zod';
 import { MAX_NAME_LENGTH } from './limits';
+import {
+  MAX_COEFFICIENT,
+  MAX_CONDUCTIVITY,
+  MAX_DEPTH,
+  MAX_HEAT_FLUX,
+  MAX_PROPERTY_LENGTH,
+  MAX_TEMPERATURE,
+  MIN_CONDUCTIVITY,
+  MIN_EMISSIVITY,
+  MIN_PROPERTY_LENGTH,
+} from './propertyLimits';
 import { UNITS } from './units';
 
 /** The newest file version this program reads and the one it writes. */
@@ -62,17 +73,52 @@ export const shapeSchema = z.preprocess(
     }),
 );
 
-const kelvin = z.number({ error: 'must be a number of kelvin' }).gt(0, { error: 'must be above 0 K' });
-const positive = (unit: string) =>
-  z.number({ error: `must be a number of ${unit}` }).gt(0, { error: 'must be greater than 0' });
+/** A number in a range, each bound with its message (see propertyLimits.ts for the reasons). */
+const ranged = (unit: string, low: number, high: number, lowText = `must be greater than ${low}`) =>
+  z
+    .number({ error: `must be a number of ${unit}` })
+    .gt(low, { error: lowText })
+    .lte(high, { error: `must be at most ${high} ${unit}` });
+const kelvin = ranged('kelvin', 0, MAX_TEMPERATURE, 'must be above 0 K');
+const emissivity = z
+  .number({ error: `must be a number from ${MIN_EMISSIVITY} to 1` })
+  .gte(MIN_EMISSIVITY, { error: `must be at least ${MIN_EMISSIVITY} (and at most 1)` })
+  .lte(1, { error: 'must be at most 1' });
+const coefficient = ranged('W/(m²·K)', 0, MAX_COEFFICIENT);
+const propertyLength = z
+  .number({ error: 'must be a number of metres' })
+  .gte(MIN_PROPERTY_LENGTH, { error: `must be at least ${MIN_PROPERTY_LENGTH} m` })
+  .lte(MAX_PROPERTY_LENGTH, { error: `must be at most ${MAX_PROPERTY_LENGTH} m` });
+const conductivity = z
+  .number({ error: 'must be a number of W/(m·K)' })
+  .gte(MIN_CONDUCTIVITY, { error: `must be at least ${MIN_CONDUCTIVITY} W/(m·K)` })
+  .lte(MAX_CONDUCTIVITY, { error: `must be at most ${MAX_CONDUCTIVITY} W/(m·K)` });
+
+/** The range checks of single values, for fields that check a value as it is typed (the app). */
+export const valueSchemas = {
+  kelvin,
+  emissivity,
+  heatFlux: z
+    .number({ error: 'must be a number of W/m^2' })
+    .gte(-MAX_HEAT_FLUX, { error: `must be at least -${MAX_HEAT_FLUX} W/m^2` })
+    .lte(MAX_HEAT_FLUX, { error: `must be at most ${MAX_HEAT_FLUX} W/m^2` }),
+  coefficient,
+  convectionCoefficient: z
+    .number({ error: 'must be a number of W/(m²·K)' })
+    .gte(0, { error: 'must be 0 or more' })
+    .lte(MAX_COEFFICIENT, { error: `must be at most ${MAX_COEFFICIENT} W/(m²·K)` }),
+  propertyLength,
+  conductivity,
+  depth: ranged('metres', 0, MAX_DEPTH),
+};
 
 /** One layer of a lined wall; lengths in metres whatever the sketch's units. */
 export const wallLayerSchema = z.object(
   {
     /** Thickness, m. */
-    thickness: positive('metres'),
+    thickness: propertyLength,
     /** Conductivity, W/(m·K), constant (take it at the layer's mean temperature). */
-    conductivity: positive('W/(m·K)'),
+    conductivity,
   },
   { error: 'must be an object with thickness and conductivity' },
 );
@@ -87,13 +133,9 @@ export const wallSchema = z.object(
     /** Outside air temperature, K. */
     outsideTemperature: kelvin,
     /** Outside coefficient, W/(m²·K): convection and casing radiation combined, or convection alone with outsideEmissivity. */
-    outsideCoefficient: positive('W/(m²·K)'),
+    outsideCoefficient: coefficient,
     /** Casing emissivity; when given the casing also radiates to outsideTemperature. */
-    outsideEmissivity: z
-      .number({ error: 'must be a number in (0, 1]' })
-      .gt(0, { error: 'must be greater than 0 (and at most 1)' })
-      .lte(1, { error: 'must be at most 1' })
-      .optional(),
+    outsideEmissivity: emissivity.optional(),
   },
   { error: 'must be an object with layers, outsideTemperature and outsideCoefficient' },
 );
@@ -105,13 +147,13 @@ export const tubeSchema = z
       /** Fluid temperature, K. */
       fluidTemperature: kelvin,
       /** Inside film coefficient, W/(m²·K). */
-      insideCoefficient: positive('W/(m²·K)'),
+      insideCoefficient: coefficient,
       /** Outer diameter, m. */
-      outerDiameter: positive('metres'),
+      outerDiameter: propertyLength,
       /** Inner diameter, m, below the outer. */
-      innerDiameter: positive('metres'),
+      innerDiameter: propertyLength,
       /** Tube wall conductivity, W/(m·K). */
-      wallConductivity: positive('W/(m·K)'),
+      wallConductivity: conductivity,
     },
     {
       error:
@@ -131,16 +173,12 @@ export const tubeSchema = z
 /** Radiative properties, the one condition behind a named surface, and convection on its front (used by heat exchange). */
 export const surfacePropertiesSchema = z.object(
   {
-    /** Hemispherical emissivity, dimensionless, in (0, 1]. */
-    emissivity: z
-      .number({ error: 'must be a number in (0, 1]' })
-      .gt(0, { error: 'must be greater than 0 (and at most 1)' })
-      .lte(1, { error: 'must be at most 1' })
-      .optional(),
+    /** Hemispherical emissivity, dimensionless, in [MIN_EMISSIVITY, 1]. */
+    emissivity: emissivity.optional(),
     /** Held temperature, kelvin. */
     temperature: kelvin.optional(),
     /** Heat supplied from behind, W/m², > 0 when it enters from behind and leaves the front (with no convection: the net radiation leaving, as in version 1). */
-    heatFlux: z.number({ error: 'must be a number of W/m^2' }).optional(),
+    heatFlux: valueSchemas.heatFlux.optional(),
     /** Insulated: nothing passes through the back. */
     adiabatic: z.boolean({ error: 'must be true or false' }).optional(),
     /** An opening to the surroundings: black, at the surroundings temperature. */
@@ -152,10 +190,7 @@ export const surfacePropertiesSchema = z.object(
     /** The other face of the same thin plate (a surface name); that face gives no condition of its own. */
     linked: surfaceNameSchema.optional(),
     /** Film coefficient to the gas, W/(m²·K), >= 0; above 0 needs settings.gasTemperature. */
-    convectionCoefficient: z
-      .number({ error: 'must be a number of W/(m²·K)' })
-      .gte(0, { error: 'must be 0 or more' })
-      .optional(),
+    convectionCoefficient: valueSchemas.convectionCoefficient.optional(),
   },
   { error: 'must be an object of properties (emissivity, temperature, ...)' },
 );
@@ -163,14 +198,11 @@ export const surfacePropertiesSchema = z.object(
 export const settingsSchema = z.object(
   {
     /** Temperature of the surroundings seen through openings and by open sketches, kelvin. */
-    surroundingsTemperature: z
-      .number({ error: 'must be a number of kelvin' })
-      .gt(0, { error: 'must be above 0 K' })
-      .optional(),
+    surroundingsTemperature: kelvin.optional(),
     /** Temperature of the gas in the section, kelvin (transparent: it exchanges heat by convection only). */
     gasTemperature: kelvin.optional(),
     /** Length of the long dimension (duct or furnace length), metres; turns per-metre results into totals. */
-    depth: z.number({ error: 'must be a number of metres' }).gt(0, { error: 'must be greater than 0' }).optional(),
+    depth: valueSchemas.depth.optional(),
   },
   { error: 'must be an object' },
 );

@@ -144,7 +144,7 @@ describe('version 2 refusals name the surface and the field', () => {
   it('ranges of wall, tube and convection fields', () => {
     const d = clone();
     d.surfaces.roof.wall.layers[1].thickness = 0;
-    expect(errorsOf(d)).toEqual(["surface 'roof': wall.layers[2].thickness must be greater than 0 (got 0)"]);
+    expect(errorsOf(d)).toEqual(["surface 'roof': wall.layers[2].thickness must be at least 0.000001 m (got 0)"]);
     const e = clone();
     e.surfaces['tube 1'].tube.innerDiameter = 0.2;
     expect(errorsOf(e)).toEqual([

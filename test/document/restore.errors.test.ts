@@ -242,14 +242,14 @@ describe('restore refuses bad numbers', () => {
   });
   it('surface properties out of range or not numbers', () => {
     expect(only(surfaceOf({ emissivity: 0 }))).toBe(
-      "surface 'floor': emissivity must be greater than 0 (and at most 1) (got 0)",
+      "surface 'floor': emissivity must be at least 0.001 (and at most 1) (got 0)",
     );
     expect(only(surfaceOf({ emissivity: 1.2 }))).toBe("surface 'floor': emissivity must be at most 1 (got 1.2)");
-    expect(only(surfaceOf({ emissivity: -0.1 }))).toMatch(/emissivity must be greater than 0/);
+    expect(only(surfaceOf({ emissivity: -0.1 }))).toMatch(/emissivity must be at least 0.001/);
     expect(only(surfaceOf({ emissivity: 'high' }))).toBe(
-      `surface 'floor': emissivity must be a number in (0, 1] (got "high")`,
+      `surface 'floor': emissivity must be a number from 0.001 to 1 (got "high")`,
     );
-    expect(only(surfaceOf({ emissivity: NaN }))).toMatch(/emissivity must be a number in \(0, 1\] \(got NaN\)/);
+    expect(only(surfaceOf({ emissivity: NaN }))).toMatch(/emissivity must be a number from 0.001 to 1 \(got NaN\)/);
     expect(only(surfaceOf({ temperature: 0 }))).toBe("surface 'floor': temperature must be above 0 K (got 0)");
     expect(only(surfaceOf({ temperature: -40 }))).toBe("surface 'floor': temperature must be above 0 K (got -40)");
     expect(only(surfaceOf({ temperature: '1100 K' }))).toMatch(

@@ -1,6 +1,7 @@
 // Temperatures: kelvin in the file and the solver; the app shows and accepts
 // K or degrees Celsius.
 import type { TemperatureUnit } from './slice';
+import { MAX_TEMPERATURE } from '../../document/propertyLimits';
 
 /** 0 degrees Celsius in kelvin (exact by definition). */
 export const ZERO_CELSIUS = 273.15;
@@ -17,9 +18,18 @@ export function toKelvin(value: number, unit: TemperatureUnit): number {
   return unit === 'K' ? value : value + ZERO_CELSIUS;
 }
 
-/** Why a typed temperature cannot be used, or null: it must be above absolute zero. */
+/** Why a typed temperature cannot be used, or null: above absolute zero and within the file's limit. */
 export function temperatureProblem(value: number, unit: TemperatureUnit): string | null {
   if (!Number.isFinite(value)) return 'must be a number';
-  if (toKelvin(value, unit) > 0) return null;
-  return unit === 'K' ? 'must be above 0 K' : 'must be above absolute zero (−273.15 °C)';
+  const kelvin = toKelvin(value, unit);
+  if (kelvin <= 0) return unit === 'K' ? 'must be above 0 K' : 'must be above absolute zero (−273.15 °C)';
+  if (kelvin > MAX_TEMPERATURE) {
+    return unit === 'K'
+      ? `must be at most ${MAX_TEMPERATURE} K`
+      : `must be at most ${fromKelvin(MAX_TEMPERATURE, 'C')} °C (${MAX_TEMPERATURE} K)`;
+  }
+  return null;
 }
+
+/** Why a typed value of a surface property or setting cannot be used, or null (the file's own rule). */
+export { valueProblem, type ValueKind } from '../../document/exchange/valueChecks';

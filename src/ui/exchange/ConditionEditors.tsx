@@ -3,7 +3,7 @@
 // and coefficients in SI, as the file keeps them; temperatures in the unit shown.
 import type { ConditionChoice } from '../../state/exchange/edits';
 import type { TemperatureUnit } from '../../state/exchange/slice';
-import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchange/units';
+import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin, valueProblem } from '../../state/exchange/units';
 import { CheckedField } from './CheckedField';
 
 type Wall = Extract<ConditionChoice, { kind: 'wall' }>;
@@ -15,8 +15,6 @@ interface EditorProps<C> {
   /** Replace the surface's condition (one undo step). */
   onChange: (next: C) => void;
 }
-
-const positive = (v: number) => (v > 0 ? null : 'must be greater than 0');
 
 /** A lined wall: layers from the hot face out, then the outside air. */
 export function WallEditor({ condition: w, unit, onChange }: EditorProps<Wall>) {
@@ -31,14 +29,14 @@ export function WallEditor({ condition: w, unit, onChange }: EditorProps<Wall>) 
               label={`layer ${k + 1} thickness (m)`}
               value={l.thickness}
               title="Layer thickness in metres (whatever the sketch's units)"
-              check={positive}
+              check={(v) => valueProblem('propertyLength', v)}
               onCommit={(v) => v !== undefined && setLayer(k, { thickness: v })}
             />
             <CheckedField
               label="conductivity (W/(m·K))"
               value={l.conductivity}
               title="Thermal conductivity, constant: take the value at the layer's mean temperature"
-              check={positive}
+              check={(v) => valueProblem('conductivity', v)}
               onCommit={(v) => v !== undefined && setLayer(k, { conductivity: v })}
             />
             <button
@@ -73,7 +71,7 @@ export function WallEditor({ condition: w, unit, onChange }: EditorProps<Wall>) 
           label="outside coefficient (W/(m²·K))"
           value={w.outsideCoefficient}
           title="Casing to outside air: convection and radiation combined (it must suit the casing temperature found), or convection alone when an outside emissivity is given"
-          check={positive}
+          check={(v) => valueProblem('coefficient', v)}
           onCommit={(v) => v !== undefined && onChange({ ...w, outsideCoefficient: v })}
         />
         <CheckedField
@@ -82,7 +80,7 @@ export function WallEditor({ condition: w, unit, onChange }: EditorProps<Wall>) 
           optional
           placeholder="in the coefficient"
           title="Casing emissivity to the outside; empty: casing radiation is part of the outside coefficient"
-          check={(v) => (v > 0 && v <= 1 ? null : 'must be in (0, 1]')}
+          check={(v) => valueProblem('emissivity', v)}
           onCommit={(v) => {
             const { outsideEmissivity: _old, ...rest } = w;
             onChange(v === undefined ? rest : { ...rest, outsideEmissivity: v });
@@ -108,28 +106,32 @@ export function TubeEditor({ condition: t, unit, onChange }: EditorProps<Tube>) 
         label="inside coefficient (W/(m²·K))"
         value={t.insideCoefficient}
         title="Film coefficient between the tube's inner wall and the fluid"
-        check={positive}
+        check={(v) => valueProblem('coefficient', v)}
         onCommit={(v) => v !== undefined && onChange({ ...t, insideCoefficient: v })}
       />
       <CheckedField
         label="outer diameter (m)"
         value={t.outerDiameter}
         title="Outer diameter in metres (whatever the sketch's units); it enters only the tube's resistance"
-        check={(v) => (v > t.innerDiameter ? null : 'must be above the inner diameter')}
+        check={(v) =>
+          valueProblem('propertyLength', v) ?? (v > t.innerDiameter ? null : 'must be above the inner diameter')
+        }
         onCommit={(v) => v !== undefined && onChange({ ...t, outerDiameter: v })}
       />
       <CheckedField
         label="inner diameter (m)"
         value={t.innerDiameter}
         title="Inner diameter in metres, below the outer"
-        check={(v) => (v > 0 && v < t.outerDiameter ? null : 'must be above 0 and below the outer diameter')}
+        check={(v) =>
+          valueProblem('propertyLength', v) ?? (v < t.outerDiameter ? null : 'must be below the outer diameter')
+        }
         onCommit={(v) => v !== undefined && onChange({ ...t, innerDiameter: v })}
       />
       <CheckedField
         label="wall conductivity (W/(m·K))"
         value={t.wallConductivity}
         title="Conductivity of the tube metal"
-        check={positive}
+        check={(v) => valueProblem('conductivity', v)}
         onCommit={(v) => v !== undefined && onChange({ ...t, wallConductivity: v })}
       />
     </div>

@@ -2,7 +2,7 @@ import { useId } from 'react';
 import { useApp, useAppStore } from '../AppContext';
 import { selectSettings, selectTemperatureUnit } from '../../state/exchange/selectors';
 import { setSettings } from '../../state/exchange/edits';
-import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchange/units';
+import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin, valueProblem } from '../../state/exchange/units';
 import { CheckedField } from './CheckedField';
 
 /** The sketch's settings for heat exchange: surroundings and gas temperatures, and depth. */
@@ -49,7 +49,7 @@ export function ExchangeSettings() {
           placeholder="not set"
           optional
           title="Length of the long dimension (duct or furnace length), metres: turns W per metre into W"
-          check={(v) => (v > 0 ? null : 'must be greater than 0')}
+          check={(v) => valueProblem('depth', v)}
           onCommit={(v) => store.getState().edit((d) => setSettings(d, { depth: v }))}
         />
       </div>

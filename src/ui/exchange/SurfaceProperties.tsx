@@ -14,7 +14,7 @@ import {
   surfacePropsOf,
   type ConditionChoice,
 } from '../../state/exchange/edits';
-import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin } from '../../state/exchange/units';
+import { fromKelvin, temperatureProblem, TEMPERATURE_LABEL, toKelvin, valueProblem } from '../../state/exchange/units';
 import type { SurfaceProps } from '../../state/sketchFile';
 import type { AppState } from '../../state/store';
 import { CheckedField } from './CheckedField';
@@ -151,7 +151,7 @@ export function SurfaceProperties() {
           optional
           disabled={kind === 'opening'}
           title="Hemispherical emissivity, in (0, 1]; leave empty for the default"
-          check={(v) => (v > 0 && v <= 1 ? null : 'must be in (0, 1]')}
+          check={(v) => valueProblem('emissivity', v)}
           onCommit={(v) => edit((d) => setEmissivity(d, current, v))}
         />
         <label htmlFor={`${id}-condition`}>condition</label>
@@ -188,6 +188,7 @@ export function SurfaceProperties() {
               label="heat flux (W/m²)"
               value={props.heatFlux}
               title="Net radiative flux imposed on the surface, W/m²; > 0 when heat leaves the surface"
+              check={(v) => valueProblem('heatFlux', v)}
               onCommit={(v) =>
                 v !== undefined && edit((d) => setCondition(d, current, { kind: 'heatFlux', heatFlux: v }))
               }
@@ -220,7 +221,7 @@ export function SurfaceProperties() {
             placeholder="none"
             optional
             title="Film coefficient between this surface's front and the gas; empty: no convection"
-            check={(v) => (v >= 0 ? null : 'must be 0 or more')}
+            check={(v) => valueProblem('convectionCoefficient', v)}
             onCommit={(v) => edit((d) => setConvection(d, current, v))}
           />
           {props?.convectionCoefficient !== undefined && props.convectionCoefficient > 0 && gas === undefined && (
