@@ -36,7 +36,7 @@ describe('files and view', () => {
     ]);
     const text = readFileSync(await download.path(), 'utf8');
     const saved = JSON.parse(text) as SketchFile;
-    expect(saved.version).toBe(1);
+    expect(saved.version).toBe(2); // the app writes the current file version
     expect(saved.shapes).toHaveLength(5);
     const before = (await state()).doc;
     await page.locator('input[type=file]').setInputFiles({

@@ -99,7 +99,8 @@ describe('sketcher in chromium', () => {
     }
     await waitReady();
     const heads = await table().getByRole('rowheader').allInnerTexts();
-    expect(heads.map((h) => h.replace(/^\d+\s*/, ''))).toEqual(['wall 1', 'wall 2', 'wall 3', 'wall 4']);
+    // A drawn shape is one surface per side, named by where it is.
+    expect(heads.map((h) => h.replace(/^\d+\s*/, ''))).toEqual(['floor', 'right wall', 'roof', 'left wall']);
     const drawn = await tableText();
 
     // Drag the corner (2, 1) to (2, 1.5) with the select tool.
@@ -118,7 +119,7 @@ describe('sketcher in chromium', () => {
     await waitReady();
     expect(await tableText()).toBe(drawn);
 
-    // CSV: floor (wall 1) to roof (wall 3) of a 2 x 1 rectangle by crossed strings,
+    // CSV: floor to roof of a 2 x 1 rectangle by crossed strings,
     // (sqrt(w^2 + h^2) - h) / w with w = 2, h = 1 (Hottel's crossed-strings method;
     // Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1.4).
     const [download] = await Promise.all([
@@ -127,7 +128,7 @@ describe('sketcher in chromium', () => {
     ]);
     const csv = readFileSync(await download.path(), 'utf8');
     const rows = Papa.parse<string[]>(csv.trim(), { newline: '\r\n' }).data;
-    expect(rows[0]).toEqual(['from \\ to', 'wall 1', 'wall 2', 'wall 3', 'wall 4']);
+    expect(rows[0]).toEqual(['from \\ to', 'floor', 'right wall', 'roof', 'left wall']);
     const F = rows.slice(1).map((r) => r.slice(1).map(Number));
     expect(Math.abs(F[0][2] - (Math.sqrt(5) - 1) / 2)).toBeLessThan(1e-12);
     // Floor to a side wall: (w + h - sqrt(w^2 + h^2)) / (2 w), same source.
@@ -161,7 +162,9 @@ describe('sketcher in chromium', () => {
     await page.getByRole('button', { name: /^Rectangle/ }).click();
     await dragOnCanvas(page, [0.8, 0.3], [1.2, 0.7], 4);
     await waitReady();
-    expect(await table().getByRole('rowheader').count()).toBe(8);
+    // The enclosure's four sides and the new body, one surface ("body 1").
+    expect(await table().getByRole('rowheader').allInnerTexts()).toHaveLength(5);
+    expect((await table().getByRole('rowheader').allInnerTexts()).at(-1)).toMatch(/body 1$/);
     await page.getByRole('button', { name: /^Select/ }).click();
     await dragOnCanvas(page, [1.0, 0.5], [1.0, 1.0], 3);
     await expect.poll(status).toBe('invalid');
