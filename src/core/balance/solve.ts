@@ -14,8 +14,8 @@
 // (backtracking). Converged when every node's residual is at most 1e-10 of
 // sum A_i J_i (plus the rounding of its own back and convection terms); at most
 // 100 iterations; one more step then polishes to rounding.
-import { CLOSURE_TOLERANCE, STEFAN_BOLTZMANN, emissivePower } from '../exchange/exchange';
-import { exchangeFailure, type ExchangeFailure } from '../exchange/failures';
+import { STEFAN_BOLTZMANN, emissivePower } from '../exchange/exchange';
+import { exchangeFailure, surroundingsFactor, type ExchangeFailure } from '../exchange/failures';
 import { DenseLuSolver, LinearSolveError } from '../exchange/linearSolve';
 import { checkCondition, checkConvection } from './check';
 import { tubeResistance, wallFlux, type BalanceCondition } from './conditions';
@@ -325,18 +325,9 @@ function prepare(input: BalanceInput): Prepared | ExchangeFailure {
     const problem = checkCondition(c, i, input.conditions);
     if (problem) return problem;
     if (c.kind === 'wall' || c.kind === 'tube' || h[i] > 0) anchored = true;
-    let rowSum = 0;
-    for (let j = 0; j < n; j++) {
-      const f = F[i * n + j];
-      if (!(Number.isFinite(f) && f >= -CLOSURE_TOLERANCE && f <= 1 + CLOSURE_TOLERANCE)) {
-        return exchangeFailure('view-factor-out-of-range', { surface: i, other: j, value: f });
-      }
-      rowSum += f;
-    }
-    const toSurroundings = 1 - rowSum;
-    if (toSurroundings < -CLOSURE_TOLERANCE)
-      return exchangeFailure('view-factor-sum-above-one', { surface: i, value: rowSum });
-    if (toSurroundings > CLOSURE_TOLERANCE) {
+    const toSurroundings = surroundingsFactor(F, n, i);
+    if (typeof toSurroundings !== 'number') return toSurroundings;
+    if (toSurroundings > 0) {
       if (Ts === undefined) return exchangeFailure('open-without-surroundings', { surface: i, value: toSurroundings });
       Fs[i] = toSurroundings;
       anchored = true;

@@ -21,16 +21,13 @@
 // F_i,s = 1 - sum_j F_ij. They are not an unknown, so not part of the matrix.
 
 import { DenseLuSolver, LinearSolveError } from './linearSolve';
-import { exchangeFailure, type ExchangeFailure } from './failures';
+import { exchangeFailure, surroundingsFactor, type ExchangeFailure } from './failures';
 
 /** Stefan-Boltzmann constant, W/(m^2 K^4) (CODATA 2018). */
 export const STEFAN_BOLTZMANN = 5.670374419e-8;
 
-/**
- * Dimensionless. Row sums of F within this of one count as a closed enclosure (rounding of
- * an exact view-factor method is ~1e-14); the rest goes to the surroundings.
- */
-export const CLOSURE_TOLERANCE = 1e-8;
+/** Row sums of F within this of one count as closed (see failures.ts). */
+export { CLOSURE_TOLERANCE } from './failures';
 
 /** Net heats below this fraction of the largest radiated power A_i J_i are rounding, for the energy balance. */
 const BALANCE_FLOOR = 1e-9;
@@ -178,19 +175,9 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
         return exchangeFailure('unknown-condition', { surface: i });
       }
     }
-    let rowSum = 0;
-    for (let j = 0; j < n; j++) {
-      const f = F[i * n + j];
-      if (!(Number.isFinite(f) && f >= -CLOSURE_TOLERANCE && f <= 1 + CLOSURE_TOLERANCE)) {
-        return exchangeFailure('view-factor-out-of-range', { surface: i, other: j, value: f });
-      }
-      rowSum += f;
-    }
-    const toSurroundings = 1 - rowSum;
-    if (toSurroundings < -CLOSURE_TOLERANCE) {
-      return exchangeFailure('view-factor-sum-above-one', { surface: i, value: rowSum });
-    }
-    if (toSurroundings > CLOSURE_TOLERANCE) {
+    const toSurroundings = surroundingsFactor(F, n, i);
+    if (typeof toSurroundings !== 'number') return toSurroundings;
+    if (toSurroundings > 0) {
       if (Ts === undefined) return exchangeFailure('open-without-surroundings', { surface: i, value: toSurroundings });
       Fs[i] = toSurroundings;
       anchored = true;

@@ -99,3 +99,30 @@ export function exchangeFailure(
 ): ExchangeFailure {
   return { ok: false, code, ...where };
 }
+
+/**
+ * Dimensionless. Row sums of F within this of one count as a closed enclosure (rounding of
+ * an exact view-factor method is ~1e-14); the rest goes to the surroundings.
+ */
+export const CLOSURE_TOLERANCE = 1e-8;
+
+/**
+ * Check row i of the surface view-factor matrix F (n x n, row-major, dimensionless):
+ * every factor finite and in [0, 1] within CLOSURE_TOLERANCE, and the row summing to
+ * at most one. Returns the factor from surface i to the surroundings (0 for a closed
+ * row, within the tolerance) or the failure that names the surface.
+ */
+export function surroundingsFactor(F: ArrayLike<number>, n: number, i: number): number | ExchangeFailure {
+  let rowSum = 0;
+  for (let j = 0; j < n; j++) {
+    const f = F[i * n + j];
+    if (!(Number.isFinite(f) && f >= -CLOSURE_TOLERANCE && f <= 1 + CLOSURE_TOLERANCE)) {
+      return exchangeFailure('view-factor-out-of-range', { surface: i, other: j, value: f });
+    }
+    rowSum += f;
+  }
+  const toSurroundings = 1 - rowSum;
+  if (toSurroundings < -CLOSURE_TOLERANCE)
+    return exchangeFailure('view-factor-sum-above-one', { surface: i, value: rowSum });
+  return toSurroundings > CLOSURE_TOLERANCE ? toSurroundings : 0;
+}
