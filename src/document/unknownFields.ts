@@ -1,25 +1,24 @@
 // Fields this version does not know are ignored (and not saved again); say
 // so, since they may be a misspelling ("emisivity") or from a newer program.
 import { quoteName, shapeLabel } from './labels';
+import {
+  circleSchema,
+  settingsSchema,
+  surfacePropertiesSchema,
+  tubeSchema,
+  wallLayerSchema,
+  wallSchema,
+} from './schema';
 
 const TOP = ['version', 'units', 'shapes', 'surfaces', 'settings'];
 const SHAPE = ['kind', 'points', 'circle', 'surface'];
-const CIRCLE = ['center', 'radius'];
-const SURFACE = [
-  'emissivity',
-  'temperature',
-  'heatFlux',
-  'adiabatic',
-  'opening',
-  'wall',
-  'tube',
-  'linked',
-  'convectionCoefficient',
-];
-const WALL = ['layers', 'outsideTemperature', 'outsideCoefficient', 'outsideEmissivity'];
-const LAYER = ['thickness', 'conductivity'];
-const TUBE = ['fluidTemperature', 'insideCoefficient', 'outerDiameter', 'innerDiameter', 'wallConductivity'];
-const SETTINGS = ['surroundingsTemperature', 'gasTemperature', 'depth'];
+const CIRCLE = Object.keys(circleSchema.shape);
+// The known fields are the schema's own, so a new field is never reported as unknown.
+const SURFACE = Object.keys(surfacePropertiesSchema.shape);
+const WALL = Object.keys(wallSchema.shape);
+const LAYER = Object.keys(wallLayerSchema.shape);
+const TUBE = Object.keys(tubeSchema.shape);
+const SETTINGS = Object.keys(settingsSchema.shape);
 
 /** Warnings for unknown fields of a document that passed the schema. */
 export function unknownFieldWarnings(doc: Record<string, unknown>): string[] {

@@ -4,6 +4,7 @@
 // Units as in the file: temperatures K, heat flux W/m^2 (supplied from behind),
 // lengths in walls and tubes m, coefficients W/(m^2 K), conductivities W/(m K), depth m.
 import type { SketchFile, SurfaceProps } from '../sketchFile';
+import { surfacePropertiesSchema } from '../../document/schema';
 import { usedSurfaceNames } from '../edits/surfaceNames';
 import { conditionCount as givenCount, conditionOf, conditionProps } from '../../document/exchange/conditions';
 import type { SketchCondition } from '../../document/exchange/conditions';
@@ -33,17 +34,8 @@ export function surfacePropsOf(doc: SketchFile, name: string): SurfaceProps | un
   return doc.surfaces && Object.hasOwn(doc.surfaces, name) ? doc.surfaces[name] : undefined;
 }
 
-const KEYS = [
-  'emissivity',
-  'temperature',
-  'heatFlux',
-  'adiabatic',
-  'opening',
-  'wall',
-  'tube',
-  'linked',
-  'convectionCoefficient',
-] as const;
+/** The file's property fields, in the schema's order (the order files are written in). */
+const KEYS = Object.keys(surfacePropertiesSchema.shape) as (keyof SurfaceProps)[];
 
 /** Properties in the file's key order, without undefined entries. */
 function tidy(props: SurfaceProps): SurfaceProps {
