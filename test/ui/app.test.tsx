@@ -99,6 +99,12 @@ describe('the app', () => {
     await user.click(screen.getByRole('tab', { name: 'Surfaces' }));
     const name = screen.getByDisplayValue('hot faces');
     await user.clear(name);
+    // A name the file could not hold is refused beside the field, not saved half-way.
+    const before = store.getState().doc;
+    await user.type(name, '__proto__{Enter}');
+    expect(screen.getByText(/not applied: the name must not be "__proto__"/)).toBeTruthy();
+    expect(store.getState().doc).toBe(before);
+    await user.clear(name);
     await user.type(name, 'burner row{Enter}');
     expect(store.getState().doc.shapes[0].surface[0]).toBe('burner row');
     await waitFor(() => expect(within(matrix()).getByRole('rowheader', { name: /burner row/ })).toBeTruthy());

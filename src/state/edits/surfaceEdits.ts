@@ -1,5 +1,6 @@
 // Grouping, renaming and splitting named surfaces. Surface properties
 // (doc.surfaces) follow their name and are dropped when no edge uses it.
+import { surfaceNameSchema } from '../../document/schema';
 import type { Point, SketchFile, SurfaceProps } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
 import { compactSurface, uniqueName, usedSurfaceNames } from './surfaceNames';
@@ -44,6 +45,12 @@ export function groupEdges(doc: SketchFile, edges: readonly EdgeRef[], name: str
   if (target !== '__proto__' && !own(props, target) && inherited) props[target] = { ...inherited };
   const next = relabel(doc, (s, k, old) => (chosen.has(`${s}:${k}`) ? target : old));
   return pruneProps(next, Object.keys(props).length ? props : doc.surfaces);
+}
+
+/** Why a typed surface name cannot be used (the file's own rule: length, "__proto__"), or null. */
+export function surfaceNameProblem(name: string): string | null {
+  const r = surfaceNameSchema.safeParse(name);
+  return r.success ? null : `the name ${r.error.issues[0]?.message ?? 'is not allowed'}`;
 }
 
 /** Rename a surface everywhere; renaming onto an existing name merges the two. */

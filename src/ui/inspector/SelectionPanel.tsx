@@ -3,13 +3,14 @@ import { useApp, useAppStore, useController } from '../AppContext';
 import { selectDoc, selectSelection } from '../../state/selectors';
 import { edgeEnds, edgeLength, edgeNames } from '../../state/geometry/polygon';
 import { insertVertex } from '../../state/edits/shapeEdits';
-import { groupEdges } from '../../state/edits/surfaceEdits';
+import { groupEdges, surfaceNameProblem } from '../../state/edits/surfaceEdits';
 import { shapeTitle } from './shapeTitle';
 import { VertexRow } from './VertexRow';
 import { fmtLength } from '../matrix/format';
 import { ShapeCommands } from './ShapeCommands';
 import { TubeRowForm } from './TubeRowForm';
 import { PointsPaste } from './PointsPaste';
+import { CircleRow } from './CircleRow';
 
 export function SelectionPanel() {
   const doc = useApp(selectDoc);
@@ -36,6 +37,11 @@ export function SelectionPanel() {
   const group = () => {
     const name = groupName.trim();
     if (!name) return;
+    const why = surfaceNameProblem(name);
+    if (why) {
+      store.getState().notify('warning', `Not grouped: ${why}.`);
+      return;
+    }
     store.getState().edit((d) =>
       groupEdges(
         d,
@@ -116,6 +122,16 @@ export function SelectionPanel() {
       {shapes.slice(0, 2).map((p) => {
         const shape = doc.shapes[p.shape];
         if (!shape) return null;
+        if (shape.circle)
+          return (
+            <div key={`s${p.shape}`} className="item">
+              <h3>
+                {shapeTitle(doc, p.shape)}: circle, {edgeNames(shape).length} arc
+                {edgeNames(shape).length > 1 ? 's' : ''}
+              </h3>
+              <CircleRow shape={p.shape} circle={shape.circle} units={u} />
+            </div>
+          );
         return (
           <div key={`s${p.shape}`} className="item">
             <h3>

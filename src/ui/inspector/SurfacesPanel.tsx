@@ -2,7 +2,7 @@ import { useMemo, useState } from 'react';
 import { useApp, useAppStore } from '../AppContext';
 import { selectDoc } from '../../state/selectors';
 import { edgeLength, edgeNames } from '../../state/geometry/polygon';
-import { joinSurfaces, renameSurface, splitSurfaceParts } from '../../state/edits/surfaceEdits';
+import { joinSurfaces, renameSurface, splitSurfaceParts, surfaceNameProblem } from '../../state/edits/surfaceEdits';
 import type { Pick } from '../../state/selection';
 import type { SketchFile } from '../../state/sketchFile';
 import { surfaceStyle } from '../palette';
@@ -82,6 +82,7 @@ export function SurfacesPanel() {
                 hideLabel
                 title="Rename this surface (a name already in use joins the two)"
                 value={r.name}
+                check={surfaceNameProblem}
                 onCommit={(to) => store.getState().edit((d) => renameSurface(d, r.name, to))}
               />
               <span className="meta">

@@ -8,6 +8,7 @@ export function TextField({
   onCommit,
   placeholder,
   hideLabel,
+  check,
 }: {
   label: string;
   title: string;
@@ -15,13 +16,19 @@ export function TextField({
   onCommit: (v: string) => void;
   placeholder?: string;
   hideLabel?: boolean;
+  /** Why a typed text cannot be used, or null; a refused text is not committed and the reason is shown. */
+  check?: (v: string) => string | null;
 }) {
   const id = useId();
   // What the user is typing, or null when not editing: then the field shows `value` as it is now.
   const [draft, setDraft] = useState<string | null>(null);
+  const [problem, setProblem] = useState<string | null>(null);
   const text = draft ?? value;
   const commit = () => {
-    if (text.trim() && text !== value) onCommit(text.trim());
+    const typed = text.trim();
+    const why = typed && typed !== value ? (check?.(typed) ?? null) : null;
+    setProblem(why);
+    if (!why && typed && text !== value) onCommit(typed);
     setDraft(null);
   };
   return (
@@ -35,6 +42,7 @@ export function TextField({
         value={text}
         placeholder={placeholder}
         maxLength={200}
+        aria-invalid={problem ? true : undefined}
         onChange={(e) => setDraft(e.target.value)}
         onBlur={commit}
         onKeyDown={(e) => {
@@ -42,6 +50,7 @@ export function TextField({
           if (e.key === 'Escape') setDraft(null);
         }}
       />
+      {problem && <span className="field-problem">not applied: {problem}</span>}
     </span>
   );
 }
