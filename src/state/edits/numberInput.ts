@@ -39,3 +39,6 @@ export const TUBE_SIDES_RULE: NumberRule = { min: 3, max: 256, integer: true };
 export const DIGITS_RULE: NumberRule = { min: 1, max: 15, integer: true };
 /** Coordinates, sketch units (the file's limit). */
 export const COORDINATE_RULE: NumberRule = { min: -1e100, max: 1e100 };
+
+/** A circle's diameter, sketch units: more than 0, within the file's coordinate range. */
+export const DIAMETER_RULE: NumberRule = { min: 0, minExclusive: true, max: 1e100 };

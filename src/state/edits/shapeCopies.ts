@@ -4,6 +4,7 @@
 import type { Point, Shape, SketchFile, SurfaceProps } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
 import { compactSurface, copyName, usedSurfaceNames } from './surfaceNames';
+import { isCircle, type CircleShape } from './circleShapes';
 
 /** Shapes as copied, with the properties of their surfaces (own names, never a prototype's). */
 export interface Clipboard {
@@ -58,6 +59,13 @@ export function pasteShapes(
       }
       return m;
     });
+    if (shape.circle) {
+      // A circle keeps one name per arc, even when two arcs share a name.
+      const [x, y] = shape.circle.center;
+      const center: Point = [tidy(x + dx), tidy(y + dy)];
+      const surface = typeof shape.surface === 'string' ? names[0] : names;
+      return { kind: shape.kind, points: [], circle: { center, radius: shape.circle.radius }, surface };
+    }
     return { kind: shape.kind, points: shift(shape.points, dx, dy), surface: compactSurface(names) };
   });
   const first = doc.shapes.length;
@@ -106,14 +114,21 @@ export function flipShapes(doc: SketchFile, indices: readonly number[], how: 'le
   const axis = how === 'left-right' ? 0 : 1;
   let lo = Infinity;
   let hi = -Infinity;
-  for (const i of chosen)
+  for (const i of chosen) {
+    const c = doc.shapes[i].circle;
+    if (c) {
+      lo = Math.min(lo, c.center[axis] - c.radius);
+      hi = Math.max(hi, c.center[axis] + c.radius);
+    }
     for (const p of doc.shapes[i].points) {
       lo = Math.min(lo, p[axis]);
       hi = Math.max(hi, p[axis]);
     }
+  }
   const mid2 = lo + hi;
   const shapes = doc.shapes.map((shape, i) => {
     if (!chosen.has(i)) return shape;
+    if (isCircle(shape)) return flipCircle(shape, axis, mid2);
     const n = shape.points.length;
     const names = edgeNames(shape);
     // Reversed: new point j is old point n-1-j; new edge j (j -> j+1) is old edge n-2-j.
@@ -124,4 +139,23 @@ export function flipShapes(doc: SketchFile, indices: readonly number[], how: 'le
     return { ...shape, points, surface: compactSurface(surface) };
   });
   return { ...doc, shapes };
+}
+
+/**
+ * A circle mirrored about x = mid2/2 (axis 0) or y = mid2/2 (axis 1). Arcs run
+ * anticlockwise from +x, so mirroring y sends arc k to arc n-1-k, and mirroring
+ * x (angle a to pi - a) sends it to arc n/2-1-k: exact when n is even; an odd
+ * number of named arcs cannot be mirrored in x, so its names keep their places.
+ */
+function flipCircle(shape: CircleShape, axis: 0 | 1, mid2: number): Shape {
+  const [x, y] = shape.circle.center;
+  const center: Point = axis === 0 ? [tidy(mid2 - x), y] : [x, tidy(mid2 - y)];
+  let surface = shape.surface;
+  if (Array.isArray(shape.surface)) {
+    const names = shape.surface;
+    const n = names.length;
+    if (axis === 1) surface = names.map((_, j) => names[n - 1 - j]);
+    else if (n % 2 === 0) surface = names.map((_, j) => names[(((n / 2 - 1 - j) % n) + n) % n]);
+  }
+  return { ...shape, circle: { ...shape.circle, center }, surface };
 }

@@ -3,12 +3,32 @@
 import type { Point, Shape, SketchFile } from '../sketchFile';
 import type { Pick } from '../selection';
 import { edgeNames } from '../geometry/polygon';
-import { newShapeSurface, type ShapeStem } from './surfaceNames';
+import { newShapeSurface, nextNumbered, usedSurfaceNames, type ShapeStem } from './surfaceNames';
+import { circleShape } from './circleShapes';
 
 /** A new shape as one surface ("body 2", "tube 3"), or an enclosure with its sides named by place. */
 export function addShape(doc: SketchFile, kind: Shape['kind'], points: Point[], stem: ShapeStem = 'body'): SketchFile {
   const surface = newShapeSurface(doc, kind, points, stem);
   return { ...doc, shapes: [...doc.shapes, { kind, points, surface }] };
+}
+
+/** A new exact circle (centre and radius in sketch units), one surface ("tube 3"; an enclosure is "shell k"). */
+export function addCircle(
+  doc: SketchFile,
+  kind: Shape['kind'],
+  center: Point,
+  radius: number,
+  stem: ShapeStem = 'tube',
+): SketchFile {
+  const surface = nextNumbered(kind === 'solid' ? stem : 'shell', usedSurfaceNames(doc));
+  return { ...doc, shapes: [...doc.shapes, circleShape(kind, center, radius, surface)] };
+}
+
+/** Set a circle's centre and radius (sketch units); a non-circle or a radius not above 0 leaves the document. */
+export function setCircle(doc: SketchFile, shapeIndex: number, center: Point, radius: number): SketchFile {
+  const shape = doc.shapes[shapeIndex];
+  if (!shape?.circle || !(radius > 0) || !Number.isFinite(radius)) return doc;
+  return replaceShape(doc, shapeIndex, { ...shape, circle: { center: [center[0], center[1]], radius } });
 }
 
 export function deleteShapes(doc: SketchFile, shapeIndices: readonly number[]): SketchFile {
@@ -39,8 +59,14 @@ export function movedPoints(doc: SketchFile, picks: readonly Pick[]): Map<number
 /** Translate the picked vertices, edges and shapes by (dx, dy) in sketch units. */
 export function moveSelection(doc: SketchFile, picks: readonly Pick[], dx: number, dy: number): SketchFile {
   const moved = movedPoints(doc, picks);
-  if (moved.size === 0 || (dx === 0 && dy === 0)) return doc;
+  // A circle moves by its centre when it is picked whole (it has no points to pick).
+  const circles = new Set(picks.filter((p) => p.type === 'shape' && doc.shapes[p.shape]?.circle).map((p) => p.shape));
+  if ((moved.size === 0 && circles.size === 0) || (dx === 0 && dy === 0)) return doc;
   const shapes = doc.shapes.map((shape, s) => {
+    if (circles.has(s) && shape.circle) {
+      const [x, y] = shape.circle.center;
+      return { ...shape, circle: { ...shape.circle, center: [x + dx, y + dy] as Point } };
+    }
     const ks = moved.get(s);
     if (!ks) return shape;
     const points = shape.points.map((p, k): Point => (ks.has(k) ? [p[0] + dx, p[1] + dy] : p));

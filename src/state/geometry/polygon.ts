@@ -13,6 +13,8 @@ export function signedArea(points: readonly Point[]): number {
 
 /** Surface name of every edge, whether the shape stores one name or one per edge. */
 export function edgeNames(shape: Shape): string[] {
+  // A circle has no points: one name per arc (anticlockwise from +x).
+  if (shape.circle) return typeof shape.surface === 'string' ? [shape.surface] : [...shape.surface];
   const n = shape.points.length;
   if (typeof shape.surface === 'string') return new Array<string>(n).fill(shape.surface);
   return shape.points.map((_, k) => shape.surface[k] ?? `edge ${k + 1}`);

@@ -1,6 +1,8 @@
 // What lies under the pointer: vertex first, then edge, then a shape's inside.
+// A circle has no vertices or edges to pick: its rim or inside picks the whole circle.
 import type { Point, SketchFile } from '../sketchFile';
 import { closestOnSegment, edgeEnds, pointInPolygon } from '../geometry/polygon';
+import { insideCircle, isCircle, nearestArc } from '../edits/circleShapes';
 
 export type Hit =
   | { type: 'vertex'; shape: number; index: number }
@@ -33,10 +35,21 @@ export function hitTest(doc: SketchFile, p: Point, tolerance: number): Hit {
       }
     }),
   );
+  doc.shapes.forEach((shape, s) => {
+    if (!isCircle(shape)) return;
+    const d = nearestArc(shape, p).distance;
+    if (d <= bestD) {
+      bestD = d;
+      best = { type: 'shape', shape: s };
+    }
+  });
   if (best) return best;
   // Solids lie inside the enclosure, so test them first: the innermost shape wins.
   const order = doc.shapes.map((_, i) => i).sort((a, b) => rank(doc, a) - rank(doc, b));
-  for (const s of order) if (pointInPolygon(p, doc.shapes[s].points)) return { type: 'shape', shape: s };
+  for (const s of order) {
+    const shape = doc.shapes[s];
+    if (isCircle(shape) ? insideCircle(shape, p) : pointInPolygon(p, shape.points)) return { type: 'shape', shape: s };
+  }
   return null;
 }
 

@@ -40,7 +40,13 @@ export function pressSelect(
   const next = already && !shift ? [...selection] : togglePick(selection, pick, shift);
   if (!next.some((s) => samePick(s, pick))) return { selection: next, drag: null };
   const shape = doc.shapes[hit.shape];
-  const reference = hit.type === 'vertex' || hit.type === 'edge' ? shape.points[hit.index] : shape.points[0];
+  // A circle's reference is its centre, so a dragged tube's centre lands on the grid.
+  const reference =
+    hit.type === 'vertex' || hit.type === 'edge'
+      ? shape.points[hit.index]
+      : shape.circle
+        ? shape.circle.center
+        : shape.points[0];
   return { selection: next, drag: { picks: next, anchor: pointer, reference } };
 }
 

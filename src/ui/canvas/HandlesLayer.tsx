@@ -6,6 +6,8 @@ import type { Pick } from '../../state/selection';
 import { edgeEnds, edgeLength } from '../../state/geometry/polygon';
 import { toScreen } from '../../state/camera';
 import { MARK } from '../palette';
+import { isCircle } from '../../state/edits/circleShapes';
+import { arcScreenPoints } from './circleDrawing';
 
 interface Props {
   doc: SketchFile;
@@ -36,7 +38,27 @@ export const HandlesLayer = memo(function HandlesLayer({ doc, camera, selection,
   for (const p of selection) {
     const shape = doc.shapes[p.shape];
     if (!shape) continue;
-    if (p.type === 'shape') {
+    if (p.type === 'shape' && isCircle(shape)) {
+      const [x, y] = toScreen(camera, shape.circle.center);
+      marks.push(
+        <Line
+          key={`s${p.shape}`}
+          points={arcScreenPoints(camera, { ...shape, surface: 'rim' }, 0, -3)}
+          stroke={MARK.selection}
+          strokeWidth={1.5}
+          dash={[6, 4]}
+        />,
+        <Circle key={`c${p.shape}`} x={x} y={y} radius={3} fill={MARK.selection} />,
+      );
+      tips.push(
+        <Tip
+          key={`tc${p.shape}`}
+          x={x}
+          y={y}
+          text={`centre (${fmt(shape.circle.center[0])}, ${fmt(shape.circle.center[1])}), diameter ${fmt(2 * shape.circle.radius)} ${u}`}
+        />,
+      );
+    } else if (p.type === 'shape') {
       marks.push(
         <Line
           key={`s${p.shape}`}

@@ -5,6 +5,7 @@ import type { SketchFile } from '../../state/sketchFile';
 import { edgeEnds, edgeLength, edgeNames, radiatingNormal } from '../../state/geometry/polygon';
 import { toScreen } from '../../state/camera';
 import { surfaceStyle } from '../palette';
+import { arcAngles, arcLength, isCircle, rimPoint } from '../../state/edits/circleShapes';
 
 interface Props {
   doc: SketchFile;
@@ -23,7 +24,7 @@ export const NamesLayer = memo(function NamesLayer({ doc, camera, colours, empha
   const best = new Map<string, { shape: number; edge: number; length: number }>();
   doc.shapes.forEach((shape, s) =>
     edgeNames(shape).forEach((name, k) => {
-      const length = edgeLength(shape, k);
+      const length = isCircle(shape) ? arcLength(shape, k) : edgeLength(shape, k);
       const b = best.get(name);
       if (!b || length > b.length) best.set(name, { shape: s, edge: k, length });
     }),
@@ -36,7 +37,14 @@ export const NamesLayer = memo(function NamesLayer({ doc, camera, colours, empha
         let x: number;
         let y: number;
         let n: readonly [number, number];
-        if (shape.kind === 'solid' && typeof shape.surface === 'string') {
+        if (isCircle(shape)) {
+          // A circle's name sits beside the middle of its longest arc (above a one-surface tube).
+          const [a0, a1] = typeof shape.surface === 'string' ? [Math.PI / 2, Math.PI / 2] : arcAngles(shape, b.edge);
+          const mid = (a0 + a1) / 2;
+          const out = shape.kind === 'solid' ? 1 : -1;
+          [x, y] = toScreen(camera, rimPoint(shape, mid));
+          n = [out * Math.cos(mid), out * Math.sin(mid)];
+        } else if (shape.kind === 'solid' && typeof shape.surface === 'string') {
           // A body that is one surface (a tube): centred above it, so names in a row do not run together.
           const xs = shape.points.map((p) => p[0]);
           const top = Math.max(...shape.points.map((p) => p[1]));

@@ -5,6 +5,8 @@ import type { Shape, SketchFile } from '../../state/sketchFile';
 import { edgeEnds, edgeNames, radiatingNormal } from '../../state/geometry/polygon';
 import { toScreen } from '../../state/camera';
 import { surfaceStyle, MARK } from '../palette';
+import { isCircle, arcCount, type CircleShape } from '../../state/edits/circleShapes';
+import { arcScreenPoints, rimScreenPoints } from './circleDrawing';
 
 interface Props {
   doc: SketchFile;
@@ -51,8 +53,10 @@ const ShapeNode = memo(function ShapeNode({
   hot: string;
   problem: boolean;
 }) {
-  const flat = shape.points.flatMap((p) => toScreen(camera, p));
   const colourOf = colours.split(',').map(Number);
+  if (isCircle(shape))
+    return <CircleNode shape={shape} camera={camera} colourOf={colourOf} hot={hot} problem={problem} />;
+  const flat = shape.points.flatMap((p) => toScreen(camera, p));
   return (
     <Fragment>
       <Line
@@ -89,3 +93,47 @@ const ShapeNode = memo(function ShapeNode({
     </Fragment>
   );
 });
+
+/** An exact circle: filled rim, then each arc in its surface's colour with the radiating side shaded. */
+function CircleNode({
+  shape,
+  camera,
+  colourOf,
+  hot,
+  problem,
+}: {
+  shape: CircleShape;
+  camera: Camera;
+  colourOf: number[];
+  hot: string;
+  problem: boolean;
+}) {
+  return (
+    <Fragment>
+      <Line
+        points={rimScreenPoints(camera, shape)}
+        closed
+        fill={shape.kind === 'enclosure' ? '#fffdf6' : '#d9d3c3'}
+        stroke={problem ? MARK.problem : undefined}
+        strokeWidth={problem ? 8 : 0}
+      />
+      {Array.from({ length: arcCount(shape) }, (_, k) => {
+        const rim = arcScreenPoints(camera, shape, k);
+        const st = surfaceStyle(colourOf[k] ?? 0);
+        const on = hot[k] === '1';
+        return (
+          <Fragment key={k}>
+            {on && <Line points={rim} stroke={MARK.highlight} strokeWidth={11} lineCap="round" />}
+            <Line
+              points={arcScreenPoints(camera, shape, k, SIDE_PX)}
+              stroke={st.colour}
+              strokeWidth={4}
+              opacity={0.3}
+            />
+            <Line points={rim} stroke={st.colour} strokeWidth={on ? 4 : 2.5} dash={st.dash} lineCap="round" />
+          </Fragment>
+        );
+      })}
+    </Fragment>
+  );
+}

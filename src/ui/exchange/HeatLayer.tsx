@@ -5,6 +5,8 @@ import type { SketchFile } from '../../state/sketchFile';
 import { edgeEnds, edgeNames } from '../../state/geometry/polygon';
 import { toScreen } from '../../state/camera';
 import { useHeatScale } from './useHeatScale';
+import { isCircle } from '../../state/edits/circleShapes';
+import { arcScreenPoints } from '../canvas/circleDrawing';
 
 /** Band widths, px: a dark rim so pale mid-scale colours still show on the paper canvas. */
 const RIM_PX = 8;
@@ -18,6 +20,22 @@ export function HeatLayer({ doc, camera }: { doc: SketchFile; camera: Camera }) 
     <Layer listening={false} opacity={stale ? 0.55 : 1}>
       {doc.shapes.map((shape, s) => {
         const names = edgeNames(shape);
+        if (isCircle(shape))
+          return (
+            <Fragment key={s}>
+              {names.map((name, k) => {
+                const colour = scale.colours.get(name);
+                if (!colour) return null;
+                const pts = arcScreenPoints(camera, shape, k);
+                return (
+                  <Fragment key={k}>
+                    <Line points={pts} stroke="#3a3a3a" strokeWidth={RIM_PX} lineCap="round" />
+                    <Line points={pts} stroke={colour} strokeWidth={BAND_PX} lineCap="round" />
+                  </Fragment>
+                );
+              })}
+            </Fragment>
+          );
         return (
           <Fragment key={s}>
             {shape.points.map((_, k) => {
