@@ -16,6 +16,8 @@ const runtime = startRuntime({
   demo: demoSketch,
   channel: browserTabChannel(),
 });
+// A closing tab lets go of the autosave, so a tab waiting on it is told.
+window.addEventListener('pagehide', () => runtime.dispose());
 // Browser tests read the store through this handle (never used by the app itself).
 (window as unknown as { __tautline?: unknown }).__tautline = runtime;
 

@@ -99,6 +99,9 @@ export function saveAutosave(storage: Storage, api: DocumentApi, doc: SketchFile
 
 export const FULL_TEXT =
   "Autosave failed: this browser's storage is full or blocked, so changes from now on are not kept in the browser (the last autosaved copy is kept). Save the sketch to a file to keep your work.";
+/** Told to a tab that was not saving when the tab that was closes. */
+export const RELEASED_TEXT =
+  'The other tab with this sketch was closed. Take over here to save from this tab (its copy then replaces the one saved last).';
 export const ELSEWHERE_TEXT =
   'This sketch is open in another tab, which autosaves it; changes made in this tab are not autosaved. Take over to autosave from this tab instead (the other tab then stops).';
 export const TAKEN_TEXT =
@@ -181,6 +184,9 @@ export function startAutosave(
       elsewhereNotice = store
         .getState()
         .notify('warning', ELSEWHERE_TEXT, { kind: 'run', label: 'Take over here', run: takeOver });
+    },
+    onReleased: () => {
+      store.getState().notify('info', RELEASED_TEXT, { kind: 'run', label: 'Take over here', run: takeOver });
     },
   });
 

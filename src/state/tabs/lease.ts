@@ -14,7 +14,8 @@ export const LEASE_ANSWER_MS = 400;
 export type TabMessage =
   | { type: 'who'; from: string } // a tab that opened asks who holds the lease
   | { type: 'here'; from: string; to: string } // the holder answers
-  | { type: 'taken'; from: string }; // a tab took the lease over
+  | { type: 'taken'; from: string } // a tab took the lease over
+  | { type: 'released'; from: string }; // the holder closed and let go
 
 /** A message channel between tabs of the same site (BroadcastChannel in the browser; a fake in tests). */
 export interface TabChannel {
@@ -31,6 +32,8 @@ export interface LeaseOptions {
   id?: string;
   /** Told whenever the state changes (to 'elsewhere' when another tab holds or took the lease). */
   onChange?: (state: LeaseState) => void;
+  /** Told, while another tab holds the lease, that it closed and let go (this tab may now take over). */
+  onReleased?: () => void;
 }
 
 export class TabLease {
@@ -86,6 +89,8 @@ export class TabLease {
       } catch {
         /* storage blocked: the next tab asks and, with no answer, takes it */
       }
+      // A tab that was told "elsewhere" is waiting for this.
+      this.options.channel?.post({ type: 'released', from: this.id });
     }
     this.options.channel?.close();
   }
@@ -106,6 +111,9 @@ export class TabLease {
       if (this.timer) clearTimeout(this.timer);
       this.timer = null;
       this.set('elsewhere');
+    } else if (m.type === 'released' && this.state === 'elsewhere') {
+      // Not taken by itself: this tab's copy would replace the one the closed tab saved last.
+      this.options.onReleased?.();
     } else if (m.type === 'taken' && this.state !== 'elsewhere') {
       if (this.timer) clearTimeout(this.timer);
       this.timer = null;

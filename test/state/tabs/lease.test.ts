@@ -3,7 +3,7 @@
 // by a closed tab is taken after a short wait; two tabs that claim at the same
 // moment sort it out at the next write.
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { AUTOSAVE_KEY, ELSEWHERE_TEXT, startAutosave } from '../../../src/state/autosave';
+import { AUTOSAVE_KEY, ELSEWHERE_TEXT, RELEASED_TEXT, startAutosave } from '../../../src/state/autosave';
 import { LEASE_ANSWER_MS, LEASE_KEY, TabLease } from '../../../src/state/tabs/lease';
 import { documentApi } from '../../../src/state/documentApi';
 import { createAppStore, type AppStore } from '../../../src/state/store';
@@ -113,6 +113,30 @@ describe('two tabs on one sketch', () => {
     expect(corner(storage)).toEqual([40, 27]);
     expect(noticeWith(b, ELSEWHERE_TEXT)).toBeUndefined();
     stop();
+  });
+
+  it('when the saving tab closes, the waiting tab is told and may take over; nothing is overwritten until it does', async () => {
+    const storage = new MemoryStorage();
+    const bus = new FakeBus();
+    const a = createAppStore(box);
+    const stopA = startAutosave(a, storage, documentApi, { channel: bus.channel(), tabId: 'A' });
+    moveCorner(a, 21);
+    const b = createAppStore(a.getState().doc);
+    const stopB = startAutosave(b, storage, documentApi, { channel: bus.channel(), tabId: 'B' });
+    await flush();
+    moveCorner(b, 35);
+    moveCorner(a, 22);
+    stopA(); // tab A closes
+    expect(storage.getItem(LEASE_KEY)).toBeNull();
+    await flush();
+    const told = noticeWith(b, RELEASED_TEXT);
+    expect(told?.action?.kind).toBe('run');
+    expect(corner(storage)).toEqual([40, 22]); // A's last copy stays until B takes over
+    if (told?.action?.kind !== 'run') throw new Error('no take-over action');
+    told.action.run();
+    expect(storage.getItem(LEASE_KEY)).toBe('B');
+    expect(corner(storage)).toEqual([40, 35]);
+    stopB();
   });
 
   it('two tabs that claim at the same moment: the one that finds the other id stops at its next write', () => {
