@@ -114,9 +114,7 @@ describe('surface balance in the heat-exchange tab', () => {
     await type(user, screen.getByLabelText('fluid temperature (°C)'), '350');
     expect(store.getState().doc.surfaces!.inner.tube!.fluidTemperature).toBeCloseTo(623.15, 9);
     await type(user, screen.getByLabelText('inner diameter (m)'), '0.2');
-    expect(
-      screen.getByText(/not applied: inner diameter \(m\) must be below the outer diameter/),
-    ).toBeTruthy();
+    expect(screen.getByText(/not applied: inner diameter \(m\) must be below the outer diameter/)).toBeTruthy();
     for (const label of ['inside coefficient (W/(m²·K))', 'outer diameter (m)', 'wall conductivity (W/(m·K))']) {
       expect(screen.getByLabelText(label)).toBeTruthy();
     }
