@@ -1,10 +1,10 @@
 // The tube row: n tubes of outer diameter D, pitch s centre to centre, on a
 // centre line at a distance from a wall (measured from the wall to the centre
-// line, as furnace drawings state it) or from a start point. Until circles are
-// in the file, each tube is a regular polygon with its corners on the circle.
+// line, as furnace drawings state it) or from a start point. Each tube is an
+// exact circle of its own surface.
 import type { Point, SketchFile } from '../sketchFile';
 import { edgeEnds, radiatingNormal } from '../geometry/polygon';
-import { addShape } from './shapeEdits';
+import { addCircle } from './shapeEdits';
 
 export interface RowSpec {
   count: number;
@@ -12,8 +12,6 @@ export interface RowSpec {
   diameter: number;
   /** Centre to centre, sketch units. */
   pitch: number;
-  /** Corners of each tube polygon. */
-  sides: number;
 }
 
 export type RowPlace =
@@ -29,27 +27,16 @@ export const MAX_ROW = 500;
 
 const tidy = (v: number) => Number(v.toPrecision(12));
 
-/** Corners of a tube of diameter d around c, anticlockwise from angle 0 (sketch units). */
-export function tubeOutline(c: Point, diameter: number, sides: number): Point[] {
-  const r = diameter / 2;
-  return Array.from({ length: sides }, (_, k): Point => {
-    const a = (2 * Math.PI * k) / sides;
-    return [tidy(c[0] + r * Math.cos(a)), tidy(c[1] + r * Math.sin(a))];
-  });
-}
-
 /** The row's tube centres (first, then every pitch along the direction), or why the row cannot be placed. */
 export function rowCentres(
   doc: SketchFile,
   spec: RowSpec,
   place: RowPlace,
 ): { centres: Point[] } | { problem: string } {
-  const { count, diameter, pitch, sides } = spec;
+  const { count, diameter, pitch } = spec;
   if (!Number.isInteger(count) || count < 1 || count > MAX_ROW)
     return { problem: `the number of tubes must be a whole number from 1 to ${MAX_ROW}` };
   if (!(diameter > 0) || !Number.isFinite(diameter)) return { problem: 'the diameter must be greater than 0' };
-  if (!Number.isInteger(sides) || sides < 3 || sides > 256)
-    return { problem: 'the sides of each tube must be a whole number from 3 to 256' };
   if (count > 1 && !(pitch > diameter))
     return { problem: `the pitch (${pitch}) must be greater than the diameter (${diameter}), or the tubes overlap` };
   let start: Point;
@@ -80,7 +67,7 @@ export function rowCentres(
   return { centres };
 }
 
-/** Add the row: one body per tube, each its own surface ("tube 4", "tube 5"...). */
+/** Add the row: one exact circle per tube, each its own surface ("tube 4", "tube 5"...). */
 export function addTubeRow(doc: SketchFile, spec: RowSpec, place: RowPlace): RowResult {
   const r = rowCentres(doc, spec, place);
   if ('problem' in r) return { ok: false, problem: r.problem };
@@ -88,7 +75,7 @@ export function addTubeRow(doc: SketchFile, spec: RowSpec, place: RowPlace): Row
   const added: number[] = [];
   for (const c of r.centres) {
     added.push(next.shapes.length);
-    next = addShape(next, 'solid', tubeOutline(c, spec.diameter, spec.sides), 'tube');
+    next = addCircle(next, 'solid', c, spec.diameter / 2, 'tube');
   }
   return { ok: true, doc: next, added, centres: r.centres };
 }

@@ -7,6 +7,41 @@ import type { DrawingTool, ToolContext, ToolSetting } from './tool';
 import { placeShape } from './placeShape';
 import { editEntry, readEntry } from './typedEntry';
 import type { ShapeStem } from '../edits/surfaceNames';
+import { addCircle } from '../edits/shapeEdits';
+
+/** An exact circle made by a tool: centre and radius, sketch units. */
+export interface CircleMade {
+  center: Point;
+  radius: number;
+}
+
+/** What a quick-shape tool makes: an outline, or an exact circle. */
+export type Made = Point[] | CircleMade;
+
+/** Corners of the preview drawn while dragging a circle (drawing only; the shape placed is exact). */
+const PREVIEW_SIDES = 96;
+
+function previewOf(made: Made): Point[] {
+  if (Array.isArray(made)) return made;
+  const { center, radius } = made;
+  return Array.from({ length: PREVIEW_SIDES }, (_, k): Point => {
+    const a = (2 * Math.PI * k) / PREVIEW_SIDES;
+    return [center[0] + radius * Math.cos(a), center[1] + radius * Math.sin(a)];
+  });
+}
+
+function place(get: () => AppState, kind: 'solid' | 'enclosure', made: Made, stem: ShapeStem): void {
+  if (Array.isArray(made)) {
+    placeShape(get, kind, made, stem);
+    return;
+  }
+  const s = get();
+  const index = s.doc.shapes.length;
+  s.edit((d) => addCircle(d, kind, made.center, made.radius, stem));
+  s.setDraft([]);
+  s.setHoverPoint(null);
+  s.setSelection([{ type: 'shape', shape: index }]);
+}
 
 interface TwoPointGesture {
   /** First point (snapped, or typed exactly), sketch units; null before the first press. */
@@ -23,10 +58,12 @@ interface TwoPointSpec<Id extends string> {
   settings: readonly ToolSetting[];
   /** What a body made by the tool is called ("body 2", "tube 3"). */
   stem: ShapeStem;
-  /** The outline from the first and second points, or null when it has no area. */
-  outline(first: Point, second: Point, s: AppState): Point[] | null;
-  /** The outline from the first point and typed numbers, or why not. */
-  typed(first: Point, numbers: number[], entry: string, s: AppState): Point[] | { problem: string };
+  /** The outline (or circle) from the first and second points, or null when it has no area. */
+  outline(first: Point, second: Point, s: AppState): Made | null;
+  /** The outline (or circle) from the first point and typed numbers, or why not. */
+  typed(first: Point, numbers: number[], entry: string, s: AppState): Made | { problem: string };
+  /** True when the second point is used as the pointer gives it (a tube's radius is not snapped). */
+  freeSecond?: boolean;
   /** Characters besides digits that the entry takes after the first point (the tube's "r" for a radius). */
   entryLetters?: string;
 }
@@ -46,7 +83,8 @@ export const makesSetting: ToolSetting = {
 
 export function twoPointTool<Id extends string>(spec: TwoPointSpec<Id>): DrawingTool<TwoPointGesture, Id> {
   type Ctx = ToolContext<TwoPointGesture>;
-  const preview = (ctx: Ctx, anchor: Point, at: Point) => spec.outline(anchor, ctx.snapped(at), ctx.get());
+  const preview = (ctx: Ctx, anchor: Point, at: Point) =>
+    spec.outline(anchor, spec.freeSecond ? at : ctx.snapped(at), ctx.get());
 
   /** Press-drag-release draws the shape; a click without a drag waits for a second click. */
   const complete = (ctx: Ctx, e: { at: Point; tolerance: number }, secondClick: boolean) => {
@@ -58,7 +96,7 @@ export function twoPointTool<Id extends string>(spec: TwoPointSpec<Id>): Drawing
     ctx.gesture.anchor = null;
     ctx.gesture.held = false;
     ctx.get().setDraft([]);
-    if (outline) placeShape(ctx.get, ctx.get().quickKind, outline, spec.stem);
+    if (outline) place(ctx.get, ctx.get().quickKind, outline, spec.stem);
   };
 
   return {
@@ -82,7 +120,9 @@ export function twoPointTool<Id extends string>(spec: TwoPointSpec<Id>): Drawing
 
     move(ctx, e) {
       const anchor = ctx.gesture.anchor;
-      if (anchor) ctx.get().setDraft(preview(ctx, anchor, e.at) ?? []);
+      if (!anchor) return;
+      const made = preview(ctx, anchor, e.at);
+      ctx.get().setDraft(made ? previewOf(made) : []);
     },
 
     release(ctx, e) {
@@ -114,14 +154,14 @@ export function twoPointTool<Id extends string>(spec: TwoPointSpec<Id>): Drawing
         return true;
       }
       const outline = spec.typed(anchor, r.numbers, s.entry, s);
-      if ('problem' in outline) {
+      if (!Array.isArray(outline) && 'problem' in outline) {
         s.notify('warning', `Not placed: ${outline.problem}.`);
         return true;
       }
       ctx.gesture.anchor = null;
       s.setEntry('');
       s.setDraft([]);
-      placeShape(ctx.get, s.quickKind, outline, spec.stem);
+      place(ctx.get, s.quickKind, outline, spec.stem);
       return true;
     },
 

@@ -3,7 +3,7 @@ import { useApp, useController } from '../AppContext';
 import type { AppState } from '../../state/store';
 import { NumberField } from './NumberField';
 import { direction } from '../../state/tools/typedEntry';
-import { COORDINATE_RULE, TUBE_SIDES_RULE } from '../../state/edits/numberInput';
+import { COORDINATE_RULE } from '../../state/edits/numberInput';
 import { MAX_ROW } from '../../state/edits/tubeRow';
 
 const selectUnits = (s: AppState) => s.doc.units;
@@ -32,14 +32,13 @@ export function TubeRowForm() {
   const [count, setCount] = useState(4);
   const [diameter, setDiameter] = useState(0.1143);
   const [pitch, setPitch] = useState(0.3);
-  const [sides, setSides] = useState(24);
   const [distance, setDistance] = useState(0.3);
   const [x, setX] = useState(0);
   const [y, setY] = useState(0);
   const [angle, setAngle] = useState(0);
   const [problem, setProblem] = useState<string | null>(null);
   const place = () => {
-    const spec = { count, diameter, pitch, sides };
+    const spec = { count, diameter, pitch };
     setProblem(
       controller.addRow(
         spec,
@@ -77,14 +76,6 @@ export function TubeRowForm() {
           onCommit={setPitch}
           rule={positive}
           width="5em"
-        />
-        <NumberField
-          label="sides"
-          title="Corners of each tube polygon (3 to 256)"
-          value={sides}
-          onCommit={setSides}
-          rule={TUBE_SIDES_RULE}
-          width="3.5em"
         />
       </div>
       {wall ? (

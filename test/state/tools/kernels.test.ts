@@ -177,9 +177,9 @@ describe('draft pictures', () => {
     expect(selectTool.draft([], [1, 1])).toBeNull();
   });
 
-  it('settings: rectangle and tube choose what they make; the tube also its number of sides', () => {
+  it('settings: rectangle and tube choose what they make (a tube is an exact circle, no sides)', () => {
     expect(selectTool.settings ?? []).toEqual([]);
     expect(rectangleTool.settings?.map((s) => s.label)).toEqual(['makes']);
-    expect(tubeTool.settings?.map((s) => s.label)).toEqual(['makes', 'sides']);
+    expect(tubeTool.settings?.map((s) => s.label)).toEqual(['makes']);
   });
 });

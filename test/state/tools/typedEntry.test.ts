@@ -98,14 +98,15 @@ describe('exact shapes from the keyboard', () => {
       [0, 1.5],
     ]);
     expect(tube.surface).toBe('tube 1');
-    expect(tube.points).toHaveLength(store.getState().tubeSides);
-    for (const [x, y] of tube.points) expect(Math.hypot(x - 0.6, y - 1.05)).toBeCloseTo(0.05715, 10);
+    // The typed centre and half the diameter, exactly: no grid, no polygon.
+    expect(tube.points).toEqual([]);
+    expect(tube.circle).toEqual({ center: [0.6, 1.05], radius: 0.1143 / 2 });
     expect(restore(store.getState().doc).ok).toBe(true);
     // A radius ending in r.
     type(c, '1.6,0.5');
     type(c, '0.05r');
     const second = store.getState().doc.shapes[2];
-    expect(Math.hypot(second.points[0][0] - 1.6, second.points[0][1] - 0.5)).toBeCloseTo(0.05, 12);
+    expect(second.circle).toEqual({ center: [1.6, 0.5], radius: 0.05 });
   });
 
   it('a rectangle dragged off the canvas is placed where the pointer left; a click released off it leaves nothing', () => {
