@@ -1,17 +1,12 @@
 // First-start demo, a sketch of our own: the cross-section of a small
-// heat-treating oven. A row of four alloy tubes (12-sided polygons standing in
-// for round tubes) hangs between a gas-fired floor and a refractory roof with
-// chamfered corners. Metres; temperatures in kelvin.
-import type { Point, SketchFile } from './sketchFile';
-import { regularPolygon } from './tools/quickShapes';
+// heat-treating oven. A row of four round alloy tubes (exact circles) hangs
+// between a gas-fired floor and a refractory roof with chamfered corners.
+// Metres; temperatures in kelvin.
+import type { SketchFile } from './sketchFile';
 
 const TUBE_RADIUS = 0.1;
 const TUBE_Y = 0.7;
 const TUBE_X = [0.45, 0.95, 1.45, 1.95];
-
-function tube(x: number): Point[] {
-  return regularPolygon([x, TUBE_Y], [x + TUBE_RADIUS, TUBE_Y], 12)!;
-}
 
 export const demoSketch: SketchFile = {
   version: 2,
@@ -29,7 +24,12 @@ export const demoSketch: SketchFile = {
       ],
       surface: ['fired floor', 'side walls', 'refractory roof', 'refractory roof', 'refractory roof', 'side walls'],
     },
-    ...TUBE_X.map((x, i) => ({ kind: 'solid' as const, points: tube(x), surface: `tube ${i + 1}` })),
+    ...TUBE_X.map((x, i) => ({
+      kind: 'solid' as const,
+      points: [],
+      circle: { center: [x, TUBE_Y] as [number, number], radius: TUBE_RADIUS },
+      surface: `tube ${i + 1}`,
+    })),
   ],
   surfaces: {
     'fired floor': { emissivity: 0.85, temperature: 1250 },

@@ -154,7 +154,12 @@ describe('the app', () => {
       (dx: number) =>
       (d: SketchFile): SketchFile => ({
         ...d,
-        shapes: d.shapes.map((sh) => ({ ...sh, points: sh.points.map(([x, y]): [number, number] => [x + dx, y]) })),
+        shapes: d.shapes.map((sh) => ({
+          ...sh,
+          points: sh.points.map(([x, y]): [number, number] => [x + dx, y]),
+          // The demo's tubes are circles: their centres move with the rest.
+          ...(sh.circle ? { circle: { ...sh.circle, center: [sh.circle.center[0] + dx, sh.circle.center[1]] } } : {}),
+        })),
       });
     store.getState().edit(shift(0.5));
     // (The job reaching the new worker is checked rather than the brief "computing"

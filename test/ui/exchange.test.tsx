@@ -123,9 +123,10 @@ describe('heat-exchange tab', () => {
     expect(screen.getByLabelText<HTMLInputElement>('temperature (K)').value).toBe('900');
   });
 
-  it('follows the canvas selection: picking an edge edits its surface', async () => {
+  it('follows the canvas selection: picking a shape edits its surface', async () => {
     const { store } = await openTab();
-    act(() => store.getState().setSelection([{ type: 'edge', shape: 2, index: 3 }]));
+    // The demo's tubes are exact circles, picked whole.
+    act(() => store.getState().setSelection([{ type: 'shape', shape: 2 }]));
     await waitFor(() => expect(screen.getByLabelText<HTMLSelectElement>('surface').value).toBe('tube 2'));
     expect(rowOf('tube 2').className).toBe('on');
   });

@@ -9,6 +9,21 @@ import { documentApi } from '../../src/state/documentApi';
 import { surfaceFactors } from '../../src/state/results/derive';
 import { surfaceIndex } from '../../src/document/surfaceIndex';
 import { demoSketch } from '../../src/state/demo';
+import { regularPolygon } from '../../src/state/tools/quickShapes';
+import type { SketchFile } from '../../src/state/sketchFile';
+
+/** The demo oven with each round tube as a 12-sided polygon, for the polygon job. */
+function polygonDemo(): SketchFile {
+  return {
+    ...demoSketch,
+    shapes: demoSketch.shapes.map((sh) => {
+      if (!sh.circle) return sh;
+      const [x, y] = sh.circle.center;
+      const points = regularPolygon([x, y], [x + sh.circle.radius, y], 12)!;
+      return { kind: sh.kind, points, surface: sh.surface };
+    }),
+  };
+}
 
 /** The checked form of a sketch, as the app passes it to toScene. */
 function checked(doc: unknown) {
@@ -58,7 +73,7 @@ function sumToSurfaces(edges: EdgeViewFactors, shapes: readonly { surface: reado
 describe('worker api', () => {
   it('returns edge factors through the channel; summed to surfaces they match an independent area-weighted sum', async () => {
     const { remote, close } = overChannel();
-    const sketch = checked(demoSketch);
+    const sketch = checked(polygonDemo());
     const { scene } = documentApi.toScene(sketch);
     const viaWorker = await remote.compute(jobFromPolygons(scene.polygons));
     close();

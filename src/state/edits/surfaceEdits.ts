@@ -19,7 +19,9 @@ function relabel(doc: SketchFile, nameOf: (shape: number, edge: number, old: str
   const shapes = doc.shapes.map((shape, s) => {
     const old = edgeNames(shape);
     const next = old.map((n, k) => nameOf(s, k, n));
-    return next.every((n, k) => n === old[k]) ? shape : { ...shape, surface: compactSurface(next) };
+    if (next.every((n, k) => n === old[k])) return shape;
+    // A circle keeps one name per arc: its arcs are equal parts, so their number must not change.
+    return { ...shape, surface: shape.circle && next.length > 1 ? next : compactSurface(next) };
   });
   return { ...doc, shapes };
 }
@@ -86,7 +88,8 @@ export function splitSurface(doc: SketchFile, name: string): SketchFile {
 
 /**
  * Cut every edge of a surface into `parts` equal edges (new points on the
- * edges) and name each piece "name 1", "name 2"... along the shape, copying the
+ * edges; a circle into `parts` times as many equal arcs, anticlockwise from +x)
+ * and name each piece "name 1", "name 2"... along the shape, copying the
  * properties: a wall whose flux varies along it becomes a profile. parts = 1
  * gives each existing edge its own name (as splitSurface). Null when parts is
  * not a whole number from 1 to 1000.
@@ -97,6 +100,8 @@ export function splitSurfaceParts(doc: SketchFile, name: string, parts: number):
   const shapes = doc.shapes.map((shape) => {
     const names = edgeNames(shape);
     if (!names.includes(name)) return shape;
+    // A circle: every arc is cut into `parts` (arcs must stay equal); the others keep their names.
+    if (shape.circle) return { ...shape, surface: names.flatMap((n) => new Array<string>(parts).fill(n)) };
     const points: Point[] = [];
     const surface: string[] = [];
     shape.points.forEach((a, k) => {

@@ -69,7 +69,7 @@ export const HandlesLayer = memo(function HandlesLayer({ doc, camera, selection,
           dash={[6, 4]}
         />,
       );
-    } else if (p.type === 'edge') {
+    } else if (p.type === 'edge' && !isCircle(shape)) {
       const [a, b] = edgeEnds(shape, p.index);
       const [ax, ay] = toScreen(camera, a);
       const [bx, by] = toScreen(camera, b);
@@ -90,7 +90,7 @@ export const HandlesLayer = memo(function HandlesLayer({ doc, camera, selection,
           text={`length ${fmt(edgeLength(shape, p.index))} ${u}`}
         />,
       );
-    } else {
+    } else if (p.type === 'vertex') {
       const q = shape.points[p.index];
       if (!q) continue;
       const [x, y] = toScreen(camera, q);

@@ -65,7 +65,7 @@ export function SelectionPanel() {
       })}
       {edges.slice(0, 6).map((e) => {
         const shape = doc.shapes[e.shape];
-        if (!shape || e.type !== 'edge') return null;
+        if (!shape || e.type !== 'edge' || shape.circle) return null;
         const [a, b] = edgeEnds(shape, e.index);
         return (
           <div key={`e${e.shape}:${e.index}`} className="item">

@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { useApp, useAppStore } from '../AppContext';
 import { selectDoc } from '../../state/selectors';
 import { edgeLength, edgeNames } from '../../state/geometry/polygon';
+import { arcLength, isCircle } from '../../state/edits/circleShapes';
 import { joinSurfaces, renameSurface, splitSurfaceParts, surfaceNameProblem } from '../../state/edits/surfaceEdits';
 import type { Pick } from '../../state/selection';
 import type { SketchFile } from '../../state/sketchFile';
@@ -24,8 +25,10 @@ function surfaceRows(doc: SketchFile): SurfaceRow[] {
     edgeNames(shape).forEach((name, k) => {
       if (!rows.has(name)) rows.set(name, { name, edges: [], length: 0 });
       const r = rows.get(name)!;
-      r.edges.push({ type: 'edge', shape: s, index: k });
-      r.length += edgeLength(shape, k);
+      // An arc is not picked on its own: choosing it picks its circle.
+      if (!isCircle(shape)) r.edges.push({ type: 'edge', shape: s, index: k });
+      else if (!r.edges.some((p) => p.type === 'shape' && p.shape === s)) r.edges.push({ type: 'shape', shape: s });
+      r.length += isCircle(shape) ? arcLength(shape, k) : edgeLength(shape, k);
     }),
   );
   return [...rows.values()];
@@ -58,7 +61,7 @@ export function SurfacesPanel() {
     <div className="surfaces-panel">
       <p className="hint surface-note">
         A surface is one or more edges that share one radiosity and one temperature. A long wall whose flux varies along
-        it should be split into parts.
+        it should be split into parts; a tube splits into equal arcs, numbered anticlockwise from the +x side.
       </p>
       <ul className="surface-list" aria-label="Surfaces">
         {rows.map((r, i) => {

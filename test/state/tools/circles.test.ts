@@ -6,6 +6,7 @@ import { createAppStore } from '../../../src/state/store';
 import { CanvasController } from '../../../src/state/canvasController';
 import { hitTest } from '../../../src/state/tools/hitTest';
 import { setCircle } from '../../../src/state/edits/shapeEdits';
+import { joinSurfaces, renameSurface, splitSurfaceParts } from '../../../src/state/edits/surfaceEdits';
 import { arcAngles, nearestArc, rimPoint, type CircleShape } from '../../../src/state/edits/circleShapes';
 import { edgeNames } from '../../../src/state/geometry/polygon';
 import { restore } from '../../../src/document';
@@ -115,5 +116,23 @@ describe('exact circles on the canvas', () => {
     expect(circleOf(next, 1).circle).toEqual({ center: [1, 0.4], radius: 0.05 });
     expect(setCircle(doc, 1, [1, 0.4], 0)).toBe(doc);
     expect(setCircle(doc, 0, [1, 0.4], 0.05)).toBe(doc);
+  });
+
+  it('splitting a tube gives equal arcs named in turn from +x; joining them keeps the arcs', () => {
+    const doc: SketchFile = {
+      version: 2,
+      units: 'm',
+      shapes: [{ kind: 'solid', points: [], circle: { center: [0, 0], radius: 1 }, surface: 'tube 3' }],
+      surfaces: { 'tube 3': { emissivity: 0.7, temperature: 900 } },
+    };
+    const split = splitSurfaceParts(doc, 'tube 3', 6)!;
+    expect(split.shapes[0].surface).toEqual(['tube 3 1', 'tube 3 2', 'tube 3 3', 'tube 3 4', 'tube 3 5', 'tube 3 6']);
+    expect(split.surfaces!['tube 3 4']).toEqual({ emissivity: 0.7, temperature: 900 });
+    // Arc 4 of 6 runs from 180° to 240°.
+    expect(arcAngles(split.shapes[0] as CircleShape, 3)).toEqual([Math.PI, (4 * Math.PI) / 3]);
+    const joined = joinSurfaces(split, ['tube 3 1', 'tube 3 2', 'tube 3 3', 'tube 3 4', 'tube 3 5', 'tube 3 6']);
+    expect(joined.shapes[0].surface).toEqual(new Array(6).fill('tube 3 1'));
+    expect(renameSurface(joined, 'tube 3 1', 'tube 3').shapes[0].surface).toHaveLength(6);
+    expect(restore(JSON.stringify(split)).ok).toBe(true);
   });
 });
