@@ -25,10 +25,11 @@ import { solveSketchExchange } from '../document/exchangeInput';
 import { exchangeJson } from '../document/exchangeJson';
 import type { CliIO } from './io';
 import { parseArgs } from './args';
+import { profileCsv, surfaceProfile } from '../document/exchange/profile';
 import { readSketchFile } from './readSketch';
 import { displayName, usageError as reportUsage } from './terminalText';
 
-export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --csv] [--depth METRES]';
+export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --csv | --profile NAME] [--depth METRES]';
 // The --json object is built in src/document (shared with the design studies and the library).
 export { exchangeJson };
 const usageError = (io: CliIO, problem: string) => reportUsage(io, 'exchange', EXCHANGE_USAGE, problem);
@@ -48,6 +49,10 @@ adiabatic, opening, wall, tube, linked plate).
                     coldFaceTemperature; tubes: innerTemperature), exchange
                     (net heat from row to column), gas, energyBalance
   --csv             one row per surface
+  --profile NAME    CSV of the local net flux around a tube split into arcs
+                    ("NAME 1", "NAME 2"..., angle of each arc's middle in
+                    degrees anticlockwise from +x) or along a wall split
+                    into parts (position of each part's middle)
   --depth METRES    length of the long dimension; adds totals in W
                     (default: the file's settings.depth, if any)
 Units: length in the file's units, temperature K, heat W per metre of
@@ -62,7 +67,14 @@ ${CAUTION}
 /** Run the command; returns the exit code (0 done, 1 bad file or no answer, 2 bad arguments). */
 export function runExchange(args: string[], io: CliIO): number {
   let depthArg: number | undefined;
+  let profileName: string | undefined;
   const parsed = parseArgs(args, (arg, takeNext) => {
+    if (arg === '--profile' || arg.startsWith('--profile=')) {
+      const name = arg === '--profile' ? takeNext() : arg.slice('--profile='.length);
+      if (!name) return '--profile needs a surface name';
+      profileName = name;
+      return null;
+    }
     if (arg !== '--depth' && !arg.startsWith('--depth=')) return undefined;
     const text = arg === '--depth' ? takeNext() : arg.slice('--depth='.length);
     if (text === undefined) return '--depth needs a number of metres';
@@ -96,6 +108,20 @@ export function runExchange(args: string[], io: CliIO): number {
   const { result } = outcome;
   const conditions = outcome.input.conditions;
   const report: Report = { file, sketch, names: surfaceNames, factors, result, conditions };
+  if (profileName !== undefined) {
+    if (format !== 'table') return usageError(io, '--profile prints CSV; leave out --json and --csv');
+    const index = new Map(surfaceNames.map((n, i) => [n, i]));
+    const p = surfaceProfile(sketch.shapes, profileName, (n) => {
+      const i = index.get(n);
+      return i === undefined ? undefined : result.netFlux[i];
+    });
+    if ('problem' in p) {
+      io.err(`exchange: ${file}: ${p.problem}\n`);
+      return 1;
+    }
+    io.out(profileCsv(p, sketch.units));
+    return 0;
+  }
   if (format === 'json') io.out(`${JSON.stringify(exchangeJson(report))}\n`);
   else if (format === 'csv')
     io.out(

@@ -1,0 +1,116 @@
+// The local net flux along a tube split into arcs, or along a wall split into
+// parts: one row per piece with its place (the arc's middle angle, degrees
+// anticlockwise from +x, as the file runs its arcs; or the distance along the
+// wall to the part's middle, file units) and its surface's net flux (W/m^2).
+// One builder for the command line and the app.
+import { toCsv } from '../csv';
+import type { ShapeV1 as Shape } from '../schema';
+
+export interface ProfileRow {
+  /** Degrees from +x (arcs) or distance along the wall in file units (parts). */
+  at: number;
+  /** Length of the piece, file units. */
+  length: number;
+  surface: string;
+  /** Net flux, W/m^2, positive when the surface gives off more than it absorbs. */
+  flux: number;
+}
+
+export interface Profile {
+  /** 'angle' for the arcs of a circle, 'position' for the parts of a wall. */
+  along: 'angle' | 'position';
+  /** File shape number (from 0). */
+  shape: number;
+  rows: ProfileRow[];
+  /** The largest net flux in size, W/m^2 (with its sign), and where it is. */
+  peak: number;
+  peakAt: number;
+  /** Length-weighted mean net flux, W/m^2. */
+  average: number;
+  /** peak / average; null when the average is 0 or of the other sign (the ratio would mislead). */
+  peakToAverage: number | null;
+}
+
+/** The pieces of a profile: the surface `name` itself, or the parts split from it ("name 1", "name 2"...). */
+function partOf(surface: string, name: string): boolean {
+  if (surface === name) return true;
+  return surface.startsWith(`${name} `) && /^\d+$/.test(surface.slice(name.length + 1));
+}
+
+const names = (shape: Shape): string[] =>
+  typeof shape.surface === 'string'
+    ? new Array<string>(shape.circle ? 1 : shape.points.length).fill(shape.surface)
+    : shape.surface;
+
+/**
+ * The profile of surface `name` (or of its parts) on the first shape that has
+ * it; `flux` gives each surface's net flux in W/m^2. A message when no shape
+ * has it, when its pieces are fewer than two surfaces, or when a piece has no flux.
+ */
+export function surfaceProfile(
+  shapes: readonly Shape[],
+  name: string,
+  flux: (surface: string) => number | undefined,
+): Profile | { problem: string } {
+  const s = shapes.findIndex((sh) => names(sh).some((n) => partOf(n, name)));
+  if (s < 0) return { problem: `no surface "${name}" (nor parts "${name} 1", "${name} 2"...) in the sketch` };
+  const shape = shapes[s];
+  const all = names(shape);
+  const rows: ProfileRow[] = [];
+  if (shape.circle) {
+    const step = 360 / all.length;
+    const length = (2 * Math.PI * shape.circle.radius) / all.length;
+    all.forEach((n, k) => {
+      if (partOf(n, name)) rows.push({ at: (k + 0.5) * step, length, surface: n, flux: NaN });
+    });
+  } else {
+    let along = 0;
+    all.forEach((n, k) => {
+      const a = shape.points[k];
+      const b = shape.points[(k + 1) % shape.points.length];
+      const length = Math.hypot(b[0] - a[0], b[1] - a[1]);
+      if (partOf(n, name)) {
+        rows.push({ at: along + length / 2, length, surface: n, flux: NaN });
+        along += length;
+      }
+    });
+  }
+  // One surface over several edges has one flux: no profile to show.
+  if (new Set(rows.map((r) => r.surface)).size < 2)
+    return {
+      problem: `"${name}" is one piece; split it into parts (a tube into arcs) to see how the flux varies along it`,
+    };
+  for (const r of rows) {
+    const q = flux(r.surface);
+    if (q === undefined || !Number.isFinite(q)) return { problem: `no net flux for surface "${r.surface}"` };
+    r.flux = q;
+  }
+  let peak = rows[0];
+  let total = 0;
+  let weighted = 0;
+  for (const r of rows) {
+    if (Math.abs(r.flux) > Math.abs(peak.flux)) peak = r;
+    total += r.length;
+    weighted += r.length * r.flux;
+  }
+  const average = weighted / total;
+  const ratio = average !== 0 && Math.sign(average) === Math.sign(peak.flux) ? peak.flux / average : null;
+  return {
+    along: shape.circle ? 'angle' : 'position',
+    shape: s,
+    rows,
+    peak: peak.flux,
+    peakAt: peak.at,
+    average,
+    peakToAverage: ratio,
+  };
+}
+
+/** The profile as CSV: angle (degrees from +x, anticlockwise) or position (file units) against net flux (W/m^2). */
+export function profileCsv(p: Profile, units: string): string {
+  const head = p.along === 'angle' ? 'angle from +x anticlockwise (deg)' : `position along the wall (${units})`;
+  return toCsv([
+    [head, 'surface', `length (${units})`, 'net flux (W/m^2)'],
+    ...p.rows.map((r) => [Number(r.at.toPrecision(12)), r.surface, Number(r.length.toPrecision(12)), r.flux]),
+  ]);
+}

@@ -1,0 +1,79 @@
+// The flux profile rows: places of arcs and wall parts, and the peak, the
+// length-weighted average and their ratio, checked against values worked out
+// by hand from the shapes.
+import { describe, expect, it } from 'vitest';
+import Papa from 'papaparse';
+import { profileCsv, surfaceProfile, type Profile } from '../../../src/document/exchange/profile';
+import type { ShapeV1 } from '../../../src/document/schema';
+
+const tube: ShapeV1 = {
+  kind: 'solid',
+  points: [],
+  circle: { center: [0, 0], radius: 0.5 },
+  surface: ['t 1', 't 2', 't 3', 't 4'],
+};
+const box: ShapeV1 = {
+  kind: 'enclosure',
+  points: [
+    [0, 0],
+    [1, 0],
+    [3, 0],
+    [3, 2],
+    [0, 2],
+  ],
+  surface: ['floor 1', 'floor 2', 'right', 'roof', 'left'],
+};
+const flux: Record<string, number> = { 't 1': -1, 't 2': -2, 't 3': -3, 't 4': -6, 'floor 1': 5, 'floor 2': -1 };
+const of = (n: string) => flux[n];
+
+const ok = (p: Profile | { problem: string }): Profile => {
+  if ('problem' in p) throw new Error(p.problem);
+  return p;
+};
+
+describe('flux profile', () => {
+  it('arcs: middle angles anticlockwise from +x, peak, mean and ratio', () => {
+    const p = ok(surfaceProfile([box, tube], 't', of));
+    expect(p.along).toBe('angle');
+    expect(p.shape).toBe(1);
+    expect(p.rows.map((r) => r.at)).toEqual([45, 135, 225, 315]);
+    // Equal arcs: the mean is the plain mean (-12 / 4 = -3); the peak is -6 at 315°.
+    expect(p.average).toBeCloseTo(-3, 14);
+    expect(p.peak).toBe(-6);
+    expect(p.peakAt).toBe(315);
+    expect(p.peakToAverage).toBeCloseTo(2, 14);
+    for (const r of p.rows) expect(r.length).toBeCloseTo((2 * Math.PI * 0.5) / 4, 14);
+  });
+
+  it('wall parts: positions of the middles along the wall, length-weighted mean; no ratio across a sign change', () => {
+    const p = ok(surfaceProfile([box, tube], 'floor', of));
+    expect(p.along).toBe('position');
+    expect(p.rows.map((r) => [r.at, r.length])).toEqual([
+      [0.5, 1],
+      [2, 2],
+    ]);
+    // (1 x 5 + 2 x -1) / 3 = 1; the peak (5) is of the mean's sign.
+    expect(p.average).toBeCloseTo(1, 14);
+    expect(p.peakToAverage).toBeCloseTo(5, 14);
+    const q = ok(surfaceProfile([box], 'floor', (n) => (n === 'floor 1' ? 1 : -4)));
+    // Mean (1 - 8) / 3 < 0 and peak -4: same sign, ratio 12/7.
+    expect(q.peakToAverage).toBeCloseTo(12 / 7, 14);
+    const r = ok(surfaceProfile([box], 'floor', (n) => (n === 'floor 1' ? 4 : -1)));
+    // Mean (4 - 2) / 3 > 0 and peak 4: ratio 6; a zero mean gives none.
+    expect(r.peakToAverage).toBeCloseTo(6, 14);
+    expect(ok(surfaceProfile([box], 'floor', (n) => (n === 'floor 1' ? 2 : -1))).peakToAverage).toBeNull();
+  });
+
+  it('says why there is no profile', () => {
+    const problem = (p: Profile | { problem: string }) => ('problem' in p ? p.problem : '');
+    expect(problem(surfaceProfile([box], 'roof', of))).toMatch(/one piece; split it/);
+    expect(problem(surfaceProfile([box], 'chimney', of))).toMatch(/no surface "chimney"/);
+    expect(surfaceProfile([tube], 't', () => undefined)).toEqual({ problem: 'no net flux for surface "t 1"' });
+  });
+
+  it('CSV: angle or position against net flux, one row per piece', () => {
+    const rows = Papa.parse<string[]>(profileCsv(ok(surfaceProfile([tube], 't', of)), 'm').trim()).data;
+    expect(rows[0]).toEqual(['angle from +x anticlockwise (deg)', 'surface', 'length (m)', 'net flux (W/m^2)']);
+    expect(rows[4]).toEqual(['315', 't 4', String(Number(((2 * Math.PI * 0.5) / 4).toPrecision(12))), '-6']);
+  });
+});
