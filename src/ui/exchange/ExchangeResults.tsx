@@ -11,6 +11,7 @@ import { ExchangeStatus } from './ExchangeStatus';
 import { ExchangeTable } from './ExchangeTable';
 import { ExchangeDetails } from './ExchangeDetails';
 import { NetHeatChart } from './NetHeatChart';
+import { ProfilePanel } from './ProfilePanel';
 import { useSurfaceChoice } from './useSurfaceChoice';
 
 /** Energy balances above this (relative) are more than rounding: the view factors are not reciprocal enough. */
@@ -73,6 +74,7 @@ export function ExchangeResults() {
           </button>
           <ExchangeDetails ex={ex} />
           <NetHeatChart ex={ex} />
+          <ProfilePanel ex={ex} />
         </>
       )}
     </section>

@@ -1,0 +1,68 @@
+import { useId, useState } from 'react';
+import { useApp } from '../AppContext';
+import { selectDoc } from '../../state/selectors';
+import type { ExchangeSolved } from '../../state/exchange/slice';
+import { exchangeProfile, profileChoices, profileCsvText } from '../../state/exchange/profile';
+import { downloadText } from '../chrome/download';
+import { fmtHeat } from './format';
+import { ProfilePlot } from './ProfilePlot';
+
+/**
+ * The local net flux around a tube split into arcs, or along a wall split into
+ * parts: plot, peak, mean, peak-to-average ratio and a CSV download.
+ */
+export function ProfilePanel({ ex }: { ex: ExchangeSolved }) {
+  const id = useId();
+  const doc = useApp(selectDoc);
+  const choices = profileChoices(doc.shapes);
+  const [wanted, setWanted] = useState<string | null>(null);
+  const name = wanted !== null && choices.includes(wanted) ? wanted : choices[0];
+  if (name === undefined)
+    return (
+      <section className="flux-profile" aria-label="Flux profile">
+        <h4>Flux profile</h4>
+        <p className="hint">
+          To see how the flux varies around a tube or along a wall, choose it in the Surfaces tab and split it into
+          parts (a tube into equal arcs).
+        </p>
+      </section>
+    );
+  const p = exchangeProfile(ex, doc.shapes, name);
+  return (
+    <section className="flux-profile" aria-label="Flux profile">
+      <h4>Flux profile</h4>
+      <label htmlFor={`${id}-name`}>surface </label>
+      <select id={`${id}-name`} value={name} onChange={(e) => setWanted(e.target.value)}>
+        {choices.map((c) => (
+          <option key={c} value={c}>
+            {c}
+          </option>
+        ))}
+      </select>
+      {'problem' in p ? (
+        <p className="hint">No profile: {p.problem}.</p>
+      ) : (
+        <>
+          <ProfilePlot p={p} units={ex.units} />
+          <p className="profile-stats">
+            peak <strong>{fmtHeat(p.peak)} W/m²</strong> at{' '}
+            {p.along === 'angle' ? `${fmtHeat(p.peakAt)}°` : `${fmtHeat(p.peakAt)} ${ex.units}`}; average{' '}
+            <strong>{fmtHeat(p.average)} W/m²</strong>; peak-to-average{' '}
+            <strong>{p.peakToAverage === null ? '— (the flux changes sign)' : fmtHeat(p.peakToAverage)}</strong>
+          </p>
+          <p className="hint">
+            Net flux &lt; 0: the surface takes heat up. Angles run anticlockwise from the +x side of the centre. Each
+            point is the mean over one arc or part: split finer to resolve the peak.
+          </p>
+          <button
+            type="button"
+            title="Download angle (or position) against net flux as CSV (same as the command line's exchange --profile)"
+            onClick={() => downloadText(`profile-${name}.csv`, profileCsvText(p, ex.units), 'text/csv')}
+          >
+            Download profile CSV
+          </button>
+        </>
+      )}
+    </section>
+  );
+}
