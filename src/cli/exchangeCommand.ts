@@ -50,7 +50,7 @@ adiabatic, opening, wall, tube, linked plate).
                     (net heat from row to column), gas, energyBalance
   --csv             one row per surface
   --profile NAME    CSV of the local net flux around a tube split into arcs
-                    ("NAME 1", "NAME 2"..., angle of each arc's middle in
+                    ("NAME 1", "NAME 2"... or "NAME a"..., angle of each arc's middle in
                     degrees anticlockwise from +x) or along a wall split
                     into parts (position of each part's middle)
   --depth METRES    length of the long dimension; adds totals in W

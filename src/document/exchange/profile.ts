@@ -31,10 +31,15 @@ export interface Profile {
   peakToAverage: number | null;
 }
 
-/** The pieces of a profile: the surface `name` itself, or the parts split from it ("name 1", "name 2"...). */
-function partOf(surface: string, name: string): boolean {
+/**
+ * The pieces of a profile: the surface `name` itself, or the parts split from
+ * it ("name 1", "name 2"...; on a circle any "name <word>", as "tube 4 a").
+ */
+function partOf(surface: string, name: string, circle: boolean): boolean {
   if (surface === name) return true;
-  return surface.startsWith(`${name} `) && /^\d+$/.test(surface.slice(name.length + 1));
+  if (!surface.startsWith(`${name} `)) return false;
+  const rest = surface.slice(name.length + 1);
+  return circle ? /^\S+$/.test(rest) : /^\d+$/.test(rest);
 }
 
 const names = (shape: Shape): string[] =>
@@ -52,7 +57,7 @@ export function surfaceProfile(
   name: string,
   flux: (surface: string) => number | undefined,
 ): Profile | { problem: string } {
-  const s = shapes.findIndex((sh) => names(sh).some((n) => partOf(n, name)));
+  const s = shapes.findIndex((sh) => names(sh).some((n) => partOf(n, name, !!sh.circle)));
   if (s < 0) return { problem: `no surface "${name}" (nor parts "${name} 1", "${name} 2"...) in the sketch` };
   const shape = shapes[s];
   const all = names(shape);
@@ -61,7 +66,7 @@ export function surfaceProfile(
     const step = 360 / all.length;
     const length = (2 * Math.PI * shape.circle.radius) / all.length;
     all.forEach((n, k) => {
-      if (partOf(n, name)) rows.push({ at: (k + 0.5) * step, length, surface: n, flux: NaN });
+      if (partOf(n, name, true)) rows.push({ at: (k + 0.5) * step, length, surface: n, flux: NaN });
     });
   } else {
     let along = 0;
@@ -69,7 +74,7 @@ export function surfaceProfile(
       const a = shape.points[k];
       const b = shape.points[(k + 1) % shape.points.length];
       const length = Math.hypot(b[0] - a[0], b[1] - a[1]);
-      if (partOf(n, name)) {
+      if (partOf(n, name, false)) {
         rows.push({ at: along + length / 2, length, surface: n, flux: NaN });
         along += length;
       }

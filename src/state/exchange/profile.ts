@@ -8,10 +8,13 @@ import type { ExchangeSolved } from './slice';
 export type { Profile, ProfileRow } from '../../document/exchange/profile';
 
 const numbered = /^(.*) (\d+)$/;
+/** Arcs of a circle may end in any word ("tube 4 a"). */
+const worded = /^(.*) (\S+)$/;
 
 /**
  * Names that have a profile: a surface split into numbered parts ("tube 3 1",
- * "tube 3 2"... gives "tube 3"), at least two parts on one shape, in shape order.
+ * "tube 3 2"... gives "tube 3"; arcs of a circle may end in any word), at
+ * least two parts on one shape, in shape order.
  */
 export function profileChoices(shapes: readonly Shape[]): string[] {
   const out: string[] = [];
@@ -19,7 +22,7 @@ export function profileChoices(shapes: readonly Shape[]): string[] {
     if (typeof shape.surface === 'string') continue;
     const count = new Map<string, number>();
     for (const n of shape.surface) {
-      const m = numbered.exec(n);
+      const m = (shape.circle ? worded : numbered).exec(n);
       if (m) count.set(m[1], (count.get(m[1]) ?? 0) + 1);
     }
     for (const [base, k] of count) if (k >= 2 && !out.includes(base)) out.push(base);

@@ -64,6 +64,14 @@ describe('flux profile', () => {
     expect(ok(surfaceProfile([box], 'floor', (n) => (n === 'floor 1' ? 2 : -1))).peakToAverage).toBeNull();
   });
 
+  it('arcs named with letters ("t a", "t b"...) are parts of "t" on a circle, not on a wall', () => {
+    const lettered: ShapeV1 = { ...tube, surface: ['t a', 't b', 't c', 't d'] };
+    const byLetter = (n: string) => ({ 't a': 1, 't b': 2, 't c': 3, 't d': 4 })[n];
+    expect(ok(surfaceProfile([lettered], 't', byLetter)).rows.map((r) => r.flux)).toEqual([1, 2, 3, 4]);
+    const wall: ShapeV1 = { ...box, surface: ['floor a', 'floor b', 'right', 'roof', 'left'] };
+    expect('problem' in surfaceProfile([wall], 'floor', () => 1)).toBe(true);
+  });
+
   it('says why there is no profile', () => {
     const problem = (p: Profile | { problem: string }) => ('problem' in p ? p.problem : '');
     expect(problem(surfaceProfile([box], 'roof', of))).toMatch(/one piece; split it/);
