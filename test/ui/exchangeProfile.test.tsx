@@ -9,7 +9,7 @@ import { act, cleanup, configure, screen, waitFor, within } from '@testing-libra
 import userEvent from '@testing-library/user-event';
 import { renderApp } from './renderApp';
 import { splitSurfaceParts } from '../../src/state/edits/surfaceEdits';
-import { exchangeProfile, type Profile } from '../../src/state/exchange/profile';
+import { exchangeProfile, facingAngle, type Profile } from '../../src/state/exchange/profile';
 
 vi.mock('../../src/ui/canvas/SketchCanvas', () => ({ SketchCanvas: () => <div data-testid="canvas-stub" /> }));
 configure({ asyncUtilTimeout: 8000 });
@@ -42,6 +42,17 @@ describe('flux profile panel', () => {
     expect(two.peakToAverage).toBeGreaterThan(1);
     expect(panel().textContent).toMatch(/peak-to-average\s*\d/);
     expect(within(panel()).getByRole('button', { name: 'Download profile CSV' })).toBeTruthy();
+    // The fired floor's middle (1.2, 0) seen from tube 2's centre (0.95, 0.7): 360° - atan(0.7 / 0.25).
+    const floorAngle = 360 - (Math.atan(0.7 / 0.25) * 180) / Math.PI;
+    expect(facingAngle(store.getState().doc.shapes, 2, 'fired floor')).toBeCloseTo(floorAngle, 12);
+    await user.selectOptions(within(panel()).getByLabelText('mark the side facing'), 'fired floor');
+    expect(panel().textContent).toMatch(/° from the side facing fired floor/);
+    // An arc of the next tube counts at its middle: tube 3's first arc (0° to 45°, radius 0.1) from 0.5 m away.
+    const mid = Math.PI / 8;
+    expect(facingAngle(store.getState().doc.shapes, 2, 'tube 3 1')).toBeCloseTo(
+      (Math.atan2(0.1 * Math.sin(mid), 0.5 + 0.1 * Math.cos(mid)) * 180) / Math.PI,
+      12,
+    );
     await user.selectOptions(within(panel()).getByLabelText('surface'), 'tube 3');
     expect(within(panel()).getByLabelText<HTMLSelectElement>('surface').value).toBe('tube 3');
   });

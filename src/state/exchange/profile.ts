@@ -3,6 +3,7 @@
 // keyed on the solved result, so a redraw does not rebuild it.
 import { surfaceProfile, profileCsv, type Profile } from '../../document/exchange/profile';
 import type { Shape } from '../sketchFile';
+import { edgeNames } from '../geometry/polygon';
 import type { ExchangeSolved } from './slice';
 
 export type { Profile, ProfileRow } from '../../document/exchange/profile';
@@ -56,4 +57,47 @@ export function exchangeProfile(
 /** The profile as CSV (the command line's `exchange FILE --profile NAME`). */
 export function profileCsvText(p: Profile, units: string): string {
   return profileCsv(p, units);
+}
+
+/**
+ * The direction from a circle's centre to surface `name`, degrees anticlockwise
+ * from +x in [0, 360): towards the length-weighted middle of the surface's edges
+ * and arcs (an arc counts at its middle). Null when shape `circle` is not a
+ * circle or no other shape has the surface.
+ */
+export function facingAngle(shapes: readonly Shape[], circle: number, name: string): number | null {
+  const c = shapes[circle]?.circle;
+  if (!c) return null;
+  let sx = 0;
+  let sy = 0;
+  let total = 0;
+  shapes.forEach((shape, s) => {
+    if (s === circle) return;
+    const names = edgeNames(shape);
+    if (shape.circle) {
+      const { center, radius } = shape.circle;
+      const n = names.length;
+      names.forEach((m, k) => {
+        if (m !== name) return;
+        const a = ((k + 0.5) * 2 * Math.PI) / n;
+        const len = (2 * Math.PI * radius) / n;
+        sx += len * (center[0] + radius * Math.cos(a));
+        sy += len * (center[1] + radius * Math.sin(a));
+        total += len;
+      });
+      return;
+    }
+    names.forEach((m, k) => {
+      if (m !== name) return;
+      const a = shape.points[k];
+      const b = shape.points[(k + 1) % shape.points.length];
+      const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
+      sx += (len * (a[0] + b[0])) / 2;
+      sy += (len * (a[1] + b[1])) / 2;
+      total += len;
+    });
+  });
+  if (!(total > 0)) return null;
+  const deg = (Math.atan2(sy / total - c.center[1], sx / total - c.center[0]) * 180) / Math.PI;
+  return deg < 0 ? deg + 360 : deg;
 }

@@ -2,7 +2,7 @@ import { useId, useState } from 'react';
 import { useApp } from '../AppContext';
 import { selectDoc } from '../../state/selectors';
 import type { ExchangeSolved } from '../../state/exchange/slice';
-import { exchangeProfile, profileChoices, profileCsvText } from '../../state/exchange/profile';
+import { exchangeProfile, facingAngle, profileChoices, profileCsvText } from '../../state/exchange/profile';
 import { downloadText } from '../chrome/download';
 import { fmtHeat } from './format';
 import { ProfilePlot } from './ProfilePlot';
@@ -16,6 +16,7 @@ export function ProfilePanel({ ex }: { ex: ExchangeSolved }) {
   const doc = useApp(selectDoc);
   const choices = profileChoices(doc.shapes);
   const [wanted, setWanted] = useState<string | null>(null);
+  const [towards, setTowards] = useState('');
   const name = wanted !== null && choices.includes(wanted) ? wanted : choices[0];
   if (name === undefined)
     return (
@@ -28,6 +29,12 @@ export function ProfilePanel({ ex }: { ex: ExchangeSolved }) {
       </section>
     );
   const p = exchangeProfile(ex, doc.shapes, name);
+  const facing =
+    !('problem' in p) && p.along === 'angle' && towards && !p.rows.some((r) => r.surface === towards)
+      ? facingAngle(doc.shapes, p.shape, towards)
+      : null;
+  /** The peak's angle from the side facing the chosen surface, -180° to 180°, anticlockwise positive. */
+  const fromFacing = (a: number) => (facing === null ? 0 : ((((a - facing + 180) % 360) + 360) % 360) - 180);
   return (
     <section className="flux-profile" aria-label="Flux profile">
       <h4>Flux profile</h4>
@@ -43,10 +50,26 @@ export function ProfilePanel({ ex }: { ex: ExchangeSolved }) {
         <p className="hint">No profile: {p.problem}.</p>
       ) : (
         <>
-          <ProfilePlot p={p} units={ex.units} />
+          {p.along === 'angle' && (
+            <span className="field">
+              <label htmlFor={`${id}-towards`}>mark the side facing </label>
+              <select id={`${id}-towards`} value={towards} onChange={(e) => setTowards(e.target.value)}>
+                <option value="">(none)</option>
+                {ex.names
+                  .filter((n) => !p.rows.some((r) => r.surface === n))
+                  .map((n) => (
+                    <option key={n} value={n}>
+                      {n}
+                    </option>
+                  ))}
+              </select>
+            </span>
+          )}
+          <ProfilePlot p={p} units={ex.units} facing={facing === null ? null : { angle: facing, name: towards }} />
           <p className="profile-stats">
             peak <strong>{fmtHeat(p.peak)} W/m²</strong> at{' '}
-            {p.along === 'angle' ? `${fmtHeat(p.peakAt)}°` : `${fmtHeat(p.peakAt)} ${ex.units}`}; average{' '}
+            {p.along === 'angle' ? `${fmtHeat(p.peakAt)}°` : `${fmtHeat(p.peakAt)} ${ex.units}`}
+            {facing !== null && ` (${fmtHeat(fromFacing(p.peakAt))}° from the side facing ${towards})`}; average{' '}
             <strong>{fmtHeat(p.average)} W/m²</strong>; peak-to-average{' '}
             <strong>{p.peakToAverage === null ? '— (the flux changes sign)' : fmtHeat(p.peakToAverage)}</strong>
           </p>

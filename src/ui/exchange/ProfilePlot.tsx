@@ -14,7 +14,16 @@ const BOTTOM = 30;
  * marked) or against position along a wall, with the mean as a dashed line and
  * the peak ringed. The zero line is drawn when the fluxes change sign.
  */
-export function ProfilePlot({ p, units }: { p: Profile; units: string }) {
+export function ProfilePlot({
+  p,
+  units,
+  facing,
+}: {
+  p: Profile;
+  units: string;
+  /** Angle (degrees from +x) towards a chosen surface, marked on an angle plot. */
+  facing?: { angle: number; name: string } | null;
+}) {
   const angle = p.along === 'angle';
   const span = angle ? 360 : p.rows.reduce((t, r) => t + r.length, 0);
   let lo = Math.min(0, ...p.rows.map((r) => r.flux));
@@ -56,6 +65,14 @@ export function ProfilePlot({ p, units }: { p: Profile; units: string }) {
       <text x={(LEFT + WIDTH) / 2} y={HEIGHT - 3} fontSize={10} textAnchor="middle">
         {angle ? 'angle from +x, anticlockwise (0° = +x side)' : `position along the wall (${units})`}
       </text>
+      {angle && facing && (
+        <g>
+          <line x1={x(facing.angle)} x2={x(facing.angle)} y1={TOP} y2={HEIGHT - BOTTOM} stroke="#2b6cb5" />
+          <text x={x(facing.angle) + 3} y={TOP + 10} fontSize={10} fill="#2b6cb5">
+            {`faces ${facing.name}`}
+          </text>
+        </g>
+      )}
       <polyline points={points} fill="none" stroke="#b5452b" strokeWidth={2} />
       {p.rows.map((r) => (
         <circle key={r.surface} cx={x(r.at)} cy={y(r.flux)} r={2.5} fill="#b5452b">

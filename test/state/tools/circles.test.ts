@@ -9,6 +9,7 @@ import { setCircle } from '../../../src/state/edits/shapeEdits';
 import { joinSurfaces, renameSurface, splitSurfaceParts } from '../../../src/state/edits/surfaceEdits';
 import { arcAngles, nearestArc, rimPoint, type CircleShape } from '../../../src/state/edits/circleShapes';
 import { edgeNames } from '../../../src/state/geometry/polygon';
+import { facingAngle } from '../../../src/state/exchange/profile';
 import { restore } from '../../../src/document';
 import type { SketchFile } from '../../../src/state/sketchFile';
 
@@ -134,5 +135,25 @@ describe('exact circles on the canvas', () => {
     expect(joined.shapes[0].surface).toEqual(new Array(6).fill('tube 3 1'));
     expect(renameSurface(joined, 'tube 3 1', 'tube 3').shapes[0].surface).toHaveLength(6);
     expect(restore(JSON.stringify(split)).ok).toBe(true);
+  });
+});
+
+describe('the side of a tube facing a surface', () => {
+  it('points from the centre to the middle of the surface, anticlockwise from +x', () => {
+    const doc = oven();
+    // Floor middle (1, 0) from (0.5, 0.5): down and right, 315°.
+    expect(facingAngle(doc.shapes, 1, 'floor')).toBeCloseTo(315, 12);
+    // Left wall middle (0, 0.5): 180°. The enclosure is not a circle: no angle from it.
+    expect(facingAngle(doc.shapes, 1, 'left wall')).toBeCloseTo(180, 12);
+    expect(facingAngle(doc.shapes, 0, 'floor')).toBeNull();
+    // Arcs of another circle count at their middles: a two-arc tube at (1.5, 0.5), its upper arc's middle (1.5, 0.6).
+    const two: SketchFile = {
+      ...doc,
+      shapes: [
+        ...doc.shapes,
+        { kind: 'solid', points: [], circle: { center: [1.5, 0.5], radius: 0.1 }, surface: ['u', 'v'] },
+      ],
+    };
+    expect(facingAngle(two.shapes, 1, 'u')).toBeCloseTo((Math.atan2(0.1, 1) * 180) / Math.PI, 12);
   });
 });
