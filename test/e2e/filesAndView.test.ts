@@ -114,15 +114,17 @@ describe('files and view', () => {
     await expect.poll(async () => (await state()).camera.scale).not.toBe(c2.scale);
   });
 
-  it('draws a tube with the Tube tool and a rectangle with two clicks', async () => {
+  it('draws a tube with the Tube tool (an exact circle) and a rectangle with two clicks', async () => {
     await page.getByRole('button', { name: /^Tube/ }).click();
-    await page.getByLabel('sides').fill('10');
-    await page.getByLabel('sides').press('Enter');
     await dragOnCanvas(page, [80, 50], [100, 50], 4);
     await expect.poll(async () => (await state()).doc.shapes.length).toBe(2);
     const tube = (await state()).doc.shapes[1];
     expect(tube.kind).toBe('solid');
-    expect(tube.points).toHaveLength(10);
+    // Centre where the drag began (snapped to the grid), radius as dragged: 20 units within a
+    // pixel of pointer rounding (the radius is not snapped).
+    expect(tube.circle?.center).toEqual([80, 50]);
+    expect(Math.abs((tube.circle?.radius ?? 0) - 20)).toBeLessThan(1e-6 * 20 + 1);
+    expect(tube.surface).toBe('tube 1');
     await page.getByRole('button', { name: /^Rectangle/ }).click();
     const [ax, ay] = await screenOf(180, 30);
     const [bx, by] = await screenOf(220, 70);
@@ -131,11 +133,11 @@ describe('files and view', () => {
     await page.mouse.click(bx, by);
     await expect.poll(async () => (await state()).doc.shapes.length).toBe(3);
     await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
-    expect(
-      await page
-        .getByRole('table', { name: /view factor/i })
-        .getByRole('rowheader')
-        .count(),
-    ).toBe(1 + 10 + 4);
+    // The tube and the rectangle are one surface each; a circle's arcs come after every polygon edge (README).
+    const rows = await page
+      .getByRole('table', { name: /view factor/i })
+      .getByRole('rowheader')
+      .allInnerTexts();
+    expect(rows.map((r) => r.replace(/^\d+\s*/, '')).slice(-2)).toEqual(['body 1', 'tube 1']);
   });
 });
