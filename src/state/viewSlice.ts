@@ -5,7 +5,7 @@ import type { Point, Shape } from './sketchFile';
 import type { Pick } from './selection';
 import type { AppState } from './store';
 import { DEFAULT_TOOL, type ToolId } from './tools/registry';
-import { DIGITS_RULE, GRID_STEP_RULE, TUBE_SIDES_RULE, readNumber } from './edits/numberInput';
+import { DIGITS_RULE, GRID_STEP_RULE, readNumber } from './edits/numberInput';
 import type { Clipboard } from './edits/shapeCopies';
 
 /** At most this many notices show at once; the oldest goes first. */
@@ -37,7 +37,6 @@ export interface ViewSlice {
   gridStep: number;
   /** Kind of shape the rectangle and tube tools make. */
   quickKind: Shape['kind'];
-  tubeSides: number;
   /** Outline being drawn by the polygon tools, and the live rubber-band point. */
   draft: Point[];
   /** Pointer position (sketch units) while a drawing tool is active, for the rubber band. */
@@ -67,7 +66,6 @@ export interface ViewSlice {
   setSnap: (snap: boolean) => void;
   setGridStep: (step: number) => void;
   setQuickKind: (kind: Shape['kind']) => void;
-  setTubeSides: (n: number) => void;
   setDraft: (draft: Point[]) => void;
   setHoverPoint: (p: Point | null) => void;
   setDigits: (digits: number) => void;
@@ -88,7 +86,6 @@ export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) 
   snap: true,
   gridStep: 0.1,
   quickKind: 'solid',
-  tubeSides: 12,
   draft: [],
   hoverPoint: null,
   digits: 4,
@@ -113,9 +110,6 @@ export const createViewSlice: StateCreator<AppState, [], [], ViewSlice> = (set) 
     if (readNumber(String(gridStep), GRID_STEP_RULE).ok) set({ gridStep });
   },
   setQuickKind: (quickKind) => set({ quickKind }),
-  setTubeSides: (n) => {
-    if (readNumber(String(n), TUBE_SIDES_RULE).ok) set({ tubeSides: n });
-  },
   setDraft: (draft) => set({ draft }),
   setHoverPoint: (hoverPoint) => set({ hoverPoint }),
   setDigits: (digits) => {

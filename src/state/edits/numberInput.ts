@@ -33,8 +33,6 @@ export function readNumber(text: string, rule: NumberRule = {}): NumberReading {
 
 /** Grid steps, sketch units: above 1e-6 and at most 1e4, so snapped coordinates stay exact and finite. */
 export const GRID_STEP_RULE: NumberRule = { min: 1e-6, max: 1e4 };
-/** Sides of a tube drawn as a polygon. */
-export const TUBE_SIDES_RULE: NumberRule = { min: 3, max: 256, integer: true };
 /** Significant digits shown in the tables. */
 export const DIGITS_RULE: NumberRule = { min: 1, max: 15, integer: true };
 /** Coordinates, sketch units (the file's limit). */
