@@ -111,10 +111,21 @@ export function runExchange(args: string[], io: CliIO): number {
   if (profileName !== undefined) {
     if (format !== 'table') return usageError(io, '--profile prints CSV; leave out --json and --csv');
     const index = new Map(surfaceNames.map((n, i) => [n, i]));
-    const p = surfaceProfile(sketch.shapes, profileName, (n) => {
-      const i = index.get(n);
-      return i === undefined ? undefined : result.netFlux[i];
-    });
+    const at = (n: string) => index.get(n);
+    const p = surfaceProfile(
+      sketch.shapes,
+      profileName,
+      (n) => {
+        const i = at(n);
+        return i === undefined ? undefined : result.netFlux[i];
+      },
+      (n) => {
+        const i = at(n);
+        return i === undefined
+          ? undefined
+          : { temperature: result.temperature[i], innerTemperature: result.innerTemperature?.[i] };
+      },
+    );
     if ('problem' in p) {
       io.err(`exchange: ${file}: ${p.problem}\n`);
       return 1;

@@ -56,6 +56,46 @@ describe('exchange --profile', () => {
     for (const row of rows.slice(1)) expect(Math.abs(Number(row[3]) / expected - 1)).toBeLessThanOrEqual(1e-9);
   });
 
+  it('a split tube with a fluid inside lists the metal temperatures of each arc, as the tube resistance says', () => {
+    // Film and tube-wall resistance referred to the outer area: R''_o = d_o/(d_i h_i) + d_o ln(d_o/d_i)/(2 k_w),
+    // and the inner wall at T_f + q d_o/(d_i h_i) (Incropera et al., 6th ed., ch. 3, cylinder in series; from memory).
+    const tube = {
+      fluidTemperature: 600,
+      insideCoefficient: 800,
+      outerDiameter: 0.2,
+      innerDiameter: 0.17,
+      wallConductivity: 25,
+    };
+    const hot = {
+      ...oven,
+      surfaces: {
+        walls: { emissivity: 0.9, temperature: 1400 },
+        ...Object.fromEntries(arcs.map((n) => [n, { emissivity: 0.85, tube }])),
+      },
+    };
+    const r = run(hot, '--profile', 'tube 1');
+    expect(r.err).toBe('');
+    const rows = Papa.parse<string[]>(r.out.trim()).data;
+    expect(rows[0].slice(3)).toEqual(['net flux (W/m^2)', 'temperature (K)', 'inner wall temperature (K)']);
+    const {
+      outerDiameter: d0,
+      innerDiameter: di,
+      insideCoefficient: hi,
+      wallConductivity: kw,
+      fluidTemperature: Tf,
+    } = tube;
+    const R = d0 / (di * hi) + (d0 * Math.log(d0 / di)) / (2 * kw);
+    expect(rows).toHaveLength(9);
+    for (const row of rows.slice(1)) {
+      // Heat taken up by radiation (net flux < 0) goes to the fluid through the wall.
+      const q = -Number(row[3]);
+      const T = Number(row[4]);
+      expect(q).toBeGreaterThan(0);
+      expect(Math.abs((T - Tf) / R / q - 1)).toBeLessThan(1e-9);
+      expect(Math.abs(Number(row[5]) - (Tf + (q * d0) / (di * hi)))).toBeLessThan(1e-9 * T);
+    }
+  });
+
   it('refuses a name with no parts and --profile with --json', () => {
     const walls = run(oven, '--profile', 'walls');
     expect(walls.code).toBe(1);

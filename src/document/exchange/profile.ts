@@ -14,6 +14,16 @@ export interface ProfileRow {
   surface: string;
   /** Net flux, W/m^2, positive when the surface gives off more than it absorbs. */
   flux: number;
+  /** Surface (outer metal) temperature, K. */
+  temperature?: number;
+  /** Inside of the tube wall, K, where the surface is a tube with a fluid inside. */
+  innerTemperature?: number;
+}
+
+/** Temperatures of one surface for a profile, K (inner: a tube's inside wall, when it has one). */
+export interface ProfileTemperatures {
+  temperature: number;
+  innerTemperature?: number;
 }
 
 export interface Profile {
@@ -29,6 +39,9 @@ export interface Profile {
   average: number;
   /** peak / average; null when the average is 0 or of the other sign (the ratio would mislead). */
   peakToAverage: number | null;
+  /** The hottest piece's temperature (K) and where it is, when temperatures were given: a tube's peak metal temperature. */
+  peakTemperature?: number;
+  peakTemperatureAt?: number;
 }
 
 /**
@@ -56,6 +69,7 @@ export function surfaceProfile(
   shapes: readonly Shape[],
   name: string,
   flux: (surface: string) => number | undefined,
+  temperatures?: (surface: string) => ProfileTemperatures | undefined,
 ): Profile | { problem: string } {
   const s = shapes.findIndex((sh) => names(sh).some((n) => partOf(n, name, !!sh.circle)));
   if (s < 0) return { problem: `no surface "${name}" (nor parts "${name} 1", "${name} 2"...) in the sketch` };
@@ -89,7 +103,16 @@ export function surfaceProfile(
     const q = flux(r.surface);
     if (q === undefined || !Number.isFinite(q)) return { problem: `no net flux for surface "${r.surface}"` };
     r.flux = q;
+    const t = temperatures?.(r.surface);
+    if (t && Number.isFinite(t.temperature)) {
+      r.temperature = t.temperature;
+      if (t.innerTemperature !== undefined && Number.isFinite(t.innerTemperature))
+        r.innerTemperature = t.innerTemperature;
+    }
   }
+  const hottest = rows.every((r) => r.temperature !== undefined)
+    ? rows.reduce((a, b) => ((b.temperature ?? 0) > (a.temperature ?? 0) ? b : a))
+    : undefined;
   let peak = rows[0];
   let total = 0;
   let weighted = 0;
@@ -108,14 +131,34 @@ export function surfaceProfile(
     peakAt: peak.at,
     average,
     peakToAverage: ratio,
+    ...(hottest ? { peakTemperature: hottest.temperature, peakTemperatureAt: hottest.at } : {}),
   };
 }
 
-/** The profile as CSV: angle (degrees from +x, anticlockwise) or position (file units) against net flux (W/m^2). */
+/**
+ * The profile as CSV: angle (degrees from +x, anticlockwise) or position (file
+ * units) against net flux (W/m^2), and the temperatures (K) when every piece has them.
+ */
 export function profileCsv(p: Profile, units: string): string {
   const head = p.along === 'angle' ? 'angle from +x anticlockwise (deg)' : `position along the wall (${units})`;
+  const withT = p.rows.every((r) => r.temperature !== undefined);
+  const withInner = withT && p.rows.every((r) => r.innerTemperature !== undefined);
   return toCsv([
-    [head, 'surface', `length (${units})`, 'net flux (W/m^2)'],
-    ...p.rows.map((r) => [Number(r.at.toPrecision(12)), r.surface, Number(r.length.toPrecision(12)), r.flux]),
+    [
+      head,
+      'surface',
+      `length (${units})`,
+      'net flux (W/m^2)',
+      ...(withT ? ['temperature (K)'] : []),
+      ...(withInner ? ['inner wall temperature (K)'] : []),
+    ],
+    ...p.rows.map((r) => [
+      Number(r.at.toPrecision(12)),
+      r.surface,
+      Number(r.length.toPrecision(12)),
+      r.flux,
+      ...(withT ? [r.temperature ?? ''] : []),
+      ...(withInner ? [r.innerTemperature ?? ''] : []),
+    ]),
   ]);
 }

@@ -46,10 +46,19 @@ export function exchangeProfile(
 ): Profile | { problem: string } {
   if (last && last.result === ex && last.shapes === shapes && last.name === name) return last.out;
   const index = new Map(ex.names.map((n, i) => [n, i]));
-  const out = surfaceProfile(shapes, name, (surface) => {
-    const i = index.get(surface);
-    return i === undefined ? undefined : ex.result.netFlux[i];
-  });
+  const r = ex.result;
+  const out = surfaceProfile(
+    shapes,
+    name,
+    (surface) => {
+      const i = index.get(surface);
+      return i === undefined ? undefined : r.netFlux[i];
+    },
+    (surface) => {
+      const i = index.get(surface);
+      return i === undefined ? undefined : { temperature: r.temperature[i], innerTemperature: r.innerTemperature?.[i] };
+    },
+  );
   last = { result: ex, shapes, name, out };
   return out;
 }

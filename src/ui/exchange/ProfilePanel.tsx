@@ -4,7 +4,9 @@ import { selectDoc } from '../../state/selectors';
 import type { ExchangeSolved } from '../../state/exchange/slice';
 import { exchangeProfile, facingAngle, profileChoices, profileCsvText } from '../../state/exchange/profile';
 import { downloadText } from '../chrome/download';
-import { fmtHeat } from './format';
+import { fmtHeat, fmtTemperature } from './format';
+import { selectTemperatureUnit } from '../../state/exchange/selectors';
+import { TEMPERATURE_LABEL } from '../../state/exchange/units';
 import { ProfilePlot } from './ProfilePlot';
 
 /**
@@ -14,6 +16,7 @@ import { ProfilePlot } from './ProfilePlot';
 export function ProfilePanel({ ex }: { ex: ExchangeSolved }) {
   const id = useId();
   const doc = useApp(selectDoc);
+  const unit = useApp(selectTemperatureUnit);
   const choices = profileChoices(doc.shapes);
   const [wanted, setWanted] = useState<string | null>(null);
   const [towards, setTowards] = useState('');
@@ -72,6 +75,18 @@ export function ProfilePanel({ ex }: { ex: ExchangeSolved }) {
             {facing !== null && ` (${fmtHeat(fromFacing(p.peakAt))}° from the side facing ${towards})`}; average{' '}
             <strong>{fmtHeat(p.average)} W/m²</strong>; peak-to-average{' '}
             <strong>{p.peakToAverage === null ? '— (the flux changes sign)' : fmtHeat(p.peakToAverage)}</strong>
+            {p.peakTemperature !== undefined && p.peakTemperatureAt !== undefined && (
+              <>
+                ; {p.along === 'angle' ? 'hottest metal' : 'hottest part'}{' '}
+                <strong>
+                  {fmtTemperature(p.peakTemperature, unit)} {TEMPERATURE_LABEL[unit]}
+                </strong>{' '}
+                at{' '}
+                {p.along === 'angle'
+                  ? `${fmtHeat(p.peakTemperatureAt)}°`
+                  : `${fmtHeat(p.peakTemperatureAt)} ${ex.units}`}
+              </>
+            )}
           </p>
           <p className="hint">
             Net flux &lt; 0: the surface takes heat up. Angles run anticlockwise from the +x side of the centre. Each
