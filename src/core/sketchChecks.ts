@@ -5,6 +5,7 @@
 // document layer turns them into messages for people.
 import Flatbush from 'flatbush';
 import { orient as orientation } from './orient';
+import { pointInPolygon } from './pointInPolygon';
 import type { PolygonInput } from './scene';
 
 /** A location in sketch units. */
@@ -103,39 +104,6 @@ export function checkSketchGeometry(
   }
   findings.push(...findNestedSolids(polygons, usable, contacts.touching));
   return findings;
-}
-
-/**
- * Is (x, y) strictly inside the polygon (flat points)? Crossing-number rule
- * with exact orientation; a point on the boundary may go either way, so
- * callers first make sure it is not on it.
- */
-export function pointInPolygon(x: number, y: number, points: ArrayLike<number>): boolean {
-  const n = Math.floor(points.length / 2);
-  let inside = false;
-  for (let k = 0, j = n - 1; k < n; j = k++) {
-    const px = points[2 * j],
-      py = points[2 * j + 1];
-    const qx = points[2 * k],
-      qy = points[2 * k + 1];
-    if (py > y !== qy > y) {
-      // The edge straddles the horizontal line through the point; it crosses
-      // to the right of the point when the point is left of the upward edge.
-      const side = orientation(px, py, qx, qy, x, y);
-      if (qy > py ? side > 0 : side < 0) inside = !inside;
-    }
-  }
-  return inside;
-}
-
-/** Twice the signed area of a polygon (flat points), positive for anticlockwise winding (y up); sketch units squared. */
-export function signedDoubleArea(points: ArrayLike<number>): number {
-  const n = Math.floor(points.length / 2);
-  let sum = 0;
-  for (let k = 0, j = n - 1; k < n; j = k++) {
-    sum += points[2 * j] * points[2 * k + 1] - points[2 * k] * points[2 * j + 1];
-  }
-  return sum;
 }
 
 /** Index of the first point equal to its predecessor (point 0 compares with the last), or -1. */

@@ -1,11 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-  checkSketchGeometry,
-  pointInPolygon,
-  signedDoubleArea,
-  type GeometryFinding,
-} from '../../src/core/sketchChecks';
+import { checkSketchGeometry, type GeometryFinding } from '../../src/core/sketchChecks';
+import { pointInPolygon } from '../../src/core/pointInPolygon';
+import { signedArea2 } from '../../src/core/edges';
 import { orient as orientation } from '../../src/core/orient';
 import type { PolygonInput } from '../../src/core/scene';
 
@@ -38,8 +35,8 @@ describe('orientation and point in polygon', () => {
       expect(pointInPolygon(-1, 1, ring)).toBe(false);
       expect(pointInPolygon(2, 3, ring)).toBe(false);
     }
-    expect(signedDoubleArea(ccw)).toBe(16);
-    expect(signedDoubleArea(cw)).toBe(-16);
+    expect(signedArea2(ccw)).toBe(16);
+    expect(signedArea2(cw)).toBe(-16);
   });
   it('handles a concave (U-shaped) polygon', () => {
     const u = [0, 0, 3, 0, 3, 3, 2, 3, 2, 1, 1, 1, 1, 3, 0, 3];

@@ -1,3 +1,4 @@
+import { pointInPolygon } from '../pointInPolygon';
 import type { CircleInput, PolygonInput } from '../scene';
 
 // Geometric validity of exact circles against each other and against polygons.
@@ -130,18 +131,4 @@ function closestOnSegment(px: number, py: number, ax: number, ay: number, bx: nu
   let t = L2 > 0 ? ((px - ax) * dx + (py - ay) * dy) / L2 : 0;
   t = t < 0 ? 0 : t > 1 ? 1 : t;
   return [ax + t * dx, ay + t * dy];
-}
-
-/** Even-odd rule: is (x, y) inside the polygon (flat x, y points)? */
-function pointInPolygon(x: number, y: number, pts: ArrayLike<number>): boolean {
-  const n = pts.length >> 1;
-  let inside = false;
-  for (let k = 0, m = n - 1; k < n; m = k++) {
-    const xk = pts[2 * k],
-      yk = pts[2 * k + 1],
-      xm = pts[2 * m],
-      ym = pts[2 * m + 1];
-    if (yk > y !== ym > y && x < ((xm - xk) * (y - yk)) / (ym - yk) + xk) inside = !inside;
-  }
-  return inside;
 }
