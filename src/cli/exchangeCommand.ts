@@ -7,6 +7,7 @@
 // A surface without properties gets emissivity 0.9 and is adiabatic
 // (reradiating), see src/core/exchange/setup.ts; the sketch-to-solver mapping
 // and the wording of failures are shared with the app (src/document/exchangeInput.ts).
+import { RESULTS_CAUTION } from '../document/exchange/cautions';
 import type { BalanceCondition, BalanceResult } from '../core/balance';
 import type { ViewFactorResult } from '../core/scene';
 import { computeViewFactors } from '../core/viewFactors';
@@ -34,8 +35,7 @@ export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --c
 export { exchangeJson };
 const usageError = (io: CliIO, problem: string) => reportUsage(io, 'exchange', EXCHANGE_USAGE, problem);
 
-const CAUTION =
-  'Gray-diffuse radiation; convection only where a coefficient is given, and no absorbing gas. Results support, not replace, local codes and licensed engineering practice.';
+const CAUTION = RESULTS_CAUTION;
 
 const EXCHANGE_HELP = `${EXCHANGE_USAGE}
 

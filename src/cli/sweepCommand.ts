@@ -3,6 +3,7 @@
 // {"values": [...], "runs": [...]}, each run exactly the object `exchange --json`
 // prints for the file with that value. Units: as `exchange` (K, W/m^2, W per
 // metre of depth); the parameter in its own unit (K, W/m^2, m, file units).
+import { RESULTS_CAUTION } from '../document/exchange/cautions';
 import type { Sketch } from '../document';
 import { toScene } from '../document';
 import {
@@ -24,8 +25,7 @@ import { displayName, usageError as reportUsage } from './terminalText';
 export const SWEEP_USAGE =
   'usage: npm run cli -- sweep FILE --vary SURFACE.PROPERTY --from A --to B --steps N [--json | --csv]';
 
-export const STUDY_CAUTION =
-  'Gray-diffuse radiation only: no convection or absorbing gas unless modelled. Results support, not replace, local codes and licensed engineering practice.';
+export const STUDY_CAUTION = RESULTS_CAUTION;
 
 const SWEEP_HELP = `${SWEEP_USAGE}
 

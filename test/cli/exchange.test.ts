@@ -490,7 +490,7 @@ describe('exchange FILE: options and formats', () => {
     expect(r.out).toMatch(/adiabatic \(T solved\)/);
     expect(r.out).toMatch(/Net heat > 0: the surface gives off more radiation than it absorbs/);
     expect(r.out).toMatch(
-      /Gray-diffuse radiation; convection only where a coefficient is given.*licensed engineering practice/,
+      /Gray-diffuse radiation, with convection to a transparent gas.*licensed engineering practice/,
     );
   });
 

@@ -25,7 +25,7 @@ describe('the app', () => {
     expect(within(matrix()).getAllByRole('row')).toHaveLength(1 + 7);
     expect(screen.getByRole('button', { name: /CSV/ })).toBeTruthy();
     expect(screen.getByRole('note', { name: /safety/i }).textContent).toMatch(
-      /gray-diffuse radiation only.*licensed engineering practice/i,
+      /gray-diffuse radiation.*no absorbing gas.*licensed engineering practice/i,
     );
     await waitFor(() => expect(document.querySelector('[data-status]')?.textContent).toMatch(/Up to date/));
   });

@@ -80,7 +80,7 @@ describe('heat-exchange tab', () => {
     expect(within(results()).getAllByRole('row')).toHaveLength(1 + 7);
     expect(screen.getByRole('img', { name: /bar chart of net heat/i })).toBeTruthy();
     expect(screen.getByRole('note', { name: /caution about these results/i }).textContent).toMatch(
-      /gray-diffuse radiation only.*no convection.*absorbing gas.*local codes and licensed engineering practice/i,
+      /gray-diffuse radiation.*convection.*no absorbing gas.*local codes and licensed engineering practice/i,
     );
     await waitFor(() =>
       expect(document.querySelector('[data-exchange-status]')?.getAttribute('data-exchange-status')).toBe('solved'),

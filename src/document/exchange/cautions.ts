@@ -2,6 +2,10 @@
 // command line and the app: a hot casing is a burn hazard; the gas is
 // transparent; walls and tubes rest on simple models.
 
+/** The caution that goes with every result, in the app, the command line and reports. */
+export const RESULTS_CAUTION =
+  'Gray-diffuse radiation, with convection to a transparent gas and conduction through linings and tube walls only where you give them; no absorbing gas. Results support, and do not replace, local codes and licensed engineering practice.';
+
 /** Cold faces above this are a burn hazard on touch, K (60 °C, as published touch-temperature guides for hot surfaces use, e.g. ASTM C1055, ISO 13732-1). */
 export const BURN_TEMPERATURE = 333.15;
 

@@ -1,4 +1,5 @@
 // The report's fixed sentences: the method with its references, and the caution.
+import { RESULTS_CAUTION } from '../exchange/cautions';
 
 /** The method in two sentences. */
 export const METHOD_TEXT = [
@@ -27,10 +28,7 @@ export const REFERENCES = [
   'F. P. Incropera, D. P. DeWitt, T. L. Bergman, A. S. Lavine, Fundamentals of Heat and Mass Transfer, 6th ed., Wiley, 2007, ch. 13 (radiation exchange between surfaces).',
 ];
 
-export const REPORT_CAUTION =
-  'Gray-diffuse radiation; convection only where a coefficient is given, and no absorbing gas. Hot equipment can ' +
-  'burn people and start fires. These results support, and do not replace, local codes and licensed engineering ' +
-  'practice; have them checked before they are used for design or safety decisions.';
+export const REPORT_CAUTION = `${RESULTS_CAUTION} Hot equipment can burn people and start fires; have these results checked before they are used for design or safety decisions.`;
 
 /** Sign and unit conventions under the heat tables. */
 export const SIGN_NOTE =

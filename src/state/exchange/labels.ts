@@ -7,5 +7,6 @@ export {
   BURN_TEMPERATURE,
   burnWarning,
   GAS_CAUTION,
+  RESULTS_CAUTION,
   WALL_TUBE_CAUTION,
 } from '../../document/exchange/cautions';

@@ -1,17 +1,17 @@
 import { useEffect, useState } from 'react';
+import { RESULTS_CAUTION } from '../../state/exchange/labels';
 
-export const SAFETY_TEXT =
-  'Gray-diffuse radiation only: no convection, and no absorbing gas unless modelled. ' +
-  'Results support, and do not replace, local codes and licensed engineering practice.';
+/** The caution that goes with every result (worded once in src/document/exchange/cautions.ts). */
+export const SAFETY_TEXT = RESULTS_CAUTION;
 
 /** The results panel's own caution (src/ui/exchange): while it is on the page the footer points to it instead. */
-const RESULTS_CAUTION = '[role="note"][aria-label="Caution about these results"]';
+const RESULTS_CAUTION_NOTE = '[role="note"][aria-label="Caution about these results"]';
 
 /** True while another caution is on the page, so the caution is said once. */
 function useCautionElsewhere(): boolean {
   const [elsewhere, setElsewhere] = useState(false);
   useEffect(() => {
-    const check = () => setElsewhere(document.querySelector(RESULTS_CAUTION) !== null);
+    const check = () => setElsewhere(document.querySelector(RESULTS_CAUTION_NOTE) !== null);
     check();
     const watch = new MutationObserver(check);
     watch.observe(document.body, { childList: true, subtree: true });

@@ -121,7 +121,7 @@ export function TubeRowForm() {
         {wall
           ? 'Measured from the selected wall to the centre line, the row centred along the wall.'
           : 'Select one wall edge to place the row a distance from that wall.'}{' '}
-        Tubes are drawn as polygons with their corners on the circle.
+        Each tube is an exact circle, one surface.
       </p>
       <button type="button" title="Add the tube row (one undo step); each tube is its own surface" onClick={place}>
         Place tube row
