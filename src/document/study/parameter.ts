@@ -12,7 +12,7 @@ export const SURFACE_PROPERTIES = ['temperature', 'emissivity', 'heatFlux', 'con
 export const SETTINGS = ['surroundingsTemperature', 'depth', 'gasTemperature'] as const;
 /** A shape's position (x, y: the centre of its bounding box) and, for circles, the radius. */
 export const SHAPE_MEASURES = ['x', 'y', 'radius'] as const;
-export const QUANTITIES = ['netHeat', 'netFlux', 'temperature', 'radiosity'] as const;
+export const QUANTITIES = ['netHeat', 'netFlux', 'temperature', 'radiosity', 'peakToAverage'] as const;
 
 export type StudyParameter =
   | { kind: 'surface'; surface: string; property: (typeof SURFACE_PROPERTIES)[number] }
@@ -84,6 +84,7 @@ export const QUANTITY_UNIT: Readonly<Record<Quantity, string>> = {
   netFlux: 'W/m^2',
   temperature: 'K',
   radiosity: 'W/m^2',
+  peakToAverage: '',
 };
 
 const PROPERTY_WORDS = {
@@ -103,6 +104,7 @@ const QUANTITY_WORDS: Readonly<Record<Quantity, string>> = {
   netFlux: 'net flux',
   temperature: 'temperature',
   radiosity: 'radiosity',
+  peakToAverage: 'peak-to-average net flux',
 };
 
 /** "temperature of 'hearth'", "the surroundings temperature", "position x of the shape of 'block'". */

@@ -2,6 +2,7 @@
 // surface equals a given number. The range is scanned first (so every
 // crossing is seen), then Brent's method finds each root in its bracket to
 // 1e-9 of the value.
+import { surfaceProfile } from '../exchange/profile';
 import { evenlySpaced, rootsByScan } from '../../core/study';
 import { formatNumber, quoteName } from '../labels';
 import type { Sketch } from '../schema';
@@ -26,8 +27,19 @@ export type SolveForOutcome =
   /** `covered`: the lowest and highest value of the quantity at the scanned values, when the target was not reached. */
   | { ok: false; message: string; covered?: [number, number] };
 
-/** The quantity of the target's surface in a run (units of QUANTITY_UNIT). */
+/**
+ * The quantity of the target's surface in a run (units of QUANTITY_UNIT). For
+ * peakToAverage, `surface` names a tube split into arcs or a wall split into
+ * parts (see exchange/profile.ts); NaN when it has no profile or its flux changes sign.
+ */
 export function targetQuantity(run: StudyRun, target: Pick<StudyTarget, 'surface' | 'quantity'>): number {
+  if (target.quantity === 'peakToAverage') {
+    const profile = surfaceProfile(run.sketch.shapes, target.surface, (n) => {
+      const i = run.names.indexOf(n);
+      return i < 0 ? undefined : run.result.netFlux[i];
+    });
+    return 'problem' in profile || profile.peakToAverage === null ? Number.NaN : profile.peakToAverage;
+  }
   const i = run.names.indexOf(target.surface);
   return run.result[target.quantity][i];
 }
@@ -50,7 +62,7 @@ export function solveForTarget(
   const problem = rangeProblem(from, to, steps);
   if (problem) return { ok: false, message: problem };
   if (from === to) return { ok: false, message: 'the range is empty: --from and --to are the same value' };
-  if (!names.includes(target.surface))
+  if (target.quantity !== 'peakToAverage' && !names.includes(target.surface))
     return { ok: false, message: `the target names no surface of the sketch: ${quoteName(target.surface)}` };
   const solve = studyRunner(sketch, p);
   let failure: string | undefined;
@@ -64,7 +76,12 @@ export function solveForTarget(
     // Keep the last few cases only (each holds n x n arrays): the answer is one of them or is solved again.
     runs.set(value, outcome.run);
     if (runs.size > 4) runs.delete(runs.keys().next().value!);
-    return targetQuantity(outcome.run, target) - target.value;
+    const q = targetQuantity(outcome.run, target);
+    if (!Number.isFinite(q)) {
+      failure ??= `${describeQuantity(target.surface, target.quantity)} is not defined at ${describeParameter(p)} = ${formatNumber(value)}: ${quoteName(target.surface)} must be split into parts (a tube into arcs) whose net flux keeps one sign`;
+      return Number.NaN;
+    }
+    return q - target.value;
   };
   const values = evenlySpaced(from, to, steps);
   const residuals: number[] = [];

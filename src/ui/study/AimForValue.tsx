@@ -10,7 +10,11 @@ const QUANTITY_WORDS: Record<Quantity, string> = {
   netFlux: 'net flux',
   temperature: 'temperature',
   radiosity: 'radiosity',
+  peakToAverage: 'peak-to-average net flux',
 };
+
+/** Results a surface of the list can aim at (a profile's peak-to-average names a split tube or wall: command line). */
+const SURFACE_QUANTITIES = QUANTITIES.filter((q) => q !== 'peakToAverage');
 
 interface Props {
   sketch: CheckedSketch;
@@ -24,7 +28,7 @@ export function AimForValue({ sketch, doc, names, address, range }: Props) {
   const id = useId();
   const [surface, setSurface] = useStudyField('aim surface', names[0] ?? '');
   const [quantityText, setQuantity] = useStudyField('aim quantity', 'netHeat');
-  const quantity: Quantity = QUANTITIES.find((q) => q === quantityText) ?? 'netHeat';
+  const quantity: Quantity = SURFACE_QUANTITIES.find((q) => q === quantityText) ?? 'netHeat';
   const [target, setTarget] = useStudyField('aim value', '');
   const [problem, setProblem] = useState<string | null>(null);
   const run = useStudyRun('aim');
@@ -69,7 +73,7 @@ export function AimForValue({ sketch, doc, names, address, range }: Props) {
         <label>
           Result{' '}
           <select value={quantity} onChange={(e) => setQuantity(e.target.value)}>
-            {QUANTITIES.map((q) => (
+            {SURFACE_QUANTITIES.map((q) => (
               <option key={q} value={q}>
                 {QUANTITY_WORDS[q]} ({QUANTITY_UNIT[q]})
               </option>
