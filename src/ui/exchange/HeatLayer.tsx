@@ -26,13 +26,7 @@ export function HeatLayer({ doc, camera }: { doc: SketchFile; camera: Camera }) 
               {names.map((name, k) => {
                 const colour = scale.colours.get(name);
                 if (!colour) return null;
-                const pts = arcScreenPoints(camera, shape, k);
-                return (
-                  <Fragment key={k}>
-                    <Line points={pts} stroke="#3a3a3a" strokeWidth={RIM_PX} lineCap="round" />
-                    <Line points={pts} stroke={colour} strokeWidth={BAND_PX} lineCap="round" />
-                  </Fragment>
-                );
+                return <HeatBand key={k} points={arcScreenPoints(camera, shape, k)} colour={colour} />;
               })}
             </Fragment>
           );
@@ -42,17 +36,21 @@ export function HeatLayer({ doc, camera }: { doc: SketchFile; camera: Camera }) 
               const colour = scale.colours.get(names[k]);
               if (!colour) return null;
               const [a, b] = edgeEnds(shape, k);
-              const pts = [...toScreen(camera, a), ...toScreen(camera, b)];
-              return (
-                <Fragment key={k}>
-                  <Line points={pts} stroke="#3a3a3a" strokeWidth={RIM_PX} lineCap="round" />
-                  <Line points={pts} stroke={colour} strokeWidth={BAND_PX} lineCap="round" />
-                </Fragment>
-              );
+              return <HeatBand key={k} points={[...toScreen(camera, a), ...toScreen(camera, b)]} colour={colour} />;
             })}
           </Fragment>
         );
       })}
     </Layer>
+  );
+}
+
+/** One edge or arc in its heat colour, on a dark rim so light colours show on any background (screen points). */
+function HeatBand({ points, colour }: { points: number[]; colour: string }) {
+  return (
+    <>
+      <Line points={points} stroke="#3a3a3a" strokeWidth={RIM_PX} lineCap="round" />
+      <Line points={points} stroke={colour} strokeWidth={BAND_PX} lineCap="round" />
+    </>
   );
 }
