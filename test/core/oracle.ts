@@ -5,6 +5,7 @@
 // between consecutive directions to the sketch's corners the first edge hit
 // cannot change, so one ray per angular gap decides it. The point factor is then
 // integrated along the emitting edge by adaptive Gauss-Kronrod (7/15) quadrature.
+import { integrateVector } from './quadrature';
 
 export interface Seg {
   ax: number;
@@ -95,55 +96,15 @@ export function pointFactors(segs: Seg[], from: number, px: number, py: number, 
   }
 }
 
-// Kronrod 15-point nodes and weights with the embedded 7-point Gauss weights (common practice;
-// Piessens et al., QUADPACK, 1983, routine QK15, from memory).
-const XK = [
-  0.991455371120813, 0.949107912342759, 0.864864423359769, 0.741531185599394, 0.586087235467691, 0.405845151377397,
-  0.207784955007898, 0,
-];
-const WK = [
-  0.022935322010529, 0.063092092629979, 0.10479001032225, 0.140653259715525, 0.169004726639267, 0.190350578064785,
-  0.204432940075298, 0.209482141084728,
-];
-const WG = [0.12948496616887, 0.279705391489277, 0.381830050505119, 0.417959183673469]; // at XK[1], XK[3], XK[5], XK[7]
-
 /**
  * Row i of the edge view-factor matrix by adaptive quadrature along edge i,
  * to an absolute error near `tol` per entry.
  */
 export function oracleRow(segs: Seg[], i: number, tol = 1e-11): Float64Array {
   const s = segs[i];
-  const n = segs.length;
-  const pf = new Float64Array(n);
-  const kron = new Float64Array(n),
-    gauss = new Float64Array(n);
-  const total = new Float64Array(n);
-  const stack: [number, number, number][] = [[0, 1, 0]];
-  while (stack.length) {
-    const [u0, u1, depth] = stack.pop()!;
-    kron.fill(0);
-    gauss.fill(0);
-    const c = 0.5 * (u0 + u1),
-      h = 0.5 * (u1 - u0);
-    for (let k = 0; k < 15; k++) {
-      const idx = k < 8 ? k : 14 - k;
-      const x = k < 8 ? -XK[idx] : XK[idx];
-      const u = c + h * x;
-      pointFactors(segs, i, s.ax + u * (s.bx - s.ax), s.ay + u * (s.by - s.ay), pf);
-      const wk = WK[idx] * h;
-      const g = idx % 2 === 1 ? WG[(idx - 1) / 2] * h : 0;
-      for (let e = 0; e < n; e++) {
-        kron[e] += wk * pf[e];
-        gauss[e] += g * pf[e];
-      }
-    }
-    let err = 0;
-    for (let e = 0; e < n; e++) err = Math.max(err, Math.abs(kron[e] - gauss[e]));
-    if (err > tol * (u1 - u0) && depth < 40) {
-      stack.push([u0, c, depth + 1], [c, u1, depth + 1]);
-    } else {
-      for (let e = 0; e < n; e++) total[e] += kron[e];
-    }
-  }
-  return total;
+  return integrateVector(
+    segs.length,
+    (u, out) => pointFactors(segs, i, s.ax + u * (s.bx - s.ax), s.ay + u * (s.by - s.ay), out),
+    tol,
+  );
 }

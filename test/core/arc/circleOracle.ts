@@ -7,6 +7,7 @@
 // integrated along the emitting segment or arc by adaptive Gauss-Kronrod (7/15)
 // quadrature, after cutting the emitter where its horizon or a circle's tangent
 // meets a fixed point (the integrand has square-root kinks there).
+import { integrateVector } from '../quadrature';
 
 export type Part =
   | { kind: 'segment'; ax: number; ay: number; bx: number; by: number } // radiates to the left of a -> b
@@ -147,18 +148,6 @@ function pointFactors(
   }
 }
 
-// Kronrod 15-point nodes and weights with the embedded 7-point Gauss weights (common practice;
-// Piessens et al., QUADPACK, 1983, routine QK15, from memory).
-const XK = [
-  0.991455371120813, 0.949107912342759, 0.864864423359769, 0.741531185599394, 0.586087235467691, 0.405845151377397,
-  0.207784955007898, 0,
-];
-const WK = [
-  0.022935322010529, 0.063092092629979, 0.10479001032225, 0.140653259715525, 0.169004726639267, 0.190350578064785,
-  0.204432940075298, 0.209482141084728,
-];
-const WG = [0.12948496616887, 0.279705391489277, 0.381830050505119, 0.417959183673469];
-
 /** Point, unit normal and unit tangent at parameter u in [0, 1] along part s, and its length. */
 export function at(s: Part, u: number): [number, number, number, number, number, number, number] {
   if (s.kind === 'segment') {
@@ -182,42 +171,17 @@ export function at(s: Part, u: number): [number, number, number, number, number,
  */
 export function oracleRow(scene: OracleScene, from: number, tol = 1e-11, cuts: number[] = []): Float64Array {
   const s = scene.parts[from];
-  const n = scene.parts.length;
-  const pf = new Float64Array(n);
-  const kron = new Float64Array(n),
-    gauss = new Float64Array(n);
-  const total = new Float64Array(n);
   // A kink near an end of a wide interval can hide between all 15 nodes, and the error
   // estimate then never sees it: start from 64 equal intervals so every interval is short.
   const uniform = Array.from({ length: 63 }, (_, k) => (k + 1) / 64);
-  const edges = [0, ...[...uniform, ...cuts.filter((c) => c > 0 && c < 1)].sort((a, b) => a - b), 1];
-  const stack: [number, number, number][] = [];
-  for (let k = 0; k + 1 < edges.length; k++) stack.push([edges[k], edges[k + 1], 0]);
-  while (stack.length) {
-    const [u0, u1, depth] = stack.pop()!;
-    kron.fill(0);
-    gauss.fill(0);
-    const c = 0.5 * (u0 + u1),
-      h = 0.5 * (u1 - u0);
-    for (let k = 0; k < 15; k++) {
-      const idx = k < 8 ? k : 14 - k;
-      const x = k < 8 ? -XK[idx] : XK[idx];
-      const [px, py, nx, ny, tx, ty] = at(s, c + h * x);
-      pointFactors(scene, from, px, py, nx, ny, tx, ty, pf);
-      const wk = WK[idx] * h;
-      const g = idx % 2 === 1 ? WG[(idx - 1) / 2] * h : 0;
-      for (let e = 0; e < n; e++) {
-        kron[e] += wk * pf[e];
-        gauss[e] += g * pf[e];
-      }
-    }
-    let err = 0;
-    for (let e = 0; e < n; e++) err = Math.max(err, Math.abs(kron[e] - gauss[e]));
-    if (err > tol * (u1 - u0) && depth < 40) {
-      stack.push([u0, c, depth + 1], [c, u1, depth + 1]);
-    } else {
-      for (let e = 0; e < n; e++) total[e] += kron[e];
-    }
-  }
-  return total;
+  const starts = [...uniform, ...cuts.filter((t) => t > 0 && t < 1)].sort((a, b) => a - b);
+  return integrateVector(
+    scene.parts.length,
+    (u, out) => {
+      const [px, py, nx, ny, tx, ty] = at(s, u);
+      pointFactors(scene, from, px, py, nx, ny, tx, ty, out);
+    },
+    tol,
+    starts,
+  );
 }
