@@ -1,6 +1,6 @@
 // The report and pictures of a sketch, shared by the command line and the app.
 export { reportDate, reportFileName, reportHtml, sketchPicture, sketchTitle } from './reportHtml';
-export type { ReportInput, ReportSource } from './reportHtml';
+export type { ReportExchange, ReportInput, ReportSource } from './reportHtml';
 export { sketchSvg, type PictureLegend, type PictureShape, type SketchPicture } from './sketchSvg';
 export { heatColour, heatColours, HEAT_STOPS, type HeatColours, type HeatQuantity } from './heatColours';
 export { NET_HEAT_COLUMNS, type SolvedExchange, type SurfaceColumn } from './exchangeSection';

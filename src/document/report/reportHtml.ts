@@ -38,6 +38,26 @@ export interface ReportInput {
   names: ReadonlyArray<string>;
   /** View factors of those surfaces (lengths in the sketch's units). */
   factors: ViewFactorResult;
+  /**
+   * The exchange already solved for these factors and the sketch's properties (the
+   * app's results pipeline has it); when absent it is solved here, as the command line does.
+   */
+  exchange?: ReportExchange;
+}
+
+/** What the report needs of a solved exchange, or the solver's message. */
+export type ReportExchange =
+  | { ok: true; conditions: ReadonlyArray<Conditions[number]>; result: Solved['result'] }
+  | { ok: false; message: string };
+
+type Outcome = ReturnType<typeof solveSketchExchange>;
+type Solved = Extract<Outcome, { ok: true }>;
+type Conditions = Solved['input']['conditions'];
+
+/** The exchange as the command line solves it, in the report's terms. */
+function solveForReport(sketch: Sketch, names: ReadonlyArray<string>, factors: ViewFactorResult): ReportExchange {
+  const o = solveSketchExchange(sketch, names, factors);
+  return o.ok ? { ok: true, conditions: o.input.conditions, result: o.result } : { ok: false, message: o.message };
 }
 
 /** "sketch.json" -> "sketch-report.html" (directories dropped; any extension replaced). */
@@ -73,10 +93,10 @@ export function sketchPicture(
   return picture;
 }
 
-export function reportHtml({ source, sketch, names, factors }: ReportInput): string {
+export function reportHtml({ source, sketch, names, factors, exchange }: ReportInput): string {
   const title = sketchTitle(source.fileName);
   const hasProperties = names.some((n) => propsOf(sketch, n) !== undefined);
-  const outcome = hasProperties ? solveSketchExchange(sketch, names, factors) : null;
+  const outcome = hasProperties ? (exchange ?? solveForReport(sketch, names, factors)) : null;
   const solved = outcome?.ok ? outcome : null;
 
   const picture = sketchPicture(sketch, names, solved?.result);
@@ -91,7 +111,7 @@ export function reportHtml({ source, sketch, names, factors }: ReportInput): str
       names,
       units: sketch.units,
       lengths: factors.surfaceLength,
-      conditions: solved.input.conditions,
+      conditions: solved.conditions,
       result: solved.result,
     };
     heat = exchangeSection(ex, wallProfiles(sketch.shapes, names, factors.surfaceLength));

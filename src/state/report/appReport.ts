@@ -1,10 +1,24 @@
 // The report and pictures from the app: the same HTML builder and SVG picture as
 // the command line (src/document/report), fed with what is on screen.
-import { reportFileName, reportHtml, sketchSvg, heatColours, type SketchPicture } from '../../document/report';
+import {
+  reportFileName,
+  reportHtml,
+  sketchSvg,
+  heatColours,
+  type ReportExchange,
+  type SketchPicture,
+} from '../../document/report';
 import { edgeSurfaceNames } from '../../document/surfaceIndex';
 import type { DocumentApi } from '../documentApi';
 import { shownResult } from '../results/derive';
 import type { AppState, AppStore } from '../store';
+
+/** The exchange stage's answer in the report's terms; undefined lets the report solve it. */
+function reportExchange(ex: AppState['exchange']): ReportExchange | undefined {
+  if (ex.kind === 'solved' && !ex.stale) return { ok: true, conditions: ex.conditions, result: ex.result };
+  if (ex.kind === 'error' && !ex.stale) return { ok: false, message: ex.message };
+  return undefined;
+}
 
 /** The name Save gives the sketch file; the report is named after it. */
 export const SKETCH_FILE_NAME = 'sketch.json';
@@ -51,6 +65,8 @@ export async function appReport(store: AppStore, api: DocumentApi, now = new Dat
     sketch: shown.sketch,
     names: shown.names,
     factors: shown.result,
+    // The pipeline's own exchange for these factors (it is not stale: checked above), not a second solve.
+    exchange: reportExchange(s.exchange),
   });
   return { ok: true, html, fileName: reportFileName(SKETCH_FILE_NAME) };
 }
