@@ -1,6 +1,7 @@
 // From a schema-valid version-1 file to the form the program works with: one
 // surface name per edge, zero-length edges removed (with a warning), numbers
 // within the documented limits, one thermal condition per surface.
+import { setOwn } from './ownRecord';
 import { unusualPropertyWarnings, unusualSettingWarnings } from './unusualValues';
 import { normaliseCircle } from './circles';
 import { conditionOf, surfaceRuleProblems } from './exchange/conditions';
@@ -93,7 +94,7 @@ export function normalise(file: SketchFileV1): Normalised {
   const surfaces: Record<string, SurfaceProperties> = {};
   const used = new Set(shapes.flatMap((s) => s.surface));
   for (const [name, props] of Object.entries(file.surfaces ?? {})) {
-    surfaces[name] = { ...props };
+    setOwn(surfaces, name, { ...props });
     const condition = conditionOf(props);
     if (!condition.ok) {
       errors.push(

@@ -13,7 +13,8 @@ import { MAX_EDGES, MAX_MESSAGES } from './limits';
 import { migrate } from './migrate';
 import { normalise } from './normalise';
 import { mergePlaces, problemAt, type SketchProblem } from './problems';
-import { sketchFileSchemaV1, type Sketch, type SketchFileV1 } from './schema';
+import { parseSketchFile } from './plainKeys';
+import type { Sketch, SketchFileV1 } from './schema';
 import { schemaProblem } from './zodMessages';
 import { unknownFieldWarnings } from './unknownFields';
 
@@ -97,18 +98,8 @@ function readFormat(input: unknown): FormatRead {
   const limit = edgeLimitProblem(doc.shapes);
   if (limit) return refuse([limit]);
 
-  const surfaces = doc.surfaces;
-  if (surfaces !== null && typeof surfaces === 'object' && Object.hasOwn(surfaces, '__proto__')) {
-    // The schema would silently drop this key; say so instead.
-    return refuse([
-      problemAt(
-        'schema',
-        `surfaces: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`,
-      ),
-    ]);
-  }
-  const parsed = sketchFileSchemaV1.safeParse(doc, { reportInput: true });
-  if (!parsed.success) return refuse(parsed.error.issues.map((issue) => schemaProblem(issue, doc)));
+  const parsed = parseSketchFile(doc);
+  if (!parsed.success) return refuse(parsed.issues.map((issue) => schemaProblem(issue, doc)));
   return { ok: true, doc: parsed.data, warnings: unknownFieldWarnings(doc) };
 }
 

@@ -29,9 +29,7 @@ export const pointSchema = z.tuple([coordinate, coordinate], { error: 'must be a
 export const surfaceNameSchema = z
   .string({ error: 'must be a surface name (text)' })
   .min(1, { error: 'must not be empty' })
-  .max(MAX_NAME_LENGTH, { error: `must be at most ${MAX_NAME_LENGTH} characters` })
-  // Would replace an object's prototype instead of naming a surface.
-  .refine((name) => name !== '__proto__', { error: 'must not be "__proto__" (a reserved word); choose another name' });
+  .max(MAX_NAME_LENGTH, { error: `must be at most ${MAX_NAME_LENGTH} characters` });
 
 /** An exact circle (version 2): centre [x, y] and radius in file units. */
 export const circleSchema = z.object(

@@ -10,7 +10,7 @@ export const SKETCH_SCHEMA_PATH = 'public/sketch.schema.json';
 
 /**
  * The JSON Schema (draft 2020-12) of the newest sketch file version, as a
- * plain object. Rules zod checks in code (a name is not "__proto__", the
+ * plain object. Rules zod checks in code (the
  * geometry is valid) are not in it: the program still checks those on reading.
  */
 export function sketchJsonSchema(): Record<string, unknown> {

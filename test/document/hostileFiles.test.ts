@@ -76,20 +76,30 @@ describe('names that are properties of every object', () => {
     }
   });
 
-  it('"__proto__" is refused with a message that names it, in a shape and as a property key', () => {
-    const asEdge = restore(triangle(['__proto__', 'b', 'c']));
-    const asKey = restore(
-      '{"version":1,"units":"m","shapes":[{"kind":"enclosure","points":[[0,0],[3,0],[3,4]],"surface":"w"}],"surfaces":{"__proto__":{"temperature":400}}}',
-    );
-    for (const read of [asEdge, asKey]) {
-      expect(read.ok).toBe(false);
-      if (read.ok) continue;
-      expect(read.errors.map((e) => e.message).join('\n')).toMatch(/__proto__.*reserved word/);
-    }
-    const cli = run(['exchange', 'p.json'], { 'p.json': triangle(['__proto__', 'b', 'c']) });
-    expect(cli.code).toBe(1);
-    expect(cli.err).toMatch(/^exchange: p\.json: .*__proto__/);
-    expect(cli.err).not.toMatch(STACK);
+  it('"__proto__" and "constructor" are plain surface names: read, kept with their properties, solved and written back', () => {
+    const text =
+      '{"version":2,"units":"m","shapes":[{"kind":"enclosure","points":[[0,0],[3,0],[3,4]],"surface":["__proto__","constructor","c"]}],' +
+      '"surfaces":{"__proto__":{"temperature":400},"constructor":{"temperature":300},"c":{"emissivity":0.5}}}';
+    const read = restore(text);
+    expect(read.ok).toBe(true);
+    if (!read.ok) return;
+    const surfaces = read.sketch.surfaces;
+    expect(Object.getPrototypeOf(surfaces)).toBe(Object.prototype);
+    expect(Object.keys(surfaces)).toEqual(['__proto__', 'constructor', 'c']);
+    expect(Object.getOwnPropertyDescriptor(surfaces, '__proto__')?.value).toEqual({ temperature: 400 });
+    // Written back as read: the saved text holds the same names and properties.
+    const again = restore(JSON.stringify(read.sketch));
+    expect(again.ok && JSON.stringify(again.sketch)).toBe(JSON.stringify(read.sketch));
+    const cli = run(['exchange', 'p.json', '--json'], { 'p.json': text });
+    expect(cli.err).toBe('');
+    expect(cli.code).toBe(0);
+    const out = JSON.parse(cli.out) as { surfaces: { name: string; temperature: number }[] };
+    expect(out.surfaces.map((s) => [s.name, s.temperature])).toEqual([
+      ['__proto__', 400],
+      ['constructor', 300],
+      ['c', expect.any(Number) as number],
+    ]);
+    expect(cli.out).not.toMatch(STACK);
   });
 });
 

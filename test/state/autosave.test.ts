@@ -115,13 +115,13 @@ describe('autosave', () => {
     const stop = startAutosave(store, storage, documentApi);
     store.getState().edit((d) => setVertex(d, 0, 2, [40, 30]));
     const good = storage.getItem(AUTOSAVE_KEY)!;
-    // '__proto__' is a name the file format refuses (it would replace an object's prototype).
-    store.getState().edit((d) => ({ ...d, shapes: [{ ...d.shapes[0], surface: '__proto__' }] }));
+    // A 201-character name is past the file's limit (200), so the reader would refuse the sketch.
+    store.getState().edit((d) => ({ ...d, shapes: [{ ...d.shapes[0], surface: 'x'.repeat(201) }] }));
     store.getState().edit((d) => setVertex(d, 0, 2, [40, 31]));
     expect(storage.getItem(AUTOSAVE_KEY)).toBe(good);
     const paused = store.getState().notices.filter((n) => n.text.startsWith('Autosave paused'));
     expect(paused).toHaveLength(1);
-    expect(paused[0].text).toContain('__proto__');
+    expect(paused[0].text).toContain('at most 200 characters');
     expect(paused[0].action?.kind).toBe('save-file');
     stop();
   });

@@ -20,6 +20,8 @@ import { main } from '../../src/cli/main';
 import { STEFAN_BOLTZMANN as SIGMA } from '../../src/core/exchange';
 import { solvedCsv } from '../../src/state/exchange/export';
 import Papa from 'papaparse';
+import { renameSurface } from '../../src/state/edits/surfaceEdits';
+import { edgeNames } from '../../src/state/geometry/polygon';
 
 // Heat exchange in the app store: derived from the shown view factors and the
 // document, live, never saved. The chain (exact view factors, dense solve) is
@@ -354,9 +356,14 @@ describe('exchange edits', () => {
     expect(store.getState().past).toHaveLength(0);
   });
 
-  it('names no edge uses, and "__proto__", are left alone', () => {
+  it('names no edge uses are left alone; "__proto__" is a plain name', () => {
     expect(setEmissivity(squares, 'nowhere', 0.5)).toBe(squares);
     expect(setEmissivity(squares, '__proto__', 0.5)).toBe(squares);
+    const named = renameSurface(squares, edgeNames(squares.shapes[0])[0], '__proto__');
+    const set = setEmissivity(named, '__proto__', 0.5);
+    expect(Object.getPrototypeOf(set.surfaces)).toBe(Object.prototype);
+    expect(Object.keys(set.surfaces ?? {})).toContain('__proto__');
+    expect(Object.getOwnPropertyDescriptor(set.surfaces, '__proto__')?.value).toMatchObject({ emissivity: 0.5 });
   });
 
   it('settings are set and cleared one at a time', () => {

@@ -1,6 +1,7 @@
 // Copies of shapes: paste, repeat (n copies at a pitch along a direction) and
 // flip. A copy is its own surface: generated names take the next number
 // ("tube 4"), typed names get " (2)"; the copy keeps the original's properties.
+import { setOwn } from '../../document/ownRecord';
 import type { Point, Shape, SketchFile, SurfaceProps } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
 import { compactSurface, copyName, usedSurfaceNames } from './surfaceNames';
@@ -20,8 +21,7 @@ export function copyShapes(doc: SketchFile, indices: readonly number[]): Clipboa
   if (!shapes.length) return null;
   const surfaces: Record<string, SurfaceProps> = {};
   const props = doc.surfaces ?? {};
-  for (const s of shapes)
-    for (const n of edgeNames(s)) if (n !== '__proto__' && Object.hasOwn(props, n)) surfaces[n] = props[n];
+  for (const s of shapes) for (const n of edgeNames(s)) if (Object.hasOwn(props, n)) setOwn(surfaces, n, props[n]);
   return { shapes, surfaces };
 }
 
@@ -52,8 +52,8 @@ export function pasteShapes(
         m = copyName(n, taken);
         taken.add(m);
         renamed.set(n, m);
-        if (Object.hasOwn(clip.surfaces, n) && m !== '__proto__') {
-          props[m] = { ...clip.surfaces[n] };
+        if (Object.hasOwn(clip.surfaces, n)) {
+          setOwn(props, m, { ...clip.surfaces[n] });
           copied = true;
         }
       }

@@ -1,5 +1,6 @@
 // Grouping, renaming and splitting named surfaces. Surface properties
 // (doc.surfaces) follow their name and are dropped when no edge uses it.
+import { setOwn } from '../../document/ownRecord';
 import { surfaceNameSchema } from '../../document/schema';
 import type { Point, SketchFile, SurfaceProps } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
@@ -42,14 +43,13 @@ export function groupEdges(doc: SketchFile, edges: readonly EdgeRef[], name: str
   const firstOld = edgeNames(doc.shapes[edges[0].shape])[edges[0].index];
   const props = { ...(doc.surfaces ?? {}) };
   // A brand-new name inherits the properties of the first edge's old surface.
-  // ('__proto__' is refused by the reader with a message; never assign it as a key.)
   const inherited = firstOld !== undefined ? own(props, firstOld) : undefined;
-  if (target !== '__proto__' && !own(props, target) && inherited) props[target] = { ...inherited };
+  if (!own(props, target) && inherited) setOwn(props, target, { ...inherited });
   const next = relabel(doc, (s, k, old) => (chosen.has(`${s}:${k}`) ? target : old));
   return pruneProps(next, Object.keys(props).length ? props : doc.surfaces);
 }
 
-/** Why a typed surface name cannot be used (the file's own rule: length, "__proto__"), or null. */
+/** Why a typed surface name cannot be used (the file's own rule: not empty, not too long), or null. */
 export function surfaceNameProblem(name: string): string | null {
   const r = surfaceNameSchema.safeParse(name);
   return r.success ? null : `the name ${r.error.issues[0]?.message ?? 'is not allowed'}`;
@@ -61,7 +61,7 @@ export function renameSurface(doc: SketchFile, from: string, to: string): Sketch
   if (!target || target === from) return doc;
   const props = { ...(doc.surfaces ?? {}) };
   const moving = own(props, from);
-  if (target !== '__proto__' && moving && !own(props, target)) props[target] = moving;
+  if (moving && !own(props, target)) setOwn(props, target, moving);
   delete props[from];
   const next = relabel(doc, (_s, _k, old) => (old === from ? target : old));
   return pruneProps(next, doc.surfaces ? props : undefined);
@@ -78,7 +78,7 @@ export function splitSurface(doc: SketchFile, name: string): SketchFile {
     if (old !== name) return old;
     const fresh = uniqueName(`${name} ${++count}`, taken);
     taken.add(fresh);
-    if (original) props[fresh] = { ...original };
+    if (original) setOwn(props, fresh, { ...original });
     return fresh;
   });
   if (count < 2) return doc;

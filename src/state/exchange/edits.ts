@@ -3,6 +3,7 @@
 // and autosaves; an edit that changes nothing returns the same document (no step).
 // Units as in the file: temperatures K, heat flux W/m^2 (supplied from behind),
 // lengths in walls and tubes m, coefficients W/(m^2 K), conductivities W/(m K), depth m.
+import { setOwn } from '../../document/ownRecord';
 import type { SketchFile, SurfaceProps } from '../sketchFile';
 import { surfacePropertiesSchema } from '../../document/schema';
 import { usedSurfaceNames } from '../edits/surfaceNames';
@@ -52,12 +53,12 @@ function sameProps(a: SurfaceProps | undefined, b: SurfaceProps | undefined): bo
 
 /** Replace a surface's properties; undefined or {} removes its entry (back to the defaults). Names no edge uses are left alone. */
 export function setSurfaceProps(doc: SketchFile, name: string, props: SurfaceProps | undefined): SketchFile {
-  if (name === '__proto__' || !usedSurfaceNames(doc).has(name)) return doc;
+  if (!usedSurfaceNames(doc).has(name)) return doc;
   const next = props ? tidy(props) : undefined;
   const kept = next && Object.keys(next).length > 0 ? next : undefined;
   if (sameProps(surfacePropsOf(doc, name), kept)) return doc;
   const surfaces = { ...(doc.surfaces ?? {}) };
-  if (kept) surfaces[name] = kept;
+  if (kept) setOwn(surfaces, name, kept);
   else delete surfaces[name];
   const { surfaces: _old, ...rest } = doc;
   return Object.keys(surfaces).length ? { ...rest, surfaces } : rest;
