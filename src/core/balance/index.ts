@@ -1,6 +1,8 @@
 // The whole surface balance: radiation, convection to a transparent gas, and
 // what lies behind each surface (lined walls, tubes, thin linked plates).
 export {
+  backHeat,
+  balanceNodes,
   layerResistance,
   layerTemperatures,
   tubeResistance,

@@ -18,7 +18,7 @@ import { STEFAN_BOLTZMANN, emissivePower } from '../exchange/exchange';
 import { exchangeFailure, surroundingsFactor, type ExchangeFailure } from '../exchange/failures';
 import { DenseLuSolver, LinearSolveError } from '../exchange/linearSolve';
 import { checkCondition, checkConvection } from './check';
-import { tubeResistance, wallFlux, type BalanceCondition } from './conditions';
+import { backHeat, balanceNodes } from './conditions';
 import { RadiosityNetwork } from './radiosity';
 import { balanceResult, type Solved } from './results';
 import type { BalanceInput, BalanceOutcome } from './types';
@@ -27,9 +27,6 @@ import type { BalanceInput, BalanceOutcome } from './types';
 export const BALANCE_TOLERANCE = 1e-10;
 /** Newton iterations allowed before the case is refused. */
 export const MAX_ITERATIONS = 100;
-
-/** Kinds whose temperature is solved for (their own node). */
-const SOLVED_KINDS = new Set<BalanceCondition['kind']>(['heatFlux', 'adiabatic', 'wall', 'tube']);
 
 /**
  * Solves the whole surface balance of a 2D section (see the file header).
@@ -55,19 +52,7 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
     throw err;
   }
 
-  // Nodes: the surfaces whose temperature is solved, a linked pair as one node.
-  const nodeOf = new Int32Array(n).fill(-1);
-  const members: number[][] = [];
-  for (let i = 0; i < n; i++) {
-    const c = input.conditions[i];
-    if (SOLVED_KINDS.has(c.kind)) {
-      nodeOf[i] = members.length;
-      members.push([i]);
-    } else if (c.kind === 'linked' && c.other > i) {
-      nodeOf[i] = nodeOf[c.other] = members.length;
-      members.push([i, c.other]);
-    }
-  }
+  const members = balanceNodes(input.conditions);
   const m = members.length;
   const unknown = Int32Array.from(members.flat());
   const A = input.area;
@@ -236,24 +221,6 @@ function stuck(input: BalanceInput, nodeT: Float64Array, members: number[][], st
   return c.kind === 'heatFlux'
     ? exchangeFailure('flux-below-absolute-zero', { surface: i, value: c.heatFlux })
     : exchangeFailure('balance-below-absolute-zero', { surface: i, value: nodeT[low] });
-}
-
-/** Heat supplied from behind at temperature T (W/m) and its derivative in T (W/(m K)). */
-function backHeat(c: BalanceCondition, T: number, area: number): { heat: number; slope: number } {
-  switch (c.kind) {
-    case 'heatFlux':
-      return { heat: area * c.heatFlux, slope: 0 };
-    case 'wall': {
-      const w = wallFlux(c, T);
-      return { heat: -area * w.flux, slope: -area * w.slope };
-    }
-    case 'tube': {
-      const R = tubeResistance(c);
-      return { heat: (-area * (T - c.fluidTemperature)) / R, slope: -area / R };
-    }
-    default:
-      return { heat: 0, slope: 0 };
-  }
 }
 
 interface Prepared {

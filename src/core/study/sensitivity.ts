@@ -1,42 +1,34 @@
 // How each surface's net heat changes with each emissivity and each fixed
-// temperature, from the radiosity equations themselves (the derivative of
-// their solution), not by re-solving with nudged inputs.
+// temperature: the derivative of the solved balance itself (implicit
+// differentiation of its equations at the answer), not re-solving with nudged inputs.
 //
-// The solver's equations (src/core/exchange/exchange.ts), with w_i the weight
-// of the irradiation G_i = sum_j F_ij J_j + F_is E_s in row i (1 - e_i for a
-// temperature, 1 for a flux or adiabatic surface, 0 for an opening):
-//   M J = b,  M_ij = delta_ij - w_i F_ij,
-//   b_i = e_i E_i + (1 - e_i) F_is E_s  (temperature),  q_i + F_is E_s  (flux),  E_s  (opening).
-// For a parameter p: M dJ/dp = db/dp - (dM/dp) J, one solve with the same
-// factorisation per parameter. Then dG_i = sum_j F_ij dJ_j + F_is dE_s and
-//   net heat q'_i = A_i e_i (E_i - G_i)  for temperature rows and openings (e = 1, E = E_s),
-//   q'_i = A_i q_i  (fixed) for flux and adiabatic rows, whose derivative is zero.
-// Emissivity e_k of a temperature surface: row k only, d(b_k - sum_j M_kj J_j)/de_k = E_k - G_k.
-// Temperature T_k: dE_k/dT_k = 4 sigma T_k^3 in row k. Surroundings T_s: dE_s = 4 sigma T_s^3.
+// The balance (src/core/balance): every surface's radiosity row
+//   J_i - (1 - e_i) G_i = e_i E_i,  G_i = sum_j F_ij J_j + F_is E_s,  i.e. M J = b,
+// with E = sigma T^4 (openings: e = 1, E = E_s), and for every node a (a surface
+// whose temperature is solved, or a linked plate's two faces) the residual
+//   r_a = sum_{i in a} [back_i(T_i) - A_i (e_i (E_i - G_i) + h_i (T_i - T_gas))] = 0.
+// For a parameter p, holding the nodes' E fixed, M dJ/dp = rhs_p (below) gives the
+// partial dG/dp; the nodes then move by dE = -K^-1 dr/dp, K = dr/dE the balance's
+// Newton matrix, and the total dG = dG/dp + Y dE with Y = F M^-1 diag(e) on the
+// node columns. Net heat q_i = A_i e_i (E_i - G_i), so
+//   dq_i = A_i [de_i (E_i - G_i) + e_i (dE_i - dG_i)].
+// Right-hand sides: emissivity e_k: E_k - G_k in row k; a held temperature T_k:
+// e_k 4 sigma T_k^3 in row k; the surroundings T_s: (1 - e_i) F_is dE_s in every
+// row, plus dE_s in an opening's row (its E is E_s). One factorisation of M and
+// one of K serve every parameter.
+import { backHeat, balanceNodes, type BalanceInput } from '../balance';
 import { DenseLuSolver, LinearSolveError, STEFAN_BOLTZMANN, emissivePower, type ExchangeResult } from '../exchange';
 
-/** What the derivatives need of the solver's input (an ExchangeInput or the whole balance's input). */
-export interface SensitivityInput {
-  /** n x n row-major, row = from (dimensionless). */
-  viewFactors: ArrayLike<number>;
-  /** Length of each surface, m (area per metre of depth). */
-  area: ArrayLike<number>;
-  /** Condition kind per surface: only 'temperature', 'heatFlux', 'adiabatic' and 'opening' are linear. */
-  conditions: ReadonlyArray<{ readonly kind: string }>;
-  /** Film coefficients, W/(m^2 K): above 0 on a surface whose temperature is solved makes the system non-linear. */
-  convectionCoefficient?: ArrayLike<number>;
-}
+/** What the derivatives need of the balance's input (SI units, as BalanceInput). */
+export type SensitivityInput = Pick<
+  BalanceInput,
+  'viewFactors' | 'area' | 'conditions' | 'convectionCoefficient' | 'surroundingsTemperature'
+>;
 
-/** What the derivatives need of the solved exchange (SI units, as ExchangeResult). */
+/** What the derivatives need of the solved balance (SI units, as ExchangeResult). */
 export type SensitivityBase = Pick<
   ExchangeResult,
-  | 'surfaceCount'
-  | 'emissivity'
-  | 'surroundingsViewFactor'
-  | 'irradiation'
-  | 'radiosity'
-  | 'surroundingsTemperature'
-  | 'temperature'
+  'surfaceCount' | 'emissivity' | 'surroundingsViewFactor' | 'irradiation' | 'surroundingsTemperature' | 'temperature'
 >;
 
 /** What a row of the sensitivity table is taken with respect to. */
@@ -61,51 +53,67 @@ export type SensitivityOutcome =
       /** d(surroundings net heat)/d(parameter p), same units. */
       surroundingsNetHeat: Float64Array;
     }
-  /** The radiosity equations could not be factored (the solve that gave `result` would have failed too). */
-  | { ok: false; code: 'singular' }
-  /**
-   * `surface` has a condition other than temperature, heat flux, adiabatic or
-   * opening, or convection where its temperature is solved: the equations are not linear.
-   */
-  | { ok: false; code: 'unsupported-condition'; surface: number };
+  /** The radiosity equations, or the balance's Newton matrix at the answer, could not be factored. */
+  | { ok: false; code: 'singular' };
 
 /**
  * Derivatives of every surface's net heat (W per metre of depth) with respect to
  * the emissivity of each surface that is not an opening (per unit emissivity),
  * the temperature of each surface held at a temperature (per K), and the
- * surroundings temperature when the sketch sees the surroundings (per K).
- * `input` and `result` are one solved exchange (solveExchange(input) gave result).
+ * surroundings temperature when the sketch sees the surroundings (per K), with
+ * every other surface's temperature following its balance (walls, tubes,
+ * linked plates, convection and fluxes included). `input` and `result` are one
+ * solved balance (solveBalance(input) gave result).
  */
 export function netHeatSensitivity(input: SensitivityInput, result: SensitivityBase): SensitivityOutcome {
   const n = result.surfaceCount;
   const F = input.viewFactors;
-  const { emissivity: eps, surroundingsViewFactor: Fs, irradiation: G, radiosity: J } = result;
+  const A = input.area;
+  const { emissivity: eps, surroundingsViewFactor: Fs, irradiation: G, temperature: T } = result;
   const conditions = input.conditions;
-  const area = input.area;
   const Ts = result.surroundingsTemperature;
-  const linear: readonly string[] = ['temperature', 'heatFlux', 'adiabatic', 'opening'];
-  const h = input.convectionCoefficient;
-  const unsupported = conditions.findIndex(
-    (c, i) => !linear.includes(c.kind) || (c.kind !== 'temperature' && h !== undefined && h[i] > 0),
-  );
-  if (unsupported >= 0) return { ok: false, code: 'unsupported-condition', surface: unsupported };
-  const weight = (i: number) => {
-    const kind = conditions[i].kind;
-    return kind === 'temperature' ? 1 - eps[i] : kind === 'opening' ? 0 : 1;
-  };
-  const solver = new DenseLuSolver(n);
-  const M = solver.matrix;
-  for (let i = 0; i < n; i++) {
-    const w = weight(i);
-    for (let j = 0; j < n; j++) M[i * n + j] = -w * F[i * n + j];
-    M[i * n + i] += 1;
-  }
-  try {
-    solver.factor();
-  } catch (error) {
-    if (error instanceof LinearSolveError) return { ok: false, code: 'singular' };
-    throw error;
-  }
+  const h = (i: number) => input.convectionCoefficient?.[i] ?? 0;
+  const E = Float64Array.from(T, (t) => emissivePower(t)); // openings report T_s, so E_i = E_s there
+
+  const network = factored(n, (M) => {
+    for (let i = 0; i < n; i++) {
+      const w = 1 - eps[i];
+      for (let j = 0; j < n; j++) M[i * n + j] = -w * F[i * n + j];
+      M[i * n + i] += 1;
+    }
+  });
+  if (!network) return { ok: false, code: 'singular' };
+  const irradiationOf = (dJ: Float64Array, dEs: number) =>
+    Float64Array.from({ length: n }, (_, i) => {
+      let g = Fs[i] * dEs;
+      for (let j = 0; j < n; j++) g += F[i * n + j] * dJ[j];
+      return g;
+    });
+
+  // Per node b: X_b = M^-1 (e on b's surfaces), dJ/dE_b; Y_b = F X_b, dG/dE_b (W/m^2 per W/m^2).
+  const nodes = balanceNodes(conditions);
+  const m = nodes.length;
+  const X = nodes.map((members) => {
+    const x = new Float64Array(n);
+    for (const i of members) x[i] = eps[i];
+    return network.solve(x);
+  });
+  const Y = X.map((x) => irradiationOf(x, 0));
+  const jacobian =
+    m === 0
+      ? null
+      : factored(m, (K) => {
+          nodes.forEach((members, a) => {
+            let slope = 0; // d(back - convection)/dT of the node, W/(m K)
+            for (const i of members) {
+              slope += backHeat(conditions[i], T[i], A[i]).slope - A[i] * h(i);
+              for (let b = 0; b < m; b++) K[a * m + b] += A[i] * eps[i] * Y[b][i];
+              K[a * m + a] -= A[i] * eps[i];
+            }
+            K[a * m + a] += slope / (4 * STEFAN_BOLTZMANN * T[members[0]] ** 3);
+          });
+        });
+  if (m > 0 && !jacobian) return { ok: false, code: 'singular' };
 
   const parameters: SensitivityParameter[] = [];
   for (let k = 0; k < n; k++) if (conditions[k].kind !== 'opening') parameters.push({ kind: 'emissivity', surface: k });
@@ -114,52 +122,76 @@ export function netHeatSensitivity(input: SensitivityInput, result: SensitivityB
   const seesSurroundings = conditions.some((c) => c.kind === 'opening') || Fs.some((f) => f > 0);
   if (Ts !== undefined && seesSurroundings) parameters.push({ kind: 'surroundingsTemperature' });
 
-  const emissive = (i: number) => {
-    const c = conditions[i];
-    return c.kind === 'temperature'
-      ? emissivePower(result.temperature[i])
-      : c.kind === 'opening'
-        ? emissivePower(Ts!)
-        : J[i];
-  };
+  // A flux or adiabatic back with no convection fixes the surface's net radiation.
+  const fixesItsRadiation = (i: number) =>
+    (conditions[i].kind === 'heatFlux' || conditions[i].kind === 'adiabatic') && !(h(i) > 0);
   const netHeat: Float64Array[] = [];
   const surroundingsNetHeat = new Float64Array(parameters.length);
   parameters.forEach((p, row) => {
-    // Right-hand side of M dJ = db - dM J, and the parameter's direct changes of E_i (dE) and E_s (dEs).
+    if (p.kind === 'emissivity' && fixesItsRadiation(p.surface)) {
+      // Its radiosity is G + q whatever e is: only its own temperature moves. Exact zeros, not rounding.
+      netHeat.push(new Float64Array(n));
+      return;
+    }
+    // The parameter's direct changes: of E_i (dE), E_s (dEs) and e_i (de), and the rhs of M dJ.
     const rhs = new Float64Array(n);
     const dE = new Float64Array(n);
+    const de = new Float64Array(n);
     let dEs = 0;
     if (p.kind === 'emissivity') {
-      if (conditions[p.surface].kind === 'temperature') rhs[p.surface] = emissive(p.surface) - G[p.surface];
+      de[p.surface] = 1;
+      rhs[p.surface] = E[p.surface] - G[p.surface];
     } else if (p.kind === 'temperature') {
-      const T = result.temperature[p.surface]; // as given, for a surface held at a temperature
-      dE[p.surface] = 4 * STEFAN_BOLTZMANN * T ** 3;
+      dE[p.surface] = 4 * STEFAN_BOLTZMANN * T[p.surface] ** 3;
       rhs[p.surface] = eps[p.surface] * dE[p.surface];
     } else {
       dEs = 4 * STEFAN_BOLTZMANN * Ts! ** 3;
       for (let i = 0; i < n; i++) {
-        if (conditions[i].kind === 'opening') {
-          rhs[i] = dEs;
-          dE[i] = dEs;
-        } else rhs[i] = weight(i) * Fs[i] * dEs;
+        if (conditions[i].kind === 'opening') dE[i] = dEs;
+        rhs[i] = (1 - eps[i]) * Fs[i] * dEs + eps[i] * dE[i];
       }
     }
-    const dJ = solver.solve(rhs);
+    const dJ = network.solve(rhs);
+    const dG = irradiationOf(dJ, dEs);
+    if (jacobian) {
+      // -dr_a/dp with the nodes held, then the nodes' answer dE = K^-1 (-dr/dp).
+      const minusDr = Float64Array.from(nodes, (members) => {
+        let s = 0;
+        for (const i of members) s += A[i] * (de[i] * (E[i] - G[i]) - eps[i] * dG[i]);
+        return s;
+      });
+      const dNode = jacobian.solve(minusDr);
+      nodes.forEach((members, b) => {
+        for (const i of members) dE[i] += dNode[b];
+        for (let i = 0; i < n; i++) {
+          dG[i] += Y[b][i] * dNode[b];
+          dJ[i] += X[b][i] * dNode[b];
+        }
+      });
+    }
     const dq = new Float64Array(n);
     let dSurroundings = 0;
     for (let i = 0; i < n; i++) {
-      let dG = Fs[i] * dEs;
-      for (let j = 0; j < n; j++) dG += F[i * n + j] * dJ[j];
-      const kind = conditions[i].kind;
-      if (kind === 'temperature' || kind === 'opening') {
-        dq[i] = area[i] * eps[i] * (dE[i] - dG);
-        if (p.kind === 'emissivity' && p.surface === i) dq[i] += area[i] * (emissive(i) - G[i]);
-      }
+      dq[i] = A[i] * (de[i] * (E[i] - G[i]) + eps[i] * (dE[i] - dG[i]));
       // Surroundings net heat = -sum_i A_i F_is (J_i - E_s).
-      dSurroundings -= area[i] * Fs[i] * (dJ[i] - dEs);
+      dSurroundings -= A[i] * Fs[i] * (dJ[i] - dEs);
     }
     netHeat.push(dq);
     surroundingsNetHeat[row] = dSurroundings;
   });
   return { ok: true, parameters, netHeat, surroundingsNetHeat };
+}
+
+/** An n x n solver with `fill` written into its matrix and factored, or null when singular. */
+function factored(n: number, fill: (matrix: Float64Array) => void): DenseLuSolver | null {
+  const solver = new DenseLuSolver(n);
+  solver.matrix.fill(0);
+  fill(solver.matrix);
+  try {
+    solver.factor();
+    return solver;
+  } catch (error) {
+    if (error instanceof LinearSolveError) return null;
+    throw error;
+  }
 }

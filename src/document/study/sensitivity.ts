@@ -1,13 +1,12 @@
 // The sensitivity table of a sketch: how each surface's net heat changes per
 // unit change of each emissivity and each fixed temperature (derivatives of the
-// radiosity solution, src/core/study/sensitivity.ts), with labels and units.
+// solved balance, src/core/study/sensitivity.ts), with labels and units.
 import {
   netHeatSensitivity,
   type SensitivityBase,
   type SensitivityInput,
   type SensitivityParameter,
 } from '../../core/study';
-import { quoteName } from '../labels';
 
 export interface SensitivityRow {
   /** The parameter as the study commands address it: "hearth.emissivity", "settings.surroundingsTemperature". */
@@ -43,14 +42,12 @@ export function sensitivityTable(
   result: SensitivityBase,
 ): SensitivityTableOutcome {
   const s = netHeatSensitivity(input, result);
-  if (!s.ok) {
-    if (s.code === 'unsupported-condition')
-      return {
-        ok: false,
-        message: `sensitivities are worked out where the radiosity equations are linear (temperature, heat-flux, adiabatic and opening surfaces, convection only on surfaces held at a temperature); ${quoteName(names[s.surface])} is outside that`,
-      };
-    return { ok: false, message: 'the radiosity equations are singular or too ill-conditioned to differentiate' };
-  }
+  if (!s.ok)
+    return {
+      ok: false,
+      message:
+        'the radiosity equations, or the surface balance at its answer, are singular or too ill-conditioned to differentiate',
+    };
   // The surroundings' own net heat moves only where surfaces see them past the sketch (openings count as surfaces).
   const open = result.surroundingsViewFactor.some((f) => f > 0);
   const rows = s.parameters.map((p, k): SensitivityRow => {
