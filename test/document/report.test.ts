@@ -12,6 +12,7 @@ import {
   type PictureShape,
 } from '../../src/document/report';
 import { escapeMarkup } from '../../src/document/report/escape';
+import type { ShapeV1 } from '../../src/document/schema';
 
 const parseSvg = (text: string) => new DOMParser().parseFromString(text, 'image/svg+xml');
 
@@ -136,14 +137,36 @@ describe('heat colours', () => {
 
 describe('wallProfiles', () => {
   const names = ['roof 1', 'roof 2', 'roof 3', 'floor', 'tube 1', 'tube 2'];
-  const lengths = [1, 2, 1, 4, 3, 3];
+  // A regular polygon (side lengths do not matter to which parts make a profile).
+  const ring = (surface: string[]): ShapeV1 => ({
+    kind: 'enclosure',
+    points: surface.map((_, k): [number, number] => [
+      Math.cos((2 * Math.PI * k) / surface.length),
+      Math.sin((2 * Math.PI * k) / surface.length),
+    ]),
+    surface,
+  });
+  const tube = (name: string, x: number): ShapeV1 => ({
+    kind: 'solid',
+    points: [],
+    circle: { center: [x, 0], radius: 0.1 },
+    surface: name,
+  });
   it('finds parts numbered 1..n along consecutive edges of one shape, either direction', () => {
-    const shapes = [
-      { surface: ['floor', 'x', 'roof 3', 'roof 2', 'roof 2', 'roof 1'] },
-      { surface: ['tube 1'] },
-      { surface: ['tube 2'] },
-    ];
-    const p = wallProfiles(shapes, names, lengths);
+    // Edges 2..5 along the top, right to left: roof 3 (length 1), roof 2 (two edges of 1), roof 1 (length 1).
+    const box: ShapeV1 = {
+      kind: 'enclosure',
+      points: [
+        [1, 0],
+        [4, 0],
+        [4, 1],
+        [3, 1],
+        [2, 1],
+        [1, 1],
+      ],
+      surface: ['floor', 'x', 'roof 3', 'roof 2', 'roof 2', 'roof 1'],
+    };
+    const p = wallProfiles([box, tube('tube 1', 2), tube('tube 2', 3)], names);
     expect(p.length).toBe(1);
     expect(p[0].wall).toBe('roof');
     expect(p[0].parts).toEqual([
@@ -154,17 +177,15 @@ describe('wallProfiles', () => {
   });
 
   it('wraps around the last edge to the first', () => {
-    const p = wallProfiles([{ surface: ['roof 2', 'roof 3', 'floor', 'roof 1'] }], names, lengths);
+    const p = wallProfiles([ring(['roof 2', 'roof 3', 'floor', 'roof 1'])], names);
     expect(p.map((w) => w.parts.map((q) => q.surface))).toEqual([[0, 1, 2]]);
   });
 
   it('skips parts with a gap, split over shapes, or not one run', () => {
-    expect(wallProfiles([{ surface: ['roof 1', 'floor', 'roof 2', 'roof 3'] }], names, lengths)).toEqual([]);
-    expect(wallProfiles([{ surface: ['roof 1', 'roof 2'] }, { surface: ['roof 3', 'floor'] }], names, lengths)).toEqual(
-      [],
-    );
-    expect(wallProfiles([{ surface: ['roof 1', 'roof 2', 'roof 1', 'roof 3', 'floor'] }], names, lengths)).toEqual([]);
-    expect(wallProfiles([{ surface: ['a 1', 'a 3', 'x'] }], ['a 1', 'a 3', 'x'], [1, 1, 1])).toEqual([]);
+    expect(wallProfiles([ring(['roof 1', 'floor', 'roof 2', 'roof 3'])], names)).toEqual([]);
+    expect(wallProfiles([ring(['roof 1', 'roof 2', 'x']), ring(['roof 3', 'floor', 'y'])], names)).toEqual([]);
+    expect(wallProfiles([ring(['roof 1', 'roof 2', 'roof 1', 'roof 3', 'floor'])], names)).toEqual([]);
+    expect(wallProfiles([ring(['a 1', 'a 3', 'x'])], ['a 1', 'a 3', 'x'])).toEqual([]);
   });
 });
 

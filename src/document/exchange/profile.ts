@@ -60,10 +60,87 @@ const names = (shape: Shape): string[] =>
     ? new Array<string>(shape.circle ? 1 : shape.points.length).fill(shape.surface)
     : shape.surface;
 
+/** One piece of a profile: a surface, its place (degrees from +x, or distance along the wall to its middle) and length. */
+export interface ProfilePiece {
+  surface: string;
+  at: number;
+  /** File units. */
+  length: number;
+}
+
+export interface ProfilePieces {
+  along: 'angle' | 'position';
+  /** File shape number (from 0). */
+  shape: number;
+  pieces: ProfilePiece[];
+}
+
 /**
- * The profile of surface `name` (or of its parts) on the first shape that has
- * it; `flux` gives each surface's net flux in W/m^2. A message when no shape
- * has it, when its pieces are fewer than two surfaces, or when a piece has no flux.
+ * The pieces of surface `name` (or of its parts) in order around their circle or
+ * along their wall, with their places; or why they make no profile. A wall's
+ * parts must be one run of consecutive edges of one shape (it may wrap past the
+ * closing edge), each part a run of its own; numbered parts running against
+ * the edges are read from part 1, so positions start where part 1 does.
+ */
+export function profilePieces(shapes: readonly Shape[], name: string): ProfilePieces | { problem: string } {
+  const holds = (sh: Shape) => names(sh).some((n) => partOf(n, name, !!sh.circle));
+  const s = shapes.findIndex(holds);
+  if (s < 0) return { problem: `no surface "${name}" (nor parts "${name} 1", "${name} 2"...) in the sketch` };
+  if (shapes.some((sh, k) => k !== s && holds(sh)))
+    return { problem: `the parts of "${name}" lie on more than one shape: a profile runs along one wall or one tube` };
+  const shape = shapes[s];
+  const all = names(shape);
+  let pieces: ProfilePiece[] = [];
+  if (shape.circle) {
+    const step = 360 / all.length;
+    const length = (2 * Math.PI * shape.circle.radius) / all.length;
+    all.forEach((n, k) => {
+      if (partOf(n, name, true)) pieces.push({ surface: n, at: (k + 0.5) * step, length });
+    });
+  } else {
+    const m = all.length;
+    const on = all.map((n) => partOf(n, name, false));
+    const starts = on.flatMap((v, k) => (v && !on[(k + m - 1) % m] ? [k] : []));
+    if (starts.length > 1) return { problem: `the parts of "${name}" are not one run of consecutive edges` };
+    // Every edge on (a closed outline all of one wall): start where one part meets the next.
+    const first =
+      starts[0] ??
+      Math.max(
+        0,
+        all.findIndex((n, k) => n !== all[(k + m - 1) % m]),
+      );
+    for (let step = 0; step < m && on[(first + step) % m]; step++) {
+      const k = (first + step) % m;
+      const a = shape.points[k];
+      const b = shape.points[(k + 1) % m];
+      const length = Math.hypot(b[0] - a[0], b[1] - a[1]);
+      const last = pieces[pieces.length - 1];
+      if (last?.surface === all[k]) last.length += length;
+      else pieces.push({ surface: all[k], at: 0, length });
+    }
+    if (new Set(pieces.map((p) => p.surface)).size !== pieces.length)
+      return { problem: `a part of "${name}" is not one run of consecutive edges` };
+    // Numbered parts must run in order along the edges, one way or the other; read them from part 1.
+    const numbers = pieces.map((p) => (p.surface === name ? NaN : Number(p.surface.slice(name.length + 1))));
+    const rising = numbers.every((v, k) => k === 0 || v > numbers[k - 1]);
+    const falling = numbers.every((v, k) => k === 0 || v < numbers[k - 1]);
+    if (pieces.length > 1 && !rising && !falling && numbers.every((v) => !Number.isNaN(v)))
+      return { problem: `the parts of "${name}" are not numbered in order along the wall` };
+    if (pieces.length > 1 && falling) pieces = pieces.reverse();
+    let along = 0;
+    for (const p of pieces) {
+      p.at = along + p.length / 2;
+      along += p.length;
+    }
+  }
+  return { along: shape.circle ? 'angle' : 'position', shape: s, pieces };
+}
+
+/**
+ * The profile of surface `name` (or of its parts) on the shape that has it;
+ * `flux` gives each surface's net flux in W/m^2. A message when no shape has
+ * it, when its pieces are fewer than two surfaces or do not follow one another,
+ * or when a piece has no flux.
  */
 export function surfaceProfile(
   shapes: readonly Shape[],
@@ -71,29 +148,9 @@ export function surfaceProfile(
   flux: (surface: string) => number | undefined,
   temperatures?: (surface: string) => ProfileTemperatures | undefined,
 ): Profile | { problem: string } {
-  const s = shapes.findIndex((sh) => names(sh).some((n) => partOf(n, name, !!sh.circle)));
-  if (s < 0) return { problem: `no surface "${name}" (nor parts "${name} 1", "${name} 2"...) in the sketch` };
-  const shape = shapes[s];
-  const all = names(shape);
-  const rows: ProfileRow[] = [];
-  if (shape.circle) {
-    const step = 360 / all.length;
-    const length = (2 * Math.PI * shape.circle.radius) / all.length;
-    all.forEach((n, k) => {
-      if (partOf(n, name, true)) rows.push({ at: (k + 0.5) * step, length, surface: n, flux: NaN });
-    });
-  } else {
-    let along = 0;
-    all.forEach((n, k) => {
-      const a = shape.points[k];
-      const b = shape.points[(k + 1) % shape.points.length];
-      const length = Math.hypot(b[0] - a[0], b[1] - a[1]);
-      if (partOf(n, name, false)) {
-        rows.push({ at: along + length / 2, length, surface: n, flux: NaN });
-        along += length;
-      }
-    });
-  }
+  const found = profilePieces(shapes, name);
+  if ('problem' in found) return found;
+  const rows: ProfileRow[] = found.pieces.map((p) => ({ ...p, flux: NaN }));
   // One surface over several edges has one flux: no profile to show.
   if (new Set(rows.map((r) => r.surface)).size < 2)
     return {
@@ -124,8 +181,8 @@ export function surfaceProfile(
   const average = weighted / total;
   const ratio = average !== 0 && Math.sign(average) === Math.sign(peak.flux) ? peak.flux / average : null;
   return {
-    along: shape.circle ? 'angle' : 'position',
-    shape: s,
+    along: found.along,
+    shape: found.shape,
     rows,
     peak: peak.flux,
     peakAt: peak.at,

@@ -114,7 +114,7 @@ export function reportHtml({ source, sketch, names, factors, exchange }: ReportI
       conditions: solved.conditions,
       result: solved.result,
     };
-    heat = exchangeSection(ex, wallProfiles(sketch.shapes, names, factors.surfaceLength));
+    heat = exchangeSection(ex, wallProfiles(sketch.shapes, names));
   } else if (outcome && !outcome.ok) {
     heat = {
       main: `<section class="exchange failed"><h2>Heat exchange</h2><p><strong>No results:</strong> ${escapeMarkup(outcome.message)}</p></section>`,

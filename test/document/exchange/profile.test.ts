@@ -79,6 +79,52 @@ describe('flux profile', () => {
     expect(surfaceProfile([tube], 't', () => undefined)).toEqual({ problem: 'no net flux for surface "t 1"' });
   });
 
+  it('wall parts that wrap past the closing edge, or run against the edges, are read from part 1', () => {
+    // Unit square, edges bottom, right, top, left: "w 1" on the left edge, then w 2 bottom, w 3 right.
+    const square = (surface: string[]): ShapeV1 => ({
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [1, 0],
+        [1, 1],
+        [0, 1],
+      ],
+      surface,
+    });
+    const one = () => 1;
+    const wrapped = ok(surfaceProfile([square(['w 2', 'w 3', 'top', 'w 1'])], 'w', one));
+    expect(wrapped.rows.map((r) => [r.surface, r.at])).toEqual([
+      ['w 1', 0.5],
+      ['w 2', 1.5],
+      ['w 3', 2.5],
+    ]);
+    const backward = ok(surfaceProfile([square(['w 3', 'w 2', 'w 1', 'top'])], 'w', one));
+    expect(backward.rows.map((r) => r.surface)).toEqual(['w 1', 'w 2', 'w 3']);
+    // A part made of two edges is one row, its middle halfway along both.
+    const long = ok(surfaceProfile([square(['w 1', 'w 2', 'w 2', 'top'])], 'w', one));
+    expect(long.rows.map((r) => [r.surface, r.at, r.length])).toEqual([
+      ['w 1', 0.5, 1],
+      ['w 2', 2, 2],
+    ]);
+  });
+
+  it('refuses parts out of order, not one run, or on two shapes, saying which', () => {
+    const problem = (p: Profile | { problem: string }) => ('problem' in p ? p.problem : '');
+    const square = (surface: string[]): ShapeV1 => ({ ...box, points: box.points.slice(0, 4), surface });
+    expect(problem(surfaceProfile([square(['w 1', 'w 3', 'w 2', 'top'])], 'w', () => 1))).toMatch(
+      /not numbered in order/,
+    );
+    expect(problem(surfaceProfile([square(['w 1', 'top', 'w 2', 'left'])], 'w', () => 1))).toMatch(
+      /not one run of consecutive edges/,
+    );
+    expect(problem(surfaceProfile([square(['w 1', 'w 2', 'w 1', 'top'])], 'w', () => 1))).toMatch(
+      /a part of "w" is not one run/,
+    );
+    expect(
+      problem(surfaceProfile([square(['w 1', 'a', 'b', 'c']), square(['w 2', 'd', 'e', 'f'])], 'w', () => 1)),
+    ).toMatch(/more than one shape/);
+  });
+
   it('CSV: angle or position against net flux, one row per piece', () => {
     const rows = Papa.parse<string[]>(profileCsv(ok(surfaceProfile([tube], 't', of)), 'm').trim()).data;
     expect(rows[0]).toEqual(['angle from +x anticlockwise (deg)', 'surface', 'length (m)', 'net flux (W/m^2)']);
