@@ -1,6 +1,7 @@
 // The picture of a sketch as SVG text, a pure function of its shapes, names and
 // colours, so the app (SVG and PNG export, the report) and the command line
 // (the report) draw the same picture. Sketch y points up; SVG y points down.
+import { signedArea2 } from '../../core/edges';
 import { plainName } from '../labels';
 import type { Units } from '../units';
 import { escapeMarkup } from './escape';
@@ -35,7 +36,8 @@ function drawn(shape: PictureShape, units: string): Drawn {
   const c = shape.circle;
   if (!c) {
     const pts = shape.points;
-    const area = signedArea(pts);
+    // Twice the signed area (y up): positive when the points run anticlockwise.
+    const area = signedArea2(pts.flat());
     // Left of a -> b is inside when the points run anticlockwise; enclosures radiate inwards, solids outwards.
     const side = (area > 0 ? 1 : -1) * (shape.kind === 'enclosure' ? 1 : -1);
     const anchors: Drawn['anchors'] = [];
@@ -115,17 +117,6 @@ function short(x: number): string {
 }
 
 const px = (v: number) => String(Math.round(v * 100) / 100);
-
-/** Signed area (y up): positive when the points run anticlockwise. */
-function signedArea(points: PictureShape['points']): number {
-  let a = 0;
-  for (let k = 0; k < points.length; k++) {
-    const [x0, y0] = points[k];
-    const [x1, y1] = points[(k + 1) % points.length];
-    a += x0 * y1 - x1 * y0;
-  }
-  return a / 2;
-}
 
 /** The sketch as a standalone SVG document (UTF-8 text, no external references). */
 export function sketchSvg(picture: SketchPicture): string {
