@@ -40,7 +40,18 @@ export const magnitude = fc.oneof(
 export const signed = fc.tuple(magnitude, fc.boolean()).map(([m, negative]) => (negative ? -m : m));
 const anyValue = fc.oneof(magnitude, signed, fc.constantFrom(0, -0));
 
-export const NAMES = ['wall', 'roof', 'floor', 'constructor', 'toString', 'hasOwnProperty', 'valueOf', 'é', '0'];
+export const NAMES = [
+  'wall',
+  'roof',
+  'floor',
+  '__proto__',
+  'constructor',
+  'toString',
+  'hasOwnProperty',
+  'valueOf',
+  'é',
+  '0',
+];
 
 /** An axis-aligned rectangle or a triangle, as points, scaled and shifted. */
 function outline(cx: number, cy: number, w: number, h: number, triangle: boolean): [number, number][] {
@@ -97,7 +108,7 @@ export const sketchFile = fc
       : fc.constant(0),
     wallNames: fc.array(fc.constantFrom(...NAMES), { minLength: 4, maxLength: 4 }),
     bodies: fc.array(body, { maxLength: 3 }),
-    props: fc.dictionary(fc.constantFrom(...NAMES), properties, { maxKeys: 4 }),
+    props: fc.uniqueArray(fc.tuple(fc.constantFrom(...NAMES), properties), { selector: (t) => t[0], maxLength: 4 }),
     settings: fc.option(
       fc.record({ surroundingsTemperature: field(200, 2500), depth: field(0.01, 100) }, { requiredKeys: [] }),
       { nil: undefined },
@@ -118,8 +129,8 @@ export const sketchFile = fc
         surface: b.name,
       })),
     ];
-    // dictionary() builds a plain object; copy it so a name like "constructor" is an own key.
-    const surfaces = Object.fromEntries(Object.entries(props));
+    // fromEntries defines own keys, so "__proto__" is a surface name like "constructor", not the prototype.
+    const surfaces = Object.fromEntries(props);
     return { version: 1, units, shapes, surfaces, ...(settings ? { settings } : {}) };
   });
 

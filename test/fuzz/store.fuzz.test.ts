@@ -18,7 +18,18 @@ import { edgeNames } from '../../src/state/geometry/polygon';
 import { viewFactorApi } from '../../src/worker/api';
 import type { AppStore } from '../../src/state/store';
 import { MemoryStorage } from '../state/memoryStorage';
-import { FUZZ_TIMEOUT, magnitude, mutateText, runs, seed, signed, sketchFile, textMutation } from './arbitraries';
+import { renameSurface } from '../../src/state/edits/surfaceEdits';
+import {
+  FUZZ_TIMEOUT,
+  NAMES,
+  magnitude,
+  mutateText,
+  runs,
+  seed,
+  signed,
+  sketchFile,
+  textMutation,
+} from './arbitraries';
 import { expectInvariants, expectMessage, nonFinite } from './checks';
 
 const edit = fc.oneof(
@@ -27,6 +38,7 @@ const edit = fc.oneof(
   fc.record({ op: fc.constant('flux' as const), edge: fc.nat(), value: signed }),
   fc.record({ op: fc.constant('surroundings' as const), value: magnitude }),
   fc.record({ op: fc.constant('depth' as const), value: magnitude }),
+  fc.record({ op: fc.constant('rename' as const), edge: fc.nat(), to: fc.constantFrom(...NAMES) }),
   fc.record({
     op: fc.constant('move' as const),
     shape: fc.nat(3),
@@ -44,6 +56,8 @@ function apply(store: AppStore, e: Edit): void {
   if (e.op === 'flux') s.edit((d) => setCondition(d, name, { kind: 'heatFlux', heatFlux: e.value }));
   if (e.op === 'surroundings') s.edit((d) => setSettings(d, { surroundingsTemperature: e.value }));
   if (e.op === 'depth') s.edit((d) => setSettings(d, { depth: e.value }));
+  // Names such as "__proto__" and "constructor" are plain names: renaming onto one merges as any other.
+  if (e.op === 'rename') s.edit((d) => renameSurface(d, name, e.to));
   if (e.op === 'move' && s.doc.shapes[e.shape])
     s.edit((d) => moveSelection(d, [{ type: 'shape', shape: e.shape }], e.dx, 0));
 }
