@@ -15,6 +15,7 @@ import {
   type Sketch,
   type SketchFileV1,
   type SurfaceProperties,
+  type TubeRow,
 } from './schema';
 
 export interface Normalised {
@@ -83,11 +84,14 @@ export function normalise(file: SketchFileV1): Normalised {
         );
       }
     }
-    return {
+    const kept: Shape = {
       kind: shape.kind,
       points: keep.map((k): Point => [shape.points[k][0], shape.points[k][1]]),
       surface: keep.map((k) => names[k] ?? names[names.length - 1] ?? ''),
     };
+    // A polygon never belongs to a row, but its tag is kept so the row check can say so.
+    if (shape.row !== undefined) kept.row = shape.row;
+    return kept;
   });
 
   const surfaces: Record<string, SurfaceProperties> = {};
@@ -128,7 +132,17 @@ export function normalise(file: SketchFileV1): Normalised {
     surfaces,
     settings: { ...(file.settings ?? {}) },
   };
+  if (file.rows !== undefined)
+    sketch.rows = Object.fromEntries(Object.entries(file.rows).map(([n, r]) => [n, copyRow(r)]));
   return { sketch, fileIndex, filePointCount, errors, warnings };
+}
+
+function copyRow(row: TubeRow): TubeRow {
+  const from =
+    'wall' in row.from
+      ? { ...row.from }
+      : { start: [row.from.start[0], row.from.start[1]] as Point, angle: row.from.angle };
+  return { ...row, from };
 }
 
 /** The file's edges (shape, edge from 0) that carry surface `name`. */

@@ -14,6 +14,7 @@ import { migrate } from './migrate';
 import { normalise } from './normalise';
 import { mergePlaces, problemAt, type SketchProblem } from './problems';
 import { sketchFileSchemaV1, type Sketch, type SketchFileV1 } from './schema';
+import { rowProblems } from './rows/check';
 import { schemaProblem } from './zodMessages';
 import { unknownFieldWarnings } from './unknownFields';
 
@@ -97,15 +98,17 @@ function readFormat(input: unknown): FormatRead {
   const limit = edgeLimitProblem(doc.shapes);
   if (limit) return refuse([limit]);
 
-  const surfaces = doc.surfaces;
-  if (surfaces !== null && typeof surfaces === 'object' && Object.hasOwn(surfaces, '__proto__')) {
-    // The schema would silently drop this key; say so instead.
-    return refuse([
-      problemAt(
-        'schema',
-        `surfaces: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`,
-      ),
-    ]);
+  for (const field of ['surfaces', 'rows'] as const) {
+    const record = doc[field];
+    if (record !== null && typeof record === 'object' && Object.hasOwn(record, '__proto__')) {
+      // The schema would silently drop this key; say so instead.
+      return refuse([
+        problemAt(
+          'schema',
+          `${field}: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`,
+        ),
+      ]);
+    }
   }
   const parsed = sketchFileSchemaV1.safeParse(doc, { reportInput: true });
   if (!parsed.success) return refuse(parsed.error.issues.map((issue) => schemaProblem(issue, doc)));
@@ -119,6 +122,9 @@ function checkSketch(doc: SketchFileV1): SketchCheck {
   const normalised = normalise(doc);
   if (normalised.errors.length > 0) return { ok: false, problems: normalised.errors };
   const { sketch, fileIndex, filePointCount } = normalised;
+
+  const rows = rowProblems(sketch.shapes, doc);
+  if (rows.length > 0) return { ok: false, problems: rows };
 
   const { polygons, circles } = splitShapes(sketch.shapes);
   const polygonInputs: PolygonInput[] = polygons.map((p) => p.polygon);
