@@ -4,6 +4,7 @@
 // anticlockwise from +x.
 import type { Point, ShapeV1, TubeRow } from '../schema';
 import { formatNumber, quoteName } from '../labels';
+import { MAX_ROW_TUBES } from './limits';
 
 /** A shape as the file or the app holds it (one surface name or one per edge). */
 export type RowShape = Pick<ShapeV1, 'kind' | 'points' | 'circle' | 'surface' | 'row'>;
@@ -108,10 +109,21 @@ export function findWall(
   return { ok: true, wall: { origin, along, length: hi - lo, into } };
 }
 
-/** The rules on a row's own numbers, whatever the drawing: tubes apart. */
+/**
+ * The rules on a row's own numbers, whatever the drawing: a whole count within
+ * the limit, positive finite lengths, tubes apart. (A file's schema checks the
+ * ranges too; the app checks typed numbers here.)
+ */
 export function rowNumbersProblem(row: TubeRow): string | null {
-  if (row.count > 1 && !(row.pitch > row.diameter))
-    return `the pitch (${formatNumber(row.pitch)}) must be greater than the diameter (${formatNumber(row.diameter)}), or the tubes overlap`;
+  const { count, diameter, pitch, from } = row;
+  if (!Number.isInteger(count) || count < 1 || count > MAX_ROW_TUBES)
+    return `the number of tubes must be a whole number from 1 to ${MAX_ROW_TUBES}`;
+  if (!(diameter > 0) || !Number.isFinite(diameter)) return 'the diameter must be a finite number greater than 0';
+  if (!(pitch > 0) || !Number.isFinite(pitch)) return 'the pitch must be a finite number greater than 0';
+  const place = 'wall' in from ? [from.distance] : [...from.start, from.angle];
+  if (!place.every(Number.isFinite)) return "the row's place must be given by finite numbers";
+  if (count > 1 && !(pitch > diameter))
+    return `the pitch (${formatNumber(pitch)}) must be greater than the diameter (${formatNumber(diameter)}), or the tubes overlap`;
   return null;
 }
 
@@ -134,7 +146,7 @@ export function rowCentres(shapes: readonly RowShape[], row: TubeRow): RowCentre
     if (!(from.distance > diameter / 2))
       return {
         ok: false,
-        problem: `the distance from the wall ${quoteName(from.wall)} (${formatNumber(from.distance)}) must be more than the tubes' radius (${formatNumber(diameter / 2)}), or the tubes cross the wall`,
+        problem: `the distance from the wall ${quoteName(from.wall)} (${formatNumber(from.distance)}) must be more than the radius of the tubes (${formatNumber(diameter / 2)}), or the tubes cross the wall`,
       };
     const span = (count - 1) * pitch + diameter;
     if (!(span < length))
