@@ -2,7 +2,7 @@
 // derived from it. Version 2 is version 1 plus the surface balance's fields
 // (wall, tube, linked, convectionCoefficient, settings.gasTemperature); older
 // files are migrated (migrate.ts) before this schema reads them. Every node carries its rule as a short message, which the
-// reader prefixes with where it applies ("shape 2 (solid 'block'): point 4 x
+// reader prefixes with where it applies ("'block' (body, shape 2): point 4 x
 // must be a finite number").
 import { z } from 'zod';
 import { MAX_NAME_LENGTH } from './limits';
