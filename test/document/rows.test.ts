@@ -176,7 +176,7 @@ describe('tube rows refused on reading, naming the row', () => {
     const crossing = good();
     crossing.rows = { 'row 1': { ...fromRoof, from: { wall: 'roof', distance: 0.1 } } };
     expect(messages(crossing)).toEqual([
-      `row 'row 1': the distance from the wall 'roof' (0.1) must be more than the tubes' radius (0.1), or the tubes cross the wall`,
+      `row 'row 1': the distance from the wall 'roof' (0.1) must be more than the radius of the tubes (0.1), or the tubes cross the wall`,
     ]);
     const wide = good();
     wide.rows = { 'row 1': { ...fromRoof, pitch: 2 } };
@@ -190,6 +190,18 @@ describe('tube rows refused on reading, naming the row', () => {
     expect(messages(bent)).toEqual([
       `row 'row 1': the wall 'walls' is not straight (its edges do not lie on one line)`,
     ]);
+  });
+
+  it('a reserved row name is refused, an unknown field in a row is a warning', () => {
+    const reserved = good();
+    (reserved as { rows: unknown }).rows = JSON.parse(`{"__proto__": ${JSON.stringify(fromRoof)}}`) as unknown;
+    expect(messages(reserved)).toEqual([
+      `rows: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`,
+    ]);
+    const extra = good();
+    (extra.rows!['row 1'] as Record<string, unknown>).spacing = 0.5;
+    const read = restore(extra);
+    expect(read.ok && read.warnings).toEqual([`row 'row 1': ignored unknown field 'spacing'`]);
   });
 
   it('numbers out of range: count, diameter, pitch, the place', () => {
