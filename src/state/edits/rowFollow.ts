@@ -5,8 +5,8 @@
 // - the row's tubes were moved together (a row placed from a start point): the start moves with them;
 // - some tubes were moved, flipped or deleted on their own: the row is split
 //   into single tubes (they stay where the user put them); all deleted: the row goes.
-// Anything else (a wall moved so the row no longer fits) is left for the
-// sketch's problems to say.
+// Anything else (a wall moved so the row no longer fits, a row that was out of
+// step before the edit) is left for the sketch's problems to say.
 import { buildRow, findWall, rowCentres, rowTubes, splitRow, tidy, type TubeRow } from '../../document/rows';
 import type { SketchFile, Shape } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
@@ -80,6 +80,8 @@ export function keepRows(before: SketchFile, after: SketchFile): SketchFile {
   for (const [name, row] of Object.entries(after.rows)) {
     const now = circlesOf(doc, name);
     const was = circlesOf(before, name);
+    // A row already out of step (a draft as opened) is left for its problem message to explain.
+    if (!fitsRow(before, row, was)) continue;
     let current = row;
     if ('wall' in row.from) {
       const renamed = renamedWall(before, doc, row.from.wall);

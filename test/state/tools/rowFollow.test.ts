@@ -110,3 +110,16 @@ describe('a draft with a row is saved with its row', () => {
     expect(back.shapes.filter((t) => t.row === 'row 1')).toHaveLength(3);
   });
 });
+
+describe('a row already out of step', () => {
+  it('is not rebuilt behind the user when something else is edited', () => {
+    const { s } = setup('wall');
+    const doc = s().doc;
+    // As opened from a file whose row says 0.35 while its tubes sit at 0.3.
+    const draft: SketchFile = { ...doc, rows: { 'row 1': { ...doc.rows!['row 1'], pitch: 0.35 } } };
+    s().commit(draft);
+    s().commit(renameSurface(s().doc, 'floor', 'hearth'));
+    expect(centres(s().doc)).toEqual(centres(doc));
+    expect(s().doc.rows).toBe(draft.rows);
+  });
+});
