@@ -114,7 +114,7 @@ export function normalise(file: SketchFileV1): Normalised {
     const onSolid = shapes.findIndex((shape) => shape.kind === 'solid' && shape.surface.includes(name));
     if (props.opening === true && onSolid >= 0) {
       warnings.push(
-        `surface ${quoteName(name)} is an opening but lies on a solid (shape ${onSolid + 1}); openings are gaps in the enclosure wall`,
+        `surface ${quoteName(name)} is an opening but lies on a solid, ${shapeLabel(onSolid, file.shapes[onSolid])}; openings are gaps in the enclosure wall`,
       );
     }
     if (!used.has(name)) warnings.push(`surface ${quoteName(name)} has properties but no edge uses that name`);

@@ -245,7 +245,7 @@ describe('restore repairs and warns', () => {
   it('warns about an opening on a solid (openings are gaps in the enclosure wall)', () => {
     const doc = { ...parsed(minimalText), surfaces: { block: { opening: true } } };
     expect(sketchOf(doc).warnings).toEqual([
-      "surface 'block' is an opening but lies on a solid (shape 2); openings are gaps in the enclosure wall",
+      "surface 'block' is an opening but lies on a solid, 'block' (body, shape 2); openings are gaps in the enclosure wall",
     ]);
   });
 });
