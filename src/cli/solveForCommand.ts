@@ -28,6 +28,7 @@ The value of one parameter, between A and B, at which a result of one surface
 equals VALUE.
   --vary SURFACE.PROPERTY   as for sweep: temperature, emissivity, heatFlux,
                             convectionCoefficient, x, y, radius of a surface,
+                            pitch, diameter, distance of a tube row,
                             or settings.surroundingsTemperature,
                             settings.gasTemperature, settings.depth
   --target SURFACE.QUANTITY=VALUE

@@ -35,7 +35,9 @@ from A to B (both included).
                             (W/m^2), convectionCoefficient (W/(m^2 K)) of a
                             surface; x, y (the centre of the shape's bounding
                             box, a circle's centre; file units) to move the
-                            shape SURFACE belongs to; radius of a circle; or
+                            shape SURFACE belongs to; radius of a circle;
+                            ROW.pitch, ROW.diameter, ROW.distance of a tube
+                            row (file units; its tubes are rebuilt); or
                             settings.surroundingsTemperature (K),
                             settings.gasTemperature (K), settings.depth (m).
                             Quote names with spaces.
@@ -47,7 +49,7 @@ from A to B (both included).
                             and temperature (K)
 Temperature and heat flux are varied only on a surface that has that
 condition in the file. Property and settings sweeps compute the view factors
-once; position sweeps compute them for every value. FILE '-' reads standard input.
+once; position and tube-row sweeps compute them for every value. FILE '-' reads standard input.
 ${STUDY_CAUTION}
 `;
 

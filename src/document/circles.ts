@@ -3,7 +3,7 @@
 import type { CircleFinding } from '../core/arc/circleChecks';
 import type { GeometryFinding } from '../core/sketchChecks';
 import type { CircleInput, PolygonInput } from '../core/scene';
-import { formatNumber, formatPoint, shapeLabel } from './labels';
+import { formatNumber, formatPoint, quoteName, shapeLabel } from './labels';
 import { MAX_COORDINATE, MIN_EDGE_LENGTH } from './limits';
 import { problemAt, type SketchProblem } from './problems';
 import type { Shape, ShapeV1 } from './schema';
@@ -39,7 +39,14 @@ export function normaliseCircle(
       ),
     );
   }
-  return { kind: shape.kind, points: [], circle: { center: [center[0], center[1]], radius }, surface: [...names] };
+  const read: Shape = {
+    kind: shape.kind,
+    points: [],
+    circle: { center: [center[0], center[1]], radius },
+    surface: [...names],
+  };
+  if (shape.row !== undefined) read.row = shape.row;
+  return read;
 }
 
 /** The core's input for a circle shape. */
@@ -106,7 +113,10 @@ export function circleProblem(
     case 'circle-contact': {
       const wall = shapes[f.otherShape].kind === 'enclosure';
       const edge = f.edge >= 0 ? fileIndex[f.otherShape][f.edge] : -1;
-      const other = wall ? `the enclosure wall (shape ${f.otherShape + 1})` : label(f.otherShape);
+      const wallName = f.edge >= 0 ? shapes[f.otherShape].surface[f.edge] : undefined;
+      const other = wall
+        ? `the enclosure wall${wallName ? ` ${quoteName(wallName)}` : ''} (shape ${f.otherShape + 1})`
+        : label(f.otherShape);
       const onEdge = edge >= 0 ? ` edge ${edge + 1}` : '';
       return problemAt(
         f.rule,

@@ -1,7 +1,8 @@
-// Messages for broken geometric rules, naming shapes, edges and points as
-// they are numbered in the file (from 1), also after repeated points were removed.
+// Messages for broken geometric rules, naming shapes as the canvas does (by
+// their surface names) with their numbers, edges and points as numbered in the
+// file (from 1), also after repeated points were removed.
 import type { GeometryFinding } from '../core/sketchChecks';
-import { formatPoint, shapeLabel } from './labels';
+import { formatPoint, quoteName, shapeLabel } from './labels';
 import type { ProblemPlace, SketchProblem } from './problems';
 import type { Shape } from './schema';
 
@@ -112,7 +113,9 @@ function formatContact(
     ? [f.otherShape, f.otherEdge, f.shape, f.edge]
     : [f.shape, f.edge, f.otherShape, f.otherEdge];
   if (ctx.shapes[os].kind === 'enclosure') {
-    return `${label(s)}: edge ${edge(s, e)} ${verb} the enclosure wall (shape ${os + 1}, edge ${edge(os, oe)}) ${where}; solids must lie inside the enclosure without touching it`;
+    const wall = ctx.shapes[os].surface[oe];
+    const named = wall ? ` ${quoteName(wall)}` : '';
+    return `${label(s)}: edge ${edge(s, e)} ${verb} the enclosure wall${named} (shape ${os + 1}, edge ${edge(os, oe)}) ${where}; solids must lie inside the enclosure without touching it`;
   }
   return `${label(s)}: edge ${edge(s, e)} ${verb} ${label(os)} edge ${edge(os, oe)} ${where}; solids must not overlap or touch`;
 }

@@ -13,6 +13,7 @@ export type {
   SketchSettings,
   SketchFileV1,
   ShapeV1,
+  TubeRow,
 } from './schema';
 export { UNITS, METRES_PER_UNIT, type Units } from './units';
 export {

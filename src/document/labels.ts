@@ -40,15 +40,25 @@ export function describeValue(value: unknown): string {
 }
 
 /**
- * "shape 2 (solid 'block')" from whatever the file holds for shape `index`
- * (0-based): kind and surface names when they are readable.
+ * A shape as the canvas and the tables name it, with its number in the file
+ * (counted from 1) as the place: "'tube 3' (body, shape 5)" for a shape that
+ * is one surface, "the enclosure (shape 1)" or "body 'a'/'b' (shape 2)" for one
+ * of several surfaces, and the row a tube belongs to ("…, row 'row 1'").
+ * Reads whatever the file holds for shape `index` (0-based).
  */
 export function shapeLabel(index: number, shape: unknown): string {
-  const s = (shape ?? {}) as { kind?: unknown; surface?: unknown };
-  const kind = s.kind === 'enclosure' || s.kind === 'solid' ? s.kind : '';
+  const s = (shape ?? {}) as { kind?: unknown; surface?: unknown; row?: unknown };
+  const kind = s.kind === 'enclosure' ? 'enclosure' : s.kind === 'solid' ? 'body' : '';
   const raw = typeof s.surface === 'string' ? [s.surface] : Array.isArray(s.surface) ? s.surface : [];
   const names = [...new Set(raw.filter((n): n is string => typeof n === 'string' && n !== ''))];
+  const row = typeof s.row === 'string' && s.row !== '' ? `, row ${quoteName(s.row)}` : '';
+  const place = `shape ${index + 1}${row}`;
+  if (names.length === 1) return `${quoteName(names[0])} (${kind ? `${kind}, ` : ''}${place})`;
+  if (names.length === 0) {
+    const detail = [kind, row.slice(2)].filter(Boolean).join(', ');
+    return detail ? `shape ${index + 1} (${detail})` : `shape ${index + 1}`;
+  }
+  if (kind === 'enclosure') return `the enclosure (${place})`;
   const shown = names.slice(0, 3).map(quoteName).join('/') + (names.length > 3 ? '/…' : '');
-  const detail = [kind, shown].filter(Boolean).join(' ');
-  return detail ? `shape ${index + 1} (${detail})` : `shape ${index + 1}`;
+  return `${kind || 'shape'} ${shown} (${place})`;
 }

@@ -16,6 +16,7 @@ import {
   type Sketch,
   type SketchFileV1,
   type SurfaceProperties,
+  type TubeRow,
 } from './schema';
 
 export interface Normalised {
@@ -84,11 +85,14 @@ export function normalise(file: SketchFileV1): Normalised {
         );
       }
     }
-    return {
+    const kept: Shape = {
       kind: shape.kind,
       points: keep.map((k): Point => [shape.points[k][0], shape.points[k][1]]),
       surface: keep.map((k) => names[k] ?? names[names.length - 1] ?? ''),
     };
+    // A polygon never belongs to a row, but its tag is kept so the row check can say so.
+    if (shape.row !== undefined) kept.row = shape.row;
+    return kept;
   });
 
   const surfaces: Record<string, SurfaceProperties> = {};
@@ -111,7 +115,7 @@ export function normalise(file: SketchFileV1): Normalised {
     const onSolid = shapes.findIndex((shape) => shape.kind === 'solid' && shape.surface.includes(name));
     if (props.opening === true && onSolid >= 0) {
       warnings.push(
-        `surface ${quoteName(name)} is an opening but lies on a solid (shape ${onSolid + 1}); openings are gaps in the enclosure wall`,
+        `surface ${quoteName(name)} is an opening but lies on a solid, ${shapeLabel(onSolid, file.shapes[onSolid])}; openings are gaps in the enclosure wall`,
       );
     }
     if (!used.has(name)) warnings.push(`surface ${quoteName(name)} has properties but no edge uses that name`);
@@ -129,7 +133,17 @@ export function normalise(file: SketchFileV1): Normalised {
     surfaces,
     settings: { ...(file.settings ?? {}) },
   };
+  if (file.rows !== undefined)
+    sketch.rows = Object.fromEntries(Object.entries(file.rows).map(([n, r]) => [n, copyRow(r)]));
   return { sketch, fileIndex, filePointCount, errors, warnings };
+}
+
+function copyRow(row: TubeRow): TubeRow {
+  const from =
+    'wall' in row.from
+      ? { ...row.from }
+      : { start: [row.from.start[0], row.from.start[1]] as Point, angle: row.from.angle };
+  return { ...row, from };
 }
 
 /** The file's edges (shape, edge from 0) that carry surface `name`. */

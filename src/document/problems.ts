@@ -29,6 +29,7 @@ export type ProblemKind =
   | 'coordinate-range'
   | 'edge-too-short'
   | 'conditions' // more than one thermal condition on a surface
+  | 'row' // a tube row whose tubes or numbers break its rules (rows/check.ts)
   | 'internal' // a fault of the program, still reported as a message
   | 'more'; // the last entry when there are too many: counts the rest, and its place covers them
 

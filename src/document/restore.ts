@@ -15,6 +15,7 @@ import { normalise } from './normalise';
 import { mergePlaces, problemAt, type SketchProblem } from './problems';
 import { parseSketchFile } from './plainKeys';
 import type { Sketch, SketchFileV1 } from './schema';
+import { rowProblems } from './rows/check';
 import { schemaProblem } from './zodMessages';
 import { unknownFieldWarnings } from './unknownFields';
 
@@ -98,6 +99,13 @@ function readFormat(input: unknown): FormatRead {
   const limit = edgeLimitProblem(doc.shapes);
   if (limit) return refuse([limit]);
 
+  const rows = doc.rows;
+  if (rows !== null && typeof rows === 'object' && Object.hasOwn(rows, '__proto__')) {
+    // Row names are keys the program writes with plain assignment; the schema would drop this one silently.
+    return refuse([
+      problemAt('schema', `rows: the name '__proto__' must not be "__proto__" (a reserved word); choose another name`),
+    ]);
+  }
   const parsed = parseSketchFile(doc);
   if (!parsed.success) return refuse(parsed.issues.map((issue) => schemaProblem(issue, doc)));
   return { ok: true, doc: parsed.data, warnings: unknownFieldWarnings(doc) };
@@ -110,6 +118,9 @@ function checkSketch(doc: SketchFileV1): SketchCheck {
   const normalised = normalise(doc);
   if (normalised.errors.length > 0) return { ok: false, problems: normalised.errors };
   const { sketch, fileIndex, filePointCount } = normalised;
+
+  const rows = rowProblems(sketch.shapes, doc);
+  if (rows.length > 0) return { ok: false, problems: rows };
 
   const { polygons, circles } = splitShapes(sketch.shapes);
   const polygonInputs: PolygonInput[] = polygons.map((p) => p.polygon);

@@ -2,7 +2,7 @@
 // derived from it. Version 2 is version 1 plus the surface balance's fields
 // (wall, tube, linked, convectionCoefficient, settings.gasTemperature); older
 // files are migrated (migrate.ts) before this schema reads them. Every node carries its rule as a short message, which the
-// reader prefixes with where it applies ("shape 2 (solid 'block'): point 4 x
+// reader prefixes with where it applies ("'block' (body, shape 2): point 4 x
 // must be a finite number").
 import { z } from 'zod';
 import { MAX_NAME_LENGTH } from './limits';
@@ -18,6 +18,7 @@ import {
   MIN_PROPERTY_LENGTH,
 } from './propertyLimits';
 import { UNITS } from './units';
+import { MAX_ROW_TUBES } from './rows/limits';
 
 /** The newest file version this program reads and the one it writes. */
 export const CURRENT_VERSION = 2;
@@ -30,6 +31,13 @@ export const surfaceNameSchema = z
   .string({ error: 'must be a surface name (text)' })
   .min(1, { error: 'must not be empty' })
   .max(MAX_NAME_LENGTH, { error: `must be at most ${MAX_NAME_LENGTH} characters` });
+
+/** A tube row's name (a key of `rows`). */
+export const rowNameSchema = z
+  .string({ error: 'must be a row name (text)' })
+  .min(1, { error: 'must not be empty' })
+  .max(MAX_NAME_LENGTH, { error: `must be at most ${MAX_NAME_LENGTH} characters` })
+  .refine((name) => name !== '__proto__', { error: 'must not be "__proto__" (a reserved word); choose another name' });
 
 /** An exact circle (version 2): centre [x, y] and radius in file units. */
 export const circleSchema = z.object(
@@ -62,6 +70,8 @@ export const shapeSchema = z.preprocess(
         surface: z.union([surfaceNameSchema, z.array(surfaceNameSchema)], {
           error: 'must be a surface name, or a list of names with one per edge',
         }),
+        /** The tube row this circle belongs to (a key of `rows`); its place and size follow the row's numbers. */
+        row: rowNameSchema.optional(),
       },
       { error: 'must be an object with kind, points (or circle) and surface' },
     )
@@ -193,6 +203,37 @@ export const surfacePropertiesSchema = z.object(
   { error: 'must be an object of properties (emissivity, temperature, ...)' },
 );
 
+const rowLength = z
+  .number({ error: 'must be a positive finite number (file units)' })
+  .gt(0, { error: 'must be greater than 0 (file units)' });
+
+/**
+ * A tube row: `count` round tubes of outer `diameter`, `pitch` centre to centre
+ * (file units), placed from a wall (the tubes' centre line `distance` from it,
+ * measured into the section, the row centred along the wall) or from the first
+ * tube's centre `start` along `angle` degrees anticlockwise from +x. The
+ * tubes are the circle shapes tagged with the row's name, in file order.
+ */
+export const rowSchema = z.object(
+  {
+    count: z
+      .number({ error: `must be a whole number from 1 to ${MAX_ROW_TUBES}` })
+      .int({ error: `must be a whole number from 1 to ${MAX_ROW_TUBES}` })
+      .gte(1, { error: `must be a whole number from 1 to ${MAX_ROW_TUBES}` })
+      .lte(MAX_ROW_TUBES, { error: `must be at most ${MAX_ROW_TUBES}` }),
+    diameter: rowLength,
+    pitch: rowLength,
+    from: z.union(
+      [
+        z.object({ wall: surfaceNameSchema, distance: z.number() }),
+        z.object({ start: pointSchema, angle: z.number() }),
+      ],
+      { error: 'must be {"wall": SURFACE, "distance": D} or {"start": [x, y], "angle": DEGREES}' },
+    ),
+  },
+  { error: 'must be an object with count, diameter, pitch and from' },
+);
+
 export const settingsSchema = z.object(
   {
     /** Temperature of the surroundings seen through openings and by open sketches, kelvin. */
@@ -213,6 +254,8 @@ export const sketchFileSchema = z.object({
     .record(surfaceNameSchema, surfacePropertiesSchema, { error: 'must be an object of surface names' })
     .optional(),
   settings: settingsSchema.optional(),
+  /** Tube rows by name; each row's tubes are the shapes tagged `"row": NAME`. */
+  rows: z.record(rowNameSchema, rowSchema, { error: 'must be an object of row names' }).optional(),
 });
 
 /** A file of the current version as written (surface may be one name or a list). */
@@ -232,6 +275,7 @@ export type SurfaceProperties = z.infer<typeof surfacePropertiesSchema>;
 export type WallProperties = z.infer<typeof wallSchema>;
 export type TubeProperties = z.infer<typeof tubeSchema>;
 export type SketchSettings = z.infer<typeof settingsSchema>;
+export type TubeRow = z.infer<typeof rowSchema>;
 export type ShapeKind = ShapeV1['kind'];
 export type { Units } from './units';
 

@@ -17,11 +17,12 @@ export function serialize(sketch: Sketch): string {
     const geometry = c
       ? `      "circle": { "center": [${num(c.center[0])}, ${num(c.center[1])}], "radius": ${num(c.radius)} },`
       : `      "points": ${points},`;
+    const row = shape.row === undefined ? '' : `,\n      "row": ${JSON.stringify(shape.row)}`;
     return [
       '    {',
       `      "kind": ${JSON.stringify(shape.kind)},`,
       geometry,
-      `      "surface": ${surface}`,
+      `      "surface": ${surface}${row}`,
       '    }',
     ].join('\n');
   });
@@ -35,6 +36,8 @@ export function serialize(sketch: Sketch): string {
     lines[lines.length - 1] += `,\n  "surfaces": ${indent(JSON.stringify(sketch.surfaces, null, 2))}`;
   if (Object.keys(sketch.settings).length > 0)
     lines[lines.length - 1] += `,\n  "settings": ${indent(JSON.stringify(sketch.settings, null, 2))}`;
+  if (sketch.rows && Object.keys(sketch.rows).length > 0)
+    lines[lines.length - 1] += `,\n  "rows": ${indent(JSON.stringify(sketch.rows, null, 2))}`;
   return `${lines.join('\n')}\n}\n`;
 }
 

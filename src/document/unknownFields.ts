@@ -3,6 +3,7 @@
 import { quoteName, shapeLabel } from './labels';
 import {
   circleSchema,
+  rowSchema,
   settingsSchema,
   surfacePropertiesSchema,
   tubeSchema,
@@ -10,8 +11,9 @@ import {
   wallSchema,
 } from './schema';
 
-const TOP = ['version', 'units', 'shapes', 'surfaces', 'settings'];
-const SHAPE = ['kind', 'points', 'circle', 'surface'];
+const TOP = ['version', 'units', 'shapes', 'surfaces', 'settings', 'rows'];
+const SHAPE = ['kind', 'points', 'circle', 'surface', 'row'];
+const ROW = Object.keys(rowSchema.shape);
 const CIRCLE = Object.keys(circleSchema.shape);
 // The known fields are the schema's own, so a new field is never reported as unknown.
 const SURFACE = Object.keys(surfacePropertiesSchema.shape);
@@ -45,5 +47,11 @@ export function unknownFieldWarnings(doc: Record<string, unknown>): string[] {
     layers.forEach((layer, k) => note(`surface ${quoteName(name)} wall layer ${k + 1}`, layer, LAYER));
   }
   note('settings', doc.settings, SETTINGS);
+  for (const [name, row] of Object.entries((doc.rows ?? {}) as Record<string, unknown>)) {
+    note(`row ${quoteName(name)}`, row, ROW);
+    // The schema passed: `from` is one of its two forms.
+    const from = (row as { from: object }).from;
+    note(`row ${quoteName(name)} from`, from, 'wall' in from ? ['wall', 'distance'] : ['start', 'angle']);
+  }
   return warnings;
 }

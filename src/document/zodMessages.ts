@@ -19,9 +19,9 @@ export function formatSchemaIssue(issue: z.core.$ZodIssue, file: unknown): strin
     input === undefined &&
     (issue.code === 'invalid_type' || issue.code === 'invalid_value' || issue.code === 'invalid_union');
   const what = missing ? `is missing; it ${issue.message}` : `${issue.message} (got ${describeReceived(issue, input)})`;
-  if (issue.code === 'invalid_key' && path[0] === 'surfaces') {
-    const rule = issue.issues[0]?.message ?? 'is not a valid surface name';
-    return `surfaces: the name ${quoteName(String(path[path.length - 1] ?? input))} ${rule}`;
+  if (issue.code === 'invalid_key' && (path[0] === 'surfaces' || path[0] === 'rows')) {
+    const rule = issue.issues[0]?.message ?? `is not a valid ${path[0] === 'rows' ? 'row' : 'surface'} name`;
+    return `${path[0]}: the name ${quoteName(String(path[path.length - 1] ?? input))} ${rule}`;
   }
   const { subject, field } = describePath(path, file);
   if (!field) return `${subject} ${what}`;
@@ -47,6 +47,8 @@ function describePath(path: PropertyKey[], file: unknown): { subject: string; fi
     return { subject: `surface ${quoteName(String(rest[0]))}`, field: fieldPath(rest.slice(1)) };
   }
   if (head === 'settings' && rest.length > 0) return { subject: 'settings', field: rest.map(String).join(' ') };
+  if (head === 'rows' && rest.length > 0)
+    return { subject: `row ${quoteName(String(rest[0]))}`, field: fieldPath(rest.slice(1)) };
   return { subject: [head, ...rest].map(String).join(' '), field: '' };
 }
 

@@ -9,7 +9,8 @@ import { toolRegistry, type ToolRegistry } from './tools/registry';
 import { snapPoint } from './geometry/snap';
 import { deleteShapes, deleteVertices, moveSelection } from './edits/shapeEdits';
 import { copyShapes, flipShapes, pasteShapes, repeatShapes } from './edits/shapeCopies';
-import { addTubeRow, type RowPlace, type RowSpec } from './edits/tubeRow';
+import { addTubeRow, editTubeRow, splitRow, type RowPlace, type RowSpec } from './edits/tubeRow';
+import type { TubeRow } from '../document/schema';
 
 export type { PointerInfo, PressAnswer } from './tools/tool';
 
@@ -193,6 +194,22 @@ export class CanvasController {
     s.commit(r.doc);
     this.selectShapes(r.added);
     return null;
+  }
+
+  /** Change row `name`'s numbers or place (one step): its tubes follow; the problem in words when it cannot be placed. */
+  editRow(name: string, row: TubeRow): string | null {
+    const s = this.store.getState();
+    const r = editTubeRow(s.doc, name, row);
+    if (!r.ok) return r.problem;
+    s.commit(r.doc);
+    this.selectShapes(r.added);
+    return null;
+  }
+
+  /** Split row `name` into single tubes (one step): the tubes stay, the row is forgotten. */
+  splitRow(name: string): void {
+    const s = this.store.getState();
+    s.commit(splitRow(s.doc, name));
   }
 
   /** True while a press is held that must end even if released outside the canvas (a drag). */

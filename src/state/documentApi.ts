@@ -58,6 +58,7 @@ function asWritten(doc: SketchFile): Sketch {
     shapes,
     surfaces: doc.surfaces ?? {},
     settings: doc.settings ?? {},
+    ...(doc.rows ? { rows: doc.rows } : {}),
   };
 }
 

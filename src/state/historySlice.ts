@@ -5,6 +5,7 @@ import type { StateCreator } from 'zustand';
 import type { SketchFile } from './sketchFile';
 import type { AppState } from './store';
 import { validPicks } from './selection';
+import { keepRows } from './edits/rowFollow';
 
 export const HISTORY_LIMIT = 200;
 
@@ -27,8 +28,10 @@ export const createHistorySlice: StateCreator<AppState, [], [], HistorySlice> = 
   past: [],
   future: [],
   gestureBase: null,
-  commit: (next) => {
+  commit: (proposed) => {
     const { doc, past, gestureBase } = get();
+    // Tube rows stay rows through other edits (their tubes follow a moved wall, etc.).
+    const next = keepRows(gestureBase ?? doc, proposed);
     if (gestureBase) {
       set({ doc: next });
       return;
@@ -40,7 +43,8 @@ export const createHistorySlice: StateCreator<AppState, [], [], HistorySlice> = 
     if (!get().gestureBase) set({ gestureBase: get().doc });
   },
   updateGesture: (next) => {
-    if (get().gestureBase) set({ doc: next });
+    const base = get().gestureBase;
+    if (base) set({ doc: keepRows(base, next) });
   },
   endGesture: () => {
     const { gestureBase, doc, past } = get();

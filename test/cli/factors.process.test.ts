@@ -80,7 +80,7 @@ describe('factors as a process', () => {
       '{"version": 1, "units": "m", "shapes": [{"kind": "solid", "points": [[0,0],[1,0]], "surface": "plate"}]}',
     );
     expect(bad.code).toBe(1);
-    expect(bad.err).toBe("factors: -: shape 1 (solid 'plate'): has 2 points; a shape needs at least 3\n");
+    expect(bad.err).toBe("factors: -: 'plate' (body, shape 1): has 2 points; a shape needs at least 3\n");
     const dir = cli(['factors', 'public']);
     expect(dir.code).toBe(1);
     expect(dir.err).toMatch(/^factors: cannot read 'public': it is a directory, not a file\n$/);

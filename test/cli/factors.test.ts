@@ -182,7 +182,7 @@ describe('factors --json', () => {
     const r = run(['factors', 'rep.json', '--json'], { 'rep.json': repeated });
     expect(json(r).surfaces.map((s) => s.name)).toEqual(['a', 'b', 'c']);
     expect(r.err).toBe(
-      "factors: rep.json: warning: shape 1 (enclosure 'a'/'gone'/'b'/…): removed point 2 (same as point 3), which made zero-length edges\n",
+      'factors: rep.json: warning: the enclosure (shape 1): removed point 2 (same as point 3), which made zero-length edges\n',
     );
   });
 });
@@ -282,7 +282,7 @@ describe('factors errors', () => {
             surface: 'bow',
           },
         ]),
-        /shape 1 \(solid 'bow'\): edge 2 crosses edge 4 at \(1, 1\)/,
+        /'bow' \(body, shape 1\): edge 2 crosses edge 4 at \(1, 1\)/,
       ],
       [
         sketch([
@@ -307,7 +307,7 @@ describe('factors errors', () => {
             surface: 'block',
           },
         ]),
-        /shape 2 \(solid 'block'\): edge 1 crosses the enclosure wall \(shape 1, edge 2\) at \(4, 0.5\)/,
+        /'block' \(body, shape 2\): edge 1 crosses the enclosure wall 'w' \(shape 1, edge 2\) at \(4, 0.5\)/,
       ],
       [
         sketch([
@@ -321,7 +321,7 @@ describe('factors errors', () => {
             surface: 'a',
           },
         ]),
-        /shape 1 \(solid 'a'\): point 2 y must be a finite number \(got "x"\)/,
+        /'a' \(body, shape 1\): point 2 y must be a finite number \(got "x"\)/,
       ],
       [sketch([], { units: 'yards' }), /units must be one of m, cm, mm, in, ft \(got "yards"\)/],
       [sketch([]), /the sketch has no shapes; nothing to compute/],

@@ -67,16 +67,16 @@ describe('circles in the sketch file', () => {
 
   it('refuses a bad radius, contact, a solid outside and two enclosures, naming the shape and the rule', () => {
     expect(messages(file(tube(1, 1, -1, 't')))).toEqual([
-      "shape 2 (solid 't'): circle radius must be a positive finite number (got -1)",
+      "'t' (body, shape 2): circle radius must be a positive finite number (got -1)",
     ]);
     expect(messages(file(tube(1, 0.1, 0.1, 't')))[0]).toMatch(
-      /^shape 2 \(solid 't'\): crosses, touches or overlaps the enclosure wall \(shape 1\) edge 1 near \(1, 0\)/,
+      /^'t' \(body, shape 2\): crosses, touches or overlaps the enclosure wall 'wall' \(shape 1\) edge 1 near \(1, 0\)/,
     );
     expect(messages(file(tube(1, 1, 0.2, 'a'), tube(1.4, 1, 0.2, 'b')))[0]).toMatch(
-      /^shape 2 \(solid 'a'\): crosses, touches or overlaps shape 3 \(solid 'b'\) near \(1\.2, 1\)/,
+      /^'a' \(body, shape 2\): crosses, touches or overlaps 'b' \(body, shape 3\) near \(1\.2, 1\)/,
     );
     expect(messages(file(tube(3, 1, 0.2, 'a')))).toEqual([
-      "shape 2 (solid 'a'): lies outside the enclosure (shape 1) at (3, 1); solids must be inside it",
+      "'a' (body, shape 2): lies outside the enclosure (shape 1) at (3, 1); solids must be inside it",
     ]);
     expect(messages(file({ kind: 'enclosure', circle: { center: [1, 1], radius: 0.3 }, surface: 's' }))).toEqual([
       'shapes 1 and 2 are both enclosures; a sketch has at most one (draw the others as solids)',

@@ -105,22 +105,22 @@ describe('restore refuses a bad version, units or structure', () => {
       'shape 2 must be an object with kind, points (or circle) and surface (got "block")',
     );
     expect(only(withShapes(enclosure, { kind: 'solid', surface: 'block' }))).toBe(
-      "shape 2 (solid 'block'): points is missing; it must be a list of points [[x, y], ...]",
+      "'block' (body, shape 2): points is missing; it must be a list of points [[x, y], ...]",
     );
     expect(only(withShapes(enclosure, { ...block, points: 'square' }))).toMatch(
-      /^shape 2 \(solid 'block'\): points must be a list of points/,
+      /^'block' \(body, shape 2\): points must be a list of points/,
     );
     expect(only(withShapes(enclosure, { ...block, surface: 5 }))).toBe(
-      'shape 2 (solid): surface must be a surface name, or a list of names with one per edge (got 5)',
+      'shape 2 (body): surface must be a surface name, or a list of names with one per edge (got 5)',
     );
     expect(only(withShapes(enclosure, { ...block, surface: undefined }))).toMatch(
-      /^shape 2 \(solid\): surface is missing/,
+      /^shape 2 \(body\): surface is missing/,
     );
     expect(only(withShapes({ ...enclosure, surface: ['floor', 'right', '', 'left'] }))).toMatch(
-      /^shape 1 .*: surface name of edge 3 must not be empty/,
+      /^the enclosure \(shape 1\): surface name of edge 3 must not be empty/,
     );
     expect(only(withShapes(enclosure, { ...block, points: [[1.75, 0.75], [2.25], [2.25, 1.25]] }))).toMatch(
-      /^shape 2 \(solid 'block'\): point 2 must be a pair of numbers \[x, y\]/,
+      /^'block' \(body, shape 2\): point 2 must be a pair of numbers \[x, y\]/,
     );
     expect(only({ ...minimal, surfaces: [] })).toMatch(/^surfaces must be an object of surface names/);
     expect(only({ ...minimal, settings: { depth: -2 } })).toBe('settings: depth must be greater than 0 (got -2)');
@@ -133,12 +133,12 @@ describe('restore refuses a bad version, units or structure', () => {
   });
   it('an unknown kind', () => {
     expect(only(withShapes(enclosure, { ...block, kind: 'tube' }))).toBe(
-      `shape 2 ('block'): kind must be "enclosure" or "solid" (got "tube")`,
+      `'block' (shape 2): kind must be "enclosure" or "solid" (got "tube")`,
     );
   });
   it('one name per edge: the list must match the edges', () => {
     expect(only(withShapes({ ...enclosure, surface: ['floor', 'right', 'roof'] }))).toBe(
-      "shape 1 (enclosure 'floor'/'right'/'roof'): surface lists 3 names for 4 edges; give one name per edge, or a single name for all",
+      'the enclosure (shape 1): surface lists 3 names for 4 edges; give one name per edge, or a single name for all',
     );
   });
 });
@@ -161,11 +161,11 @@ describe('restore refuses bad numbers', () => {
       ),
     );
     expect(errors).toEqual([
-      `shape 2 (solid 'block'): point 1 y must be a finite number (got "2")`,
-      "shape 2 (solid 'block'): point 2 x must be a finite number (got null)",
-      "shape 2 (solid 'block'): point 3 x must be a finite number (got NaN)",
-      "shape 2 (solid 'block'): point 4 y must be a finite number (got Infinity)",
-      "shape 2 (solid 'block'): point 5 y must be a finite number (got -Infinity)",
+      `'block' (body, shape 2): point 1 y must be a finite number (got "2")`,
+      "'block' (body, shape 2): point 2 x must be a finite number (got null)",
+      "'block' (body, shape 2): point 3 x must be a finite number (got NaN)",
+      "'block' (body, shape 2): point 4 y must be a finite number (got Infinity)",
+      "'block' (body, shape 2): point 5 y must be a finite number (got -Infinity)",
     ]);
     // Beyond five, the last line counts the rest.
     const many = errorsOf(withShapes(solid(Array.from({ length: 9 }, () => ['x', 0]))));
@@ -183,7 +183,7 @@ describe('restore refuses bad numbers', () => {
           ]),
         ),
       ),
-    ).toBe("shape 1 (solid 'a'): point 2 (1e+200, 0) is beyond ±1e+100; lengths would overflow");
+    ).toBe("'a' (body, shape 1): point 2 (1e+200, 0) is beyond ±1e+100; lengths would overflow");
     expect(
       only(
         withShapes(
@@ -208,7 +208,7 @@ describe('restore refuses bad numbers', () => {
         ),
       ),
     ).toBe(
-      "shape 1 (solid 'a'): edge 1 is 1e-200 m long, shorter than 1e-100: the sketch is too small to compute (below rounding)",
+      "'a' (body, shape 1): edge 1 is 1e-200 m long, shorter than 1e-100: the sketch is too small to compute (below rounding)",
     );
     // Features far below the rounding of their coordinates.
     expect(
@@ -222,7 +222,7 @@ describe('restore refuses bad numbers', () => {
         ),
       ),
     ).toMatch(
-      /^shape 1 \(solid 'a'\): edge 1 is 0\.0001\d* m long, too short for coordinates near 1000000000 \(below rounding/,
+      /^'a' \(body, shape 1\): edge 1 is 0\.0001\d* m long, too short for coordinates near 1000000000 \(below rounding/,
     );
     // ... and features that vanish entirely in rounding (1 + 1e-17 is 1) become repeated points.
     expect(
@@ -235,7 +235,7 @@ describe('restore refuses bad numbers', () => {
           ]),
         ),
       ),
-    ).toBe("shape 1 (solid 'a'): has 2 distinct (of 3 written) points; a shape needs at least 3");
+    ).toBe("'a' (body, shape 1): has 2 distinct (of 3 written) points; a shape needs at least 3");
   });
   it('surface properties out of range or not numbers', () => {
     expect(only(surfaceOf({ emissivity: 0 }))).toBe(
@@ -282,8 +282,8 @@ describe('restore refuses impossible geometry', () => {
           ),
         ),
       ),
-    ).toBe("shape 2 (solid 'block'): has 2 points; a shape needs at least 3");
-    expect(only(withShapes(solid([])))).toBe("shape 1 (solid 'a'): has 0 points; a shape needs at least 3");
+    ).toBe("'block' (body, shape 2): has 2 points; a shape needs at least 3");
+    expect(only(withShapes(solid([])))).toBe("'a' (body, shape 1): has 0 points; a shape needs at least 3");
     expect(
       only(
         withShapes(
@@ -294,7 +294,7 @@ describe('restore refuses impossible geometry', () => {
           ]),
         ),
       ),
-    ).toBe("shape 1 (solid 'a'): has 1 distinct (of 3 written) point; a shape needs at least 3");
+    ).toBe("'a' (body, shape 1): has 1 distinct (of 3 written) point; a shape needs at least 3");
   });
   it('all points on one line (zero area)', () => {
     expect(
@@ -312,7 +312,7 @@ describe('restore refuses impossible geometry', () => {
           ),
         ),
       ),
-    ).toBe("shape 2 (solid 'block'): all its points lie on one straight line (zero area)");
+    ).toBe("'block' (body, shape 2): all its points lie on one straight line (zero area)");
     // Exactly collinear in decimal, not in a naive floating-point determinant.
     expect(
       only(
@@ -342,7 +342,7 @@ describe('restore refuses impossible geometry', () => {
           ),
         ),
       ),
-    ).toBe("shape 2 (solid 'bow'): edge 2 crosses edge 4 at (1.5, 1); the outline must not cross or touch itself");
+    ).toBe("'bow' (body, shape 2): edge 2 crosses edge 4 at (1.5, 1); the outline must not cross or touch itself");
     expect(
       only(
         withShapes(
@@ -374,8 +374,8 @@ describe('restore refuses impossible geometry', () => {
         ),
       ),
     ).toEqual([
-      "shape 2 (solid 'block'): edge 1 crosses the enclosure wall (shape 1, edge 2) at (4, 0.5); solids must lie inside the enclosure without touching it",
-      "shape 2 (solid 'block'): edge 3 crosses the enclosure wall (shape 1, edge 2) at (4, 1); solids must lie inside the enclosure without touching it",
+      "'block' (body, shape 2): edge 1 crosses the enclosure wall 'right' (shape 1, edge 2) at (4, 0.5); solids must lie inside the enclosure without touching it",
+      "'block' (body, shape 2): edge 3 crosses the enclosure wall 'right' (shape 1, edge 2) at (4, 1); solids must lie inside the enclosure without touching it",
     ]);
     expect(
       only(
@@ -393,7 +393,7 @@ describe('restore refuses impossible geometry', () => {
         ),
       ),
     ).toBe(
-      "shape 2 (solid 'block'): edge 2 runs along the enclosure wall (shape 1, edge 2) from (4, 0.5) to (4, 1); solids must lie inside the enclosure without touching it",
+      "'block' (body, shape 2): edge 2 runs along the enclosure wall 'right' (shape 1, edge 2) from (4, 0.5) to (4, 1); solids must lie inside the enclosure without touching it",
     );
     expect(
       only(
@@ -409,7 +409,7 @@ describe('restore refuses impossible geometry', () => {
           ),
         ),
       ),
-    ).toBe("shape 2 (solid 'block'): lies outside the enclosure (point 1 at (5, 0.5)); solids must be inside it");
+    ).toBe("'block' (body, shape 2): lies outside the enclosure (point 1 at (5, 0.5)); solids must be inside it");
     expect(
       only(
         withShapes(
@@ -425,7 +425,7 @@ describe('restore refuses impossible geometry', () => {
           enclosure,
         ),
       ),
-    ).toMatch(/^shape 1 \(solid 'box'\): lies outside the enclosure/);
+    ).toMatch(/^'box' \(body, shape 1\): lies outside the enclosure/);
   });
   it('solids that overlap, touch along an edge, or lie one inside the other', () => {
     const a = solid(
@@ -454,7 +454,7 @@ describe('restore refuses impossible geometry', () => {
         ),
       )[0],
     ).toBe(
-      "shape 3 (solid 'b'): edge 1 crosses shape 2 (solid 'a') edge 2 at (2, 1); solids must not overlap or touch",
+      "'b' (body, shape 3): edge 1 crosses 'a' (body, shape 2) edge 2 at (2, 1); solids must not overlap or touch",
     );
     expect(
       only(
@@ -473,7 +473,7 @@ describe('restore refuses impossible geometry', () => {
         ),
       ),
     ).toBe(
-      "shape 3 (solid 'b'): edge 4 runs along shape 2 (solid 'a') edge 2 from (2, 0.5) to (2, 1.5); solids must not overlap or touch",
+      "'b' (body, shape 3): edge 4 runs along 'a' (body, shape 2) edge 2 from (2, 0.5) to (2, 1.5); solids must not overlap or touch",
     );
     expect(
       only(
@@ -490,7 +490,7 @@ describe('restore refuses impossible geometry', () => {
           ),
         ),
       ),
-    ).toMatch(/^shape 3 \(solid 'b'\): edge \d touches shape 2 \(solid 'a'\) edge \d at \(2, 1.5\)/);
+    ).toMatch(/^'b' \(body, shape 3\): edge \d touches 'a' \(body, shape 2\) edge \d at \(2, 1.5\)/);
     expect(
       only(
         withShapes(
@@ -506,7 +506,7 @@ describe('restore refuses impossible geometry', () => {
           ),
         ),
       ),
-    ).toBe("shape 3 (solid 'b'): lies inside shape 2 (solid 'a') (point 1 at (1.2, 0.7)); solids must not overlap");
+    ).toBe("'b' (body, shape 3): lies inside 'a' (body, shape 2) (point 1 at (1.2, 0.7)); solids must not overlap");
   });
   it('more than one enclosure', () => {
     const second = {

@@ -215,7 +215,7 @@ describe('restore repairs and warns', () => {
     // Edge 2 (4,0)->(4,0) and edge 6 (0,0)->(0,0) had zero length; their names go with them.
     expect(sketch.shapes[0].surface).toEqual(['floor', 'right', 'roof', 'left']);
     expect(warnings).toEqual([
-      "shape 1 (enclosure 'floor'/'gap'/'right'/…): removed point 2 (same as point 3) and point 6 (same as point 1), which made zero-length edges",
+      'the enclosure (shape 1): removed point 2 (same as point 3) and point 6 (same as point 1), which made zero-length edges',
     ]);
   });
 
@@ -229,7 +229,7 @@ describe('restore repairs and warns', () => {
     doc.shapes[1].label = 'bar';
     expect(sketchOf(doc).warnings).toEqual([
       "the sketch: ignored unknown field 'colour'",
-      "shape 2 (solid 'block'): ignored unknown field 'label'",
+      "'block' (body, shape 2): ignored unknown field 'label'",
       "settings: ignored unknown field 'dpeth'",
       "surface 'flor' has properties but no edge uses that name",
     ]);
@@ -245,7 +245,7 @@ describe('restore repairs and warns', () => {
   it('warns about an opening on a solid (openings are gaps in the enclosure wall)', () => {
     const doc = { ...parsed(minimalText), surfaces: { block: { opening: true } } };
     expect(sketchOf(doc).warnings).toEqual([
-      "surface 'block' is an opening but lies on a solid (shape 2); openings are gaps in the enclosure wall",
+      "surface 'block' is an opening but lies on a solid, 'block' (body, shape 2); openings are gaps in the enclosure wall",
     ]);
   });
 });

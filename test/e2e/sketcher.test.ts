@@ -168,7 +168,7 @@ describe('sketcher in chromium', () => {
     await page.getByRole('button', { name: /^Select/ }).click();
     await dragOnCanvas(page, [1.0, 0.5], [1.0, 1.0], 3);
     await expect.poll(status).toBe('invalid');
-    expect(await page.locator('.canvas-status').innerText()).toMatch(/Geometry problem: shape 2/);
+    expect(await page.locator('.canvas-status').innerText()).toMatch(/Geometry problem: 'body 1' \(body, shape 2\)/);
     expect(await page.locator('[data-status]').innerText()).toMatch(/last valid sketch/);
     expect((await docOf()).shapes).toHaveLength(2);
     await page.keyboard.press('Control+z');

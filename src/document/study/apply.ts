@@ -1,6 +1,7 @@
 // A parameter's value written into a sketch: the edited sketch is the file a
 // person would get by changing that one number (or moving that one shape).
-import type { Sketch } from '../schema';
+import { buildRow } from '../rows/rebuild';
+import type { Sketch, TubeRow } from '../schema';
 import { shapesOfSurface, type StudyParameter } from './parameter';
 
 /**
@@ -11,6 +12,7 @@ import { shapesOfSurface, type StudyParameter } from './parameter';
  */
 export function withParameterValue(sketch: Sketch, p: StudyParameter, value: number): Sketch {
   if (p.kind === 'setting') return { ...sketch, settings: { ...sketch.settings, [p.setting]: value } };
+  if (p.kind === 'row') return withRowValue(sketch, p, value);
   if (p.kind === 'surface') {
     const own = Object.hasOwn(sketch.surfaces, p.surface) ? sketch.surfaces[p.surface] : {};
     return { ...sketch, surfaces: { ...sketch.surfaces, [p.surface]: { ...own, [p.property]: value } } };
@@ -42,11 +44,41 @@ export function parameterValue(sketch: Sketch, p: StudyParameter): number | unde
   if (p.kind === 'setting') return sketch.settings[p.setting];
   if (p.kind === 'surface')
     return Object.hasOwn(sketch.surfaces, p.surface) ? sketch.surfaces[p.surface][p.property] : undefined;
+  if (p.kind === 'row') {
+    const row = sketch.rows && Object.hasOwn(sketch.rows, p.row) ? sketch.rows[p.row] : undefined;
+    if (!row) return undefined;
+    if (p.measure === 'distance') return 'wall' in row.from ? row.from.distance : undefined;
+    return row[p.measure];
+  }
   const [index] = shapesOfSurface(sketch, p.surface);
   if (index === undefined) return undefined;
   const { circle, points } = sketch.shapes[index];
   if (circle) return p.measure === 'radius' ? circle.radius : circle.center[p.measure === 'y' ? 1 : 0];
   return p.measure === 'radius' ? undefined : boundingBoxCentre(points, p.measure === 'y' ? 1 : 0);
+}
+
+/**
+ * A row's number changed and its tubes rebuilt, as the app does when the row is
+ * edited (names and properties kept, tubes added or removed only by count). A
+ * value the row cannot take (tubes overlapping, crossing the wall) leaves the
+ * tubes as they were, so reading the edited sketch refuses it and says why.
+ */
+function withRowValue(sketch: Sketch, p: Extract<StudyParameter, { kind: 'row' }>, value: number): Sketch {
+  const rows = sketch.rows ?? {};
+  if (!Object.hasOwn(rows, p.row)) return sketch;
+  const old = rows[p.row];
+  const row: TubeRow =
+    p.measure === 'distance'
+      ? { ...old, from: 'wall' in old.from ? { ...old.from, distance: value } : old.from }
+      : { ...old, [p.measure]: value };
+  const built = buildRow(sketch, p.row, row);
+  if (!built.ok) return { ...sketch, rows: { ...rows, [p.row]: row } };
+  // Back to one surface name per edge (a new tube is written with one name).
+  const shapes = built.doc.shapes.map((s) => ({
+    ...s,
+    surface: typeof s.surface === 'string' ? [s.surface] : s.surface,
+  }));
+  return { ...sketch, shapes, surfaces: built.doc.surfaces ?? {}, rows: built.doc.rows };
 }
 
 /** Middle of the points' extent along one axis (0 = x, 1 = y), file units. */

@@ -4,6 +4,7 @@ export {
   QUANTITIES,
   QUANTITY_UNIT,
   SETTINGS,
+  ROW_MEASURES,
   SHAPE_MEASURES,
   SURFACE_PROPERTIES,
   describeParameter,

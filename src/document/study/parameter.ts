@@ -1,7 +1,8 @@
 // What a design study varies and what it aims at, addressed as the command
 // line writes them: `SURFACE.PROPERTY` (split on the last '.', so surface names
-// may hold dots and spaces), `settings.surroundingsTemperature`, `settings.depth`,
-// and `SURFACE.QUANTITY=VALUE` for a target (split on the last '=').
+// may hold dots and spaces), `ROW.pitch` / `.diameter` / `.distance` of a tube
+// row, `settings.surroundingsTemperature`, `settings.depth`, and
+// `SURFACE.QUANTITY=VALUE` for a target (split on the last '=').
 import { conditionOf } from '../exchange/conditions';
 import { CONDITION_LABEL } from '../exchange/labels';
 import { formatNumber, quoteName } from '../labels';
@@ -12,12 +13,15 @@ export const SURFACE_PROPERTIES = ['temperature', 'emissivity', 'heatFlux', 'con
 export const SETTINGS = ['surroundingsTemperature', 'depth', 'gasTemperature'] as const;
 /** A shape's position (x, y: the centre of its bounding box) and, for circles, the radius. */
 export const SHAPE_MEASURES = ['x', 'y', 'radius'] as const;
+/** A tube row's numbers (file length units): its pitch, its tubes' diameter, its distance from its wall. */
+export const ROW_MEASURES = ['pitch', 'diameter', 'distance'] as const;
 export const QUANTITIES = ['netHeat', 'netFlux', 'temperature', 'radiosity', 'peakToAverage'] as const;
 
 export type StudyParameter =
   | { kind: 'surface'; surface: string; property: (typeof SURFACE_PROPERTIES)[number] }
   | { kind: 'setting'; setting: (typeof SETTINGS)[number] }
-  | { kind: 'shape'; surface: string; measure: (typeof SHAPE_MEASURES)[number] };
+  | { kind: 'shape'; surface: string; measure: (typeof SHAPE_MEASURES)[number] }
+  | { kind: 'row'; row: string; measure: (typeof ROW_MEASURES)[number] };
 
 export type Quantity = (typeof QUANTITIES)[number];
 
@@ -44,9 +48,10 @@ export function parseParameter(text: string): Parsed<StudyParameter> {
   if (isOneOf(SURFACE_PROPERTIES, word))
     return { ok: true, value: { kind: 'surface', surface: owner, property: word } };
   if (isOneOf(SHAPE_MEASURES, word)) return { ok: true, value: { kind: 'shape', surface: owner, measure: word } };
+  if (isOneOf(ROW_MEASURES, word)) return { ok: true, value: { kind: 'row', row: owner, measure: word } };
   return {
     ok: false,
-    message: `'${word.slice(0, 40)}' cannot be varied; choose one of ${listed([...SURFACE_PROPERTIES, ...SHAPE_MEASURES])} of a surface, or settings.${listed(SETTINGS)}`,
+    message: `'${word.slice(0, 40)}' cannot be varied; choose one of ${listed([...SURFACE_PROPERTIES, ...SHAPE_MEASURES])} of a surface, ${listed(ROW_MEASURES)} of a tube row, or settings.${listed(SETTINGS)}`,
   };
 }
 
@@ -74,7 +79,7 @@ export function parseTarget(text: string): Parsed<StudyTarget> {
 /** The unit of a parameter's values (the file's length units for positions). */
 export function parameterUnit(p: StudyParameter, units: Units): string {
   if (p.kind === 'setting') return p.setting === 'depth' ? 'm' : 'K';
-  if (p.kind === 'shape') return units;
+  if (p.kind === 'shape' || p.kind === 'row') return units;
   if (p.property === 'convectionCoefficient') return 'W/(m^2 K)';
   return p.property === 'temperature' ? 'K' : p.property === 'heatFlux' ? 'W/m^2' : '';
 }
@@ -99,6 +104,7 @@ const SETTING_WORDS = {
   gasTemperature: 'the gas temperature',
 } as const;
 const MEASURE_WORDS = { x: 'position x', y: 'position y', radius: 'radius' } as const;
+const ROW_WORDS = { pitch: 'pitch', diameter: 'tube diameter', distance: 'distance from the wall' } as const;
 const QUANTITY_WORDS: Readonly<Record<Quantity, string>> = {
   netHeat: 'net heat',
   netFlux: 'net flux',
@@ -111,6 +117,7 @@ const QUANTITY_WORDS: Readonly<Record<Quantity, string>> = {
 export function describeParameter(p: StudyParameter): string {
   if (p.kind === 'setting') return SETTING_WORDS[p.setting];
   if (p.kind === 'shape') return `${MEASURE_WORDS[p.measure]} of the shape of ${quoteName(p.surface)}`;
+  if (p.kind === 'row') return `${ROW_WORDS[p.measure]} of row ${quoteName(p.row)}`;
   return `${PROPERTY_WORDS[p.property]} of ${quoteName(p.surface)}`;
 }
 
@@ -141,6 +148,7 @@ export function shapesOfSurface(sketch: Pick<Sketch, 'shapes'>, surface: string)
  */
 export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[], p: StudyParameter): string | null {
   if (p.kind === 'setting') return null;
+  if (p.kind === 'row') return rowParameterProblem(sketch, p);
   if (!surfaceNames.includes(p.surface)) {
     const some = surfaceNames.slice(0, 6).map(quoteName).join(', ');
     return `the sketch has no surface named ${quoteName(p.surface)}; its surfaces: ${some}${surfaceNames.length > 6 ? ', …' : ''}`;
@@ -160,6 +168,21 @@ export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[]
     return `${quoteName(p.surface)} has no heat-flux condition to vary; give it a heatFlux in the file first (it is ${conditionWords(props)})`;
   if (p.property === 'emissivity' && props?.opening === true)
     return `${quoteName(p.surface)} is an opening: it is black (emissivity 1) whatever the file says, so its emissivity has no effect`;
+  return null;
+}
+
+/** A row's number can be varied when the row exists; its distance only when it is measured from a wall. */
+function rowParameterProblem(sketch: Sketch, p: Extract<StudyParameter, { kind: 'row' }>): string | null {
+  const rows = sketch.rows ?? {};
+  if (!Object.hasOwn(rows, p.row)) {
+    const names = Object.keys(rows);
+    const some = names.slice(0, 6).map(quoteName).join(', ');
+    return names.length === 0
+      ? `the sketch has no tube row named ${quoteName(p.row)} (it has no rows)`
+      : `the sketch has no tube row named ${quoteName(p.row)}; its rows: ${some}${names.length > 6 ? ', …' : ''}`;
+  }
+  if (p.measure === 'distance' && !('wall' in rows[p.row].from))
+    return `row ${quoteName(p.row)} is placed from a start point, not from a wall: it has no distance to vary`;
   return null;
 }
 

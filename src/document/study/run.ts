@@ -2,7 +2,7 @@
 // a file would be (restore of its text), then view factors and the exchange,
 // and the object `exchange --json` prints for that file. Property and settings
 // studies keep the view factors of the first case (the geometry is the same);
-// position studies compute them again for every value.
+// position and tube-row studies compute them again for every value.
 import type { ViewFactorResult } from '../../core/scene';
 import { computeViewFactors } from '../../core/viewFactors';
 import { solveSketchExchange } from '../exchangeInput';
@@ -43,7 +43,7 @@ export function editedSketch(
 
 /** A function that solves the case at one value of the parameter, reusing view factors where the geometry is fixed. */
 export function studyRunner(sketch: Sketch, p: StudyParameter): (value: number) => StudyRunOutcome {
-  const sameGeometry = p.kind !== 'shape';
+  const sameGeometry = p.kind !== 'shape' && p.kind !== 'row';
   let kept: { names: string[]; factors: ViewFactorResult } | undefined;
   const unit = parameterUnit(p, sketch.units);
   const at = (value: number, message: string): StudyRunOutcome => ({

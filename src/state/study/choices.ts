@@ -1,6 +1,7 @@
 // What the studies panel offers to vary in the current sketch: each surface's
 // emissivity and held temperature or heat flux, the position of each shape
-// that has a surface name of its own (and a circle's radius), and the settings. Addresses are those of
+// that has a surface name of its own (and a circle's radius), each tube row's
+// pitch, diameter and distance from its wall, and the settings. Addresses are those of
 // the command line (`hearth.temperature`), so a study reads the same in both.
 import {
   describeParameter,
@@ -22,17 +23,19 @@ export interface StudyChoice {
   unit: string;
   /** The value in the sketch now, when it gives one. */
   current: number | undefined;
-  /** Moving a shape: every value needs new view factors (run in a worker). */
+  /** Moving a shape or changing a tube row: every value needs new view factors (run in a worker). */
   geometry: boolean;
 }
 
-/** The parameters the sketch lets a study vary, surfaces in matrix order, then positions, then settings. */
+/** The parameters the sketch lets a study vary, surfaces in matrix order, then positions, tube rows, settings. */
 export function studyChoices(sketch: CheckedSketch): StudyChoice[] {
   const names = documentApi.toScene(sketch).surfaceNames;
   const addresses: string[] = [];
   for (const name of names)
     for (const p of ['temperature', 'heatFlux', 'emissivity', 'convectionCoefficient']) addresses.push(`${name}.${p}`);
   for (const name of names) for (const p of ['x', 'y', 'radius']) addresses.push(`${name}.${p}`);
+  for (const row of Object.keys(sketch.rows ?? {}))
+    for (const p of ['pitch', 'diameter', 'distance']) addresses.push(`${row}.${p}`);
   addresses.push('settings.surroundingsTemperature', 'settings.depth', 'settings.gasTemperature');
   const choices: StudyChoice[] = [];
   for (const address of addresses) {
@@ -47,7 +50,7 @@ export function studyChoices(sketch: CheckedSketch): StudyChoice[] {
       label: describeParameter(p),
       unit: parameterUnit(p, sketch.units),
       current,
-      geometry: p.kind === 'shape',
+      geometry: p.kind === 'shape' || p.kind === 'row',
     });
   }
   return choices;

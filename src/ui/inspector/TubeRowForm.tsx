@@ -2,9 +2,9 @@ import { useState } from 'react';
 import { useApp, useController } from '../AppContext';
 import type { AppState } from '../../state/store';
 import { NumberField } from './NumberField';
-import { direction } from '../../state/tools/typedEntry';
 import { COORDINATE_RULE } from '../../state/edits/numberInput';
-import { MAX_ROW } from '../../state/edits/tubeRow';
+import { MAX_ROW, selectedRow } from '../../state/edits/tubeRow';
+import { RowEditor } from './RowEditor';
 
 const selectUnits = (s: AppState) => s.doc.units;
 /** The one enclosure edge selected, as the wall a row is measured from. */
@@ -19,12 +19,25 @@ const selectWallKey = (s: AppState): string => {
   return w ? `${w.shape}:${w.edge}` : '';
 };
 
+/** The row the selected tubes belong to, by name (null unless every pick is a tube of one row). */
+const selectRowName = (s: AppState): string | null => selectedRow(s.doc, s.selection);
+
 /**
- * The tube row: n tubes of diameter D at a pitch centre to centre, either a
+ * The tube row: with a row's tubes selected, that row's numbers to change (its
+ * tubes follow) and the command to split it; otherwise a new row.
+ */
+export function TubeRowForm() {
+  const name = useApp(selectRowName);
+  const row = useApp((s: AppState) => (name !== null ? s.doc.rows?.[name] : undefined));
+  return name !== null && row ? <RowEditor name={name} row={row} /> : <NewRowForm />;
+}
+
+/**
+ * A new tube row: n tubes of diameter D at a pitch centre to centre, either a
  * distance from the selected wall (to the centre line, the row centred along
  * the wall) or from a start point along an angle.
  */
-export function TubeRowForm() {
+function NewRowForm() {
   const controller = useController();
   const u = useApp(selectUnits);
   const wallKey = useApp(selectWallKey);
@@ -42,9 +55,7 @@ export function TubeRowForm() {
     setProblem(
       controller.addRow(
         spec,
-        wall
-          ? { from: 'wall', shape: wall.shape, edge: wall.edge, distance }
-          : { from: 'point', start: [x, y], direction: direction(angle) },
+        wall ? { from: 'wall', shape: wall.shape, edge: wall.edge, distance } : { from: 'point', start: [x, y], angle },
       ),
     );
   };
@@ -121,9 +132,13 @@ export function TubeRowForm() {
         {wall
           ? 'Measured from the selected wall to the centre line, the row centred along the wall.'
           : 'Select one wall edge to place the row a distance from that wall.'}{' '}
-        Each tube is an exact circle, one surface.
+        Each tube is an exact circle, one surface; the row stays a row (select a tube to change it).
       </p>
-      <button type="button" title="Add the tube row (one undo step); each tube is its own surface" onClick={place}>
+      <button
+        type="button"
+        title="Add the tube row (one undo step); each tube is its own surface, and the row can be changed as a whole"
+        onClick={place}
+      >
         Place tube row
       </button>
       {problem && (

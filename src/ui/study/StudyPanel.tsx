@@ -125,7 +125,8 @@ export function StudyPanel() {
         {'problem' in range && <p className="study-problem">{range.problem}</p>}
         {choice.geometry && (
           <p className="hint">
-            Moving a shape computes the view factors again for every value; it runs in the background.
+            Moving a shape or changing a tube row computes the view factors again for every value; it runs in the
+            background.
           </p>
         )}
         {run.busy && (

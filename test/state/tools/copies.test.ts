@@ -124,7 +124,7 @@ describe('tube row', () => {
 
   it('adds the row from a start point as exact circles of diameter D named in turn', () => {
     const { c, s } = setup();
-    const problem = c.addRow(spec, { from: 'point', start: [0.9, 0.9], direction: [1, 0] });
+    const problem = c.addRow(spec, { from: 'point', start: [0.9, 0.9], angle: 0 });
     expect(problem).toBeNull();
     const tubes = s().doc.shapes.slice(2);
     expect(tubes.map((t) => t.surface)).toEqual(['tube 2', 'tube 3', 'tube 4', 'tube 5']);
@@ -141,7 +141,7 @@ describe('tube row', () => {
 
   it('says why a row cannot be placed', () => {
     const { c } = setup();
-    expect(c.addRow({ ...spec, pitch: 0.1 }, { from: 'point', start: [1, 1], direction: [1, 0] })).toMatch(
+    expect(c.addRow({ ...spec, pitch: 0.1 }, { from: 'point', start: [1, 1], angle: 0 })).toMatch(
       /pitch .* greater than the diameter/,
     );
     expect(c.addRow({ ...spec, count: 20 }, { from: 'wall', shape: 0, edge: 2, distance: 0.25 })).toMatch(
