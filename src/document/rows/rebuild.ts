@@ -6,6 +6,7 @@
 // same fluid; a removed tube's properties go with it.
 import type { Point, ShapeV1, SketchFileV1, SurfaceProperties, TubeRow } from '../schema';
 import { rowCentres } from './place';
+import { setOwn } from '../ownRecord';
 
 export type RowBuild = { ok: true; doc: SketchFileV1; tubes: number[] } | { ok: false; problem: string };
 
@@ -69,7 +70,7 @@ export function buildRow(doc: SketchFileV1, name: string, row: TubeRow): RowBuil
   for (; k < row.count; k++) {
     const surface = nextNumberedName('tube', used);
     used.add(surface);
-    if (copied) surfaces[surface] = { ...copied };
+    if (copied) setOwn(surfaces, surface, { ...copied });
     tubes.push(shapes.length);
     shapes.push({ kind: 'solid', points: [], circle: { center: placed.centres[k], radius }, surface, row: name });
   }
