@@ -3,6 +3,7 @@
 import type { CircleFinding } from '../core/arc/circleChecks';
 import type { GeometryFinding } from '../core/sketchChecks';
 import type { CircleInput, PolygonInput } from '../core/scene';
+import { severalEnclosuresMessage } from './geometryMessages';
 import { formatNumber, formatPoint, quoteName, shapeLabel } from './labels';
 import { MAX_COORDINATE, MIN_EDGE_LENGTH } from './limits';
 import { problemAt, type SketchProblem } from './problems';
@@ -96,14 +97,8 @@ export function circleProblem(
 ): SketchProblem {
   const label = (k: number) => shapeLabel(k, fileShapes[k]);
   switch (f.rule) {
-    case 'circle-several-enclosures': {
-      const list = f.shapes.map((k) => k + 1);
-      return problemAt(
-        f.rule,
-        `shapes ${list.slice(0, -1).join(', ')} and ${list[list.length - 1]} are ${list.length === 2 ? 'both' : 'all'} enclosures; a sketch has at most one (draw the others as solids)`,
-        { shapes: [...f.shapes] },
-      );
-    }
+    case 'circle-several-enclosures':
+      return problemAt(f.rule, severalEnclosuresMessage(f.shapes.map(label)), { shapes: [...f.shapes] });
     case 'circle-outside-enclosure':
       return problemAt(
         f.rule,

@@ -63,14 +63,8 @@ export function formatGeometryFinding(f: GeometryFinding, ctx: GeometryContext):
       return `${label(f.shape)}: all its points lie on one straight line (zero area)`;
     case 'repeated-point':
       return `${label(f.shape)}: point ${point(f.shape, f.point)} repeats the point before it (a zero-length edge)`;
-    case 'several-enclosures': {
-      const list = f.shapes.map((s) => s + 1);
-      const named =
-        list.length === 2
-          ? `${list[0]} and ${list[1]}`
-          : `${list.slice(0, -1).join(', ')} and ${list[list.length - 1]}`;
-      return `shapes ${named} are ${list.length === 2 ? 'both' : 'all'} enclosures; a sketch has at most one (draw the others as solids)`;
-    }
+    case 'several-enclosures':
+      return severalEnclosuresMessage(f.shapes.map(label));
     case 'outside-enclosure':
       return `${label(f.shape)}: lies outside the enclosure (point ${point(f.shape, f.point)} at ${formatPoint(f.at)}); solids must be inside it`;
     case 'inside-solid':
@@ -122,4 +116,14 @@ function formatContact(
 
 function isNeighbour(a: number, b: number, count: number): boolean {
   return b - a === 1 || (a === 1 && b === count);
+}
+
+/** Two or more enclosures, each named as the canvas names it (polygons and circles alike). */
+export function severalEnclosuresMessage(labels: readonly string[]): string {
+  const named =
+    labels.length === 2
+      ? `${labels[0]} and ${labels[1]}`
+      : `${labels.slice(0, -1).join(', ')} and ${labels[labels.length - 1]}`;
+  const count = ['two', 'three', 'four'][labels.length - 2] ?? String(labels.length);
+  return `${count} enclosures, ${named}; a sketch has at most one (draw the others as solids)`;
 }

@@ -79,7 +79,7 @@ describe('circles in the sketch file', () => {
       "'a' (body, shape 2): lies outside the enclosure (shape 1) at (3, 1); solids must be inside it",
     ]);
     expect(messages(file({ kind: 'enclosure', circle: { center: [1, 1], radius: 0.3 }, surface: 's' }))).toEqual([
-      'shapes 1 and 2 are both enclosures; a sketch has at most one (draw the others as solids)',
+      "two enclosures, 'wall' (enclosure, shape 1) and 's' (enclosure, shape 2); a sketch has at most one (draw the others as solids)",
     ]);
     expect(
       messages(

@@ -519,7 +519,7 @@ describe('restore refuses impossible geometry', () => {
       surface: 'other',
     };
     expect(only(withShapes(enclosure, second))).toBe(
-      'shapes 1 and 2 are both enclosures; a sketch has at most one (draw the others as solids)',
+      "two enclosures, the enclosure (shape 1) and 'other' (enclosure, shape 2); a sketch has at most one (draw the others as solids)",
     );
   });
   it('edge and point numbers follow the file even after repeated points were removed', () => {

@@ -38,7 +38,9 @@ describe('problem places', () => {
     const [p, ...rest] = problemsOf(sketch(enclosure, second));
     expect(rest).toEqual([]);
     expect(p.kind).toBe('several-enclosures');
-    expect(p.message).toBe('shapes 1 and 2 are both enclosures; a sketch has at most one (draw the others as solids)');
+    expect(p.message).toBe(
+      "two enclosures, the enclosure (shape 1) and 'other' (enclosure, shape 2); a sketch has at most one (draw the others as solids)",
+    );
     expect(p.place).toEqual({ shapes: [0, 1], edges: [], points: [] });
   });
 
