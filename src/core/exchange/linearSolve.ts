@@ -244,11 +244,12 @@ export class DenseLuSolver implements ProductContext {
   /** 1-norm (largest column sum of |a_ij|); throws for NaN or infinite entries. */
   private normOneAndCheck(): number {
     const { n, matrix: a } = this;
-    const col = this.workX;
+    const col = this.kernel ? this.vector : this.workX;
     col.fill(0);
     for (let i = 0; i < n; i++) {
       const ri = i * n;
-      for (let j = 0; j < n; j++) col[j] += Math.abs(a[ri + j]);
+      if (this.kernel) this.kernel.addAbs(this.vectorAt, ri * 8, n);
+      else for (let j = 0; j < n; j++) col[j] += Math.abs(a[ri + j]);
     }
     let norm = 0;
     for (let j = 0; j < n; j++) {
@@ -328,7 +329,8 @@ export class DenseLuSolver implements ProductContext {
         for (let i = p + 1; i < r0 + k; i++) {
           const ri = i * n;
           const l = a[ri + p];
-          if (l !== 0) for (let j = c0; j < c1; j++) a[ri + j] -= l * a[rp + j];
+          if (l !== 0 && this.kernel) this.kernel.axpy((ri + c0) * 8, (rp + c0) * 8, w, l);
+          else if (l !== 0) for (let j = c0; j < c1; j++) a[ri + j] -= l * a[rp + j];
         }
       }
       return;

@@ -33,6 +33,8 @@ export interface SolverKernel {
   dot(x: number, y: number, length: number): number;
   /** y_i -= s x_i over `length` doubles. */
   axpy(y: number, x: number, length: number, s: number): void;
+  /** y_i += |x_i| over `length` doubles. */
+  addAbs(y: number, x: number, length: number): void;
   /** Exchanges `length` doubles at p and q. */
   swap(p: number, q: number, length: number): void;
 }
@@ -169,6 +171,22 @@ function axpyFunction(): WasmFunction {
   return { name: 'axpy', params: [I32, I32, I32, F64], results: [], locals: [I32, I32, V128], body };
 }
 
+function addAbsFunction(): WasmFunction {
+  // Parameters: 0 y, 1 x, 2 length.
+  const [pairEnd, allEnd] = [3, 4];
+  const body: number[] = [];
+  const e = emitter(body);
+  e(get(0), get(2), i32(-2), op.and, i32(8), mul, add, set(pairEnd));
+  e(get(0), get(2), i32(8), mul, add, set(allEnd));
+  e(block, get(0), get(pairEnd), geU, brIf(0), loop);
+  e(get(0), get(0), op.vLoad(0), get(1), op.vLoad(0), op.vAbs, op.vAdd, op.vStore(0));
+  e(get(1), i32(16), add, set(1), get(0), i32(16), add, tee(0), get(pairEnd), ltU, brIf(0));
+  e(end, end);
+  e(block, get(0), get(allEnd), geU, brIf(0));
+  e(get(0), get(0), op.fLoad(0), get(1), op.fLoad(0), op.fAbs, op.fAdd, op.fStore(0), end);
+  return { name: 'addAbs', params: [I32, I32, I32], results: [], locals: [I32, I32], body };
+}
+
 function swapFunction(): WasmFunction {
   // Parameters: 0 p, 1 q, 2 length (pairs of doubles by SIMD, a last odd one alone).
   const [pairEnd, allEnd, T] = [3, 4, 5];
@@ -194,6 +212,7 @@ export function solverKernelBytes(): Uint8Array<ArrayBuffer> {
     productFunction(),
     dotFunction(),
     axpyFunction(),
+    addAbsFunction(),
     swapFunction(),
   ]);
 }

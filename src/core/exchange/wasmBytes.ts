@@ -60,6 +60,7 @@ export const op = {
   fSub: [0xa1],
   fMul: [0xa2],
   fDiv: [0xa3],
+  fAbs: [0x99],
   vLoad: (offset: number) => [...simd(0x00), 3, ...uleb(offset)],
   /** Loads one double and copies it into both lanes. */
   vLoadSplat: (offset: number) => [...simd(0x0a), 3, ...uleb(offset)],
@@ -67,6 +68,7 @@ export const op = {
   vZero: [...simd(0x0c), ...new Array<number>(16).fill(0)],
   vSplat: simd(0x14),
   vLane: (lane: number) => [...simd(0x21), lane],
+  vAbs: simd(0xec),
   vAdd: simd(0xf0),
   vSub: simd(0xf1),
   vMul: simd(0xf2),
