@@ -42,25 +42,41 @@ export interface SolverKernel {
 const { get, set, tee, i32, add, mul, ltU, geU, loop, block, end, brIf } = op;
 
 function packAFunction(): WasmFunction {
-  // Parameters: 0 src, 1 dst, 2 tiles, 3 k, 4 stride.
-  const [r0, last, t] = [5, 9, 10]; // r0..r3 at 5..8
+  // Parameters: 0 src, 1 dst, 2 tiles, 3 k, 4 stride. Two columns per pass:
+  // one SIMD load per row, then lanes regrouped by column.
+  const [r0, pairLast, t, last, X] = [5, 9, 10, 11, 12]; // r0..r3 at 5..8, X0..X3 at 12..15
+  const lanes = (first: number, second: number) => [
+    ...Array.from({ length: 8 }, (_, b) => first + b),
+    ...Array.from({ length: 8 }, (_, b) => second + b),
+  ];
+  const low = op.shuffle(lanes(0, 16)); // column k of two rows
+  const high = op.shuffle(lanes(8, 24)); // column k + 1
   const body: number[] = [];
   const e = emitter(body);
   e(i32(0), set(t));
   e(loop);
   e(get(0), set(r0));
   for (let r = 1; r < 4; r++) e(get(r0 + r - 1), get(4), add, set(r0 + r));
+  e(get(r0), get(3), i32(-2), op.and, i32(8), mul, add, set(pairLast));
   e(get(r0), get(3), i32(8), mul, add, set(last));
-  e(loop);
+  e(block, get(r0), get(pairLast), geU, brIf(0), loop);
+  for (let r = 0; r < 4; r++) e(get(r0 + r), op.vLoad(0), set(X + r));
+  [low, high].forEach((pick, c) => {
+    e(get(1), get(X), get(X + 1), pick, op.vStore(32 * c));
+    e(get(1), get(X + 2), get(X + 3), pick, op.vStore(32 * c + 16));
+  });
+  for (let r = 0; r < 4; r++) e(get(r0 + r), i32(16), add, set(r0 + r));
+  e(get(1), i32(64), add, set(1));
+  e(get(r0), get(pairLast), ltU, brIf(0));
+  e(end, end);
+  e(block, get(r0), get(last), geU, brIf(0)); // an odd last column
   for (let r = 0; r < 4; r++) e(get(1), get(r0 + r), op.fLoad(0), op.fStore(8 * r));
-  for (let r = 0; r < 4; r++) e(get(r0 + r), i32(8), add, set(r0 + r));
-  e(get(1), i32(32), add, set(1));
-  e(get(r0), get(last), ltU, brIf(0));
-  e(end);
+  e(get(1), i32(32), add, set(1), end);
   e(get(0), get(4), i32(4), mul, add, set(0));
   e(get(t), i32(1), add, tee(t), get(2), ltU, brIf(0));
   e(end);
-  return { name: 'packA', params: [I32, I32, I32, I32, I32], results: [], locals: Array<number>(6).fill(I32), body };
+  const locals = [...Array<number>(7).fill(I32), ...Array<number>(4).fill(V128)];
+  return { name: 'packA', params: [I32, I32, I32, I32, I32], results: [], locals, body };
 }
 
 function packBFunction(): WasmFunction {

@@ -66,6 +66,8 @@ export const op = {
   vLoadSplat: (offset: number) => [...simd(0x0a), 3, ...uleb(offset)],
   vStore: (offset: number) => [...simd(0x0b), 3, ...uleb(offset)],
   vZero: [...simd(0x0c), ...new Array<number>(16).fill(0)],
+  /** Picks 16 bytes from the two vectors on the stack (0-15 the first, 16-31 the second). */
+  shuffle: (bytes: number[]) => [...simd(0x0d), ...bytes],
   vSplat: simd(0x14),
   vLane: (lane: number) => [...simd(0x21), lane],
   vAbs: simd(0xec),
