@@ -283,16 +283,17 @@ export class DenseLuSolver implements ProductContext {
   /** Unblocked right-looking elimination of columns c0..c1-1, updating only those columns. */
   private factorPanel(c0: number, c1: number): void {
     const { n, matrix: a, pivot } = this;
-    for (let k = c0; k < c1; k++) {
-      let p = k;
-      let big = Math.abs(a[k * n + k]);
-      for (let i = k + 1; i < n; i++) {
-        const v = Math.abs(a[i * n + k]);
-        if (v > big) {
-          big = v;
-          p = i;
-        }
+    // Largest |entry| on or below the diagonal of column c0 (first one on ties).
+    let p = c0;
+    let big = Math.abs(a[c0 * n + c0]);
+    for (let i = c0 + 1; i < n; i++) {
+      const v = Math.abs(a[i * n + c0]);
+      if (v > big) {
+        big = v;
+        p = i;
       }
+    }
+    for (let k = c0; k < c1; k++) {
       if (!(big > 0)) {
         throw new LinearSolveError('singular', { column: k, reciprocalCondition: 0 });
       }
@@ -308,12 +309,24 @@ export class DenseLuSolver implements ProductContext {
           a[rk + j] = t;
         }
       }
+      // Eliminate below the pivot and, in the same pass down the rows (each a
+      // cache line away), find the next column's pivot among the updated rows.
       const inv = 1 / a[rk + k];
+      const next = k + 1 < c1 ? k + 1 : -1;
+      p = k + 1;
+      big = -1;
       for (let i = k + 1; i < n; i++) {
         const ri = i * n;
         const l = a[ri + k] * inv;
         a[ri + k] = l;
         if (l !== 0) for (let j = k + 1; j < c1; j++) a[ri + j] -= l * a[rk + j];
+        if (next >= 0) {
+          const v = Math.abs(a[ri + next]);
+          if (v > big) {
+            big = v;
+            p = i;
+          }
+        }
       }
     }
   }
