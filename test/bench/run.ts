@@ -7,7 +7,6 @@ import type { SceneInput } from '../../src/core/scene';
 import { furnaceScene, tubeScene } from './scenes';
 import { demoSketch } from '../../src/state/demo';
 import { restore, toScene } from '../../src/document';
-import { DenseLuSolver } from '../../src/core/exchange';
 import { solveBalance } from '../../src/core/balance';
 import { mixedSection } from './balanceScene';
 
@@ -105,7 +104,7 @@ for (const v of verdicts) console.log(v);
 }
 
 // Other targets: reading a 1600-edge sketch file (validation included) and the
-// dense solve behind heat exchange at 2000 surfaces ("well under a second").
+// dense solve behind heat exchange at 2000 surfaces (solve.ts).
 {
   const ring = (cx: number, cy: number, r: number, n: number) =>
     Array.from({ length: n }, (_, k) => [
@@ -131,29 +130,7 @@ for (const v of verdicts) console.log(v);
     `read and check a 1600-edge sketch file: min ${reads[0].toFixed(1)} ms, median ${reads[reads.length >> 1].toFixed(1)} ms`,
   );
 
-  const N = 2000;
-  const solver = new DenseLuSolver(N);
-  let s = 12345;
-  const rnd = () => {
-    s = (Math.imul(s, 1103515245) + 12345) >>> 0;
-    return s / 4294967296 - 0.5;
-  };
-  const a = new Float64Array(N * N).map(() => rnd() / N);
-  for (let i = 0; i < N; i++) a[i * N + i] += 1; // diagonally dominant, like I - (1 - e) F
-  const x = new Float64Array(N).fill(1);
-  const solves: number[] = [];
-  for (let r = 0; r < (quick ? 1 : 5); r++) {
-    solver.matrix.set(a);
-    const t0 = performance.now();
-    solver.factor();
-    solver.solve(x);
-    solves.push(performance.now() - t0);
-  }
-  solves.sort((p, q) => p - q);
-  const med = solves[solves.length >> 1];
-  console.log(
-    `dense solve, ${N} surfaces (${solver.accelerated ? 'SIMD kernel' : 'plain JavaScript'}): min ${solves[0].toFixed(0)} ms, median ${med.toFixed(0)} ms (target well under 1000 ms): ${med < 1000 ? 'met' : 'NOT met'}`,
-  );
+  (await import('./solve')).benchDenseSolve(quick);
 }
 
 // The whole surface balance with the factors known: 200 surfaces, every kind of

@@ -92,8 +92,9 @@ describe('dense LU solve against ml-matrix', () => {
   }
 
   it('sizes that leave every kind of fringe around the SIMD blocks', () => {
-    // 2 x 4 x 4 blocks; recursion splits at multiples of 8: odd, 4k+1..4k+3, and sizes past one column block (512).
-    for (const n of [8, 9, 10, 11, 13, 17, 31, 33, 64, 65, 66, 67, 127, 130, 257, 515]) {
+    // 4 x 4 tiles in packed blocks of 128 rows x 256 inner terms; recursion splits at multiples of 8; the
+    // triangular solves run two doubles at a time: odd sizes, 4k+1..4k+3, and sizes past one block.
+    for (const n of [8, 9, 10, 11, 13, 17, 31, 33, 64, 65, 66, 67, 127, 130, 257, 263, 515]) {
       const { a, b } = randomSystem(n, 1000 + n);
       checkAgainstOracle(a, b, n, true);
     }

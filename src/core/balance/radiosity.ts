@@ -5,12 +5,16 @@
 // solve and each new set of emissive powers E = sigma T^4 costs two triangular
 // solves. Fluxes and powers in W/m^2.
 import { DenseLuSolver } from '../exchange/linearSolve';
+import { radiosityResidual } from '../exchange/refine';
 
 export class RadiosityNetwork {
   readonly n: number;
   /** Estimated reciprocal condition number of M (dimensionless). */
   readonly reciprocalCondition: number;
   private readonly solver: DenseLuSolver;
+  private readonly weight: Float64Array;
+  private readonly rhs: Float64Array;
+  private readonly residual: Float64Array;
 
   /**
    * Builds and factors M (throws LinearSolveError when it is singular or not
@@ -27,6 +31,9 @@ export class RadiosityNetwork {
     const n = eps.length;
     this.n = n;
     this.solver = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
+    this.weight = eps.map((e) => 1 - e);
+    this.rhs = new Float64Array(n);
+    this.residual = new Float64Array(n);
     const M = this.solver.matrix;
     for (let i = 0; i < n; i++) {
       const ri = i * n;
@@ -37,11 +44,24 @@ export class RadiosityNetwork {
     this.reciprocalCondition = this.solver.factor();
   }
 
-  /** Radiosity J and irradiation G (W/m^2) for the emissive powers E (W/m^2); J and G are overwritten. */
+  /**
+   * Radiosity J and irradiation G (W/m^2) for the emissive powers E (W/m^2);
+   * J and G are overwritten. One step of iterative refinement (the residual
+   * from F: the factors have overwritten M) makes every row hold to the
+   * rounding of J itself, which is what the energy balance sums.
+   */
   solve(E: Float64Array, J: Float64Array, G: Float64Array): void {
-    const { n, eps, Fs, Es, F } = this;
-    for (let i = 0; i < n; i++) J[i] = eps[i] * E[i] + (1 - eps[i]) * Fs[i] * Es;
+    const { n, eps, rhs } = this;
+    for (let i = 0; i < n; i++) rhs[i] = eps[i] * E[i] + (1 - eps[i]) * this.Fs[i] * this.Es;
+    J.set(rhs);
     this.solver.solve(J);
+    this.solver.refine(J, radiosityResidual(this.F, this.weight, J, rhs, this.residual));
+    this.irradiation(J, G);
+  }
+
+  /** G_i = sum_j F_ij J_j + F_i,s E_s, W/m^2. */
+  private irradiation(J: Float64Array, G: Float64Array): void {
+    const { n, Fs, Es, F } = this;
     for (let i = 0; i < n; i++) {
       const ri = i * n;
       let g = Fs[i] * Es;

@@ -22,6 +22,7 @@
 
 import { DenseLuSolver, LinearSolveError } from './linearSolve';
 import { exchangeFailure, surroundingsFactor, type ExchangeFailure } from './failures';
+import { radiosityResidual, rowProducts } from './refine';
 
 /** Stefan-Boltzmann constant, W/(m^2 K^4) (CODATA 2018). */
 export const STEFAN_BOLTZMANN = 5.670374419e-8;
@@ -189,11 +190,13 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
   const solver = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
   const M = solver.matrix;
   const J = new Float64Array(n);
+  const weight = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const c = input.conditions[i];
     const ri = i * n;
     // Row weight of G_i: (1 - e) for a temperature, 1 for flux/adiabatic, 0 for black or opening rows (J_i = E_i).
     const w = c.kind === 'temperature' ? 1 - eps[i] : c.kind === 'opening' ? 0 : 1;
+    weight[i] = w;
     for (let j = 0; j < n; j++) M[ri + j] = -w * F[ri + j];
     M[ri + i] += 1;
     J[i] =
@@ -210,7 +213,12 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
     }
     throw err;
   }
+  const rhs = Float64Array.from(J);
   solver.solve(J);
+  // One step of iterative refinement (the residual from F: the factors have
+  // overwritten M), so every row holds to the rounding of J itself, which is
+  // what the energy balance sums.
+  solver.refine(J, radiosityResidual(F, weight, J, rhs, new Float64Array(n)));
 
   // Results.
   const G = new Float64Array(n);
@@ -219,10 +227,10 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
   const qp = new Float64Array(n);
   const exchange = new Float64Array(n * n);
   const toSurr = new Float64Array(n);
+  rowProducts(F, J, G); // compensated: the energy balance adds A_i G_i over every surface
   for (let i = 0; i < n; i++) {
     const ri = i * n;
-    let g = Fs[i] * Es;
-    for (let j = 0; j < n; j++) g += F[ri + j] * J[j];
+    const g = Fs[i] * Es + G[i];
     G[i] = g;
     const c = input.conditions[i];
     if (c.kind === 'temperature' || c.kind === 'opening') {
