@@ -5,17 +5,17 @@
 // A worker that crashes or hangs is replaced and the job tried once more on the
 // new one (unless a newer job is waiting, which replaces it); a job that throws
 // is not retried (the same input would throw again).
-import type { EdgeViewFactors, ViewFactorJob } from './job';
+import { jobTimeScale, type ViewFactorAnswer, type ViewFactorJob } from './job';
 
 /** One live worker. `onCrash` reports an uncaught error that killed it. */
 export interface WorkerHandle {
-  compute(job: ViewFactorJob): Promise<EdgeViewFactors>;
+  compute(job: ViewFactorJob): Promise<ViewFactorAnswer>;
   terminate(): void;
   onCrash?(listener: (message: string) => void): void;
 }
 
 export type JobOutcome =
-  | { kind: 'done'; result: EdgeViewFactors; elapsedMs: number }
+  | { kind: 'done'; result: ViewFactorAnswer; elapsedMs: number }
   | { kind: 'dropped' }
   | { kind: 'failed'; reason: 'threw' | 'timeout' | 'crashed'; message: string };
 
@@ -36,7 +36,7 @@ export interface RestartEvent {
 }
 
 export interface ClientOptions {
-  /** Longest a job may run before the worker is considered hung, ms. */
+  /** Longest a job of up to 2000 edges may run before the worker is considered hung, ms (scaled up for bigger jobs). */
   timeLimitMs: number;
   now?: () => number;
   /** Told each time a worker is replaced (so the page can say so). */
@@ -112,14 +112,16 @@ export class ViewFactorClient {
   private launch(entry: Entry): void {
     const now = this.options.now ?? (() => performance.now());
     const started = now();
+    // Big jobs get longer (jobTimeScale): the limit is there to catch a hang, not a big sketch.
+    const limitMs = this.options.timeLimitMs * jobTimeScale(entry.job);
     const timer = setTimeout(
-      () => this.fail('timeout', `the view-factor worker did not answer within ${this.options.timeLimitMs / 1000} s`),
-      this.options.timeLimitMs,
+      () => this.fail('timeout', `the view-factor worker did not answer within ${limitMs / 1000} s`),
+      limitMs,
     );
     const current = { ...entry, started, timer };
     this.launched++;
     this.running = current;
-    let answer: Promise<EdgeViewFactors>;
+    let answer: Promise<ViewFactorAnswer>;
     try {
       answer = Promise.resolve(this.worker.compute(entry.job));
     } catch (e) {
