@@ -32,18 +32,21 @@ export function poolSize(cores: number | undefined): number {
 }
 
 /** How many of `available` workers one job of `edgeCount` edges uses. */
-export function workersForJob(edgeCount: number, available: number): number {
+export function workersForJob(edgeCount: number, available: number, minPairs = MIN_PAIRS_PER_WORKER): number {
   const pairs = (edgeCount * (edgeCount + 1)) / 2;
-  return Math.max(1, Math.min(available, edgeCount, Math.floor(pairs / MIN_PAIRS_PER_WORKER)));
+  return Math.max(1, Math.min(available, edgeCount, Math.floor(pairs / minPairs)));
 }
 
-/** The pool as one `WorkerHandle`. `workers` are started by the caller and ended by `terminate`. */
-export function poolHandle(workers: readonly RowWorker[]): WorkerHandle {
+/**
+ * The pool as one `WorkerHandle`. `workers` are started by the caller and ended by
+ * `terminate`. `minPairsPerWorker` (tests) overrides MIN_PAIRS_PER_WORKER.
+ */
+export function poolHandle(workers: readonly RowWorker[], minPairsPerWorker = MIN_PAIRS_PER_WORKER): WorkerHandle {
   if (workers.length === 0) throw new Error('a worker pool needs at least one worker');
   return {
     async compute(job: ViewFactorJob): Promise<ViewFactorAnswer> {
       const n = jobEdgeCount(job);
-      const sets = balancedRowSets(n, workersForJob(n, workers.length));
+      const sets = balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker));
       const parts = await Promise.all(sets.map((rows, k) => workers[k].computeRows(job, rows)));
       return assembleAnswer(job, n, parts);
     },
