@@ -10,6 +10,7 @@ import { restore, toScene } from '../../src/document';
 import { DenseLuSolver } from '../../src/core/exchange';
 import { solveBalance } from '../../src/core/balance';
 import { mixedSection } from './balanceScene';
+import './pool';
 
 function demoScene(): SceneInput {
   const r = restore(demoSketch);

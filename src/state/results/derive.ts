@@ -82,9 +82,10 @@ let lastShown: ShownResult | null = null;
 
 /**
  * What is on screen: the newest edge factors summed to surfaces. When they were
- * computed for the current geometry (up to scale), the current names, units and
- * properties go with them; otherwise those of the sketch they were computed for,
- * and they are stale. This is the only staleness rule.
+ * computed for the current geometry (up to scale; for surface sums, and the same
+ * surface of every edge), the current names, units and properties go with them;
+ * otherwise those of the sketch they were computed for, and they are stale. This
+ * is the only staleness rule.
  */
 export function shownResult(vf: ViewFactorCache): ShownResult | null {
   if (vf === lastCache) return lastShown;
