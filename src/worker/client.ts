@@ -5,7 +5,7 @@
 // A worker that crashes or hangs is replaced and the job tried once more on the
 // new one (unless a newer job is waiting, which replaces it); a job that throws
 // is not retried (the same input would throw again).
-import { jobTimeScale, type ViewFactorAnswer, type ViewFactorJob } from './job';
+import { jobEdgeCount, jobTimeScale, type ViewFactorAnswer, type ViewFactorJob } from './job';
 
 /** One live worker. `onCrash` reports an uncaught error that killed it. */
 export interface WorkerHandle {
@@ -20,6 +20,13 @@ export type JobOutcome =
   | { kind: 'failed'; reason: 'threw' | 'timeout' | 'crashed'; message: string };
 
 export type FailReason = 'threw' | 'timeout' | 'crashed';
+
+/**
+ * A running job of at least this many edges (seconds of work) is cancelled when a
+ * newer one arrives: its workers are ended and fresh ones take the newer job.
+ * Smaller jobs finish, so a drag still shows results one step behind.
+ */
+export const CANCEL_RUNNING_FROM_EDGES = 2000;
 
 interface Entry {
   job: ViewFactorJob;
@@ -73,7 +80,20 @@ export class ViewFactorClient {
       }
       this.waiting?.resolve({ kind: 'dropped' });
       this.waiting = entry;
+      if (jobEdgeCount(this.running.job) >= CANCEL_RUNNING_FROM_EDGES) this.cancelRunning();
     });
+  }
+
+  /** Drop the running job and end its workers (every worker of a pool); the waiting job starts on fresh ones. */
+  private cancelRunning(): void {
+    const current = this.running;
+    if (!current) return;
+    clearTimeout(current.timer);
+    this.running = null;
+    this.worker.terminate();
+    this.worker = this.start();
+    current.resolve({ kind: 'dropped' });
+    this.next();
   }
 
   /** True while a job runs or waits. */
