@@ -22,11 +22,11 @@ export type JobOutcome =
 export type FailReason = 'threw' | 'timeout' | 'crashed';
 
 /**
- * A running job of at least this many edges (seconds of work) is cancelled when a
- * newer one arrives: its workers are ended and fresh ones take the newer job.
- * Smaller jobs finish, so a drag still shows results one step behind.
+ * A running job of at least this many edges (tens of seconds to minutes of work)
+ * is cancelled when a newer one arrives: its workers are ended and fresh ones take
+ * the newer job. Smaller jobs finish, so a drag still shows results one step behind.
  */
-export const CANCEL_RUNNING_FROM_EDGES = 2000;
+export const CANCEL_RUNNING_FROM_EDGES = 5000;
 
 interface Entry {
   job: ViewFactorJob;
