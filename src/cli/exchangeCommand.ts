@@ -10,7 +10,6 @@
 import { RESULTS_CAUTION } from '../document/exchange/cautions';
 import type { BalanceCondition, BalanceResult } from '../core/balance';
 import type { ViewFactorResult } from '../core/scene';
-import { computeViewFactors } from '../core/viewFactors';
 import { toScene, type Sketch } from '../document';
 import {
   GAS_LABEL,
@@ -26,11 +25,13 @@ import { solveSketchExchange } from '../document/exchangeInput';
 import { exchangeJson } from '../document/exchangeJson';
 import type { CliIO } from './io';
 import { parseArgs } from './args';
+import { threadedViewFactors, threadsOption, THREADS_HELP } from './threads';
 import { profileCsv, surfaceProfile } from '../document/exchange/profile';
 import { readSketchFile } from './readSketch';
 import { displayName, usageError as reportUsage } from './terminalText';
 
-export const EXCHANGE_USAGE = 'usage: npm run cli -- exchange FILE [--json | --csv | --profile NAME] [--depth METRES]';
+export const EXCHANGE_USAGE =
+  'usage: npm run cli -- exchange FILE [--json | --csv | --profile NAME] [--depth METRES] [--threads N]';
 // The --json object is built in src/document (shared with the design studies and the library).
 export { exchangeJson };
 const usageError = (io: CliIO, problem: string) => reportUsage(io, 'exchange', EXCHANGE_USAGE, problem);
@@ -55,6 +56,7 @@ adiabatic, opening, wall, tube, linked plate).
                     into parts (position of each part's middle)
   --depth METRES    length of the long dimension; adds totals in W
                     (default: the file's settings.depth, if any)
+${THREADS_HELP}
 Units: length in the file's units, temperature K, heat W per metre of
 depth, netFlux and radiosity W/m^2, totals W. netHeat > 0: the surface gives
 off more radiation than it absorbs; suppliedHeat = netHeat + convectionHeat,
@@ -68,7 +70,10 @@ ${CAUTION}
 export function runExchange(args: string[], io: CliIO): number {
   let depthArg: number | undefined;
   let profileName: string | undefined;
+  const options: { threads?: number } = {};
   const parsed = parseArgs(args, (arg, takeNext) => {
+    const threads = threadsOption(arg, takeNext, options);
+    if (threads !== undefined) return threads;
     if (arg === '--profile' || arg.startsWith('--profile=')) {
       const name = arg === '--profile' ? takeNext() : arg.slice('--profile='.length);
       if (!name) return '--profile needs a surface name';
@@ -95,7 +100,7 @@ export function runExchange(args: string[], io: CliIO): number {
   if (!sketch) return 1;
 
   const { scene, surfaceNames } = toScene(sketch);
-  const factors = computeViewFactors(scene);
+  const factors = threadedViewFactors(scene, options.threads);
   if (!factors.F.every(Number.isFinite) || !factors.surfaceLength.every(Number.isFinite)) {
     io.err(`exchange: ${file}: internal error: the view factors came out non-finite; please report this file\n`);
     return 1;

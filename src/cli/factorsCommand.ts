@@ -1,6 +1,5 @@
 // `factors FILE [--json | --csv]`: the view factor between every pair of named
 // surfaces of a sketch file, as a readable table, one JSON object, or CSV.
-import { computeViewFactors } from '../core/viewFactors';
 import type { ViewFactorResult } from '../core/scene';
 import { matrixCsv, toScene, type Sketch } from '../document';
 import { SURROUNDINGS_LABEL } from '../document/exchange/labels';
@@ -8,8 +7,9 @@ import type { CliIO } from './io';
 import { parseArgs } from './args';
 import { readSketchFile } from './readSketch';
 import { displayName, usageError as reportUsage } from './terminalText';
+import { threadedViewFactors, threadsOption, THREADS_HELP } from './threads';
 
-export const FACTORS_USAGE = 'usage: npm run cli -- factors FILE [--json | --csv]';
+export const FACTORS_USAGE = 'usage: npm run cli -- factors FILE [--json | --csv] [--threads N]';
 const usageError = (io: CliIO, problem: string) => reportUsage(io, 'factors', FACTORS_USAGE, problem);
 
 const FACTORS_HELP = `${FACTORS_USAGE}
@@ -19,13 +19,15 @@ column = to, surfaces in order of first appearance along the edges).
   --json   one JSON object: surfaces (name, length), viewFactors,
            rowSumResidual (1 - row sum), reciprocityResidual
   --csv    the matrix as CSV, header row and first column of names
+${THREADS_HELP}
 Lengths are in the file's units; view factors are dimensionless.
 FILE '-' reads standard input.
 `;
 
 /** Run the command; returns the exit code (0 done, 1 bad file, 2 bad arguments). */
 export function runFactors(args: string[], io: CliIO): number {
-  const parsed = parseArgs(args);
+  const options: { threads?: number } = {};
+  const parsed = parseArgs(args, (arg, takeNext) => threadsOption(arg, takeNext, options));
   if (parsed.kind === 'help') {
     io.out(FACTORS_HELP);
     return 0;
@@ -37,7 +39,7 @@ export function runFactors(args: string[], io: CliIO): number {
   if (!sketch) return 1;
 
   const { scene, surfaceNames } = toScene(sketch);
-  const result = computeViewFactors(scene);
+  const result = threadedViewFactors(scene, options.threads);
   if (!allFinite(result)) {
     io.err(`factors: ${file}: internal error: the computation produced a non-finite number; please report this file\n`);
     return 1;

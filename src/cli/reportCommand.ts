@@ -6,15 +6,15 @@
 import { createHash } from 'node:crypto';
 import { dirname, join, resolve } from 'node:path';
 import { writeFileSync } from 'node:fs';
-import { computeViewFactors } from '../core/viewFactors';
 import { toScene } from '../document';
 import { reportFileName, reportHtml } from '../document/report';
 import { describeReadError, type CliIO } from './io';
 import { parseArgs } from './args';
+import { threadedViewFactors, threadsOption, THREADS_HELP } from './threads';
 import { readSketchFile } from './readSketch';
 import { displayName, usageError as reportUsage } from './terminalText';
 
-export const REPORT_USAGE = 'usage: npm run cli -- report FILE [--out PATH]';
+export const REPORT_USAGE = 'usage: npm run cli -- report FILE [--out PATH] [--threads N]';
 const usageError = (io: CliIO, problem: string) => reportUsage(io, 'report', REPORT_USAGE, problem);
 
 const REPORT_HELP = `${REPORT_USAGE}
@@ -29,6 +29,7 @@ safety caution. Numbers as the factors and exchange commands print them.
   --out PATH   where to write (default: FILE's name with -report.html,
                beside it: sketch.json -> sketch-report.html); '-' prints
                the HTML on standard output
+${THREADS_HELP}
 FILE '-' reads standard input (then --out is needed).
 `;
 
@@ -41,7 +42,10 @@ export interface ReportIO extends CliIO {
 /** Run the command; returns the exit code (0 written, 1 bad file or cannot write, 2 bad arguments). */
 export function runReport(args: string[], io: ReportIO): number {
   let out: string | undefined;
+  const options: { threads?: number } = {};
   const parsed = parseArgs(args, (arg, takeNext) => {
+    const threads = threadsOption(arg, takeNext, options);
+    if (threads !== undefined) return threads;
     if (arg !== '--out' && !arg.startsWith('--out=')) return undefined;
     const path = arg === '--out' ? takeNext() : arg.slice('--out='.length);
     if (path === undefined || path === '') return '--out needs a file path';
@@ -71,7 +75,7 @@ export function runReport(args: string[], io: ReportIO): number {
   const sketch = readSketchFile('report', file, { ...io, readFile: () => text });
   if (!sketch) return 1;
   const { scene, surfaceNames } = toScene(sketch);
-  const factors = computeViewFactors(scene);
+  const factors = threadedViewFactors(scene, options.threads);
   if (!factors.F.every(Number.isFinite) || !factors.surfaceLength.every(Number.isFinite)) {
     io.err(`report: ${file}: internal error: the view factors came out non-finite; please report this file\n`);
     return 1;

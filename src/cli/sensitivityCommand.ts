@@ -3,7 +3,6 @@
 // each fixed temperature (the derivative of the radiosity solution), and with
 // emissivity ranges the lowest and highest net heat of each surface.
 // Units: W per metre of depth per unit emissivity; W/(m K) per kelvin.
-import { computeViewFactors } from '../core/viewFactors';
 import { toCsv, toScene, type CsvCell } from '../document';
 import { SURROUNDINGS_LABEL } from '../document/exchange/labels';
 import { solveSketchExchange } from '../document/exchangeInput';
@@ -16,13 +15,14 @@ import {
   type SensitivityRow,
 } from '../document/study';
 import { parseArgs } from './args';
+import { threadedViewFactors, threadsOption, THREADS_HELP } from './threads';
 import type { CliIO } from './io';
 import { readSketchFile } from './readSketch';
 import { STUDY_CAUTION, columns } from './sweepCommand';
 import { displayName, usageError as reportUsage } from './terminalText';
 
 export const SENSITIVITY_USAGE =
-  'usage: npm run cli -- sensitivity FILE [--json | --csv] [--emissivity-range SURFACE=LOW:HIGH ...]';
+  'usage: npm run cli -- sensitivity FILE [--json | --csv] [--emissivity-range SURFACE=LOW:HIGH ...] [--threads N]';
 
 const BOUNDS_METHOD =
   'Lowest and highest over every corner of the ranges (each emissivity at an end): exact when each net heat is monotone in each emissivity over the ranges. A derivative that changes sign between corners flags the surface: its extremes may lie inside the ranges. No flag does not prove monotonicity.';
@@ -39,6 +39,7 @@ the derivative of the radiosity solution, one extra solve per parameter.
   --emissivity-range SURFACE=LOW:HIGH
             an emissivity known only to lie in [LOW, HIGH]; repeat for more
             (at most 12). ${BOUNDS_METHOD}
+${THREADS_HELP}
 Units: W/m per unit emissivity; W/(m K) per kelvin. Signed as net heat:
 positive means the surface gives off more as the parameter rises.
 ${STUDY_CAUTION}
@@ -47,7 +48,10 @@ ${STUDY_CAUTION}
 /** Run the command; returns the exit code (0 done, 1 bad file or no answer, 2 bad arguments). */
 export function runSensitivity(args: string[], io: CliIO): number {
   const ranges: EmissivityRange[] = [];
+  const options: { threads?: number } = {};
   const parsed = parseArgs(args, (arg, takeNext) => {
+    const threads = threadsOption(arg, takeNext, options);
+    if (threads !== undefined) return threads;
     const name = '--emissivity-range';
     if (arg !== name && !arg.startsWith(`${name}=`)) return undefined;
     const text = arg === name ? takeNext() : arg.slice(name.length + 1);
@@ -70,7 +74,7 @@ export function runSensitivity(args: string[], io: CliIO): number {
   const sketch = readSketchFile('sensitivity', file, io);
   if (!sketch) return 1;
   const { scene, surfaceNames: names } = toScene(sketch);
-  const factors = computeViewFactors(scene);
+  const factors = threadedViewFactors(scene, options.threads);
   if (!factors.F.every(Number.isFinite) || !factors.surfaceLength.every(Number.isFinite))
     return fail('internal error: the view factors came out non-finite; please report this file');
   const solved = solveSketchExchange(sketch, names, factors);

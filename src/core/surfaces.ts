@@ -44,6 +44,22 @@ export function aggregateToSurfaces(
       if (f !== 0) G[row + edgeSurface[j]] += Li * f;
     }
   }
+  return surfaceResult(n, edgeLength, surfaceLength, G, closed);
+}
+
+/**
+ * Surface factors from the surface exchange matrix G_IJ = L_I F_IJ (row-major,
+ * sketch units) and the surface lengths: F_IJ = G_IJ / L_I, the row-sum residual
+ * 1 - sum_J F_IJ and the largest relative reciprocity residual over pairs.
+ */
+export function surfaceResult(
+  edgeCount: number,
+  edgeLength: Float64Array,
+  surfaceLength: Float64Array,
+  G: Float64Array,
+  closed: boolean,
+): ViewFactorResult {
+  const m = surfaceLength.length;
   const F = new Float64Array(m * m);
   const rowSumResidual = new Float64Array(m);
   for (let I = 0; I < m; I++) {
@@ -63,7 +79,7 @@ export function aggregateToSurfaces(
     }
   }
   return {
-    edgeCount: n,
+    edgeCount,
     surfaceCount: m,
     edgeLength,
     surfaceLength,

@@ -18,6 +18,7 @@ export type {
 export { UNITS, METRES_PER_UNIT, type Units } from './units';
 export {
   MAX_EDGES,
+  MAX_SURFACES,
   MAX_COORDINATE,
   MIN_EDGE_LENGTH,
   MIN_RELATIVE_EDGE_LENGTH,

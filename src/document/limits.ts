@@ -1,8 +1,20 @@
 // Documented limits of a sketch. Numbers beyond them are refused with a
 // message rather than computed badly (or slowly enough to freeze a tab).
 
-/** Most edges in one sketch: the view-factor matrix has edges^2 entries (5000 edges: 200 MB of doubles). */
-export const MAX_EDGES = 5000;
+/**
+ * Most edges in one sketch. The work grows with edges^2 pairs; memory does not:
+ * past 5000 edges (a 200 MB edge matrix) the view factors are summed straight to
+ * surfaces (core surfaceRows.ts), and a 20,000-edge sketch with 300 surfaces
+ * peaks well under 1 GB (test/bench/pool.ts, `npm run bench -- --scale`).
+ */
+export const MAX_EDGES = 20_000;
+
+/**
+ * Most surfaces in one sketch: the surface factors and the heat exchange hold
+ * surfaces^2 numbers (5000 surfaces: 200 MB of doubles each) and the exchange
+ * solves a dense system of that size.
+ */
+export const MAX_SURFACES = 5000;
 
 /**
  * Largest |coordinate|, in file units. Squares and products of coordinate

@@ -9,7 +9,7 @@ import { circleProblem, renumberFinding, splitShapes } from './circles';
 import { geometryProblem } from './geometryMessages';
 import { plainName } from './labels';
 import { parseJsonText } from './jsonText';
-import { MAX_EDGES, MAX_MESSAGES } from './limits';
+import { MAX_EDGES, MAX_MESSAGES, MAX_SURFACES } from './limits';
 import { migrate } from './migrate';
 import { normalise } from './normalise';
 import { mergePlaces, problemAt, type SketchProblem } from './problems';
@@ -17,6 +17,7 @@ import { parseSketchFile } from './plainKeys';
 import type { Sketch, SketchFileV1 } from './schema';
 import { rowProblems } from './rows/check';
 import { schemaProblem } from './zodMessages';
+import { surfaceIndex } from './surfaceIndex';
 import { unknownFieldWarnings } from './unknownFields';
 
 export type RestoreResult = { ok: true; sketch: Sketch; warnings: string[] } | { ok: false; errors: SketchProblem[] };
@@ -118,6 +119,12 @@ function checkSketch(doc: SketchFileV1): SketchCheck {
   const normalised = normalise(doc);
   if (normalised.errors.length > 0) return { ok: false, problems: normalised.errors };
   const { sketch, fileIndex, filePointCount } = normalised;
+  const surfaceCount = surfaceIndex(sketch.shapes).names.length;
+  if (surfaceCount > MAX_SURFACES) {
+    const why = 'the surface factors and the heat exchange grow with the square of the surface count';
+    const message = `the sketch has ${surfaceCount} surfaces; the limit is ${MAX_SURFACES} (${why})`;
+    return { ok: false, problems: [problemAt('limit', message)] };
+  }
 
   const rows = rowProblems(sketch.shapes, doc);
   if (rows.length > 0) return { ok: false, problems: rows };
@@ -148,7 +155,7 @@ function edgeLimitProblem(shapes: unknown): SketchProblem | null {
   if (edges > MAX_EDGES) {
     return problemAt(
       'limit',
-      `the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`,
+      `the sketch has ${edges} edges; the limit is ${MAX_EDGES} (the work grows with the square of the edge count)`,
     );
   }
   return null;

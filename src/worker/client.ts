@@ -5,21 +5,28 @@
 // A worker that crashes or hangs is replaced and the job tried once more on the
 // new one (unless a newer job is waiting, which replaces it); a job that throws
 // is not retried (the same input would throw again).
-import type { EdgeViewFactors, ViewFactorJob } from './job';
+import { jobEdgeCount, jobTimeScale, type ViewFactorAnswer, type ViewFactorJob } from './job';
 
 /** One live worker. `onCrash` reports an uncaught error that killed it. */
 export interface WorkerHandle {
-  compute(job: ViewFactorJob): Promise<EdgeViewFactors>;
+  compute(job: ViewFactorJob): Promise<ViewFactorAnswer>;
   terminate(): void;
   onCrash?(listener: (message: string) => void): void;
 }
 
 export type JobOutcome =
-  | { kind: 'done'; result: EdgeViewFactors; elapsedMs: number }
+  | { kind: 'done'; result: ViewFactorAnswer; elapsedMs: number }
   | { kind: 'dropped' }
   | { kind: 'failed'; reason: 'threw' | 'timeout' | 'crashed'; message: string };
 
 export type FailReason = 'threw' | 'timeout' | 'crashed';
+
+/**
+ * A running job of at least this many edges (tens of seconds to minutes of work)
+ * is cancelled when a newer one arrives: its workers are ended and fresh ones take
+ * the newer job. Smaller jobs finish, so a drag still shows results one step behind.
+ */
+export const CANCEL_RUNNING_FROM_EDGES = 5000;
 
 interface Entry {
   job: ViewFactorJob;
@@ -36,7 +43,7 @@ export interface RestartEvent {
 }
 
 export interface ClientOptions {
-  /** Longest a job may run before the worker is considered hung, ms. */
+  /** Longest a job of up to 2000 edges may run before the worker is considered hung, ms (scaled up for bigger jobs). */
   timeLimitMs: number;
   now?: () => number;
   /** Told each time a worker is replaced (so the page can say so). */
@@ -73,7 +80,20 @@ export class ViewFactorClient {
       }
       this.waiting?.resolve({ kind: 'dropped' });
       this.waiting = entry;
+      if (jobEdgeCount(this.running.job) >= CANCEL_RUNNING_FROM_EDGES) this.cancelRunning();
     });
+  }
+
+  /** Drop the running job and end its workers (every worker of a pool); the waiting job starts on fresh ones. */
+  private cancelRunning(): void {
+    const current = this.running;
+    if (!current) return;
+    clearTimeout(current.timer);
+    this.running = null;
+    this.worker.terminate();
+    this.worker = this.start();
+    current.resolve({ kind: 'dropped' });
+    this.next();
   }
 
   /** True while a job runs or waits. */
@@ -112,14 +132,16 @@ export class ViewFactorClient {
   private launch(entry: Entry): void {
     const now = this.options.now ?? (() => performance.now());
     const started = now();
+    // Big jobs get longer (jobTimeScale): the limit is there to catch a hang, not a big sketch.
+    const limitMs = this.options.timeLimitMs * jobTimeScale(entry.job);
     const timer = setTimeout(
-      () => this.fail('timeout', `the view-factor worker did not answer within ${this.options.timeLimitMs / 1000} s`),
-      this.options.timeLimitMs,
+      () => this.fail('timeout', `the view-factor worker did not answer within ${limitMs / 1000} s`),
+      limitMs,
     );
     const current = { ...entry, started, timer };
     this.launched++;
     this.running = current;
-    let answer: Promise<EdgeViewFactors>;
+    let answer: Promise<ViewFactorAnswer>;
     try {
       answer = Promise.resolve(this.worker.compute(entry.job));
     } catch (e) {

@@ -1,16 +1,28 @@
-// Plain payloads between the app and the view-factor worker: typed arrays and
+// Plain payloads between the app and the view-factor workers: typed arrays and
 // numbers only, so they cross postMessage cheaply. The job is the geometry and
-// nothing else: surface names, properties and units never reach the worker, so
-// editing them never needs a job.
+// nothing else: surface names, properties and units never reach the workers, so
+// editing them never needs a job. The one exception is a sketch whose edge matrix
+// would pass the core's budget (above 5000 edges): its job carries the surface
+// index and comes back as surface sums, so a rename or regroup there needs a job.
+import type { SurfaceRowSums } from '../core/surfaceRows';
 import type { CircleInput, PolygonInput } from '../core/scene';
+import { edgeMatrixFits } from '../core/viewFactors';
 
 export interface ViewFactorJob {
   polygons: { kind: 'enclosure' | 'solid'; points: Float64Array }[];
   /** Exact circles; their arcs are numbered after every polygon edge. */
   circles?: CircleInput[];
+  /** Only for sketches past the edge-matrix budget: sum straight to these surfaces. */
+  surfaces?: JobSurfaces;
 }
 
-/** Edge-level view factors: the one costly stage, computed in the worker. */
+/** Surface of every edge (0..count-1), edges in the core's order. */
+export interface JobSurfaces {
+  edgeSurface: Int32Array;
+  count: number;
+}
+
+/** Edge-level view factors: the one costly stage, computed in the workers. */
 export interface EdgeViewFactors {
   /** Polygon edges and arcs. */
   edgeCount: number;
@@ -22,16 +34,77 @@ export interface EdgeViewFactors {
   closed: boolean;
 }
 
+/** Surface sums of a sketch past the edge-matrix budget (no edge matrix). */
+export interface SurfaceViewFactors {
+  edgeCount: number;
+  /** Edge lengths, sketch units. */
+  edgeLength: Float64Array;
+  /** The surface index the sums were taken for. */
+  edgeSurface: Int32Array;
+  surfaceCount: number;
+  /** Surface lengths (sum of their edges), sketch units. */
+  surfaceLength: Float64Array;
+  /** G_IJ = L_I F_IJ, row-major surfaceCount x surfaceCount, sketch units. */
+  exchange: Float64Array;
+  closed: boolean;
+}
+
+/** What a job answers: edge factors, or (past the budget) surface sums. */
+export type ViewFactorAnswer = EdgeViewFactors | SurfaceViewFactors;
+
+/** True when surface sums were taken for this surface index (same surface of every edge; names do not matter). */
+export function sumsFitSurfaces(r: SurfaceViewFactors, edgeSurface: ArrayLike<number>, count: number): boolean {
+  if (r.surfaceCount !== count || r.edgeSurface.length !== edgeSurface.length) return false;
+  for (let i = 0; i < edgeSurface.length; i++) if (r.edgeSurface[i] !== edgeSurface[i]) return false;
+  return true;
+}
+
+/** One worker's share of a job: packed exchange lengths of its rows (see core pairRows.ts), or their surface sums. */
+export type RowsAnswer =
+  | { kind: 'matrix'; edgeLength: Float64Array; closed: boolean; rows: Int32Array; packed: Float64Array }
+  | { kind: 'surfaces'; edgeLength: Float64Array; closed: boolean; sums: SurfaceRowSums };
+
 export interface ViewFactorApi {
-  compute(job: ViewFactorJob): Promise<EdgeViewFactors> | EdgeViewFactors;
+  compute(job: ViewFactorJob): Promise<ViewFactorAnswer> | ViewFactorAnswer;
+  /** The pairs of the given rows (ascending), for a pool sharing one job. */
+  computeRows(job: ViewFactorJob, rows: Int32Array): Promise<RowsAnswer> | RowsAnswer;
+}
+
+export function isSurfaceAnswer(r: ViewFactorAnswer): r is SurfaceViewFactors {
+  return 'exchange' in r;
+}
+
+/** Edges in a job's matrix: polygon edges, then arcs. */
+export function jobEdgeCount(job: ViewFactorJob): number {
+  let n = 0;
+  for (const p of job.polygons) n += p.points.length >> 1;
+  for (const c of job.circles ?? []) n += c.arcs;
+  return n;
+}
+
+/** True when a sketch of this many edges is computed as surface sums (its edge matrix would pass the budget). */
+export function needsSurfaceJob(edgeCount: number): boolean {
+  return !edgeMatrixFits(edgeCount);
+}
+
+/**
+ * How many times the base time limit a job may take: 1 up to 2000 edges, then
+ * growing with the pairs (20,000 edges: 100 times), so only a hang trips it.
+ */
+export function jobTimeScale(job: ViewFactorJob): number {
+  const n = jobEdgeCount(job);
+  return Math.max(1, (n / 2000) ** 2);
 }
 
 export function jobFromPolygons(
   polygons: readonly PolygonInput[],
   circles: readonly CircleInput[] = [],
+  surfaces?: JobSurfaces,
 ): ViewFactorJob {
-  return {
+  const job: ViewFactorJob = {
     polygons: polygons.map((p) => ({ kind: p.kind, points: Float64Array.from(p.points) })),
     circles: circles.map((c) => ({ kind: c.kind, cx: c.cx, cy: c.cy, radius: c.radius, arcs: c.arcs })),
   };
+  if (surfaces) job.surfaces = { edgeSurface: Int32Array.from(surfaces.edgeSurface), count: surfaces.count };
+  return job;
 }

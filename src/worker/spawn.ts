@@ -1,16 +1,24 @@
-// Start the real browser worker (Vite bundles it from this URL form).
+// Start the real browser workers (Vite bundles them from this URL form): one per
+// logical core (navigator.hardwareConcurrency, capped), sharing each job's rows.
 import * as Comlink from 'comlink';
 import type { WorkerHandle } from './client';
 import type { ViewFactorApi } from './job';
+import { poolHandle, poolSize, type RowWorker } from './pool';
 
-export function spawnViewFactorWorker(): WorkerHandle {
+function spawnRowWorker(): RowWorker {
   const worker = new Worker(new URL('./viewFactorWorker.ts', import.meta.url), { type: 'module' });
   const api = Comlink.wrap<ViewFactorApi>(worker);
   return {
-    compute: (job) => api.compute(job),
+    computeRows: (job, rows) => api.computeRows(job, rows),
     terminate: () => worker.terminate(),
     onCrash: (listener) => {
       worker.addEventListener('error', (e) => listener(e.message || 'the view-factor worker stopped'));
     },
   };
+}
+
+/** The view-factor pool as one handle for the client (replaced whole after a failure). */
+export function spawnViewFactorWorker(): WorkerHandle {
+  const cores = typeof navigator === 'undefined' ? 1 : navigator.hardwareConcurrency;
+  return poolHandle(Array.from({ length: poolSize(cores) }, spawnRowWorker));
 }

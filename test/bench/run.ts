@@ -9,6 +9,7 @@ import { demoSketch } from '../../src/state/demo';
 import { restore, toScene } from '../../src/document';
 import { solveBalance } from '../../src/core/balance';
 import { mixedSection } from './balanceScene';
+import './pool';
 
 function demoScene(): SceneInput {
   const r = restore(demoSketch);

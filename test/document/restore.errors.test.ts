@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { restore, MAX_EDGES } from '../../src/document';
+import { restore, MAX_EDGES, MAX_SURFACES } from '../../src/document';
 
 // Every bad input of the file reader gets a specific message naming what and
 // where (shapes, points and edges counted from 1) and the rule broken.
@@ -541,16 +541,32 @@ describe('restore refuses impossible geometry', () => {
 describe('restore refuses very large sketches before computing', () => {
   it(`more than ${MAX_EDGES} edges`, () => {
     // The documented limit (README, "What the reader checks"), so the message below is not only the constant echoed.
-    expect(MAX_EDGES).toBe(5000);
+    expect(MAX_EDGES).toBe(20000);
     const ring = (n: number) =>
       Array.from({ length: n }, (_, k) => [Math.cos((2 * Math.PI * k) / n), Math.sin((2 * Math.PI * k) / n)]);
     expect(only(withShapes({ kind: 'enclosure', points: ring(MAX_EDGES + 1), surface: 'wall' }))).toBe(
-      `the sketch has ${MAX_EDGES + 1} edges; the limit is ${MAX_EDGES} (the view-factor matrix grows with the square of the edge count)`,
+      `the sketch has ${MAX_EDGES + 1} edges; the limit is ${MAX_EDGES} (the work grows with the square of the edge count)`,
     );
     expect(restore(withShapes({ kind: 'enclosure', points: ring(MAX_EDGES), surface: 'wall' })).ok).toBe(true);
     expect(only({ ...minimal, shapes: new Array(MAX_EDGES).fill(block) })).toMatch(
-      /the sketch has 5000 shapes; the limit is 5000 edges/,
+      /the sketch has 20000 shapes; the limit is 20000 edges/,
     );
+  });
+
+  it(`more than ${MAX_SURFACES} surfaces`, () => {
+    // The documented limit (README, "Limits"): the exchange holds surfaces^2 numbers.
+    expect(MAX_SURFACES).toBe(5000);
+    const ring = (n: number) =>
+      Array.from({ length: n }, (_, k) => [Math.cos((2 * Math.PI * k) / n), Math.sin((2 * Math.PI * k) / n)]);
+    const named = (n: number) => Array.from({ length: n }, (_, k) => `wall ${k + 1}`);
+    expect(
+      only(withShapes({ kind: 'enclosure', points: ring(MAX_SURFACES + 1), surface: named(MAX_SURFACES + 1) })),
+    ).toBe(
+      `the sketch has ${MAX_SURFACES + 1} surfaces; the limit is ${MAX_SURFACES} (the surface factors and the heat exchange grow with the square of the surface count)`,
+    );
+    expect(
+      restore(withShapes({ kind: 'enclosure', points: ring(MAX_SURFACES), surface: named(MAX_SURFACES) })).ok,
+    ).toBe(true);
   });
 });
 

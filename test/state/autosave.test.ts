@@ -12,6 +12,7 @@ import { demoSketch } from '../../src/state/demo';
 import { createAppStore } from '../../src/state/store';
 import { setVertex } from '../../src/state/edits/shapeEdits';
 import { MemoryStorage } from './memoryStorage';
+import { MAX_EDGES } from '../../src/document/limits';
 import type { SketchFile } from '../../src/state/sketchFile';
 
 /** Point 3 of the first shape in the autosaved text. */
@@ -132,8 +133,8 @@ describe('autosave', () => {
     const stop = startAutosave(store, storage, documentApi);
     store.getState().edit((d) => setVertex(d, 0, 2, [40, 30]));
     const good = storage.getItem(AUTOSAVE_KEY);
-    // A 5001-sided polygon: one edge past the documented limit of 5000.
-    const n = 5001;
+    // A polygon one edge past the documented limit.
+    const n = MAX_EDGES + 1;
     const ring = Array.from({ length: n }, (_, k): [number, number] => [
       Math.cos((2 * Math.PI * k) / n),
       Math.sin((2 * Math.PI * k) / n),
@@ -141,7 +142,7 @@ describe('autosave', () => {
     store.getState().edit((d) => ({ ...d, shapes: [{ kind: 'enclosure', points: ring, surface: 'wall' }] }));
     expect(storage.getItem(AUTOSAVE_KEY)).toBe(good);
     const paused = store.getState().notices.find((n) => n.text.startsWith('Autosave paused'));
-    expect(paused?.text).toContain('5001 edges; the limit is 5000');
+    expect(paused?.text).toContain(`${n} edges; the limit is ${MAX_EDGES}`);
     stop();
   });
 

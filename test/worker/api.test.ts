@@ -4,7 +4,13 @@ import * as Comlink from 'comlink';
 import { MessageChannel } from 'node:worker_threads';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter';
 import { viewFactorApi } from '../../src/worker/api';
-import { jobFromPolygons, type EdgeViewFactors, type ViewFactorApi } from '../../src/worker/job';
+import {
+  isSurfaceAnswer,
+  jobFromPolygons,
+  type EdgeViewFactors,
+  type ViewFactorAnswer,
+  type ViewFactorApi,
+} from '../../src/worker/job';
 import { documentApi } from '../../src/state/documentApi';
 import { surfaceFactors } from '../../src/state/results/derive';
 import { surfaceIndex } from '../../src/document/surfaceIndex';
@@ -46,6 +52,12 @@ function overChannel() {
   };
 }
 
+/** Edge factors (a job without surfaces never answers surface sums). */
+function edgeAnswer(r: ViewFactorAnswer): EdgeViewFactors {
+  if (isSurfaceAnswer(r)) throw new Error('expected edge factors');
+  return r;
+}
+
 /**
  * Independent of the code under test: surfaces numbered by first appearance, and
  * F_IJ = sum_{i in I, j in J} L_i F_ij / L_I (the area-weighted sum of the summation
@@ -75,7 +87,7 @@ describe('worker api', () => {
     const { remote, close } = overChannel();
     const sketch = checked(polygonDemo());
     const { scene } = documentApi.toScene(sketch);
-    const viaWorker = await remote.compute(jobFromPolygons(scene.polygons));
+    const viaWorker = edgeAnswer(await remote.compute(jobFromPolygons(scene.polygons)));
     close();
     const edgeCount = sketch.shapes.reduce((k, s) => k + s.points.length, 0); // 6 + 4 x 12
     expect(edgeCount).toBe(54);
@@ -114,9 +126,11 @@ describe('worker api', () => {
     // Hottel's crossed strings (Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., Table 13.1):
     // adjacent (1 + 1 - sqrt 2) / 2, opposite (2 sqrt 2 - 2) / 2; a flat wall does not see itself.
     const { remote, close } = overChannel();
-    const r = await remote.compute({
-      polygons: [{ kind: 'enclosure', points: Float64Array.from([0, 0, 1, 0, 1, 1, 0, 1]) }],
-    });
+    const r = edgeAnswer(
+      await remote.compute({
+        polygons: [{ kind: 'enclosure', points: Float64Array.from([0, 0, 1, 0, 1, 1, 0, 1]) }],
+      }),
+    );
     close();
     expect(r.edgeCount).toBe(4);
     expect(Array.from(r.edgeLength)).toEqual([1, 1, 1, 1]);

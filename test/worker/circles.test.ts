@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { computeEdgeViewFactors } from '../../src/worker/api';
-import { jobFromPolygons } from '../../src/worker/job';
+import { isSurfaceAnswer, jobFromPolygons } from '../../src/worker/job';
 import { geometryKey, scaleBetween } from '../../src/state/results/geometry';
 
 // Circles travel in the view-factor job: their arcs follow every polygon edge in the
@@ -12,6 +12,7 @@ const tube = { kind: 'solid' as const, cx: 1, cy: 1, radius: 0.25, arcs: 3 };
 describe('circles in the view-factor job', () => {
   it('computes polygon edges then arcs, every row summing to one', () => {
     const r = computeEdgeViewFactors(jobFromPolygons([box], [tube]));
+    if (isSurfaceAnswer(r)) throw new Error('a job without surfaces answers edge factors');
     expect(r.edgeCount).toBe(4 + 3);
     // Arc lengths r * 2 pi / 3, computed here.
     for (let a = 4; a < 7; a++) expect(r.edgeLength[a]).toBeCloseTo((0.25 * 2 * Math.PI) / 3, 14);

@@ -1,5 +1,10 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { ViewFactorClient, type JobOutcome, type RestartEvent } from '../../src/worker/client';
+import {
+  CANCEL_RUNNING_FROM_EDGES,
+  ViewFactorClient,
+  type JobOutcome,
+  type RestartEvent,
+} from '../../src/worker/client';
 import type { ViewFactorJob } from '../../src/worker/job';
 import { fakeResult, spawner } from './fakeWorker';
 
@@ -172,6 +177,32 @@ describe('view-factor client', () => {
       { timeLimitMs: 1000 },
     );
     expect(await client.run(job(1))).toMatchObject({ kind: 'failed', reason: 'threw', message: 'boom' });
+    client.dispose();
+  });
+
+  it('a big running job is cancelled on every worker when a newer one arrives; the newer one runs on fresh workers', async () => {
+    const { workers, spawn } = spawner();
+    const events: RestartEvent[] = [];
+    const client = new ViewFactorClient(spawn, { timeLimitMs: 1000, onRestart: (e) => events.push(e) });
+    const n = CANCEL_RUNNING_FROM_EDGES;
+    const big = (tag: number): ViewFactorJob => ({
+      polygons: [{ kind: 'enclosure', points: Float64Array.from({ length: 2 * n }, (_, k) => (k === 0 ? tag : k)) }],
+    });
+    const first = client.run(big(1));
+    await flush();
+    expect(workers[0].calls).toHaveLength(1);
+    const second = client.run(big(2));
+    expect(await first).toEqual({ kind: 'dropped' });
+    expect(workers[0].terminated).toBe(true);
+    await flush();
+    expect(workers[1].calls.map((c) => c.job.polygons[0].points[0])).toEqual([2]);
+    // A late answer from the ended workers changes nothing; a cancel is no failure.
+    workers[0].calls[0].resolve(fakeResult(workers[0].calls[0].job));
+    workers[1].calls[0].resolve(fakeResult(workers[1].calls[0].job));
+    const outcome = await second;
+    expect(outcome.kind === 'done' && outcome.result.edgeLength[0]).toBe(2);
+    expect(client.restarts).toBe(0);
+    expect(events).toEqual([]);
     client.dispose();
   });
 });

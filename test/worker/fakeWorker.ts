@@ -1,11 +1,11 @@
 // A stand-in for the view-factor worker: each job waits until the test answers,
 // throws, or never answers (a hang).
 import type { WorkerHandle } from '../../src/worker/client';
-import type { EdgeViewFactors, ViewFactorJob } from '../../src/worker/job';
+import type { EdgeViewFactors, ViewFactorAnswer, ViewFactorJob } from '../../src/worker/job';
 
 export interface PendingCall {
   job: ViewFactorJob;
-  resolve: (r: EdgeViewFactors) => void;
+  resolve: (r: ViewFactorAnswer) => void;
   reject: (e: unknown) => void;
 }
 
@@ -13,7 +13,7 @@ export class FakeWorker implements WorkerHandle {
   calls: PendingCall[] = [];
   terminated = false;
   private crash: ((m: string) => void) | null = null;
-  compute(job: ViewFactorJob): Promise<EdgeViewFactors> {
+  compute(job: ViewFactorJob): Promise<ViewFactorAnswer> {
     return new Promise((resolve, reject) => this.calls.push({ job, resolve, reject }));
   }
   terminate() {

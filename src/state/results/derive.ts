@@ -1,10 +1,10 @@
 // The cheap stages of the results pipeline, pure and cached on exactly their
 // inputs: edge factors + surface index -> surface factors (a rename or a group
 // redoes only this sum); the one staleness rule; the table numbers.
-import { aggregateToSurfaces } from '../../core/surfaces';
+import { aggregateToSurfaces, surfaceResult } from '../../core/surfaces';
 import type { ViewFactorResult } from '../../core/scene';
 import type { SurfaceIndex } from '../../document/surfaceIndex';
-import type { EdgeViewFactors } from '../../worker/job';
+import { isSurfaceAnswer, sumsFitSurfaces, type SurfaceViewFactors, type ViewFactorAnswer } from '../../worker/job';
 import type { CheckedSketch } from '../documentApi';
 import type { Units } from '../sketchFile';
 import { scaleBetween } from './geometry';
@@ -25,18 +25,23 @@ export interface ShownResult {
   elapsedMs: number;
 }
 
-const sums = new WeakMap<EdgeViewFactors, WeakMap<SurfaceIndex, { scale: number; result: ViewFactorResult }>>();
+const sums = new WeakMap<ViewFactorAnswer, WeakMap<SurfaceIndex, { scale: number; result: ViewFactorResult }>>();
 
 /**
  * Surface factors from edge factors: F_IJ = sum L_i F_ij / L_I over the edges of
  * I and J. `scale` multiplies the edge lengths (a geometry that is the computed
  * one scaled, e.g. after a change of units); the factors do not change.
  */
-export function surfaceFactors(edges: EdgeViewFactors, surfaces: SurfaceIndex, scale = 1): ViewFactorResult {
+export function surfaceFactors(edges: ViewFactorAnswer, surfaces: SurfaceIndex, scale = 1): ViewFactorResult {
   let bySurfaces = sums.get(edges);
   if (!bySurfaces) sums.set(edges, (bySurfaces = new WeakMap()));
   const hit = bySurfaces.get(surfaces);
   if (hit && hit.scale === scale) return hit.result;
+  if (isSurfaceAnswer(edges)) {
+    const result = scaledSums(edges, surfaces, scale);
+    bySurfaces.set(surfaces, { scale, result });
+    return result;
+  }
   const lengths = scale === 1 ? edges.edgeLength : edges.edgeLength.map((L) => L * scale);
   const result = aggregateToSurfaces(
     edges.edgeCount,
@@ -50,14 +55,37 @@ export function surfaceFactors(edges: EdgeViewFactors, surfaces: SurfaceIndex, s
   return result;
 }
 
+/**
+ * Surface sums taken in the workers (sketches past the edge-matrix budget): they
+ * fit only the surface index they were taken for; names may differ. F is G / L
+ * from the unscaled sums, so a change of units leaves every factor as it was.
+ */
+function scaledSums(r: SurfaceViewFactors, surfaces: SurfaceIndex, scale: number): ViewFactorResult {
+  if (!sumsFitSurfaces(r, surfaces.edgeSurface, surfaces.names.length))
+    throw new Error('surface sums were taken for another surface index');
+  const result = surfaceResult(r.edgeCount, r.edgeLength, r.surfaceLength, r.exchange, r.closed);
+  if (scale === 1) return result;
+  return {
+    ...result,
+    edgeLength: r.edgeLength.map((L) => L * scale),
+    surfaceLength: r.surfaceLength.map((L) => L * scale),
+  };
+}
+
+/** True when the answer can be summed to these surfaces (edge factors always can). */
+export function answerFitsSurfaces(r: ViewFactorAnswer, surfaces: SurfaceIndex): boolean {
+  return !isSurfaceAnswer(r) || sumsFitSurfaces(r, surfaces.edgeSurface, surfaces.names.length);
+}
+
 let lastCache: ViewFactorCache | null = null;
 let lastShown: ShownResult | null = null;
 
 /**
  * What is on screen: the newest edge factors summed to surfaces. When they were
- * computed for the current geometry (up to scale), the current names, units and
- * properties go with them; otherwise those of the sketch they were computed for,
- * and they are stale. This is the only staleness rule.
+ * computed for the current geometry (up to scale; for surface sums, and the same
+ * surface of every edge), the current names, units and properties go with them;
+ * otherwise those of the sketch they were computed for, and they are stale. This
+ * is the only staleness rule.
  */
 export function shownResult(vf: ViewFactorCache): ShownResult | null {
   if (vf === lastCache) return lastShown;
@@ -70,7 +98,9 @@ function deriveShown(vf: ViewFactorCache): ShownResult | null {
   const edges = vf.edges;
   if (!edges) return null;
   const current = vf.current;
-  const scale = current ? scaleBetween(edges.basis.key, current.key) : null;
+  // Surface sums (past the edge-matrix budget) fit the current sketch only while its surface index is theirs.
+  const scale =
+    current && answerFitsSurfaces(edges.result, current.surfaces) ? scaleBetween(edges.basis.key, current.key) : null;
   const basis = current && scale !== null ? current : edges.basis;
   return {
     names: basis.surfaces.names,

@@ -1,13 +1,17 @@
 // Keeps the results cache in step with the document. Every document change is
 // checked (cached per document); a view-factor job is posted only when the
-// geometry key changes, so names, properties and units never cost a job.
+// geometry key changes, so names, properties and units never cost a job. The
+// exception: a sketch whose edge matrix would pass the core's budget (above 5000
+// edges) is summed to surfaces in the workers, so there a rename that merges or
+// splits surfaces, or a regroup, posts a job too (a plain rename does not).
 import type { DocumentApi } from '../documentApi';
 import type { SketchFile } from '../sketchFile';
 import type { AppStore } from '../store';
 import type { JobOutcome } from '../../worker/client';
-import { jobFromPolygons, type ViewFactorJob } from '../../worker/job';
+import { jobFromPolygons, needsSurfaceJob, type ViewFactorAnswer, type ViewFactorJob } from '../../worker/job';
 import { checkedGeometry, type CheckedGeometry } from './checked';
 import { scaleBetween } from './geometry';
+import { answerFitsSurfaces } from './derive';
 
 /** What the pipeline needs of the worker client. */
 export interface JobRunner {
@@ -38,21 +42,21 @@ function refresh(
   }
   const current = checkedGeometry(doc.shapes, check.sketch);
   const edges = viewFactors.edges;
-  if (edges && scaleBetween(edges.basis.key, current.key) !== null) {
+  if (edges && fits(edges.basis, edges.result, current)) {
     setViewFactors({ status: 'ready', current, problems: [], error: null });
     return;
   }
   const waiting = pending.job;
   setViewFactors({
-    status: waiting && sameKey(waiting.basis, current) ? viewFactors.status : 'computing',
+    status: waiting && sameJob(waiting.basis, current) ? viewFactors.status : 'computing',
     current,
     problems: [],
     error: null,
   });
-  if (waiting && sameKey(waiting.basis, current)) return;
+  if (waiting && sameJob(waiting.basis, current)) return;
   const job: Pending = { basis: current };
   pending.job = job;
-  void runner.run(jobFromPolygons(current.polygons, current.circles)).then((outcome) => {
+  void runner.run(jobOf(current)).then((outcome) => {
     if (pending.job === job) pending.job = null;
     file(store, job.basis, outcome);
   });
@@ -62,18 +66,47 @@ function sameKey(a: CheckedGeometry, b: CheckedGeometry): boolean {
   return scaleBetween(a.key, b.key) !== null;
 }
 
+/** Surface sums are posted for sketches past the edge-matrix budget; they need the surface index. */
+function summedToSurfaces(g: CheckedGeometry): boolean {
+  return needsSurfaceJob(g.surfaces.edgeSurface.length);
+}
+
+function jobOf(g: CheckedGeometry): ViewFactorJob {
+  const surfaces = { edgeSurface: g.surfaces.edgeSurface, count: g.surfaces.names.length };
+  return jobFromPolygons(g.polygons, g.circles, summedToSurfaces(g) ? surfaces : undefined);
+}
+
+/** The job for `a` answers for `b` too: same geometry up to scale and, for surface sums, the same surface index. */
+function sameJob(a: CheckedGeometry, b: CheckedGeometry): boolean {
+  if (!sameKey(a, b)) return false;
+  return !summedToSurfaces(b) || sameEdgeSurfaces(a, b);
+}
+
+function sameEdgeSurfaces(a: CheckedGeometry, b: CheckedGeometry): boolean {
+  const x = a.surfaces,
+    y = b.surfaces;
+  if (x === y) return true;
+  if (x.names.length !== y.names.length || x.edgeSurface.length !== y.edgeSurface.length) return false;
+  return x.edgeSurface.every((s, i) => s === y.edgeSurface[i]);
+}
+
+/** An answer computed for `basis` gives the current sketch's factors. */
+function fits(basis: CheckedGeometry, result: ViewFactorAnswer, current: CheckedGeometry): boolean {
+  return sameKey(basis, current) && answerFitsSurfaces(result, current.surfaces);
+}
+
 /** File a finished job with the geometry it was computed for. */
 function file(store: AppStore, basis: CheckedGeometry, outcome: JobOutcome): void {
   if (outcome.kind === 'dropped') return;
   const s = store.getState();
   const current = s.viewFactors.current;
-  const forCurrent = current !== null && sameKey(basis, current);
+  const forCurrent = current !== null && sameJob(basis, current);
   if (outcome.kind === 'done') {
     // A draft opened while this job ran (results cleared, sketch invalid): the answer is another drawing's.
     if (!current && !s.viewFactors.edges && s.viewFactors.status === 'invalid') return;
     // Never trade factors that fit the current geometry for older ones (a drag that came back).
     const held = s.viewFactors.edges;
-    if (!forCurrent && held && current && sameKey(held.basis, current)) return;
+    if (!forCurrent && held && current && fits(held.basis, held.result, current)) return;
     const edges = { basis, result: outcome.result, elapsedMs: outcome.elapsedMs };
     // An older job's answer is still shown (at most one behind) while the newest one runs.
     s.setViewFactors(forCurrent ? { edges, status: 'ready' } : { edges });

@@ -6,7 +6,7 @@
 // cached stages in derive.ts.
 import type { StateCreator } from 'zustand';
 import type { RestoreOutcome } from '../documentApi';
-import type { EdgeViewFactors } from '../../worker/job';
+import type { ViewFactorAnswer } from '../../worker/job';
 import type { AppState } from '../store';
 import type { CheckedGeometry } from './checked';
 
@@ -23,7 +23,7 @@ export type Problems = Extract<RestoreOutcome, { ok: false }>['errors'];
 /** The worker's answer, filed with the geometry it was computed for. */
 export interface EdgeStage {
   basis: CheckedGeometry;
-  result: EdgeViewFactors;
+  result: ViewFactorAnswer;
   /** Wall-clock time of the job, ms. */
   elapsedMs: number;
 }

@@ -1,0 +1,171 @@
+// View factors over worker threads for the command line. The commands are
+// synchronous, so the main thread takes chunks of rows itself and then waits on
+// a shared counter (Atomics.wait) while the workers finish; edge rows go into one
+// shared matrix, surface sums come back over ports read without an event loop
+// (receiveMessageOnPort). Results are the same bit for bit for any thread count.
+import { availableParallelism } from 'node:os';
+import { MessageChannel, receiveMessageOnPort, Worker, type MessagePort } from 'node:worker_threads';
+import { buildEdges, allEdgeLengths, totalEdgeCount } from '../core/edges';
+import type { SceneInput, ViewFactorResult } from '../core/scene';
+import { aggregateToSurfaces } from '../core/surfaces';
+import { SurfaceAccumulator, surfaceFactorsFromPairs, type SurfaceRowSums } from '../core/surfaceRows';
+import { EdgePairs } from '../core/pairRows';
+import { computeViewFactors, edgeMatrixFits } from '../core/viewFactors';
+import { CONTROL_SLOTS, DONE, FAILED, rowChunks, workChunks, type ThreadJob } from './threadWork';
+
+/** Most threads accepted by --threads. */
+export const MAX_THREADS = 256;
+
+/** Without --threads, sketches with fewer pairs than this run in-process: starting threads would cost more than it saves. */
+export const THREADS_FROM_PAIRS = 2_000_000;
+
+/** How long the main thread waits without any chunk finishing before it gives up on the workers, ms. */
+const STALL_MS = 300_000;
+
+export const THREADS_HELP = `  --threads N  worker threads for the view factors (default: one per core,
+               ${availableParallelism()} here; 1 computes in-process). Sketches under about 2000
+               edges run in-process unless --threads is given. Any N gives
+               the same numbers, bit for bit.`;
+
+/** Read a --threads value: a whole number from 1 to MAX_THREADS, or a problem. */
+export function parseThreads(text: string | undefined): number | string {
+  if (text === undefined) return '--threads needs a number';
+  const n = Number(text);
+  if (!/^\d+$/.test(text.trim()) || !Number.isInteger(n) || n < 1 || n > MAX_THREADS)
+    return `--threads needs a whole number from 1 to ${MAX_THREADS} (got '${text.slice(0, 40)}')`;
+  return n;
+}
+
+/**
+ * Surface view factors of a scene (as core computeViewFactors), with the pairs
+ * shared over `threads` threads (the main thread one of them). `threads` undefined:
+ * one per core for sketches of at least THREADS_FROM_PAIRS pairs, else in-process.
+ * Past the edge-matrix budget (or with `sumToSurfaces`, for tests) the threads sum
+ * straight to surfaces. `workersOnly` (tests): the main thread only waits, so
+ * `threads` workers do every chunk.
+ */
+export function threadedViewFactors(
+  scene: SceneInput,
+  threads?: number,
+  options: { sumToSurfaces?: boolean; workersOnly?: boolean } = {},
+): ViewFactorResult {
+  const edges = buildEdges(scene.polygons, scene.circles);
+  const n = totalEdgeCount(edges);
+  const pairs = (n * (n + 1)) / 2;
+  const count = threads ?? (pairs >= THREADS_FROM_PAIRS ? availableParallelism() : 1);
+  if (scene.edgeSurface.length !== n)
+    throw new Error(`edgeSurface has ${scene.edgeSurface.length} entries for ${n} edges`);
+  const summed = options.sumToSurfaces === true || !edgeMatrixFits(n);
+  if (count <= 1 || n < 2) {
+    if (!summed) return computeViewFactors(scene);
+    return surfaceFactorsFromPairs(new EdgePairs(edges), scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
+  }
+  const length = allEdgeLengths(edges);
+  const chunkStart = rowChunks(n, count);
+  const job: ThreadJob = {
+    id: nextJobId++,
+    polygons: scene.polygons.map((p) => ({ kind: p.kind, points: Float64Array.from(p.points) })),
+    circles: (scene.circles ?? []).map((c) => ({ ...c })),
+    chunkStart,
+    control: new SharedArrayBuffer(4 * CONTROL_SLOTS),
+    matrix: summed ? null : new SharedArrayBuffer(8 * n * n),
+    edgeSurface: summed ? Int32Array.from(scene.edgeSurface) : null,
+    surfaceCount: scene.surfaceCount,
+  };
+  const acc = summed ? new SurfaceAccumulator(length, scene.edgeSurface, scene.surfaceCount) : null;
+  const workers = helpers(Math.min(count, chunkStart.length - 1) - (options.workersOnly ? 0 : 1));
+  for (const w of workers) w.port.postMessage({ job });
+  try {
+    const takeIn = () => {
+      for (const w of workers) drain(w.port, job.id, acc);
+    };
+    if (!options.workersOnly) workChunks(job, (sums) => acc?.add(sums), takeIn);
+    waitForChunks(job, takeIn);
+    takeIn();
+  } catch (error) {
+    // A thread that failed or stalled may hold broken state: start afresh next time.
+    endThreads();
+    throw error;
+  }
+  if (acc) return acc.result(edges.hasEnclosure);
+  const F = new Float64Array(job.matrix!);
+  return aggregateToSurfaces(n, length, F, scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
+}
+
+/**
+ * Worker threads kept between jobs in this process (a command that computes
+ * several sketches, or the tests, pays the start-up once); unreferenced, so
+ * they never keep the process alive.
+ */
+const threads: { worker: Worker; port: MessagePort }[] = [];
+let nextJobId = 1;
+
+function helpers(count: number): { worker: Worker; port: MessagePort }[] {
+  while (threads.length < count) {
+    const { port1, port2 } = new MessageChannel();
+    // execArgv []: the boot file registers tsx itself; inheriting the parent's loader flags would register it twice.
+    const worker = new Worker(new URL('./threadBoot.mjs', import.meta.url), {
+      workerData: { port: port2 },
+      transferList: [port2],
+      execArgv: [],
+    });
+    worker.unref();
+    port1.unref();
+    threads.push({ worker, port: port1 });
+  }
+  return threads.slice(0, Math.max(0, count));
+}
+
+/** End every kept worker thread. */
+export function endThreads(): void {
+  for (const t of threads.splice(0)) {
+    t.port.close();
+    void t.worker.terminate();
+  }
+}
+
+/** Take in every message waiting on a worker's port for this job: surface sums, or a failure (thrown here). */
+function drain(port: MessagePort, id: number, acc: SurfaceAccumulator | null): void {
+  for (let m = receiveMessageOnPort(port); m; m = receiveMessageOnPort(port)) {
+    const message = m.message as { id: number; sums?: SurfaceRowSums; error?: string };
+    if (message.id !== id) continue; // a late word about an earlier job
+    if (message.error !== undefined) throw new Error(`a view-factor thread failed: ${message.error}`);
+    if (message.sums && acc) acc.add(message.sums);
+  }
+}
+
+/** Block until every chunk is done, taking in sums as they come; fail on a failed or stalled thread. */
+function waitForChunks(job: ThreadJob, takeIn: () => void): void {
+  const control = new Int32Array(job.control);
+  const chunks = job.chunkStart.length - 1;
+  let seen = Atomics.load(control, DONE);
+  let since = Date.now();
+  while (seen < chunks) {
+    if (Atomics.load(control, FAILED) !== 0) {
+      takeIn(); // throws with the thread's message
+      throw new Error('a view-factor thread failed');
+    }
+    Atomics.wait(control, DONE, seen, 500);
+    takeIn();
+    const now = Atomics.load(control, DONE);
+    if (now !== seen) {
+      seen = now;
+      since = Date.now();
+    } else if (Date.now() - since > STALL_MS) {
+      throw new Error(`no view-factor thread finished any work for ${STALL_MS / 1000} s`);
+    }
+  }
+}
+
+/** The --threads option for a command's own-option reader (args.ts OwnOption): sets `into.threads`. */
+export function threadsOption(
+  arg: string,
+  takeNext: () => string | undefined,
+  into: { threads?: number },
+): string | null | undefined {
+  if (arg !== '--threads' && !arg.startsWith('--threads=')) return undefined;
+  const value = parseThreads(arg === '--threads' ? takeNext() : arg.slice('--threads='.length));
+  if (typeof value === 'string') return value;
+  into.threads = value;
+  return null;
+}

@@ -1,0 +1,60 @@
+// A pool of workers that looks like one worker to the client: each job's rows are
+// split over the workers by balanced pair counts (core balancedRowSets), every
+// worker computes its rows, and the main thread puts the answers together
+// (assemble.ts). A part that fails fails the whole job; the client then ends the
+// pool (terminate: every worker, so no part of a dropped job keeps running) and
+// starts a fresh one.
+import { balancedRowSets } from '../core/pairRows';
+import { assembleAnswer } from './assemble';
+import type { WorkerHandle } from './client';
+import { jobEdgeCount, type RowsAnswer, type ViewFactorAnswer, type ViewFactorJob } from './job';
+
+/** One worker of a pool: computes some rows of a job. */
+export interface RowWorker {
+  computeRows(job: ViewFactorJob, rows: Int32Array): Promise<RowsAnswer>;
+  terminate(): void;
+  onCrash?(listener: (message: string) => void): void;
+}
+
+/**
+ * Fewest pairs worth a worker of their own (about a millisecond of work): smaller
+ * jobs use fewer workers, since each part costs a message and a setup.
+ */
+export const MIN_PAIRS_PER_WORKER = 4096;
+
+/** Most workers in a pool, whatever the machine reports (each holds its own copy of the sketch). */
+export const MAX_POOL_SIZE = 16;
+
+/** Workers for a machine reporting `cores` logical cores: at least 1, at most MAX_POOL_SIZE. */
+export function poolSize(cores: number | undefined): number {
+  const c = Number.isFinite(cores) ? Math.floor(cores!) : 1;
+  return Math.min(MAX_POOL_SIZE, Math.max(1, c));
+}
+
+/** How many of `available` workers one job of `edgeCount` edges uses. */
+export function workersForJob(edgeCount: number, available: number, minPairs = MIN_PAIRS_PER_WORKER): number {
+  const pairs = (edgeCount * (edgeCount + 1)) / 2;
+  return Math.max(1, Math.min(available, edgeCount, Math.floor(pairs / minPairs)));
+}
+
+/**
+ * The pool as one `WorkerHandle`. `workers` are started by the caller and ended by
+ * `terminate`. `minPairsPerWorker` (tests) overrides MIN_PAIRS_PER_WORKER.
+ */
+export function poolHandle(workers: readonly RowWorker[], minPairsPerWorker = MIN_PAIRS_PER_WORKER): WorkerHandle {
+  if (workers.length === 0) throw new Error('a worker pool needs at least one worker');
+  return {
+    async compute(job: ViewFactorJob): Promise<ViewFactorAnswer> {
+      const n = jobEdgeCount(job);
+      const sets = balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker));
+      const parts = await Promise.all(sets.map((rows, k) => workers[k].computeRows(job, rows)));
+      return assembleAnswer(job, n, parts);
+    },
+    terminate() {
+      for (const w of workers) w.terminate();
+    },
+    onCrash(listener) {
+      for (const w of workers) w.onCrash?.(listener);
+    },
+  };
+}

@@ -1,0 +1,108 @@
+// The view-factor commands over worker threads: --threads 1 (in-process) and
+// --threads 2 print the same numbers, and every thread count gives the same
+// edge matrix sums and surface sums bit for bit (core pairRows.ts: a pair's
+// factor depends only on the sketch and the pair).
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { main } from '../../src/cli/main';
+import type { CliIO } from '../../src/cli/io';
+import { parseThreads, threadedViewFactors } from '../../src/cli/threads';
+import { computeViewFactors } from '../../src/core/viewFactors';
+import type { SceneInput } from '../../src/core/scene';
+import { mixedSceneArb, edgeCountOf } from '../core/arc/arbitraries';
+
+function run(args: string[], files: Record<string, string> = {}) {
+  let out = '';
+  let err = '';
+  const io: CliIO = {
+    out: (t) => void (out += t),
+    err: (t) => void (err += t),
+    readFile: (path) => files[path],
+  };
+  return { code: main(args, io), out, err };
+}
+
+const bytes = (a: Float64Array) => new Uint8Array(a.buffer, a.byteOffset, a.byteLength);
+
+/** A duct split into 40 wall pieces (4 surfaces) around three tubes, one exact circle among them. */
+function ductFile(): string {
+  const wall: number[][] = [];
+  for (let k = 0; k < 10; k++) wall.push([k, 0]);
+  for (let k = 0; k < 10; k++) wall.push([10, k * 0.4]);
+  for (let k = 10; k > 0; k--) wall.push([k, 4]);
+  for (let k = 10; k > 0; k--) wall.push([0, k * 0.4]);
+  const names = wall.map((_, k) => ['floor', 'right', 'roof', 'left'][Math.floor(k / 10)]);
+  const tube = (cx: number, sides: number) =>
+    Array.from({ length: sides }, (_, k) => [
+      cx + 0.5 * Math.cos((2 * Math.PI * k) / sides),
+      2 + 0.5 * Math.sin((2 * Math.PI * k) / sides),
+    ]);
+  return JSON.stringify({
+    version: 2,
+    units: 'm',
+    shapes: [
+      { kind: 'enclosure', points: wall, surface: names },
+      { kind: 'solid', points: tube(2.5, 16), surface: 'tube a' },
+      { kind: 'solid', points: tube(5, 9), surface: 'tube b' },
+      { kind: 'solid', circle: { center: [7.5, 2], radius: 0.5 }, surface: ['tube c 1', 'tube c 2'] },
+    ],
+    surfaces: { floor: { emissivity: 0.8, temperature: 1200 }, roof: { emissivity: 0.6 } },
+  });
+}
+
+describe('--threads', () => {
+  it('factors and exchange print the same with --threads 1 and --threads 2', () => {
+    const files = { 'duct.json': ductFile() };
+    for (const command of [
+      ['factors', 'duct.json', '--json'],
+      ['exchange', 'duct.json', '--json'],
+    ]) {
+      const one = run([...command, '--threads', '1'], files);
+      const two = run([...command, '--threads=2'], files);
+      expect(one.err).toBe('');
+      expect(one.code).toBe(0);
+      expect(two.err).toBe('');
+      expect(two.code).toBe(0);
+      // JSON prints every double in full (shortest round-trip form), so equal text is equal bits.
+      expect(two.out).toBe(one.out);
+    }
+  });
+
+  it('random sketches with circles: 1, 2 and 3 threads give identical surface factors, by edge matrix and by direct sums', () => {
+    const scenes = fc.sample(mixedSceneArb, { numRuns: 6, seed: 1331 }).filter((s) => edgeCountOf(s) >= 6);
+    expect(scenes.length).toBeGreaterThan(2);
+    for (const s of scenes) {
+      const n = edgeCountOf(s);
+      const scene: SceneInput = {
+        polygons: s.polygons,
+        circles: s.circles,
+        edgeSurface: Array.from({ length: n }, (_, k) => k % 3),
+        surfaceCount: Math.min(3, n),
+      };
+      const single = computeViewFactors(scene);
+      const direct = threadedViewFactors(scene, 1);
+      expect(bytes(direct.F)).toEqual(bytes(single.F));
+      // workersOnly: the worker threads do every chunk (the main thread would otherwise take them all before they start).
+      const summed = [1, 2, 3].map((t) => threadedViewFactors(scene, t, { sumToSurfaces: true, workersOnly: t > 1 }));
+      for (const t of [2, 3])
+        expect(bytes(threadedViewFactors(scene, t, { workersOnly: true }).F)).toEqual(bytes(single.F));
+      for (const r of summed.slice(1)) expect(bytes(r.F)).toEqual(bytes(summed[0].F));
+      // Direct sums against the edge-matrix path: the same positive terms in another order.
+      for (let k = 0; k < single.F.length; k++)
+        expect(Math.abs(summed[1].F[k] - single.F[k])).toBeLessThanOrEqual(1e-13 * Math.abs(single.F[k]));
+    }
+  }, 120_000); // starting worker threads (tsx compiles their modules) is slow on a busy machine
+
+  it('refuses a bad thread count with exit 2, and the help names the option', () => {
+    const files = { 'duct.json': ductFile() };
+    for (const bad of ['0', '-1', '1.5', 'many', '100000']) {
+      const r = run(['factors', 'duct.json', '--threads', bad], files);
+      expect(r.code).toBe(2);
+      expect(r.err).toMatch(/--threads needs a whole number from 1 to 256/);
+    }
+    expect(run(['factors', 'duct.json', '--threads'], files).err).toMatch(/--threads needs a number/);
+    expect(parseThreads('4')).toBe(4);
+    for (const command of ['factors', 'exchange', 'sensitivity', 'report'])
+      expect(run([command, '--help']).out).toMatch(/--threads N {2}worker threads/);
+  });
+});

@@ -1,0 +1,164 @@
+// Rows shared over threads: every split of the rows gives the same edge matrix and
+// the same surface sums, bit for bit, as one thread; surface sums taken straight
+// from the pairs equal the edge-matrix path's to rounding. Each "worker" here has
+// its own EdgePairs (its own scratch), as a real worker thread would.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { buildEdges, type EdgeSet } from '../../src/core/edges';
+import { balancedRowSets, EdgePairs, packRows, packedLength, rowPairCount, unpackRows } from '../../src/core/pairRows';
+import type { CircleInput, PolygonInput } from '../../src/core/scene';
+import { aggregateToSurfaces } from '../../src/core/surfaces';
+import { SurfaceAccumulator, SurfaceRowSummer } from '../../src/core/surfaceRows';
+import { computeViewFactors, edgeViewFactors } from '../../src/core/viewFactors';
+import { sketchArb } from './arbitraries';
+import { mixedSceneArb } from './arc/arbitraries';
+
+const WORKERS = [1, 2, 3, 4];
+
+/** The bytes of a Float64Array, so -0 and 0 (and every last bit) count as different. */
+const bytes = (a: Float64Array) => new Uint8Array(a.buffer, a.byteOffset, a.byteLength);
+
+/** The edge matrix computed part by part, each part on its own integrators, assembled here. */
+function splitMatrix(edges: EdgeSet, workers: number): Float64Array {
+  const one = new EdgePairs(edges);
+  const n = one.count;
+  const F = new Float64Array(n * n);
+  // Parts answered in reverse order: assembly must not depend on arrival.
+  for (const rows of balancedRowSets(n, workers).reverse()) {
+    const packed = packRows(new EdgePairs(edges), rows);
+    expect(packed.length).toBe(packedLength(n, rows));
+    unpackRows(one.length, rows, packed, F);
+  }
+  return F;
+}
+
+/** Surface sums part by part, handed to the accumulator last part first. */
+function splitSurfaces(edges: EdgeSet, edgeSurface: Int32Array, m: number, workers: number) {
+  const L = new EdgePairs(edges).length;
+  const acc = new SurfaceAccumulator(L, edgeSurface, m);
+  for (const rows of balancedRowSets(L.length, workers).reverse()) {
+    acc.add(new SurfaceRowSummer(new EdgePairs(edges), edgeSurface, m).sum(rows));
+  }
+  return acc.result(edges.hasEnclosure);
+}
+
+/** Up to `m` surfaces, edges assigned by a seeded scramble (not contiguous). */
+function surfacesOf(n: number, m: number, seed: number): Int32Array {
+  const s = Int32Array.from({ length: n }, (_, i) => (Math.imul(i + seed, 2654435761) >>> 7) % m);
+  // Renumber to 0..count-1 by first appearance, so no surface is empty.
+  const id = new Map<number, number>();
+  return s.map((v) => {
+    if (!id.has(v)) id.set(v, id.size);
+    return id.get(v)!;
+  });
+}
+
+function checkScene(polygons: PolygonInput[], circles: CircleInput[], m: number, seed: number) {
+  const edges = buildEdges(polygons, circles);
+  const single = edgeViewFactors(edges);
+  const n = Math.round(Math.sqrt(single.length));
+  const edgeSurface = surfacesOf(n, m, seed);
+  const count = Math.max(...edgeSurface) + 1;
+  const direct: ReturnType<typeof splitSurfaces>[] = [];
+  for (const w of WORKERS) {
+    expect(bytes(splitMatrix(edges, w))).toEqual(bytes(single));
+    direct.push(splitSurfaces(edges, edgeSurface, count, w));
+  }
+  for (const d of direct.slice(1)) {
+    expect(bytes(d.F)).toEqual(bytes(direct[0].F));
+    expect(bytes(d.surfaceLength)).toEqual(bytes(direct[0].surfaceLength));
+    expect(bytes(d.rowSumResidual)).toEqual(bytes(direct[0].rowSumResidual));
+  }
+  // The edge-matrix path (aggregateToSurfaces over the one-thread matrix): the same
+  // sums of positive terms in another order, so equal to rounding, entry by entry.
+  const viaMatrix = aggregateToSurfaces(n, new EdgePairs(edges).length, single, edgeSurface, count, edges.hasEnclosure);
+  for (let k = 0; k < count * count; k++) {
+    const a = direct[0].F[k],
+      b = viaMatrix.F[k];
+    expect(Math.abs(a - b)).toBeLessThanOrEqual(1e-13 * Math.max(Math.abs(a), Math.abs(b)));
+  }
+  for (let I = 0; I < count; I++)
+    expect(Math.abs(direct[0].rowSumResidual[I] - viaMatrix.rowSumResidual[I])).toBeLessThanOrEqual(1e-13);
+}
+
+describe('rows shared over workers', () => {
+  it('random polygon sketches: edge matrix and surface sums identical for 1 to 4 workers', () => {
+    fc.assert(
+      fc.property(sketchArb, fc.integer({ min: 1, max: 6 }), fc.nat(1000), (polys, m, seed) => {
+        const polygons = polys.map((p) => ({ kind: p.kind, points: p.points.flat() }));
+        checkScene(polygons, [], m, seed);
+      }),
+      { numRuns: 25, seed: 1304 },
+    );
+  });
+
+  it('random sketches with exact circles (arcs that see themselves included): identical for 1 to 4 workers', () => {
+    fc.assert(
+      fc.property(mixedSceneArb, fc.integer({ min: 1, max: 6 }), fc.nat(1000), (scene, m, seed) => {
+        checkScene(scene.polygons, scene.circles, m, seed);
+      }),
+      { numRuns: 25, seed: 1306 },
+    );
+  });
+
+  it('balanced row sets: every row once, ascending, pair counts within one row of each other', () => {
+    for (const n of [1, 2, 7, 100, 1013])
+      for (const p of [1, 2, 3, 4, 8]) {
+        const sets = balancedRowSets(n, p);
+        expect(sets).toHaveLength(p);
+        const seen = new Uint8Array(n);
+        const loads = sets.map((rows) => {
+          let load = 0;
+          rows.forEach((i, k) => {
+            if (k > 0) expect(i).toBeGreaterThan(rows[k - 1]);
+            seen[i]++;
+            load += rowPairCount(n, i);
+          });
+          return load;
+        });
+        expect(Array.from(seen)).toEqual(new Array<number>(n).fill(1));
+        // Greedy dealing of decreasing costs: no set exceeds another by more than the largest row (n pairs).
+        expect(Math.max(...loads) - Math.min(...loads)).toBeLessThanOrEqual(n);
+        // All pairs counted once: n rows of n - i pairs (the diagonal included).
+        expect(loads.reduce((a, b) => a + b, 0)).toBe((n * (n + 1)) / 2);
+      }
+  });
+
+  it('the direct sums give exact reciprocity and match an independent area-weighted sum over the whole matrix', () => {
+    // A 3 x 1 duct split in 12 unit edges around a square bar, 4 surfaces.
+    const wall = [0, 0, 1, 0, 2, 0, 3, 0, 3, 1, 2, 1, 1, 1, 0, 1];
+    const bar = [1.4, 0.4, 1.6, 0.4, 1.6, 0.6, 1.4, 0.6];
+    const polygons: PolygonInput[] = [
+      { kind: 'enclosure', points: wall },
+      { kind: 'solid', points: bar },
+    ];
+    const edgeSurface = Int32Array.from([0, 0, 0, 1, 2, 2, 2, 1, 3, 3, 3, 3]);
+    const edges = buildEdges(polygons);
+    const L = new EdgePairs(edges).length;
+    const F = edgeViewFactors(edges);
+    // Independent of both paths: F_IJ = sum L_i F_ij / sum L_i over the full matrix
+    // (Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1).
+    const m = 4;
+    const num = new Array<number>(m * m).fill(0);
+    const den = new Array<number>(m).fill(0);
+    for (let i = 0; i < 12; i++) {
+      den[edgeSurface[i]] += L[i];
+      for (let j = 0; j < 12; j++) num[edgeSurface[i] * m + edgeSurface[j]] += L[i] * F[i * 12 + j];
+    }
+    const direct = splitSurfaces(edges, edgeSurface, m, 3);
+    expect(direct.reciprocityResidual).toBe(0);
+    for (let k = 0; k < m * m; k++)
+      expect(Math.abs(direct.F[k] - num[k] / den[Math.floor(k / m)])).toBeLessThanOrEqual(1e-14);
+    // Closed duct: every row sums to one (summation rule, Incropera et al., 6th ed., sec. 13.1).
+    for (let I = 0; I < m; I++) expect(Math.abs(direct.rowSumResidual[I])).toBeLessThan(1e-12);
+  });
+
+  it('computeViewFactors keeps the edge-matrix path below the budget (the same bits as summing the matrix)', () => {
+    const polygons: PolygonInput[] = [{ kind: 'enclosure', points: [0, 0, 2, 0, 2, 1, 1, 2, 0, 1] }];
+    const edges = buildEdges(polygons);
+    const edgeSurface = [0, 1, 1, 0, 2];
+    const r = computeViewFactors({ polygons, edgeSurface, surfaceCount: 3 });
+    const viaMatrix = aggregateToSurfaces(5, new EdgePairs(edges).length, edgeViewFactors(edges), edgeSurface, 3, true);
+    expect(bytes(r.F)).toEqual(bytes(viaMatrix.F));
+  });
+});

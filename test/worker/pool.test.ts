@@ -1,0 +1,146 @@
+// The worker pool: rows shared over 1-4 workers behind real message channels give
+// the one-thread answer bit for bit; a failing part fails the job and the client
+// replaces the whole pool (every worker ended), then retries on a fresh one.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import * as Comlink from 'comlink';
+import { MessageChannel } from 'node:worker_threads';
+import nodeEndpoint from 'comlink/dist/esm/node-adapter';
+import { viewFactorApi, computeEdgeViewFactors } from '../../src/worker/api';
+import { ViewFactorClient } from '../../src/worker/client';
+import {
+  isSurfaceAnswer,
+  jobFromPolygons,
+  type RowsAnswer,
+  type ViewFactorApi,
+  type ViewFactorJob,
+} from '../../src/worker/job';
+import { MAX_POOL_SIZE, poolHandle, poolSize, workersForJob, type RowWorker } from '../../src/worker/pool';
+import { aggregateToSurfaces } from '../../src/core/surfaces';
+import { mixedSceneArb, edgeCountOf } from '../core/arc/arbitraries';
+
+const bytes = (a: Float64Array) => new Uint8Array(a.buffer, a.byteOffset, a.byteLength);
+const flush = () => new Promise((r) => setTimeout(r, 0));
+
+/** `count` workers, each the real api behind its own channel. */
+function channelPool(count: number) {
+  const ports: { close(): void }[] = [];
+  const workers: RowWorker[] = Array.from({ length: count }, () => {
+    const { port1, port2 } = new MessageChannel();
+    ports.push(port1, port2);
+    Comlink.expose(viewFactorApi, nodeEndpoint(port1));
+    const remote = Comlink.wrap<ViewFactorApi>(nodeEndpoint(port2));
+    return { computeRows: (job, rows) => remote.computeRows(job, rows), terminate: () => {} };
+  });
+  return { handle: poolHandle(workers, 1), close: () => ports.forEach((p) => p.close()) };
+}
+
+/** Surfaces numbered per shape (each polygon and each circle one surface). */
+function perShape(job: ViewFactorJob) {
+  const edgeSurface: number[] = [];
+  job.polygons.forEach((p, k) => {
+    for (let e = 0; e < p.points.length / 2; e++) edgeSurface.push(k);
+  });
+  (job.circles ?? []).forEach((c, k) => {
+    for (let a = 0; a < c.arcs; a++) edgeSurface.push(job.polygons.length + k);
+  });
+  return { edgeSurface: Int32Array.from(edgeSurface), count: job.polygons.length + (job.circles ?? []).length };
+}
+
+describe('view-factor pool', () => {
+  it('1 to 4 workers over real channels: edge matrix and surface sums identical to one thread, bit for bit', async () => {
+    const scenes = fc.sample(mixedSceneArb, { numRuns: 8, seed: 1313 }).filter((s) => edgeCountOf(s) >= 8);
+    expect(scenes.length).toBeGreaterThan(3);
+    for (const scene of scenes) {
+      const job = jobFromPolygons(scene.polygons, scene.circles);
+      const single = computeEdgeViewFactors(job);
+      if (isSurfaceAnswer(single)) throw new Error('expected edge factors');
+      const surfaces = perShape(job);
+      const summedJob = { ...job, surfaces };
+      const sums: Float64Array[] = [];
+      for (const count of [1, 2, 3, 4]) {
+        const { handle, close } = channelPool(count);
+        // Every worker takes part (at least one pair per worker here).
+        const r = await handle.compute(job);
+        const s = await handle.compute(summedJob);
+        close();
+        if (isSurfaceAnswer(r) || !isSurfaceAnswer(s)) throw new Error('wrong kind of answer');
+        expect(bytes(r.F)).toEqual(bytes(single.F));
+        expect(bytes(r.edgeLength)).toEqual(bytes(single.edgeLength));
+        sums.push(s.exchange);
+      }
+      for (const s of sums) expect(bytes(s)).toEqual(bytes(sums[0]));
+      // Against the edge-matrix path: the same positive terms summed in another order.
+      const m = surfaces.count;
+      const viaMatrix = aggregateToSurfaces(
+        single.edgeCount,
+        single.edgeLength,
+        single.F,
+        surfaces.edgeSurface,
+        m,
+        true,
+      );
+      const lengths = viaMatrix.surfaceLength;
+      for (let k = 0; k < m * m; k++) {
+        const a = sums[0][k],
+          b = viaMatrix.F[k] * lengths[Math.floor(k / m)];
+        expect(Math.abs(a - b)).toBeLessThanOrEqual(1e-13 * Math.max(Math.abs(a), Math.abs(b)));
+      }
+    }
+  });
+
+  it('shares every row when the job is big enough, one worker for a tiny one', () => {
+    expect(workersForJob(4, 4)).toBe(1);
+    expect(workersForJob(152, 4)).toBe(2); // 11,628 pairs: two parts of at least 4096
+    expect(workersForJob(1000, 4)).toBe(4);
+    expect(workersForJob(1000, 1)).toBe(1);
+    expect(poolSize(undefined)).toBe(1);
+    expect(poolSize(0)).toBe(1);
+    expect(poolSize(6)).toBe(6);
+    expect(poolSize(256)).toBe(MAX_POOL_SIZE);
+  });
+
+  it('a part that fails fails the job; the client ends every worker of the pool and retries a crash on a fresh pool', async () => {
+    const ended: number[] = [];
+    const crashes: ((m: string) => void)[] = [];
+    let started = 0;
+    const pending: { resolve: (r: RowsAnswer) => void; job: ViewFactorJob; rows: Int32Array; id: number }[] = [];
+    const spawnPool = () =>
+      poolHandle(
+        [0, 1, 2].map(() => {
+          const id = started++;
+          return {
+            computeRows: (job: ViewFactorJob, rows: Int32Array) =>
+              new Promise<RowsAnswer>((resolve) => pending.push({ resolve, job, rows, id })),
+            terminate: () => ended.push(id),
+            onCrash: (l: (m: string) => void) => crashes.push(l),
+          };
+        }),
+        1,
+      );
+    const client = new ViewFactorClient(spawnPool, { timeLimitMs: 1000 });
+    // A 40-edge ring, shared by all three workers (one pair per worker is enough here).
+    const ring = Array.from({ length: 80 }, (_, k) =>
+      k % 2 === 0 ? Math.cos((Math.PI * k) / 40) : Math.sin((Math.PI * (k - 1)) / 40),
+    );
+    const job = jobFromPolygons([{ kind: 'enclosure', points: ring }]);
+    const outcome = client.run(job);
+    await flush();
+    expect(pending.map((p) => p.id)).toEqual([0, 1, 2]);
+    // Worker 1 of the pool dies mid-job: the whole pool is ended, a fresh one retries the job.
+    crashes[1]('worker 1 ran out of memory');
+    expect(ended.sort()).toEqual([0, 1, 2]);
+    await flush();
+    const retry = pending.filter((p) => p.id >= 3);
+    expect(retry.map((p) => p.id)).toEqual([3, 4, 5]);
+    // The fresh pool answers with the real rows.
+    for (const p of retry) p.resolve(viewFactorApi.computeRows(p.job, p.rows) as RowsAnswer);
+    const done = await outcome;
+    expect(done.kind).toBe('done');
+    const single = computeEdgeViewFactors(job);
+    if (done.kind !== 'done' || isSurfaceAnswer(done.result) || isSurfaceAnswer(single)) throw new Error('no matrix');
+    expect(bytes(done.result.F)).toEqual(bytes(single.F));
+    client.dispose();
+    expect(ended.sort((a, b) => a - b)).toEqual([0, 1, 2, 3, 4, 5]);
+  });
+});
