@@ -1,14 +1,15 @@
 // An outline's points as a table: a paste of two columns (x and y) from a
 // spreadsheet replaces a shape's points in one step.
 import Papa from 'papaparse';
+import { MAX_EDGES } from '../../document';
 import type { Point, SketchFile } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
 import { compactSurface } from './surfaceNames';
 import { readNumber } from './numberInput';
 import { replaceShape } from './shapeEdits';
 
-/** Most points one paste may bring (the file's edge limit). */
-export const MAX_PASTED_POINTS = 5000;
+/** Most points one paste may bring: one outline of the file's whole edge limit. */
+export const MAX_PASTED_POINTS = MAX_EDGES;
 
 /**
  * Points from pasted text: one point a line, x and y in the first two cells
