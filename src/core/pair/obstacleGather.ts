@@ -20,7 +20,14 @@ const KEEP_WHOLE = 1;
 const CLIP = 2;
 
 export class ObstacleGatherer {
-  private readonly clipOut: SegmentClip = { t0: 0, t1: 1, startInside: false, endInside: false };
+  private readonly clipOut: SegmentClip = {
+    t0: 0,
+    t1: 1,
+    startInside: false,
+    endInside: false,
+    startSide: -1,
+    endSide: -1,
+  };
   private readonly windows = new ConvexWindows();
   /** Signed distance of the current body's centre from each side, positive inside H. */
   private readonly centreDist = new Float64Array(4);
@@ -37,6 +44,14 @@ export class ObstacleGatherer {
   private bodyI = -1;
   private bodyJ = -1;
   private blocked = false;
+  /** The body that blocked the pair (when blocked). */
+  private blocker = -1;
+  /**
+   * Per edge, the body that last blocked a pair of it: tried first, so that a pair
+   * such a body blocks ends before any search. Only a hint: a blocked pair returns 0
+   * whichever body shows it, so the result never depends on what came before.
+   */
+  private readonly hint: Int32Array;
 
   constructor(
     private readonly e: EdgeSet,
@@ -44,6 +59,7 @@ export class ObstacleGatherer {
     private readonly region: ViewRegion,
     private readonly pieces: ObstaclePieces,
   ) {
+    this.hint = new Int32Array(e.count).fill(-1);
     this.visitWall = (id: number) => {
       this.clipEdge(this.ob.wallEdges[id]);
       return false; // keep no result list in flatbush
@@ -68,18 +84,30 @@ export class ObstacleGatherer {
     this.bodyI = ob.bodyOfPolygon[this.e.polygon[i]];
     this.bodyJ = ob.bodyOfPolygon[this.e.polygon[j]];
     this.blocked = false;
+    if (this.hinted(this.hint[i]) || this.hinted(this.hint[j])) return true;
     if (ob.bodyTree) ob.bodyTree.search(R.minX, R.minY, R.maxX, R.maxY, this.visitBody);
     else for (let b = 0; b < ob.bodyCount && !this.blocked; b++) this.clipBody(b);
-    if (this.blocked) return true;
+    if (this.blocked) {
+      this.hint[i] = this.hint[j] = this.blocker;
+      return true;
+    }
     ob.wallTree?.search(R.minX, R.minY, R.maxX, R.maxY, this.visitWall);
     return false;
   }
 
+  /** Does body b (a hint, -1 for none) block every sight line of the pair? */
+  private hinted(b: number): boolean {
+    if (b < 0) return false;
+    const ob = this.ob;
+    if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return false;
+    return this.cutsView(b);
+  }
+
   /**
-   * Does convex body b block every sight line? It does when the disc inscribed about its
-   * centre meets both side strings (sides 1 and 3): the body then holds a chord from one
-   * string to the other, which cuts H between i and j. Float test with a margin that
-   * only ever says no in doubt.
+   * Does body b block every sight line? It does when a disc inside it (bodyRIn about
+   * its centre) meets both side strings (sides 1 and 3): the body then holds a chord
+   * from one string to the other, which cuts H between i and j. Float test with a
+   * margin that only ever says no in doubt.
    */
   private cutsView(b: number): boolean {
     const ob = this.ob,
@@ -119,8 +147,9 @@ export class ObstacleGatherer {
     const first = ob.bodyFirstEdge[b],
       end = ob.bodyEdgeEnd[b];
     if (!inside) {
-      if (ob.bodyConvex[b] && this.cutsView(b)) {
+      if (this.cutsView(b)) {
         this.blocked = true;
+        this.blocker = b;
         return;
       }
       // Angular windows pay off for many-sided bodies; a few corners are cheaper to test all.
@@ -221,6 +250,8 @@ export class ObstacleGatherer {
       py + c.t1 * (qy - py),
       c.startInside,
       c.endInside,
+      c.startSide,
+      c.endSide,
     );
   }
 }
