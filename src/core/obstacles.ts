@@ -1,6 +1,6 @@
-import Flatbush from 'flatbush';
 import type { EdgeSet } from './edges';
 import { orient } from './orient';
+import { RegionTree } from './pair/regionTree';
 import { pointInPolygon } from './pointInPolygon';
 
 /**
@@ -38,14 +38,12 @@ export interface ObstacleIndex {
   bodyRIn: Float64Array;
   /** Body index of each polygon, -1 for the enclosure. */
   bodyOfPolygon: Int32Array;
-  /** Flatbush over body bounding boxes when there are many bodies; null means test them all. */
-  bodyTree: Flatbush | null;
+  /** Body bounding boxes, searched by view region. */
+  bodyTree: RegionTree;
   /** Wall edges that can block (not on the enclosure's convex hull), and their index. */
   wallEdges: Int32Array;
-  wallTree: Flatbush | null;
+  wallTree: RegionTree;
 }
-
-const MANY_BODIES = 48;
 
 /** Build the obstacle index of an oriented edge set. */
 export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
@@ -74,7 +72,7 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   const bodyRIn = new Float64Array(B);
   const walkEdge = new Int32Array(edges.count);
   const walkAngle = new Float64Array(edges.count);
-  const bodyTree = B > MANY_BODIES ? new Flatbush(B) : null;
+  const bodyBox = new Float64Array(4 * B);
   bodies.forEach((p, b) => {
     bodyFirstEdge[b] = start[p];
     bodyEdgeEnd[b] = start[p + 1];
@@ -134,24 +132,24 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
         e = edges.nextEdge[e];
       }
     }
-    bodyTree?.add(x0, y0, x1, y1);
+    bodyBox.set([x0, y0, x1, y1], 4 * b);
   });
-  bodyTree?.finish();
+  const bodyTree = new RegionTree(bodyBox);
 
   const wallEdges = Int32Array.from(walls);
-  let wallTree: Flatbush | null = null;
-  if (walls.length > 0) {
-    wallTree = new Flatbush(walls.length);
-    for (const e of walls) {
-      wallTree.add(
+  const wallBox = new Float64Array(4 * walls.length);
+  walls.forEach((e, w) => {
+    wallBox.set(
+      [
         Math.min(edges.ax[e], edges.bx[e]),
         Math.min(edges.ay[e], edges.by[e]),
         Math.max(edges.ax[e], edges.bx[e]),
         Math.max(edges.ay[e], edges.by[e]),
-      );
-    }
-    wallTree.finish();
-  }
+      ],
+      4 * w,
+    );
+  });
+  const wallTree = new RegionTree(wallBox);
   return {
     bodyCount: B,
     bodyFirstEdge,

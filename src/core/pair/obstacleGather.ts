@@ -62,11 +62,11 @@ export class ObstacleGatherer {
     this.hint = new Int32Array(e.count).fill(-1);
     this.visitWall = (id: number) => {
       this.clipEdge(this.ob.wallEdges[id]);
-      return false; // keep no result list in flatbush
+      return false;
     };
     this.visitBody = (id: number) => {
-      if (!this.blocked) this.clipBody(id);
-      return false;
+      this.clipBody(id);
+      return this.blocked; // one body blocks it all: stop the search
     };
   }
 
@@ -85,13 +85,12 @@ export class ObstacleGatherer {
     this.bodyJ = ob.bodyOfPolygon[this.e.polygon[j]];
     this.blocked = false;
     if (this.hinted(this.hint[i]) || this.hinted(this.hint[j])) return true;
-    if (ob.bodyTree) ob.bodyTree.search(R.minX, R.minY, R.maxX, R.maxY, this.visitBody);
-    else for (let b = 0; b < ob.bodyCount && !this.blocked; b++) this.clipBody(b);
+    ob.bodyTree.search(R, this.visitBody);
     if (this.blocked) {
       this.hint[i] = this.hint[j] = this.blocker;
       return true;
     }
-    ob.wallTree?.search(R.minX, R.minY, R.maxX, R.maxY, this.visitWall);
+    ob.wallTree.search(R, this.visitWall);
     return false;
   }
 
