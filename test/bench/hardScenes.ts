@@ -17,8 +17,13 @@ const TOOTH_DEPTH = 0.4;
  * fin) and zigzag walls and roof (2 edges a tooth). The rest are bodies: 100 to 200 of
  * them, regular polygons squashed at random (convex) and, every second one, stars
  * (not convex), placed at random without touching each other or the walls.
+ * `options` fixes the number of bodies and their sides (small scenes for tests).
  */
-export function hardScene(seed: number, targetEdges: number): SceneInput {
+export function hardScene(
+  seed: number,
+  targetEdges: number,
+  options: { bodies?: number; sides?: number } = {},
+): SceneInput {
   const rand = mulberry32(seed);
   const wallBudget = Math.max(24, Math.round(targetEdges / 4));
   const fins = Math.max(3, Math.round((0.4 * wallBudget) / 4));
@@ -46,8 +51,8 @@ export function hardScene(seed: number, targetEdges: number): SceneInput {
 
   const bodyBudget = Math.max(0, targetEdges - wall.length / 2);
   // 100 bodies up to 1000 edges, then 50 more per doubling up to 200.
-  const bodies = Math.min(200, Math.max(100, Math.round(50 * Math.log2(targetEdges / 250))));
-  const sides = Math.max(3, Math.round(bodyBudget / bodies));
+  const bodies = options.bodies ?? Math.min(200, Math.max(100, Math.round(50 * Math.log2(targetEdges / 250))));
+  const sides = options.sides ?? Math.max(3, Math.round(bodyBudget / bodies));
   const placed: [number, number, number][] = [];
   const x0 = TOOTH_DEPTH + 0.05,
     x1 = W - TOOTH_DEPTH - 0.05;
@@ -68,7 +73,7 @@ export function hardScene(seed: number, targetEdges: number): SceneInput {
     const n = star ? sides - (sides % 2) : sides;
     for (let k = 0; k < n; k++) {
       const a = (2 * Math.PI * k) / n;
-      const rho = star && k % 2 === 1 ? 0.55 * r : r;
+      const rho = star && k % 2 === 1 ? 0.4 * r : r;
       const u = rho * Math.cos(a),
         v = rho * squash * Math.sin(a);
       pts.push(cx + u * Math.cos(phase) - v * Math.sin(phase), cy + u * Math.sin(phase) + v * Math.cos(phase));
