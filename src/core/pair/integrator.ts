@@ -88,7 +88,6 @@ export class PairIntegrator {
     // since j's front faces i). Only obstructions inside H can block.
     this.region.set(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
     if (this.gatherer.gather(i, j)) return 0;
-    if (this.pieces.hasBlockingChain(E.nextEdge)) return 0;
     if (this.pieces.count === 0 && this.pieces.wholeCount === 0)
       return crossedStrings(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
     this.points.build(this.pieces, a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);

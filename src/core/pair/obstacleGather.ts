@@ -47,9 +47,10 @@ export class ObstacleGatherer {
   /** The body that blocked the pair (when blocked). */
   private blocker = -1;
   /**
-   * Per edge, the body that last blocked a pair of it: tried first, so that a pair
-   * such a body blocks ends before any search. Only a hint: a blocked pair returns 0
-   * whichever body shows it, so the result never depends on what came before.
+   * Per edge, the obstacle that last blocked a pair of it (a body b as b, a wall edge e
+   * as -2 - e, none as -1): tried first, so that a pair it blocks ends before any
+   * search. Only a hint: a blocked pair returns 0 whichever obstacle shows it, and any
+   * other pair is gathered afresh, so no result depends on what came before.
    */
   private readonly hint: Int32Array;
 
@@ -72,34 +73,71 @@ export class ObstacleGatherer {
 
   /**
    * Fill `pieces` with the obstructions of edges i and j inside the region (set for
-   * this pair). Returns true when one body blocks every sight line: the pair then
-   * exchanges nothing, and the pieces are incomplete.
+   * this pair). Returns true when one body, or one chain of edges from one side string
+   * to the other, blocks every sight line: the pair then exchanges nothing, and the
+   * pieces are incomplete.
    */
   gather(i: number, j: number): boolean {
     const ob = this.ob,
       R = this.region;
-    this.pieces.begin();
     this.pairI = i;
     this.pairJ = j;
     this.bodyI = ob.bodyOfPolygon[this.e.polygon[i]];
     this.bodyJ = ob.bodyOfPolygon[this.e.polygon[j]];
+    if (this.probe(this.hint[i]) || this.probe(this.hint[j])) return true;
+    this.pieces.begin();
     this.blocked = false;
-    if (this.hinted(this.hint[i]) || this.hinted(this.hint[j])) return true;
     ob.bodyTree.search(R, this.visitBody);
     if (this.blocked) {
       this.hint[i] = this.hint[j] = this.blocker;
       return true;
     }
     ob.wallTree.search(R, this.visitWall);
-    return false;
+    const chain = this.pieces.blockingChain(this.e.nextEdge);
+    if (chain < 0) return false;
+    const edge = this.pieces.edge[chain];
+    const body = ob.bodyOfPolygon[this.e.polygon[edge]];
+    this.hint[i] = this.hint[j] = body >= 0 ? body : -2 - edge;
+    return true;
   }
 
-  /** Does body b (a hint, -1 for none) block every sight line of the pair? */
-  private hinted(b: number): boolean {
-    if (b < 0) return false;
-    const ob = this.ob;
-    if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return false;
-    return this.cutsView(b);
+  /**
+   * Does obstacle h (a hint: body, wall edge or none, as in `hint`) block every sight
+   * line of the pair by itself? A body is clipped whole; a wall edge with the run of
+   * wall edges joined to it inside H. The pieces are scratch, dropped before the gather.
+   */
+  private probe(h: number): boolean {
+    if (h === -1) return false;
+    this.pieces.begin();
+    this.blocked = false;
+    if (h >= 0) this.clipBody(h);
+    else this.clipWallRun(-2 - h);
+    return this.blocked || this.pieces.blockingChain(this.e.nextEdge) >= 0;
+  }
+
+  /** Clip wall edge `edge` and the wall edges joined to it by corners inside H, both ways. */
+  private clipWallRun(edge: number): void {
+    const E = this.e,
+      P = this.pieces;
+    this.clipEdge(edge);
+    if (!P.has(edge)) return;
+    const limit = E.polygonStart[E.polygon[edge] + 1] - E.polygonStart[E.polygon[edge]];
+    let cur = edge;
+    for (let steps = 0; steps < limit && P.endInside[P.pieceOf(cur)]; steps++) {
+      const next = E.nextEdge[cur];
+      if (P.has(next)) break;
+      this.clipEdge(next);
+      if (!P.has(next)) break;
+      cur = next;
+    }
+    cur = edge;
+    for (let steps = 0; steps < limit && P.startInside[P.pieceOf(cur)]; steps++) {
+      const prev = E.prevEdge[cur];
+      if (P.has(prev)) break;
+      this.clipEdge(prev);
+      if (!P.has(prev)) break;
+      cur = prev;
+    }
   }
 
   /**

@@ -78,12 +78,13 @@ export class ObstaclePieces {
   }
 
   /**
-   * Does one chain of pieces run from the open interior of one side string to that of
-   * the other? It then cuts H in two, i' on one side and j' on the other: every sight
+   * A chain of pieces that runs from the open interior of one side string to that of
+   * the other: it cuts H in two, i' on one side and j' on the other, so every sight
    * line crosses it and the pair exchanges nothing. Exact: the sides come from exact
-   * signs, and chains join at corners strictly inside H. `nextEdge`: EdgeSet.nextEdge.
+   * signs, and chains join at corners strictly inside H. Returns the chain's first
+   * piece, or -1 when there is none. `nextEdge`: EdgeSet.nextEdge.
    */
-  hasBlockingChain(nextEdge: Int32Array): boolean {
+  blockingChain(nextEdge: Int32Array): number {
     for (let s = 0; s < this.count; s++) {
       const from = this.startSide[s];
       if (from !== 1 && from !== 3) continue;
@@ -92,7 +93,7 @@ export class ObstaclePieces {
       for (let steps = 0; steps < this.count; steps++) {
         const to = this.endSide[cur];
         if (to >= 0) {
-          if (to === 4 - from) return true;
+          if (to === 4 - from) return s;
           break;
         }
         const next = nextEdge[this.edge[cur]];
@@ -100,7 +101,7 @@ export class ObstaclePieces {
         cur = this.pieceOfEdge[next];
       }
     }
-    return false;
+    return -1;
   }
 
   addWholeBody(b: number): void {
