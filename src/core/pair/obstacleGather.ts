@@ -84,7 +84,9 @@ export class ObstacleGatherer {
     this.pairJ = j;
     this.bodyI = ob.bodyOfPolygon[this.e.polygon[i]];
     this.bodyJ = ob.bodyOfPolygon[this.e.polygon[j]];
-    if (this.probe(this.hint[i]) || this.probe(this.hint[j])) return true;
+    const hi = this.hint[i],
+      hj = this.hint[j];
+    if (this.probe(hi) || (hj !== hi && this.probe(hj))) return true;
     this.pieces.begin();
     this.blocked = false;
     ob.bodyTree.search(R, this.visitBody);
