@@ -53,6 +53,10 @@ export class ObstacleGatherer {
    * other pair is gathered afresh, so no result depends on what came before.
    */
   private readonly hint: Int32Array;
+  /** The one before (a pair is often blocked by one of two neighbours). */
+  private readonly hint2: Int32Array;
+  /** Bodies probed for the current pair (-1: none), one slot per hint tried. */
+  private readonly probed = new Int32Array(4);
 
   constructor(
     private readonly e: EdgeSet,
@@ -61,12 +65,14 @@ export class ObstacleGatherer {
     private readonly pieces: ObstaclePieces,
   ) {
     this.hint = new Int32Array(e.count).fill(-1);
+    this.hint2 = new Int32Array(e.count).fill(-1);
     this.visitWall = (id: number) => {
-      this.clipEdge(this.ob.wallEdges[id]);
+      const edge = this.ob.wallEdges[id];
+      if (!this.pieces.has(edge)) this.clipEdge(edge); // kept already by a probe
       return false;
     };
     this.visitBody = (id: number) => {
-      this.clipBody(id);
+      if (!this.wasProbed(id)) this.clipBody(id);
       return this.blocked; // one body blocks it all: stop the search
     };
   }
@@ -85,36 +91,66 @@ export class ObstacleGatherer {
     this.bodyI = ob.bodyOfPolygon[this.e.polygon[i]];
     this.bodyJ = ob.bodyOfPolygon[this.e.polygon[j]];
     const hi = this.hint[i],
-      hj = this.hint[j];
-    if (this.probe(hi) || (hj !== hi && this.probe(hj))) return true;
+      hj = this.hint[j],
+      hi2 = this.hint2[i],
+      hj2 = this.hint2[j];
     this.pieces.begin();
     this.blocked = false;
-    ob.bodyTree.search(R, this.visitBody);
+    this.probed.fill(-1);
+    // Probed obstacles keep their pieces; the searches below skip them.
+    if (this.probe(hi, 0) || (hj !== hi && this.probe(hj, 1))) return true;
+    if (hi2 !== hi && hi2 !== hj && this.probe(hi2, 2)) return true;
+    if (hj2 !== hi && hj2 !== hj && hj2 !== hi2 && this.probe(hj2, 3)) return true;
+    if (ob.bodyTree) ob.bodyTree.search(R, this.visitBody);
+    else for (let b = 0; b < ob.bodyCount && !this.blocked; b++) if (!this.wasProbed(b)) this.clipBody(b);
     if (this.blocked) {
-      this.hint[i] = this.hint[j] = this.blocker;
+      this.remember(i, j, this.blocker);
       return true;
     }
     ob.wallTree.search(R, this.visitWall);
     const chain = this.pieces.blockingChain(this.e.nextEdge);
-    if (chain < 0) return false;
+    if (chain < 0) {
+      this.pieces.sortByEdge();
+      return false;
+    }
     const edge = this.pieces.edge[chain];
     const body = ob.bodyOfPolygon[this.e.polygon[edge]];
-    this.hint[i] = this.hint[j] = body >= 0 ? body : -2 - edge;
+    this.remember(i, j, body >= 0 ? body : -2 - edge);
     return true;
+  }
+
+  /** Make obstacle h the first hint of edges i and j, the previous first hint the second. */
+  private remember(i: number, j: number, h: number): void {
+    if (this.hint[i] !== h) {
+      this.hint2[i] = this.hint[i];
+      this.hint[i] = h;
+    }
+    if (this.hint[j] !== h) {
+      this.hint2[j] = this.hint[j];
+      this.hint[j] = h;
+    }
   }
 
   /**
    * Does obstacle h (a hint: body, wall edge or none, as in `hint`) block every sight
    * line of the pair by itself? A body is clipped whole; a wall edge with the run of
-   * wall edges joined to it inside H. The pieces are scratch, dropped before the gather.
+   * wall edges joined to it inside H. The pieces stay: they are part of the gather.
    */
-  private probe(h: number): boolean {
+  private probe(h: number, slot: number): boolean {
     if (h === -1) return false;
-    this.pieces.begin();
-    this.blocked = false;
-    if (h >= 0) this.clipBody(h);
-    else this.clipWallRun(-2 - h);
+    if (h >= 0) {
+      this.probed[slot] = h;
+      this.clipBody(h);
+    } else {
+      this.clipWallRun(-2 - h);
+    }
     return this.blocked || this.pieces.blockingChain(this.e.nextEdge) >= 0;
+  }
+
+  /** Was body b probed for this pair (its pieces kept already)? */
+  private wasProbed(b: number): boolean {
+    const p = this.probed;
+    return p[0] === b || p[1] === b || p[2] === b || p[3] === b;
   }
 
   /** Clip wall edge `edge` and the wall edges joined to it by corners inside H, both ways. */

@@ -16,6 +16,8 @@ export class ObstaclePieces {
   /** Side of H (1 or 3: the strings; 0, 2: i', j') whose open interior the start / end lies on; -1 if none known. */
   startSide = new Int8Array(64);
   endSide = new Int8Array(64);
+  /** Piece indices sorted by edge id (after sortByEdge). */
+  order = new Int32Array(64);
   /** 1 once the piece has been walked into a chain. */
   walked = new Uint8Array(64);
   count = 0;
@@ -75,6 +77,38 @@ export class ObstaclePieces {
     this.stamp[edge] = this.pair;
     this.pieceOfEdge[edge] = s;
     this.count = s + 1;
+  }
+
+  /**
+   * Sort the pieces by edge id into `order`, and the whole bodies by id: what the pair
+   * integral reads then depends only on which obstacles were kept, never on the order
+   * they were gathered in (hints change that order from pair to pair).
+   */
+  sortByEdge(): void {
+    const n = this.count,
+      order = this.order,
+      edge = this.edge;
+    for (let k = 0; k < n; k++) {
+      const s = k,
+        key = edge[k];
+      let m = k - 1;
+      // Insertion sort: pieces arrive mostly in edge order (bodies and walls by runs).
+      while (m >= 0 && edge[order[m]] > key) {
+        order[m + 1] = order[m];
+        m--;
+      }
+      order[m + 1] = s;
+    }
+    const whole = this.wholeBody;
+    for (let k = 1; k < this.wholeCount; k++) {
+      const b = whole[k];
+      let m = k - 1;
+      while (m >= 0 && whole[m] > b) {
+        whole[m + 1] = whole[m];
+        m--;
+      }
+      whole[m + 1] = b;
+    }
   }
 
   /**
@@ -142,6 +176,7 @@ export class ObstaclePieces {
       b.set(a);
       return b;
     };
+    this.order = i32(this.order);
     this.startSide = i8(this.startSide);
     this.endSide = i8(this.endSide);
     this.walked = u8(this.walked);
