@@ -49,8 +49,9 @@ export class ObstacleGatherer {
   /**
    * Per edge, the obstacle that last blocked a pair of it (a body b as b, a wall edge e
    * as -2 - e, none as -1): tried first, so that a pair it blocks ends before any
-   * search. Only a hint: a blocked pair returns 0 whichever obstacle shows it, and any
-   * other pair is gathered afresh, so no result depends on what came before.
+   * search. Only a hint: a blocked pair returns 0 whichever obstacle shows it; for any
+   * other pair a probed obstacle keeps the very pieces the search would have made, and
+   * the pieces are read in edge order, so no result depends on what came before.
    */
   private readonly hint: Int32Array;
   /** The one before (a pair is often blocked by one of two neighbours). */
