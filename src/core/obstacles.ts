@@ -1,6 +1,7 @@
-import Flatbush from 'flatbush';
 import type { EdgeSet } from './edges';
 import { orient } from './orient';
+import { RegionTree } from './pair/regionTree';
+import { pointInPolygon } from './pointInPolygon';
 
 /**
  * Where to look for edges that may block a view, built once per sketch.
@@ -29,15 +30,19 @@ export interface ObstacleIndex {
   walkEdge: Int32Array;
   walkAngle: Float64Array;
   bodyRMin: Float64Array;
-  /** For convex bodies: radius of the largest disc about the centre inside the body (0 otherwise). */
+  /**
+   * Radius of a disc about the centre that lies inside the body (sketch units): for a
+   * convex body the largest; for another body whose centre lies inside it, the
+   * distance from the centre to its nearest edge; 0 when the centre lies outside.
+   */
   bodyRIn: Float64Array;
   /** Body index of each polygon, -1 for the enclosure. */
   bodyOfPolygon: Int32Array;
-  /** Flatbush over body bounding boxes when there are many bodies; null means test them all. */
-  bodyTree: Flatbush | null;
+  /** Body bounding boxes, searched by view region, when there are many bodies; null means test them all. */
+  bodyTree: RegionTree | null;
   /** Wall edges that can block (not on the enclosure's convex hull), and their index. */
   wallEdges: Int32Array;
-  wallTree: Flatbush | null;
+  wallTree: RegionTree;
 }
 
 const MANY_BODIES = 48;
@@ -69,7 +74,7 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   const bodyRIn = new Float64Array(B);
   const walkEdge = new Int32Array(edges.count);
   const walkAngle = new Float64Array(edges.count);
-  const bodyTree = B > MANY_BODIES ? new Flatbush(B) : null;
+  const bodyBox = new Float64Array(4 * B);
   bodies.forEach((p, b) => {
     bodyFirstEdge[b] = start[p];
     bodyEdgeEnd[b] = start[p + 1];
@@ -113,6 +118,10 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
         rIn = Math.min(rIn, (dy * (cx - edges.ax[e]) - dx * (cy - edges.ay[e])) / edges.length[e]);
       }
       bodyRIn[b] = Math.max(0, rIn);
+    } else {
+      bodyRIn[b] = innerRadius(edges, start[p], start[p + 1], cx, cy);
+    }
+    if (bodyConvex[b]) {
       // Solids are walked clockwise, so the angle falls along the walk.
       let e = start[p];
       let previous = Math.atan2(edges.ay[e] - cy, edges.ax[e] - cx);
@@ -125,24 +134,25 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
         e = edges.nextEdge[e];
       }
     }
-    bodyTree?.add(x0, y0, x1, y1);
+    bodyBox.set([x0, y0, x1, y1], 4 * b);
   });
-  bodyTree?.finish();
+  // A few bodies are cheaper to test in turn than to search (measured by `npm run bench`).
+  const bodyTree = B > MANY_BODIES ? new RegionTree(bodyBox) : null;
 
   const wallEdges = Int32Array.from(walls);
-  let wallTree: Flatbush | null = null;
-  if (walls.length > 0) {
-    wallTree = new Flatbush(walls.length);
-    for (const e of walls) {
-      wallTree.add(
+  const wallBox = new Float64Array(4 * walls.length);
+  walls.forEach((e, w) => {
+    wallBox.set(
+      [
         Math.min(edges.ax[e], edges.bx[e]),
         Math.min(edges.ay[e], edges.by[e]),
         Math.max(edges.ax[e], edges.bx[e]),
         Math.max(edges.ay[e], edges.by[e]),
-      );
-    }
-    wallTree.finish();
-  }
+      ],
+      4 * w,
+    );
+  });
+  const wallTree = new RegionTree(wallBox);
   return {
     bodyCount: B,
     bodyFirstEdge,
@@ -204,6 +214,24 @@ function convexHull(edges: EdgeSet, from: number, to: number): number[] {
   const out: number[] = [];
   for (const e of chain) out.push(edges.ax[e], edges.ay[e]);
   return out;
+}
+
+/** Distance (sketch units) from (cx, cy) to the nearest edge of [from, to); 0 when the point is not inside the polygon. */
+function innerRadius(edges: EdgeSet, from: number, to: number, cx: number, cy: number): number {
+  const flat: number[] = [];
+  for (let e = from; e < to; e++) flat.push(edges.ax[e], edges.ay[e]);
+  if (!pointInPolygon(cx, cy, flat)) return 0;
+  let r = Infinity;
+  for (let e = from; e < to; e++) {
+    const x0 = edges.ax[e],
+      y0 = edges.ay[e];
+    const dx = edges.bx[e] - x0,
+      dy = edges.by[e] - y0;
+    let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
+    t = t < 0 ? 0 : t > 1 ? 1 : t;
+    r = Math.min(r, Math.hypot(cx - x0 - t * dx, cy - y0 - t * dy));
+  }
+  return r;
 }
 
 /** A solid's oriented edges (outside on the left, so walked clockwise) never turn left. */

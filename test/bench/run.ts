@@ -155,3 +155,4 @@ for (const v of verdicts) console.log(v);
     `surface balance, 200 surfaces, every condition (${iterations} Newton steps): min ${times[0].toFixed(1)} ms, median ${med.toFixed(1)} ms (target <= 50 ms): ${med <= 50 ? 'met' : 'NOT met'}`,
   );
 }
+await import('./hardBench'); // hard scenes and the crossed-strings floor (issue 13)

@@ -48,7 +48,7 @@ export class FixedPoints {
 
   /**
    * Collect the fixed points for emitting piece a0-a1 and target piece b0-b1 from the
-   * obstruction pieces: join them into chains (runs of one polygon's edges joined by
+   * obstruction pieces (after pieces.sortByEdge()): join them into chains (runs of one polygon's edges joined by
    * corners inside H) and keep each chain's ends and possible silhouette corners.
    */
   build(
@@ -69,12 +69,17 @@ export class FixedPoints {
     for (let w = 0; w < pieces.wholeCount; w++) this.addWholeConvexBody(pieces.wholeBody[w], a0x, a0y, a1x, a1y);
     // Open chains start at a piece whose start is not inside H, or whose previous edge was not kept.
     const prevEdge = this.e.prevEdge;
-    for (let s = 0; s < pieces.count; s++) {
+    // Pieces in edge order (pieces.order), so that the points, and the rounding of the
+    // integral, do not depend on the order the obstacles were gathered in.
+    const order = pieces.order;
+    for (let k = 0; k < pieces.count; k++) {
+      const s = order[k];
       if (!pieces.startInside[s] || !pieces.has(prevEdge[pieces.edge[s]]))
         this.walkChain(pieces, s, true, a0x, a0y, a1x, a1y);
     }
     // What is left are closed chains: bodies lying wholly inside H.
-    for (let s = 0; s < pieces.count; s++) {
+    for (let k = 0; k < pieces.count; k++) {
+      const s = order[k];
       if (!pieces.walked[s]) this.walkChain(pieces, s, false, a0x, a0y, a1x, a1y);
     }
     this.setChainStart(this.chainCount, this.count);

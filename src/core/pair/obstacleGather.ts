@@ -20,7 +20,14 @@ const KEEP_WHOLE = 1;
 const CLIP = 2;
 
 export class ObstacleGatherer {
-  private readonly clipOut: SegmentClip = { t0: 0, t1: 1, startInside: false, endInside: false };
+  private readonly clipOut: SegmentClip = {
+    t0: 0,
+    t1: 1,
+    startInside: false,
+    endInside: false,
+    startSide: -1,
+    endSide: -1,
+  };
   private readonly windows = new ConvexWindows();
   /** Signed distance of the current body's centre from each side, positive inside H. */
   private readonly centreDist = new Float64Array(4);
@@ -37,6 +44,20 @@ export class ObstacleGatherer {
   private bodyI = -1;
   private bodyJ = -1;
   private blocked = false;
+  /** The body that blocked the pair (when blocked). */
+  private blocker = -1;
+  /**
+   * Per edge, the obstacle that last blocked a pair of it (a body b as b, a wall edge e
+   * as -2 - e, none as -1): tried first, so that a pair it blocks ends before any
+   * search. Only a hint: a blocked pair returns 0 whichever obstacle shows it; for any
+   * other pair a probed obstacle keeps the very pieces the search would have made, and
+   * the pieces are read in edge order, so no result depends on what came before.
+   */
+  private readonly hint: Int32Array;
+  /** The one before (a pair is often blocked by one of two neighbours). */
+  private readonly hint2: Int32Array;
+  /** Bodies probed for the current pair (-1: none), one slot per hint tried. */
+  private readonly probed = new Int32Array(4);
 
   constructor(
     private readonly e: EdgeSet,
@@ -44,42 +65,125 @@ export class ObstacleGatherer {
     private readonly region: ViewRegion,
     private readonly pieces: ObstaclePieces,
   ) {
+    this.hint = new Int32Array(e.count).fill(-1);
+    this.hint2 = new Int32Array(e.count).fill(-1);
     this.visitWall = (id: number) => {
-      this.clipEdge(this.ob.wallEdges[id]);
-      return false; // keep no result list in flatbush
+      const edge = this.ob.wallEdges[id];
+      if (!this.pieces.has(edge)) this.clipEdge(edge); // kept already by a probe
+      return false;
     };
     this.visitBody = (id: number) => {
-      if (!this.blocked) this.clipBody(id);
-      return false;
+      if (!this.wasProbed(id)) this.clipBody(id);
+      return this.blocked; // one body blocks it all: stop the search
     };
   }
 
   /**
    * Fill `pieces` with the obstructions of edges i and j inside the region (set for
-   * this pair). Returns true when one body blocks every sight line: the pair then
-   * exchanges nothing, and the pieces are incomplete.
+   * this pair). Returns true when one body, or one chain of edges from one side string
+   * to the other, blocks every sight line: the pair then exchanges nothing, and the
+   * pieces are incomplete.
    */
   gather(i: number, j: number): boolean {
     const ob = this.ob,
       R = this.region;
-    this.pieces.begin();
     this.pairI = i;
     this.pairJ = j;
     this.bodyI = ob.bodyOfPolygon[this.e.polygon[i]];
     this.bodyJ = ob.bodyOfPolygon[this.e.polygon[j]];
+    const hi = this.hint[i],
+      hj = this.hint[j],
+      hi2 = this.hint2[i],
+      hj2 = this.hint2[j];
+    this.pieces.begin();
     this.blocked = false;
-    if (ob.bodyTree) ob.bodyTree.search(R.minX, R.minY, R.maxX, R.maxY, this.visitBody);
-    else for (let b = 0; b < ob.bodyCount && !this.blocked; b++) this.clipBody(b);
-    if (this.blocked) return true;
-    ob.wallTree?.search(R.minX, R.minY, R.maxX, R.maxY, this.visitWall);
-    return false;
+    this.probed.fill(-1);
+    // Probed obstacles keep their pieces; the searches below skip them.
+    if (this.probe(hi, 0) || (hj !== hi && this.probe(hj, 1))) return true;
+    if (hi2 !== hi && hi2 !== hj && this.probe(hi2, 2)) return true;
+    if (hj2 !== hi && hj2 !== hj && hj2 !== hi2 && this.probe(hj2, 3)) return true;
+    if (ob.bodyTree) ob.bodyTree.search(R, this.visitBody);
+    else for (let b = 0; b < ob.bodyCount && !this.blocked; b++) if (!this.wasProbed(b)) this.clipBody(b);
+    if (this.blocked) {
+      this.remember(i, j, this.blocker);
+      return true;
+    }
+    ob.wallTree.search(R, this.visitWall);
+    const chain = this.pieces.blockingChain(this.e.nextEdge);
+    if (chain < 0) {
+      this.pieces.sortByEdge();
+      return false;
+    }
+    const edge = this.pieces.edge[chain];
+    const body = ob.bodyOfPolygon[this.e.polygon[edge]];
+    this.remember(i, j, body >= 0 ? body : -2 - edge);
+    return true;
+  }
+
+  /** Make obstacle h the first hint of edges i and j, the previous first hint the second. */
+  private remember(i: number, j: number, h: number): void {
+    if (this.hint[i] !== h) {
+      this.hint2[i] = this.hint[i];
+      this.hint[i] = h;
+    }
+    if (this.hint[j] !== h) {
+      this.hint2[j] = this.hint[j];
+      this.hint[j] = h;
+    }
   }
 
   /**
-   * Does convex body b block every sight line? It does when the disc inscribed about its
-   * centre meets both side strings (sides 1 and 3): the body then holds a chord from one
-   * string to the other, which cuts H between i and j. Float test with a margin that
-   * only ever says no in doubt.
+   * Does obstacle h (a hint: body, wall edge or none, as in `hint`) block every sight
+   * line of the pair by itself? A body is clipped whole; a wall edge with the run of
+   * wall edges joined to it inside H. The pieces stay: they are part of the gather.
+   */
+  private probe(h: number, slot: number): boolean {
+    if (h === -1) return false;
+    if (h >= 0) {
+      this.probed[slot] = h;
+      this.clipBody(h);
+    } else {
+      this.clipWallRun(-2 - h);
+    }
+    return this.blocked || this.pieces.blockingChain(this.e.nextEdge) >= 0;
+  }
+
+  /** Was body b probed for this pair (its pieces kept already)? */
+  private wasProbed(b: number): boolean {
+    const p = this.probed;
+    return p[0] === b || p[1] === b || p[2] === b || p[3] === b;
+  }
+
+  /** Clip wall edge `edge` and the wall edges joined to it by corners inside H, both ways. */
+  private clipWallRun(edge: number): void {
+    const E = this.e,
+      P = this.pieces;
+    this.clipEdge(edge);
+    if (!P.has(edge)) return;
+    const limit = E.polygonStart[E.polygon[edge] + 1] - E.polygonStart[E.polygon[edge]];
+    let cur = edge;
+    for (let steps = 0; steps < limit && P.endInside[P.pieceOf(cur)]; steps++) {
+      const next = E.nextEdge[cur];
+      if (P.has(next)) break;
+      this.clipEdge(next);
+      if (!P.has(next)) break;
+      cur = next;
+    }
+    cur = edge;
+    for (let steps = 0; steps < limit && P.startInside[P.pieceOf(cur)]; steps++) {
+      const prev = E.prevEdge[cur];
+      if (P.has(prev)) break;
+      this.clipEdge(prev);
+      if (!P.has(prev)) break;
+      cur = prev;
+    }
+  }
+
+  /**
+   * Does body b block every sight line? It does when a disc inside it (bodyRIn about
+   * its centre) meets both side strings (sides 1 and 3): the body then holds a chord
+   * from one string to the other, which cuts H between i and j. Float test with a
+   * margin that only ever says no in doubt.
    */
   private cutsView(b: number): boolean {
     const ob = this.ob,
@@ -119,8 +223,9 @@ export class ObstacleGatherer {
     const first = ob.bodyFirstEdge[b],
       end = ob.bodyEdgeEnd[b];
     if (!inside) {
-      if (ob.bodyConvex[b] && this.cutsView(b)) {
+      if (this.cutsView(b)) {
         this.blocked = true;
+        this.blocker = b;
         return;
       }
       // Angular windows pay off for many-sided bodies; a few corners are cheaper to test all.
@@ -221,6 +326,8 @@ export class ObstacleGatherer {
       py + c.t1 * (qy - py),
       c.startInside,
       c.endInside,
+      c.startSide,
+      c.endSide,
     );
   }
 }

@@ -13,6 +13,11 @@ export class ObstaclePieces {
   /** 1 when the piece's start / end is a corner strictly inside H (the chain goes on there). */
   startInside = new Uint8Array(64);
   endInside = new Uint8Array(64);
+  /** Side of H (1 or 3: the strings; 0, 2: i', j') whose open interior the start / end lies on; -1 if none known. */
+  startSide = new Int8Array(64);
+  endSide = new Int8Array(64);
+  /** Piece indices sorted by edge id (after sortByEdge). */
+  order = new Int32Array(64);
   /** 1 once the piece has been walked into a chain. */
   walked = new Uint8Array(64);
   count = 0;
@@ -46,7 +51,17 @@ export class ObstaclePieces {
     return this.pieceOfEdge[edge];
   }
 
-  keep(edge: number, px: number, py: number, qx: number, qy: number, startInside: boolean, endInside: boolean): void {
+  keep(
+    edge: number,
+    px: number,
+    py: number,
+    qx: number,
+    qy: number,
+    startInside: boolean,
+    endInside: boolean,
+    startSide = -1,
+    endSide = -1,
+  ): void {
     const s = this.count;
     if (s === this.edge.length) this.grow();
     this.edge[s] = edge;
@@ -56,10 +71,71 @@ export class ObstaclePieces {
     this.qy[s] = qy;
     this.startInside[s] = startInside ? 1 : 0;
     this.endInside[s] = endInside ? 1 : 0;
+    this.startSide[s] = startSide;
+    this.endSide[s] = endSide;
     this.walked[s] = 0;
     this.stamp[edge] = this.pair;
     this.pieceOfEdge[edge] = s;
     this.count = s + 1;
+  }
+
+  /**
+   * Sort the pieces by edge id into `order`, and the whole bodies by id: what the pair
+   * integral reads then depends only on which obstacles were kept, never on the order
+   * they were gathered in (hints change that order from pair to pair).
+   */
+  sortByEdge(): void {
+    const n = this.count,
+      order = this.order,
+      edge = this.edge;
+    for (let k = 0; k < n; k++) {
+      const s = k,
+        key = edge[k];
+      let m = k - 1;
+      // Insertion sort: pieces arrive mostly in edge order (bodies and walls by runs).
+      while (m >= 0 && edge[order[m]] > key) {
+        order[m + 1] = order[m];
+        m--;
+      }
+      order[m + 1] = s;
+    }
+    const whole = this.wholeBody;
+    for (let k = 1; k < this.wholeCount; k++) {
+      const b = whole[k];
+      let m = k - 1;
+      while (m >= 0 && whole[m] > b) {
+        whole[m + 1] = whole[m];
+        m--;
+      }
+      whole[m + 1] = b;
+    }
+  }
+
+  /**
+   * A chain of pieces that runs from the open interior of one side string to that of
+   * the other: it cuts H in two, i' on one side and j' on the other, so every sight
+   * line crosses it and the pair exchanges nothing. Exact: the sides come from exact
+   * signs, and chains join at corners strictly inside H. Returns the chain's first
+   * piece, or -1 when there is none. `nextEdge`: EdgeSet.nextEdge.
+   */
+  blockingChain(nextEdge: Int32Array): number {
+    for (let s = 0; s < this.count; s++) {
+      const from = this.startSide[s];
+      if (from !== 1 && from !== 3) continue;
+      let cur = s;
+      // An open chain never returns to its start; the step bound only guards the walk.
+      for (let steps = 0; steps < this.count; steps++) {
+        const to = this.endSide[cur];
+        if (to >= 0) {
+          if (to === 4 - from) return s;
+          break;
+        }
+        const next = nextEdge[this.edge[cur]];
+        if (!this.endInside[cur] || !this.has(next)) break;
+        cur = this.pieceOfEdge[next];
+      }
+    }
+    return -1;
   }
 
   addWholeBody(b: number): void {
@@ -95,6 +171,14 @@ export class ObstaclePieces {
     this.qy = f64(this.qy);
     this.startInside = u8(this.startInside);
     this.endInside = u8(this.endInside);
+    const i8 = (a: Int8Array) => {
+      const b = new Int8Array(n);
+      b.set(a);
+      return b;
+    };
+    this.order = i32(this.order);
+    this.startSide = i8(this.startSide);
+    this.endSide = i8(this.endSide);
     this.walked = u8(this.walked);
   }
 }

@@ -21,6 +21,12 @@ export interface SegmentClip {
   /** Whether the segment's start / end lies strictly inside H. */
   startInside: boolean;
   endInside: boolean;
+  /**
+   * The side whose open interior the kept piece's start / end lies on, when the
+   * segment's start / end lies strictly inside every other side (exact signs); else -1.
+   */
+  startSide: number;
+  endSide: number;
 }
 
 export class ViewRegion {
@@ -114,15 +120,22 @@ export class ViewRegion {
       t1 = 1;
     let pIn = true,
       qIn = true;
-    for (let k = 0; k < 4; k++) {
+    // Sides that p (q) is not strictly inside, and the last such side.
+    let pOut = 0,
+      qOut = 0,
+      pSide = -1,
+      qSide = -1;
+    // Float pass first, the side strings first: reject cheaply, and mark the sides that
+    // hold both ends surely inside (they cannot cut the segment); the margin is far
+    // above the rounding of the cross products. Exact signs only for the other sides.
+    let doubtful = 0;
+    for (let step = 0; step < 4; step++) {
+      const k = SIDE_ORDER[step];
       if (!this.on[k]) continue;
       const x0 = this.sx[k],
-        y0 = this.sy[k],
-        x1 = this.ex[k],
-        y1 = this.ey[k];
-      // Cheap float rejection first; robust signs only for what survives.
-      const dx = x1 - x0,
-        dy = y1 - y0;
+        y0 = this.sy[k];
+      const dx = this.ex[k] - x0,
+        dy = this.ey[k] - y0;
       const fp = dx * (py - y0) - dy * (px - x0);
       const fq = dx * (qy - y0) - dy * (qx - x0);
       const tol =
@@ -130,11 +143,27 @@ export class ViewRegion {
         (Math.abs(dx) + Math.abs(dy)) *
         (Math.abs(px - x0) + Math.abs(py - y0) + Math.abs(qx - x0) + Math.abs(qy - y0));
       if (fp < -tol && fq < -tol) return false;
+      if (!(fp > tol && fq > tol)) doubtful |= 1 << k;
+    }
+    for (let k = 0; k < 4; k++) {
+      if (!(doubtful & (1 << k))) continue;
+      const x0 = this.sx[k],
+        y0 = this.sy[k],
+        x1 = this.ex[k],
+        y1 = this.ey[k];
       const dP = orient(x0, y0, x1, y1, px, py);
       const dQ = orient(x0, y0, x1, y1, qx, qy);
       if (dP <= 0 && dQ <= 0) return false;
-      if (dP <= 0) pIn = false;
-      if (dQ <= 0) qIn = false;
+      if (dP <= 0) {
+        pIn = false;
+        pOut++;
+        pSide = k;
+      }
+      if (dQ <= 0) {
+        qIn = false;
+        qOut++;
+        qSide = k;
+      }
       if (dP < 0) t0 = Math.max(t0, dP / (dP - dQ));
       else if (dQ < 0) t1 = Math.min(t1, dP / (dP - dQ));
     }
@@ -147,6 +176,10 @@ export class ViewRegion {
     out.t1 = t1;
     out.startInside = pIn;
     out.endInside = qIn;
+    // Outside (or on) one side only: the piece meets that side strictly between its
+    // corners, since the other sides hold p (q) strictly and the segment strictly.
+    out.startSide = pOut === 1 ? pSide : -1;
+    out.endSide = qOut === 1 ? qSide : -1;
     return true;
   }
 }
