@@ -3,6 +3,7 @@
 // are unique and never reuse a name in use; names the user typed are never changed.
 import type { Point, Shape, SketchFile } from '../sketchFile';
 import { edgeNames, signedArea } from '../geometry/polygon';
+import { nextNumberedName } from '../../document/rows';
 
 /** What a new shape is, for its name. */
 export type ShapeStem = 'body' | 'tube';
@@ -23,12 +24,7 @@ const numbered = /^(.*) (\d+)$/;
 
 /** "stem N" with N one above the highest N in use, so a name in use is never given again. */
 export function nextNumbered(stem: string, taken: Set<string>): string {
-  let top = 0;
-  for (const name of taken) {
-    const m = numbered.exec(name);
-    if (m && m[1] === stem) top = Math.max(top, Number(m[2]));
-  }
-  return uniqueName(`${stem} ${top + 1}`, taken);
+  return uniqueName(nextNumberedName(stem, taken), taken);
 }
 
 /**
