@@ -11,9 +11,9 @@ export const ROW_PX = 22;
 /** Rows and columns drawn beyond the visible ones on each side. */
 const OVERSCAN = 4;
 
-/** Width of a factor cell, px: "0." and `digits` decimals, room for the ⚠ mark, and padding. */
+/** Width of a factor cell, px: "0." and `digits` decimals at about 7 px a figure, room for " ⚠", and padding. */
 export function cellWidthPx(digits: number): number {
-  return Math.ceil((digits + 5) * 7.2) + 8;
+  return Math.ceil((digits + 2) * 7 + 14 + 8);
 }
 
 interface Layout {
