@@ -100,7 +100,15 @@ export function SketchCanvas() {
               problemShapes={problems.shapes}
             />
           ))}
-          <HeatLayer doc={doc} camera={camera} />
+          {[false, true].map((side) => (
+            <HeatLayer
+              key={side ? 'heat-live' : 'heat'}
+              shapes={doc.shapes}
+              camera={camera}
+              live={live}
+              liveSide={side}
+            />
+          ))}
           {showNames &&
             [false, true].map(
               (side) =>
