@@ -33,7 +33,13 @@ function Matrix(props: Props) {
 
 function WindowedMatrix(props: Props) {
   const scroll = useRef<HTMLTableElement>(null);
-  const win = useMatrixWindow(scroll, props.view.names.length, cellWidthPx(props.digits), props.view);
+  const win = useMatrixWindow(
+    scroll,
+    props.view.names.length,
+    props.view.names.length,
+    cellWidthPx(props.digits),
+    props.view,
+  );
   return <MatrixGrid {...props} tableRef={scroll} rows={win.rows} cols={win.cols} pad={win.pad} windowed />;
 }
 

@@ -33,19 +33,23 @@ export interface MatrixWindow {
 
 /**
  * `content` is what the table shows (a new one can move where the cells start);
- * the table's parent is the scrolled box.
+ * the table's parent is the scrolled box. `rowCount` and `colCount` are the rows
+ * and windowed columns (class "vcol" on their headers), after `leading` columns
+ * that are always drawn.
  */
 export function useMatrixWindow(
   table: RefObject<HTMLTableElement | null>,
-  n: number,
+  rowCount: number,
+  colCount: number,
   cellPx: number,
   content: unknown,
+  leading = 2,
 ): MatrixWindow {
   const [layout, setLayout] = useState<Layout>({ top: 0, left: 0, rowPitch: ROW_PX, colPitch: cellPx });
   const scrollBox = () => table.current?.parentElement ?? null;
   // eslint-disable-next-line react-hooks/incompatible-library -- read afresh on every render, never memoised
   const rowV = useVirtualizer({
-    count: n,
+    count: rowCount,
     getScrollElement: scrollBox,
     estimateSize: () => layout.rowPitch,
     overscan: OVERSCAN,
@@ -54,7 +58,7 @@ export function useMatrixWindow(
     initialRect: { width: 800, height: 400 },
   });
   const colV = useVirtualizer({
-    count: n,
+    count: colCount,
     horizontal: true,
     getScrollElement: scrollBox,
     estimateSize: () => layout.colPitch,
@@ -74,7 +78,7 @@ export function useMatrixWindow(
     const head = t?.tHead?.rows[0];
     const body = t?.tBodies[0];
     if (!t || !head || !body) return;
-    const lHead = head.cells[1];
+    const lHead = head.cells[leading - 1];
     const cols = [...head.cells].filter((c) => c.classList.contains('vcol'));
     const rows = [...body.rows].filter((r) => r.getAttribute('aria-rowindex') !== null);
     const next: Layout = {
@@ -101,7 +105,7 @@ export function useMatrixWindow(
         colPitch: next.colPitch > 0 ? next.colPitch : layout.colPitch,
       });
     }
-  }, [table, layout, cellPx, rowV, colV, firstRow, firstCol, n, content]);
+  }, [table, layout, cellPx, rowV, colV, firstRow, firstCol, rowCount, colCount, content, leading]);
   useLayoutEffect(() => {
     rowV.measure();
     colV.measure();
