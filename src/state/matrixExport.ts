@@ -16,6 +16,8 @@ export function matrixTsv(view: MatrixView, digits: number): string {
     return /^[=+\-@\t\r]/.test(name) ? `'${flat}` : flat;
   };
   const head = ['from \\ to', ...view.names.map(safe)].join('\t');
-  const body = view.rows.map((row, i) => [safe(view.names[i]), ...row.map((f) => f.toFixed(digits))].join('\t'));
+  const body = view.rows.map((row, i) =>
+    [safe(view.names[i]), ...Array.from(row, (f) => f.toFixed(digits))].join('\t'),
+  );
   return [head, ...body].join('\n') + '\n';
 }

@@ -1,14 +1,19 @@
 import type { Point, Shape } from '../sketchFile';
+import { signedArea2 } from '../../core/edges';
 
-/** Signed area (sketch units^2); positive when the points run anticlockwise with y up. */
+/** Signed area (sketch units^2); positive when the points run anticlockwise with y up. The core's sum, relative to the first point. */
 export function signedArea(points: readonly Point[]): number {
-  let a = 0;
-  for (let i = 0; i < points.length; i++) {
-    const [x0, y0] = points[i];
-    const [x1, y1] = points[(i + 1) % points.length];
-    a += x0 * y1 - x1 * y0;
-  }
-  return a / 2;
+  return signedArea2(points.flat()) / 2;
+}
+
+// Per points array: the store keeps the array of every shape an edit leaves alone.
+const orientation = new WeakMap<readonly Point[], boolean>();
+
+/** Whether the points run anticlockwise (y up); one area per points array, not one per edge. */
+export function isAnticlockwise(points: readonly Point[]): boolean {
+  let ccw = orientation.get(points);
+  if (ccw === undefined) orientation.set(points, (ccw = signedArea(points) > 0));
+  return ccw;
 }
 
 /** Surface name of every edge, whether the shape stores one name or one per edge. */
@@ -38,7 +43,7 @@ export function radiatingNormal(shape: Shape, k: number): Point {
   const len = Math.hypot(dx, dy) || 1;
   // Left of the edge (y up) is the inside of an anticlockwise polygon.
   const left: Point = [-dy / len, dx / len];
-  const ccw = signedArea(shape.points) > 0;
+  const ccw = isAnticlockwise(shape.points);
   const towardLeft = (shape.kind === 'enclosure') === ccw;
   return towardLeft ? left : [-left[0], -left[1]];
 }

@@ -1,15 +1,14 @@
-import { Fragment, memo } from 'react';
-import { Layer, Line } from 'react-konva';
+import { memo } from 'react';
+import { Layer, Shape as KonvaShape } from 'react-konva';
 import type { Camera } from '../../state/viewSlice';
-import type { Shape, SketchFile } from '../../state/sketchFile';
-import { edgeEnds, edgeNames, radiatingNormal } from '../../state/geometry/polygon';
-import { toScreen } from '../../state/camera';
-import { surfaceStyle, MARK } from '../palette';
-import { isCircle, arcCount, type CircleShape } from '../../state/edits/circleShapes';
-import { arcScreenPoints, rimScreenPoints } from './circleDrawing';
+import type { Shape } from '../../state/sketchFile';
+import { shapeGeometry } from '../../state/geometry/shapeGeometry';
+import { drawShape } from './shapeDrawing';
 
 interface Props {
-  doc: SketchFile;
+  shapes: readonly Shape[];
+  /** Which shapes this layer draws, in drawing order. */
+  draw: readonly number[];
   camera: Camera;
   order: ReadonlyMap<string, number>;
   /** Surfaces to emphasise (hovered table cell, selected surfaces). */
@@ -17,21 +16,24 @@ interface Props {
   problemShapes: Set<number>;
 }
 
-/** Offset of the radiating-side shading from the edge, px. */
-const SIDE_PX = 4;
-
-export function ShapesLayer({ doc, camera, order, emphasis, problemShapes }: Props) {
-  const enclosureFirst = doc.shapes
-    .map((_, i) => i)
-    .sort((a, b) => Number(doc.shapes[a].kind === 'solid') - Number(doc.shapes[b].kind === 'solid'));
+/**
+ * Shapes with each edge in its surface's colour and the radiating side shaded.
+ * The canvas keeps shapes a drag leaves alone in a layer of their own, so only
+ * the moving ones are drawn again on every pointer move.
+ */
+export function ShapesLayer({ shapes, draw, camera, order, emphasis, problemShapes }: Props) {
   return (
     <Layer listening={false}>
-      {enclosureFirst.map((s) => {
-        const shape = doc.shapes[s];
-        const names = edgeNames(shape);
+      {draw.map((s) => {
+        const shape = shapes[s];
+        const { names } = shapeGeometry(shape);
         // Plain strings as props, so shapes a drag does not touch skip re-rendering.
-        const colours = names.map((n) => order.get(n) ?? 0).join(',');
-        const hot = names.map((n) => (emphasis.has(n) ? 1 : 0)).join('');
+        let colours = '';
+        let hot = '';
+        for (let k = 0; k < names.length; k++) {
+          colours += (k ? ',' : '') + String(order.get(names[k]) ?? 0);
+          hot += emphasis.size && emphasis.has(names[k]) ? '1' : '0';
+        }
         return (
           <ShapeNode key={s} shape={shape} camera={camera} colours={colours} hot={hot} problem={problemShapes.has(s)} />
         );
@@ -53,87 +55,12 @@ const ShapeNode = memo(function ShapeNode({
   hot: string;
   problem: boolean;
 }) {
-  const colourOf = colours.split(',').map(Number);
-  if (isCircle(shape))
-    return <CircleNode shape={shape} camera={camera} colourOf={colourOf} hot={hot} problem={problem} />;
-  const flat = shape.points.flatMap((p) => toScreen(camera, p));
+  const look = { colourOf: colours.split(',').map(Number), hot: Array.from(hot, (c) => c === '1'), problem };
   return (
-    <Fragment>
-      <Line
-        points={flat}
-        closed
-        fill={shape.kind === 'enclosure' ? '#fffdf6' : '#d9d3c3'}
-        stroke={problem ? MARK.problem : undefined}
-        strokeWidth={problem ? 8 : 0}
-      />
-      {shape.points.map((_, k) => {
-        const [a, b] = edgeEnds(shape, k);
-        const [ax, ay] = toScreen(camera, a);
-        const [bx, by] = toScreen(camera, b);
-        const n = radiatingNormal(shape, k);
-        // Screen y is flipped, so the normal's y flips too.
-        const ox = n[0] * SIDE_PX;
-        const oy = -n[1] * SIDE_PX;
-        const st = surfaceStyle(colourOf[k] ?? 0);
-        const on = hot[k] === '1';
-        return (
-          <Fragment key={k}>
-            {on && <Line points={[ax, ay, bx, by]} stroke={MARK.highlight} strokeWidth={11} lineCap="round" />}
-            <Line points={[ax + ox, ay + oy, bx + ox, by + oy]} stroke={st.colour} strokeWidth={4} opacity={0.3} />
-            <Line
-              points={[ax, ay, bx, by]}
-              stroke={st.colour}
-              strokeWidth={on ? 4 : 2.5}
-              dash={st.dash}
-              lineCap="round"
-            />
-          </Fragment>
-        );
-      })}
-    </Fragment>
+    <KonvaShape
+      listening={false}
+      perfectDrawEnabled={false}
+      sceneFunc={(ctx) => drawShape(ctx._context, shape, camera, look)}
+    />
   );
 });
-
-/** An exact circle: filled rim, then each arc in its surface's colour with the radiating side shaded. */
-function CircleNode({
-  shape,
-  camera,
-  colourOf,
-  hot,
-  problem,
-}: {
-  shape: CircleShape;
-  camera: Camera;
-  colourOf: number[];
-  hot: string;
-  problem: boolean;
-}) {
-  return (
-    <Fragment>
-      <Line
-        points={rimScreenPoints(camera, shape)}
-        closed
-        fill={shape.kind === 'enclosure' ? '#fffdf6' : '#d9d3c3'}
-        stroke={problem ? MARK.problem : undefined}
-        strokeWidth={problem ? 8 : 0}
-      />
-      {Array.from({ length: arcCount(shape) }, (_, k) => {
-        const rim = arcScreenPoints(camera, shape, k);
-        const st = surfaceStyle(colourOf[k] ?? 0);
-        const on = hot[k] === '1';
-        return (
-          <Fragment key={k}>
-            {on && <Line points={rim} stroke={MARK.highlight} strokeWidth={11} lineCap="round" />}
-            <Line
-              points={arcScreenPoints(camera, shape, k, SIDE_PX)}
-              stroke={st.colour}
-              strokeWidth={4}
-              opacity={0.3}
-            />
-            <Line points={rim} stroke={st.colour} strokeWidth={on ? 4 : 2.5} dash={st.dash} lineCap="round" />
-          </Fragment>
-        );
-      })}
-    </Fragment>
-  );
-}

@@ -23,6 +23,7 @@ import { useSurfaceColours } from './useSurfaceColours';
 import { canvasProblemMarks } from './problems';
 import { GridLayer } from './GridLayer';
 import { ShapesLayer } from './ShapesLayer';
+import { shapeLayers, useLiveShapes } from './liveShapes';
 import { HandlesLayer } from './HandlesLayer';
 import { DraftLayer } from './DraftLayer';
 import { NamesLayer } from './NamesLayer';
@@ -33,6 +34,7 @@ import { HeatLegend } from '../exchange/HeatLegend';
 const selectGridStep = (s: AppState) => s.gridStep;
 const selectSetCamera = (s: AppState) => s.setCamera;
 const selectShowNames = (s: AppState) => s.showNames;
+const selectGestureShapes = (s: AppState) => s.gestureBase?.shapes ?? null;
 
 export function SketchCanvas() {
   const { ref, width, height } = useElementSize<HTMLDivElement>();
@@ -51,6 +53,9 @@ export function SketchCanvas() {
   const results = useApp(selectViewFactors);
   const selected = useSelectedSurfaces();
   const handlers = usePointerRouting();
+  const baseShapes = useApp(selectGestureShapes);
+  const live = useLiveShapes(doc.shapes, baseShapes);
+  const layers = shapeLayers(doc.shapes, live);
 
   const order = useSurfaceColours();
   const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
@@ -84,9 +89,41 @@ export function SketchCanvas() {
       {width > 0 && height > 0 && (
         <Stage width={width} height={height} {...handlers}>
           <GridLayer camera={camera} width={width} height={height} step={gridStep} />
-          <ShapesLayer doc={doc} camera={camera} order={order} emphasis={emphasis} problemShapes={problems.shapes} />
-          <HeatLayer doc={doc} camera={camera} />
-          {showNames && <NamesLayer doc={doc} camera={camera} colours={order} emphasis={emphasis} />}
+          {layers.map((draw) => (
+            <ShapesLayer
+              key={draw.key}
+              shapes={doc.shapes}
+              draw={draw.shapes}
+              camera={camera}
+              order={order}
+              emphasis={emphasis}
+              problemShapes={problems.shapes}
+            />
+          ))}
+          {[false, true].map((side) => (
+            <HeatLayer
+              key={side ? 'heat-live' : 'heat'}
+              shapes={doc.shapes}
+              camera={camera}
+              live={live}
+              liveSide={side}
+            />
+          ))}
+          {showNames &&
+            [false, true].map(
+              (side) =>
+                (!side || live.size > 0) && (
+                  <NamesLayer
+                    key={side ? 'live' : 'still'}
+                    shapes={doc.shapes}
+                    camera={camera}
+                    colours={order}
+                    emphasis={emphasis}
+                    live={live}
+                    liveSide={side}
+                  />
+                ),
+            )}
           <HandlesLayer doc={doc} camera={camera} selection={selection} showAll={active.showsAllHandles ?? false} />
           <DraftLayer tool={tool} draft={draft} hover={hover} camera={camera} />
           <ProblemLayer marks={problems} camera={camera} />

@@ -3,51 +3,20 @@
 // radiosity and irradiation (W/m^2), each copyable as tab-separated text.
 import { useId } from 'react';
 import type { ExchangeSolved } from '../../state/exchange/slice';
-import {
-  exchangeMatrixRows,
-  exchangeMatrixTsv,
-  netHeatTsv,
-  radiosityRows,
-  radiosityTsv,
-} from '../../state/exchange/tables';
+import { exchangeMatrixTsv, netHeatTsv, radiosityRows, radiosityTsv } from '../../state/exchange/tables';
 import { CopyTableButton } from './CopyTableButton';
+import { ExchangeMatrix } from './ExchangeMatrix';
 import { fmtHeat } from './format';
 
 export function ExchangeDetails({ ex }: { ex: ExchangeSolved }) {
   const id = useId();
-  const matrix = exchangeMatrixRows(ex);
   const radiosity = radiosityRows(ex);
   const stale = ex.stale ? ' stale' : '';
   return (
     <div className="exchange-details">
       <CopyTableButton what="Net heat table" tsv={() => netHeatTsv(ex)} label="Copy net heat table" />
       <h4 id={`${id}-matrix`}>Net exchange q′ᵢⱼ, W per metre of depth, from row to column</h4>
-      <div className="matrix-scroll exchange-scroll">
-        <table className={`matrix exchange-matrix${stale}`} aria-labelledby={`${id}-matrix`}>
-          <thead>
-            <tr>
-              <th scope="col">from \ to</th>
-              {matrix.columns.map((c) => (
-                <th key={c} scope="col">
-                  {c}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {matrix.rows.map((row, i) => (
-              <tr key={matrix.names[i]} data-surface={matrix.names[i]}>
-                <th scope="row">{matrix.names[i]}</th>
-                {row.map((v, j) => (
-                  <td key={j} className="num" data-value={v}>
-                    {fmtHeat(v)}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <ExchangeMatrix ex={ex} labelledBy={`${id}-matrix`} />
       <CopyTableButton what="Exchange matrix" tsv={() => exchangeMatrixTsv(ex)} label="Copy matrix" />
       <h4 id={`${id}-radiosity`}>Radiosity and irradiation, W/m²</h4>
       <div className="matrix-scroll exchange-scroll">

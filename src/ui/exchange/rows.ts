@@ -33,7 +33,16 @@ export interface ExchangeRow {
   burn: string | null;
 }
 
+// Per solved exchange: the table, its cautions and its memoised rows share one list.
+const cache = new WeakMap<ExchangeSolved, ExchangeRow[]>();
+
 export function exchangeRows(ex: ExchangeSolved): ExchangeRow[] {
+  let rows = cache.get(ex);
+  if (!rows) cache.set(ex, (rows = buildRows(ex)));
+  return rows;
+}
+
+function buildRows(ex: ExchangeSolved): ExchangeRow[] {
   const r = ex.result;
   const rows: ExchangeRow[] = ex.names.map((name, i) => {
     const kind = ex.conditions[i].kind;

@@ -1,0 +1,221 @@
+// The large-sketch drags of the browser benchmark (test/bench/browser.ts): a 10 x 4
+// furnace box of 52 wall edges holding 20 tubes drawn as 48-gons (1012 edges),
+// either one surface per tube and per wall (24 surfaces) or every edge its own
+// surface (a 1012 x 1012 table). One tube is dragged for a few seconds with a
+// pointer move every 16 ms, not waiting for anything, as a hand does.
+import type { Page } from 'playwright-core';
+import type { SketchFile } from '../../src/state/sketchFile';
+import { screenOf, type TestWindow } from '../e2e/harness';
+
+const WALL_PER_SIDE = 13;
+const SIDES = 48;
+const RADIUS = 0.25;
+/** Tube centres: 5 columns by 4 rows, 1.5 apart sideways so a drag of ±0.3 never touches a neighbour. */
+const CENTRES = [1, 3, 5, 7, 9].flatMap((x) => [0.5, 1.5, 2.5, 3.5].map((y) => [x, y] as const));
+
+/** The 1012-edge sketch: `perEdge`, every edge its own surface; else one surface per tube and per wall. */
+export function bigSketch(perEdge: boolean): SketchFile {
+  const corners = [
+    [0, 0],
+    [10, 0],
+    [10, 4],
+    [0, 4],
+  ];
+  const wall: [number, number][] = [];
+  for (let c = 0; c < 4; c++) {
+    const [x0, y0] = corners[c];
+    const [x1, y1] = corners[(c + 1) % 4];
+    for (let k = 0; k < WALL_PER_SIDE; k++)
+      wall.push([x0 + ((x1 - x0) * k) / WALL_PER_SIDE, y0 + ((y1 - y0) * k) / WALL_PER_SIDE]);
+  }
+  const tubes = CENTRES.map(([cx, cy], t) => ({
+    kind: 'solid' as const,
+    points: Array.from({ length: SIDES }, (_, k): [number, number] => {
+      const a = (2 * Math.PI * k) / SIDES;
+      return [cx + RADIUS * Math.cos(a), cy + RADIUS * Math.sin(a)];
+    }),
+    surface: perEdge ? Array.from({ length: SIDES }, (_, k) => `tube ${t + 1}.${k + 1}`) : `tube ${t + 1}`,
+  }));
+  return {
+    version: 2,
+    units: 'm',
+    shapes: [
+      {
+        kind: 'enclosure',
+        points: wall,
+        surface: wall.map((_, k) =>
+          perEdge ? `wall ${k + 1}` : ['floor', 'right', 'roof', 'left'][Math.floor(k / WALL_PER_SIDE)],
+        ),
+      },
+      ...tubes,
+    ],
+  };
+}
+
+type DragWindow = TestWindow & {
+  __drag: {
+    moves: number;
+    tables: number;
+    frames: number[];
+    shown: number[];
+    lastDoc: unknown;
+    on: boolean;
+    at: number;
+    handler: number[];
+    drawMs: number;
+  };
+  Konva?: { Layer: { prototype: { drawScene: (...a: unknown[]) => unknown } } };
+};
+
+/** Open `sketch` as a dropped file and wait for its first results. */
+export async function openSketch(page: Page, sketch: SketchFile): Promise<void> {
+  await page.evaluate((content) => {
+    const dt = new DataTransfer();
+    dt.items.add(new File([content], 'bench.json', { type: 'application/json' }));
+    window.dispatchEvent(new DragEvent('dragover', { dataTransfer: dt, bubbles: true, cancelable: true }));
+    window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
+  }, JSON.stringify(sketch));
+  await page.waitForFunction(
+    (names) =>
+      JSON.stringify((window as unknown as TestWindow).__tautline.store.getState().doc.shapes[0]?.surface) === names,
+    JSON.stringify(sketch.shapes[0].surface),
+    { timeout: 120_000 },
+  );
+  await page.waitForFunction(
+    () => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready',
+    undefined,
+    { timeout: 120_000 },
+  );
+}
+
+export interface FollowFigures {
+  seconds: number;
+  /** Pointer moves the page received, per second. */
+  movesPerSecond: number;
+  /** Matrix-table updates per second (one per React commit that touched the table). */
+  tablesPerSecond: number;
+  /** Animation frames per second while dragging. */
+  framesPerSecond: number;
+  /** Frames per second in which the canvas showed a newer drag position than the frame before. */
+  followPerSecond: number;
+  /** Longest gap between two animation frames, ms. */
+  longestFrameMs: number;
+  /** Median time the page spends handling one pointer move (tool, store, results stage, React render), ms. */
+  handlerMs: number;
+  /** Time konva spends drawing layers, per frame that showed a new position, ms. */
+  drawMs: number;
+}
+
+/**
+ * Drag the tube at sketch point `at` for `seconds`, one pointer move every 16 ms
+ * back and forth along x (±0.3 sketch units), then undo the drag.
+ */
+export async function followDrag(page: Page, at: [number, number], seconds: number): Promise<FollowFigures> {
+  await page.evaluate(() => {
+    const w = window as unknown as DragWindow;
+    const d: DragWindow['__drag'] = (w.__drag = {
+      moves: 0,
+      tables: 0,
+      frames: [],
+      shown: [],
+      lastDoc: null,
+      on: true,
+      at: 0,
+      handler: [],
+      drawMs: 0,
+    });
+    // Capture on the way down, bubble on the way up: between them run the canvas's own handlers.
+    window.addEventListener(
+      'pointermove',
+      () => {
+        d.moves++;
+        d.at = performance.now();
+      },
+      true,
+    );
+    window.addEventListener('pointermove', () => d.handler.push(performance.now() - d.at));
+    const layer = w.Konva?.Layer.prototype;
+    if (layer) {
+      const draw = layer.drawScene;
+      layer.drawScene = function (this: unknown, ...a: unknown[]) {
+        const t = performance.now();
+        const r = draw.apply(this, a);
+        d.drawMs += performance.now() - t;
+        return r;
+      };
+    }
+    new MutationObserver(() => d.tables++).observe(document.querySelector('.matrix-scroll')!, {
+      subtree: true,
+      childList: true,
+      characterData: true,
+    });
+    // Assigned into an array, not to a name: the bench's loader would wrap a named function in a helper the page lacks.
+    const frame: ((t: number) => void)[] = [];
+    frame[0] = (t: number) => {
+      if (!d.on) return;
+      d.frames.push(t);
+      // The store's document is what the canvas draws in this frame (React commits before paint).
+      const doc = w.__tautline.store.getState().doc;
+      if (doc !== d.lastDoc) d.shown.push(t);
+      d.lastDoc = doc;
+      requestAnimationFrame(frame[0]);
+    };
+    requestAnimationFrame(frame[0]);
+  });
+  // Snapping off, so every pointer move moves the tube.
+  await page.getByRole('checkbox', { name: 'snap' }).uncheck();
+  const [sx, sy] = await screenOf(page, ...at);
+  const px = (await screenOf(page, at[0] + 0.3, at[1]))[0] - sx;
+  await page.mouse.move(sx, sy);
+  await page.mouse.down();
+  const start = await page.evaluate(() => {
+    const d = (window as unknown as DragWindow).__drag;
+    d.moves = 0;
+    d.tables = 0;
+    d.frames = [];
+    d.shown = [];
+    d.handler = [];
+    d.drawMs = 0;
+    return performance.now();
+  });
+  const t0 = Date.now();
+  for (let i = 1; Date.now() - t0 < seconds * 1000; i++) {
+    // A triangle wave, 2 s per period: the tube sweeps ±0.3 around its place.
+    const phase = ((i * 16) % 2000) / 2000;
+    const x = phase < 0.5 ? -1 + 4 * phase : 3 - 4 * phase;
+    await page.mouse.move(sx + x * px, sy);
+    const wait = t0 + i * 16 - Date.now();
+    if (wait > 0) await new Promise((r) => setTimeout(r, wait));
+  }
+  const d = await page.evaluate((from) => {
+    const w = (window as unknown as DragWindow).__drag;
+    w.on = false;
+    const now = performance.now();
+    let longest = 0;
+    for (let k = 1; k < w.frames.length; k++) longest = Math.max(longest, w.frames[k] - w.frames[k - 1]);
+    const h = [...w.handler].sort((a, b) => a - b);
+    return {
+      s: (now - from) / 1000,
+      moves: w.moves,
+      tables: w.tables,
+      frames: w.frames.length,
+      shown: w.shown.length,
+      longest,
+      handler: h[Math.floor(h.length / 2)] ?? 0,
+      draw: w.drawMs / Math.max(1, w.shown.length),
+    };
+  }, start);
+  await page.mouse.up();
+  await page.keyboard.press('Control+z');
+  await page.getByRole('checkbox', { name: 'snap' }).check();
+  return {
+    seconds: d.s,
+    movesPerSecond: d.moves / d.s,
+    tablesPerSecond: d.tables / d.s,
+    framesPerSecond: d.frames / d.s,
+    followPerSecond: d.shown / d.s,
+    longestFrameMs: d.longest,
+    handlerMs: d.handler,
+    drawMs: d.draw,
+  };
+}
