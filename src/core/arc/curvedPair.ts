@@ -1,10 +1,23 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
-import { orient } from '../orient';
-import { Curve, towardTarget } from './curve';
-import { convexHull, PairScene } from './pairScene';
+import { orient as orientIn } from '../orient';
+import { Curve, towardTarget as towardTargetIn } from './curve';
+import { convexHull as convexHullIn, PairScene } from './pairScene';
 import { PieceView } from './pieceView';
-import { commonTangents, CurveBreaks, touchAngles, type EventFilter } from './tangents';
+import {
+  commonTangents as commonTangentsIn,
+  CurveBreaks,
+  touchAngles as touchAnglesIn,
+  type EventFilter,
+} from './tangents';
+
+// Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
+// applies, every read of an imported binding is a getter call (as in src/core/pair).
+const orient = orientIn;
+const towardTarget = towardTargetIn;
+const convexHull = convexHullIn;
+const commonTangents = commonTangentsIn;
+const touchAngles = touchAnglesIn;
 
 // Exact view factor between two curves (segments or arcs of exact circles), blocked
 // by circles and polygons. Seen from a point p of the emitter, the target's visible

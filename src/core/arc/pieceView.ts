@@ -1,8 +1,15 @@
-import { distanceChange } from '../pairGeometry';
-import { orient } from '../orient';
+import { distanceChange as distanceChangeIn } from '../pairGeometry';
+import { orient as orientIn } from '../orient';
 import type { ArcSet } from './arcs';
-import { coneMeetsTarget, towardTarget, type Curve } from './curve';
+import { coneMeetsTarget as coneMeetsTargetIn, towardTarget as towardTargetIn, type Curve } from './curve';
 import type { PairScene } from './pairScene';
+
+// Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
+// applies, every read of an imported binding is a getter call (as in src/core/pair).
+const distanceChange = distanceChangeIn;
+const orient = orientIn;
+const coneMeetsTarget = coneMeetsTargetIn;
+const towardTarget = towardTargetIn;
 
 // The visible runs of the target from the middle of one emitter piece, and their
 // exact integral over the piece. Directions from p are angles b from the emitter's

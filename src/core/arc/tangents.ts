@@ -1,5 +1,10 @@
-import { sortPrefix } from '../scratch';
-import { angleOffset, type Curve } from './curve';
+import { sortPrefix as sortPrefixIn } from '../scratch';
+import { angleOffset as angleOffsetIn, type Curve } from './curve';
+
+// Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
+// applies, every read of an imported binding is a getter call (as in src/core/pair).
+const sortPrefix = sortPrefixIn;
+const angleOffset = angleOffsetIn;
 
 // Lines that touch circles, and where such lines cross the emitting curve. Sketch
 // units, angles in radians anticlockwise from +x.
