@@ -143,20 +143,3 @@ export function backHeat(c: BalanceCondition, T: number, area: number): { heat: 
       return { heat: 0, slope: 0 };
   }
 }
-
-/** Kinds whose temperature is solved for (their own node). */
-const SOLVED_KINDS = new Set<BalanceCondition['kind']>(['heatFlux', 'adiabatic', 'wall', 'tube']);
-
-/**
- * The unknowns of the balance ("nodes"), as lists of surface indices: one per
- * surface whose temperature is solved, one per linked plate (its two faces share
- * one temperature), in order of their first surface.
- */
-export function balanceNodes(conditions: ReadonlyArray<BalanceCondition>): number[][] {
-  const members: number[][] = [];
-  conditions.forEach((c, i) => {
-    if (SOLVED_KINDS.has(c.kind)) members.push([i]);
-    else if (c.kind === 'linked' && c.other > i) members.push([i, c.other]);
-  });
-  return members;
-}

@@ -2,7 +2,6 @@
 // what lies behind each surface (lined walls, tubes, thin linked plates).
 export {
   backHeat,
-  balanceNodes,
   layerResistance,
   layerTemperatures,
   tubeResistance,
@@ -14,6 +13,8 @@ export {
   type WallCondition,
   type WallLayer,
 } from './conditions';
+export { balanceNodes, nodeCoupling, nodeIrradiation } from './nodes';
+export { RadiosityNetwork } from './radiosity';
 export { balanceInputFor, type BalanceSetup } from './setup';
 export { BALANCE_TOLERANCE, MAX_ITERATIONS, solveBalance } from './solve';
 export type { BalanceInput, BalanceOutcome, BalanceResult } from './types';

@@ -59,9 +59,17 @@ export class RadiosityNetwork {
     this.irradiation(J, G);
   }
 
-  /** G_i = sum_j F_ij J_j + F_i,s E_s, W/m^2. */
-  private irradiation(J: Float64Array, G: Float64Array): void {
-    const { n, Fs, Es, F } = this;
+  /**
+   * M x = b for any right-hand side (W/m^2, or its change per unit of a parameter),
+   * in place: how the radiosities answer a change of the rows' sources.
+   */
+  solveRows(b: Float64Array): Float64Array {
+    return this.solver.solve(b);
+  }
+
+  /** G_i = sum_j F_ij J_j + F_i,s E_s (W/m^2) into G; `Es` defaults to the network's own (pass a change of it for a change of G). */
+  irradiation(J: Float64Array, G: Float64Array, Es = this.Es): void {
+    const { n, Fs, F } = this;
     for (let i = 0; i < n; i++) {
       const ri = i * n;
       let g = Fs[i] * Es;

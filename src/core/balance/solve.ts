@@ -18,7 +18,8 @@ import { STEFAN_BOLTZMANN, emissivePower } from '../exchange/exchange';
 import { exchangeFailure, surroundingsFactor, type ExchangeFailure } from '../exchange/failures';
 import { DenseLuSolver, LinearSolveError } from '../exchange/linearSolve';
 import { checkCondition, checkConvection } from './check';
-import { backHeat, balanceNodes } from './conditions';
+import { backHeat } from './conditions';
+import { balanceNodes, nodeCoupling, nodeIrradiation } from './nodes';
 import { RadiosityNetwork } from './radiosity';
 import { balanceResult, type Solved } from './results';
 import type { BalanceInput, BalanceOutcome } from './types';
@@ -107,25 +108,10 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
     // Z_ab - delta_ab W_a + delta_ab slope_a / (4 sigma T_a^3), with Z_ab = sum_{i in a} A_i e_i sum_{k in b} dG_i/dE_k
     // and W_a = sum_{i in a} A_i e_i. Z is formed once per solve. Newton solves for changes of E (a temperature
     // near 0 K then leaves its column well scaled instead of vanishing like T^3) and steps T by dE / (4 sigma T^3).
-    const Y = network.sensitivity(unknown, unknown); // dG/dE among the unknown surfaces, in `unknown` order
-    const u = unknown.length;
-    const Z = new Float64Array(m * m);
-    const W = new Float64Array(m);
-    let row = 0;
-    for (let a = 0; a < m; a++) {
-      for (const i of members[a]) {
-        const w = A[i] * eps[i];
-        W[a] += w;
-        let col = 0;
-        for (let b = 0; b < m; b++) {
-          let dG = 0;
-          for (let k = 0; k < members[b].length; k++) dG += Y[row * u + col + k];
-          Z[a * m + b] += w * dG;
-          col += members[b].length;
-        }
-        row++;
-      }
-    }
+    // dG/dE among the unknown surfaces, rows in `unknown` order (row k is unknown[k]).
+    const rowOf = new Int32Array(n);
+    unknown.forEach((i, k) => (rowOf[i] = k));
+    const { Z, W } = nodeCoupling(nodeIrradiation(network, unknown, members), (i) => rowOf[i], members, A, eps);
     const jacobian = new DenseLuSolver(m);
     const step = new Float64Array(m);
     const colScale = new Float64Array(m);

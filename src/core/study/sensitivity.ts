@@ -16,7 +16,7 @@
 // e_k 4 sigma T_k^3 in row k; the surroundings T_s: (1 - e_i) F_is dE_s in every
 // row, plus dE_s in an opening's row (its E is E_s). One factorisation of M and
 // one of K serve every parameter.
-import { backHeat, balanceNodes, type BalanceInput } from '../balance';
+import { backHeat, balanceNodes, nodeCoupling, nodeIrradiation, RadiosityNetwork, type BalanceInput } from '../balance';
 import { DenseLuSolver, LinearSolveError, STEFAN_BOLTZMANN, emissivePower, type ExchangeResult } from '../exchange';
 
 /** What the derivatives need of the balance's input (SI units, as BalanceInput). */
@@ -75,45 +75,36 @@ export function netHeatSensitivity(input: SensitivityInput, result: SensitivityB
   const h = (i: number) => input.convectionCoefficient?.[i] ?? 0;
   const E = Float64Array.from(T, (t) => emissivePower(t)); // openings report T_s, so E_i = E_s there
 
-  const network = factored(n, (M) => {
-    for (let i = 0; i < n; i++) {
-      const w = 1 - eps[i];
-      for (let j = 0; j < n; j++) M[i * n + j] = -w * F[i * n + j];
-      M[i * n + i] += 1;
-    }
-  });
-  if (!network) return { ok: false, code: 'singular' };
-  const irradiationOf = (dJ: Float64Array, dEs: number) =>
-    Float64Array.from({ length: n }, (_, i) => {
-      let g = Fs[i] * dEs;
-      for (let j = 0; j < n; j++) g += F[i * n + j] * dJ[j];
-      return g;
-    });
-
-  // Per node b: X_b = M^-1 (e on b's surfaces), dJ/dE_b; Y_b = F X_b, dG/dE_b (W/m^2 per W/m^2).
+  // The balance's own radiosity network (M factored once) and the nodes' Newton matrix at the answer.
+  let network: RadiosityNetwork;
+  try {
+    network = new RadiosityNetwork(F, eps, Fs, Ts === undefined ? 0 : emissivePower(Ts));
+  } catch (error) {
+    if (error instanceof LinearSolveError) return { ok: false, code: 'singular' };
+    throw error;
+  }
   const nodes = balanceNodes(conditions);
   const m = nodes.length;
-  const X = nodes.map((members) => {
-    const x = new Float64Array(n);
-    for (const i of members) x[i] = eps[i];
-    return network.solve(x);
-  });
-  const Y = X.map((x) => irradiationOf(x, 0));
-  const jacobian =
-    m === 0
-      ? null
-      : factored(m, (K) => {
-          nodes.forEach((members, a) => {
-            let slope = 0; // d(back - convection)/dT of the node, W/(m K)
-            for (const i of members) {
-              slope += backHeat(conditions[i], T[i], A[i]).slope - A[i] * h(i);
-              for (let b = 0; b < m; b++) K[a * m + b] += A[i] * eps[i] * Y[b][i];
-              K[a * m + a] -= A[i] * eps[i];
-            }
-            K[a * m + a] += slope / (4 * STEFAN_BOLTZMANN * T[members[0]] ** 3);
-          });
-        });
-  if (m > 0 && !jacobian) return { ok: false, code: 'singular' };
+  const all = Int32Array.from({ length: n }, (_, i) => i);
+  const Y = nodeIrradiation(network, all, nodes); // dG_i/dE_b, n x m
+  let jacobian: DenseLuSolver | null = null;
+  if (m > 0) {
+    const { Z, W } = nodeCoupling(Y, (i) => i, nodes, A, eps);
+    const K = new DenseLuSolver(m);
+    K.matrix.set(Z);
+    nodes.forEach((members, a) => {
+      let slope = 0; // d(back - convection)/dT of the node, W/(m K)
+      for (const i of members) slope += backHeat(conditions[i], T[i], A[i]).slope - A[i] * h(i);
+      K.matrix[a * m + a] += slope / (4 * STEFAN_BOLTZMANN * T[members[0]] ** 3) - W[a];
+    });
+    try {
+      K.factor();
+      jacobian = K;
+    } catch (error) {
+      if (error instanceof LinearSolveError) return { ok: false, code: 'singular' };
+      throw error;
+    }
+  }
 
   const parameters: SensitivityParameter[] = [];
   for (let k = 0; k < n; k++) if (conditions[k].kind !== 'opening') parameters.push({ kind: 'emissivity', surface: k });
@@ -151,8 +142,9 @@ export function netHeatSensitivity(input: SensitivityInput, result: SensitivityB
         rhs[i] = (1 - eps[i]) * Fs[i] * dEs + eps[i] * dE[i];
       }
     }
-    const dJ = network.solve(rhs);
-    const dG = irradiationOf(dJ, dEs);
+    const dJ = network.solveRows(rhs);
+    const dG = new Float64Array(n);
+    network.irradiation(dJ, dG, dEs);
     if (jacobian) {
       // -dr_a/dp with the nodes held, then the nodes' answer dE = K^-1 (-dr/dp).
       const minusDr = Float64Array.from(nodes, (members) => {
@@ -163,35 +155,18 @@ export function netHeatSensitivity(input: SensitivityInput, result: SensitivityB
       const dNode = jacobian.solve(minusDr);
       nodes.forEach((members, b) => {
         for (const i of members) dE[i] += dNode[b];
-        for (let i = 0; i < n; i++) {
-          dG[i] += Y[b][i] * dNode[b];
-          dJ[i] += X[b][i] * dNode[b];
-        }
+        for (let i = 0; i < n; i++) dG[i] += Y[i * m + b] * dNode[b];
       });
     }
     const dq = new Float64Array(n);
     let dSurroundings = 0;
     for (let i = 0; i < n; i++) {
       dq[i] = A[i] * (de[i] * (E[i] - G[i]) + eps[i] * (dE[i] - dG[i]));
-      // Surroundings net heat = -sum_i A_i F_is (J_i - E_s).
-      dSurroundings -= A[i] * Fs[i] * (dJ[i] - dEs);
+      // Surroundings net heat = -sum_i A_i F_is (J_i - E_s), and J_i - G_i = q_i / A_i, so dJ_i = dG_i + dq_i / A_i.
+      dSurroundings -= Fs[i] * (A[i] * dG[i] + dq[i] - A[i] * dEs);
     }
     netHeat.push(dq);
     surroundingsNetHeat[row] = dSurroundings;
   });
   return { ok: true, parameters, netHeat, surroundingsNetHeat };
-}
-
-/** An n x n solver with `fill` written into its matrix and factored, or null when singular. */
-function factored(n: number, fill: (matrix: Float64Array) => void): DenseLuSolver | null {
-  const solver = new DenseLuSolver(n);
-  solver.matrix.fill(0);
-  fill(solver.matrix);
-  try {
-    solver.factor();
-    return solver;
-  } catch (error) {
-    if (error instanceof LinearSolveError) return null;
-    throw error;
-  }
 }
