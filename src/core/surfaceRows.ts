@@ -4,7 +4,7 @@
 // added in ascending row order, so the sums are the same bit for bit however the
 // rows were shared out. They equal the edge-matrix path's sums to rounding.
 import type { ViewFactorResult } from './scene';
-import { surfaceResult } from './surfaces';
+import { surfaceLengths, surfaceResult } from './surfaces';
 import type { EdgePairs } from './pairRows';
 
 /** Per-row surface sums of some rows, as one thread hands them on. */
@@ -108,15 +108,8 @@ export class SurfaceAccumulator {
     private readonly edgeSurface: ArrayLike<number>,
     readonly surfaceCount: number,
   ) {
-    const m = surfaceCount;
-    this.exchange = new Float64Array(m * m);
-    this.surfaceLength = new Float64Array(m);
-    for (let i = 0; i < edgeLength.length; i++) {
-      const s = edgeSurface[i];
-      if (!(s >= 0 && s < m && Number.isInteger(s)))
-        throw new Error(`edge ${i} has surface index ${s} outside 0..${m - 1}`);
-      this.surfaceLength[s] += edgeLength[i];
-    }
+    this.exchange = new Float64Array(surfaceCount * surfaceCount);
+    this.surfaceLength = surfaceLengths(edgeLength, edgeSurface, surfaceCount);
   }
 
   /** True once every row has been added. */

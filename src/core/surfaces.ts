@@ -11,6 +11,26 @@ export function reciprocityResidualOf(a: number, b: number): number {
 }
 
 /**
+ * Length of every surface (sketch units): the sum of its edges' lengths in
+ * ascending edge order. Throws when an edge's surface index is not 0..surfaceCount-1.
+ */
+export function surfaceLengths(
+  edgeLength: ArrayLike<number>,
+  edgeSurface: ArrayLike<number>,
+  surfaceCount: number,
+): Float64Array {
+  const m = surfaceCount;
+  const out = new Float64Array(m);
+  for (let i = 0; i < edgeLength.length; i++) {
+    const s = edgeSurface[i];
+    if (!(s >= 0 && s < m && Number.isInteger(s)))
+      throw new Error(`edge ${i} has surface index ${s} outside 0..${m - 1}`);
+    out[s] += edgeLength[i];
+  }
+  return out;
+}
+
+/**
  * Aggregate edge view factors (edges x edges, row-major, row = from) to surfaces:
  * F_IJ = sum_{i in I, j in J} L_i F_ij / L_I (lengths in sketch units), and report
  * the row-sum residual 1 - sum_J F_IJ and the largest relative reciprocity residual
@@ -26,13 +46,7 @@ export function aggregateToSurfaces(
 ): ViewFactorResult {
   const n = edgeCount;
   const m = surfaceCount;
-  const surfaceLength = new Float64Array(m);
-  for (let i = 0; i < n; i++) {
-    const s = edgeSurface[i];
-    if (!(s >= 0 && s < m && Number.isInteger(s)))
-      throw new Error(`edge ${i} has surface index ${s} outside 0..${m - 1}`);
-    surfaceLength[s] += edgeLength[i];
-  }
+  const surfaceLength = surfaceLengths(edgeLength, edgeSurface, m);
   // G_IJ = L_I F_IJ, the exchange length; summed straight from the edge rows.
   const G = new Float64Array(m * m);
   for (let i = 0; i < n; i++) {
