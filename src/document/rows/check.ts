@@ -92,6 +92,29 @@ export function rowProblems(shapes: readonly Shape[], file: SketchFileV1): Sketc
   return problems;
 }
 
+type Circle = NonNullable<Shape['circle']>;
+
+/**
+ * The first of the row's tubes (k, in row order) whose diameter differs from the
+ * row's by more than 1e-9 of it, or whose centre is more than 1e-9 of the row's
+ * size from where the row puts it; null when all agree. Missing circles are skipped.
+ */
+export function firstMismatch(
+  circles: readonly (Circle | undefined)[],
+  row: TubeRow,
+  centres: readonly [number, number][],
+): { k: number; kind: 'diameter' | 'centre' } | null {
+  const tol = 1e-9 * rowScale(row, centres);
+  for (let k = 0; k < circles.length; k++) {
+    const circle = circles[k];
+    if (!circle) continue;
+    if (Math.abs(2 * circle.radius - row.diameter) > 1e-9 * row.diameter) return { k, kind: 'diameter' };
+    const [x, y] = circle.center;
+    if (Math.hypot(x - centres[k][0], y - centres[k][1]) > tol) return { k, kind: 'centre' };
+  }
+  return null;
+}
+
 /** The first tube whose size or centre is not the row's, in words, or null. */
 function tubeDifference(
   shapes: readonly Shape[],
@@ -99,25 +122,19 @@ function tubeDifference(
   row: TubeRow,
   centres: readonly [number, number][],
 ): { shape: number; text: string; place: SketchProblem['place'] } | null {
-  const tol = 1e-9 * rowScale(row, centres);
-  for (let k = 0; k < tubes.length; k++) {
-    const circle = shapes[tubes[k]].circle;
-    if (!circle) continue;
-    const at = { shapes: [tubes[k]], edges: [], points: [centres[k]] };
-    const nth = `${k + 1} of ${tubes.length} in the row`;
-    if (Math.abs(2 * circle.radius - row.diameter) > 1e-9 * row.diameter)
-      return {
-        shape: tubes[k],
-        text: `${nth}, has diameter ${formatNumber(2 * circle.radius)}; the row gives ${formatNumber(row.diameter)}`,
-        place: at,
-      };
-    const [x, y] = circle.center;
-    if (Math.hypot(x - centres[k][0], y - centres[k][1]) > tol)
-      return {
-        shape: tubes[k],
-        text: `${nth}, has its centre at ${formatPoint(circle.center)}; the row's numbers put it at ${formatPoint(centres[k])}`,
-        place: at,
-      };
-  }
-  return null;
+  const miss = firstMismatch(
+    tubes.map((t) => shapes[t].circle),
+    row,
+    centres,
+  );
+  if (!miss) return null;
+  const { k } = miss;
+  const circle = shapes[tubes[k]].circle!;
+  const at = { shapes: [tubes[k]], edges: [], points: [centres[k]] };
+  const nth = `${k + 1} of ${tubes.length} in the row`;
+  const text =
+    miss.kind === 'diameter'
+      ? `${nth}, has diameter ${formatNumber(2 * circle.radius)}; the row gives ${formatNumber(row.diameter)}`
+      : `${nth}, has its centre at ${formatPoint(circle.center)}; the row's numbers put it at ${formatPoint(centres[k])}`;
+  return { shape: tubes[k], text, place: at };
 }

@@ -3,5 +3,5 @@
 export { MAX_ROW_TUBES } from './limits';
 export { directionOf, findWall, tidy, rowCentres, rowNumbersProblem, type RowShape, type Wall } from './place';
 export { buildRow, newRowName, nextNumberedName, rowTubes, splitRow, type RowBuild } from './rebuild';
-export { rowProblems } from './check';
+export { firstMismatch, rowProblems } from './check';
 export type { TubeRow } from '../schema';

@@ -7,7 +7,16 @@
 //   into single tubes (they stay where the user put them); all deleted: the row goes.
 // Anything else (a wall moved so the row no longer fits, a row that was out of
 // step before the edit) is left for the sketch's problems to say.
-import { buildRow, findWall, rowCentres, rowTubes, splitRow, tidy, type TubeRow } from '../../document/rows';
+import {
+  buildRow,
+  findWall,
+  firstMismatch,
+  rowCentres,
+  rowTubes,
+  splitRow,
+  tidy,
+  type TubeRow,
+} from '../../document/rows';
 import type { SketchFile, Shape } from '../sketchFile';
 import { edgeNames } from '../geometry/polygon';
 
@@ -26,17 +35,11 @@ const sameCircles = (a: readonly (Circle | undefined)[], b: readonly (Circle | u
       c.center[1] === b[k]?.center[1],
   );
 
-/** True when the circles are exactly where and as big as the row puts them (within the file check's tolerance). */
+/** True when the circles are where and as big as the row puts them (the file check's own tolerance). */
 function fitsRow(doc: SketchFile, row: TubeRow, circles: readonly (Circle | undefined)[]): boolean {
   const placed = rowCentres(doc.shapes, row);
-  if (!placed.ok || circles.length !== row.count) return false;
-  const scale = Math.max(row.diameter + row.pitch * row.count, ...placed.centres.flat().map(Math.abs));
-  return circles.every(
-    (c, k) =>
-      c !== undefined &&
-      Math.abs(2 * c.radius - row.diameter) <= 1e-9 * row.diameter &&
-      Math.hypot(c.center[0] - placed.centres[k][0], c.center[1] - placed.centres[k][1]) <= 1e-9 * scale,
-  );
+  if (!placed.ok || circles.length !== row.count || circles.some((c) => c === undefined)) return false;
+  return firstMismatch(circles, row, placed.centres) === null;
 }
 
 /** The wall's new name when the edges that carried it in `before` carry another name in `after`. */
