@@ -3,7 +3,7 @@
 import { useRef, type Ref } from 'react';
 import type { ExchangeSolved } from '../../state/exchange/slice';
 import { exchangeMatrixRows } from '../../state/exchange/tables';
-import { Gap, type ColumnWindow } from '../matrix/MatrixRow';
+import { Gap, Spacer, type ColumnWindow } from '../matrix/MatrixRow';
 import { useMatrixWindow, WINDOW_FROM } from '../matrix/useMatrixWindow';
 import { fmtHeat } from './format';
 
@@ -93,15 +93,5 @@ function Grid({
         </tbody>
       </table>
     </div>
-  );
-}
-
-/** Stands for the rows a windowed table leaves out above or below the drawn ones. */
-function Spacer({ px }: { px: number }) {
-  if (px <= 0) return null;
-  return (
-    <tr role="presentation" aria-hidden="true">
-      <td style={{ height: px, padding: 0, border: 0 }} />
-    </tr>
   );
 }

@@ -6,6 +6,7 @@ import { TEMPERATURE_LABEL } from '../../state/exchange/units';
 import { fmtHeat, fmtTemperature } from './format';
 import { exchangeRows, type ExchangeRow } from './rows';
 import { ROWS_WINDOW_FROM, useRowWindow, type RowWindow } from './useRowWindow';
+import { Spacer } from '../matrix/MatrixRow';
 
 interface Props {
   ex: ExchangeSolved;
@@ -177,13 +178,3 @@ const ExchangeRowView = memo(function ExchangeRowView({ row, unit, on, inside, d
     </tr>
   );
 });
-
-/** Stands for the rows a windowed table leaves out above or below the drawn ones. */
-function Spacer({ px }: { px: number }) {
-  if (px <= 0) return null;
-  return (
-    <tr role="presentation" aria-hidden="true">
-      <td style={{ height: px, padding: 0, border: 0 }} />
-    </tr>
-  );
-}

@@ -24,6 +24,16 @@ export function Swatch({ index }: { index: number }) {
 }
 
 /** A blank cell standing for the columns a windowed table leaves out. */
+/** Stands for the rows a windowed table leaves out above or below the drawn ones. */
+export function Spacer({ px }: { px: number }) {
+  if (px <= 0) return null;
+  return (
+    <tr role="presentation" aria-hidden="true">
+      <td style={{ height: px, padding: 0, border: 0 }} />
+    </tr>
+  );
+}
+
 export function Gap({ px, head }: { px: number; head?: boolean }) {
   if (px <= 0) return null;
   const style = { width: px, minWidth: px, maxWidth: px, padding: 0 };

@@ -1,6 +1,6 @@
 import { memo, useMemo, useRef, type Ref } from 'react';
 import type { MatrixView } from '../../state/matrixView';
-import { Gap, MatrixRow, Swatch, type ColumnWindow } from './MatrixRow';
+import { Gap, MatrixRow, Spacer, Swatch, type ColumnWindow } from './MatrixRow';
 import { cellWidthPx, ROW_PX, useMatrixWindow, WINDOW_FROM } from './useMatrixWindow';
 
 interface Props {
@@ -160,15 +160,5 @@ function MatrixGrid({
         )}
       </tbody>
     </table>
-  );
-}
-
-/** Stands for the rows a windowed table leaves out above or below the drawn ones. */
-function Spacer({ px }: { px: number }) {
-  if (px <= 0) return null;
-  return (
-    <tr role="presentation" aria-hidden="true">
-      <td style={{ height: px, padding: 0, border: 0 }} />
-    </tr>
   );
 }
