@@ -9,7 +9,6 @@ import { solveSketchExchange } from '../exchangeInput';
 import { exchangeJson } from '../exchangeJson';
 import { restore } from '../restore';
 import type { Sketch } from '../schema';
-import { serialize } from '../serialize';
 import { toScene } from '../toScene';
 import { withParameterValue } from './apply';
 import { describeParameter, parameterUnit, withUnit, type StudyParameter } from './parameter';
@@ -30,13 +29,13 @@ export interface StudyRun {
 
 export type StudyRunOutcome = { ok: true; run: StudyRun } | { ok: false; message: string };
 
-/** The edited sketch as a file, read back: what the command line would read from it. */
+/** The edited sketch, checked by the reader as a file with that value would be (no text in between). */
 export function editedSketch(
   sketch: Sketch,
   p: StudyParameter,
   value: number,
 ): { ok: true; sketch: Sketch } | { ok: false; message: string } {
-  const read = restore(serialize(withParameterValue(sketch, p, value)));
+  const read = restore(withParameterValue(sketch, p, value));
   if (read.ok) return { ok: true, sketch: read.sketch };
   return { ok: false, message: read.errors.map((e) => e.message).join('; ') };
 }
