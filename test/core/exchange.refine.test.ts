@@ -10,10 +10,12 @@ import { DenseLuSolver, solveExchange, type SurfaceCondition } from '../../src/c
 //
 // The bound: each q'_i carries a few roundings of A_i (J_i + G_i) (J_i's last
 // digit after the refined solve, the compensated G_i, the difference), with
-// signs that do not line up, so over n surfaces they grow like sqrt(n) times
-// one of them (the probabilistic model of Higham and Mary, SIAM J. Sci.
-// Comput. 41, 2019): |sum q'| <= u sum_i A_i (J_i + G_i) / sqrt(n). Without the
-// refinement step and the compensated sums it is 10-15 times that here.
+// signs that do not line up, so over n surfaces they add like a random walk:
+// the sum's spread is about sigma = u sum_i A_i (J_i + G_i) / sqrt(n) (the
+// probabilistic model of Higham and Mary, SIAM J. Sci. Comput. 41, 2019).
+// Measured: 0.1-1.6 sigma over these enclosures and both factorizations. The
+// test allows 4 sigma: a correct solve fails it with probability below 1e-4
+// (normal tail), while plain sums instead of compensated ones give 26-160 sigma.
 const U = 2 ** -53;
 
 function seeded(seed: number): () => number {
@@ -70,7 +72,7 @@ function checkConservation(input: ReturnType<typeof pairedEnclosure>, workspace?
     sum = t;
     flows += input.area[i] * (r.radiosity[i] + r.irradiation[i]);
   }
-  expect(Math.abs(sum)).toBeLessThanOrEqual((U * flows) / Math.sqrt(n));
+  expect(Math.abs(sum)).toBeLessThanOrEqual((4 * U * flows) / Math.sqrt(n));
   expect(r.energyBalance).toBeLessThan(1e-13);
 }
 

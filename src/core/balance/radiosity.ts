@@ -2,27 +2,30 @@
 // matrix does not depend on temperature: every surface's row is
 //   J_i - (1 - e_i) G_i = e_i E_i,   G_i = sum_j F_ij J_j + F_i,s E_s,
 // (openings: e = 1, E = E_s), so M = I - diag(1 - e) F is factored once per
-// solve and each new set of emissive powers E = sigma T^4 costs two triangular
-// solves. Fluxes and powers in W/m^2.
-import { DenseLuSolver } from '../exchange/linearSolve';
+// solve (exchange/radiositySystem.ts) and each new set of emissive powers
+// E = sigma T^4 costs two triangular solves. Fluxes and powers in W/m^2.
+import type { DenseLuSolver } from '../exchange/linearSolve';
+import { RadiositySystem } from '../exchange/radiositySystem';
 import { radiosityResidual } from '../exchange/refine';
 
 export class RadiosityNetwork {
   readonly n: number;
   /** Estimated reciprocal condition number of M (dimensionless). */
   readonly reciprocalCondition: number;
-  private readonly solver: DenseLuSolver;
+  private readonly system: RadiositySystem;
   private readonly weight: Float64Array;
   private readonly rhs: Float64Array;
   private readonly residual: Float64Array;
 
   /**
    * Builds and factors M (throws LinearSolveError when it is singular or not
-   * finite). F: n x n view factors row-major; eps: emissivity (1 for openings);
-   * Fs: view factor to the surroundings; Es: their emissive power, W/m^2.
+   * finite). F: n x n view factors row-major; area: surface lengths, m;
+   * eps: emissivity (1 for openings); Fs: view factor to the surroundings;
+   * Es: their emissive power, W/m^2.
    */
   constructor(
     private readonly F: ArrayLike<number>,
+    area: ArrayLike<number>,
     private readonly eps: Float64Array,
     private readonly Fs: Float64Array,
     private readonly Es: number,
@@ -30,18 +33,11 @@ export class RadiosityNetwork {
   ) {
     const n = eps.length;
     this.n = n;
-    this.solver = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
     this.weight = eps.map((e) => 1 - e);
     this.rhs = new Float64Array(n);
     this.residual = new Float64Array(n);
-    const M = this.solver.matrix;
-    for (let i = 0; i < n; i++) {
-      const ri = i * n;
-      const w = 1 - eps[i];
-      for (let j = 0; j < n; j++) M[ri + j] = -w * F[ri + j];
-      M[ri + i] += 1;
-    }
-    this.reciprocalCondition = this.solver.factor();
+    this.system = new RadiositySystem(F, this.weight, area, workspace);
+    this.reciprocalCondition = this.system.reciprocalCondition;
   }
 
   /**
@@ -54,8 +50,8 @@ export class RadiosityNetwork {
     const { n, eps, rhs } = this;
     for (let i = 0; i < n; i++) rhs[i] = eps[i] * E[i] + (1 - eps[i]) * this.Fs[i] * this.Es;
     J.set(rhs);
-    this.solver.solve(J);
-    this.solver.refine(J, radiosityResidual(this.F, this.weight, J, rhs, this.residual));
+    this.system.solve(J);
+    this.system.refine(J, radiosityResidual(this.F, this.weight, J, rhs, this.residual));
     this.irradiation(J, G);
   }
 
@@ -64,7 +60,7 @@ export class RadiosityNetwork {
    * in place: how the radiosities answer a change of the rows' sources.
    */
   solveRows(b: Float64Array): Float64Array {
-    return this.solver.solve(b);
+    return this.system.solve(b);
   }
 
   /** G_i = sum_j F_ij J_j + F_i,s E_s (W/m^2) into G; `Es` defaults to the network's own (pass a change of it for a change of G). */
@@ -113,56 +109,18 @@ export class RadiosityNetwork {
     return Y;
   }
 
-  /** M^-1 diag(e) restricted to the columns `cols`: n x cols.length, row-major. */
+  /** M^-1 diag(e) restricted to the columns `cols`: n x cols.length, row-major, one solve per column. */
   private inverseColumns(cols: ArrayLike<number>): Float64Array {
     const { n, eps } = this;
     const u = cols.length;
-    const a = this.solver.matrix;
-    const pivot = this.solver.pivot;
     const X = new Float64Array(n * u);
-    for (let c = 0; c < u; c++) X[cols[c] * u + c] = eps[cols[c]];
-    for (let k = 0; k < n; k++) {
-      const p = pivot[k];
-      if (p !== k) {
-        for (let c = 0; c < u; c++) {
-          const t = X[k * u + c];
-          X[k * u + c] = X[p * u + c];
-          X[p * u + c] = t;
-        }
-      }
-    }
-    // L (unit lower) forward, row by row: X_i -= L_ik X_k.
-    for (let i = 1; i < n; i++) {
-      const ri = i * n;
-      const xi = i * u;
-      for (let k = 0; k < i; k++) {
-        const l = a[ri + k];
-        if (l !== 0) axpy(X, xi, k * u, u, l);
-      }
-    }
-    // U backward.
-    for (let i = n - 1; i >= 0; i--) {
-      const ri = i * n;
-      const xi = i * u;
-      for (let k = i + 1; k < n; k++) {
-        const v = a[ri + k];
-        if (v !== 0) axpy(X, xi, k * u, u, v);
-      }
-      const d = 1 / a[ri + i];
-      for (let c = 0; c < u; c++) X[xi + c] *= d;
+    const column = new Float64Array(n);
+    for (let c = 0; c < u; c++) {
+      column.fill(0);
+      column[cols[c]] = eps[cols[c]];
+      this.system.solve(column);
+      for (let i = 0; i < n; i++) X[i * u + c] = column[i];
     }
     return X;
   }
-}
-
-/** X[to + c] -= s X[from + c] for c < len: one row update, unrolled by four. */
-function axpy(X: Float64Array, to: number, from: number, len: number, s: number): void {
-  let c = 0;
-  for (; c + 3 < len; c += 4) {
-    X[to + c] -= s * X[from + c];
-    X[to + c + 1] -= s * X[from + c + 1];
-    X[to + c + 2] -= s * X[from + c + 2];
-    X[to + c + 3] -= s * X[from + c + 3];
-  }
-  for (; c < len; c++) X[to + c] -= s * X[from + c];
 }

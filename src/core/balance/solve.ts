@@ -43,7 +43,7 @@ export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): Ba
   const { n, eps, Fs, Es, h, Tg, known } = setup;
   let network: RadiosityNetwork;
   try {
-    network = new RadiosityNetwork(input.viewFactors, eps, Fs, Es, workspace);
+    network = new RadiosityNetwork(input.viewFactors, input.area, eps, Fs, Es, workspace);
   } catch (err) {
     if (err instanceof LinearSolveError) {
       return err.problem === 'not-finite'

@@ -23,6 +23,7 @@
 import { DenseLuSolver, LinearSolveError } from './linearSolve';
 import { exchangeFailure, surroundingsFactor, type ExchangeFailure } from './failures';
 import { radiosityResidual, rowProducts } from './refine';
+import { RadiositySystem } from './radiositySystem';
 
 /** Stefan-Boltzmann constant, W/(m^2 K^4) (CODATA 2018). */
 export const STEFAN_BOLTZMANN = 5.670374419e-8;
@@ -186,25 +187,21 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
   }
   if (n > 0 && !anchored) return exchangeFailure('no-fixed-temperature');
 
-  // Radiosity system M J = rhs, built straight into the solver's workspace.
-  const solver = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
-  const M = solver.matrix;
+  // Radiosity system M J = rhs, M = I - diag(weight) F, factored in the workspace's memory.
   const J = new Float64Array(n);
   const weight = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const c = input.conditions[i];
-    const ri = i * n;
     // Row weight of G_i: (1 - e) for a temperature, 1 for flux/adiabatic, 0 for black or opening rows (J_i = E_i).
-    const w = c.kind === 'temperature' ? 1 - eps[i] : c.kind === 'opening' ? 0 : 1;
-    weight[i] = w;
-    for (let j = 0; j < n; j++) M[ri + j] = -w * F[ri + j];
-    M[ri + i] += 1;
+    weight[i] = c.kind === 'temperature' ? 1 - eps[i] : c.kind === 'opening' ? 0 : 1;
     J[i] =
-      c.kind === 'temperature' || c.kind === 'opening' ? eps[i] * Eb[i] + w * Fs[i] * Es : fixedFlux[i] + Fs[i] * Es;
+      c.kind === 'temperature' || c.kind === 'opening'
+        ? eps[i] * Eb[i] + weight[i] * Fs[i] * Es
+        : fixedFlux[i] + Fs[i] * Es;
   }
-  let reciprocalCondition: number;
+  let system: RadiositySystem;
   try {
-    reciprocalCondition = solver.factor();
+    system = new RadiositySystem(F, weight, area, workspace);
   } catch (err) {
     if (err instanceof LinearSolveError) {
       return err.problem === 'not-finite'
@@ -213,12 +210,12 @@ export function solveExchange(input: ExchangeInput, workspace?: DenseLuSolver): 
     }
     throw err;
   }
+  const reciprocalCondition = system.reciprocalCondition;
   const rhs = Float64Array.from(J);
-  solver.solve(J);
-  // One step of iterative refinement (the residual from F: the factors have
-  // overwritten M), so every row holds to the rounding of J itself, which is
-  // what the energy balance sums.
-  solver.refine(J, radiosityResidual(F, weight, J, rhs, new Float64Array(n)));
+  system.solve(J);
+  // One step of iterative refinement (the residual from F itself), so every
+  // row holds to the rounding of J, which is what the energy balance sums.
+  system.refine(J, radiosityResidual(F, weight, J, rhs, new Float64Array(n)));
 
   // Results.
   const G = new Float64Array(n);

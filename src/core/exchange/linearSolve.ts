@@ -55,7 +55,8 @@ export class DenseLuSolver implements ProductContext {
   /** Byte offsets in the kernel's memory: a vector of n doubles, the two packing buffers. */
   readonly packedA: number;
   readonly packedB: number;
-  private readonly vectorAt: number;
+  /** Byte offset in the kernel's memory of a vector of n doubles (scratch of the solves). */
+  readonly vectorAt: number;
   private readonly vector: Float64Array;
   private readonly workX: Float64Array;
   private readonly workY: Float64Array;

@@ -78,7 +78,7 @@ export function netHeatSensitivity(input: SensitivityInput, result: SensitivityB
   // The balance's own radiosity network (M factored once) and the nodes' Newton matrix at the answer.
   let network: RadiosityNetwork;
   try {
-    network = new RadiosityNetwork(F, eps, Fs, Ts === undefined ? 0 : emissivePower(Ts));
+    network = new RadiosityNetwork(F, A, eps, Fs, Ts === undefined ? 0 : emissivePower(Ts));
   } catch (error) {
     if (error instanceof LinearSolveError) return { ok: false, code: 'singular' };
     throw error;

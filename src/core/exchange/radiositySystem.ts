@@ -1,0 +1,217 @@
+// The radiosity system M J = b with M = I - diag(w) F (w_i: the weight of
+// surface i's irradiation in its row; F: view factors, n x n row-major), built
+// and factored once, solved for any number of right-hand sides. Units: those
+// of J and b (W/m^2); M is dimensionless.
+//
+// Rows with w_i = 0 (black surfaces, openings) say J_i = b_i and are taken out.
+// Every other row, times A_i / w_i, reads
+//   (A_i / w_i) J_i - sum_j A_i F_ij J_j = (A_i / w_i) b_i,
+// whose matrix S is symmetric by reciprocity (A_i F_ij = A_j F_ji) and
+// diagonally dominant (A_i / w_i >= A_i >= sum_j A_i F_ij), so positive
+// definite when the system has a unique answer: it is factored by Cholesky
+// (cholesky.ts), half the work of LU. The factored matrix is S with each pair
+// averaged; the iterative refinement the callers do, with the residual of M
+// itself, removes what the averaging changed, so long as that change is tiny
+// next to S (checked: otherwise, and when S is not positive definite, M is
+// factored by LU with partial pivoting, as before, and that decides whether
+// the system is singular).
+
+import { DenseCholesky } from './cholesky';
+import { estimateInverseNormOne, type FactoredSystem } from './conditionEstimate';
+import { DEFAULT_MIN_RECIPROCAL_CONDITION, DenseLuSolver, LinearSolveError } from './linearSolve';
+
+/**
+ * Largest accepted estimate of ||M^-1|| ||diag(w/A) (S - averaged S)||_1, the
+ * factor by which one refinement step shrinks the error the averaging leaves:
+ * at 1e-9 one step brings J to the rounding of the unaveraged system.
+ */
+const MAX_AVERAGING_CONTRACTION = 1e-9;
+
+/** Rows and columns per tile when S is built (both F_ij and F_ji are read by rows). */
+const TILE = 64;
+
+export class RadiositySystem implements FactoredSystem {
+  readonly n: number;
+  /** Estimated reciprocal 1-norm condition number of M (1 best, tiny = results uncertain). */
+  readonly reciprocalCondition: number;
+  /** True when the Cholesky factors of S are in use, false for LU of M. */
+  readonly symmetric: boolean;
+  private readonly lu: DenseLuSolver;
+  private readonly cholesky: DenseCholesky | null = null;
+  /** Surfaces with w > 0 (the unknowns of S) and with w = 0 (J = b), each in order. */
+  private readonly unknown: Int32Array;
+  private readonly known: Int32Array;
+  private readonly reduced: Float64Array;
+
+  /**
+   * Builds and factors M (throws LinearSolveError when it is singular,
+   * ill-conditioned or not finite, as DenseLuSolver.factor does). F: n x n
+   * view factors; w: row weights in [0, 1]; area: surface lengths, m (> 0).
+   * `workspace`: an n x n solver whose memory is reused.
+   */
+  constructor(
+    private readonly F: ArrayLike<number>,
+    private readonly w: ArrayLike<number>,
+    private readonly area: ArrayLike<number>,
+    workspace?: DenseLuSolver,
+  ) {
+    const n = w.length;
+    this.n = n;
+    this.lu = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
+    this.unknown = Int32Array.from({ length: n }, (_, i) => i).filter((i) => w[i] > 0);
+    this.known = Int32Array.from({ length: n }, (_, i) => i).filter((i) => !(w[i] > 0));
+    this.reduced = new Float64Array(this.unknown.length);
+    const x = new Float64Array(n);
+    const y = new Float64Array(n);
+    const z = new Float64Array(n);
+
+    const m = this.unknown.length;
+    const cholesky = m > 0 ? new DenseCholesky(this.lu, m) : null;
+    if (cholesky) {
+      const { normM, averaging } = this.buildScaled(cholesky.matrix);
+      if (Number.isFinite(normM) && cholesky.factor()) {
+        this.cholesky = cholesky;
+        this.symmetric = true;
+        const inverse = estimateInverseNormOne(this, x, y, z);
+        if (Number.isFinite(inverse) && inverse * averaging <= MAX_AVERAGING_CONTRACTION) {
+          const rcond = normM > 0 && inverse > 0 ? 1 / (normM * inverse) : 0;
+          if (!(rcond >= DEFAULT_MIN_RECIPROCAL_CONDITION)) {
+            throw new LinearSolveError('ill-conditioned', {
+              reciprocalCondition: rcond,
+              limit: DEFAULT_MIN_RECIPROCAL_CONDITION,
+            });
+          }
+          this.reciprocalCondition = rcond;
+          return;
+        }
+      }
+    }
+    // LU of M itself: no usable symmetry, or nothing to solve for.
+    this.cholesky = null;
+    this.symmetric = false;
+    const M = this.lu.matrix;
+    for (let i = 0; i < n; i++) {
+      const ri = i * n;
+      const wi = w[i];
+      for (let j = 0; j < n; j++) M[ri + j] = -wi * F[ri + j];
+      M[ri + i] += 1;
+    }
+    this.reciprocalCondition = this.lu.factor();
+  }
+
+  /** Solves M x = b: b (length n) is overwritten with x and returned. */
+  solve(b: Float64Array): Float64Array {
+    const chol = this.cholesky;
+    if (!chol) return this.lu.solve(b);
+    const { F, w, area, unknown, known, reduced, n } = this;
+    // Known radiosities (w = 0) stay b; they move to the right-hand side of S.
+    for (let a = 0; a < unknown.length; a++) {
+      const i = unknown[a];
+      const ri = i * n;
+      let fromKnown = 0;
+      for (let t = 0; t < known.length; t++) fromKnown += F[ri + known[t]] * b[known[t]];
+      reduced[a] = area[i] * (b[i] / w[i] + fromKnown);
+    }
+    chol.solve(reduced);
+    for (let a = 0; a < unknown.length; a++) b[unknown[a]] = reduced[a];
+    return b;
+  }
+
+  /** Solves M^T x = b (for the condition estimate): b is overwritten with x and returned. */
+  solveTransposed(b: Float64Array): Float64Array {
+    const chol = this.cholesky;
+    if (!chol) return this.lu.solveTransposed(b);
+    const { F, w, area, unknown, known, reduced, n } = this;
+    // Unknown rows: M_UU = diag(w/A) S, so M_UU^-T b = diag(A/w) S^-1 b (S symmetric).
+    for (let a = 0; a < unknown.length; a++) reduced[a] = b[unknown[a]];
+    chol.solve(reduced);
+    for (let a = 0; a < unknown.length; a++) {
+      const i = unknown[a];
+      reduced[a] *= area[i] / w[i];
+    }
+    // Known rows: x_k = b_k + sum over unknowns i of w_i F_ik x_i (M_ik = -w_i F_ik).
+    for (const k of known) {
+      let s = b[k];
+      for (let a = 0; a < unknown.length; a++) s += w[unknown[a]] * F[unknown[a] * n + k] * reduced[a];
+      b[k] = s;
+    }
+    for (let a = 0; a < unknown.length; a++) b[unknown[a]] = reduced[a];
+    return b;
+  }
+
+  /**
+   * One step of iterative refinement after solve(): x += M^-1 r, where
+   * r = b - M x is the residual the caller computed from F (units of x); r is
+   * overwritten with the correction.
+   */
+  refine(x: Float64Array, residual: Float64Array): Float64Array {
+    this.solve(residual);
+    for (let i = 0; i < this.n; i++) x[i] += residual[i];
+    return x;
+  }
+
+  /**
+   * Writes the lower triangle of the averaged S into `s` (stride m), tile by
+   * tile so that F_ij and F_ji are both read along rows. Returns the 1-norm of
+   * M and ||diag(w/A) (S - averaged S)||_1 (NaN norm when an entry is not finite).
+   */
+  private buildScaled(s: Float64Array): { normM: number; averaging: number } {
+    const { F, w, area, unknown, known, n } = this;
+    const m = unknown.length;
+    // Per unknown, in their order: area, weight, weight / area (typed, for the inner loop).
+    const Au = Float64Array.from(unknown, (i) => area[i]);
+    const wu = Float64Array.from(unknown, (i) => w[i]);
+    const ratio = Float64Array.from(unknown, (i) => w[i] / area[i]);
+    const columnM = new Float64Array(m); // column sums of |M| over the unknowns' columns
+    const columnDelta = new Float64Array(m);
+    for (let a0 = 0; a0 < m; a0 += TILE) {
+      const a1 = Math.min(m, a0 + TILE);
+      for (let b0 = 0; b0 <= a0; b0 += TILE) {
+        const b1 = Math.min(m, b0 + TILE);
+        for (let a = a0; a < a1; a++) {
+          const i = unknown[a];
+          const ri = i * n;
+          const Ai = Au[a];
+          const wi = wu[a];
+          const ra = ratio[a];
+          const sa = a * m;
+          const last = Math.min(b1, a);
+          let deltaA = 0;
+          let sumA = 0;
+          for (let b = b0; b < last; b++) {
+            const j = unknown[b];
+            const fij = F[ri + j];
+            const fji = F[j * n + i];
+            const sij = Ai * fij;
+            const sji = Au[b] * fji;
+            s[sa + b] = -0.5 * (sij + sji);
+            const half = Math.abs(sij - sji) * 0.5;
+            columnDelta[b] += ra * half;
+            deltaA += ratio[b] * half;
+            columnM[b] += wi * Math.abs(fij);
+            sumA += wu[b] * Math.abs(fji);
+          }
+          columnDelta[a] += deltaA;
+          columnM[a] += sumA;
+          if (b0 <= a && a < b1) {
+            const fii = F[ri + i];
+            s[sa + a] = Ai / wi - Ai * fii;
+            columnM[a] += Math.abs(1 - wi * fii);
+          }
+        }
+      }
+    }
+    let normM = 0;
+    const larger = (v: number) => (normM = v > normM || Number.isNaN(v) ? v : normM);
+    for (let a = 0; a < m; a++) larger(columnM[a]);
+    // Columns of known surfaces: 1 from their own row, w_i |F_ik| from each unknown row.
+    for (const k of known) {
+      let sum = 1;
+      for (let a = 0; a < m; a++) sum += wu[a] * Math.abs(F[unknown[a] * n + k]);
+      larger(sum);
+    }
+    let averaging = 0;
+    for (let a = 0; a < m; a++) averaging = Math.max(averaging, columnDelta[a]);
+    return { normM, averaging };
+  }
+}
