@@ -6,9 +6,9 @@ import * as Comlink from 'comlink';
 import { buildEdges, type EdgeSet } from '../core/edges';
 import { EdgePairs, packRows } from '../core/pairRows';
 import { SurfaceRowSummer } from '../core/surfaceRows';
-import { allRows, edgeViewFactors } from '../core/viewFactors';
+import { allRows } from '../core/viewFactors';
 import { assembleAnswer } from './assemble';
-import type { RowsAnswer, ViewFactorAnswer, ViewFactorApi, ViewFactorJob } from './job';
+import { isSurfaceAnswer, type RowsAnswer, type ViewFactorAnswer, type ViewFactorApi, type ViewFactorJob } from './job';
 
 function jobEdges(job: ViewFactorJob): EdgeSet {
   return buildEdges(job.polygons, job.circles ?? []);
@@ -34,20 +34,25 @@ export function computeEdgeViewFactors(job: ViewFactorJob): ViewFactorAnswer {
   }
   const edges = jobEdges(job);
   const pairs = new EdgePairs(edges);
-  const F = edgeViewFactors(edges);
-  return { edgeCount: pairs.count, edgeLength: pairs.length, F, closed: edges.hasEnclosure };
+  const rows = allRows(pairs.count);
+  const packed = packRows(pairs, rows);
+  return {
+    edgeCount: pairs.count,
+    edgeLength: pairs.length,
+    rows: { sets: [rows], packed: [packed] },
+    closed: edges.hasEnclosure,
+  };
 }
 
 /** The buffers of an answer, handed over instead of copied (the matrix is edges^2 numbers). */
 export function transferables(r: ViewFactorAnswer | RowsAnswer): ArrayBuffer[] {
   const list: ArrayBufferLike[] = [r.edgeLength.buffer];
-  if ('F' in r) list.push(r.F.buffer);
-  else if ('exchange' in r) list.push(r.exchange.buffer, r.edgeSurface.buffer, r.surfaceLength.buffer);
-  else if (r.kind === 'matrix') list.push(r.packed.buffer, r.rows.buffer);
-  else {
+  if ('kind' in r && r.kind === 'matrix') list.push(r.packed.buffer, r.rows.buffer);
+  else if ('kind' in r) {
     const s = r.sums;
     list.push(s.rows.buffer, s.self.buffer, s.start.buffer, s.surface.buffer, s.exchange.buffer);
-  }
+  } else if (isSurfaceAnswer(r)) list.push(r.exchange.buffer, r.edgeSurface.buffer, r.surfaceLength.buffer);
+  else r.rows.sets.forEach((set, k) => list.push(set.buffer, r.rows.packed[k].buffer));
   return [...new Set(list)] as ArrayBuffer[];
 }
 

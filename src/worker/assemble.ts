@@ -1,9 +1,10 @@
-// The main thread's half of a shared job: the workers' answers for their rows put
-// together into one edge matrix, or added into surface sums in ascending row order,
-// so the result is the same bit for bit whatever the number of workers.
-import { unpackRows } from '../core/pairRows';
+// The main thread's half of a shared job: the workers' packed rows kept together
+// as one answer (summed to surfaces later, see core/packedSurfaces.ts), or their
+// surface sums added in ascending row order, so the result is the same bit for
+// bit whatever the number of workers.
+import { unpackRows, type PackedRows } from '../core/pairRows';
 import { SurfaceAccumulator } from '../core/surfaceRows';
-import type { RowsAnswer, ViewFactorAnswer, ViewFactorJob } from './job';
+import type { EdgeViewFactors, RowsAnswer, ViewFactorAnswer, ViewFactorJob } from './job';
 
 /** One job's answer from the answers for its row sets (every row exactly once). */
 export function assembleAnswer(job: ViewFactorJob, edgeCount: number, parts: readonly RowsAnswer[]): ViewFactorAnswer {
@@ -30,13 +31,22 @@ export function assembleAnswer(job: ViewFactorJob, edgeCount: number, parts: rea
       closed,
     };
   }
-  const F = new Float64Array(n * n);
-  let rows = 0;
+  const rows: PackedRows = { sets: [], packed: [] };
+  let count = 0;
   for (const p of parts) {
     if (p.kind !== 'matrix') throw new Error('a worker answered surface sums for an edge job');
-    unpackRows(edgeLength, p.rows, p.packed, F);
-    rows += p.rows.length;
+    rows.sets.push(p.rows);
+    rows.packed.push(p.packed);
+    count += p.rows.length;
   }
-  if (rows !== n) throw new Error(`the workers answered ${rows} of ${n} rows`);
-  return { edgeCount: n, edgeLength, F, closed };
+  if (count !== n) throw new Error(`the workers answered ${count} of ${n} rows`);
+  return { edgeCount: n, edgeLength, rows, closed };
+}
+
+/** The edges x edges view-factor matrix of an edge answer (row-major, row = from; dimensionless). */
+export function edgeMatrixOf(answer: EdgeViewFactors): Float64Array {
+  const n = answer.edgeCount;
+  const F = new Float64Array(n * n);
+  answer.rows.sets.forEach((set, p) => unpackRows(answer.edgeLength, set, answer.rows.packed[p], F));
+  return F;
 }

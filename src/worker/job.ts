@@ -4,6 +4,7 @@
 // editing them never needs a job. The one exception is a sketch whose edge matrix
 // would pass the core's budget (above 5000 edges): its job carries the surface
 // index and comes back as surface sums, so a rename or regroup there needs a job.
+import type { PackedRows } from '../core/pairRows';
 import type { SurfaceRowSums } from '../core/surfaceRows';
 import type { CircleInput, PolygonInput } from '../core/scene';
 import { edgeMatrixFits } from '../core/viewFactors';
@@ -28,8 +29,12 @@ export interface EdgeViewFactors {
   edgeCount: number;
   /** Edge lengths (area per unit depth), sketch units. */
   edgeLength: Float64Array;
-  /** Edge view factors, row-major edgeCount x edgeCount; row = from. Dimensionless. */
-  F: Float64Array;
+  /**
+   * Exchange lengths g_ij (sketch units) of every pair, packed row by row as the
+   * workers computed them: F_ij = g_ij / L_i. Kept packed (half the numbers, no
+   * fresh edges^2 matrix per job); edgeMatrixOf (assemble.ts) unpacks it.
+   */
+  rows: PackedRows;
   /** True when the sketch has an enclosure, so every row should sum to one. */
   closed: boolean;
 }

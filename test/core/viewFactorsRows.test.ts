@@ -7,6 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { buildEdges, type EdgeSet } from '../../src/core/edges';
 import { balancedRowSets, EdgePairs, packRows, packedLength, rowPairCount, unpackRows } from '../../src/core/pairRows';
 import type { CircleInput, PolygonInput } from '../../src/core/scene';
+import { aggregatePackedRows } from '../../src/core/packedSurfaces';
 import { aggregateToSurfaces } from '../../src/core/surfaces';
 import { SurfaceAccumulator, SurfaceRowSummer } from '../../src/core/surfaceRows';
 import { computeViewFactors, edgeViewFactors } from '../../src/core/viewFactors';
@@ -79,6 +80,30 @@ function checkScene(polygons: PolygonInput[], circles: CircleInput[], m: number,
   }
   for (let I = 0; I < count; I++)
     expect(Math.abs(direct[0].rowSumResidual[I] - viaMatrix.rowSumResidual[I])).toBeLessThanOrEqual(1e-13);
+  // Packed rows summed without the matrix: the edge-matrix path's numbers, bit for bit, for any split.
+  for (const w of WORKERS) {
+    const sets = balancedRowSets(n, w);
+    const packed = sets.map((rows) => packRows(new EdgePairs(edges), rows));
+    const viaPacked = aggregatePackedRows(
+      new EdgePairs(edges).length,
+      { sets, packed },
+      edgeSurface,
+      count,
+      edges.hasEnclosure,
+    );
+    expect(bytes(viaPacked.F)).toEqual(bytes(viaMatrix.F));
+    expect(bytes(viaPacked.rowSumResidual)).toEqual(bytes(viaMatrix.rowSumResidual));
+    expect(viaPacked.reciprocityResidual).toBe(viaMatrix.reciprocityResidual);
+  }
+  // The same geometry in other units (lengths times 1000): factors as the matrix path gives them.
+  const L = new EdgePairs(edges).length;
+  const scaled = L.map((v) => v * 1000);
+  const sets = balancedRowSets(n, 2);
+  const rows = { sets, packed: sets.map((r) => packRows(new EdgePairs(edges), r)) };
+  const packedScaled = aggregatePackedRows(L, rows, edgeSurface, count, edges.hasEnclosure, scaled);
+  const matrixScaled = aggregateToSurfaces(n, scaled, single, edgeSurface, count, edges.hasEnclosure);
+  expect(bytes(packedScaled.F)).toEqual(bytes(matrixScaled.F));
+  expect(bytes(packedScaled.surfaceLength)).toEqual(bytes(matrixScaled.surfaceLength));
 }
 
 describe('rows shared over workers', () => {
@@ -99,6 +124,61 @@ describe('rows shared over workers', () => {
       }),
       { numRuns: 25, seed: 1306 },
     );
+  });
+
+  it('unpacking in tiles writes what a plain pair-by-pair loop writes, over several tiles of rows and columns', () => {
+    // n = 700 spans three column tiles and, per part, many row tiles; packed values
+    // include zeros (pairs that do not see each other) and the lengths differ per edge.
+    const n = 700;
+    const length = Float64Array.from({ length: n }, (_, i) => 0.5 + ((i * 37) % 101) / 50);
+    for (const rows of balancedRowSets(n, 3)) {
+      const packed = Float64Array.from({ length: packedLength(n, rows) }, (_, k) => (k % 7 === 3 ? 0 : 1 + (k % 13)));
+      const tiled = new Float64Array(n * n);
+      unpackRows(length, rows, packed, tiled);
+      const plain = new Float64Array(n * n);
+      let at = 0;
+      for (const i of rows) {
+        const self = packed[at++];
+        if (self > 0) plain[i * n + i] = self / length[i];
+        for (let j = i + 1; j < n; j++) {
+          const g = packed[at++];
+          if (g > 0) {
+            plain[i * n + j] = g / length[i];
+            plain[j * n + i] = g / length[j];
+          }
+        }
+      }
+      // The first entry whose bits differ (-1: none); a plain loop, as deep equality of 4 MB is slow.
+      const a = bytes(tiled);
+      const b = bytes(plain);
+      let first = -1;
+      for (let k = 0; k < a.length && first < 0; k++) if (a[k] !== b[k]) first = k >> 3;
+      expect(first).toBe(-1);
+    }
+  });
+
+  it('packed rows with a row missing, twice, or the wrong length are refused, not summed', () => {
+    const L = new Float64Array([1, 1, 1]);
+    const sum = (sets: number[][], lengths: number[]) =>
+      aggregatePackedRows(
+        L,
+        { sets: sets.map((r) => Int32Array.from(r)), packed: lengths.map((k) => new Float64Array(k)) },
+        [0, 0, 0],
+        1,
+        true,
+      );
+    expect(() => sum([[0, 1, 2]], [6])).not.toThrow();
+    expect(() => sum([[0, 2]], [4])).toThrow(/row 1 of 3 is missing/);
+    expect(() =>
+      sum(
+        [
+          [0, 1],
+          [1, 2],
+        ],
+        [5, 3],
+      ),
+    ).toThrow(/row 1 out of range or twice/);
+    expect(() => sum([[0, 1, 2]], [5])).toThrow(/holds 5 numbers for 3 rows/);
   });
 
   it('balanced row sets: every row once, ascending, pair counts within one row of each other', () => {

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { computeEdgeViewFactors } from '../../src/worker/api';
 import { isSurfaceAnswer, jobFromPolygons } from '../../src/worker/job';
 import { geometryKey, scaleBetween } from '../../src/state/results/geometry';
+import { edgeMatrixOf } from '../../src/worker/assemble';
 
 // Circles travel in the view-factor job: their arcs follow every polygon edge in the
 // edge matrix, and the geometry key changes when a circle moves but not when the
@@ -16,9 +17,10 @@ describe('circles in the view-factor job', () => {
     expect(r.edgeCount).toBe(4 + 3);
     // Arc lengths r * 2 pi / 3, computed here.
     for (let a = 4; a < 7; a++) expect(r.edgeLength[a]).toBeCloseTo((0.25 * 2 * Math.PI) / 3, 14);
+    const F = edgeMatrixOf(r);
     for (let i = 0; i < r.edgeCount; i++) {
       let s = 0;
-      for (let j = 0; j < r.edgeCount; j++) s += r.F[i * r.edgeCount + j];
+      for (let j = 0; j < r.edgeCount; j++) s += F[i * r.edgeCount + j];
       // Common practice: the enclosure rule, exact to rounding.
       expect(Math.abs(1 - s)).toBeLessThan(1e-12);
     }

@@ -33,7 +33,8 @@ export function fakeResult(job: ViewFactorJob): EdgeViewFactors {
   return {
     edgeCount: n,
     edgeLength: new Float64Array(n).fill(job.polygons[0]?.points[0] ?? 0),
-    F: new Float64Array(n * n),
+    // One part holding every row, each pair's exchange length zero.
+    rows: { sets: [Int32Array.from({ length: n }, (_, i) => i)], packed: [new Float64Array((n * (n + 1)) / 2)] },
     closed: true,
   };
 }

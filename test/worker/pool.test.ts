@@ -18,6 +18,7 @@ import {
 import { MAX_POOL_SIZE, poolHandle, poolSize, workersForJob, type RowWorker } from '../../src/worker/pool';
 import { aggregateToSurfaces } from '../../src/core/surfaces';
 import { mixedSceneArb, edgeCountOf } from '../core/arc/arbitraries';
+import { edgeMatrixOf } from '../../src/worker/assemble';
 
 const bytes = (a: Float64Array) => new Uint8Array(a.buffer, a.byteOffset, a.byteLength);
 const flush = () => new Promise((r) => setTimeout(r, 0));
@@ -65,7 +66,7 @@ describe('view-factor pool', () => {
         const s = await handle.compute(summedJob);
         close();
         if (isSurfaceAnswer(r) || !isSurfaceAnswer(s)) throw new Error('wrong kind of answer');
-        expect(bytes(r.F)).toEqual(bytes(single.F));
+        expect(bytes(edgeMatrixOf(r))).toEqual(bytes(edgeMatrixOf(single)));
         expect(bytes(r.edgeLength)).toEqual(bytes(single.edgeLength));
         sums.push(s.exchange);
       }
@@ -75,7 +76,7 @@ describe('view-factor pool', () => {
       const viaMatrix = aggregateToSurfaces(
         single.edgeCount,
         single.edgeLength,
-        single.F,
+        edgeMatrixOf(single),
         surfaces.edgeSurface,
         m,
         true,
@@ -139,7 +140,7 @@ describe('view-factor pool', () => {
     expect(done.kind).toBe('done');
     const single = computeEdgeViewFactors(job);
     if (done.kind !== 'done' || isSurfaceAnswer(done.result) || isSurfaceAnswer(single)) throw new Error('no matrix');
-    expect(bytes(done.result.F)).toEqual(bytes(single.F));
+    expect(bytes(edgeMatrixOf(done.result))).toEqual(bytes(edgeMatrixOf(single)));
     client.dispose();
     expect(ended.sort((a, b) => a - b)).toEqual([0, 1, 2, 3, 4, 5]);
   });

@@ -1,7 +1,8 @@
 // The cheap stages of the results pipeline, pure and cached on exactly their
 // inputs: edge factors + surface index -> surface factors (a rename or a group
 // redoes only this sum); the one staleness rule; the table numbers.
-import { aggregateToSurfaces, surfaceResult } from '../../core/surfaces';
+import { aggregatePackedRows } from '../../core/packedSurfaces';
+import { surfaceResult } from '../../core/surfaces';
 import type { ViewFactorResult } from '../../core/scene';
 import type { SurfaceIndex } from '../../document/surfaceIndex';
 import { isSurfaceAnswer, sumsFitSurfaces, type SurfaceViewFactors, type ViewFactorAnswer } from '../../worker/job';
@@ -43,13 +44,13 @@ export function surfaceFactors(edges: ViewFactorAnswer, surfaces: SurfaceIndex, 
     return result;
   }
   const lengths = scale === 1 ? edges.edgeLength : edges.edgeLength.map((L) => L * scale);
-  const result = aggregateToSurfaces(
-    edges.edgeCount,
-    lengths,
-    edges.F,
+  const result = aggregatePackedRows(
+    edges.edgeLength,
+    edges.rows,
     surfaces.edgeSurface,
     surfaces.names.length,
     edges.closed,
+    lengths,
   );
   bySurfaces.set(surfaces, { scale, result });
   return result;

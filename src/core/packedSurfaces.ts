@@ -1,0 +1,81 @@
+// Surface factors straight from the workers' packed rows, without building the
+// edges x edges matrix: at 1012 edges that matrix is 8 MB of fresh memory per
+// job, and touching it for the first time costs more than the sum itself.
+// The numbers are those of aggregateToSurfaces on the unpacked matrix, bit for
+// bit: each edge factor is the same quotient g / L_i, and each surface sum adds
+// its terms in the same order (rows ascending, then columns ascending).
+
+import { packedLength, type PackedRows } from './pairRows';
+import type { ViewFactorResult } from './scene';
+import { surfaceLengths, surfaceResult } from './surfaces';
+
+/**
+ * Where each row of an n-edge matrix sits in packed rows: part[i] (which packed
+ * array) and base[i] (the packed index of pair (i, j) is base[i] + j, j >= i).
+ * Throws unless every row 0..n-1 appears exactly once and every part has the
+ * length its rows need.
+ */
+export function packedRowIndex(n: number, rows: PackedRows): { part: Int32Array; base: Float64Array } {
+  const part = new Int32Array(n).fill(-1);
+  const base = new Float64Array(n);
+  if (rows.sets.length !== rows.packed.length) throw new Error('packed rows: one packed array per row set');
+  rows.sets.forEach((set, p) => {
+    if (rows.packed[p].length !== packedLength(n, set))
+      throw new Error(`packed rows: part ${p} holds ${rows.packed[p].length} numbers for ${set.length} rows`);
+    let at = 0;
+    for (let k = 0; k < set.length; k++) {
+      const i = set[k];
+      if (!(i >= 0 && i < n) || part[i] >= 0) throw new Error(`packed rows: row ${i} out of range or twice`);
+      part[i] = p;
+      base[i] = at - i;
+      at += n - i;
+    }
+  });
+  const missing = part.indexOf(-1);
+  if (missing >= 0) throw new Error(`packed rows: row ${missing} of ${n} is missing`);
+  return { part, base };
+}
+
+/**
+ * View factors between surfaces from packed edge rows (exchange lengths g_ij in
+ * the units of `edgeLength`, see packRows): F_ij = g_ij / L_i and
+ * F_IJ = sum_{i in I, j in J} W_i F_ij / W_I, plus the row-sum and reciprocity
+ * residuals, exactly as aggregateToSurfaces gives them from the unpacked edge
+ * matrix and the lengths W. `weightLength` (default: edgeLength) is the same
+ * geometry in other units (each L_i times one scale): the factors do not
+ * change, the lengths reported do.
+ */
+export function aggregatePackedRows(
+  edgeLength: Float64Array,
+  rows: PackedRows,
+  edgeSurface: ArrayLike<number>,
+  surfaceCount: number,
+  closed: boolean,
+  weightLength: Float64Array = edgeLength,
+): ViewFactorResult {
+  const n = edgeLength.length;
+  const m = surfaceCount;
+  if (weightLength.length !== n) throw new Error(`${weightLength.length} weight lengths for ${n} edges`);
+  const surfaceLength = surfaceLengths(weightLength, edgeSurface, m);
+  const { part, base } = packedRowIndex(n, rows);
+  const packed = rows.packed;
+  const G = new Float64Array(m * m); // G_IJ = L_I F_IJ, sketch units
+  for (let i = 0; i < n; i++) {
+    const row = edgeSurface[i] * m;
+    const Li = edgeLength[i];
+    const Wi = weightLength[i];
+    // Columns j < i: g_ji sits in row j's packed part (the cache lines of one
+    // column of packed rows are reused by the next few rows i).
+    for (let j = 0; j < i; j++) {
+      const g = packed[part[j]][base[j] + i];
+      if (g > 0) G[row + edgeSurface[j]] += Wi * (g / Li);
+    }
+    const own = packed[part[i]];
+    const b = base[i];
+    for (let j = i; j < n; j++) {
+      const g = own[b + j];
+      if (g > 0) G[row + edgeSurface[j]] += Wi * (g / Li);
+    }
+  }
+  return surfaceResult(n, weightLength, surfaceLength, G, closed);
+}
