@@ -86,3 +86,42 @@ export function sortOrderByKey(order: Int32Array, key: Float64Array, n: number):
     order[m + 1] = o;
   }
 }
+
+/**
+ * Sort order[0..n) = 0..n-1 (set here) by key[order[k]] ascending, equal keys by
+ * index: the order a stable sort gives, without a comparator call per step.
+ * Insertion sort for short lists, heap sort on (key, index) above that.
+ */
+export function sortIndexByKey(order: Int32Array, key: Float64Array, n: number): void {
+  for (let k = 0; k < n; k++) order[k] = k;
+  if (n < 24) {
+    sortOrderByKey(order, key, n);
+    return;
+  }
+  for (let k = (n >> 1) - 1; k >= 0; k--) siftIndexDown(order, key, k, n);
+  for (let end = n - 1; end > 0; end--) {
+    const t = order[0];
+    order[0] = order[end];
+    order[end] = t;
+    siftIndexDown(order, key, 0, end);
+  }
+}
+
+/** True when index a sorts after index b: larger key, or the same key and a larger index. */
+function after(key: Float64Array, a: number, b: number): boolean {
+  return key[a] > key[b] || (key[a] === key[b] && a > b);
+}
+
+function siftIndexDown(order: Int32Array, key: Float64Array, root: number, n: number): void {
+  let r = root;
+  for (;;) {
+    let child = 2 * r + 1;
+    if (child >= n) return;
+    if (child + 1 < n && after(key, order[child + 1], order[child])) child++;
+    if (!after(key, order[child], order[r])) return;
+    const t = order[r];
+    order[r] = order[child];
+    order[child] = t;
+    r = child;
+  }
+}

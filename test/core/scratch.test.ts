@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { sortPrefix, sortOrderByKey } from '../../src/core/scratch';
+import { sortIndexByKey, sortPrefix, sortOrderByKey } from '../../src/core/scratch';
 import { distanceChange } from '../../src/core/pairGeometry';
 
 describe('pair-integral helpers', () => {
@@ -24,6 +24,22 @@ describe('pair-integral helpers', () => {
         sortOrderByKey(order, key, keys.length);
         for (let k = 1; k < keys.length; k++) expect(key[order[k - 1]]).toBeLessThanOrEqual(key[order[k]]);
       }),
+    );
+  });
+
+  it('sortIndexByKey gives the order of a stable sort by key, ties included, short lists and long', () => {
+    // Keys drawn from a few values, so most lists hold ties; lengths on both sides of the switch to heap sort.
+    const keys = fc.array(fc.constantFrom(-1.5, 0, 0.25, 2, 1e-300, -0), { maxLength: 120 });
+    fc.assert(
+      fc.property(keys, (values) => {
+        const key = Float64Array.from(values);
+        const order = new Int32Array(values.length + 3).fill(99); // longer than needed: only the prefix is set
+        sortIndexByKey(order, key, values.length);
+        const stable = values.map((_, k) => k).sort((a, b) => key[a] - key[b]); // Array.prototype.sort is stable (ES2019)
+        expect(Array.from(order.subarray(0, values.length))).toEqual(stable);
+        expect(Array.from(order.subarray(values.length))).toEqual([99, 99, 99]);
+      }),
+      { numRuns: 300, seed: 42 },
     );
   });
 

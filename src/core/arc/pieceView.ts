@@ -1,5 +1,6 @@
 import { distanceChange as distanceChangeIn } from '../pairGeometry';
 import { orient as orientIn } from '../orient';
+import { sortIndexByKey as sortIndexByKeyIn } from '../scratch';
 import type { ArcSet } from './arcs';
 import { coneMeetsTarget as coneMeetsTargetIn, towardTarget as towardTargetIn, type Curve } from './curve';
 import type { PairScene } from './pairScene';
@@ -10,6 +11,7 @@ const distanceChange = distanceChangeIn;
 const orient = orientIn;
 const coneMeetsTarget = coneMeetsTargetIn;
 const towardTarget = towardTargetIn;
+const sortIndexByKey = sortIndexByKeyIn;
 
 // The visible runs of the target from the middle of one emitter piece, and their
 // exact integral over the piece. Directions from p are angles b from the emitter's
@@ -27,9 +29,12 @@ export class PieceView {
   private scene!: PairScene;
   /** Circles whose tangents are objects: the blockers, then the target's own if solid. */
   private tanCircles: number[] = [];
-  private angle: number[] = [];
-  private id: number[] = [];
-  private order: number[] = [];
+  // The bounding directions of this piece: angle, object id, and their order by angle
+  // (typed and grown rarely, so a piece allocates nothing).
+  private angle = new Float64Array(64);
+  private id = new Int32Array(64);
+  private order = new Int32Array(64);
+  private m = 0;
   private targetFront = true;
 
   constructor(private readonly A: ArcSet) {}
@@ -63,21 +68,14 @@ export class PieceView {
       A = this.A;
     this.targetFront = tg.isArc || orient(tg.ax, tg.ay, tg.bx, tg.by, pmx, pmy) > 0;
     if (!this.targetFront) return 0;
-    const angle = this.angle,
-      id = this.id,
-      order = this.order;
-    angle.length = 0;
-    id.length = 0;
+    this.m = 0;
     const P = this.scene.pts,
       nP = P.length >> 1;
     for (let k = 0; k < nP; k++) {
       const ux = P[2 * k] - pmx,
         uy = P[2 * k + 1] - pmy;
       const c = ux * nx + uy * ny;
-      if (c > 0 && towardTarget(tg, pmx, pmy, ux, uy)) {
-        angle.push(Math.atan2(ux * tx + uy * ty, c));
-        id.push(k);
-      }
+      if (c > 0 && towardTarget(tg, pmx, pmy, ux, uy)) this.push(Math.atan2(ux * tx + uy * ty, c), k);
     }
     const T = this.tanCircles;
     for (let x = 0; x < T.length; x++) {
@@ -96,16 +94,15 @@ export class PieceView {
         const ux = A.cx[k] + r * Math.cos(th) - pmx,
           uy = A.cy[k] + r * Math.sin(th) - pmy;
         const c = ux * nx + uy * ny;
-        if (c > 0 && (k === tg.circle || towardTarget(tg, pmx, pmy, ux, uy))) {
-          angle.push(Math.atan2(ux * tx + uy * ty, c));
-          id.push(nP + 2 * x + s);
-        }
+        if (c > 0 && (k === tg.circle || towardTarget(tg, pmx, pmy, ux, uy)))
+          this.push(Math.atan2(ux * tx + uy * ty, c), nP + 2 * x + s);
       }
     }
-    const m = angle.length;
-    order.length = m;
-    for (let k = 0; k < m; k++) order[k] = k;
-    order.sort((a, b) => angle[a] - angle[b]);
+    const m = this.m,
+      angle = this.angle,
+      id = this.id,
+      order = this.order;
+    sortIndexByKey(order, angle, m); // equal angles keep the order they were found in
     // Sweep the elementary intervals; one ray each decides what is seen first there.
     let total = 0;
     let runLo = 0,
@@ -134,6 +131,22 @@ export class PieceView {
     if (inRun)
       total += this.delta(HORIZON_HI, nP, pax, pay, pbx, pby, ds) - this.delta(runLo, nP, pax, pay, pbx, pby, ds);
     return 0.5 * total;
+  }
+
+  /** Adds a bounding direction: angle b (radians) of object `obj`. */
+  private push(b: number, obj: number): void {
+    if (this.m === this.angle.length) {
+      const size = 2 * this.m;
+      const angle = new Float64Array(size),
+        id = new Int32Array(size);
+      angle.set(this.angle);
+      id.set(this.id);
+      this.angle = angle;
+      this.id = id;
+      this.order = new Int32Array(size);
+    }
+    this.angle[this.m] = b;
+    this.id[this.m++] = obj;
   }
 
   /**
