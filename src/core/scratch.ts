@@ -125,3 +125,54 @@ function siftIndexDown(order: Int32Array, key: Float64Array, root: number, n: nu
     r = child;
   }
 }
+
+// One double and its two 32-bit halves: the bits a value is hashed by.
+const hashValue = new Float64Array(1);
+const hashBits = new Uint32Array(hashValue.buffer);
+
+/**
+ * A set of numbers compared exactly (===), kept in typed arrays: unlike a Set of
+ * numbers it boxes nothing on the heap. Open addressing, grown at half full; -0 is
+ * stored as 0 (they are ===). Not for NaN.
+ */
+export class ExactValueSet {
+  private keys = new Float64Array(64);
+  private used = new Uint8Array(64);
+  private size = 0;
+
+  clear(): void {
+    if (this.size > 0) this.used.fill(0);
+    this.size = 0;
+  }
+
+  has(v: number): boolean {
+    const mask = this.keys.length - 1;
+    for (let h = slotOf(v, mask); this.used[h]; h = (h + 1) & mask) if (this.keys[h] === v) return true;
+    return false;
+  }
+
+  add(v: number): void {
+    if (2 * (this.size + 1) > this.keys.length) this.grow();
+    const mask = this.keys.length - 1;
+    let h = slotOf(v, mask);
+    for (; this.used[h]; h = (h + 1) & mask) if (this.keys[h] === v) return;
+    this.keys[h] = v === 0 ? 0 : v;
+    this.used[h] = 1;
+    this.size++;
+  }
+
+  private grow(): void {
+    const keys = this.keys,
+      used = this.used;
+    this.keys = new Float64Array(2 * keys.length);
+    this.used = new Uint8Array(2 * keys.length);
+    this.size = 0;
+    for (let k = 0; k < keys.length; k++) if (used[k]) this.add(keys[k]);
+  }
+}
+
+/** Slot of v in a table of mask + 1 entries (a power of two). */
+function slotOf(v: number, mask: number): number {
+  hashValue[0] = v === 0 ? 0 : v;
+  return (Math.imul(hashBits[0] ^ Math.imul(hashBits[1], 0x9e3779b1), 0x85ebca6b) >>> 16) & mask;
+}

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { sortIndexByKey, sortPrefix, sortOrderByKey } from '../../src/core/scratch';
+import { ExactValueSet, sortIndexByKey, sortPrefix, sortOrderByKey } from '../../src/core/scratch';
 import { distanceChange } from '../../src/core/pairGeometry';
 
 describe('pair-integral helpers', () => {
@@ -40,6 +40,30 @@ describe('pair-integral helpers', () => {
         expect(Array.from(order.subarray(values.length))).toEqual([99, 99, 99]);
       }),
       { numRuns: 300, seed: 42 },
+    );
+  });
+
+  it('ExactValueSet answers like a Set of numbers over adds, lookups and clears, through growth', () => {
+    // Few distinct values (so repeats), -0 beside 0, and runs long enough to grow the table several times.
+    const value = fc.oneof(fc.constantFrom(0, -0, 1, 0.1 + 0.2, 0.3, 1e-300), fc.double({ noNaN: true }));
+    const op = fc.tuple(fc.constantFrom('add', 'has', 'clear'), value);
+    fc.assert(
+      fc.property(fc.array(op, { maxLength: 600 }), (ops) => {
+        const mine = new ExactValueSet();
+        const ref = new Set<number>();
+        for (const [kind, v] of ops) {
+          if (kind === 'add') {
+            mine.add(v);
+            ref.add(v);
+          } else if (kind === 'clear') {
+            mine.clear();
+            ref.clear();
+          }
+          expect(mine.has(v)).toBe(ref.has(v));
+        }
+        for (const v of ref) expect(mine.has(v)).toBe(true);
+      }),
+      { numRuns: 200, seed: 7 },
     );
   });
 

@@ -1,5 +1,7 @@
 import type { EdgeSet } from '../edges';
 
+// Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
+
 // One edge of a pair as a curve: a straight segment or an arc of an exact circle.
 // Sketch units, angles in radians anticlockwise from +x.
 
@@ -96,7 +98,7 @@ export function towardTarget(tg: Curve, px: number, py: number, ux: number, uy: 
   if (tg.isArc) {
     const fx = tg.cx - px,
       fy = tg.cy - py;
-    const d = Math.hypot(fx, fy);
+    const d = Math.sqrt(fx * fx + fy * fy);
     if (!(d > tg.r)) return true;
     const off = Math.abs(Math.atan2(fx * uy - fy * ux, fx * ux + fy * uy));
     return off <= Math.asin(tg.r / d) + slack;
@@ -120,7 +122,7 @@ export function coneMeetsTarget(tg: Curve, px: number, py: number, ux: number, u
   if (tg.isArc) {
     const fx = tg.cx - px,
       fy = tg.cy - py;
-    const d = Math.hypot(fx, fy);
+    const d = Math.sqrt(fx * fx + fy * fy);
     if (!(d > tg.r)) return true;
     const off = Math.abs(Math.atan2(fx * uy - fy * ux, fx * ux + fy * uy));
     return off <= Math.asin(tg.r / d) + half + slack;

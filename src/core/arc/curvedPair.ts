@@ -11,6 +11,7 @@ import {
   type EventFilter,
 } from './tangents';
 
+// Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call (as in src/core/pair).
 const orient = orientIn;
@@ -84,7 +85,7 @@ export class CurvedPairIntegrator implements EventFilter {
       const m = k + 1 === n ? 0 : k + 1;
       const ex = H[2 * m] - H[2 * k],
         ey = H[2 * m + 1] - H[2 * k + 1];
-      if ((ex * (A.cy[c] - H[2 * k + 1]) - ey * (A.cx[c] - H[2 * k])) / Math.hypot(ex, ey) < -r) return false;
+      if ((ex * (A.cy[c] - H[2 * k + 1]) - ey * (A.cx[c] - H[2 * k])) / Math.sqrt(ex * ex + ey * ey) < -r) return false;
     }
     return true;
   }
@@ -208,13 +209,21 @@ export class CurvedPairIntegrator implements EventFilter {
    * that direction, it bounds no run). Float tests with margins that keep the event
    * in doubt.
    */
-  keeps(px: number, py: number, nx: number, ny: number, x1: number, y1: number, x2: number, y2: number): boolean {
+  keeps(event: Float64Array): boolean {
+    const px = event[0],
+      py = event[1],
+      nx = event[2],
+      ny = event[3],
+      x1 = event[4],
+      y1 = event[5],
+      x2 = event[6],
+      y2 = event[7];
     const u1x = x1 - px,
       u1y = y1 - py,
       u2x = x2 - px,
       u2y = y2 - py;
-    const d1 = Math.hypot(u1x, u1y),
-      d2 = Math.hypot(u2x, u2y);
+    const d1 = Math.sqrt(u1x * u1x + u1y * u1y),
+      d2 = Math.sqrt(u2x * u2x + u2y * u2y);
     const slack = 1e-9;
     if (u1x * nx + u1y * ny < -slack * d1 || u2x * nx + u2y * ny < -slack * d2) return false;
     if (u1x * u2x + u1y * u2y < -slack * d1 * d2) return false;
@@ -258,48 +267,47 @@ export class CurvedPairIntegrator implements EventFilter {
     for (let k = 0; k <= B.count; k++) {
       const ub = k < B.count ? B.at[k] : end;
       if (ub <= ua) continue;
+      const q = V.query;
       if (em.isArc) {
         const ta = em.start + ua,
           tb = em.start + ub,
           tm = 0.5 * (ta + tb);
         // Solids are walked clockwise (outside on the left), enclosures anticlockwise.
-        const [t0, t1] = em.solid ? [tb, ta] : [ta, tb];
+        const t0 = em.solid ? tb : ta,
+          t1 = em.solid ? ta : tb;
         const side = em.solid ? 1 : -1; // normal = side x (cos t, sin t)
         const cm = Math.cos(tm),
           sm = Math.sin(tm);
-        total += V.piece(
-          em.cx + em.r * Math.cos(t0),
-          em.cy + em.r * Math.sin(t0),
-          em.cx + em.r * Math.cos(t1),
-          em.cy + em.r * Math.sin(t1),
-          em.cx + em.r * cm,
-          em.cy + em.r * sm,
-          side * cm,
-          side * sm,
-          side * sm,
-          -side * cm,
-          em.r * (ub - ua),
-        );
+        q[0] = em.cx + em.r * Math.cos(t0);
+        q[1] = em.cy + em.r * Math.sin(t0);
+        q[2] = em.cx + em.r * Math.cos(t1);
+        q[3] = em.cy + em.r * Math.sin(t1);
+        q[4] = em.cx + em.r * cm;
+        q[5] = em.cy + em.r * sm;
+        q[6] = side * cm;
+        q[7] = side * sm;
+        q[8] = side * sm;
+        q[9] = -side * cm;
+        q[10] = em.r * (ub - ua);
       } else {
         const dx = em.bx - em.ax,
           dy = em.by - em.ay;
         const tx = dx / em.length,
           ty = dy / em.length;
         const um = 0.5 * (ua + ub);
-        total += V.piece(
-          em.ax + ua * dx,
-          em.ay + ua * dy,
-          em.ax + ub * dx,
-          em.ay + ub * dy,
-          em.ax + um * dx,
-          em.ay + um * dy,
-          -ty,
-          tx,
-          tx,
-          ty,
-          (ub - ua) * em.length,
-        );
+        q[0] = em.ax + ua * dx;
+        q[1] = em.ay + ua * dy;
+        q[2] = em.ax + ub * dx;
+        q[3] = em.ay + ub * dy;
+        q[4] = em.ax + um * dx;
+        q[5] = em.ay + um * dy;
+        q[6] = -ty;
+        q[7] = tx;
+        q[8] = tx;
+        q[9] = ty;
+        q[10] = (ub - ua) * em.length;
       }
+      total += V.piece();
       ua = ub;
     }
     return total;

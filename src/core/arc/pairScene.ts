@@ -2,6 +2,8 @@ import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import type { Curve } from './curve';
 
+// Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
+
 // What can block the view between two curves (segments or arcs): every solid
 // circle and every polygon edge that may enter a convex outer bound of the region
 // the sight lines sweep (the hull of both curves' outer polygons). Taking too much
@@ -88,7 +90,7 @@ export class PairScene {
       const m = k + 1 === n ? 0 : k + 1;
       const ex = H[2 * m] - H[2 * k],
         ey = H[2 * m + 1] - H[2 * k + 1];
-      const dist = (ex * (cy - H[2 * k + 1]) - ey * (cx - H[2 * k])) / Math.hypot(ex, ey);
+      const dist = (ex * (cy - H[2 * k + 1]) - ey * (cx - H[2 * k])) / Math.sqrt(ex * ex + ey * ey);
       if (dist < -r) return false;
     }
     return true;
@@ -103,7 +105,7 @@ export class PairScene {
       const m = k + 1 === n ? 0 : k + 1;
       const ex = H[2 * m] - H[2 * k],
         ey = H[2 * m + 1] - H[2 * k + 1];
-      const inv = 1 / Math.hypot(ex, ey);
+      const inv = 1 / Math.sqrt(ex * ex + ey * ey);
       const d0 = (ex * (y0 - H[2 * k + 1]) - ey * (x0 - H[2 * k])) * inv;
       const d1 = (ex * (y1 - H[2 * k + 1]) - ey * (x1 - H[2 * k])) * inv;
       if (d0 < -margin && d1 < -margin) return false;

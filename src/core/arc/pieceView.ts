@@ -5,6 +5,7 @@ import type { ArcSet } from './arcs';
 import { coneMeetsTarget as coneMeetsTargetIn, towardTarget as towardTargetIn, type Curve } from './curve';
 import type { PairScene } from './pairScene';
 
+// Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call (as in src/core/pair).
 const distanceChange = distanceChangeIn;
@@ -47,23 +48,25 @@ export class PieceView {
   }
 
   /**
-   * The integral over the emitter piece pa -> pb (length ds, middle pm, unit normal n
-   * and tangent t at pm) of 1/2 (sin b_hi - sin b_lo) summed over the visible runs:
-   * the piece's share of L_i F_ij, sketch units.
+   * The piece being integrated, written by the caller before piece(): pa (0, 1),
+   * pb (2, 3), middle pm (4, 5), unit normal n (6, 7) and tangent t (8, 9) at pm,
+   * length ds (10). Sketch units. A typed array, not arguments: doubles passed to a
+   * call the engine does not inline are boxed on the heap.
    */
-  piece(
-    pax: number,
-    pay: number,
-    pbx: number,
-    pby: number,
-    pmx: number,
-    pmy: number,
-    nx: number,
-    ny: number,
-    tx: number,
-    ty: number,
-    ds: number,
-  ): number {
+  readonly query = new Float64Array(11);
+
+  /**
+   * The integral over the emitter piece pa -> pb (see `query`) of 1/2 (sin b_hi -
+   * sin b_lo) summed over the visible runs: the piece's share of L_i F_ij, sketch units.
+   */
+  piece(): number {
+    const Q = this.query;
+    const pmx = Q[4],
+      pmy = Q[5],
+      nx = Q[6],
+      ny = Q[7],
+      tx = Q[8],
+      ty = Q[9];
     const tg = this.tg,
       A = this.A;
     this.targetFront = tg.isArc || orient(tg.ax, tg.ay, tg.bx, tg.by, pmx, pmy) > 0;
@@ -83,7 +86,7 @@ export class PieceView {
       const fx = pmx - A.cx[k],
         fy = pmy - A.cy[k],
         r = A.r[k];
-      const d = Math.hypot(fx, fy);
+      const d = Math.sqrt(fx * fx + fy * fy);
       if (!(d > r)) continue;
       // A blocker whose cone misses the target's cone bounds no run: skip its tangents.
       if (k !== tg.circle && !coneMeetsTarget(tg, pmx, pmy, -fx, -fy, Math.asin(r / d))) continue;
@@ -122,14 +125,13 @@ export class PieceView {
           runLo = prevId;
         } else if (!seen && inRun) {
           inRun = false;
-          total += this.delta(prevId, nP, pax, pay, pbx, pby, ds) - this.delta(runLo, nP, pax, pay, pbx, pby, ds);
+          total += this.delta(prevId, nP) - this.delta(runLo, nP);
         }
       }
       prevB = Math.max(prevB, b);
       prevId = bid;
     }
-    if (inRun)
-      total += this.delta(HORIZON_HI, nP, pax, pay, pbx, pby, ds) - this.delta(runLo, nP, pax, pay, pbx, pby, ds);
+    if (inRun) total += this.delta(HORIZON_HI, nP) - this.delta(runLo, nP);
     return 0.5 * total;
   }
 
@@ -154,7 +156,13 @@ export class PieceView {
    * object `obj`: -|v - p| for a point, minus the taut-string length for a tangent,
    * +-s at the horizon. Sketch units.
    */
-  private delta(obj: number, nP: number, pax: number, pay: number, pbx: number, pby: number, ds: number): number {
+  private delta(obj: number, nP: number): number {
+    const Q = this.query;
+    const pax = Q[0],
+      pay = Q[1],
+      pbx = Q[2],
+      pby = Q[3],
+      ds = Q[10];
     if (obj === HORIZON_HI) return ds;
     if (obj === HORIZON_LO) return -ds;
     const dx = pbx - pax,
@@ -174,8 +182,8 @@ export class PieceView {
       fay = pay - cy,
       fbx = pbx - cx,
       fby = pby - cy;
-    const da = Math.hypot(fax, fay),
-      db = Math.hypot(fbx, fby);
+    const da = Math.sqrt(fax * fax + fay * fay),
+      db = Math.sqrt(fbx * fbx + fby * fby);
     const ta = Math.sqrt((da - r) * (da + r)),
       tb = Math.sqrt((db - r) * (db + r));
     // Turn of p about the centre along the piece; an arc piece that passes on the far
@@ -193,7 +201,7 @@ export class PieceView {
   /** Is (cx, cy) strictly between the chord pa-pb of the emitter arc and the arc itself? */
   private centreInsideSegment(cx: number, cy: number, pax: number, pay: number, pbx: number, pby: number): boolean {
     const em = this.em;
-    if (Math.hypot(cx - em.cx, cy - em.cy) >= em.r) return false;
+    if ((cx - em.cx) ** 2 + (cy - em.cy) ** 2 >= em.r * em.r) return false;
     // The arc lies on the side of the chord away from the emitter's centre (pieces span < pi).
     const side = (pbx - pax) * (cy - pay) - (pby - pay) * (cx - pax);
     const centreSide = (pbx - pax) * (em.cy - pay) - (pby - pay) * (em.cx - pax);

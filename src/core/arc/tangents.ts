@@ -1,6 +1,9 @@
-import { sortPrefix as sortPrefixIn } from '../scratch';
+import { ExactValueSet, sortPrefix as sortPrefixIn } from '../scratch';
 import { angleOffset as angleOffsetIn, type Curve } from './curve';
 
+// Lengths are Math.sqrt(x * x + y * y), not Math.hypot: hypot allocates on every call
+// in V8 (0.8 GB per run of the 50-tube bench furnace), and sketch coordinates are far
+// from overflow.
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call (as in src/core/pair).
 const sortPrefix = sortPrefixIn;
@@ -26,7 +29,7 @@ export function commonTangents(
 ): number {
   const dx = c2x - c1x,
     dy = c2y - c1y;
-  const d = Math.hypot(dx, dy);
+  const d = Math.sqrt(dx * dx + dy * dy);
   if (!(d > 0)) return 0;
   const phi = Math.atan2(dy, dx);
   let n = 0;
@@ -55,7 +58,7 @@ export function commonTangents(
 export function touchAngles(px: number, py: number, cx: number, cy: number, r: number, out: Float64Array): boolean {
   const fx = px - cx,
     fy = py - cy;
-  const d = Math.hypot(fx, fy);
+  const d = Math.sqrt(fx * fx + fy * fy);
   if (!(d >= r)) return false;
   const alpha = Math.atan2(fy, fx);
   const beta = Math.atan2(Math.sqrt((d - r) * (d + r)), r);
@@ -67,9 +70,10 @@ export function touchAngles(px: number, py: number, cx: number, cy: number, r: n
 /**
  * Decides whether an alignment event can matter: p on the emitter (unit normal n
  * there; zero for a horizon event) lines up with objects at (x1, y1) and (x2, y2).
+ * `event` holds px, py, nx, ny, x1, y1, x2, y2 (sketch units).
  */
 export interface EventFilter {
-  keeps(px: number, py: number, nx: number, ny: number, x1: number, y1: number, x2: number, y2: number): boolean;
+  keeps(event: Float64Array): boolean;
 }
 
 /** Breakpoints along an emitting curve: parameters (segment: fraction from a; arc: angle from its start). */
@@ -78,11 +82,16 @@ export class CurveBreaks {
   count = 0;
   /** Set per pair: events it rejects make no breakpoint. */
   filter: EventFilter | null = null;
-  // The objects of the event being added.
-  private x1 = 0;
-  private y1 = 0;
-  private x2 = 0;
-  private y2 = 0;
+  // The event being added: objects at (x1, y1) and (x2, y2) on a line of direction
+  // (ux, uy), and where it crosses the curve (u). Kept in fields, not passed on as
+  // arguments: doubles passed to a call the engine does not inline are boxed on the heap.
+  private x1 = 0.5;
+  private y1 = 0.5;
+  private x2 = 0.5;
+  private y2 = 0.5;
+  private ux = 0.5;
+  private uy = 0.5;
+  private u = 0.5;
 
   /** The line through (x1, y1) with direction (ux, uy), lining up objects at (x1, y1) and (x2, y2). */
   addEvent(cur: Curve, x1: number, y1: number, ux: number, uy: number, x2: number, y2: number): void {
@@ -90,7 +99,9 @@ export class CurveBreaks {
     this.y1 = y1;
     this.x2 = x2;
     this.y2 = y2;
-    this.addLine(cur, x1, y1, ux, uy);
+    this.ux = ux;
+    this.uy = uy;
+    this.addLine(cur);
   }
 
   /** A point of an arc emitter whose horizon lines up with the object at (x, y). */
@@ -99,11 +110,13 @@ export class CurveBreaks {
     if (!(u > 0 && u < cur.span)) return;
     const px = cur.cx + cur.r * Math.cos(t),
       py = cur.cy + cur.r * Math.sin(t);
-    if (this.filter && !this.filter.keeps(px, py, 0, 0, x, y, x, y)) return;
+    if (this.filter && !this.filter.keeps(this.fill(px, py, 0, 0, x, y, x, y))) return;
     this.push(u);
   }
 
-  private consider(cur: Curve, u: number): void {
+  /** Keeps the crossing at parameter this.u when the filter says it can matter. */
+  private consider(cur: Curve): void {
+    const u = this.u;
     const f = this.filter;
     if (!f) {
       this.push(u);
@@ -127,14 +140,29 @@ export class CurveBreaks {
       nx = -(cur.by - cur.ay) / cur.length;
       ny = (cur.bx - cur.ax) / cur.length;
     }
-    if (f.keeps(px, py, nx, ny, this.x1, this.y1, this.x2, this.y2)) {
+    if (f.keeps(this.fill(px, py, nx, ny, this.x1, this.y1, this.x2, this.y2))) {
       this.seen.add(u);
       this.push(u);
     }
   }
 
   /** Breakpoints already kept for this pair. */
-  private readonly seen = new Set<number>();
+  private readonly seen = new ExactValueSet();
+  /** The event handed to the filter. */
+  private readonly event = new Float64Array(8);
+
+  private fill(px: number, py: number, nx: number, ny: number, x1: number, y1: number, x2: number, y2: number) {
+    const e = this.event;
+    e[0] = px;
+    e[1] = py;
+    e[2] = nx;
+    e[3] = ny;
+    e[4] = x1;
+    e[5] = y1;
+    e[6] = x2;
+    e[7] = y2;
+    return e;
+  }
 
   reset(): void {
     this.count = 0;
@@ -150,18 +178,25 @@ export class CurveBreaks {
     this.at[this.count++] = u;
   }
 
-  /** Where the line through (px, py) with direction (ux, uy) crosses the curve's interior. */
-  addLine(cur: Curve, px: number, py: number, ux: number, uy: number): void {
+  /** Where the event's line, through (x1, y1) with direction (ux, uy), crosses the curve's interior. */
+  private addLine(cur: Curve): void {
+    const px = this.x1,
+      py = this.y1,
+      ux = this.ux,
+      uy = this.uy;
     if (!cur.isArc) {
       const ex = cur.bx - cur.ax,
         ey = cur.by - cur.ay;
       const den = ex * uy - ey * ux;
       if (den === 0) return;
       const s = ((px - cur.ax) * uy - (py - cur.ay) * ux) / den;
-      if (s > 0 && s < 1) this.consider(cur, s);
+      if (s > 0 && s < 1) {
+        this.u = s;
+        this.consider(cur);
+      }
       return;
     }
-    const len = Math.hypot(ux, uy);
+    const len = Math.sqrt(ux * ux + uy * uy);
     if (!(len > 0)) return;
     const dx = ux / len,
       dy = uy / len;
@@ -171,12 +206,15 @@ export class CurveBreaks {
     const b = fx * dx + fy * dy;
     const mx = fx - b * dx,
       my = fy - b * dy;
-    const h2 = (cur.r - Math.hypot(mx, my)) * (cur.r + Math.hypot(mx, my));
+    const h2 = (cur.r - Math.sqrt(mx * mx + my * my)) * (cur.r + Math.sqrt(mx * mx + my * my));
     if (!(h2 > 0)) return;
     const h = Math.sqrt(h2);
     for (let side = -1; side <= 1; side += 2) {
       const u = angleOffset(Math.atan2(my + side * h * dy, mx + side * h * dx), cur.start);
-      if (u > 0 && u < cur.span) this.consider(cur, u);
+      if (u > 0 && u < cur.span) {
+        this.u = u;
+        this.consider(cur);
+      }
     }
   }
 
