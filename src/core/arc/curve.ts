@@ -91,8 +91,13 @@ export function angleOffset(t: number, from: number): number {
  * May the direction (ux, uy) (any length) from p meet target `tg`? Visible runs lie
  * inside the target's cone of directions, so objects and alignments outside it cannot
  * bound one. Angles in radians, with a margin of 1e-9 that keeps directions in doubt.
+ * `ray` holds px, py, ux, uy (a typed array: doubles passed as arguments are boxed).
  */
-export function towardTarget(tg: Curve, px: number, py: number, ux: number, uy: number): boolean {
+export function towardTarget(tg: Curve, ray: Float64Array): boolean {
+  const px = ray[0],
+    py = ray[1],
+    ux = ray[2],
+    uy = ray[3];
   const slack = 1e-9;
   if (tg.isArc && !tg.solid) return true; // a shell surrounds p
   if (tg.isArc) {
@@ -116,7 +121,11 @@ export function towardTarget(tg: Curve, px: number, py: number, ux: number, uy: 
  * May the cone of directions within `half` (radians) of (ux, uy) from p meet the
  * target's cone? Same margin as towardTarget.
  */
-export function coneMeetsTarget(tg: Curve, px: number, py: number, ux: number, uy: number, half: number): boolean {
+export function coneMeetsTarget(tg: Curve, ray: Float64Array, half: number): boolean {
+  const px = ray[0],
+    py = ray[1],
+    ux = ray[2],
+    uy = ray[3];
   const slack = 1e-9;
   if (tg.isArc && !tg.solid) return true;
   if (tg.isArc) {

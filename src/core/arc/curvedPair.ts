@@ -40,6 +40,8 @@ export class CurvedPairIntegrator implements EventFilter {
   private readonly view: PieceView;
   private readonly lines = new Float64Array(12);
   private readonly touch = new Float64Array(2);
+  /** A ray from an event point (x, y, then direction), for the target's cone test. */
+  private readonly ray = new Float64Array(4);
 
   constructor(
     private readonly E: EdgeSet,
@@ -235,7 +237,12 @@ export class CurvedPairIntegrator implements EventFilter {
     if (!(Math.min(d1, d2) > 0)) return true;
     const ux = (far ? u1x : u2x) / t,
       uy = (far ? u1y : u2y) / t;
-    if (!towardTarget(this.tg, px, py, ux, uy)) return false;
+    const ray = this.ray;
+    ray[0] = px;
+    ray[1] = py;
+    ray[2] = ux;
+    ray[3] = uy;
+    if (!towardTarget(this.tg, ray)) return false;
     const circles = this.scene.circles;
     for (let q = 0; q < circles.length; q++) if (this.hides(circles[q], px, py, ux, uy, t)) return false;
     if (this.tg.isArc && this.tg.solid && this.hides(this.tg.circle, px, py, ux, uy, t)) return false;

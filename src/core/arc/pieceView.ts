@@ -54,6 +54,7 @@ export class PieceView {
    * call the engine does not inline are boxed on the heap.
    */
   readonly query = new Float64Array(11);
+  private readonly ray = new Float64Array(4);
 
   /**
    * The integral over the emitter piece pa -> pb (see `query`) of 1/2 (sin b_hi -
@@ -78,7 +79,7 @@ export class PieceView {
       const ux = P[2 * k] - pmx,
         uy = P[2 * k + 1] - pmy;
       const c = ux * nx + uy * ny;
-      if (c > 0 && towardTarget(tg, pmx, pmy, ux, uy)) this.push(Math.atan2(ux * tx + uy * ty, c), k);
+      if (c > 0 && towardTarget(tg, this.aim(pmx, pmy, ux, uy))) this.push(Math.atan2(ux * tx + uy * ty, c), k);
     }
     const T = this.tanCircles;
     for (let x = 0; x < T.length; x++) {
@@ -89,7 +90,7 @@ export class PieceView {
       const d = Math.sqrt(fx * fx + fy * fy);
       if (!(d > r)) continue;
       // A blocker whose cone misses the target's cone bounds no run: skip its tangents.
-      if (k !== tg.circle && !coneMeetsTarget(tg, pmx, pmy, -fx, -fy, Math.asin(r / d))) continue;
+      if (k !== tg.circle && !coneMeetsTarget(tg, this.aim(pmx, pmy, -fx, -fy), Math.asin(r / d))) continue;
       const alpha = Math.atan2(fy, fx),
         beta = Math.atan2(Math.sqrt((d - r) * (d + r)), r);
       for (let s = 0; s < 2; s++) {
@@ -97,7 +98,7 @@ export class PieceView {
         const ux = A.cx[k] + r * Math.cos(th) - pmx,
           uy = A.cy[k] + r * Math.sin(th) - pmy;
         const c = ux * nx + uy * ny;
-        if (c > 0 && (k === tg.circle || towardTarget(tg, pmx, pmy, ux, uy)))
+        if (c > 0 && (k === tg.circle || towardTarget(tg, this.aim(pmx, pmy, ux, uy))))
           this.push(Math.atan2(ux * tx + uy * ty, c), nP + 2 * x + s);
       }
     }
@@ -133,6 +134,16 @@ export class PieceView {
     }
     if (inRun) total += this.delta(HORIZON_HI, nP) - this.delta(runLo, nP);
     return 0.5 * total;
+  }
+
+  /** The ray from (px, py) along (ux, uy), in `ray` for the target's cone tests. */
+  private aim(px: number, py: number, ux: number, uy: number): Float64Array {
+    const r = this.ray;
+    r[0] = px;
+    r[1] = py;
+    r[2] = ux;
+    r[3] = uy;
+    return r;
   }
 
   /** Adds a bounding direction: angle b (radians) of object `obj`. */
