@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { DenseLuSolver } from '../../src/core/exchange';
 import { DenseCholesky } from '../../src/core/exchange/cholesky';
+import { seeded } from './seeded';
 
 // Oracle: ml-matrix's CholeskyDecomposition (an independent, general-purpose
 // package). Bounds: Cholesky is backward stable without pivoting for any
@@ -11,14 +12,6 @@ import { DenseCholesky } from '../../src/core/exchange/cholesky';
 // n u ||S|| ||x||; the factor agrees with the oracle's to about
 // cond(S) u relative.
 const U = 2 ** -53;
-
-function seeded(seed: number): () => number {
-  let s = seed >>> 0 || 1;
-  return () => {
-    s = (Math.imul(s, 1103515245) + 12345) >>> 0;
-    return s / 4294967296;
-  };
-}
 
 /** A random symmetric matrix made positive definite by a dominant diagonal (like the scaled radiosity matrix). */
 function spd(m: number, seed: number): Float64Array {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DenseLuSolver, solveExchange, type SurfaceCondition } from '../../src/core/exchange';
+import { seeded } from './seeded';
 
 // Energy conservation of a large solved enclosure, at rounding. The enclosure
 // is built so that conservation holds exactly in floating point: equal areas
@@ -17,14 +18,6 @@ import { DenseLuSolver, solveExchange, type SurfaceCondition } from '../../src/c
 // test allows 4 sigma: a correct solve fails it with probability below 1e-4
 // (normal tail), while plain sums instead of compensated ones give 26-160 sigma.
 const U = 2 ** -53;
-
-function seeded(seed: number): () => number {
-  let s = seed >>> 0 || 1;
-  return () => {
-    s = (Math.imul(s, 1103515245) + 12345) >>> 0;
-    return s / 4294967296;
-  };
-}
 
 function pairedEnclosure(n: number, pairings: number, seed: number) {
   const r = seeded(seed);

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DenseLuSolver, solveLinearSystem } from '../../src/core/exchange';
+import { seeded } from './seeded';
 
 // One step of iterative refinement in the working precision makes the
 // solution componentwise backward stable: each equation then holds to about
@@ -13,14 +14,6 @@ import { DenseLuSolver, solveLinearSystem } from '../../src/core/exchange';
 const U = 2 ** -53;
 /** Left after one step: a few roundings of the residual's own sums (Higham, Thm 12.3, its constant ~1 here). */
 const REFINED = 4 * U;
-
-function seeded(seed: number): () => number {
-  let s = seed >>> 0 || 1;
-  return () => {
-    s = (Math.imul(s, 1103515245) + 12345) >>> 0;
-    return s / 4294967296;
-  };
-}
 
 /** a x b as an unevaluated sum p + e, exactly (Dekker 1971). */
 function twoProduct(a: number, b: number): [number, number] {

@@ -3,6 +3,7 @@ import { Matrix, inverse, solve as mlSolve } from 'ml-matrix';
 import { LinearSolveError } from '../../src/core/exchange';
 import { RadiositySystem } from '../../src/core/exchange/radiositySystem';
 import { radiosityResidual } from '../../src/core/exchange/refine';
+import { seeded } from './seeded';
 
 // The radiosity system M = I - diag(w) F, solved by Cholesky of the scaled
 // symmetric form when reciprocity holds and by LU otherwise. Oracle:
@@ -12,14 +13,6 @@ import { radiosityResidual } from '../../src/core/exchange/refine';
 // Algorithms, 2nd ed., ch. 7); the condition estimate is a lower bound of the
 // true 1-norm condition number, usually within a factor of 3 (Higham, ch. 15).
 const U = 2 ** -53;
-
-function seeded(seed: number): () => number {
-  let s = seed >>> 0 || 1;
-  return () => {
-    s = (Math.imul(s, 1103515245) + 12345) >>> 0;
-    return s / 4294967296;
-  };
-}
 
 /**
  * An enclosure of n surfaces whose factors obey reciprocity: a random
