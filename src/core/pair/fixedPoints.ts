@@ -57,15 +57,17 @@ export class FixedPoints {
    * obstruction pieces (after pieces.sortByEdge()): join them into chains (runs of one polygon's edges joined by
    * corners inside H) and keep each chain's ends and possible silhouette corners.
    */
-  build(pieces: ObstaclePieces, ends: Float64Array): void {
-    const a0x = ends[0],
-      a0y = ends[1],
-      a1x = ends[2],
-      a1y = ends[3],
-      b0x = ends[4],
-      b0y = ends[5],
-      b1x = ends[6],
-      b1y = ends[7];
+  build(
+    pieces: ObstaclePieces,
+    a0x: number,
+    a0y: number,
+    a1x: number,
+    a1y: number,
+    b0x: number,
+    b0y: number,
+    b1x: number,
+    b1y: number,
+  ): void {
     this.count = 0;
     this.push(b0x, b0y, 0);
     this.push(b1x, b1y, 0);
@@ -200,11 +202,7 @@ export class Breakpoints {
    * chain end). Between consecutive breakpoints the points bounding the view of j'
    * cannot change.
    */
-  find(points: FixedPoints, ends: Float64Array): void {
-    const a0x = ends[0],
-      a0y = ends[1],
-      a1x = ends[2],
-      a1y = ends[3];
+  find(points: FixedPoints, a0x: number, a0y: number, a1x: number, a1y: number): void {
     const X = points.x,
       Y = points.y,
       boundary = points.onBoundary;

@@ -33,12 +33,6 @@ export class PairIntegrator {
   private readonly points: FixedPoints;
   private readonly breakpoints = new Breakpoints();
   private readonly gaps = new VisibleGaps();
-  // The trimmed pair (a0, a1, b0, b1: x, y each) and the probe point of a piece
-  // (x, y, then i's unit direction), handed to the steps in typed arrays: doubles
-  // passed as arguments to a call the engine does not inline are boxed on the heap,
-  // several per pair, and the collections they cost weigh on a worker's small heap.
-  private readonly ends = new Float64Array(8);
-  private readonly probe = new Float64Array(4);
 
   constructor(
     private readonly e: EdgeSet,
@@ -96,33 +90,19 @@ export class PairIntegrator {
     const li = Math.sqrt((a1x - a0x) ** 2 + (a1y - a0y) ** 2);
     if (li === 0 || (b0x === b1x && b0y === b1y)) return 0;
 
-    const ends = this.ends;
-    ends[0] = a0x;
-    ends[1] = a0y;
-    ends[2] = a1x;
-    ends[3] = a1y;
-    ends[4] = b0x;
-    ends[5] = b0y;
-    ends[6] = b1x;
-    ends[7] = b1y;
     // Every sight line from i' to j' lies in H = hull(i', j') = a0 a1 b0 b1 (anticlockwise,
     // since j's front faces i). Only obstructions inside H can block.
-    this.region.set(ends);
+    this.region.set(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
     if (this.gatherer.gather(i, j)) return 0;
-    if (this.pieces.count === 0 && this.pieces.wholeCount === 0) return crossedStrings(ends);
-    this.points.build(this.pieces, ends);
-    this.breakpoints.find(this.points, ends);
-    return this.integrate(li);
+    if (this.pieces.count === 0 && this.pieces.wholeCount === 0)
+      return crossedStrings(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
+    this.points.build(this.pieces, a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
+    this.breakpoints.find(this.points, a0x, a0y, a1x, a1y);
+    return this.integrate(a0x, a0y, a1x, a1y, li);
   }
 
-  /** Sum of the piece integrals between consecutive breakpoints of i' = a0-a1 (in `ends`, length li). */
-  private integrate(li: number): number {
-    const ends = this.ends,
-      probe = this.probe;
-    const a0x = ends[0],
-      a0y = ends[1],
-      a1x = ends[2],
-      a1y = ends[3];
+  /** Sum of the piece integrals between consecutive breakpoints of i' = a0-a1 (length li). */
+  private integrate(a0x: number, a0y: number, a1x: number, a1y: number, li: number): number {
     const dxI = a1x - a0x,
       dyI = a1y - a0y;
     const tx = dxI / li,
@@ -132,17 +112,13 @@ export class PairIntegrator {
     const gaps = this.gaps,
       points = this.points;
     gaps.prepare(points);
-    probe[2] = tx;
-    probe[3] = ty;
     let total = 0;
     let sa = 0;
     for (let k = 0; k <= nBreaks; k++) {
       const sb = k < nBreaks ? at[k] : 1;
       if (sb <= sa) continue;
       const sm = 0.5 * (sa + sb);
-      probe[0] = a0x + sm * dxI;
-      probe[1] = a0y + sm * dyI;
-      gaps.find(points, probe);
+      gaps.find(points, a0x + sm * dxI, a0y + sm * dyI, tx, ty);
       if (gaps.count > 0) {
         total += pieceIntegral(
           points,

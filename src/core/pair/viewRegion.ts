@@ -54,19 +54,8 @@ export class ViewRegion {
   /** `extent`: largest coordinate magnitude of the (shifted) sketch, scales float margins. */
   constructor(private readonly extent: number) {}
 
-  /**
-   * H for emitting piece a0-a1 and receiving piece b0-b1 (j' faces i', so a0 a1 b0 b1
-   * is anticlockwise); `ends` holds a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y.
-   */
-  set(ends: Float64Array): void {
-    const a0x = ends[0],
-      a0y = ends[1],
-      a1x = ends[2],
-      a1y = ends[3],
-      b0x = ends[4],
-      b0y = ends[5],
-      b1x = ends[6],
-      b1y = ends[7];
+  /** H for emitting piece a0-a1 and receiving piece b0-b1 (j' faces i', so a0 a1 b0 b1 is anticlockwise). */
+  set(a0x: number, a0y: number, a1x: number, a1y: number, b0x: number, b0y: number, b1x: number, b1y: number): void {
     this.side(0, a0x, a0y, a1x, a1y);
     this.side(1, a1x, a1y, b0x, b0y);
     this.side(2, b0x, b0y, b1x, b1y);

@@ -28,14 +28,9 @@ export class VisibleGaps {
 
   /**
    * Find the gaps seen from point (px, py) (sketch units) on i, whose unit direction
-   * is (tx, ty), after prepare(points) for this pair; `probe` holds px, py, tx, ty.
-   * Fixed points 0 and 1 are j's ends b0 (high end) and b1 (low end).
+   * is (tx, ty), after prepare(points) for this pair. Fixed points 0 and 1 are j's ends b0 (high end) and b1 (low end).
    */
-  find(points: FixedPoints, probe: Float64Array): void {
-    const px = probe[0],
-      py = probe[1],
-      tx = probe[2],
-      ty = probe[3];
+  find(points: FixedPoints, px: number, py: number, tx: number, ty: number): void {
     const X = points.x,
       Y = points.y;
     const nChains = points.chainCount,
