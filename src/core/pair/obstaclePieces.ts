@@ -116,10 +116,11 @@ export class ObstaclePieces {
    * the other: it cuts H in two, i' on one side and j' on the other, so every sight
    * line crosses it and the pair exchanges nothing. Exact: the sides come from exact
    * signs, and chains join at corners strictly inside H. Returns the chain's first
-   * piece, or -1 when there is none. `nextEdge`: EdgeSet.nextEdge.
+   * piece, or -1 when there is none. `nextEdge`: EdgeSet.nextEdge; only chains that
+   * start at piece `from` or later are tried.
    */
-  blockingChain(nextEdge: Int32Array): number {
-    for (let s = 0; s < this.count; s++) {
+  blockingChain(nextEdge: Int32Array, from = 0): number {
+    for (let s = from; s < this.count; s++) {
       const from = this.startSide[s];
       if (from !== 1 && from !== 3) continue;
       let cur = s;

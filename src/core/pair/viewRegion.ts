@@ -120,15 +120,6 @@ export class ViewRegion {
    * outside or along the boundary (it then blocks no sight line).
    */
   clipSegment(px: number, py: number, qx: number, qy: number, out: SegmentClip): boolean {
-    let t0 = 0,
-      t1 = 1;
-    let pIn = true,
-      qIn = true;
-    // Sides that p (q) is not strictly inside, and the last such side.
-    let pOut = 0,
-      qOut = 0,
-      pSide = -1,
-      qSide = -1;
     // Float pass first, the side strings first: reject cheaply, and mark the sides that
     // hold both ends surely inside (they cannot cut the segment); the margin is far
     // above the rounding of the cross products. Exact signs only for the other sides.
@@ -149,6 +140,24 @@ export class ViewRegion {
       if (fp < -tol && fq < -tol) return false;
       if (!(fp > tol && fq > tol)) doubtful |= 1 << k;
     }
+    return this.clipExact(px, py, qx, qy, doubtful, out);
+  }
+
+  /**
+   * clipSegment with the float pass done by the caller: `doubtful` has bit k set for
+   * each side k (of length) that may not hold both ends strictly inside; the other
+   * sides must hold them so (a side tested in vain changes nothing).
+   */
+  clipExact(px: number, py: number, qx: number, qy: number, doubtful: number, out: SegmentClip): boolean {
+    let t0 = 0,
+      t1 = 1;
+    let pIn = true,
+      qIn = true;
+    // Sides that p (q) is not strictly inside, and the last such side.
+    let pOut = 0,
+      qOut = 0,
+      pSide = -1,
+      qSide = -1;
     for (let k = 0; k < 4; k++) {
       if (!(doubtful & (1 << k))) continue;
       const x0 = this.sx[k],
