@@ -1,3 +1,4 @@
+import Flatbush from 'flatbush';
 import type { EdgeSet } from './edges';
 import { orient } from './orient';
 import { RegionTree } from './pair/regionTree';
@@ -85,6 +86,7 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   const walkEdge = new Int32Array(edges.count);
   const walkAngle = new Float64Array(edges.count);
   const bodyBox = new Float64Array(4 * B);
+  let allEdges: Flatbush | null = null;
   bodies.forEach((p, b) => {
     bodyFirstEdge[b] = start[p];
     bodyEdgeEnd[b] = start[p + 1];
@@ -131,7 +133,10 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     } else {
       bodyRIn[b] = innerRadius(edges, start[p], start[p + 1], cx, cy);
     }
-    bodyRHull[b] = bodyConvex[b] ? bodyRIn[b] : hullRadius(edges, p, cx, cy, bodyRIn[b]);
+    if (!bodyConvex[b]) {
+      allEdges ??= edgeBoxIndex(edges);
+      bodyRHull[b] = hullRadius(edges, allEdges, p, cx, cy, bodyRIn[b]);
+    } else bodyRHull[b] = bodyRIn[b];
     if (bodyConvex[b]) {
       // Solids are walked clockwise, so the angle falls along the walk.
       let e = start[p];
@@ -233,7 +238,7 @@ function convexHull(edges: EdgeSet, from: number, to: number): number[] {
  * side of its convex hull, or `fallback` when an edge of another polygon may enter
  * the hull (exact separation tests; in doubt it may).
  */
-function hullRadius(edges: EdgeSet, p: number, cx: number, cy: number, fallback: number): number {
+function hullRadius(edges: EdgeSet, index: Flatbush, p: number, cx: number, cy: number, fallback: number): number {
   const hull = convexHull(edges, edges.polygonStart[p], edges.polygonStart[p + 1]);
   const m = hull.length >> 1;
   let x0 = Infinity,
@@ -246,14 +251,9 @@ function hullRadius(edges: EdgeSet, p: number, cx: number, cy: number, fallback:
     y0 = Math.min(y0, hull[k + 1]);
     y1 = Math.max(y1, hull[k + 1]);
   }
-  for (let e = 0; e < edges.count; e++) {
-    if (edges.polygon[e] === p) continue;
-    const ax = edges.ax[e],
-      ay = edges.ay[e],
-      bx = edges.bx[e],
-      by = edges.by[e];
-    if (Math.max(ax, bx) < x0 || Math.min(ax, bx) > x1 || Math.max(ay, by) < y0 || Math.min(ay, by) > y1) continue;
-    if (!segmentMissesHull(hull, ax, ay, bx, by)) return fallback;
+  for (const e of index.search(x0, y0, x1, y1)) {
+    if (edges.polygon[e] !== p && !segmentMissesHull(hull, edges.ax[e], edges.ay[e], edges.bx[e], edges.by[e]))
+      return fallback;
   }
   let r = Infinity;
   for (let k = 0; k < m; k++) {
@@ -265,6 +265,21 @@ function hullRadius(edges: EdgeSet, p: number, cx: number, cy: number, fallback:
     r = Math.min(r, (dx * (cy - hy) - dy * (cx - hx)) / Math.hypot(dx, dy));
   }
   return Math.max(fallback, r);
+}
+
+/** A box index of every edge (built once, for hullRadius). */
+function edgeBoxIndex(edges: EdgeSet): Flatbush {
+  const index = new Flatbush(Math.max(1, edges.count));
+  for (let e = 0; e < edges.count; e++) {
+    const ax = edges.ax[e],
+      ay = edges.ay[e],
+      bx = edges.bx[e],
+      by = edges.by[e];
+    index.add(Math.min(ax, bx), Math.min(ay, by), Math.max(ax, bx), Math.max(ay, by));
+  }
+  if (edges.count === 0) index.add(0, 0, 0, 0);
+  index.finish();
+  return index;
 }
 
 /**
