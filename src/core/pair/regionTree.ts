@@ -22,13 +22,14 @@ export class RegionTree {
   private readonly first: Int32Array;
   private readonly end: Int32Array;
   private readonly leafCount: number;
-  /** Item ids in leaf order. */
+  /** Item ids in leaf order, and their boxes in that order (4 numbers each). */
   private readonly order: Int32Array;
+  private readonly leafBox: Float64Array;
   private stack = new Int32Array(64);
   private readonly sides = new Float64Array(4 * SIDE_STRIDE);
 
-  /** `itemBox`: 4 numbers per item (minX, minY, maxX, maxY), sketch units; kept, not copied. */
-  constructor(private readonly itemBox: Float64Array) {
+  /** `itemBox`: 4 numbers per item (minX, minY, maxX, maxY), sketch units. */
+  constructor(itemBox: Float64Array) {
     const boxes = itemBox;
     const n = boxes.length >> 2;
     // Leaf order: items sorted along a Z-order curve of their centres, so a leaf holds neighbours.
@@ -51,6 +52,8 @@ export class RegionTree {
       code[k] = interleave(cx, cy);
     }
     this.order = Int32Array.from({ length: n }, (_, k) => k).sort((a, b) => code[a] - code[b] || a - b);
+    this.leafBox = new Float64Array(4 * n);
+    for (let m = 0; m < n; m++) this.leafBox.set(boxes.subarray(4 * this.order[m], 4 * this.order[m] + 4), 4 * m);
     // Levels bottom-up: leaves group FAN items, inner nodes group FAN nodes.
     const first: number[] = [],
       end: number[] = [],
@@ -91,64 +94,86 @@ export class RegionTree {
   search(region: ViewRegion, visit: (id: number) => boolean): void {
     const nodes = this.first.length;
     if (nodes === 0) return;
-    loadSides(region, this.sides);
+    const S = this.sides;
+    const sideCount = loadSides(region, S);
+    const minX = region.minX,
+      minY = region.minY,
+      maxX = region.maxX,
+      maxY = region.maxY;
+    const box = this.box,
+      leafBox = this.leafBox,
+      first = this.first,
+      end = this.end,
+      order = this.order,
+      leafCount = this.leafCount;
+    let stack = this.stack;
     let top = 0;
-    this.stack[top++] = nodes - 1;
+    stack[top++] = nodes - 1;
     while (top > 0) {
-      const k = this.stack[--top];
-      if (!boxMayMeet(region, this.sides, this.box, 4 * k)) continue;
-      if (k < this.leafCount) {
-        for (let m = this.first[k]; m < this.end[k]; m++) {
-          const item = this.order[m];
-          if (boxMayMeet(region, this.sides, this.itemBox, 4 * item) && visit(item)) return;
+      const k = stack[--top];
+      if (!boxMayMeet(box, 4 * k, minX, minY, maxX, maxY, S, sideCount)) continue;
+      if (k < leafCount) {
+        for (let m = first[k]; m < end[k]; m++) {
+          if (boxMayMeet(leafBox, 4 * m, minX, minY, maxX, maxY, S, sideCount) && visit(order[m])) return;
         }
         continue;
       }
-      if (top + FAN > this.stack.length) {
-        const grown = new Int32Array(2 * this.stack.length);
-        grown.set(this.stack);
-        this.stack = grown;
+      if (top + FAN > stack.length) {
+        const grown = new Int32Array(2 * stack.length);
+        grown.set(stack);
+        this.stack = stack = grown;
       }
       // Push in reverse so children are taken in their stored order.
-      for (let c = this.end[k] - 1; c >= this.first[k]; c--) this.stack[top++] = c;
+      for (let c = end[k] - 1; c >= first[k]; c--) stack[top++] = c;
     }
   }
 }
 
-/** Per side of the region, 6 numbers: x0, y0, dx, dy, margin, and 1 if the side has length. */
-const SIDE_STRIDE = 6;
+/**
+ * Per side of the region that has length, SIDE_STRIDE numbers: x0, y0, dx, dy, the
+ * margin, and the offsets (0 or 2, 1 or 3) in a box of the corner farthest inside.
+ */
+const SIDE_STRIDE = 7;
 
-/** The region's sides in SIDE_ORDER, as loaded for box tests (into `out`, 4 x SIDE_STRIDE). */
-function loadSides(R: ViewRegion, out: Float64Array): void {
+/** The region's sides of nonzero length, in SIDE_ORDER, as loaded for box tests (into `out`); returns their count. */
+function loadSides(R: ViewRegion, out: Float64Array): number {
+  let count = 0;
   for (let step = 0; step < 4; step++) {
-    const k = SIDE_ORDER[step],
-      at = SIDE_STRIDE * step;
+    const k = SIDE_ORDER[step];
+    if (!R.on[k]) continue;
+    const at = SIDE_STRIDE * count++;
+    const dx = R.ex[k] - R.sx[k],
+      dy = R.ey[k] - R.sy[k];
     out[at] = R.sx[k];
     out[at + 1] = R.sy[k];
-    out[at + 2] = R.ex[k] - R.sx[k];
-    out[at + 3] = R.ey[k] - R.sy[k];
+    out[at + 2] = dx;
+    out[at + 3] = dy;
     // R.tol is 1e-14 x side length x sketch extent; d below rounds to about 1e-15 of
     // that product, so 100 x R.tol skips a box only when it is surely outside.
     out[at + 4] = 100 * R.tol[k];
-    out[at + 5] = R.on[k];
+    // The box corner farthest inside the side (inward normal (-dy, dx)).
+    out[at + 5] = dy > 0 ? 0 : 2;
+    out[at + 6] = dx > 0 ? 3 : 1;
   }
+  return count;
 }
 
-/** False when box B[at..at+4) lies surely outside the region's bounding box or one of its sides. */
-function boxMayMeet(R: ViewRegion, S: Float64Array, B: Float64Array, at: number): boolean {
-  const bx0 = B[at],
-    by0 = B[at + 1],
-    bx1 = B[at + 2],
-    by1 = B[at + 3];
-  if (bx0 > R.maxX || by0 > R.maxY || bx1 < R.minX || by1 < R.minY) return false;
-  for (let s = 0; s < 4 * SIDE_STRIDE; s += SIDE_STRIDE) {
-    if (S[s + 5] === 0) continue;
-    const dx = S[s + 2],
-      dy = S[s + 3];
-    // The box corner farthest inside the side (inward normal (-dy, dx)).
-    const x = dy > 0 ? bx0 : bx1,
-      y = dx > 0 ? by1 : by0;
-    if (dx * (y - S[s + 1]) - dy * (x - S[s]) < -S[s + 4]) return false;
+/** False when box B[at..at+4) lies surely outside the region's bounding box or one of its `sideCount` sides. */
+function boxMayMeet(
+  B: Float64Array,
+  at: number,
+  minX: number,
+  minY: number,
+  maxX: number,
+  maxY: number,
+  S: Float64Array,
+  sideCount: number,
+): boolean {
+  if (B[at] > maxX || B[at + 1] > maxY || B[at + 2] < minX || B[at + 3] < minY) return false;
+  for (let s = 0; s < sideCount * SIDE_STRIDE; s += SIDE_STRIDE) {
+    const x = B[at + S[s + 5]],
+      y = B[at + S[s + 6]];
+    if (S[s + 2] * (y - S[s + 1]) - S[s + 3] * (x - S[s]) < -S[s + 4]) return false;
   }
   return true;
 }
