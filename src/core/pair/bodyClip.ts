@@ -126,9 +126,11 @@ export class BodyClipper {
    * hull, so every sight line through the hull meets the body). Float test with a
    * margin that only ever says no in doubt.
    */
-  private cutsView(b: number): boolean {
+  cutsView(b: number): boolean {
     const ob = this.ob,
       R = this.region;
+    // A convex body cannot block a view from or to its own edges (see placeBody).
+    if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return false;
     const rIn = (b === this.bodyI || b === this.bodyJ ? ob.bodyRIn[b] : ob.bodyRHull[b]) * (1 - 1e-9);
     if (!(rIn > 0) || !R.on[1] || !R.on[3]) return false;
     return R.discMeetsSide(1, ob.bodyCx[b], ob.bodyCy[b], rIn) && R.discMeetsSide(3, ob.bodyCx[b], ob.bodyCy[b], rIn);

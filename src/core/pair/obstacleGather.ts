@@ -63,6 +63,14 @@ export class ObstacleGatherer {
       hj2 = this.hint2[j];
     this.pieces.begin();
     this.probed.fill(-1);
+    // Hinted bodies whose disc blocks the pair end it before anything is clipped.
+    if (
+      this.discBlocks(i, j, hi) ||
+      this.discBlocks(i, j, hj) ||
+      this.discBlocks(i, j, hi2) ||
+      this.discBlocks(i, j, hj2)
+    )
+      return true;
     // Probed obstacles keep their pieces; the searches below skip them.
     if (this.probe(hi, 0) || (hj !== hi && this.probe(hj, 1))) return true;
     if (hi2 !== hi && hi2 !== hj && this.probe(hi2, 2)) return true;
@@ -123,6 +131,13 @@ export class ObstacleGatherer {
       this.clipWallRun(-2 - h);
     }
     return this.clip.blocked || this.pieces.blockingChain(this.e.nextEdge) >= 0;
+  }
+
+  /** Does hinted body h (when it is a body) block the pair by its disc alone? Then remember it. */
+  private discBlocks(i: number, j: number, h: number): boolean {
+    if (h < 0 || !this.clip.cutsView(h)) return false;
+    this.remember(i, j, h);
+    return true;
   }
 
   /** Was body b probed for this pair (its pieces kept already)? */
