@@ -6,6 +6,7 @@ import {
   SIDE_ORDER as SIDE_ORDER_IN,
   SURELY_INSIDE as SURELY_INSIDE_IN,
   SURELY_OUTSIDE as SURELY_OUTSIDE_IN,
+  UNSURE as UNSURE_IN,
   type SegmentClip,
   type ViewRegion,
 } from './viewRegion';
@@ -14,7 +15,8 @@ import {
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
 const SIDE_ORDER = SIDE_ORDER_IN,
   SURELY_INSIDE = SURELY_INSIDE_IN,
-  SURELY_OUTSIDE = SURELY_OUTSIDE_IN;
+  SURELY_OUTSIDE = SURELY_OUTSIDE_IN,
+  UNSURE = UNSURE_IN;
 
 // Clipping obstacles to the view region H of one edge pair (for obstacleGather.ts).
 // Bodies are placed whole by their bounding circle first: outside H, wholly inside, or
@@ -199,10 +201,26 @@ export class BodyClipper {
    * are kept whole, and only the rest go through the exact clip.
    */
   private clipBodyEdges(first: number, end: number): void {
-    const E = this.e;
+    const E = this.e,
+      R = this.region;
     const n = end - first;
     if (this.places.length < 4 * n) this.places = new Int8Array(8 * n);
-    for (let e = first; e < end; e++) this.classifyCorner(E.ax[e], E.ay[e], 4 * (e - first));
+    const P = this.places,
+      X = E.ax,
+      Y = E.ay;
+    // Side by side, every corner (corner a of each edge): as R.place, with the side's numbers held.
+    for (let c = 0; c < this.crossCount; c++) {
+      const k = this.crossing[c];
+      const x0 = R.sx[k],
+        y0 = R.sy[k],
+        dx = R.ex[k] - x0,
+        dy = R.ey[k] - y0,
+        tol = R.tol[k];
+      for (let e = first, at = c; e < end; e++, at += 4) {
+        const d = dx * (Y[e] - y0) - dy * (X[e] - x0);
+        P[at] = d > tol ? SURELY_INSIDE : d < -tol ? SURELY_OUTSIDE : UNSURE;
+      }
+    }
     for (let e = first; e < end; e++) this.settleEdge(e, 4 * (e - first), 4 * (E.nextEdge[e] - first));
   }
 
