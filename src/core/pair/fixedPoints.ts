@@ -57,17 +57,15 @@ export class FixedPoints {
    * obstruction pieces (after pieces.sortByEdge()): join them into chains (runs of one polygon's edges joined by
    * corners inside H) and keep each chain's ends and possible silhouette corners.
    */
-  build(
-    pieces: ObstaclePieces,
-    a0x: number,
-    a0y: number,
-    a1x: number,
-    a1y: number,
-    b0x: number,
-    b0y: number,
-    b1x: number,
-    b1y: number,
-  ): void {
+  build(pieces: ObstaclePieces, P: Float64Array): void {
+    const a0x = P[0],
+      a0y = P[1],
+      a1x = P[2],
+      a1y = P[3],
+      b0x = P[4],
+      b0y = P[5],
+      b1x = P[6],
+      b1y = P[7];
     this.count = 0;
     this.push(b0x, b0y, 0);
     this.push(b1x, b1y, 0);
@@ -202,7 +200,11 @@ export class Breakpoints {
    * chain end). Between consecutive breakpoints the points bounding the view of j'
    * cannot change.
    */
-  find(points: FixedPoints, a0x: number, a0y: number, a1x: number, a1y: number): void {
+  find(points: FixedPoints, P: Float64Array): void {
+    const a0x = P[0],
+      a0y = P[1],
+      a1x = P[2],
+      a1y = P[3];
     const X = points.x,
       Y = points.y,
       boundary = points.onBoundary;

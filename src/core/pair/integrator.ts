@@ -33,6 +33,8 @@ export class PairIntegrator {
   private readonly points: FixedPoints;
   private readonly breakpoints = new Breakpoints();
   private readonly gaps = new VisibleGaps();
+  /** The pair's trimmed ends a0, a1 (of i') and b0, b1 (of j'), x then y, sketch units. */
+  private readonly ends = new Float64Array(8);
 
   constructor(
     private readonly e: EdgeSet,
@@ -62,11 +64,11 @@ export class PairIntegrator {
       b1x = E.bx[j],
       b1y = E.by[j];
     // Front tests: a point is in front of an edge when it lies strictly left of a -> b.
-    const dB0 = orient(a0x, a0y, a1x, a1y, b0x, b0y);
-    const dB1 = orient(a0x, a0y, a1x, a1y, b1x, b1y);
+    const dB0 = this.orientAt(i, j, 0);
+    const dB1 = this.orientAt(i, j, 1);
     if (dB0 <= 0 && dB1 <= 0) return 0;
-    const dA0 = orient(b0x, b0y, b1x, b1y, a0x, a0y);
-    const dA1 = orient(b0x, b0y, b1x, b1y, a1x, a1y);
+    const dA0 = this.orientAt(j, i, 0);
+    const dA1 = this.orientAt(j, i, 1);
     if (dA0 <= 0 && dA1 <= 0) return 0;
     // Keep only the part of each edge in front of the other: nothing else can exchange.
     if (dB0 < 0) {
@@ -89,20 +91,43 @@ export class PairIntegrator {
     }
     const li = Math.sqrt((a1x - a0x) ** 2 + (a1y - a0y) ** 2);
     if (li === 0 || (b0x === b1x && b0y === b1y)) return 0;
+    // The trimmed ends go to the steps below through `ends`: a call that is not inlined
+    // boxes each number passed to it.
+    const P = this.ends;
+    P[0] = a0x;
+    P[1] = a0y;
+    P[2] = a1x;
+    P[3] = a1y;
+    P[4] = b0x;
+    P[5] = b0y;
+    P[6] = b1x;
+    P[7] = b1y;
 
     // Every sight line from i' to j' lies in H = hull(i', j') = a0 a1 b0 b1 (anticlockwise,
     // since j's front faces i). Only obstructions inside H can block.
-    this.region.set(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
+    this.region.set(P);
     if (this.gatherer.gather(i, j)) return 0;
-    if (this.pieces.count === 0 && this.pieces.wholeCount === 0)
-      return crossedStrings(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
-    this.points.build(this.pieces, a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
-    this.breakpoints.find(this.points, a0x, a0y, a1x, a1y);
-    return this.integrate(a0x, a0y, a1x, a1y, li);
+    if (this.pieces.count === 0 && this.pieces.wholeCount === 0) return crossedStrings(P);
+    this.points.build(this.pieces, P);
+    this.breakpoints.find(this.points, P);
+    return this.integrate(li);
+  }
+
+  /** orient(a of edge e, b of edge e, corner `end` (0: a, 1: b) of edge f), from the edge arrays. */
+  private orientAt(e: number, f: number, end: number): number {
+    const E = this.e;
+    return end === 0
+      ? orient(E.ax[e], E.ay[e], E.bx[e], E.by[e], E.ax[f], E.ay[f])
+      : orient(E.ax[e], E.ay[e], E.bx[e], E.by[e], E.bx[f], E.by[f]);
   }
 
   /** Sum of the piece integrals between consecutive breakpoints of i' = a0-a1 (length li). */
-  private integrate(a0x: number, a0y: number, a1x: number, a1y: number, li: number): number {
+  private integrate(li: number): number {
+    const P = this.ends;
+    const a0x = P[0],
+      a0y = P[1],
+      a1x = P[2],
+      a1y = P[3];
     const dxI = a1x - a0x,
       dyI = a1y - a0y;
     const tx = dxI / li,

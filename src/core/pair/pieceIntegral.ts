@@ -47,18 +47,17 @@ export function pieceIntegral(
 /**
  * L_i F_ij of an unobstructed pair, sketch units: crossed minus uncrossed strings over
  * 2 (Hottel), written as distance changes along a0-a1 so that a short edge loses no
- * digits. b0-b1 faces a0-a1 (a0 a1 b0 b1 anticlockwise).
+ * digits. b0-b1 faces a0-a1 (a0 a1 b0 b1 anticlockwise); P = [a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y].
  */
-export function crossedStrings(
-  a0x: number,
-  a0y: number,
-  a1x: number,
-  a1y: number,
-  b0x: number,
-  b0y: number,
-  b1x: number,
-  b1y: number,
-): number {
+export function crossedStrings(P: Float64Array): number {
+  const a0x = P[0],
+    a0y = P[1],
+    a1x = P[2],
+    a1y = P[3],
+    b0x = P[4],
+    b0y = P[5],
+    b1x = P[6],
+    b1y = P[7];
   const dx = a1x - a0x,
     dy = a1y - a0y;
   return (

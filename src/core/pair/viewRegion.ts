@@ -54,12 +54,23 @@ export class ViewRegion {
   /** `extent`: largest coordinate magnitude of the (shifted) sketch, scales float margins. */
   constructor(private readonly extent: number) {}
 
-  /** H for emitting piece a0-a1 and receiving piece b0-b1 (j' faces i', so a0 a1 b0 b1 is anticlockwise). */
-  set(a0x: number, a0y: number, a1x: number, a1y: number, b0x: number, b0y: number, b1x: number, b1y: number): void {
-    this.side(0, a0x, a0y, a1x, a1y);
-    this.side(1, a1x, a1y, b0x, b0y);
-    this.side(2, b0x, b0y, b1x, b1y);
-    this.side(3, b1x, b1y, a0x, a0y);
+  /**
+   * H for emitting piece a0-a1 and receiving piece b0-b1 (j' faces i', so a0 a1 b0 b1
+   * is anticlockwise), given as P = [a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y].
+   */
+  set(P: Float64Array): void {
+    const a0x = P[0],
+      a0y = P[1],
+      a1x = P[2],
+      a1y = P[3],
+      b0x = P[4],
+      b0y = P[5],
+      b1x = P[6],
+      b1y = P[7];
+    this.side(0, P, 0, 2);
+    this.side(1, P, 2, 4);
+    this.side(2, P, 4, 6);
+    this.side(3, P, 6, 0);
     this.minX = Math.min(a0x, a1x, b0x, b1x);
     this.minY = Math.min(a0y, a1y, b0y, b1y);
     this.maxX = Math.max(a0x, a1x, b0x, b1x);
@@ -67,7 +78,12 @@ export class ViewRegion {
     this.normalReady = false;
   }
 
-  private side(k: number, x0: number, y0: number, x1: number, y1: number): void {
+  /** Side k from point (P[s], P[s + 1]) to point (P[e], P[e + 1]). */
+  private side(k: number, P: Float64Array, s: number, e: number): void {
+    const x0 = P[s],
+      y0 = P[s + 1],
+      x1 = P[e],
+      y1 = P[e + 1];
     this.sx[k] = x0;
     this.sy[k] = y0;
     this.ex[k] = x1;
