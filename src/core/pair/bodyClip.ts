@@ -112,12 +112,7 @@ export class BodyClipper {
   /** Clip edge `edge` to H exactly; keep the piece if it passes through H's interior. */
   clipEdge(edge: number): void {
     if (edge === this.pairI || edge === this.pairJ) return;
-    const E = this.e;
-    const px = E.ax[edge],
-      py = E.ay[edge],
-      qx = E.bx[edge],
-      qy = E.by[edge];
-    if (this.region.clipSegment(px, py, qx, qy, this.clipOut)) this.keepClipped(edge, px, py, qx, qy);
+    if (this.region.clipEdge(this.e, edge, this.clipOut)) this.pieces.keepClipped(edge, this.e, this.clipOut);
   }
 
   /**
@@ -190,7 +185,7 @@ export class BodyClipper {
       return;
     }
     const E = this.e;
-    for (let e = first; e < end; e++) this.pieces.keep(e, E.ax[e], E.ay[e], E.bx[e], E.by[e], true, true);
+    for (let e = first; e < end; e++) this.pieces.keepWhole(e, E);
   }
 
   /**
@@ -269,28 +264,8 @@ export class BodyClipper {
     }
     if (e === this.pairI || e === this.pairJ) return;
     const E = this.e;
-    const px = E.ax[e],
-      py = E.ay[e],
-      qx = E.bx[e],
-      qy = E.by[e];
-    if (doubtful === 0) this.pieces.keep(e, px, py, qx, qy, true, true);
-    else if (this.region.clipExact(px, py, qx, qy, doubtful, this.clipOut)) this.keepClipped(e, px, py, qx, qy);
-  }
-
-  /** Keep the piece of edge p-q that the last clip left in clipOut. */
-  private keepClipped(edge: number, px: number, py: number, qx: number, qy: number): void {
-    const c = this.clipOut;
-    this.pieces.keep(
-      edge,
-      px + c.t0 * (qx - px),
-      py + c.t0 * (qy - py),
-      px + c.t1 * (qx - px),
-      py + c.t1 * (qy - py),
-      c.startInside,
-      c.endInside,
-      c.startSide,
-      c.endSide,
-    );
+    if (doubtful === 0) this.pieces.keepWhole(e, E);
+    else if (this.region.clipExact(E, e, doubtful, this.clipOut)) this.pieces.keepClipped(e, E, this.clipOut);
   }
 
   private growDeferred(): void {

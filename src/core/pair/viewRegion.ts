@@ -1,3 +1,4 @@
+import type { EdgeSet } from '../edges';
 import { orient as orientIn } from '../orient';
 
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
@@ -131,11 +132,15 @@ export class ViewRegion {
   }
 
   /**
-   * Clip segment p-q to H with exact orientation tests. Returns true, with the kept
-   * piece in `out`, when the segment passes through H's interior; false when it lies
+   * Clip edge e of E, p-q, to H with exact orientation tests. Returns true, with the
+   * kept piece in `out`, when the edge passes through H's interior; false when it lies
    * outside or along the boundary (it then blocks no sight line).
    */
-  clipSegment(px: number, py: number, qx: number, qy: number, out: SegmentClip): boolean {
+  clipEdge(E: EdgeSet, e: number, out: SegmentClip): boolean {
+    const px = E.ax[e],
+      py = E.ay[e],
+      qx = E.bx[e],
+      qy = E.by[e];
     // Float pass first, the side strings first: reject cheaply, and mark the sides that
     // hold both ends surely inside (they cannot cut the segment); the margin is far
     // above the rounding of the cross products. Exact signs only for the other sides.
@@ -156,15 +161,19 @@ export class ViewRegion {
       if (fp < -tol && fq < -tol) return false;
       if (!(fp > tol && fq > tol)) doubtful |= 1 << k;
     }
-    return this.clipExact(px, py, qx, qy, doubtful, out);
+    return this.clipExact(E, e, doubtful, out);
   }
 
   /**
-   * clipSegment with the float pass done by the caller: `doubtful` has bit k set for
+   * clipEdge with the float pass done by the caller: `doubtful` has bit k set for
    * each side k (of length) that may not hold both ends strictly inside; the other
    * sides must hold them so (a side tested in vain changes nothing).
    */
-  clipExact(px: number, py: number, qx: number, qy: number, doubtful: number, out: SegmentClip): boolean {
+  clipExact(E: EdgeSet, e: number, doubtful: number, out: SegmentClip): boolean {
+    const px = E.ax[e],
+      py = E.ay[e],
+      qx = E.bx[e],
+      qy = E.by[e];
     let t0 = 0,
       t1 = 1;
     let pIn = true,
