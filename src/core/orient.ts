@@ -4,9 +4,14 @@ import { orient2d as orient2dIn } from 'robust-predicates';
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
 const orient2d = orient2dIn;
 
-/** robust-predicates' bound for orient2d's float filter (its ccwerrboundA, epsilon = 2^-53). */
+/**
+ * robust-predicates' bound for orient2d's float filter (its ccwerrboundA, epsilon =
+ * 2^-53): with l = (ay - cy)(bx - cx) and r = (ax - cx)(by - cy), orient is -(l - r)
+ * whenever |l - r| >= ORIENT_FILTER_BOUND |l + r|.
+ */
 const EPSILON = 1.1102230246251565e-16;
-const FILTER_BOUND = (3 + 16 * EPSILON) * EPSILON;
+export const ORIENT_FILTER_BOUND = (3 + 16 * EPSILON) * EPSILON;
+const FILTER_BOUND = ORIENT_FILTER_BOUND;
 
 /**
  * Exact sign of the turn a -> b -> c with y pointing up: > 0 when c lies left of the

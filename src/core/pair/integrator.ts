@@ -1,6 +1,6 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
-import { orient as orientIn } from '../orient';
+import { ORIENT_FILTER_BOUND, orient as orientIn } from '../orient';
 import { Breakpoints, FixedPoints } from './fixedPoints';
 import { ObstacleGatherer } from './obstacleGather';
 import { ObstaclePieces } from './obstaclePieces';
@@ -11,6 +11,7 @@ import { VisibleGaps } from './visibleGaps';
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
 const orient = orientIn,
+  FILTER_BOUND = ORIENT_FILTER_BOUND,
   crossedStrings = crossedStringsIn,
   pieceIntegral = pieceIntegralIn;
 
@@ -64,11 +65,25 @@ export class PairIntegrator {
       b1x = E.bx[j],
       b1y = E.by[j];
     // Front tests: a point is in front of an edge when it lies strictly left of a -> b.
-    const dB0 = this.orientAt(i, j, 0);
-    const dB1 = this.orientAt(i, j, 1);
+    // orient's float filter inline (see orient.ts); only a doubtful case calls out, by
+    // edge numbers, so that no coordinate is boxed.
+    let l = (a0y - b0y) * (a1x - b0x),
+      r = (a0x - b0x) * (a1y - b0y);
+    let dB0 = -(l - r);
+    if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dB0 = this.orientAt(i, j, 0);
+    l = (a0y - b1y) * (a1x - b1x);
+    r = (a0x - b1x) * (a1y - b1y);
+    let dB1 = -(l - r);
+    if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dB1 = this.orientAt(i, j, 1);
     if (dB0 <= 0 && dB1 <= 0) return 0;
-    const dA0 = this.orientAt(j, i, 0);
-    const dA1 = this.orientAt(j, i, 1);
+    l = (b0y - a0y) * (b1x - a0x);
+    r = (b0x - a0x) * (b1y - a0y);
+    let dA0 = -(l - r);
+    if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dA0 = this.orientAt(j, i, 0);
+    l = (b0y - a1y) * (b1x - a1x);
+    r = (b0x - a1x) * (b1y - a1y);
+    let dA1 = -(l - r);
+    if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dA1 = this.orientAt(j, i, 1);
     if (dA0 <= 0 && dA1 <= 0) return 0;
     // Keep only the part of each edge in front of the other: nothing else can exchange.
     if (dB0 < 0) {

@@ -1,9 +1,10 @@
 import type { EdgeSet } from '../edges';
-import { orient as orientIn } from '../orient';
+import { ORIENT_FILTER_BOUND, orient as orientIn } from '../orient';
 
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
-const orient = orientIn;
+const orient = orientIn,
+  FILTER_BOUND = ORIENT_FILTER_BOUND;
 
 // The view region H of an edge pair: every sight line from i' to j' lies in the
 // convex quadrilateral a0 a1 b0 b1 (anticlockwise), whose sides are i' (side 0), the
@@ -164,6 +165,13 @@ export class ViewRegion {
     return this.clipExact(E, e, doubtful, out);
   }
 
+  /** orient(start of side k, its end, corner `end` (0: a, 1: b) of edge e of E). */
+  private exactOrient(k: number, E: EdgeSet, e: number, end: number): number {
+    const x = end === 0 ? E.ax[e] : E.bx[e],
+      y = end === 0 ? E.ay[e] : E.by[e];
+    return orient(this.sx[k], this.sy[k], this.ex[k], this.ey[k], x, y);
+  }
+
   /**
    * clipEdge with the float pass done by the caller: `doubtful` has bit k set for
    * each side k (of length) that may not hold both ends strictly inside; the other
@@ -189,8 +197,16 @@ export class ViewRegion {
         y0 = this.sy[k],
         x1 = this.ex[k],
         y1 = this.ey[k];
-      const dP = orient(x0, y0, x1, y1, px, py);
-      const dQ = orient(x0, y0, x1, y1, qx, qy);
+      // orient(side start, side end, corner), its float filter inline (see orient.ts):
+      // only a doubtful case calls out, with no number to box.
+      let l = (y0 - py) * (x1 - px),
+        r = (x0 - px) * (y1 - py);
+      let dP = -(l - r);
+      if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dP = this.exactOrient(k, E, e, 0);
+      l = (y0 - qy) * (x1 - qx);
+      r = (x0 - qx) * (y1 - qy);
+      let dQ = -(l - r);
+      if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dQ = this.exactOrient(k, E, e, 1);
       if (dP <= 0 && dQ <= 0) return false;
       if (dP <= 0) {
         pIn = false;
