@@ -36,6 +36,8 @@ export class PairIntegrator {
   private readonly gaps = new VisibleGaps();
   /** The pair's trimmed ends a0, a1 (of i') and b0, b1 (of j'), x then y, sketch units. */
   private readonly ends = new Float64Array(8);
+  /** The current piece of i': its middle, i's unit direction, its ends pa and pb, and pb - pa (x, y each). */
+  private readonly piece = new Float64Array(10);
 
   constructor(
     private readonly e: EdgeSet,
@@ -69,21 +71,17 @@ export class PairIntegrator {
     // edge numbers, so that no coordinate is boxed.
     let l = (a0y - b0y) * (a1x - b0x),
       r = (a0x - b0x) * (a1y - b0y);
-    let dB0 = -(l - r);
-    if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dB0 = this.orientAt(i, j, 0);
+    const dB0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.orientAt(i, j, 0);
     l = (a0y - b1y) * (a1x - b1x);
     r = (a0x - b1x) * (a1y - b1y);
-    let dB1 = -(l - r);
-    if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dB1 = this.orientAt(i, j, 1);
+    const dB1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.orientAt(i, j, 1);
     if (dB0 <= 0 && dB1 <= 0) return 0;
     l = (b0y - a0y) * (b1x - a0x);
     r = (b0x - a0x) * (b1y - a0y);
-    let dA0 = -(l - r);
-    if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dA0 = this.orientAt(j, i, 0);
+    const dA0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.orientAt(j, i, 0);
     l = (b0y - a1y) * (b1x - a1x);
     r = (b0x - a1x) * (b1y - a1y);
-    let dA1 = -(l - r);
-    if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dA1 = this.orientAt(j, i, 1);
+    const dA1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.orientAt(j, i, 1);
     if (dA0 <= 0 && dA1 <= 0) return 0;
     // Keep only the part of each edge in front of the other: nothing else can exchange.
     if (dB0 < 0) {
@@ -152,24 +150,28 @@ export class PairIntegrator {
     const gaps = this.gaps,
       points = this.points;
     gaps.prepare(points);
+    // The piece goes to the gaps and the integral in `Q` (see `piece`), not as
+    // numbers: a call that is not inlined boxes each number passed to it.
+    const Q = this.piece;
+    Q[2] = tx;
+    Q[3] = ty;
     let total = 0;
     let sa = 0;
     for (let k = 0; k <= nBreaks; k++) {
       const sb = k < nBreaks ? at[k] : 1;
       if (sb <= sa) continue;
       const sm = 0.5 * (sa + sb);
-      gaps.find(points, a0x + sm * dxI, a0y + sm * dyI, tx, ty);
+      Q[0] = a0x + sm * dxI;
+      Q[1] = a0y + sm * dyI;
+      gaps.find(points, Q);
       if (gaps.count > 0) {
-        total += pieceIntegral(
-          points,
-          gaps,
-          a0x + sa * dxI,
-          a0y + sa * dyI,
-          a0x + sb * dxI,
-          a0y + sb * dyI,
-          (sb - sa) * dxI,
-          (sb - sa) * dyI,
-        );
+        Q[4] = a0x + sa * dxI;
+        Q[5] = a0y + sa * dyI;
+        Q[6] = a0x + sb * dxI;
+        Q[7] = a0y + sb * dyI;
+        Q[8] = (sb - sa) * dxI;
+        Q[9] = (sb - sa) * dyI;
+        total += pieceIntegral(points, gaps, Q);
       }
       sa = sb;
     }

@@ -15,18 +15,16 @@ const distanceChange = distanceChangeIn;
 /**
  * Sum over the visible gaps of 1/2 the integral over [pa, pb] of (sin b_hi - sin b_lo):
  * the piece's share of L_i F_ij, sketch units (length x dimensionless factor).
- * (dx, dy) = pb - pa, computed directly so that a short piece loses no digits.
+ * pa = (Q[4], Q[5]), pb = (Q[6], Q[7]), and (dx, dy) = (Q[8], Q[9]) = pb - pa,
+ * computed directly so that a short piece loses no digits.
  */
-export function pieceIntegral(
-  points: FixedPoints,
-  gaps: VisibleGaps,
-  pax: number,
-  pay: number,
-  pbx: number,
-  pby: number,
-  dx: number,
-  dy: number,
-): number {
+export function pieceIntegral(points: FixedPoints, gaps: VisibleGaps, Q: Float64Array): number {
+  const pax = Q[4],
+    pay = Q[5],
+    pbx = Q[6],
+    pby = Q[7],
+    dx = Q[8],
+    dy = Q[9];
   const X = points.x,
     Y = points.y,
     LO = gaps.lo,

@@ -201,12 +201,10 @@ export class ViewRegion {
       // only a doubtful case calls out, with no number to box.
       let l = (y0 - py) * (x1 - px),
         r = (x0 - px) * (y1 - py);
-      let dP = -(l - r);
-      if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dP = this.exactOrient(k, E, e, 0);
+      const dP = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.exactOrient(k, E, e, 0);
       l = (y0 - qy) * (x1 - qx);
       r = (x0 - qx) * (y1 - qy);
-      let dQ = -(l - r);
-      if (!(Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r))) dQ = this.exactOrient(k, E, e, 1);
+      const dQ = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.exactOrient(k, E, e, 1);
       if (dP <= 0 && dQ <= 0) return false;
       if (dP <= 0) {
         pIn = false;

@@ -27,10 +27,15 @@ export class VisibleGaps {
   private coverHint = -1;
 
   /**
-   * Find the gaps seen from point (px, py) (sketch units) on i, whose unit direction
-   * is (tx, ty), after prepare(points) for this pair. Fixed points 0 and 1 are j's ends b0 (high end) and b1 (low end).
+   * Find the gaps seen from point p = (Q[0], Q[1]) (sketch units) on i, whose unit
+   * direction is (Q[2], Q[3]), after prepare(points) for this pair. Fixed points 0 and
+   * 1 are j's ends b0 (high end) and b1 (low end).
    */
-  find(points: FixedPoints, px: number, py: number, tx: number, ty: number): void {
+  find(points: FixedPoints, Q: Float64Array): void {
+    const px = Q[0],
+      py = Q[1],
+      tx = Q[2],
+      ty = Q[3];
     const X = points.x,
       Y = points.y;
     const nChains = points.chainCount,
