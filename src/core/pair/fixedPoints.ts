@@ -185,6 +185,7 @@ function facingOf(E: EdgeSet, e: number, P: Float64Array): Facing {
 export class Breakpoints {
   at = new Float64Array(64);
   count = 0;
+  private offsets = new Float64Array(256);
 
   /**
    * Find the points of i' = a0-a1 where p lines up with two fixed points (neither a
@@ -199,23 +200,28 @@ export class Breakpoints {
     const X = points.x,
       Y = points.y,
       boundary = points.onBoundary;
-    const n = points.count;
+    // The points that are no chain end, as offsets from a0 and from a1 (4 numbers each).
+    if (this.offsets.length < 4 * points.count) this.offsets = new Float64Array(8 * points.count);
+    const U = this.offsets;
+    let n = 0;
+    for (let k = 0; k < points.count; k++) {
+      if (boundary[k]) continue;
+      U[4 * n] = X[k] - a0x;
+      U[4 * n + 1] = Y[k] - a0y;
+      U[4 * n + 2] = X[k] - a1x;
+      U[4 * n + 3] = Y[k] - a1y;
+      n++;
+    }
     let count = 0;
     for (let r = 0; r < n; r++) {
-      if (boundary[r]) continue;
-      const rx = X[r],
-        ry = Y[r];
       // orient(p, r, q) is affine along i': g0 at a0 and g1 at a1.
-      const r0x = rx - a0x,
-        r0y = ry - a0y,
-        r1x = rx - a1x,
-        r1y = ry - a1y;
+      const r0x = U[4 * r],
+        r0y = U[4 * r + 1],
+        r1x = U[4 * r + 2],
+        r1y = U[4 * r + 3];
       for (let q = r + 1; q < n; q++) {
-        if (boundary[q]) continue;
-        const qx = X[q],
-          qy = Y[q];
-        const g0 = r0x * (qy - a0y) - r0y * (qx - a0x);
-        const g1 = r1x * (qy - a1y) - r1y * (qx - a1x);
+        const g0 = r0x * U[4 * q + 1] - r0y * U[4 * q];
+        const g1 = r1x * U[4 * q + 3] - r1y * U[4 * q + 2];
         if ((g0 < 0 && g1 > 0) || (g0 > 0 && g1 < 0)) {
           if (count === this.at.length) this.at = grow(this.at);
           this.at[count++] = g0 / (g0 - g1);
