@@ -49,15 +49,24 @@ export class VisibleGaps {
     // chain spans it gives the same (empty) answer as the sweep below, so the hint
     // changes no result.
     const hint = this.coverHint;
+    // The hint chain's extremes, kept for the sweep when it does not cover j.
+    let hintLo = Infinity,
+      hintHi = -Infinity,
+      hintLoP = -1,
+      hintHiP = -1;
     if (hint >= 0 && hint < nChains) {
-      let lo = Infinity,
-        hi = -Infinity;
       for (let k = start[hint]; k < start[hint + 1]; k++) {
         const kk = directionKey(X[k] - px, Y[k] - py, tx, ty);
-        if (kk < lo) lo = kk;
-        if (kk > hi) hi = kk;
+        if (kk < hintLo) {
+          hintLo = kk;
+          hintLoP = k;
+        }
+        if (kk > hintHi) {
+          hintHi = kk;
+          hintHiP = k;
+        }
       }
-      if (lo <= jLo && hi >= jHi) return;
+      if (hintLo <= jLo && hintHi >= jHi) return;
     }
     const loKey = this.loKey,
       hiKey = this.hiKey,
@@ -72,15 +81,22 @@ export class VisibleGaps {
         hi = -Infinity,
         loP = -1,
         hiP = -1;
-      for (let k = from; k < to; k++) {
-        const kk = directionKey(X[k] - px, Y[k] - py, tx, ty);
-        if (kk < lo) {
-          lo = kk;
-          loP = k;
-        }
-        if (kk > hi) {
-          hi = kk;
-          hiP = k;
+      if (g === hint) {
+        lo = hintLo;
+        hi = hintHi;
+        loP = hintLoP;
+        hiP = hintHiP;
+      } else {
+        for (let k = from; k < to; k++) {
+          const kk = directionKey(X[k] - px, Y[k] - py, tx, ty);
+          if (kk < lo) {
+            lo = kk;
+            loP = k;
+          }
+          if (kk > hi) {
+            hi = kk;
+            hiP = k;
+          }
         }
       }
       if (hi <= jLo || lo >= jHi) continue;
