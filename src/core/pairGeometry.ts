@@ -38,7 +38,8 @@ export function distanceChange(
  * (P[2], P[3]), i.e. both neighbours on one side of the line p-w? Conservative: may
  * say yes when the answer is no (costs an extra split, never accuracy). orient's float
  * filter is inline, and a doubtful case calls out by indices only (a call that is not
- * inlined boxes the numbers passed to it).
+ * inlined boxes the numbers passed to it; + types its result as a number, else the
+ * filter's value would be boxed to meet it).
  */
 export function silhouetteAtCorner(P: Float64Array, E: EdgeSet, edge: number, next: number): boolean {
   const wx = E.bx[edge],
@@ -52,18 +53,18 @@ export function silhouetteAtCorner(P: Float64Array, E: EdgeSet, edge: number, ne
   // orient(a, w, c) = -(l - r) with l = (ay - cy)(wx - cx), r = (ax - cx)(wy - cy).
   let l = (ay - uy) * (wx - ux),
     r = (ax - ux) * (wy - uy);
-  const f0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : cornerOrient(P, 0, E, edge, next, 0);
+  const f0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +cornerOrient(P, 0, E, edge, next, 0);
   l = (ay - vy) * (wx - vx);
   r = (ax - vx) * (wy - vy);
-  const g0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : cornerOrient(P, 0, E, edge, next, 1);
+  const g0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +cornerOrient(P, 0, E, edge, next, 1);
   ax = P[2];
   ay = P[3];
   l = (ay - uy) * (wx - ux);
   r = (ax - ux) * (wy - uy);
-  const f1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : cornerOrient(P, 2, E, edge, next, 0);
+  const f1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +cornerOrient(P, 2, E, edge, next, 0);
   l = (ay - vy) * (wx - vx);
   r = (ax - vx) * (wy - vy);
-  const g1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : cornerOrient(P, 2, E, edge, next, 1);
+  const g1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +cornerOrient(P, 2, E, edge, next, 1);
   // f and g are affine along the segment. The corner is surely no silhouette only when
   // f g < 0 at both ends and neither changes sign; with both changing sign, f g turns
   // positive between the roots. Any zero at an end counts as a possible silhouette.

@@ -68,20 +68,21 @@ export class PairIntegrator {
       b1y = E.by[j];
     // Front tests: a point is in front of an edge when it lies strictly left of a -> b.
     // orient's float filter inline (see orient.ts); only a doubtful case calls out, by
-    // edge numbers, so that no coordinate is boxed.
+    // edge numbers, so that no coordinate is boxed (and + types its result as a number,
+    // else the filter's value is boxed to meet it).
     let l = (a0y - b0y) * (a1x - b0x),
       r = (a0x - b0x) * (a1y - b0y);
-    const dB0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.orientAt(i, j, 0);
+    const dB0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(i, j, 0);
     l = (a0y - b1y) * (a1x - b1x);
     r = (a0x - b1x) * (a1y - b1y);
-    const dB1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.orientAt(i, j, 1);
+    const dB1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(i, j, 1);
     if (dB0 <= 0 && dB1 <= 0) return 0;
     l = (b0y - a0y) * (b1x - a0x);
     r = (b0x - a0x) * (b1y - a0y);
-    const dA0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.orientAt(j, i, 0);
+    const dA0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(j, i, 0);
     l = (b0y - a1y) * (b1x - a1x);
     r = (b0x - a1x) * (b1y - a1y);
-    const dA1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.orientAt(j, i, 1);
+    const dA1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(j, i, 1);
     if (dA0 <= 0 && dA1 <= 0) return 0;
     // Keep only the part of each edge in front of the other: nothing else can exchange.
     if (dB0 < 0) {

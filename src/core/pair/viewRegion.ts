@@ -198,13 +198,14 @@ export class ViewRegion {
         x1 = this.ex[k],
         y1 = this.ey[k];
       // orient(side start, side end, corner), its float filter inline (see orient.ts):
-      // only a doubtful case calls out, with no number to box.
+      // only a doubtful case calls out, with no number to box (the + types the call's
+      // result as a number, else the filter's value is boxed to meet it).
       let l = (y0 - py) * (x1 - px),
         r = (x0 - px) * (y1 - py);
-      const dP = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.exactOrient(k, E, e, 0);
+      const dP = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.exactOrient(k, E, e, 0);
       l = (y0 - qy) * (x1 - qx);
       r = (x0 - qx) * (y1 - qy);
-      const dQ = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : this.exactOrient(k, E, e, 1);
+      const dQ = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.exactOrient(k, E, e, 1);
       if (dP <= 0 && dQ <= 0) return false;
       if (dP <= 0) {
         pIn = false;
