@@ -1,3 +1,4 @@
+import Flatbush from 'flatbush';
 import type { EdgeSet } from './edges';
 import { orient } from './orient';
 import { RegionTree } from './pair/regionTree';
@@ -36,6 +37,15 @@ export interface ObstacleIndex {
    * distance from the centre to its nearest edge; 0 when the centre lies outside.
    */
   bodyRIn: Float64Array;
+  /**
+   * The same for the body's convex hull, when no edge of another polygon enters the
+   * hull: a segment with both ends outside the hull that passes through its interior
+   * then meets the body (entering a notch under a hull side, it can leave only across
+   * the body's boundary), so for views between other polygons' edges the body blocks
+   * what its hull blocks. Equal to bodyRIn for convex bodies and where another polygon
+   * enters the hull.
+   */
+  bodyRHull: Float64Array;
   /** Body index of each polygon, -1 for the enclosure. */
   bodyOfPolygon: Int32Array;
   /** Body bounding boxes, searched by view region, when there are many bodies; null means test them all. */
@@ -72,9 +82,11 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   const bodyConvex = new Uint8Array(B);
   const bodyRMin = new Float64Array(B);
   const bodyRIn = new Float64Array(B);
+  const bodyRHull = new Float64Array(B);
   const walkEdge = new Int32Array(edges.count);
   const walkAngle = new Float64Array(edges.count);
   const bodyBox = new Float64Array(4 * B);
+  let allEdges: Flatbush | null = null;
   bodies.forEach((p, b) => {
     bodyFirstEdge[b] = start[p];
     bodyEdgeEnd[b] = start[p + 1];
@@ -121,6 +133,10 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     } else {
       bodyRIn[b] = innerRadius(edges, start[p], start[p + 1], cx, cy);
     }
+    if (!bodyConvex[b]) {
+      allEdges ??= edgeBoxIndex(edges);
+      bodyRHull[b] = hullRadius(edges, allEdges, p, cx, cy, bodyRIn[b]);
+    } else bodyRHull[b] = bodyRIn[b];
     if (bodyConvex[b]) {
       // Solids are walked clockwise, so the angle falls along the walk.
       let e = start[p];
@@ -165,6 +181,7 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     walkAngle,
     bodyRMin,
     bodyRIn,
+    bodyRHull,
     bodyOfPolygon,
     bodyTree,
     wallEdges,
@@ -214,6 +231,77 @@ function convexHull(edges: EdgeSet, from: number, to: number): number[] {
   const out: number[] = [];
   for (const e of chain) out.push(edges.ax[e], edges.ay[e]);
   return out;
+}
+
+/**
+ * bodyRHull of polygon p (see ObstacleIndex): the distance from (cx, cy) to the nearest
+ * side of its convex hull, or `fallback` when an edge of another polygon may enter
+ * the hull (exact separation tests; in doubt it may).
+ */
+function hullRadius(edges: EdgeSet, index: Flatbush, p: number, cx: number, cy: number, fallback: number): number {
+  const hull = convexHull(edges, edges.polygonStart[p], edges.polygonStart[p + 1]);
+  const m = hull.length >> 1;
+  let x0 = Infinity,
+    y0 = Infinity,
+    x1 = -Infinity,
+    y1 = -Infinity;
+  for (let k = 0; k < 2 * m; k += 2) {
+    x0 = Math.min(x0, hull[k]);
+    x1 = Math.max(x1, hull[k]);
+    y0 = Math.min(y0, hull[k + 1]);
+    y1 = Math.max(y1, hull[k + 1]);
+  }
+  for (const e of index.search(x0, y0, x1, y1)) {
+    if (edges.polygon[e] !== p && !segmentMissesHull(hull, edges.ax[e], edges.ay[e], edges.bx[e], edges.by[e]))
+      return fallback;
+  }
+  let r = Infinity;
+  for (let k = 0; k < m; k++) {
+    const hx = hull[2 * k],
+      hy = hull[2 * k + 1];
+    const dx = hull[(2 * k + 2) % (2 * m)] - hx,
+      dy = hull[(2 * k + 3) % (2 * m)] - hy;
+    // The hull runs anticlockwise and (cx, cy), the corner average, lies inside: left of every side.
+    r = Math.min(r, (dx * (cy - hy) - dy * (cx - hx)) / Math.hypot(dx, dy));
+  }
+  return Math.max(fallback, r);
+}
+
+/** A box index of every edge (built once, for hullRadius). */
+function edgeBoxIndex(edges: EdgeSet): Flatbush {
+  const index = new Flatbush(Math.max(1, edges.count));
+  for (let e = 0; e < edges.count; e++) {
+    const ax = edges.ax[e],
+      ay = edges.ay[e],
+      bx = edges.bx[e],
+      by = edges.by[e];
+    index.add(Math.min(ax, bx), Math.min(ay, by), Math.max(ax, bx), Math.max(ay, by));
+  }
+  if (edges.count === 0) index.add(0, 0, 0, 0);
+  index.finish();
+  return index;
+}
+
+/**
+ * True when segment a-b surely stays out of the open interior of the convex polygon
+ * `hull` (flat x, y, anticlockwise): both ends on or outside one side, or every hull
+ * corner on one closed side of the segment's line (exact signs).
+ */
+function segmentMissesHull(hull: number[], ax: number, ay: number, bx: number, by: number): boolean {
+  const n = hull.length;
+  let left = false,
+    right = false;
+  for (let k = 0; k < n; k += 2) {
+    const hx = hull[k],
+      hy = hull[k + 1],
+      nx = hull[(k + 2) % n],
+      ny = hull[(k + 3) % n];
+    if (orient(hx, hy, nx, ny, ax, ay) <= 0 && orient(hx, hy, nx, ny, bx, by) <= 0) return true;
+    const s = orient(ax, ay, bx, by, hx, hy);
+    if (s > 0) left = true;
+    else if (s < 0) right = true;
+  }
+  return !(left && right);
 }
 
 /** Distance (sketch units) from (cx, cy) to the nearest edge of [from, to); 0 when the point is not inside the polygon. */

@@ -1,8 +1,10 @@
-import { orient as orientIn } from './orient';
+import type { EdgeSet } from './edges';
+import { ORIENT_FILTER_BOUND, orient as orientIn } from './orient';
 
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
-const orient = orientIn;
+const orient = orientIn,
+  FILTER_BOUND = ORIENT_FILTER_BOUND;
 
 // Small exact-geometry pieces of the pair integral (sketch units throughout): the
 // distance change behind every closed-form piece integral, and the silhouette test.
@@ -31,28 +33,47 @@ export function distanceChange(
 }
 
 /**
- * Can corner w (between neighbours u and v) be a silhouette seen from some point p
- * of segment a0-a1, i.e. both neighbours on one side of the line p-w? Conservative:
- * may say yes when the answer is no (costs an extra split, never accuracy).
+ * Can corner w = b of `edge` of E (between its neighbours u = a of `edge` and v = b
+ * of `next`) be a silhouette seen from some point p of segment a0-a1 = (P[0], P[1]) -
+ * (P[2], P[3]), i.e. both neighbours on one side of the line p-w? Conservative: may
+ * say yes when the answer is no (costs an extra split, never accuracy). orient's float
+ * filter is inline, and a doubtful case calls out by indices only (a call that is not
+ * inlined boxes the numbers passed to it; + types its result as a number, else the
+ * filter's value would be boxed to meet it).
  */
-export function silhouetteFromSegment(
-  a0x: number,
-  a0y: number,
-  a1x: number,
-  a1y: number,
-  wx: number,
-  wy: number,
-  ux: number,
-  uy: number,
-  vx: number,
-  vy: number,
-): boolean {
-  const f0 = orient(a0x, a0y, wx, wy, ux, uy);
-  const g0 = orient(a0x, a0y, wx, wy, vx, vy);
-  const f1 = orient(a1x, a1y, wx, wy, ux, uy);
-  const g1 = orient(a1x, a1y, wx, wy, vx, vy);
+export function silhouetteAtCorner(P: Float64Array, E: EdgeSet, edge: number, next: number): boolean {
+  const wx = E.bx[edge],
+    wy = E.by[edge],
+    ux = E.ax[edge],
+    uy = E.ay[edge],
+    vx = E.bx[next],
+    vy = E.by[next];
+  let ax = P[0],
+    ay = P[1];
+  // orient(a, w, c) = -(l - r) with l = (ay - cy)(wx - cx), r = (ax - cx)(wy - cy).
+  let l = (ay - uy) * (wx - ux),
+    r = (ax - ux) * (wy - uy);
+  const f0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +cornerOrient(P, 0, E, edge, next, 0);
+  l = (ay - vy) * (wx - vx);
+  r = (ax - vx) * (wy - vy);
+  const g0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +cornerOrient(P, 0, E, edge, next, 1);
+  ax = P[2];
+  ay = P[3];
+  l = (ay - uy) * (wx - ux);
+  r = (ax - ux) * (wy - uy);
+  const f1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +cornerOrient(P, 2, E, edge, next, 0);
+  l = (ay - vy) * (wx - vx);
+  r = (ax - vx) * (wy - vy);
+  const g1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +cornerOrient(P, 2, E, edge, next, 1);
   // f and g are affine along the segment. The corner is surely no silhouette only when
   // f g < 0 at both ends and neither changes sign; with both changing sign, f g turns
   // positive between the roots. Any zero at an end counts as a possible silhouette.
   return !(f0 * g0 < 0 && f1 * g1 < 0 && f0 * f1 > 0);
+}
+
+/** orient(a, w, c) for silhouetteAtCorner: a = (P[at], P[at + 1]), w = b of edge, c = a of edge (which 0) or b of next (1). */
+function cornerOrient(P: Float64Array, at: number, E: EdgeSet, edge: number, next: number, which: number): number {
+  return which === 0
+    ? orient(P[at], P[at + 1], E.bx[edge], E.by[edge], E.ax[edge], E.ay[edge])
+    : orient(P[at], P[at + 1], E.bx[edge], E.by[edge], E.bx[next], E.by[next]);
 }

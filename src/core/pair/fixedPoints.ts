@@ -1,12 +1,12 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
-import { silhouetteFromSegment as silhouetteFromSegmentIn } from '../pairGeometry';
+import { silhouetteAtCorner as silhouetteAtCornerIn } from '../pairGeometry';
 import { grow as growIn, sortPrefix as sortPrefixIn } from '../scratch';
 import type { ObstaclePieces } from './obstaclePieces';
 
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
-const silhouetteFromSegment = silhouetteFromSegmentIn,
+const silhouetteAtCorner = silhouetteAtCornerIn,
   grow = growIn,
   sortPrefix = sortPrefixIn;
 
@@ -46,6 +46,8 @@ export class FixedPoints {
   chainStart = new Int32Array(32);
   chainCount = 0;
   private facing = new Uint8Array(64);
+  /** The pair's trimmed ends (see build). */
+  private ends: Float64Array = new Float64Array(8);
 
   constructor(
     private readonly e: EdgeSet,
@@ -57,22 +59,13 @@ export class FixedPoints {
    * obstruction pieces (after pieces.sortByEdge()): join them into chains (runs of one polygon's edges joined by
    * corners inside H) and keep each chain's ends and possible silhouette corners.
    */
-  build(
-    pieces: ObstaclePieces,
-    a0x: number,
-    a0y: number,
-    a1x: number,
-    a1y: number,
-    b0x: number,
-    b0y: number,
-    b1x: number,
-    b1y: number,
-  ): void {
+  build(pieces: ObstaclePieces, P: Float64Array): void {
+    this.ends = P;
     this.count = 0;
-    this.push(b0x, b0y, 0);
-    this.push(b1x, b1y, 0);
+    this.pushFrom(P, P, 4, 5, 0);
+    this.pushFrom(P, P, 6, 7, 0);
     this.chainCount = 0;
-    for (let w = 0; w < pieces.wholeCount; w++) this.addWholeConvexBody(pieces.wholeBody[w], a0x, a0y, a1x, a1y);
+    for (let w = 0; w < pieces.wholeCount; w++) this.addWholeConvexBody(pieces.wholeBody[w]);
     // Open chains start at a piece whose start is not inside H, or whose previous edge was not kept.
     const prevEdge = this.e.prevEdge;
     // Pieces in edge order (pieces.order), so that the points, and the rounding of the
@@ -80,43 +73,31 @@ export class FixedPoints {
     const order = pieces.order;
     for (let k = 0; k < pieces.count; k++) {
       const s = order[k];
-      if (!pieces.startInside[s] || !pieces.has(prevEdge[pieces.edge[s]]))
-        this.walkChain(pieces, s, true, a0x, a0y, a1x, a1y);
+      if (!pieces.startInside[s] || !pieces.has(prevEdge[pieces.edge[s]])) this.walkChain(pieces, s, true);
     }
     // What is left are closed chains: bodies lying wholly inside H.
     for (let k = 0; k < pieces.count; k++) {
       const s = order[k];
-      if (!pieces.walked[s]) this.walkChain(pieces, s, false, a0x, a0y, a1x, a1y);
+      if (!pieces.walked[s]) this.walkChain(pieces, s, false);
     }
     this.setChainStart(this.chainCount, this.count);
   }
 
-  private walkChain(
-    pieces: ObstaclePieces,
-    first: number,
-    open: boolean,
-    a0x: number,
-    a0y: number,
-    a1x: number,
-    a1y: number,
-  ): void {
+  private walkChain(pieces: ObstaclePieces, first: number, open: boolean): void {
     const E = this.e;
     this.setChainStart(this.chainCount++, this.count);
-    if (open) this.push(pieces.px[first], pieces.py[first], 1);
+    if (open) this.pushFrom(pieces.px, pieces.py, first, first, 1);
     let s = first;
     for (;;) {
       pieces.walked[s] = 1;
       const edge = pieces.edge[s];
       const next = E.nextEdge[edge];
       if (!pieces.endInside[s] || !pieces.has(next)) {
-        this.push(pieces.qx[s], pieces.qy[s], 1);
+        this.pushFrom(pieces.qx, pieces.qy, s, s, 1);
         return;
       }
       // Corner b of `edge` lies inside H, and the next edge was kept too.
-      const wx = E.bx[edge],
-        wy = E.by[edge];
-      if (silhouetteFromSegment(a0x, a0y, a1x, a1y, wx, wy, E.ax[edge], E.ay[edge], E.bx[next], E.by[next]))
-        this.push(wx, wy, 0);
+      if (silhouetteAtCorner(this.ends, E, edge, next)) this.pushFrom(E.bx, E.by, edge, edge, 0);
       s = pieces.pieceOf(next);
       if (pieces.walked[s]) return; // closed chain done
     }
@@ -127,18 +108,19 @@ export class FixedPoints {
    * its two tangent corners, where the edges facing p meet those facing away. Only
    * corners that may be a tangent from some p on i' are kept.
    */
-  private addWholeConvexBody(b: number, a0x: number, a0y: number, a1x: number, a1y: number): void {
+  private addWholeConvexBody(b: number): void {
+    const P = this.ends;
     const E = this.e;
     const first = this.ob.bodyFirstEdge[b],
       end = this.ob.bodyEdgeEnd[b];
     this.setChainStart(this.chainCount++, this.count);
     if (this.facing.length < end - first) this.facing = new Uint8Array(2 * (end - first));
     const facing = this.facing;
-    for (let e = first; e < end; e++) facing[e - first] = facingOf(E, e, a0x, a0y, a1x, a1y);
+    for (let e = first; e < end; e++) facing[e - first] = facingOf(E, e, P);
     // Corner a of e sits between the edge before it (in the oriented walk) and e.
     for (let e = first; e < end; e++) {
       if (cornerMayBeTangent(facing[E.prevEdge[e] - first] as Facing, facing[e - first] as Facing))
-        this.push(E.ax[e], E.ay[e], 0);
+        this.pushFrom(E.ax, E.ay, e, e, 0);
     }
   }
 
@@ -152,14 +134,17 @@ export class FixedPoints {
   }
 
   /**
-   * Add a fixed point. `onBoundary` = 1 marks the end of a chain, which lies on the
+   * Add fixed point (X[xAt], Y[yAt]). `onBoundary` = 1 marks the end of a chain, which lies on the
    * boundary of H: seen from i', a point on a side string is always outside j's range of
    * directions (H is convex, so its boundary is swept in order: a1, side 1, j, side 3,
    * a0), and a point on i's or j's line is at an end of its range. Such a point can
    * bound a chain's directions but never a visible gap of j by itself, so lines through
    * it make no breakpoints.
    */
-  private push(x: number, y: number, onBoundary: number): void {
+  private pushFrom(X: Float64Array, Y: Float64Array, xAt: number, yAt: number, onBoundary: number): void {
+    // Read here, not passed in: a call that is not inlined boxes the numbers passed to it.
+    const x = X[xAt],
+      y = Y[yAt];
     const k = this.count;
     if (k === this.x.length) {
       this.x = grow(this.x);
@@ -176,7 +161,11 @@ export class FixedPoints {
 }
 
 /** Facing of edge e seen from a0 and from a1 (front: the point lies strictly left of the edge's line). */
-function facingOf(E: EdgeSet, e: number, a0x: number, a0y: number, a1x: number, a1y: number): Facing {
+function facingOf(E: EdgeSet, e: number, P: Float64Array): Facing {
+  const a0x = P[0],
+    a0y = P[1],
+    a1x = P[2],
+    a1y = P[3];
   const x0 = E.ax[e],
     y0 = E.ay[e];
   const dx = E.bx[e] - x0,
@@ -196,33 +185,43 @@ function facingOf(E: EdgeSet, e: number, a0x: number, a0y: number, a1x: number, 
 export class Breakpoints {
   at = new Float64Array(64);
   count = 0;
+  private offsets = new Float64Array(256);
 
   /**
    * Find the points of i' = a0-a1 where p lines up with two fixed points (neither a
    * chain end). Between consecutive breakpoints the points bounding the view of j'
    * cannot change.
    */
-  find(points: FixedPoints, a0x: number, a0y: number, a1x: number, a1y: number): void {
+  find(points: FixedPoints, P: Float64Array): void {
+    const a0x = P[0],
+      a0y = P[1],
+      a1x = P[2],
+      a1y = P[3];
     const X = points.x,
       Y = points.y,
       boundary = points.onBoundary;
-    const n = points.count;
+    // The points that are no chain end, as offsets from a0 and from a1 (4 numbers each).
+    if (this.offsets.length < 4 * points.count) this.offsets = new Float64Array(8 * points.count);
+    const U = this.offsets;
+    let n = 0;
+    for (let k = 0; k < points.count; k++) {
+      if (boundary[k]) continue;
+      U[4 * n] = X[k] - a0x;
+      U[4 * n + 1] = Y[k] - a0y;
+      U[4 * n + 2] = X[k] - a1x;
+      U[4 * n + 3] = Y[k] - a1y;
+      n++;
+    }
     let count = 0;
     for (let r = 0; r < n; r++) {
-      if (boundary[r]) continue;
-      const rx = X[r],
-        ry = Y[r];
       // orient(p, r, q) is affine along i': g0 at a0 and g1 at a1.
-      const r0x = rx - a0x,
-        r0y = ry - a0y,
-        r1x = rx - a1x,
-        r1y = ry - a1y;
+      const r0x = U[4 * r],
+        r0y = U[4 * r + 1],
+        r1x = U[4 * r + 2],
+        r1y = U[4 * r + 3];
       for (let q = r + 1; q < n; q++) {
-        if (boundary[q]) continue;
-        const qx = X[q],
-          qy = Y[q];
-        const g0 = r0x * (qy - a0y) - r0y * (qx - a0x);
-        const g1 = r1x * (qy - a1y) - r1y * (qx - a1x);
+        const g0 = r0x * U[4 * q + 1] - r0y * U[4 * q];
+        const g1 = r1x * U[4 * q + 3] - r1y * U[4 * q + 2];
         if ((g0 < 0 && g1 > 0) || (g0 > 0 && g1 < 0)) {
           if (count === this.at.length) this.at = grow(this.at);
           this.at[count++] = g0 / (g0 - g1);

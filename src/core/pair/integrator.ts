@@ -1,6 +1,6 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
-import { orient as orientIn } from '../orient';
+import { ORIENT_FILTER_BOUND, orient as orientIn } from '../orient';
 import { Breakpoints, FixedPoints } from './fixedPoints';
 import { ObstacleGatherer } from './obstacleGather';
 import { ObstaclePieces } from './obstaclePieces';
@@ -11,6 +11,7 @@ import { VisibleGaps } from './visibleGaps';
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
 const orient = orientIn,
+  FILTER_BOUND = ORIENT_FILTER_BOUND,
   crossedStrings = crossedStringsIn,
   pieceIntegral = pieceIntegralIn;
 
@@ -33,6 +34,10 @@ export class PairIntegrator {
   private readonly points: FixedPoints;
   private readonly breakpoints = new Breakpoints();
   private readonly gaps = new VisibleGaps();
+  /** The pair's trimmed ends a0, a1 (of i') and b0, b1 (of j'), x then y, sketch units. */
+  private readonly ends = new Float64Array(8);
+  /** The current piece of i': its middle, i's unit direction, its ends pa and pb, and pb - pa (x, y each). */
+  private readonly piece = new Float64Array(10);
 
   constructor(
     private readonly e: EdgeSet,
@@ -62,11 +67,22 @@ export class PairIntegrator {
       b1x = E.bx[j],
       b1y = E.by[j];
     // Front tests: a point is in front of an edge when it lies strictly left of a -> b.
-    const dB0 = orient(a0x, a0y, a1x, a1y, b0x, b0y);
-    const dB1 = orient(a0x, a0y, a1x, a1y, b1x, b1y);
+    // orient's float filter inline (see orient.ts); only a doubtful case calls out, by
+    // edge numbers, so that no coordinate is boxed (and + types its result as a number,
+    // else the filter's value is boxed to meet it).
+    let l = (a0y - b0y) * (a1x - b0x),
+      r = (a0x - b0x) * (a1y - b0y);
+    const dB0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(i, j, 0);
+    l = (a0y - b1y) * (a1x - b1x);
+    r = (a0x - b1x) * (a1y - b1y);
+    const dB1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(i, j, 1);
     if (dB0 <= 0 && dB1 <= 0) return 0;
-    const dA0 = orient(b0x, b0y, b1x, b1y, a0x, a0y);
-    const dA1 = orient(b0x, b0y, b1x, b1y, a1x, a1y);
+    l = (b0y - a0y) * (b1x - a0x);
+    r = (b0x - a0x) * (b1y - a0y);
+    const dA0 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(j, i, 0);
+    l = (b0y - a1y) * (b1x - a1x);
+    r = (b0x - a1x) * (b1y - a1y);
+    const dA1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(j, i, 1);
     if (dA0 <= 0 && dA1 <= 0) return 0;
     // Keep only the part of each edge in front of the other: nothing else can exchange.
     if (dB0 < 0) {
@@ -89,20 +105,43 @@ export class PairIntegrator {
     }
     const li = Math.sqrt((a1x - a0x) ** 2 + (a1y - a0y) ** 2);
     if (li === 0 || (b0x === b1x && b0y === b1y)) return 0;
+    // The trimmed ends go to the steps below through `ends`: a call that is not inlined
+    // boxes each number passed to it.
+    const P = this.ends;
+    P[0] = a0x;
+    P[1] = a0y;
+    P[2] = a1x;
+    P[3] = a1y;
+    P[4] = b0x;
+    P[5] = b0y;
+    P[6] = b1x;
+    P[7] = b1y;
 
     // Every sight line from i' to j' lies in H = hull(i', j') = a0 a1 b0 b1 (anticlockwise,
     // since j's front faces i). Only obstructions inside H can block.
-    this.region.set(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
+    this.region.set(P);
     if (this.gatherer.gather(i, j)) return 0;
-    if (this.pieces.count === 0 && this.pieces.wholeCount === 0)
-      return crossedStrings(a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
-    this.points.build(this.pieces, a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y);
-    this.breakpoints.find(this.points, a0x, a0y, a1x, a1y);
-    return this.integrate(a0x, a0y, a1x, a1y, li);
+    if (this.pieces.count === 0 && this.pieces.wholeCount === 0) return crossedStrings(P);
+    this.points.build(this.pieces, P);
+    this.breakpoints.find(this.points, P);
+    return this.integrate(li);
+  }
+
+  /** orient(a of edge e, b of edge e, corner `end` (0: a, 1: b) of edge f), from the edge arrays. */
+  private orientAt(e: number, f: number, end: number): number {
+    const E = this.e;
+    return end === 0
+      ? orient(E.ax[e], E.ay[e], E.bx[e], E.by[e], E.ax[f], E.ay[f])
+      : orient(E.ax[e], E.ay[e], E.bx[e], E.by[e], E.bx[f], E.by[f]);
   }
 
   /** Sum of the piece integrals between consecutive breakpoints of i' = a0-a1 (length li). */
-  private integrate(a0x: number, a0y: number, a1x: number, a1y: number, li: number): number {
+  private integrate(li: number): number {
+    const P = this.ends;
+    const a0x = P[0],
+      a0y = P[1],
+      a1x = P[2],
+      a1y = P[3];
     const dxI = a1x - a0x,
       dyI = a1y - a0y;
     const tx = dxI / li,
@@ -112,24 +151,28 @@ export class PairIntegrator {
     const gaps = this.gaps,
       points = this.points;
     gaps.prepare(points);
+    // The piece goes to the gaps and the integral in `Q` (see `piece`), not as
+    // numbers: a call that is not inlined boxes each number passed to it.
+    const Q = this.piece;
+    Q[2] = tx;
+    Q[3] = ty;
     let total = 0;
     let sa = 0;
     for (let k = 0; k <= nBreaks; k++) {
       const sb = k < nBreaks ? at[k] : 1;
       if (sb <= sa) continue;
       const sm = 0.5 * (sa + sb);
-      gaps.find(points, a0x + sm * dxI, a0y + sm * dyI, tx, ty);
+      Q[0] = a0x + sm * dxI;
+      Q[1] = a0y + sm * dyI;
+      gaps.find(points, Q);
       if (gaps.count > 0) {
-        total += pieceIntegral(
-          points,
-          gaps,
-          a0x + sa * dxI,
-          a0y + sa * dyI,
-          a0x + sb * dxI,
-          a0y + sb * dyI,
-          (sb - sa) * dxI,
-          (sb - sa) * dyI,
-        );
+        Q[4] = a0x + sa * dxI;
+        Q[5] = a0y + sa * dyI;
+        Q[6] = a0x + sb * dxI;
+        Q[7] = a0y + sb * dyI;
+        Q[8] = (sb - sa) * dxI;
+        Q[9] = (sb - sa) * dyI;
+        total += pieceIntegral(points, gaps, Q);
       }
       sa = sb;
     }

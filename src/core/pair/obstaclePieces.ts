@@ -1,3 +1,6 @@
+import type { EdgeSet } from '../edges';
+import type { SegmentClip } from './viewRegion';
+
 // The obstruction pieces of one edge pair: edges (or their parts) clipped to the view
 // region H, and the convex bodies lying wholly inside H (which enter the view only by
 // their silhouette corners). Filled by ObstacleGatherer, read by FixedPoints. Coordinates
@@ -51,24 +54,33 @@ export class ObstaclePieces {
     return this.pieceOfEdge[edge];
   }
 
-  keep(
-    edge: number,
-    px: number,
-    py: number,
-    qx: number,
-    qy: number,
-    startInside: boolean,
-    endInside: boolean,
-    startSide = -1,
-    endSide = -1,
-  ): void {
+  /** Keep all of edge `edge` of E (both corners inside H). */
+  keepWhole(edge: number, E: EdgeSet): void {
+    const s = this.add(edge, true, true, -1, -1);
+    this.px[s] = E.ax[edge];
+    this.py[s] = E.ay[edge];
+    this.qx[s] = E.bx[edge];
+    this.qy[s] = E.by[edge];
+  }
+
+  /** Keep the piece of edge `edge` of E that clip `c` left (ViewRegion.clipEdge). */
+  keepClipped(edge: number, E: EdgeSet, c: SegmentClip): void {
+    const s = this.add(edge, c.startInside, c.endInside, c.startSide, c.endSide);
+    const px = E.ax[edge],
+      py = E.ay[edge],
+      qx = E.bx[edge],
+      qy = E.by[edge];
+    this.px[s] = px + c.t0 * (qx - px);
+    this.py[s] = py + c.t0 * (qy - py);
+    this.qx[s] = px + c.t1 * (qx - px);
+    this.qy[s] = py + c.t1 * (qy - py);
+  }
+
+  /** A new piece of `edge` with these flags; returns its index (the caller writes its ends). */
+  private add(edge: number, startInside: boolean, endInside: boolean, startSide: number, endSide: number): number {
     const s = this.count;
     if (s === this.edge.length) this.grow();
     this.edge[s] = edge;
-    this.px[s] = px;
-    this.py[s] = py;
-    this.qx[s] = qx;
-    this.qy[s] = qy;
     this.startInside[s] = startInside ? 1 : 0;
     this.endInside[s] = endInside ? 1 : 0;
     this.startSide[s] = startSide;
@@ -77,6 +89,7 @@ export class ObstaclePieces {
     this.stamp[edge] = this.pair;
     this.pieceOfEdge[edge] = s;
     this.count = s + 1;
+    return s;
   }
 
   /**
@@ -116,10 +129,11 @@ export class ObstaclePieces {
    * the other: it cuts H in two, i' on one side and j' on the other, so every sight
    * line crosses it and the pair exchanges nothing. Exact: the sides come from exact
    * signs, and chains join at corners strictly inside H. Returns the chain's first
-   * piece, or -1 when there is none. `nextEdge`: EdgeSet.nextEdge.
+   * piece, or -1 when there is none. `nextEdge`: EdgeSet.nextEdge; only chains that
+   * start at piece `from` or later are tried.
    */
-  blockingChain(nextEdge: Int32Array): number {
-    for (let s = 0; s < this.count; s++) {
+  blockingChain(nextEdge: Int32Array, from = 0): number {
+    for (let s = from; s < this.count; s++) {
       const from = this.startSide[s];
       if (from !== 1 && from !== 3) continue;
       let cur = s;

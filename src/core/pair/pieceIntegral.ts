@@ -15,18 +15,16 @@ const distanceChange = distanceChangeIn;
 /**
  * Sum over the visible gaps of 1/2 the integral over [pa, pb] of (sin b_hi - sin b_lo):
  * the piece's share of L_i F_ij, sketch units (length x dimensionless factor).
- * (dx, dy) = pb - pa, computed directly so that a short piece loses no digits.
+ * pa = (Q[4], Q[5]), pb = (Q[6], Q[7]), and (dx, dy) = (Q[8], Q[9]) = pb - pa,
+ * computed directly so that a short piece loses no digits.
  */
-export function pieceIntegral(
-  points: FixedPoints,
-  gaps: VisibleGaps,
-  pax: number,
-  pay: number,
-  pbx: number,
-  pby: number,
-  dx: number,
-  dy: number,
-): number {
+export function pieceIntegral(points: FixedPoints, gaps: VisibleGaps, Q: Float64Array): number {
+  const pax = Q[4],
+    pay = Q[5],
+    pbx = Q[6],
+    pby = Q[7],
+    dx = Q[8],
+    dy = Q[9];
   const X = points.x,
     Y = points.y,
     LO = gaps.lo,
@@ -47,18 +45,17 @@ export function pieceIntegral(
 /**
  * L_i F_ij of an unobstructed pair, sketch units: crossed minus uncrossed strings over
  * 2 (Hottel), written as distance changes along a0-a1 so that a short edge loses no
- * digits. b0-b1 faces a0-a1 (a0 a1 b0 b1 anticlockwise).
+ * digits. b0-b1 faces a0-a1 (a0 a1 b0 b1 anticlockwise); P = [a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y].
  */
-export function crossedStrings(
-  a0x: number,
-  a0y: number,
-  a1x: number,
-  a1y: number,
-  b0x: number,
-  b0y: number,
-  b1x: number,
-  b1y: number,
-): number {
+export function crossedStrings(P: Float64Array): number {
+  const a0x = P[0],
+    a0y = P[1],
+    a1x = P[2],
+    a1y = P[3],
+    b0x = P[4],
+    b0y = P[5],
+    b1x = P[6],
+    b1y = P[7];
   const dx = a1x - a0x,
     dy = a1y - a0y;
   return (

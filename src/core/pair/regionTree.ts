@@ -16,19 +16,22 @@ const SIDE_ORDER = SIDE_ORDER_IN;
 const FAN = 8;
 
 export class RegionTree {
-  /** Node boxes, 4 per node (minX, minY, maxX, maxY); leaves first, the root last. */
+  /** Node boxes, 4 per node (centre x, centre y, half width, half height); leaves first, the root last. */
   private readonly box: Float64Array;
   /** Children of node k: [first, end) of item ids (a leaf) or node ids (an inner node). */
   private readonly first: Int32Array;
   private readonly end: Int32Array;
   private readonly leafCount: number;
-  /** Item ids in leaf order. */
+  /** Item ids in leaf order, and their boxes in that order (4 numbers each, as node boxes). */
   private readonly order: Int32Array;
+  private readonly leafBox: Float64Array;
   private stack = new Int32Array(64);
-  private readonly sides = new Float64Array(4 * SIDE_STRIDE);
+  private readonly sides = new Float64Array(4 + 4 * SIDE_STRIDE);
+  /** Largest coordinate magnitude of the boxes (scales the float margin). */
+  private readonly extent: number;
 
-  /** `itemBox`: 4 numbers per item (minX, minY, maxX, maxY), sketch units; kept, not copied. */
-  constructor(private readonly itemBox: Float64Array) {
+  /** `itemBox`: 4 numbers per item (minX, minY, maxX, maxY), sketch units. */
+  constructor(itemBox: Float64Array) {
     const boxes = itemBox;
     const n = boxes.length >> 2;
     // Leaf order: items sorted along a Z-order curve of their centres, so a leaf holds neighbours.
@@ -51,6 +54,8 @@ export class RegionTree {
       code[k] = interleave(cx, cy);
     }
     this.order = Int32Array.from({ length: n }, (_, k) => k).sort((a, b) => code[a] - code[b] || a - b);
+    this.leafBox = new Float64Array(4 * n);
+    for (let m = 0; m < n; m++) this.leafBox.set(boxes.subarray(4 * this.order[m], 4 * this.order[m] + 4), 4 * m);
     // Levels bottom-up: leaves group FAN items, inner nodes group FAN nodes.
     const first: number[] = [],
       end: number[] = [],
@@ -78,7 +83,11 @@ export class RegionTree {
       levelStart = levelEnd;
       levelEnd = first.length;
     }
-    this.box = Float64Array.from(box);
+    this.box = centred(Float64Array.from(box));
+    centred(this.leafBox);
+    let extent = 0;
+    for (let k = 0; k < boxes.length; k++) extent = Math.max(extent, Math.abs(boxes[k]));
+    this.extent = extent;
     this.first = Int32Array.from(first);
     this.end = Int32Array.from(end);
   }
@@ -91,66 +100,98 @@ export class RegionTree {
   search(region: ViewRegion, visit: (id: number) => boolean): void {
     const nodes = this.first.length;
     if (nodes === 0) return;
-    loadSides(region, this.sides);
+    const S = this.sides;
+    const sideCount = loadSides(region, this.extent, S);
+    const box = this.box,
+      leafBox = this.leafBox,
+      first = this.first,
+      end = this.end,
+      order = this.order,
+      leafCount = this.leafCount;
+    let stack = this.stack;
     let top = 0;
-    this.stack[top++] = nodes - 1;
+    stack[top++] = nodes - 1;
     while (top > 0) {
-      const k = this.stack[--top];
-      if (!boxMayMeet(region, this.sides, this.box, 4 * k)) continue;
-      if (k < this.leafCount) {
-        for (let m = this.first[k]; m < this.end[k]; m++) {
-          const item = this.order[m];
-          if (boxMayMeet(region, this.sides, this.itemBox, 4 * item) && visit(item)) return;
+      const k = stack[--top];
+      if (!boxMayMeet(box, 4 * k, S, sideCount)) continue;
+      if (k < leafCount) {
+        for (let m = first[k]; m < end[k]; m++) {
+          if (boxMayMeet(leafBox, 4 * m, S, sideCount) && visit(order[m])) return;
         }
         continue;
       }
-      if (top + FAN > this.stack.length) {
-        const grown = new Int32Array(2 * this.stack.length);
-        grown.set(this.stack);
-        this.stack = grown;
+      if (top + FAN > stack.length) {
+        const grown = new Int32Array(2 * stack.length);
+        grown.set(stack);
+        this.stack = stack = grown;
       }
       // Push in reverse so children are taken in their stored order.
-      for (let c = this.end[k] - 1; c >= this.first[k]; c--) this.stack[top++] = c;
+      for (let c = end[k] - 1; c >= first[k]; c--) stack[top++] = c;
     }
   }
 }
 
-/** Per side of the region, 6 numbers: x0, y0, dx, dy, margin, and 1 if the side has length. */
-const SIDE_STRIDE = 6;
+/**
+ * The region for box tests: its bounding box as centre and half sizes, widened by a
+ * margin (4 numbers), then per side of nonzero length its inward normal (a, b) and
+ * offset c, the margin folded in: a box lies surely outside the side when
+ * a x + b y + |a| w + |b| h + c < 0 at its centre (x, y), half sizes (w, h).
+ */
+const SIDE_STRIDE = 3;
 
-/** The region's sides in SIDE_ORDER, as loaded for box tests (into `out`, 4 x SIDE_STRIDE). */
-function loadSides(R: ViewRegion, out: Float64Array): void {
+/** Load the region's box and sides (in SIDE_ORDER) into `out`; returns the number of sides. */
+function loadSides(R: ViewRegion, extent: number, out: Float64Array): number {
+  // Far above the rounding of the sums below (sketch extent x 1e-15), so only boxes
+  // surely outside are skipped; skipping fewer costs only time.
+  const boxMargin = 1e-12 * extent;
+  out[0] = 0.5 * (R.minX + R.maxX);
+  out[1] = 0.5 * (R.minY + R.maxY);
+  out[2] = 0.5 * (R.maxX - R.minX) + boxMargin;
+  out[3] = 0.5 * (R.maxY - R.minY) + boxMargin;
+  let count = 0;
   for (let step = 0; step < 4; step++) {
-    const k = SIDE_ORDER[step],
-      at = SIDE_STRIDE * step;
-    out[at] = R.sx[k];
-    out[at + 1] = R.sy[k];
-    out[at + 2] = R.ex[k] - R.sx[k];
-    out[at + 3] = R.ey[k] - R.sy[k];
-    // R.tol is 1e-14 x side length x sketch extent; d below rounds to about 1e-15 of
-    // that product, so 100 x R.tol skips a box only when it is surely outside.
-    out[at + 4] = 100 * R.tol[k];
-    out[at + 5] = R.on[k];
+    const k = SIDE_ORDER[step];
+    if (!R.on[k]) continue;
+    const at = 4 + SIDE_STRIDE * count++;
+    const a = R.sy[k] - R.ey[k],
+      b = R.ex[k] - R.sx[k];
+    // R.tol is 1e-14 x side length x sketch extent; the sum below rounds to about
+    // 1e-15 of that product, so 100 x R.tol skips a box only when it is surely outside.
+    out[at] = a;
+    out[at + 1] = b;
+    out[at + 2] = 100 * R.tol[k] - (a * R.sx[k] + b * R.sy[k]);
   }
+  return count;
 }
 
-/** False when box B[at..at+4) lies surely outside the region's bounding box or one of its sides. */
-function boxMayMeet(R: ViewRegion, S: Float64Array, B: Float64Array, at: number): boolean {
-  const bx0 = B[at],
-    by0 = B[at + 1],
-    bx1 = B[at + 2],
-    by1 = B[at + 3];
-  if (bx0 > R.maxX || by0 > R.maxY || bx1 < R.minX || by1 < R.minY) return false;
-  for (let s = 0; s < 4 * SIDE_STRIDE; s += SIDE_STRIDE) {
-    if (S[s + 5] === 0) continue;
-    const dx = S[s + 2],
-      dy = S[s + 3];
-    // The box corner farthest inside the side (inward normal (-dy, dx)).
-    const x = dy > 0 ? bx0 : bx1,
-      y = dx > 0 ? by1 : by0;
-    if (dx * (y - S[s + 1]) - dy * (x - S[s]) < -S[s + 4]) return false;
+/** False when box B[at..at+4) (centre, half sizes) lies surely outside the region's box or one of its sides. */
+function boxMayMeet(B: Float64Array, at: number, S: Float64Array, sideCount: number): boolean {
+  const x = B[at],
+    y = B[at + 1],
+    w = B[at + 2],
+    h = B[at + 3];
+  if (Math.abs(x - S[0]) > w + S[2] || Math.abs(y - S[1]) > h + S[3]) return false;
+  for (let s = 4; s < 4 + sideCount * SIDE_STRIDE; s += SIDE_STRIDE) {
+    const a = S[s],
+      b = S[s + 1];
+    if (a * x + b * y + Math.abs(a) * w + Math.abs(b) * h + S[s + 2] < 0) return false;
   }
   return true;
+}
+
+/** Rewrite boxes (minX, minY, maxX, maxY) in place as (centre x, centre y, half width, half height); returns B. */
+function centred(B: Float64Array): Float64Array {
+  for (let at = 0; at < B.length; at += 4) {
+    const x0 = B[at],
+      y0 = B[at + 1],
+      x1 = B[at + 2],
+      y1 = B[at + 3];
+    B[at] = 0.5 * (x0 + x1);
+    B[at + 1] = 0.5 * (y0 + y1);
+    B[at + 2] = 0.5 * (x1 - x0);
+    B[at + 3] = 0.5 * (y1 - y0);
+  }
+  return B;
 }
 
 /** Grow box b (minX, minY, maxX, maxY) by item m of flat boxes B. */

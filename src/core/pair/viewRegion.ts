@@ -1,8 +1,10 @@
-import { orient as orientIn } from '../orient';
+import type { EdgeSet } from '../edges';
+import { ORIENT_FILTER_BOUND, orient as orientIn } from '../orient';
 
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
-const orient = orientIn;
+const orient = orientIn,
+  FILTER_BOUND = ORIENT_FILTER_BOUND;
 
 // The view region H of an edge pair: every sight line from i' to j' lies in the
 // convex quadrilateral a0 a1 b0 b1 (anticlockwise), whose sides are i' (side 0), the
@@ -54,12 +56,23 @@ export class ViewRegion {
   /** `extent`: largest coordinate magnitude of the (shifted) sketch, scales float margins. */
   constructor(private readonly extent: number) {}
 
-  /** H for emitting piece a0-a1 and receiving piece b0-b1 (j' faces i', so a0 a1 b0 b1 is anticlockwise). */
-  set(a0x: number, a0y: number, a1x: number, a1y: number, b0x: number, b0y: number, b1x: number, b1y: number): void {
-    this.side(0, a0x, a0y, a1x, a1y);
-    this.side(1, a1x, a1y, b0x, b0y);
-    this.side(2, b0x, b0y, b1x, b1y);
-    this.side(3, b1x, b1y, a0x, a0y);
+  /**
+   * H for emitting piece a0-a1 and receiving piece b0-b1 (j' faces i', so a0 a1 b0 b1
+   * is anticlockwise), given as P = [a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y].
+   */
+  set(P: Float64Array): void {
+    const a0x = P[0],
+      a0y = P[1],
+      a1x = P[2],
+      a1y = P[3],
+      b0x = P[4],
+      b0y = P[5],
+      b1x = P[6],
+      b1y = P[7];
+    this.side(0, P, 0, 2);
+    this.side(1, P, 2, 4);
+    this.side(2, P, 4, 6);
+    this.side(3, P, 6, 0);
     this.minX = Math.min(a0x, a1x, b0x, b1x);
     this.minY = Math.min(a0y, a1y, b0y, b1y);
     this.maxX = Math.max(a0x, a1x, b0x, b1x);
@@ -67,7 +80,12 @@ export class ViewRegion {
     this.normalReady = false;
   }
 
-  private side(k: number, x0: number, y0: number, x1: number, y1: number): void {
+  /** Side k from point (P[s], P[s + 1]) to point (P[e], P[e + 1]). */
+  private side(k: number, P: Float64Array, s: number, e: number): void {
+    const x0 = P[s],
+      y0 = P[s + 1],
+      x1 = P[e],
+      y1 = P[e + 1];
     this.sx[k] = x0;
     this.sy[k] = y0;
     this.ex[k] = x1;
@@ -115,20 +133,15 @@ export class ViewRegion {
   }
 
   /**
-   * Clip segment p-q to H with exact orientation tests. Returns true, with the kept
-   * piece in `out`, when the segment passes through H's interior; false when it lies
+   * Clip edge e of E, p-q, to H with exact orientation tests. Returns true, with the
+   * kept piece in `out`, when the edge passes through H's interior; false when it lies
    * outside or along the boundary (it then blocks no sight line).
    */
-  clipSegment(px: number, py: number, qx: number, qy: number, out: SegmentClip): boolean {
-    let t0 = 0,
-      t1 = 1;
-    let pIn = true,
-      qIn = true;
-    // Sides that p (q) is not strictly inside, and the last such side.
-    let pOut = 0,
-      qOut = 0,
-      pSide = -1,
-      qSide = -1;
+  clipEdge(E: EdgeSet, e: number, out: SegmentClip): boolean {
+    const px = E.ax[e],
+      py = E.ay[e],
+      qx = E.bx[e],
+      qy = E.by[e];
     // Float pass first, the side strings first: reject cheaply, and mark the sides that
     // hold both ends surely inside (they cannot cut the segment); the margin is far
     // above the rounding of the cross products. Exact signs only for the other sides.
@@ -149,14 +162,50 @@ export class ViewRegion {
       if (fp < -tol && fq < -tol) return false;
       if (!(fp > tol && fq > tol)) doubtful |= 1 << k;
     }
+    return this.clipExact(E, e, doubtful, out);
+  }
+
+  /** orient(start of side k, its end, corner `end` (0: a, 1: b) of edge e of E). */
+  private exactOrient(k: number, E: EdgeSet, e: number, end: number): number {
+    const x = end === 0 ? E.ax[e] : E.bx[e],
+      y = end === 0 ? E.ay[e] : E.by[e];
+    return orient(this.sx[k], this.sy[k], this.ex[k], this.ey[k], x, y);
+  }
+
+  /**
+   * clipEdge with the float pass done by the caller: `doubtful` has bit k set for
+   * each side k (of length) that may not hold both ends strictly inside; the other
+   * sides must hold them so (a side tested in vain changes nothing).
+   */
+  clipExact(E: EdgeSet, e: number, doubtful: number, out: SegmentClip): boolean {
+    const px = E.ax[e],
+      py = E.ay[e],
+      qx = E.bx[e],
+      qy = E.by[e];
+    let t0 = 0,
+      t1 = 1;
+    let pIn = true,
+      qIn = true;
+    // Sides that p (q) is not strictly inside, and the last such side.
+    let pOut = 0,
+      qOut = 0,
+      pSide = -1,
+      qSide = -1;
     for (let k = 0; k < 4; k++) {
       if (!(doubtful & (1 << k))) continue;
       const x0 = this.sx[k],
         y0 = this.sy[k],
         x1 = this.ex[k],
         y1 = this.ey[k];
-      const dP = orient(x0, y0, x1, y1, px, py);
-      const dQ = orient(x0, y0, x1, y1, qx, qy);
+      // orient(side start, side end, corner), its float filter inline (see orient.ts):
+      // only a doubtful case calls out, with no number to box (the + types the call's
+      // result as a number, else the filter's value is boxed to meet it).
+      let l = (y0 - py) * (x1 - px),
+        r = (x0 - px) * (y1 - py);
+      const dP = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.exactOrient(k, E, e, 0);
+      l = (y0 - qy) * (x1 - qx);
+      r = (x0 - qx) * (y1 - qy);
+      const dQ = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.exactOrient(k, E, e, 1);
       if (dP <= 0 && dQ <= 0) return false;
       if (dP <= 0) {
         pIn = false;

@@ -27,10 +27,15 @@ export class VisibleGaps {
   private coverHint = -1;
 
   /**
-   * Find the gaps seen from point (px, py) (sketch units) on i, whose unit direction
-   * is (tx, ty), after prepare(points) for this pair. Fixed points 0 and 1 are j's ends b0 (high end) and b1 (low end).
+   * Find the gaps seen from point p = (Q[0], Q[1]) (sketch units) on i, whose unit
+   * direction is (Q[2], Q[3]), after prepare(points) for this pair. Fixed points 0 and
+   * 1 are j's ends b0 (high end) and b1 (low end).
    */
-  find(points: FixedPoints, px: number, py: number, tx: number, ty: number): void {
+  find(points: FixedPoints, Q: Float64Array): void {
+    const px = Q[0],
+      py = Q[1],
+      tx = Q[2],
+      ty = Q[3];
     const X = points.x,
       Y = points.y;
     const nChains = points.chainCount,
@@ -44,15 +49,24 @@ export class VisibleGaps {
     // chain spans it gives the same (empty) answer as the sweep below, so the hint
     // changes no result.
     const hint = this.coverHint;
+    // The hint chain's extremes, kept for the sweep when it does not cover j.
+    let hintLo = Infinity,
+      hintHi = -Infinity,
+      hintLoP = -1,
+      hintHiP = -1;
     if (hint >= 0 && hint < nChains) {
-      let lo = Infinity,
-        hi = -Infinity;
       for (let k = start[hint]; k < start[hint + 1]; k++) {
         const kk = directionKey(X[k] - px, Y[k] - py, tx, ty);
-        if (kk < lo) lo = kk;
-        if (kk > hi) hi = kk;
+        if (kk < hintLo) {
+          hintLo = kk;
+          hintLoP = k;
+        }
+        if (kk > hintHi) {
+          hintHi = kk;
+          hintHiP = k;
+        }
       }
-      if (lo <= jLo && hi >= jHi) return;
+      if (hintLo <= jLo && hintHi >= jHi) return;
     }
     const loKey = this.loKey,
       hiKey = this.hiKey,
@@ -67,15 +81,22 @@ export class VisibleGaps {
         hi = -Infinity,
         loP = -1,
         hiP = -1;
-      for (let k = from; k < to; k++) {
-        const kk = directionKey(X[k] - px, Y[k] - py, tx, ty);
-        if (kk < lo) {
-          lo = kk;
-          loP = k;
-        }
-        if (kk > hi) {
-          hi = kk;
-          hiP = k;
+      if (g === hint) {
+        lo = hintLo;
+        hi = hintHi;
+        loP = hintLoP;
+        hiP = hintHiP;
+      } else {
+        for (let k = from; k < to; k++) {
+          const kk = directionKey(X[k] - px, Y[k] - py, tx, ty);
+          if (kk < lo) {
+            lo = kk;
+            loP = k;
+          }
+          if (kk > hi) {
+            hi = kk;
+            hiP = k;
+          }
         }
       }
       if (hi <= jLo || lo >= jHi) continue;
