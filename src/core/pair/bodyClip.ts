@@ -130,7 +130,29 @@ export class BodyClipper {
     if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return false;
     const rIn = (b === this.bodyI || b === this.bodyJ ? ob.bodyRIn[b] : ob.bodyRHull[b]) * (1 - 1e-9);
     if (!(rIn > 0) || !R.on[1] || !R.on[3]) return false;
-    return R.discMeetsSide(1, ob.bodyCx[b], ob.bodyCy[b], rIn) && R.discMeetsSide(3, ob.bodyCx[b], ob.bodyCy[b], rIn);
+    return this.discMeetsSide(1, b) && this.discMeetsSide(3, b);
+  }
+
+  /**
+   * Does body b's blocking disc (as cutsView takes it) meet side k of H? Float test
+   * on the nearest point of the side. Read by body index: numbers passed to a call the
+   * engine does not inline are boxed.
+   */
+  private discMeetsSide(k: number, b: number): boolean {
+    const ob = this.ob,
+      R = this.region;
+    const r = (b === this.bodyI || b === this.bodyJ ? ob.bodyRIn[b] : ob.bodyRHull[b]) * (1 - 1e-9);
+    const cx = ob.bodyCx[b],
+      cy = ob.bodyCy[b];
+    const x0 = R.sx[k],
+      y0 = R.sy[k];
+    const dx = R.ex[k] - x0,
+      dy = R.ey[k] - y0;
+    let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
+    t = t < 0 ? 0 : t > 1 ? 1 : t;
+    const ux = cx - (x0 + t * dx),
+      uy = cy - (y0 + t * dy);
+    return ux * ux + uy * uy < r * r;
   }
 
   /**
@@ -155,7 +177,9 @@ export class BodyClipper {
     for (let step = 0; step < 4; step++) {
       const k = SIDE_ORDER[step]; // the side strings reject most bodies, so they go first
       if (!R.on[k]) continue;
-      const dist = R.signedDistance(k, cx, cy);
+      // Signed distance of the centre from side k, positive inside H (written out here:
+      // a call's numbers, arguments and result, would be boxed).
+      const dist = ((R.ex[k] - R.sx[k]) * (cy - R.sy[k]) - (R.ey[k] - R.sy[k]) * (cx - R.sx[k])) * R.invLen[k];
       this.centreDist[k] = dist;
       if (dist < -r - margin) return OUTSIDE;
       if (dist < r + margin) this.crossing[crossCount++] = k;

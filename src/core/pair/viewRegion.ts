@@ -105,31 +105,11 @@ export class ViewRegion {
     return this.normal;
   }
 
-  /** Signed distance (sketch units) of (x, y) from side k, positive inside H. */
-  signedDistance(k: number, x: number, y: number): number {
-    const dx = this.ex[k] - this.sx[k],
-      dy = this.ey[k] - this.sy[k];
-    return (dx * (y - this.sy[k]) - dy * (x - this.sx[k])) * this.invLen[k];
-  }
-
   /** Where (x, y) lies against side k, with the float margin `tol[k]`. */
   place(k: number, x: number, y: number): SidePlace {
     const d = (this.ex[k] - this.sx[k]) * (y - this.sy[k]) - (this.ey[k] - this.sy[k]) * (x - this.sx[k]);
     const tol = this.tol[k];
     return d > tol ? SURELY_INSIDE : d < -tol ? SURELY_OUTSIDE : UNSURE;
-  }
-
-  /** Does the disc of radius r (sketch units) about (cx, cy) meet side k? Float test. */
-  discMeetsSide(k: number, cx: number, cy: number, r: number): boolean {
-    const x0 = this.sx[k],
-      y0 = this.sy[k];
-    const dx = this.ex[k] - x0,
-      dy = this.ey[k] - y0;
-    let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
-    t = t < 0 ? 0 : t > 1 ? 1 : t;
-    const ux = cx - (x0 + t * dx),
-      uy = cy - (y0 + t * dy);
-    return ux * ux + uy * uy < r * r;
   }
 
   /**
