@@ -117,17 +117,10 @@ export function packRows(pairs: EdgePairs, rows: ArrayLike<number>, out?: Float6
   return packed;
 }
 
-// Rows and columns per tile of unpackRows: the column writes F_ji of one tile
-// (UNPACK_COLUMNS rows of F, a cache line or two each) stay in cache while
-// UNPACK_ROWS rows are read, instead of one cache miss per pair (n = 1012: 8 MB).
-const UNPACK_ROWS = 32;
-const UNPACK_COLUMNS = 256;
-
 /**
  * Write packed rows (see `packRows`) into an n x n edge matrix (row-major, row =
  * from): F_ij = g / L_i and F_ji = g / L_j for every g > 0; other entries are left
- * as they are (a fresh matrix holds 0 there). Dimensionless. Done tile by tile;
- * every entry is the same quotient whatever the order.
+ * as they are (a fresh matrix holds 0 there). Dimensionless.
  */
 export function unpackRows(
   length: Float64Array,
@@ -137,31 +130,17 @@ export function unpackRows(
   from = 0,
 ): void {
   const n = length.length;
-  const base = new Float64Array(UNPACK_ROWS); // packed index of (i, j) is base + j for j > i
   let at = from;
-  for (let k0 = 0; k0 < rows.length; k0 += UNPACK_ROWS) {
-    const k1 = Math.min(rows.length, k0 + UNPACK_ROWS);
-    for (let k = k0; k < k1; k++) {
-      const i = rows[k];
-      const self = packed[at];
-      if (self > 0) F[i * n + i] = self / length[i];
-      base[k - k0] = at - i;
-      at += n - i;
-    }
-    for (let j0 = 0; j0 < n; j0 += UNPACK_COLUMNS) {
-      const j1 = Math.min(n, j0 + UNPACK_COLUMNS);
-      for (let k = k0; k < k1; k++) {
-        const i = rows[k];
-        const Li = length[i];
-        const b = base[k - k0];
-        const ri = i * n;
-        for (let j = Math.max(j0, i + 1); j < j1; j++) {
-          const g = packed[b + j];
-          if (g > 0) {
-            F[ri + j] = g / Li;
-            F[j * n + i] = g / length[j];
-          }
-        }
+  for (let k = 0; k < rows.length; k++) {
+    const i = rows[k];
+    const Li = length[i];
+    const self = packed[at++];
+    if (self > 0) F[i * n + i] = self / Li;
+    for (let j = i + 1; j < n; j++) {
+      const g = packed[at++];
+      if (g > 0) {
+        F[i * n + j] = g / Li;
+        F[j * n + i] = g / length[j];
       }
     }
   }

@@ -2,9 +2,9 @@
 // as one answer (summed to surfaces later, see core/packedSurfaces.ts), or their
 // surface sums added in ascending row order, so the result is the same bit for
 // bit whatever the number of workers.
-import { unpackRows, type PackedRows } from '../core/pairRows';
+import type { PackedRows } from '../core/pairRows';
 import { SurfaceAccumulator } from '../core/surfaceRows';
-import type { EdgeViewFactors, RowsAnswer, ViewFactorAnswer, ViewFactorJob } from './job';
+import type { RowsAnswer, ViewFactorAnswer, ViewFactorJob } from './job';
 
 /** One job's answer from the answers for its row sets (every row exactly once). */
 export function assembleAnswer(job: ViewFactorJob, edgeCount: number, parts: readonly RowsAnswer[]): ViewFactorAnswer {
@@ -41,12 +41,4 @@ export function assembleAnswer(job: ViewFactorJob, edgeCount: number, parts: rea
   }
   if (count !== n) throw new Error(`the workers answered ${count} of ${n} rows`);
   return { edgeCount: n, edgeLength, rows, closed };
-}
-
-/** The edges x edges view-factor matrix of an edge answer (row-major, row = from; dimensionless). */
-export function edgeMatrixOf(answer: EdgeViewFactors): Float64Array {
-  const n = answer.edgeCount;
-  const F = new Float64Array(n * n);
-  answer.rows.sets.forEach((set, p) => unpackRows(answer.edgeLength, set, answer.rows.packed[p], F));
-  return F;
 }

@@ -32,7 +32,7 @@ export interface EdgeViewFactors {
   /**
    * Exchange lengths g_ij (sketch units) of every pair, packed row by row as the
    * workers computed them: F_ij = g_ij / L_i. Kept packed (half the numbers, no
-   * fresh edges^2 matrix per job); edgeMatrixOf (assemble.ts) unpacks it.
+   * fresh edges^2 matrix per job); unpackRows (core pairRows.ts) makes the matrix of it.
    */
   rows: PackedRows;
   /** True when the sketch has an enclosure, so every row should sum to one. */

@@ -126,8 +126,8 @@ describe('rows shared over workers', () => {
     );
   });
 
-  it('unpacking in tiles writes what a plain pair-by-pair loop writes, over several tiles of rows and columns', () => {
-    // n = 700 spans three column tiles and, per part, many row tiles; packed values
+  it('unpackRows writes what a plain pair-by-pair loop writes, over many rows in several parts', () => {
+    // n = 700 edges in three parts; packed values
     // include zeros (pairs that do not see each other) and the lengths differ per edge.
     const n = 700;
     const length = Float64Array.from({ length: n }, (_, i) => 0.5 + ((i * 37) % 101) / 50);

@@ -17,7 +17,7 @@ import { surfaceIndex } from '../../src/document/surfaceIndex';
 import { demoSketch } from '../../src/state/demo';
 import { regularPolygon } from '../../src/state/tools/quickShapes';
 import type { SketchFile } from '../../src/state/sketchFile';
-import { edgeMatrixOf } from '../../src/worker/assemble';
+import { edgeMatrixOf } from './edgeMatrix';
 
 /** The demo oven with each round tube as a 12-sided polygon, for the polygon job. */
 function polygonDemo(): SketchFile {

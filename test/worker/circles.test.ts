@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { computeEdgeViewFactors } from '../../src/worker/api';
 import { isSurfaceAnswer, jobFromPolygons } from '../../src/worker/job';
 import { geometryKey, scaleBetween } from '../../src/state/results/geometry';
-import { edgeMatrixOf } from '../../src/worker/assemble';
+import { edgeMatrixOf } from './edgeMatrix';
 
 // Circles travel in the view-factor job: their arcs follow every polygon edge in the
 // edge matrix, and the geometry key changes when a circle moves but not when the

@@ -18,7 +18,7 @@ import {
 import { MAX_POOL_SIZE, poolHandle, poolSize, workersForJob, type RowWorker } from '../../src/worker/pool';
 import { aggregateToSurfaces } from '../../src/core/surfaces';
 import { mixedSceneArb, edgeCountOf } from '../core/arc/arbitraries';
-import { edgeMatrixOf } from '../../src/worker/assemble';
+import { edgeMatrixOf } from './edgeMatrix';
 
 const bytes = (a: Float64Array) => new Uint8Array(a.buffer, a.byteOffset, a.byteLength);
 const flush = () => new Promise((r) => setTimeout(r, 0));

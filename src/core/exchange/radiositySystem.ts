@@ -37,7 +37,7 @@ export class RadiositySystem implements FactoredSystem {
   /** True when the Cholesky factors of S are in use, false for LU of M. */
   readonly symmetric: boolean;
   private readonly lu: DenseLuSolver;
-  private readonly cholesky: DenseCholesky | null = null;
+  private cholesky: DenseCholesky | null = null;
   /** Surfaces with w > 0 (the unknowns of S) and with w = 0 (J = b), each in order. */
   private readonly unknown: Int32Array;
   private readonly known: Int32Array;
@@ -61,34 +61,22 @@ export class RadiositySystem implements FactoredSystem {
     this.unknown = Int32Array.from({ length: n }, (_, i) => i).filter((i) => w[i] > 0);
     this.known = Int32Array.from({ length: n }, (_, i) => i).filter((i) => !(w[i] > 0));
     this.reduced = new Float64Array(this.unknown.length);
-    const x = new Float64Array(n);
-    const y = new Float64Array(n);
-    const z = new Float64Array(n);
 
     const m = this.unknown.length;
-    const cholesky = m > 0 ? new DenseCholesky(this.lu, m) : null;
-    if (cholesky) {
-      const { normM, averaging } = this.buildScaled(cholesky.matrix);
-      if (Number.isFinite(normM) && cholesky.factor()) {
-        this.cholesky = cholesky;
-        this.symmetric = true;
-        const inverse = estimateInverseNormOne(this, x, y, z);
-        if (Number.isFinite(inverse) && inverse * averaging <= MAX_AVERAGING_CONTRACTION) {
-          const rcond = normM > 0 && inverse > 0 ? 1 / (normM * inverse) : 0;
-          if (!(rcond >= DEFAULT_MIN_RECIPROCAL_CONDITION)) {
-            throw new LinearSolveError('ill-conditioned', {
-              reciprocalCondition: rcond,
-              limit: DEFAULT_MIN_RECIPROCAL_CONDITION,
-            });
-          }
-          this.reciprocalCondition = rcond;
-          return;
-        }
+    const symmetric = m > 0 ? this.factorSymmetric(new DenseCholesky(this.lu, m)) : null;
+    this.symmetric = symmetric !== null;
+    if (symmetric) {
+      const { rcond } = symmetric;
+      if (!(rcond >= DEFAULT_MIN_RECIPROCAL_CONDITION)) {
+        throw new LinearSolveError('ill-conditioned', {
+          reciprocalCondition: rcond,
+          limit: DEFAULT_MIN_RECIPROCAL_CONDITION,
+        });
       }
+      this.reciprocalCondition = rcond;
+      return;
     }
     // LU of M itself: no usable symmetry, or nothing to solve for.
-    this.cholesky = null;
-    this.symmetric = false;
     const M = this.lu.matrix;
     for (let i = 0; i < n; i++) {
       const ri = i * n;
@@ -97,6 +85,24 @@ export class RadiositySystem implements FactoredSystem {
       M[ri + i] += 1;
     }
     this.reciprocalCondition = this.lu.factor();
+  }
+
+  /**
+   * Builds and factors S; keeps the factors (solve() then uses them) and returns
+   * M's reciprocal condition when S is positive definite and the averaging's
+   * change is small enough for one refinement step, else null (the LU is used).
+   */
+  private factorSymmetric(cholesky: DenseCholesky): { rcond: number } | null {
+    const { normM, averaging } = this.buildScaled(cholesky.matrix);
+    if (!(Number.isFinite(normM) && cholesky.factor())) return null;
+    this.cholesky = cholesky; // the condition estimate below solves through it
+    const n = this.n;
+    const inverse = estimateInverseNormOne(this, new Float64Array(n), new Float64Array(n), new Float64Array(n));
+    if (!(Number.isFinite(inverse) && inverse * averaging <= MAX_AVERAGING_CONTRACTION)) {
+      this.cholesky = null;
+      return null;
+    }
+    return { rcond: normM > 0 && inverse > 0 ? 1 / (normM * inverse) : 0 };
   }
 
   /** Solves M x = b: b (length n) is overwritten with x and returned. */
