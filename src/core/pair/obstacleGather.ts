@@ -2,15 +2,18 @@ import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { BodyClipper } from './bodyClip';
 import type { ObstaclePieces } from './obstaclePieces';
+import { PairCandidates } from './pairCandidates';
 import type { ViewRegion } from './viewRegion';
 
 // Which edges can block the view of an edge pair: every edge that enters the interior
 // of the view region H, clipped to H (bodyClip.ts). Obstacles that blocked earlier
-// pairs of the same edges are tried first; then bodies come from the body index and
-// walls of re-entrant pockets from the wall index.
+// pairs of the same edges are tried first; then bodies and walls of re-entrant pockets
+// come from the lists shared by a row's pairs with one body (pairCandidates.ts), or,
+// for a pair with a wall edge, from the body and wall indexes.
 
 export class ObstacleGatherer {
   private readonly clip: BodyClipper;
+  private readonly candidates: PairCandidates;
   private readonly visitWall: (id: number) => boolean;
   private readonly visitBody: (id: number) => boolean;
   /**
@@ -33,6 +36,7 @@ export class ObstacleGatherer {
     private readonly pieces: ObstaclePieces,
   ) {
     this.clip = new BodyClipper(e, ob, region, pieces);
+    this.candidates = new PairCandidates(e, ob);
     this.hint = new Int32Array(e.count).fill(-1);
     this.hint2 = new Int32Array(e.count).fill(-1);
     this.visitWall = (id: number) => {
@@ -78,7 +82,12 @@ export class ObstacleGatherer {
     if (hj2 !== hi && hj2 !== hj && hj2 !== hi2 && this.probe(hj2, 3)) return true;
     // Bodies are placed first and clipped after, so a pair that one body blocks
     // clips none in vain, and one whose chain blocks stops at that body.
-    if (ob.bodyTree) ob.bodyTree.search(R, this.visitBody);
+    const listed = this.candidates.find(i, j);
+    if (listed) {
+      const list = this.candidates.bodies;
+      const end = this.candidates.bodyEnd;
+      for (let k = this.candidates.bodyStart; k < end; k++) if (this.visitBody(list[k])) break;
+    } else if (ob.bodyTree) ob.bodyTree.search(R, this.visitBody);
     else for (let b = 0; b < ob.bodyCount && !clip.blocked; b++) if (!this.wasProbed(b)) clip.placeLater(b);
     if (clip.blocked) {
       this.remember(i, j, clip.blocker);
@@ -91,7 +100,11 @@ export class ObstacleGatherer {
       const chain = this.pieces.blockingChain(nextEdge, from);
       if (chain >= 0) return this.blockedByChain(i, j, chain);
     }
-    ob.wallTree.search(R, this.visitWall);
+    if (listed) {
+      const list = this.candidates.walls;
+      const end = this.candidates.wallEnd;
+      for (let k = this.candidates.wallStart; k < end; k++) this.visitWall(list[k]);
+    } else ob.wallTree.search(R, this.visitWall);
     const chain = this.pieces.blockingChain(nextEdge, 0);
     if (chain >= 0) return this.blockedByChain(i, j, chain);
     this.pieces.sortByEdge();

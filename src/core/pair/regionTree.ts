@@ -98,10 +98,17 @@ export class RegionTree {
    * skipped). Stops early when visit returns true.
    */
   search(region: ViewRegion, visit: (id: number) => boolean): void {
+    if (this.first.length === 0) return;
+    this.searchSides(this.sides, loadSides(region, this.extent, this.sides), visit);
+  }
+
+  /**
+   * As search, with the region given as sides (the layout of `loadSides`: box centre
+   * and half sizes, then inward normal a, b and offset c per side, margins folded in).
+   */
+  searchSides(S: Float64Array, sideCount: number, visit: (id: number) => boolean): void {
     const nodes = this.first.length;
     if (nodes === 0) return;
-    const S = this.sides;
-    const sideCount = loadSides(region, this.extent, S);
     const box = this.box,
       leafBox = this.leafBox,
       first = this.first,
@@ -137,7 +144,7 @@ export class RegionTree {
  * offset c, the margin folded in: a box lies surely outside the side when
  * a x + b y + |a| w + |b| h + c < 0 at its centre (x, y), half sizes (w, h).
  */
-const SIDE_STRIDE = 3;
+export const SIDE_STRIDE = 3;
 
 /** Load the region's box and sides (in SIDE_ORDER) into `out`; returns the number of sides. */
 function loadSides(R: ViewRegion, extent: number, out: Float64Array): number {
