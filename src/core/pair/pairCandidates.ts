@@ -5,18 +5,21 @@ import { SIDE_STRIDE as SIDE_STRIDE_IN } from './regionTree';
 // Module-local copies of hot imports (see integrator.ts).
 const SIDE_STRIDE = SIDE_STRIDE_IN;
 
-// The obstacles that may block any pair of one edge e with the edges of one body B,
-// found once and reused by every such pair. The view region of a pair lies in the
-// hull of both edges, and B's edges lie in its bounding circle (c, r), so every such
-// region lies in conv(e, circle) and so in the triangle (e's ends, c) widened by r
-// (each point of the hull is a point of the triangle plus at most r). The lists hold
-// every body and blocking wall edge that may enter that widened triangle: a superset
-// of what the per-pair searches find. A row of the edge matrix (e fixed, other edge
-// after it) meets each body's edges one after another, so the lists of one row are
-// kept until the row changes. Sketch units.
+// The obstacles that may block any pair of one edge e with the edges of one group G
+// (a body, or a run of consecutive enclosure edges), found once and reused by every
+// such pair. The view region of a pair lies in the hull of both edges, and G's edges
+// lie in its bounding circle (c, r), so every such region lies in conv(e, circle) and
+// so in the triangle (e's ends, c) widened by r (each point of the hull is a point of
+// the triangle plus at most r). The lists hold every body and blocking wall edge that
+// may enter that widened triangle: a superset of what the per-pair searches find. A
+// row of the edge matrix (e fixed, other edge after it) meets each group's edges one
+// after another, so the lists of one row are kept until the row changes. Sketch units.
 
 /** Relative margin of the widened triangle: far above the rounding of its sides. */
 const MARGIN = 1e-9;
+
+/** Enclosure edges per group: short runs keep the circle, and so the lists, tight. */
+const WALL_RUN = 8;
 
 export class PairCandidates {
   /** Bodies (ids), then wall edges (ids into ob.wallEdges), of the lists made for the current row. */
@@ -24,7 +27,12 @@ export class PairCandidates {
   private wallList = new Int32Array(256);
   private bodyFill = 0;
   private wallFill = 0;
-  /** Per body: the row stamp its lists were made for, and where they lie. */
+  /** Group of each edge; per group its bounding circle (bodies: the body's own). */
+  private readonly groupOf: Int32Array;
+  private readonly groupCx: Float64Array;
+  private readonly groupCy: Float64Array;
+  private readonly groupR: Float64Array;
+  /** Per group: the row stamp its lists were made for, and where they lie. */
   private readonly stamp: Int32Array;
   private readonly bodyFrom: Int32Array;
   private readonly bodyTo: Int32Array;
@@ -50,12 +58,17 @@ export class PairCandidates {
     private readonly e: EdgeSet,
     private readonly ob: ObstacleIndex,
   ) {
-    const B = ob.bodyCount;
-    this.stamp = new Int32Array(B).fill(-1);
-    this.bodyFrom = new Int32Array(B);
-    this.bodyTo = new Int32Array(B);
-    this.wallFrom = new Int32Array(B);
-    this.wallTo = new Int32Array(B);
+    const groups = wallGroups(e, ob);
+    this.groupOf = groups.groupOf;
+    this.groupCx = groups.cx;
+    this.groupCy = groups.cy;
+    this.groupR = groups.r;
+    const G = groups.r.length;
+    this.stamp = new Int32Array(G).fill(-1);
+    this.bodyFrom = new Int32Array(G);
+    this.bodyTo = new Int32Array(G);
+    this.wallFrom = new Int32Array(G);
+    this.wallTo = new Int32Array(G);
     let extent = 0;
     for (let k = 0; k < e.count; k++) extent = Math.max(extent, Math.abs(e.ax[k]), Math.abs(e.ay[k]));
     this.extent = extent;
@@ -71,16 +84,13 @@ export class PairCandidates {
 
   /**
    * Make the lists for the pair of edges i and j (either order): the row edge is the
-   * lower index, the body that of the other edge. False when there is none to make
-   * (the other edge is a wall, or the triangle is too thin to orient surely): then
-   * search per pair.
+   * lower index, the group that of the other edge. False when the triangle is too
+   * thin to orient surely: then search per pair.
    */
   find(i: number, j: number): boolean {
-    const E = this.e;
     const row = i < j ? i : j,
       other = i < j ? j : i;
-    const b = this.ob.bodyOfPolygon[E.polygon[other]];
-    if (b < 0) return false;
+    const b = this.groupOf[other];
     if (row !== this.row) {
       this.row = row;
       this.rowStamp++;
@@ -107,18 +117,17 @@ export class PairCandidates {
   }
 
   /**
-   * Sides of the triangle (row edge's ends, body b's centre) widened by b's radius,
+   * Sides of the triangle (row edge's ends, group b's centre) widened by b's radius,
    * unit inward normals, margin folded in; false when the triangle is too thin.
    */
   private loadTriangle(row: number, b: number): boolean {
     const E = this.e,
-      ob = this.ob,
       S = this.sides;
     const px = E.ax[row],
       py = E.ay[row],
-      cx = ob.bodyCx[b],
-      cy = ob.bodyCy[b],
-      r = ob.bodyR[b];
+      cx = this.groupCx[b],
+      cy = this.groupCy[b],
+      r = this.groupR[b];
     let qx = E.bx[row],
       qy = E.by[row];
     const cross = (qx - px) * (cy - py) - (qy - py) * (cx - px);
@@ -197,4 +206,49 @@ export class PairCandidates {
     }
     this.wallList[this.wallFill++] = id;
   }
+}
+
+/**
+ * Groups of edges with their bounding circles: body b is group b (its circle from the
+ * obstacle index); each enclosure polygon's edges follow in runs of WALL_RUN, each
+ * run's circle about its corners' average (radius: the farthest corner, so it holds
+ * every edge of the run, a chord of the circle).
+ */
+function wallGroups(E: EdgeSet, ob: ObstacleIndex) {
+  const groupOf = new Int32Array(E.count);
+  const cx = Array.from(ob.bodyCx),
+    cy = Array.from(ob.bodyCy),
+    r = Array.from(ob.bodyR);
+  for (let p = 0; p + 1 < E.polygonStart.length; p++) {
+    const body = ob.bodyOfPolygon[p];
+    const from = E.polygonStart[p],
+      to = E.polygonStart[p + 1];
+    if (body >= 0) {
+      groupOf.fill(body, from, to);
+      continue;
+    }
+    for (let s = from; s < to; s += WALL_RUN) {
+      const end = Math.min(to, s + WALL_RUN);
+      let x = 0,
+        y = 0;
+      for (let k = s; k < end; k++) {
+        x += E.ax[k] + E.bx[k];
+        y += E.ay[k] + E.by[k];
+      }
+      x /= 2 * (end - s);
+      y /= 2 * (end - s);
+      let far = 0;
+      for (let k = s; k < end; k++)
+        far = Math.max(
+          far,
+          Math.sqrt((E.ax[k] - x) ** 2 + (E.ay[k] - y) ** 2),
+          Math.sqrt((E.bx[k] - x) ** 2 + (E.by[k] - y) ** 2),
+        );
+      groupOf.fill(cx.length, s, end);
+      cx.push(x);
+      cy.push(y);
+      r.push(far);
+    }
+  }
+  return { groupOf, cx: Float64Array.from(cx), cy: Float64Array.from(cy), r: Float64Array.from(r) };
 }
