@@ -10,7 +10,6 @@ import {
   selectHoverPoint,
   selectSelection,
   selectTool,
-  selectViewFactors,
 } from '../../state/selectors';
 import type { AppState } from '../../state/store';
 import { fitCamera } from '../../state/camera';
@@ -20,7 +19,7 @@ import { useElementSize } from './useElementSize';
 import { usePointerRouting } from './usePointerRouting';
 import { useSelectedSurfaces } from './useSelectedSurfaces';
 import { useSurfaceColours } from './useSurfaceColours';
-import { canvasProblemMarks } from './problems';
+import { canvasProblems, NO_MARKS, problemMarks } from './problems';
 import { GridLayer } from './GridLayer';
 import { ShapesLayer } from './ShapesLayer';
 import { shapeLayers, useLiveShapes } from './liveShapes';
@@ -35,6 +34,7 @@ const selectGridStep = (s: AppState) => s.gridStep;
 const selectSetCamera = (s: AppState) => s.setCamera;
 const selectShowNames = (s: AppState) => s.showNames;
 const selectGestureShapes = (s: AppState) => s.gestureBase?.shapes ?? null;
+const selectCanvasProblems = (s: AppState) => canvasProblems(s.viewFactors);
 
 export function SketchCanvas() {
   const { ref, width, height } = useElementSize<HTMLDivElement>();
@@ -50,7 +50,7 @@ export function SketchCanvas() {
   const setCamera = useApp(selectSetCamera);
   const showNames = useApp(selectShowNames);
   const store = useAppStore();
-  const results = useApp(selectViewFactors);
+  const resultProblems = useApp(selectCanvasProblems);
   const selected = useSelectedSurfaces();
   const handlers = usePointerRouting();
   const baseShapes = useApp(selectGestureShapes);
@@ -60,8 +60,8 @@ export function SketchCanvas() {
   const order = useSurfaceColours();
   const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
   const problems = useMemo(
-    () => canvasProblemMarks(results.status, results.problems, doc.shapes),
-    [results.status, results.problems, doc.shapes],
+    () => (resultProblems ? problemMarks(resultProblems, doc.shapes) : NO_MARKS),
+    [resultProblems, doc.shapes],
   );
 
   // Fit once per request (F, the Fit button, a file opened) and on each layout

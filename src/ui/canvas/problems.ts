@@ -47,11 +47,14 @@ export function problemMarks(problems: readonly SketchProblem[], shapes: readonl
   return { shapes: marks.shapes, edges: marks.edges.slice(0, MAX_MARKS), points: marks.points.slice(0, MAX_MARKS) };
 }
 
-/** The marks the canvas shows for the results state: problems only while the document is invalid. */
-export function canvasProblemMarks(
-  status: string,
-  problems: readonly SketchProblem[],
-  shapes: readonly Shape[],
-): ProblemMarks {
-  return status === 'invalid' ? problemMarks(problems, shapes) : NO_MARKS;
+/**
+ * The problems the canvas marks for the results state: those of an invalid document,
+ * else null. The same array while it stays invalid, so a job posted or answered does
+ * not redraw the canvas.
+ */
+export function canvasProblems(results: {
+  status: string;
+  problems: readonly SketchProblem[];
+}): readonly SketchProblem[] | null {
+  return results.status === 'invalid' ? results.problems : null;
 }
