@@ -36,6 +36,13 @@ export function grow(a: Float64Array<ArrayBuffer>): Float64Array<ArrayBuffer> {
   return b;
 }
 
+/** An Int32Array of twice the length holding a's values (as `grow`). */
+export function growInt(a: Int32Array<ArrayBuffer>): Int32Array<ArrayBuffer> {
+  const b = new Int32Array(a.length * 2);
+  b.set(a);
+  return b;
+}
+
 /** In-place ascending sort of a[0..n) (insertion sort for short runs, else heap sort). */
 export function sortPrefix(a: Float64Array, n: number): void {
   if (n < 24) {

@@ -1,5 +1,6 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
+import { growInt } from '../scratch';
 import { SIDE_STRIDE as SIDE_STRIDE_IN } from './regionTree';
 
 // Module-local copies of hot imports (see integrator.ts).
@@ -190,20 +191,12 @@ export class PairCandidates {
   }
 
   private pushBody(id: number): void {
-    if (this.bodyFill === this.bodyList.length) {
-      const grown = new Int32Array(2 * this.bodyList.length);
-      grown.set(this.bodyList);
-      this.bodyList = grown;
-    }
+    if (this.bodyFill === this.bodyList.length) this.bodyList = growInt(this.bodyList);
     this.bodyList[this.bodyFill++] = id;
   }
 
   private pushWall(id: number): void {
-    if (this.wallFill === this.wallList.length) {
-      const grown = new Int32Array(2 * this.wallList.length);
-      grown.set(this.wallList);
-      this.wallList = grown;
-    }
+    if (this.wallFill === this.wallList.length) this.wallList = growInt(this.wallList);
     this.wallList[this.wallFill++] = id;
   }
 }
