@@ -1,14 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { documentApi, type SketchProblem } from '../../src/state/documentApi';
 import type { SketchFile } from '../../src/state/sketchFile';
-import { canvasProblems, NO_MARKS, problemMarks } from '../../src/ui/canvas/problems';
+import { canvasProblemMarks as marksFor, canvasProblems, problemMarks } from '../../src/ui/canvas/problems';
 
 /** What the canvas draws for a results state (as SketchCanvas does). */
-const canvasProblemMarks = (status: string, problems: SketchProblem[], shapes: SketchFile['shapes']) => {
-  const shown = canvasProblems({ status, problems });
-  return shown ? problemMarks(shown, shapes) : NO_MARKS;
-};
-
+const canvasProblemMarks = (status: string, problems: SketchProblem[], shapes: SketchFile['shapes']) =>
+  marksFor(canvasProblems({ status, problems }), shapes);
 // The canvas marks problems from their places (data from the document layer),
 // never from their wording: a surface name that looks like a point or a shape
 // number must not move a mark.

@@ -8,8 +8,9 @@ import type { ViewRegion } from './viewRegion';
 // Which edges can block the view of an edge pair: every edge that enters the interior
 // of the view region H, clipped to H (bodyClip.ts). Obstacles that blocked earlier
 // pairs of the same edges are tried first; then bodies and walls of re-entrant pockets
-// come from the lists shared by a row's pairs with one body (pairCandidates.ts), or,
-// for a pair with a wall edge, from the body and wall indexes.
+// come from the lists shared by a row's pairs with one group of edges
+// (pairCandidates.ts), or, where its triangle is too thin, from the indexes searched
+// with the pair's own region.
 
 export class ObstacleGatherer {
   private readonly clip: BodyClipper;
@@ -36,7 +37,7 @@ export class ObstacleGatherer {
     private readonly pieces: ObstaclePieces,
   ) {
     this.clip = new BodyClipper(e, ob, region, pieces);
-    this.candidates = new PairCandidates(e, ob);
+    this.candidates = new PairCandidates(e, ob, region.extent);
     this.hint = new Int32Array(e.count).fill(-1);
     this.hint2 = new Int32Array(e.count).fill(-1);
     this.visitWall = (id: number) => {

@@ -23,9 +23,13 @@ const MARGIN = 1e-9;
 const WALL_RUN = 8;
 
 export class PairCandidates {
-  /** Bodies (ids), then wall edges (ids into ob.wallEdges), of the lists made for the current row. */
-  private bodyList = new Int32Array(256);
-  private wallList = new Int32Array(256);
+  /**
+   * Bodies (ids) and wall edges (ids into ob.wallEdges) of the lists made for the
+   * current row; after `find`, the pair's are bodies[bodyStart .. bodyEnd) and
+   * walls[wallStart .. wallEnd). Read only outside (they grow here).
+   */
+  bodies = new Int32Array(256);
+  walls = new Int32Array(256);
   private bodyFill = 0;
   private wallFill = 0;
   /** Group of each edge; per group its bounding circle (bodies: the body's own). */
@@ -45,21 +49,17 @@ export class PairCandidates {
   private readonly sides = new Float64Array(4 + 3 * SIDE_STRIDE);
   private readonly collectBody: (id: number) => boolean;
   private readonly collectWall: (id: number) => boolean;
-  /** The lists of the last `find`: bodies[bodyStart .. bodyEnd), walls[wallStart .. wallEnd). */
-  bodies: Int32Array = this.bodyList;
-  walls: Int32Array = this.wallList;
   bodyStart = 0;
   bodyEnd = 0;
   wallStart = 0;
   wallEnd = 0;
-  /** Largest coordinate magnitude of the sketch (scales the float margin). */
-  private readonly extent: number;
-
+  /** `extent`: largest coordinate magnitude of the sketch (scales the float margin), as the view region's. */
   constructor(
     private readonly e: EdgeSet,
     private readonly ob: ObstacleIndex,
+    private readonly extent: number,
   ) {
-    const groups = wallGroups(e, ob);
+    const groups = edgeGroups(e, ob);
     this.groupOf = groups.groupOf;
     this.groupCx = groups.cx;
     this.groupCy = groups.cy;
@@ -70,9 +70,6 @@ export class PairCandidates {
     this.bodyTo = new Int32Array(G);
     this.wallFrom = new Int32Array(G);
     this.wallTo = new Int32Array(G);
-    let extent = 0;
-    for (let k = 0; k < e.count; k++) extent = Math.max(extent, Math.abs(e.ax[k]), Math.abs(e.ay[k]));
-    this.extent = extent;
     this.collectBody = (id: number) => {
       this.pushBody(id);
       return false;
@@ -99,17 +96,19 @@ export class PairCandidates {
       this.wallFill = 0;
     }
     if (this.stamp[b] !== this.rowStamp) {
-      if (!this.loadTriangle(row, b)) return false;
       this.stamp[b] = this.rowStamp;
-      this.bodyFrom[b] = this.bodyFill;
-      this.collectBodies();
-      this.bodyTo[b] = this.bodyFill;
-      this.wallFrom[b] = this.wallFill;
-      this.ob.wallTree.searchSides(this.sides, 3, this.collectWall);
-      this.wallTo[b] = this.wallFill;
+      // bodyFrom -1: too thin for this row, every pair searches itself.
+      if (!this.loadTriangle(row, b)) this.bodyFrom[b] = -1;
+      else {
+        this.bodyFrom[b] = this.bodyFill;
+        this.collectBodies();
+        this.bodyTo[b] = this.bodyFill;
+        this.wallFrom[b] = this.wallFill;
+        this.ob.wallTree.searchSides(this.sides, 3, this.collectWall);
+        this.wallTo[b] = this.wallFill;
+      }
     }
-    this.bodies = this.bodyList;
-    this.walls = this.wallList;
+    if (this.bodyFrom[b] < 0) return false;
     this.bodyStart = this.bodyFrom[b];
     this.bodyEnd = this.bodyTo[b];
     this.wallStart = this.wallFrom[b];
@@ -191,13 +190,13 @@ export class PairCandidates {
   }
 
   private pushBody(id: number): void {
-    if (this.bodyFill === this.bodyList.length) this.bodyList = growInt(this.bodyList);
-    this.bodyList[this.bodyFill++] = id;
+    if (this.bodyFill === this.bodies.length) this.bodies = growInt(this.bodies);
+    this.bodies[this.bodyFill++] = id;
   }
 
   private pushWall(id: number): void {
-    if (this.wallFill === this.wallList.length) this.wallList = growInt(this.wallList);
-    this.wallList[this.wallFill++] = id;
+    if (this.wallFill === this.walls.length) this.walls = growInt(this.walls);
+    this.walls[this.wallFill++] = id;
   }
 }
 
@@ -207,7 +206,7 @@ export class PairCandidates {
  * run's circle about its corners' average (radius: the farthest corner, so it holds
  * every edge of the run, a chord of the circle).
  */
-function wallGroups(E: EdgeSet, ob: ObstacleIndex) {
+function edgeGroups(E: EdgeSet, ob: ObstacleIndex) {
   const groupOf = new Int32Array(E.count);
   const cx = Array.from(ob.bodyCx),
     cy = Array.from(ob.bodyCy),

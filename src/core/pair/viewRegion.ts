@@ -54,7 +54,7 @@ export class ViewRegion {
   maxY = 0;
 
   /** `extent`: largest coordinate magnitude of the (shifted) sketch, scales float margins. */
-  constructor(private readonly extent: number) {}
+  constructor(readonly extent: number) {}
 
   /**
    * H for emitting piece a0-a1 and receiving piece b0-b1 (j' faces i', so a0 a1 b0 b1

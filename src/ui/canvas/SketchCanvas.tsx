@@ -19,7 +19,7 @@ import { useElementSize } from './useElementSize';
 import { usePointerRouting } from './usePointerRouting';
 import { useSelectedSurfaces } from './useSelectedSurfaces';
 import { useSurfaceColours } from './useSurfaceColours';
-import { canvasProblems, NO_MARKS, problemMarks } from './problems';
+import { canvasProblemMarks, canvasProblems } from './problems';
 import { GridLayer } from './GridLayer';
 import { ShapesLayer } from './ShapesLayer';
 import { shapeLayers, useLiveShapes } from './liveShapes';
@@ -59,10 +59,7 @@ export function SketchCanvas() {
 
   const order = useSurfaceColours();
   const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
-  const problems = useMemo(
-    () => (resultProblems ? problemMarks(resultProblems, doc.shapes) : NO_MARKS),
-    [resultProblems, doc.shapes],
-  );
+  const problems = useMemo(() => canvasProblemMarks(resultProblems, doc.shapes), [resultProblems, doc.shapes]);
 
   // Fit once per request (F, the Fit button, a file opened) and on each layout
   // from zero size; not on resizes or edits, so it reads the document from the store.

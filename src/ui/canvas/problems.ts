@@ -58,3 +58,8 @@ export function canvasProblems(results: {
 }): readonly SketchProblem[] | null {
   return results.status === 'invalid' ? results.problems : null;
 }
+
+/** The marks for `canvasProblems`'s answer: none while the document is not invalid. */
+export function canvasProblemMarks(problems: readonly SketchProblem[] | null, shapes: readonly Shape[]): ProblemMarks {
+  return problems ? problemMarks(problems, shapes) : NO_MARKS;
+}

@@ -61,6 +61,9 @@ function segmentMeetsPolygon(a: Pt, b: Pt, H: Pt[]): boolean {
   return false;
 }
 
+/** Largest coordinate magnitude, as the pair integrator gives its view region. */
+const extentOf = (E: EdgeSet) => Math.max(...E.ax.map(Math.abs), ...E.ay.map(Math.abs));
+
 const ends = (E: EdgeSet, e: number): [Pt, Pt] => [
   [E.ax[e], E.ay[e]],
   [E.bx[e], E.by[e]],
@@ -69,7 +72,7 @@ const ends = (E: EdgeSet, e: number): [Pt, Pt] => [
 function checkScene(scene: SceneInput, samples: number, seed: number) {
   const E = buildEdges(scene.polygons, scene.circles);
   const ob = buildObstacleIndex(E);
-  const lists = new PairCandidates(E, ob);
+  const lists = new PairCandidates(E, ob, extentOf(E));
   const rand = seeded(seed);
   let listed = 0,
     hits = 0;
@@ -118,7 +121,7 @@ describe('obstacle lists shared by a row', () => {
   it('list pairs of two wall edges too (runs of enclosure edges), and either order names one row', () => {
     const scene = hardScene(5, 600);
     const E = buildEdges(scene.polygons, scene.circles);
-    const lists = new PairCandidates(E, buildObstacleIndex(E));
+    const lists = new PairCandidates(E, buildObstacleIndex(E), extentOf(E));
     // Edges 0 on are the enclosure's: a wall-to-wall pair.
     expect(lists.find(3, 40)).toBe(true);
     const walls = Array.from(lists.walls.subarray(lists.wallStart, lists.wallEnd));
