@@ -48,6 +48,17 @@ export function allEdgeLengths(edges: EdgeSet): Float64Array {
   return out;
 }
 
+/**
+ * Largest coordinate magnitude of the edges' start points (sketch units, shifted
+ * origin). It scales the float margins of every pair's view region, so two sketches
+ * share a pair's number only when they share this extent.
+ */
+export function sketchExtent(e: EdgeSet): number {
+  let extent = 0;
+  for (let k = 0; k < e.count; k++) extent = Math.max(extent, Math.abs(e.ax[k]), Math.abs(e.ay[k]));
+  return extent;
+}
+
 /** Twice the signed area of a flat [x0,y0,x1,y1,...] polygon; > 0 when anticlockwise (y up). */
 export function signedArea2(points: ArrayLike<number>): number {
   const n = points.length >> 1;

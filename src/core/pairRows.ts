@@ -5,7 +5,7 @@
 // (i, j), so any split of the rows gives the same numbers, bit for bit.
 import { CurvedPairIntegrator } from './arc/curvedPair';
 import { allEdgeLengths, totalEdgeCount, type EdgeSet } from './edges';
-import { buildObstacleIndex } from './obstacles';
+import { buildObstacleIndex, type ObstacleIndex } from './obstacles';
 import { PairIntegrator } from './pair/integrator';
 
 /** The pair integrators of one sketch; one per thread (they hold scratch). */
@@ -14,15 +14,18 @@ export class EdgePairs {
   readonly count: number;
   /** Lengths of every edge, sketch units. */
   readonly length: Float64Array;
+  /** Where blockers are looked for (kept so that a later sketch can be compared, see pairReuse.ts). */
+  readonly obstacles: ObstacleIndex;
   private readonly straightCount: number;
   private readonly straight: PairIntegrator;
   private readonly curved: CurvedPairIntegrator | null;
 
-  constructor(edges: EdgeSet) {
+  constructor(readonly edges: EdgeSet) {
     this.count = totalEdgeCount(edges);
     this.straightCount = edges.count;
     this.length = edges.arcs.count > 0 ? allEdgeLengths(edges) : edges.length;
     const obstacles = buildObstacleIndex(edges);
+    this.obstacles = obstacles;
     this.straight = new PairIntegrator(edges, obstacles);
     // Sketches with exact circles: pairs with an arc, or with a solid circle near their
     // view, go through the curved integrator; polygon pairs keep the polygon one.

@@ -2,9 +2,13 @@
 // job or for some of its rows (a pool shares one job's rows, see pool.ts).
 // Summing edges to surfaces is a cheap stage of its own on the main thread, so
 // renaming or grouping surfaces never needs a worker (below the edge-matrix budget).
+// Each worker remembers its last rows: while a shape is dragged, the next job
+// computes only the pairs the moved shapes may change and copies the rest.
 import * as Comlink from 'comlink';
 import { buildEdges, type EdgeSet } from '../core/edges';
-import { EdgePairs, packRows } from '../core/pairRows';
+import { EdgePairs, packedLength, packRows } from '../core/pairRows';
+import { MovedShapes } from '../core/reuse/movedShapes';
+import { packRowsReusing } from '../core/reuse/reuseRows';
 import { SurfaceRowSummer } from '../core/surfaceRows';
 import { allRows } from '../core/viewFactors';
 import { assembleAnswer } from './assemble';
@@ -14,8 +18,31 @@ function jobEdges(job: ViewFactorJob): EdgeSet {
   return buildEdges(job.polygons, job.circles ?? []);
 }
 
-/** The pairs of `rows` (ascending): packed exchange lengths, or their surface sums when the job names surfaces. */
-export function computeRows(job: ViewFactorJob, rows: Int32Array): RowsAnswer {
+/** A worker's last packed rows and the sketch they were computed for. */
+export interface EarlierRows {
+  pairs: EdgePairs;
+  rows: Int32Array;
+  packed: Float64Array;
+}
+
+/**
+ * Most packed pairs a worker keeps for the next job (64 MB): a bigger sketch is
+ * rarely dragged live, and its copy would double the worker's memory.
+ */
+export const MAX_KEPT_PAIRS = 1 << 23;
+
+/**
+ * The pairs of `rows` (ascending): packed exchange lengths, or their surface sums
+ * when the job names surfaces. With `earlier` (the same rows of an earlier sketch
+ * with the same shapes), pairs no moved shape can change are copied from it.
+ * `keep` is told the pairs and rows of a packed answer (before they are handed over).
+ */
+export function computeRows(
+  job: ViewFactorJob,
+  rows: Int32Array,
+  earlier?: EarlierRows | null,
+  keep?: (kept: EarlierRows) => void,
+): RowsAnswer {
   const edges = jobEdges(job);
   const pairs = new EdgePairs(edges);
   const closed = edges.hasEnclosure;
@@ -23,7 +50,20 @@ export function computeRows(job: ViewFactorJob, rows: Int32Array): RowsAnswer {
     const sums = new SurfaceRowSummer(pairs, job.surfaces.edgeSurface, job.surfaces.count).sum(rows);
     return { kind: 'surfaces', edgeLength: pairs.length, closed, sums };
   }
-  return { kind: 'matrix', edgeLength: pairs.length, closed, rows, packed: packRows(pairs, rows) };
+  const same = earlier && sameRows(earlier.rows, rows) ? earlier : null;
+  const moved = same && MovedShapes.between(same.pairs, pairs);
+  const { packed, computed } =
+    same && moved
+      ? packRowsReusing(pairs, rows, same.packed, moved)
+      : { packed: packRows(pairs, rows), computed: packedLength(pairs.count, rows) };
+  if (keep && packed.length <= MAX_KEPT_PAIRS) keep({ pairs, rows: rows.slice(), packed: packed.slice() });
+  return { kind: 'matrix', edgeLength: pairs.length, closed, rows, packed, computed };
+}
+
+function sameRows(a: Int32Array, b: Int32Array): boolean {
+  if (a.length !== b.length) return false;
+  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
+  return true;
 }
 
 /** View factors of a job's polygons and circles in this thread (lengths in sketch units; arcs after polygon edges). */
@@ -56,13 +96,26 @@ export function transferables(r: ViewFactorAnswer | RowsAnswer): ArrayBuffer[] {
   return [...new Set(list)] as ArrayBuffer[];
 }
 
+/** One worker's API, with its own memory of the last rows it computed. */
+export function createViewFactorApi(): ViewFactorApi {
+  let earlier: EarlierRows | null = null;
+  return {
+    compute(job: ViewFactorJob) {
+      const r = computeEdgeViewFactors(job);
+      return Comlink.transfer(r, transferables(r));
+    },
+    computeRows(job: ViewFactorJob, rows: Int32Array) {
+      const last = earlier;
+      // Forgotten first: a job that throws leaves nothing half-kept behind.
+      earlier = null;
+      const r = computeRows(job, rows, last, (kept) => (earlier = kept));
+      return Comlink.transfer(r, transferables(r));
+    },
+  };
+}
+
+/** A stateless API for tests and single calls (remembers nothing between jobs). */
 export const viewFactorApi: ViewFactorApi = {
-  compute(job: ViewFactorJob) {
-    const r = computeEdgeViewFactors(job);
-    return Comlink.transfer(r, transferables(r));
-  },
-  computeRows(job: ViewFactorJob, rows: Int32Array) {
-    const r = computeRows(job, rows);
-    return Comlink.transfer(r, transferables(r));
-  },
+  compute: (job) => createViewFactorApi().compute(job),
+  computeRows: (job, rows) => createViewFactorApi().computeRows(job, rows),
 };

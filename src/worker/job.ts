@@ -66,7 +66,15 @@ export function sumsFitSurfaces(r: SurfaceViewFactors, edgeSurface: ArrayLike<nu
 
 /** One worker's share of a job: packed exchange lengths of its rows (see core pairRows.ts), or their surface sums. */
 export type RowsAnswer =
-  | { kind: 'matrix'; edgeLength: Float64Array; closed: boolean; rows: Int32Array; packed: Float64Array }
+  | {
+      kind: 'matrix';
+      edgeLength: Float64Array;
+      closed: boolean;
+      rows: Int32Array;
+      packed: Float64Array;
+      /** Pairs computed for this answer; the others were copied from the worker's previous answer. */
+      computed: number;
+    }
   | { kind: 'surfaces'; edgeLength: Float64Array; closed: boolean; sums: SurfaceRowSums };
 
 export interface ViewFactorApi {

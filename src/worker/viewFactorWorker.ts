@@ -1,5 +1,5 @@
 // The worker entry: a comlink wrapper over the core, nothing more.
 import * as Comlink from 'comlink';
-import { viewFactorApi } from './api';
+import { createViewFactorApi } from './api';
 
-Comlink.expose(viewFactorApi);
+Comlink.expose(createViewFactorApi());

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import * as Comlink from 'comlink';
 import { MessageChannel } from 'node:worker_threads';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter';
-import { viewFactorApi } from '../../src/worker/api';
+import { createViewFactorApi, viewFactorApi } from '../../src/worker/api';
 import {
   isSurfaceAnswer,
   jobFromPolygons,
@@ -40,9 +40,9 @@ function checked(doc: unknown) {
 }
 
 /** The worker's api behind a real channel; close() frees both ports. */
-function overChannel() {
+function overChannel(api: ViewFactorApi = viewFactorApi) {
   const { port1, port2 } = new MessageChannel();
-  Comlink.expose(viewFactorApi, nodeEndpoint(port1));
+  Comlink.expose(api, nodeEndpoint(port1));
   const remote = Comlink.wrap<ViewFactorApi>(nodeEndpoint(port2));
   return {
     remote,
@@ -143,5 +143,43 @@ describe('worker api', () => {
         const expected = i === j ? 0 : (i - j + 4) % 2 === 0 ? opposite : adjacent;
         expect(Math.abs(F[i * 4 + j] - expected)).toBeLessThanOrEqual(1e-12);
       }
+  });
+
+  it('a worker that remembers its rows answers a drag with the bits a fresh worker gives', async () => {
+    // One tube of the polygon demo moved step by step, as a drag posts jobs; rows 0, 2, 4, ... as one
+    // worker of two would get them. Between steps the tube also jumps back, and the rows change once.
+    const { remote, close } = overChannel(createViewFactorApi());
+    const base = documentApi.toScene(checked(polygonDemo())).scene.polygons;
+    const tube = base.findIndex((p) => p.kind === 'solid');
+    const moved = (dx: number) =>
+      jobFromPolygons(
+        base.map((p, k) =>
+          k === tube ? { ...p, points: Array.from(p.points, (v, c) => (c % 2 === 0 ? v + dx : v)) } : p,
+        ),
+      );
+    const n = base.reduce((k, p) => k + p.points.length / 2, 0);
+    const even = Int32Array.from({ length: Math.ceil(n / 2) }, (_, k) => 2 * k);
+    const odd = Int32Array.from({ length: Math.floor(n / 2) }, (_, k) => 2 * k + 1);
+    const bytes = (a: Float64Array) => Array.from(new Uint8Array(a.buffer, a.byteOffset, a.byteLength));
+    // Whether the pairs can be kept from the step before (false: first job, or other rows).
+    for (const [dx, rows, kept] of [
+      [0, even, false],
+      [0.01, even, true],
+      [0.02, even, true],
+      [0, even, true],
+      [0.03, odd, false],
+      [0.04, odd, true],
+    ] as const) {
+      const job = moved(dx);
+      const got = await remote.computeRows(job, rows);
+      const fresh = viewFactorApi.computeRows(job, rows) as Awaited<typeof got>;
+      if (got.kind !== 'matrix' || fresh.kind !== 'matrix') throw new Error('expected packed rows');
+      expect(bytes(got.packed)).toEqual(bytes(fresh.packed));
+      expect(Array.from(got.rows)).toEqual(Array.from(rows));
+      expect(fresh.computed).toBe(got.packed.length);
+      if (kept) expect(got.computed).toBeLessThan(got.packed.length / 2);
+      else expect(got.computed).toBe(got.packed.length);
+    }
+    close();
   });
 });

@@ -1,4 +1,4 @@
-import type { EdgeSet } from '../edges';
+import { sketchExtent, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { ORIENT_FILTER_BOUND, orient as orientIn } from '../orient';
 import { Breakpoints, FixedPoints } from './fixedPoints';
@@ -43,9 +43,7 @@ export class PairIntegrator {
     private readonly e: EdgeSet,
     obstacles: ObstacleIndex,
   ) {
-    let extent = 0;
-    for (let k = 0; k < e.count; k++) extent = Math.max(extent, Math.abs(e.ax[k]), Math.abs(e.ay[k]));
-    this.region = new ViewRegion(extent);
+    this.region = new ViewRegion(sketchExtent(e));
     this.pieces = new ObstaclePieces(e.count);
     this.gatherer = new ObstacleGatherer(e, obstacles, this.region, this.pieces);
     this.points = new FixedPoints(e, obstacles);

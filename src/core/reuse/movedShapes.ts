@@ -1,0 +1,207 @@
+// Pairs an edit leaves alone. A pair's exchange length depends on its two edges,
+// on what lies in their convex hull (every sight line between them stays inside
+// it), on each blocking body's own numbers (its bounding and inner circles) and on
+// two sketch-wide numbers (the origin and the extent that scales float margins).
+// So after an edit that moves some solids or circles, say a tube dragged across a
+// furnace, a pair needs computing again only when one of its edges belongs to a
+// moved shape, or a moved shape may enter its hull before or after the edit. Every
+// other pair keeps its number from the previous answer, the same bits a full
+// computation gives (the tests compare them over random edits).
+import { sketchExtent, totalEdgeCount, type EdgeSet } from '../edges';
+import type { ObstacleIndex } from '../obstacles';
+import type { EdgePairs } from '../pairRows';
+import { separatingArcs } from './separatingArcs';
+
+/**
+ * Slack on a moved shape's disc, relative to the sizes involved: far above every
+ * float margin of the pair integrators (at most 1e-9 of a size, 1e-12 of the
+ * extent), so a shape they might still count as near is counted here too.
+ */
+const RELATIVE_SLACK = 1e-6;
+
+/** The shapes that moved between two sketches with the same shapes, and the pairs they may change. */
+export class MovedShapes {
+  /** 1 for every edge (polygon edges, then arcs) of a moved shape. */
+  readonly movedEdge: Uint8Array;
+  /** Discs that hold a moved shape before or after the edit: x, y, radius (sketch units), slack included. */
+  readonly discs: Float64Array;
+  readonly discCount: number;
+  /** Per disc d and straight edge e (at d x edges + e): the directions separating e from the disc (separatingArcs.ts). */
+  private readonly mid: Float64Array;
+  private readonly half: Float64Array;
+  /** Scratch bounding box, for pairs with an arc. */
+  private readonly box = new Float64Array(4);
+
+  private constructor(
+    private readonly E: EdgeSet,
+    movedEdge: Uint8Array,
+    discs: number[],
+  ) {
+    this.movedEdge = movedEdge;
+    this.discs = Float64Array.from(discs);
+    this.discCount = discs.length / 3;
+    this.mid = new Float64Array(this.discCount * E.count);
+    this.half = new Float64Array(this.discCount * E.count);
+    for (let d = 0; d < this.discCount; d++) {
+      const D = this.discs;
+      separatingArcs(E, D[3 * d], D[3 * d + 1], D[3 * d + 2], this.mid, this.half, d * E.count);
+    }
+  }
+
+  /**
+   * What moved from `before` to `after` (each sketch's pair integrators), or null
+   * when no pair can be kept: other shapes or edge counts, another origin or extent,
+   * or a moved enclosure (every view lies inside it). Also null when more than
+   * `maxMovedShare` of the edges moved: then computing every pair costs little more.
+   */
+  static between(before: EdgePairs, after: EdgePairs, maxMovedShare = 0.5): MovedShapes | null {
+    const A = before.edges,
+      B = after.edges;
+    if (!sameShapes(A, B)) return null;
+    if (A.originX !== B.originX || A.originY !== B.originY) return null;
+    const extent = sketchExtent(B);
+    if (sketchExtent(A) !== extent) return null;
+    const moved = new Uint8Array(totalEdgeCount(B));
+    const discs: number[] = [];
+    const slack = RELATIVE_SLACK * extent;
+    const P = B.polygonIsEnclosure.length;
+    for (let p = 0; p < P; p++) {
+      const from = B.polygonStart[p],
+        to = B.polygonStart[p + 1];
+      const b = after.obstacles.bodyOfPolygon[p];
+      if (!edgesMoved(A, B, from, to) && (b < 0 || sameBody(before.obstacles, after.obstacles, b))) continue;
+      if (B.polygonIsEnclosure[p]) return null;
+      moved.fill(1, from, to);
+      // The body's bounding circle (about its corner average) before and after.
+      for (const ob of [before.obstacles, after.obstacles]) {
+        const r = ob.bodyR[b];
+        discs.push(ob.bodyCx[b], ob.bodyCy[b], r + RELATIVE_SLACK * r + slack);
+      }
+    }
+    const a = A.arcs,
+      c = B.arcs;
+    for (let k = 0; k < c.circleCount; k++) {
+      if (a.cx[k] === c.cx[k] && a.cy[k] === c.cy[k] && a.r[k] === c.r[k]) continue;
+      if (c.circleIsEnclosure[k]) return null;
+      for (let e = 0; e < c.count; e++) if (c.circle[e] === k) moved[B.count + e] = 1;
+      discs.push(a.cx[k], a.cy[k], a.r[k] * (1 + RELATIVE_SLACK) + slack);
+      discs.push(c.cx[k], c.cy[k], c.r[k] * (1 + RELATIVE_SLACK) + slack);
+    }
+    let count = 0;
+    for (let e = 0; e < moved.length; e++) count += moved[e];
+    if (count > maxMovedShare * moved.length) return null;
+    return new MovedShapes(B, moved, discs);
+  }
+
+  /**
+   * Mark the pairs (i, j), j = i .. edges - 1, that may differ from the earlier
+   * sketch: flags[j] = 1 (else 0). `flags` has one entry per edge.
+   */
+  markRow(i: number, flags: Uint8Array): void {
+    const N = flags.length,
+      moved = this.movedEdge;
+    if (moved[i]) {
+      flags.fill(1, i, N);
+      return;
+    }
+    for (let j = i; j < N; j++) flags[j] = moved[j];
+    const E = this.E,
+      D = this.discs,
+      n = E.count;
+    if (i >= n) {
+      for (let d = 0; d < D.length; d += 3)
+        for (let j = i; j < N; j++) if (!flags[j] && this.boxNear(d, i, j)) flags[j] = 1;
+      return;
+    }
+    const mid = this.mid,
+      half = this.half;
+    for (let d = 0; d < this.discCount; d++) {
+      const at = d * n;
+      const mi = mid[at + i],
+        hi = half[at + i];
+      if (hi < 0) {
+        flags.fill(1, i, N);
+        return;
+      }
+      // The pair's hull misses the disc when a direction separates both edges from it.
+      for (let j = i; j < n; j++) {
+        if (flags[j]) continue;
+        const hj = half[at + j];
+        let gap = Math.abs(mi - mid[at + j]);
+        if (gap > Math.PI) gap = 2 * Math.PI - gap;
+        if (hj < 0 || gap > hi + hj) flags[j] = 1;
+      }
+      for (let j = Math.max(i, n); j < N; j++) if (!flags[j] && this.boxNear(3 * d, i, j)) flags[j] = 1;
+    }
+  }
+
+  /** Disc d (offset into `discs`) against the bounding box of edges i and j, an arc counted as its whole circle. */
+  private boxNear(d: number, i: number, j: number): boolean {
+    const box = this.box;
+    box[0] = box[1] = Infinity;
+    box[2] = box[3] = -Infinity;
+    this.growBox(i);
+    this.growBox(j);
+    const D = this.discs;
+    const R = D[d + 2] + RELATIVE_SLACK * (box[2] - box[0] + box[3] - box[1]);
+    return !(D[d] + R < box[0] || D[d] - R > box[2] || D[d + 1] + R < box[1] || D[d + 1] - R > box[3]);
+  }
+
+  private growBox(e: number): void {
+    const E = this.E,
+      box = this.box;
+    if (e < E.count) {
+      box[0] = Math.min(box[0], E.ax[e], E.bx[e]);
+      box[1] = Math.min(box[1], E.ay[e], E.by[e]);
+      box[2] = Math.max(box[2], E.ax[e], E.bx[e]);
+      box[3] = Math.max(box[3], E.ay[e], E.by[e]);
+      return;
+    }
+    const A = E.arcs;
+    const c = A.circle[e - E.count];
+    box[0] = Math.min(box[0], A.cx[c] - A.r[c]);
+    box[1] = Math.min(box[1], A.cy[c] - A.r[c]);
+    box[2] = Math.max(box[2], A.cx[c] + A.r[c]);
+    box[3] = Math.max(box[3], A.cy[c] + A.r[c]);
+  }
+}
+
+/** Same polygons (kind and edge ranges) and same circles (kind and arc count) in the same order. */
+function sameShapes(A: EdgeSet, B: EdgeSet): boolean {
+  if (A.count !== B.count || A.arcs.count !== B.arcs.count || A.arcs.circleCount !== B.arcs.circleCount) return false;
+  const P = B.polygonIsEnclosure.length;
+  if (A.polygonIsEnclosure.length !== P) return false;
+  for (let p = 0; p < P; p++) {
+    if (A.polygonIsEnclosure[p] !== B.polygonIsEnclosure[p] || A.polygonStart[p + 1] !== B.polygonStart[p + 1])
+      return false;
+  }
+  for (let k = 0; k < B.arcs.circleCount; k++)
+    if (A.arcs.circleIsEnclosure[k] !== B.arcs.circleIsEnclosure[k]) return false;
+  for (let e = 0; e < B.arcs.count; e++) if (A.arcs.circle[e] !== B.arcs.circle[e]) return false;
+  return true;
+}
+
+/** True when any of the edges from..to-1 changed its ends or its walk (a polygon's winding flipped). */
+function edgesMoved(A: EdgeSet, B: EdgeSet, from: number, to: number): boolean {
+  for (let e = from; e < to; e++) {
+    if (A.ax[e] !== B.ax[e] || A.ay[e] !== B.ay[e] || A.bx[e] !== B.bx[e] || A.by[e] !== B.by[e]) return true;
+    if (A.nextEdge[e] !== B.nextEdge[e]) return true;
+  }
+  return false;
+}
+
+/**
+ * Body b's own numbers are unchanged. Its hull circle also depends on whether
+ * another polygon enters its convex hull, so an unmoved body can change too.
+ */
+function sameBody(a: ObstacleIndex, c: ObstacleIndex, b: number): boolean {
+  return (
+    a.bodyCx[b] === c.bodyCx[b] &&
+    a.bodyCy[b] === c.bodyCy[b] &&
+    a.bodyR[b] === c.bodyR[b] &&
+    a.bodyRMin[b] === c.bodyRMin[b] &&
+    a.bodyRIn[b] === c.bodyRIn[b] &&
+    a.bodyRHull[b] === c.bodyRHull[b] &&
+    a.bodyConvex[b] === c.bodyConvex[b]
+  );
+}
