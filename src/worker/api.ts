@@ -6,9 +6,9 @@
 // computes only the pairs the moved shapes may change and copies the rest.
 import * as Comlink from 'comlink';
 import { buildEdges, type EdgeSet } from '../core/edges';
-import { EdgePairs, packedLength, packRows } from '../core/pairRows';
+import { EdgePairs, packRows } from '../core/pairRows';
 import { MovedShapes } from '../core/reuse/movedShapes';
-import { packRowsReusing } from '../core/reuse/reuseRows';
+import { updateRows } from '../core/reuse/reuseRows';
 import { SurfaceRowSummer } from '../core/surfaceRows';
 import { allRows } from '../core/viewFactors';
 import { assembleAnswer } from './assemble';
@@ -52,12 +52,20 @@ export function computeRows(
   }
   const same = earlier && sameRows(earlier.rows, rows) ? earlier : null;
   const moved = same && MovedShapes.between(same.pairs, pairs);
-  const { packed, computed } =
-    same && moved
-      ? packRowsReusing(pairs, rows, same.packed, moved)
-      : { packed: packRows(pairs, rows), computed: packedLength(pairs.count, rows) };
-  if (keep && packed.length <= MAX_KEPT_PAIRS) keep({ pairs, rows: rows.slice(), packed: packed.slice() });
-  return { kind: 'matrix', edgeLength: pairs.length, closed, rows, packed, computed };
+  // One buffer is kept and one handed over per job: a fresh one of this size costs
+  // a browser worker more than the pairs themselves, so the kept one is updated in place.
+  let kept: Float64Array;
+  let computed: number;
+  if (same && moved) {
+    kept = same.packed;
+    computed = updateRows(pairs, rows, kept, moved);
+  } else {
+    kept = packRows(pairs, rows);
+    computed = kept.length;
+  }
+  const keeping = keep !== undefined && kept.length <= MAX_KEPT_PAIRS;
+  if (keeping) keep({ pairs, rows: rows.slice(), packed: kept });
+  return { kind: 'matrix', edgeLength: pairs.length, closed, rows, packed: keeping ? kept.slice() : kept, computed };
 }
 
 function sameRows(a: Int32Array, b: Int32Array): boolean {

@@ -3,21 +3,21 @@ import { packedLength, type EdgePairs } from '../pairRows';
 import type { MovedShapes } from './movedShapes';
 
 /**
- * Like `packRows` (pairRows.ts): the exchange lengths of the given rows, packed,
- * sketch units. Pairs that `moved` says cannot have changed are copied from
- * `before`, the same rows packed for the earlier sketch; the others are computed
- * (`computed` counts them).
+ * Bring `packed`, the given rows packed by `packRows` (pairRows.ts) for the earlier
+ * sketch, up to date for the sketch of `pairs`, in place: the pairs `moved` says may
+ * have changed are computed again (exchange lengths, sketch units), the others kept.
+ * In place because a fresh buffer of this size costs more than the pairs in a
+ * browser worker (each new page of memory is a fault). Returns how many were computed.
  */
-export function packRowsReusing(
+export function updateRows(
   pairs: EdgePairs,
   rows: ArrayLike<number>,
-  before: Float64Array,
+  packed: Float64Array,
   moved: MovedShapes,
-): { packed: Float64Array; computed: number } {
+): number {
   const n = pairs.count;
   const size = packedLength(n, rows);
-  if (before.length !== size) throw new Error(`the earlier rows hold ${before.length} pairs, these rows ${size}`);
-  const packed = new Float64Array(size);
+  if (packed.length !== size) throw new Error(`the earlier rows hold ${packed.length} pairs, these rows ${size}`);
   const flags = new Uint8Array(n);
   let at = 0,
     computed = 0;
@@ -25,13 +25,10 @@ export function packRowsReusing(
     const i = rows[k];
     moved.markRow(i, flags);
     for (let j = i; j < n; j++, at++) {
-      if (!flags[j]) {
-        packed[at] = before[at];
-        continue;
-      }
+      if (!flags[j]) continue;
       packed[at] = j === i ? pairs.selfExchange(i) : pairs.pairExchange(i, j);
       computed++;
     }
   }
-  return { packed, computed };
+  return computed;
 }

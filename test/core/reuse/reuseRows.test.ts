@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { buildEdges } from '../../../src/core/edges';
 import { EdgePairs, packRows } from '../../../src/core/pairRows';
 import { MovedShapes } from '../../../src/core/reuse/movedShapes';
-import { packRowsReusing } from '../../../src/core/reuse/reuseRows';
+import { updateRows } from '../../../src/core/reuse/reuseRows';
 import type { CircleInput, PolygonInput } from '../../../src/core/scene';
 import { allRows } from '../../../src/core/viewFactors';
 import { hardScene } from '../../bench/hardScenes';
@@ -43,8 +43,9 @@ function compare(
   const full = packRows(b, rows);
   // Every share of moved edges allowed, so that small sketches test the reuse too.
   const moved = MovedShapes.between(a, b, 1);
-  const reuse = moved ? packRowsReusing(b, rows, packRows(a, rows), moved) : { packed: full, computed: full.length };
-  return { moved, reused: reuse.packed, full, recomputed: reuse.computed, total: full.length };
+  const reused = moved ? packRows(a, rows) : full;
+  const recomputed = moved ? updateRows(b, rows, reused, moved) : full.length;
+  return { moved, reused, full, recomputed, total: full.length };
 }
 
 const flat = (polys: Poly[]): PolygonInput[] => polys.map((p) => ({ kind: p.kind, points: p.points.flat() }));
