@@ -1,56 +1,11 @@
-// The large-sketch drags of the browser benchmark (test/bench/browser.ts): a 10 x 4
-// furnace box of 52 wall edges holding 20 tubes drawn as 48-gons (1012 edges),
-// either one surface per tube and per wall (24 surfaces) or every edge its own
-// surface (a 1012 x 1012 table). One tube is dragged for a few seconds with a
+// The large-sketch drags of the browser benchmark (test/bench/browser.ts) on the
+// 1012-edge sketch of bigSketch.ts: one tube is dragged for a few seconds with a
 // pointer move every 16 ms, not waiting for anything, as a hand does.
 import type { Page } from 'playwright-core';
 import type { SketchFile } from '../../src/state/sketchFile';
 import { screenOf, type TestWindow } from '../e2e/harness';
 
-const WALL_PER_SIDE = 13;
-const SIDES = 48;
-const RADIUS = 0.25;
-/** Tube centres: 5 columns by 4 rows, 1.5 apart sideways so a drag of ±0.3 never touches a neighbour. */
-const CENTRES = [1, 3, 5, 7, 9].flatMap((x) => [0.5, 1.5, 2.5, 3.5].map((y) => [x, y] as const));
-
-/** The 1012-edge sketch: `perEdge`, every edge its own surface; else one surface per tube and per wall. */
-export function bigSketch(perEdge: boolean): SketchFile {
-  const corners = [
-    [0, 0],
-    [10, 0],
-    [10, 4],
-    [0, 4],
-  ];
-  const wall: [number, number][] = [];
-  for (let c = 0; c < 4; c++) {
-    const [x0, y0] = corners[c];
-    const [x1, y1] = corners[(c + 1) % 4];
-    for (let k = 0; k < WALL_PER_SIDE; k++)
-      wall.push([x0 + ((x1 - x0) * k) / WALL_PER_SIDE, y0 + ((y1 - y0) * k) / WALL_PER_SIDE]);
-  }
-  const tubes = CENTRES.map(([cx, cy], t) => ({
-    kind: 'solid' as const,
-    points: Array.from({ length: SIDES }, (_, k): [number, number] => {
-      const a = (2 * Math.PI * k) / SIDES;
-      return [cx + RADIUS * Math.cos(a), cy + RADIUS * Math.sin(a)];
-    }),
-    surface: perEdge ? Array.from({ length: SIDES }, (_, k) => `tube ${t + 1}.${k + 1}`) : `tube ${t + 1}`,
-  }));
-  return {
-    version: 2,
-    units: 'm',
-    shapes: [
-      {
-        kind: 'enclosure',
-        points: wall,
-        surface: wall.map((_, k) =>
-          perEdge ? `wall ${k + 1}` : ['floor', 'right', 'roof', 'left'][Math.floor(k / WALL_PER_SIDE)],
-        ),
-      },
-      ...tubes,
-    ],
-  };
-}
+export { bigSketch } from './bigSketch';
 
 type DragWindow = TestWindow & {
   __drag: {

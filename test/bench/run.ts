@@ -156,3 +156,4 @@ for (const v of verdicts) console.log(v);
   );
 }
 await import('./hardBench'); // hard scenes and the crossed-strings floor (issue 13)
+(await import('./dragStep')).dragStepSection(quick);
