@@ -9,6 +9,7 @@ import { buildEdges, type EdgeSet } from '../core/edges';
 import { EdgePairs, packRows } from '../core/pairRows';
 import { MovedShapes } from '../core/reuse/movedShapes';
 import { updateRows } from '../core/reuse/reuseRows';
+import { RowMemory } from './rowMemory';
 import { SurfaceRowSummer } from '../core/surfaceRows';
 import { allRows } from '../core/viewFactors';
 import { assembleAnswer } from './assemble';
@@ -18,31 +19,13 @@ function jobEdges(job: ViewFactorJob): EdgeSet {
   return buildEdges(job.polygons, job.circles ?? []);
 }
 
-/** A worker's last packed rows and the sketch they were computed for. */
-export interface EarlierRows {
-  pairs: EdgePairs;
-  rows: Int32Array;
-  packed: Float64Array;
-}
-
-/**
- * Most packed pairs a worker keeps for the next job (64 MB): a bigger sketch is
- * rarely dragged live, and its copy would double the worker's memory.
- */
-export const MAX_KEPT_PAIRS = 1 << 23;
-
 /**
  * The pairs of `rows` (ascending): packed exchange lengths, or their surface sums
- * when the job names surfaces. With `earlier` (the same rows of an earlier sketch
- * with the same shapes), pairs no moved shape can change are copied from it.
- * `keep` is told the pairs and rows of a packed answer (before they are handed over).
+ * when the job names surfaces. With a worker's `memory` holding the same rows of an
+ * earlier sketch with the same shapes, pairs no moved shape can change are kept
+ * from it; the new rows are kept there in turn, and the answer gets a copy.
  */
-export function computeRows(
-  job: ViewFactorJob,
-  rows: Int32Array,
-  earlier?: EarlierRows | null,
-  keep?: (kept: EarlierRows) => void,
-): RowsAnswer {
+export function computeRows(job: ViewFactorJob, rows: Int32Array, memory?: RowMemory): RowsAnswer {
   const edges = jobEdges(job);
   const pairs = new EdgePairs(edges);
   const closed = edges.hasEnclosure;
@@ -50,6 +33,7 @@ export function computeRows(
     const sums = new SurfaceRowSummer(pairs, job.surfaces.edgeSurface, job.surfaces.count).sum(rows);
     return { kind: 'surfaces', edgeLength: pairs.length, closed, sums };
   }
+  const earlier = memory?.take();
   const same = earlier && sameRows(earlier.rows, rows) ? earlier : null;
   const moved = same && MovedShapes.between(same.pairs, pairs);
   // One buffer is kept and one handed over per job: a fresh one of this size costs
@@ -63,9 +47,9 @@ export function computeRows(
     kept = packRows(pairs, rows);
     computed = kept.length;
   }
-  const keeping = keep !== undefined && kept.length <= MAX_KEPT_PAIRS;
-  if (keeping) keep({ pairs, rows: rows.slice(), packed: kept });
-  return { kind: 'matrix', edgeLength: pairs.length, closed, rows, packed: keeping ? kept.slice() : kept, computed };
+  const keeping = memory !== undefined && memory.keep({ pairs, rows: rows.slice(), packed: kept });
+  const packed = keeping ? memory.copy(kept) : kept;
+  return { kind: 'matrix', edgeLength: pairs.length, closed, rows, packed, computed };
 }
 
 function sameRows(a: Int32Array, b: Int32Array): boolean {
@@ -104,20 +88,20 @@ export function transferables(r: ViewFactorAnswer | RowsAnswer): ArrayBuffer[] {
   return [...new Set(list)] as ArrayBuffer[];
 }
 
-/** One worker's API, with its own memory of the last rows it computed. */
+/** One worker's API, with its own memory of the last rows it computed and of spare buffers. */
 export function createViewFactorApi(): ViewFactorApi {
-  let earlier: EarlierRows | null = null;
+  const memory = new RowMemory();
   return {
     compute(job: ViewFactorJob) {
       const r = computeEdgeViewFactors(job);
       return Comlink.transfer(r, transferables(r));
     },
     computeRows(job: ViewFactorJob, rows: Int32Array) {
-      const last = earlier;
-      // Forgotten first: a job that throws leaves nothing half-kept behind.
-      earlier = null;
-      const r = computeRows(job, rows, last, (kept) => (earlier = kept));
+      const r = computeRows(job, rows, memory);
       return Comlink.transfer(r, transferables(r));
+    },
+    recycle(buffers: Float64Array[]) {
+      memory.recycle(buffers);
     },
   };
 }
@@ -126,4 +110,5 @@ export function createViewFactorApi(): ViewFactorApi {
 export const viewFactorApi: ViewFactorApi = {
   compute: (job) => createViewFactorApi().compute(job),
   computeRows: (job, rows) => createViewFactorApi().computeRows(job, rows),
+  recycle: () => {},
 };

@@ -10,6 +10,8 @@ import { jobEdgeCount, jobTimeScale, type ViewFactorAnswer, type ViewFactorJob }
 /** One live worker. `onCrash` reports an uncaught error that killed it. */
 export interface WorkerHandle {
   compute(job: ViewFactorJob): Promise<ViewFactorAnswer>;
+  /** An answer the page no longer holds: its buffers may fill later answers (they are detached here). */
+  recycle?(answer: ViewFactorAnswer): void;
   terminate(): void;
   onCrash?(listener: (message: string) => void): void;
 }
@@ -94,6 +96,14 @@ export class ViewFactorClient {
     this.worker = this.start();
     current.resolve({ kind: 'dropped' });
     this.next();
+  }
+
+  /**
+   * Hand back the buffers of an answer nothing holds any more (the caller's promise:
+   * they are detached from it here), so the workers need not allocate new ones.
+   */
+  recycle(answer: ViewFactorAnswer): void {
+    if (!this.disposed) this.worker.recycle?.(answer);
   }
 
   /** True while a job runs or waits. */

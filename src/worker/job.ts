@@ -81,6 +81,8 @@ export interface ViewFactorApi {
   compute(job: ViewFactorJob): Promise<ViewFactorAnswer> | ViewFactorAnswer;
   /** The pairs of the given rows (ascending), for a pool sharing one job. */
   computeRows(job: ViewFactorJob, rows: Int32Array): Promise<RowsAnswer> | RowsAnswer;
+  /** Packed-row buffers of answers the page no longer holds, handed back to fill later answers. */
+  recycle(buffers: Float64Array[]): Promise<void> | void;
 }
 
 export function isSurfaceAnswer(r: ViewFactorAnswer): r is SurfaceViewFactors {

@@ -7,11 +7,13 @@
 import { balancedRowSets } from '../core/pairRows';
 import { assembleAnswer } from './assemble';
 import type { WorkerHandle } from './client';
-import { jobEdgeCount, type RowsAnswer, type ViewFactorAnswer, type ViewFactorJob } from './job';
+import { isSurfaceAnswer, jobEdgeCount, type RowsAnswer, type ViewFactorAnswer, type ViewFactorJob } from './job';
 
 /** One worker of a pool: computes some rows of a job. */
 export interface RowWorker {
   computeRows(job: ViewFactorJob, rows: Int32Array): Promise<RowsAnswer>;
+  /** Hand packed-row buffers back to this worker (see rowMemory.ts). */
+  recycle?(buffers: Float64Array[]): void;
   terminate(): void;
   onCrash?(listener: (message: string) => void): void;
 }
@@ -49,6 +51,13 @@ export function poolHandle(workers: readonly RowWorker[], minPairsPerWorker = MI
       const sets = balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker));
       const parts = await Promise.all(sets.map((rows, k) => workers[k].computeRows(job, rows)));
       return assembleAnswer(job, n, parts);
+    },
+    // Part k of an answer came from worker k (the row sets are dealt in that order).
+    recycle(answer: ViewFactorAnswer) {
+      if (isSurfaceAnswer(answer)) return;
+      answer.rows.packed.forEach((packed, k) => {
+        if (k < workers.length && packed.length > 0) workers[k].recycle?.([packed]);
+      });
     },
     terminate() {
       for (const w of workers) w.terminate();

@@ -10,6 +10,9 @@ function spawnRowWorker(): RowWorker {
   const api = Comlink.wrap<ViewFactorApi>(worker);
   return {
     computeRows: (job, rows) => api.computeRows(job, rows),
+    recycle: (buffers) => {
+      void api.recycle(Comlink.transfer(buffers, [...new Set(buffers.map((b) => b.buffer as ArrayBuffer))]));
+    },
     terminate: () => worker.terminate(),
     onCrash: (listener) => {
       worker.addEventListener('error', (e) => listener(e.message || 'the view-factor worker stopped'));

@@ -5,7 +5,8 @@
 // bits; the bench stops if they do not.
 import { balancedRowSets } from '../../src/core/pairRows';
 import { restore, toScene } from '../../src/document';
-import { computeRows, type EarlierRows } from '../../src/worker/api';
+import { computeRows } from '../../src/worker/api';
+import { RowMemory } from '../../src/worker/rowMemory';
 import { jobFromPolygons, type RowsAnswer } from '../../src/worker/job';
 import { bigSketch } from './bigSketch';
 
@@ -27,13 +28,12 @@ export function dragStepSection(quick: boolean): void {
     );
   const n = scene.polygons.reduce((t, p) => t + p.points.length / 2, 0);
   const rows = balancedRowSets(n, 2)[0];
-  let earlier: EarlierRows | null = null;
-  const keep = (kept: EarlierRows) => (earlier = kept);
+  const memory = new RowMemory();
   const packedOf = (r: RowsAnswer) => {
     if (r.kind !== 'matrix') throw new Error('drag bench: expected packed rows');
     return r;
   };
-  packedOf(computeRows(step(0), rows, null, keep));
+  packedOf(computeRows(step(0), rows, memory));
   const full: number[] = [],
     kept: number[] = [];
   let computed = 0,
@@ -45,7 +45,7 @@ export function dragStepSection(quick: boolean): void {
     const a = packedOf(computeRows(job, rows));
     full.push(performance.now() - t0);
     t0 = performance.now();
-    const b = packedOf(computeRows(job, rows, earlier, keep));
+    const b = packedOf(computeRows(job, rows, memory));
     kept.push(performance.now() - t0);
     for (let q = 0; q < a.packed.length; q++)
       if (!Object.is(a.packed[q], b.packed[q])) throw new Error(`drag bench: kept rows differ at pair ${q}`);

@@ -145,7 +145,7 @@ describe('worker api', () => {
       }
   });
 
-  it('a worker that remembers its rows answers a drag with the bits a fresh worker gives', async () => {
+  it('a worker that remembers its rows, and gets its buffers back, answers a drag with the bits a fresh worker gives', async () => {
     // One tube of the polygon demo moved step by step, as a drag posts jobs; rows 0, 2, 4, ... as one
     // worker of two would get them. Between steps the tube also jumps back, and the rows change once.
     const { remote, close } = overChannel(createViewFactorApi());
@@ -179,6 +179,10 @@ describe('worker api', () => {
       expect(fresh.computed).toBe(got.packed.length);
       if (kept) expect(got.computed).toBeLessThan(got.packed.length / 2);
       else expect(got.computed).toBe(got.packed.length);
+      // Handed back over the channel, as the page does with an answer it dropped: detached here.
+      const back = got.packed;
+      await remote.recycle(Comlink.transfer([back], [back.buffer as ArrayBuffer]));
+      expect(back.length).toBe(0);
     }
     close();
   });

@@ -144,4 +144,20 @@ describe('view-factor pool', () => {
     client.dispose();
     expect(ended.sort((a, b) => a - b)).toEqual([0, 1, 2, 3, 4, 5]);
   });
+
+  it('hands each part of an answer back to the worker that computed it', async () => {
+    const handed: { worker: number; lengths: number[] }[] = [];
+    const workers: RowWorker[] = [0, 1, 2].map((w) => ({
+      computeRows: (job, rows) => Promise.resolve(viewFactorApi.computeRows(job, rows) as RowsAnswer),
+      recycle: (buffers) => handed.push({ worker: w, lengths: buffers.map((b) => b.length) }),
+      terminate: () => {},
+    }));
+    const handle = poolHandle(workers, 1);
+    const job = jobFromPolygons([{ kind: 'enclosure', points: [0, 0, 4, 0, 4, 1, 2, 2, 0, 1] }]);
+    const answer = await handle.compute(job);
+    if (isSurfaceAnswer(answer)) throw new Error('expected edge factors');
+    expect(answer.rows.packed).toHaveLength(3);
+    handle.recycle?.(answer);
+    expect(handed).toEqual(answer.rows.packed.map((p, k) => ({ worker: k, lengths: [p.length] })));
+  });
 });

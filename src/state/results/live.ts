@@ -16,6 +16,8 @@ import { answerFitsSurfaces } from './derive';
 /** What the pipeline needs of the worker client. */
 export interface JobRunner {
   run(job: ViewFactorJob): Promise<JobOutcome>;
+  /** An answer nothing holds any more: its buffers go back to the workers (they are detached here). */
+  recycle?(answer: ViewFactorAnswer): void;
 }
 
 /** The key of the job running or waiting, so an unchanged geometry does not post it again. */
@@ -29,6 +31,7 @@ function refresh(
   api: DocumentApi,
   doc: SketchFile,
   pending: { job: Pending | null },
+  retire: (answer: ViewFactorAnswer) => void,
 ): void {
   const { setViewFactors, viewFactors } = store.getState();
   if (doc.shapes.length === 0) {
@@ -58,7 +61,7 @@ function refresh(
   pending.job = job;
   void runner.run(jobOf(current)).then((outcome) => {
     if (pending.job === job) pending.job = null;
-    file(store, job.basis, outcome);
+    file(store, job.basis, outcome, retire);
   });
 }
 
@@ -95,21 +98,33 @@ function fits(basis: CheckedGeometry, result: ViewFactorAnswer, current: Checked
   return sameKey(basis, current) && answerFitsSurfaces(result, current.surfaces);
 }
 
-/** File a finished job with the geometry it was computed for. */
-function file(store: AppStore, basis: CheckedGeometry, outcome: JobOutcome): void {
+/** File a finished job with the geometry it was computed for; answers not kept, or replaced, are retired. */
+function file(
+  store: AppStore,
+  basis: CheckedGeometry,
+  outcome: JobOutcome,
+  retire: (answer: ViewFactorAnswer) => void,
+): void {
   if (outcome.kind === 'dropped') return;
   const s = store.getState();
   const current = s.viewFactors.current;
   const forCurrent = current !== null && sameJob(basis, current);
   if (outcome.kind === 'done') {
     // A draft opened while this job ran (results cleared, sketch invalid): the answer is another drawing's.
-    if (!current && !s.viewFactors.edges && s.viewFactors.status === 'invalid') return;
+    if (!current && !s.viewFactors.edges && s.viewFactors.status === 'invalid') {
+      retire(outcome.result);
+      return;
+    }
     // Never trade factors that fit the current geometry for older ones (a drag that came back).
     const held = s.viewFactors.edges;
-    if (!forCurrent && held && current && fits(held.basis, held.result, current)) return;
+    if (!forCurrent && held && current && fits(held.basis, held.result, current)) {
+      retire(outcome.result);
+      return;
+    }
     const edges = { basis, result: outcome.result, elapsedMs: outcome.elapsedMs };
     // An older job's answer is still shown (at most one behind) while the newest one runs.
     s.setViewFactors(forCurrent ? { edges, status: 'ready' } : { edges });
+    if (held && held.result !== outcome.result) retire(held.result);
     return;
   }
   const what = outcome.reason === 'timeout' ? 'took too long' : 'failed';
@@ -121,11 +136,18 @@ function file(store: AppStore, basis: CheckedGeometry, outcome: JobOutcome): voi
 /** Recompute on every document change; returns the unsubscribe function. */
 export function startLiveResults(store: AppStore, runner: JobRunner, api: DocumentApi): () => void {
   const pending = { job: null as Pending | null };
+  // An answer that leaves the store is recycled one answer later, not at once: a
+  // render already under way may still read the one it replaced.
+  let retiring: ViewFactorAnswer | null = null;
+  const retire = (answer: ViewFactorAnswer) => {
+    if (retiring && retiring !== answer) runner.recycle?.(retiring);
+    retiring = answer;
+  };
   let last = store.getState().doc;
-  refresh(store, runner, api, last, pending);
+  refresh(store, runner, api, last, pending, retire);
   return store.subscribe((s) => {
     if (s.doc === last) return;
     last = s.doc;
-    refresh(store, runner, api, s.doc, pending);
+    refresh(store, runner, api, s.doc, pending, retire);
   });
 }

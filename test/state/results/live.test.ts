@@ -109,4 +109,24 @@ describe('live results', () => {
     expect(store.getState().viewFactors.status).toBe('ready');
     client.dispose();
   });
+
+  it('hands an answer back to the workers one answer after it left the store, never the one shown', async () => {
+    const recycled: unknown[] = [];
+    const runner: JobRunner = { ...inThread, recycle: (answer) => recycled.push(answer) };
+    const store = createAppStore(box);
+    startLiveResults(store, runner, documentApi);
+    const shown: unknown[] = [];
+    for (let k = 0; k < 3; k++) {
+      await flush();
+      shown.push(store.getState().viewFactors.edges?.result);
+      store.getState().edit((d) => setVertex(d, 1, 0, [1.75 + 0.01 * (k + 1), 0.75]));
+    }
+    await flush();
+    shown.push(store.getState().viewFactors.edges?.result);
+    expect(new Set(shown).size).toBe(4);
+    // The first two were replaced two answers ago or more; the third only just; the fourth is shown.
+    expect(recycled).toHaveLength(2);
+    expect(recycled[0]).toBe(shown[0]);
+    expect(recycled[1]).toBe(shown[1]);
+  });
 });
