@@ -1,6 +1,6 @@
 // @vitest-environment jsdom
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, configure, fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { act, cleanup, configure, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { renderApp } from './renderApp';
 import { demoSketch } from '../../src/state/demo';
@@ -9,6 +9,7 @@ import { MemoryStorage } from '../state/memoryStorage';
 import { spawner } from '../worker/fakeWorker';
 import { viewFactorApi } from '../../src/worker/api';
 import type { SketchFile } from '../../src/state/sketchFile';
+import { setVertex } from '../../src/state/edits/shapeEdits';
 
 vi.mock('../../src/ui/canvas/SketchCanvas', () => ({ SketchCanvas: () => <div data-testid="canvas-stub" /> }));
 
@@ -126,6 +127,20 @@ describe('the app', () => {
     await user.type(x, 'abc{Enter}'); // refused: the value goes back
     expect(store.getState().doc.shapes[0].points[2]).toEqual([2.5, 1.2]);
     expect((x as HTMLInputElement).value).toBe('2.5');
+  });
+
+  it('a vertex moved elsewhere shows its new x, and typing its y keeps that x', async () => {
+    const user = userEvent.setup();
+    const { store } = renderApp();
+    store.getState().setSelection([{ type: 'vertex', shape: 0, index: 2 }]);
+    const x = await screen.findByLabelText('x (m)');
+    // Moved by another edit (a drag on the canvas): the row shows it.
+    act(() => store.getState().edit((d) => setVertex(d, 0, 2, [2.7, 1.2])));
+    await waitFor(() => expect((x as HTMLInputElement).value).toBe('2.7'));
+    const y = screen.getByLabelText('y (m)');
+    await user.clear(y);
+    await user.type(y, '1.3{Enter}');
+    expect(store.getState().doc.shapes[0].points[2]).toEqual([2.7, 1.3]);
   });
 
   it('tells the user when a corrupt autosave was set aside', async () => {
