@@ -10,6 +10,7 @@
 import { sketchExtent, totalEdgeCount, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import type { EdgePairs } from '../pairRows';
+import { beyondHullSide } from './hullSides';
 import { separatingArcs } from './separatingArcs';
 
 /**
@@ -29,8 +30,11 @@ export class MovedShapes {
   /** Per disc d and straight edge e (at d x edges + e): the directions separating e from the disc (separatingArcs.ts). */
   private readonly mid: Float64Array;
   private readonly half: Float64Array;
-  /** Scratch bounding box, for pairs with an arc. */
-  private readonly box = new Float64Array(4);
+  /** With exact circles, a pair is kept only when each disc is beyond a side of its hull (hullSides.ts). */
+  private readonly sidesOnly: boolean;
+  /** Scratch for beyondHullSide: four corners, a disc, the sketch's size. */
+  private readonly corners = new Float64Array(12);
+  private readonly size: number;
 
   private constructor(
     private readonly E: EdgeSet,
@@ -38,6 +42,8 @@ export class MovedShapes {
     discs: number[],
   ) {
     this.movedEdge = movedEdge;
+    this.sidesOnly = E.arcs.circleCount > 0;
+    this.size = sketchExtent(E);
     this.discs = Float64Array.from(discs);
     this.discCount = discs.length / 3;
     this.mid = new Float64Array(this.discCount * E.count);
@@ -106,11 +112,10 @@ export class MovedShapes {
     }
     for (let j = i; j < N; j++) flags[j] = moved[j];
     const E = this.E,
-      D = this.discs,
       n = E.count;
+    // Arcs exist only with exact circles; their pairs' scenes reach past any simple bound, so they are computed.
     if (i >= n) {
-      for (let d = 0; d < D.length; d += 3)
-        for (let j = i; j < N; j++) if (!flags[j] && this.boxNear(d, i, j)) flags[j] = 1;
+      if (this.discCount > 0) flags.fill(1, i, N);
       return;
     }
     const mid = this.mid,
@@ -123,46 +128,38 @@ export class MovedShapes {
         flags.fill(1, i, N);
         return;
       }
-      // The pair's hull misses the disc when a direction separates both edges from it.
+      // The pair's hull misses the disc when a direction separates both edges from it;
+      // with exact circles the disc must also lie beyond one side of the hull.
       for (let j = i; j < n; j++) {
         if (flags[j]) continue;
         const hj = half[at + j];
         let gap = Math.abs(mi - mid[at + j]);
         if (gap > Math.PI) gap = 2 * Math.PI - gap;
         if (hj < 0 || gap > hi + hj) flags[j] = 1;
+        else if (this.sidesOnly && !this.beyondSide(d, i, j)) flags[j] = 1;
       }
-      for (let j = Math.max(i, n); j < N; j++) if (!flags[j] && this.boxNear(3 * d, i, j)) flags[j] = 1;
     }
+    if (this.discCount > 0 && N > n) flags.fill(1, Math.max(i, n), N);
   }
 
-  /** Disc d (offset into `discs`) against the bounding box of edges i and j, an arc counted as its whole circle. */
-  private boxNear(d: number, i: number, j: number): boolean {
-    const box = this.box;
-    box[0] = box[1] = Infinity;
-    box[2] = box[3] = -Infinity;
-    this.growBox(i);
-    this.growBox(j);
-    const D = this.discs;
-    const R = D[d + 2] + RELATIVE_SLACK * (box[2] - box[0] + box[3] - box[1]);
-    return !(D[d] + R < box[0] || D[d] - R > box[2] || D[d + 1] + R < box[1] || D[d + 1] - R > box[3]);
-  }
-
-  private growBox(e: number): void {
+  /** Disc d beyond a side of the hull of straight edges i and j (hullSides.ts). */
+  private beyondSide(d: number, i: number, j: number): boolean {
     const E = this.E,
-      box = this.box;
-    if (e < E.count) {
-      box[0] = Math.min(box[0], E.ax[e], E.bx[e]);
-      box[1] = Math.min(box[1], E.ay[e], E.by[e]);
-      box[2] = Math.max(box[2], E.ax[e], E.bx[e]);
-      box[3] = Math.max(box[3], E.ay[e], E.by[e]);
-      return;
-    }
-    const A = E.arcs;
-    const c = A.circle[e - E.count];
-    box[0] = Math.min(box[0], A.cx[c] - A.r[c]);
-    box[1] = Math.min(box[1], A.cy[c] - A.r[c]);
-    box[2] = Math.max(box[2], A.cx[c] + A.r[c]);
-    box[3] = Math.max(box[3], A.cy[c] + A.r[c]);
+      D = this.discs,
+      s = this.corners;
+    s[0] = E.ax[i];
+    s[1] = E.ay[i];
+    s[2] = E.bx[i];
+    s[3] = E.by[i];
+    s[4] = E.ax[j];
+    s[5] = E.ay[j];
+    s[6] = E.bx[j];
+    s[7] = E.by[j];
+    s[8] = D[3 * d];
+    s[9] = D[3 * d + 1];
+    s[10] = D[3 * d + 2];
+    s[11] = this.size;
+    return beyondHullSide(s);
   }
 }
 
