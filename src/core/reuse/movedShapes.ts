@@ -10,6 +10,8 @@
 import { sketchExtent, totalEdgeCount, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import type { EdgePairs } from '../pairRows';
+import { Curve } from '../arc/curve';
+import { convexHull } from '../arc/pairScene';
 import { beyondHullSide } from './hullSides';
 import { separatingArcs } from './separatingArcs';
 
@@ -34,6 +36,11 @@ export class MovedShapes {
   private readonly sidesOnly: boolean;
   /** Scratch for beyondHullSide: four corners, a disc, the sketch's size. */
   private readonly corners = new Float64Array(12);
+  /** Scratch for pairs with an arc: both curves, their outer points and hull (as the circle integrator takes them). */
+  private readonly curveA = new Curve();
+  private readonly curveB = new Curve();
+  private readonly outer: number[] = [];
+  private readonly hull: number[] = [];
   private readonly size: number;
 
   private constructor(
@@ -113,9 +120,9 @@ export class MovedShapes {
     for (let j = i; j < N; j++) flags[j] = moved[j];
     const E = this.E,
       n = E.count;
-    // Arcs exist only with exact circles; their pairs' scenes reach past any simple bound, so they are computed.
+    // Arcs exist only with exact circles: an arc's pairs are judged as the circle integrator judges them.
     if (i >= n) {
-      if (this.discCount > 0) flags.fill(1, i, N);
+      for (let j = i; j < N; j++) if (!flags[j] && !this.clearOfArcPair(i, j)) flags[j] = 1;
       return;
     }
     const mid = this.mid,
@@ -139,7 +146,39 @@ export class MovedShapes {
         else if (this.sidesOnly && !this.beyondSide(d, i, j)) flags[j] = 1;
       }
     }
-    if (this.discCount > 0 && N > n) flags.fill(1, Math.max(i, n), N);
+    for (let j = n; j < N; j++) if (!flags[j] && !this.clearOfArcPair(i, j)) flags[j] = 1;
+  }
+
+  /**
+   * Every disc lies beyond a side of the hull of the outer points of edges i and j,
+   * one of them an arc: the circle integrator's own hull (Curve.outerPoints, then
+   * convexHull) and side test (PairScene), with the discs' wider radius.
+   */
+  private clearOfArcPair(i: number, j: number): boolean {
+    if (this.discCount === 0) return true;
+    const out = this.outer,
+      H = this.hull;
+    out.length = 0;
+    this.curveA.load(this.E, i);
+    this.curveA.outerPoints(out);
+    this.curveB.load(this.E, j);
+    this.curveB.outerPoints(out);
+    convexHull(out, H);
+    const m = H.length >> 1;
+    if (m < 3) return false;
+    const D = this.discs;
+    for (let d = 0; d < D.length; d += 3) {
+      let beyond = false;
+      for (let k = 0; k < m && !beyond; k++) {
+        const q = k + 1 === m ? 0 : k + 1;
+        const ex = H[2 * q] - H[2 * k],
+          ey = H[2 * q + 1] - H[2 * k + 1];
+        const dist = (ex * (D[d + 1] - H[2 * k + 1]) - ey * (D[d] - H[2 * k])) / Math.sqrt(ex * ex + ey * ey);
+        beyond = dist < -D[d + 2];
+      }
+      if (!beyond) return false;
+    }
+    return true;
   }
 
   /** Disc d beyond a side of the hull of straight edges i and j (hullSides.ts). */
