@@ -207,4 +207,29 @@ describe('number fields', () => {
     expect(store.getState().doc.shapes[1].points[1]).toBe(exact);
     expect(store.getState().past).toHaveLength(0);
   });
+
+  it('a long point list (a tube as a 24-gon) stays folded until asked for, then edits as before', async () => {
+    const user = userEvent.setup();
+    const { store } = renderApp();
+    const ring = Array.from({ length: 24 }, (_, k): [number, number] => [
+      1.2 + 0.1 * Math.cos((2 * Math.PI * k) / 24),
+      0.6 + 0.1 * Math.sin((2 * Math.PI * k) / 24),
+    ]);
+    act(() =>
+      store
+        .getState()
+        .edit((d) => ({ ...d, shapes: [...d.shapes, { kind: 'solid', points: ring, surface: 'probe' }] })),
+    );
+    store.getState().setSelection([{ type: 'shape', shape: store.getState().doc.shapes.length - 1 }]);
+    const show = await screen.findByRole('button', { name: 'Show the 24 points' });
+    expect(screen.queryAllByLabelText('x (m)')).toHaveLength(0);
+    await user.click(show);
+    const fields = screen.getAllByLabelText('x (m)');
+    expect(fields).toHaveLength(24);
+    await user.clear(fields[3]);
+    await user.type(fields[3], '1.25{Enter}');
+    const last = store.getState().doc.shapes.length - 1;
+    expect(store.getState().doc.shapes[last].points[3]).toEqual([1.25, ring[3][1]]);
+    expect(screen.getByRole('button', { name: 'Hide the points' }).getAttribute('aria-expanded')).toBe('true');
+  });
 });

@@ -10,6 +10,7 @@ import { fmtLength } from '../matrix/format';
 import { ShapeCommands } from './ShapeCommands';
 import { TubeRowForm } from './TubeRowForm';
 import { PointsPaste } from './PointsPaste';
+import { PointList } from './PointList';
 import { CircleRow } from './CircleRow';
 
 export function SelectionPanel() {
@@ -137,11 +138,7 @@ export function SelectionPanel() {
             <h3>
               {shapeTitle(doc, p.shape)}: {shape.points.length} points
             </h3>
-            <div className="vertex-list">
-              {shape.points.map((q, k) => (
-                <VertexRow key={k} shape={p.shape} index={k} point={q} units={u} />
-              ))}
-            </div>
+            <PointList shape={p.shape} points={shape.points} units={u} />
             <PointsPaste shape={p.shape} />
           </div>
         );
