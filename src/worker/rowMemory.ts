@@ -18,8 +18,12 @@ export interface EarlierRows {
  */
 export const MAX_KEPT_PAIRS = 1 << 23;
 
-/** Spare buffers kept at most (one per answer the page may still hold, and one more). */
-const MAX_SPARES = 2;
+/**
+ * Spare buffers kept at most: the page hands back one answer's buffer per answer it
+ * files, and the next answer takes it, so one is enough; more would only hold memory
+ * (at 5000 edges a worker's share is tens of MB).
+ */
+const MAX_SPARES = 1;
 
 export class RowMemory {
   /** The rows kept from the last job, or null (none yet, too big, or the last job failed). */
