@@ -14,7 +14,7 @@ export class EdgePairs {
   readonly count: number;
   /** Lengths of every edge, sketch units. */
   readonly length: Float64Array;
-  /** Where blockers are looked for (kept so that a later sketch can be compared, see pairReuse.ts). */
+  /** Where blockers are looked for (kept so that a later sketch can be compared, see reuse/movedShapes.ts). */
   readonly obstacles: ObstacleIndex;
   private readonly straightCount: number;
   private readonly straight: PairIntegrator;

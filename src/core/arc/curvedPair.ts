@@ -2,7 +2,7 @@ import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
 import { Curve, towardTarget as towardTargetIn } from './curve';
-import { convexHull as convexHullIn, PairScene } from './pairScene';
+import { convexHull as convexHullIn, discMeetsHull as discMeetsHullIn, PairScene } from './pairScene';
 import { PieceView } from './pieceView';
 import {
   commonTangents as commonTangentsIn,
@@ -17,6 +17,7 @@ import {
 const orient = orientIn;
 const towardTarget = towardTargetIn;
 const convexHull = convexHullIn;
+const discMeetsHull = discMeetsHullIn;
 const commonTangents = commonTangentsIn;
 const touchAngles = touchAnglesIn;
 
@@ -81,15 +82,7 @@ export class CurvedPairIntegrator implements EventFilter {
     const pts = [E.ax[i], E.ay[i], E.bx[i], E.by[i], E.ax[j], E.ay[j], E.bx[j], E.by[j]];
     const H: number[] = [];
     convexHull(pts, H);
-    const n = H.length >> 1;
-    if (n < 3) return true;
-    for (let k = 0; k < n; k++) {
-      const m = k + 1 === n ? 0 : k + 1;
-      const ex = H[2 * m] - H[2 * k],
-        ey = H[2 * m + 1] - H[2 * k + 1];
-      if ((ex * (A.cy[c] - H[2 * k + 1]) - ey * (A.cx[c] - H[2 * k])) / Math.sqrt(ex * ex + ey * ey) < -r) return false;
-    }
-    return true;
+    return discMeetsHull(H, A.cx[c], A.cy[c], r);
   }
 
   /**

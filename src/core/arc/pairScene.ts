@@ -83,17 +83,7 @@ export class PairScene {
 
   /** False only when the disc lies surely outside one side of the hull. */
   private discMeets(cx: number, cy: number, r: number): boolean {
-    const H = this.hull,
-      n = H.length >> 1;
-    if (n < 3) return true;
-    for (let k = 0; k < n; k++) {
-      const m = k + 1 === n ? 0 : k + 1;
-      const ex = H[2 * m] - H[2 * k],
-        ey = H[2 * m + 1] - H[2 * k + 1];
-      const dist = (ex * (cy - H[2 * k + 1]) - ey * (cx - H[2 * k])) / Math.sqrt(ex * ex + ey * ey);
-      if (dist < -r) return false;
-    }
-    return true;
+    return discMeetsHull(this.hull, cx, cy, r);
   }
 
   /** False only when both ends lie surely outside one side of the hull. */
@@ -115,6 +105,24 @@ export class PairScene {
 }
 
 /** Convex hull (anticlockwise, flat x, y) of flat points `pts` into `out` (monotone chain, floats). */
+/**
+ * False only when the disc (cx, cy, r) lies surely outside one side of the convex
+ * hull H (x, y pairs, as convexHull gives it; sketch units); true for a hull of
+ * fewer than 3 points. The one test of "near a pair" for the exact-circle integrator.
+ */
+export function discMeetsHull(H: readonly number[], cx: number, cy: number, r: number): boolean {
+  const n = H.length >> 1;
+  if (n < 3) return true;
+  for (let k = 0; k < n; k++) {
+    const m = k + 1 === n ? 0 : k + 1;
+    const ex = H[2 * m] - H[2 * k],
+      ey = H[2 * m + 1] - H[2 * k + 1];
+    const dist = (ex * (cy - H[2 * k + 1]) - ey * (cx - H[2 * k])) / Math.sqrt(ex * ex + ey * ey);
+    if (dist < -r) return false;
+  }
+  return true;
+}
+
 export function convexHull(pts: number[], out: number[]): void {
   const n = pts.length >> 1;
   const idx: number[] = [];

@@ -11,7 +11,7 @@ import { sketchExtent, totalEdgeCount, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import type { EdgePairs } from '../pairRows';
 import { Curve } from '../arc/curve';
-import { convexHull } from '../arc/pairScene';
+import { convexHull, discMeetsHull } from '../arc/pairScene';
 import { beyondHullSide } from './hullSides';
 import { separatingArcs } from './separatingArcs';
 
@@ -32,16 +32,19 @@ export class MovedShapes {
   /** Per disc d and straight edge e (at d x edges + e): the directions separating e from the disc (separatingArcs.ts). */
   private readonly mid: Float64Array;
   private readonly half: Float64Array;
-  /** With exact circles, a pair is kept only when each disc is beyond a side of its hull (hullSides.ts). */
+  /**
+   * With exact circles, a pair is kept only when each disc is beyond a side of its
+   * hull: the circle integrator calls a shape near a pair unless it is.
+   */
   private readonly sidesOnly: boolean;
-  /** Scratch for beyondHullSide: four corners, a disc, the sketch's size. */
+  /** Scratch for beyondHullSide (straight pairs, no allocation): four corners, a disc, the sketch's size. */
   private readonly corners = new Float64Array(12);
+  private readonly size: number;
   /** Scratch for pairs with an arc: both curves, their outer points and hull (as the circle integrator takes them). */
   private readonly curveA = new Curve();
   private readonly curveB = new Curve();
   private readonly outer: number[] = [];
   private readonly hull: number[] = [];
-  private readonly size: number;
 
   private constructor(
     private readonly E: EdgeSet,
@@ -152,32 +155,22 @@ export class MovedShapes {
   /**
    * Every disc lies beyond a side of the hull of the outer points of edges i and j,
    * one of them an arc: the circle integrator's own hull (Curve.outerPoints, then
-   * convexHull) and side test (PairScene), with the discs' wider radius.
+   * convexHull) and side test (discMeetsHull), with the discs' wider radius. Pairs
+   * of straight edges take beyondHullSide, the same test without building a hull
+   * (building one allocates, which made a drag step several times slower).
    */
   private clearOfArcPair(i: number, j: number): boolean {
     if (this.discCount === 0) return true;
     const out = this.outer,
-      H = this.hull;
+      H = this.hull,
+      D = this.discs;
     out.length = 0;
     this.curveA.load(this.E, i);
     this.curveA.outerPoints(out);
     this.curveB.load(this.E, j);
     this.curveB.outerPoints(out);
     convexHull(out, H);
-    const m = H.length >> 1;
-    if (m < 3) return false;
-    const D = this.discs;
-    for (let d = 0; d < D.length; d += 3) {
-      let beyond = false;
-      for (let k = 0; k < m && !beyond; k++) {
-        const q = k + 1 === m ? 0 : k + 1;
-        const ex = H[2 * q] - H[2 * k],
-          ey = H[2 * q + 1] - H[2 * k + 1];
-        const dist = (ex * (D[d + 1] - H[2 * k + 1]) - ey * (D[d] - H[2 * k])) / Math.sqrt(ex * ex + ey * ey);
-        beyond = dist < -D[d + 2];
-      }
-      if (!beyond) return false;
-    }
+    for (let d = 0; d < D.length; d += 3) if (discMeetsHull(H, D[d], D[d + 1], D[d + 2])) return false;
     return true;
   }
 
