@@ -4,6 +4,8 @@ import { surfaceIndex } from '../document/surfaceIndex';
 import { shownResult } from './results/derive';
 
 export const selectDoc = (s: AppState) => s.doc;
+/** What the canvas draws: during a paced drag the newest position, which the document may not have taken yet. */
+export const selectDrawnDoc = (s: AppState) => s.gesturePreview ?? s.doc;
 export const selectUnits = (s: AppState) => s.doc.units;
 export const selectTool = (s: AppState) => s.tool;
 export const selectSelection = (s: AppState) => s.selection;

@@ -2,8 +2,8 @@
 // Debian's headless chromium and measures, over many pointer moves, the time
 // from a drag event to the updated view-factor table, and from a property
 // edit to the updated net-heat table (which must post no view-factor job).
-// Then opens a 1012-edge sketch and drags a tube for a few seconds with a pointer
-// move every 16 ms, counting table updates and canvas frames per second.
+// Then opens a 1012-edge sketch and drags a tube for a few seconds, the pointer
+// moving on every animation frame, counting table updates and canvas frames per second.
 // Prints min, median and p90; the targets are reported with a met / NOT met verdict, never asserted.
 import type { Page } from 'playwright-core';
 import { screenOf, startApp, type TestWindow } from '../e2e/harness';

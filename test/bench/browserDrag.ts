@@ -1,6 +1,6 @@
 // The large-sketch drags of the browser benchmark (test/bench/browser.ts) on the
-// 1012-edge sketch of bigSketch.ts: one tube is dragged for a few seconds with a
-// pointer move every 16 ms, not waiting for anything, as a hand does.
+// 1012-edge sketch of bigSketch.ts: one tube is dragged for a few seconds, the
+// pointer moving on every animation frame, not waiting for anything, as a hand does.
 import type { Page } from 'playwright-core';
 import type { SketchFile } from '../../src/state/sketchFile';
 import { screenOf, type TestWindow } from '../e2e/harness';
@@ -62,8 +62,8 @@ export interface FollowFigures {
 }
 
 /**
- * Drag the tube at sketch point `at` for `seconds`, one pointer move every 16 ms
- * back and forth along x (±0.3 sketch units), then undo the drag.
+ * Drag the tube at sketch point `at` for `seconds`, one pointer move per animation
+ * frame back and forth along x (±0.3 sketch units), then undo the drag.
  */
 export async function followDrag(page: Page, at: [number, number], seconds: number): Promise<FollowFigures> {
   await page.evaluate(() => {
@@ -109,8 +109,10 @@ export async function followDrag(page: Page, at: [number, number], seconds: numb
     frame[0] = (t: number) => {
       if (!d.on) return;
       d.frames.push(t);
-      // The store's document is what the canvas draws in this frame (React commits before paint).
-      const doc = w.__tautline.store.getState().doc;
+      // What the canvas draws in this frame (React commits before paint): the drag's
+      // newest position, which the document takes once the pipeline is free.
+      const st = w.__tautline.store.getState();
+      const doc = st.gesturePreview ?? st.doc;
       if (doc !== d.lastDoc) d.shown.push(t);
       d.lastDoc = doc;
       requestAnimationFrame(frame[0]);
@@ -133,15 +135,31 @@ export async function followDrag(page: Page, at: [number, number], seconds: numb
     d.drawMs = 0;
     return performance.now();
   });
-  const t0 = Date.now();
-  for (let i = 1; Date.now() - t0 < seconds * 1000; i++) {
-    // A triangle wave, 2 s per period: the tube sweeps ±0.3 around its place.
-    const phase = ((i * 16) % 2000) / 2000;
-    const x = phase < 0.5 ? -1 + 4 * phase : 3 - 4 * phase;
-    await page.mouse.move(sx + x * px, sy);
-    const wait = t0 + i * 16 - Date.now();
-    if (wait > 0) await new Promise((r) => setTimeout(r, wait));
-  }
+  // The page moves the pointer once per animation frame to where a hand would be
+  // by then, as the browser delivers a held mouse's moves (coalesced, one per
+  // frame): a busy page gets fewer moves, never a queue of stale ones. Driving
+  // every move from here instead would wait a round trip per move and cap the rate.
+  await page.evaluate(
+    ([x0, y0, span, ms]) => {
+      const w = window as unknown as DragWindow;
+      const target = document.querySelector('.konvajs-content')!;
+      const began = performance.now();
+      const step: ((t: number) => void)[] = [];
+      step[0] = () => {
+        const t = performance.now() - began;
+        if (t > ms) return;
+        // A triangle wave, 2 s per period: the tube sweeps ±0.3 around its place.
+        const phase = (t % 2000) / 2000;
+        const x = phase < 0.5 ? -1 + 4 * phase : 3 - 4 * phase;
+        const init = { clientX: x0 + x * span, clientY: y0, buttons: 1, pointerId: 1, pointerType: 'mouse' };
+        target.dispatchEvent(new PointerEvent('pointermove', { ...init, bubbles: true, cancelable: true }));
+        if (w.__drag.on) requestAnimationFrame(step[0]);
+      };
+      requestAnimationFrame(step[0]);
+    },
+    [sx, sy, px, seconds * 1000] as const,
+  );
+  await new Promise((r) => setTimeout(r, seconds * 1000 + 50));
   const d = await page.evaluate((from) => {
     const w = (window as unknown as DragWindow).__drag;
     w.on = false;

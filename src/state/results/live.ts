@@ -145,7 +145,15 @@ export function startLiveResults(store: AppStore, runner: JobRunner, api: Docume
   };
   let last = store.getState().doc;
   refresh(store, runner, api, last, pending, retire);
-  return store.subscribe((s) => {
+  // The state is read afresh, not taken from the listener's argument: a change made
+  // inside a listener (the gesture catching up) reaches later listeners first.
+  return store.subscribe(() => {
+    const s = store.getState();
+    // A paced drag (historySlice): the document takes the newest position once nothing is computing.
+    if (s.gesturePreview && s.gesturePreview !== s.doc && s.viewFactors.status !== 'computing') {
+      s.catchUpGesture();
+      return;
+    }
     if (s.doc === last) return;
     last = s.doc;
     refresh(store, runner, api, s.doc, pending, retire);

@@ -40,7 +40,7 @@ export const selectTool: DrawingTool<SelectGesture, 'select'> = {
     const [dx, dy] = dragOffset(drag.plan, e.at, s.gridStep, s.snap);
     if (dx === drag.offset[0] && dy === drag.offset[1]) return;
     drag.offset = [dx, dy];
-    s.updateGesture(moveSelection(drag.base, drag.plan.picks, dx, dy));
+    s.previewGesture(moveSelection(drag.base, drag.plan.picks, dx, dy));
   },
 
   release(ctx) {

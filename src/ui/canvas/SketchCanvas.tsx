@@ -3,7 +3,7 @@ import { Stage } from 'react-konva';
 import { useApp, useAppStore } from '../AppContext';
 import {
   selectCamera,
-  selectDoc,
+  selectDrawnDoc,
   selectDraft,
   selectFitRequest,
   selectHoverPair,
@@ -38,7 +38,7 @@ const selectCanvasProblems = (s: AppState) => canvasProblems(s.viewFactors);
 
 export function SketchCanvas() {
   const { ref, width, height } = useElementSize<HTMLDivElement>();
-  const doc = useApp(selectDoc);
+  const doc = useApp(selectDrawnDoc);
   const camera = useApp(selectCamera);
   const tool = useApp(selectTool);
   const selection = useApp(selectSelection);
