@@ -77,5 +77,5 @@ export function aggregatePackedRows(
       if (g > 0) G[row + edgeSurface[j]] += Wi * (g / Li);
     }
   }
-  return surfaceResult(n, weightLength, surfaceLength, G, closed);
+  return surfaceResult(n, weightLength, surfaceLength, G, closed, true);
 }

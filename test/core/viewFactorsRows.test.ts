@@ -8,7 +8,7 @@ import { buildEdges, type EdgeSet } from '../../src/core/edges';
 import { balancedRowSets, EdgePairs, packRows, packedLength, rowPairCount, unpackRows } from '../../src/core/pairRows';
 import type { CircleInput, PolygonInput } from '../../src/core/scene';
 import { aggregatePackedRows } from '../../src/core/packedSurfaces';
-import { aggregateToSurfaces } from '../../src/core/surfaces';
+import { aggregateToSurfaces, surfaceResult } from '../../src/core/surfaces';
 import { SurfaceAccumulator, SurfaceRowSummer } from '../../src/core/surfaceRows';
 import { computeViewFactors, edgeViewFactors } from '../../src/core/viewFactors';
 import { sketchArb } from './arbitraries';
@@ -179,6 +179,26 @@ describe('rows shared over workers', () => {
       ),
     ).toThrow(/row 1 out of range or twice/);
     expect(() => sum([[0, 1, 2]], [5])).toThrow(/holds 5 numbers for 3 rows/);
+  });
+
+  it('surface factors written over their exchange sums are the numbers a fresh array gets, bit for bit', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 9 }), fc.integer({ min: 0, max: 2 ** 31 - 1 }), (m, seed) => {
+        let x = seed || 1;
+        const next = () => ((x = (x * 16807) % 2147483647) / 2147483647) * 3;
+        // Nearly reciprocal sums (G_IJ against G_JI), a zero-length surface now and then.
+        const G = Float64Array.from({ length: m * m }, next);
+        for (let I = 0; I < m; I++) for (let J = 0; J < I; J++) G[I * m + J] = G[J * m + I] * (1 + 1e-15 * next());
+        const lengths = Float64Array.from({ length: m }, (_, I) => (I === 2 ? 0 : 1 + next()));
+        const fresh = surfaceResult(3, lengths, lengths, G, true);
+        const scratch = G.slice();
+        const over = surfaceResult(3, lengths, lengths, scratch, true, true);
+        expect(over.F).toBe(scratch);
+        expect(bytes(over.F)).toEqual(bytes(fresh.F));
+        expect(bytes(over.rowSumResidual)).toEqual(bytes(fresh.rowSumResidual));
+        expect(over.reciprocityResidual).toBe(fresh.reciprocityResidual);
+      }),
+    );
   });
 
   it('balanced row sets: every row once, ascending, pair counts within one row of each other', () => {
