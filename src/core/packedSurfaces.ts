@@ -36,6 +36,16 @@ export function packedRowIndex(n: number, rows: PackedRows): { part: Int32Array;
   return { part, base };
 }
 
+/** Rows summed per block (see aggregatePackedRows): the block's columns stay in the cache. */
+const BLOCK = 32;
+let scratch = new Float64Array(0);
+
+/** The block's column copies: one buffer, grown when a sketch needs more, never shrunk. */
+function columnScratch(length: number): Float64Array {
+  if (scratch.length < length) scratch = new Float64Array(length);
+  return scratch;
+}
+
 /**
  * View factors between surfaces from packed edge rows (exchange lengths g_ij in
  * the units of `edgeLength`, see packRows): F_ij = g_ij / L_i and
@@ -60,21 +70,33 @@ export function aggregatePackedRows(
   const { part, base } = packedRowIndex(n, rows);
   const packed = rows.packed;
   const G = new Float64Array(m * m); // G_IJ = L_I F_IJ, sketch units
-  for (let i = 0; i < n; i++) {
-    const row = edgeSurface[i] * m;
-    const Li = edgeLength[i];
-    const Wi = weightLength[i];
-    // Columns j < i: g_ji sits in row j's packed part (the cache lines of one
-    // column of packed rows are reused by the next few rows i).
-    for (let j = 0; j < i; j++) {
-      const g = packed[part[j]][base[j] + i];
-      if (g > 0) G[row + edgeSurface[j]] += Wi * (g / Li);
+  // Rows go in blocks of BLOCK. Row i's columns j < i (g_ji) sit in row j's packed
+  // part, one per row j: read one at a time they cost a cache miss each. So each
+  // block first copies them, BLOCK contiguous numbers per row j, into `column`
+  // (row i's at (i - start) * n + j); the sums below then run exactly as before.
+  const column = columnScratch(BLOCK * n);
+  for (let start = 0; start < n; start += BLOCK) {
+    const end = Math.min(n, start + BLOCK);
+    for (let j = 0; j < end - 1; j++) {
+      const from = packed[part[j]];
+      const b = base[j];
+      for (let i = Math.max(start, j + 1); i < end; i++) column[(i - start) * n + j] = from[b + i];
     }
-    const own = packed[part[i]];
-    const b = base[i];
-    for (let j = i; j < n; j++) {
-      const g = own[b + j];
-      if (g > 0) G[row + edgeSurface[j]] += Wi * (g / Li);
+    for (let i = start; i < end; i++) {
+      const row = edgeSurface[i] * m;
+      const Li = edgeLength[i];
+      const Wi = weightLength[i];
+      const at = (i - start) * n;
+      for (let j = 0; j < i; j++) {
+        const g = column[at + j];
+        if (g > 0) G[row + edgeSurface[j]] += Wi * (g / Li);
+      }
+      const own = packed[part[i]];
+      const b = base[i];
+      for (let j = i; j < n; j++) {
+        const g = own[b + j];
+        if (g > 0) G[row + edgeSurface[j]] += Wi * (g / Li);
+      }
     }
   }
   return surfaceResult(n, weightLength, surfaceLength, G, closed, true);

@@ -126,6 +126,26 @@ describe('rows shared over workers', () => {
     );
   });
 
+  it('sketches of several blocks of rows (over 32 edges): the same sums, bit for bit, per edge and in few surfaces', () => {
+    const ring = (cx: number, cy: number, r: number, k: number) =>
+      Array.from({ length: k }, (_, t) => [
+        cx + r * Math.cos((2 * Math.PI * t) / k),
+        cy + r * Math.sin((2 * Math.PI * t) / k),
+      ]).flat();
+    const polygons: PolygonInput[] = [
+      { kind: 'enclosure', points: ring(0, 0, 10, 70) },
+      { kind: 'solid', points: ring(-4, 0, 1.5, 17) },
+      { kind: 'solid', points: ring(4, 1, 2, 23) },
+      { kind: 'solid', points: ring(0, -5, 1, 6) },
+    ];
+    expect(buildEdges(polygons, []).count).toBe(116);
+    for (const [m, seed] of [
+      [1000, 0],
+      [3, 7],
+    ])
+      checkScene(polygons, [], m, seed);
+  });
+
   it('unpackRows writes what a plain pair-by-pair loop writes, over many rows in several parts', () => {
     // n = 700 edges in three parts; packed values
     // include zeros (pairs that do not see each other) and the lengths differ per edge.
