@@ -4,8 +4,31 @@
 import type { Page } from 'playwright-core';
 import type { SketchFile } from '../../src/state/sketchFile';
 import { screenOf, type TestWindow } from '../e2e/harness';
+import { tubeScene } from './scenes';
 
 export { bigSketch } from './bigSketch';
+
+/**
+ * The drag-size scene of `npm run bench` (scenes.ts: 6 bodies of 22 sides in a box of
+ * 18 wall edges, seed 42) as a sketch file, every edge a surface; `body` is the
+ * centre of its first body (sketch units).
+ */
+export function dragSizeSketch(): { sketch: SketchFile; body: [number, number]; edges: number } {
+  const scene = tubeScene(42, 6, 22, 18);
+  let edges = 0;
+  const shapes = scene.polygons.map((p, s) => {
+    const points: [number, number][] = [];
+    for (let k = 0; k < p.points.length; k += 2) points.push([p.points[k], p.points[k + 1]]);
+    edges += points.length;
+    return { kind: p.kind, points, surface: points.map((_, k) => `s${s + 1}.${k + 1}`) };
+  });
+  const first = shapes[1].points;
+  const body: [number, number] = [
+    first.reduce((x, q) => x + q[0], 0) / first.length,
+    first.reduce((y, q) => y + q[1], 0) / first.length,
+  ];
+  return { sketch: { version: 2, units: 'm', shapes }, body, edges };
+}
 
 type DragWindow = TestWindow & {
   __drag: {
