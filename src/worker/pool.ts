@@ -5,6 +5,7 @@
 // pool (terminate: every worker, so no part of a dropped job keeps running) and
 // starts a fresh one.
 import { balancedRowSets } from '../core/pairRows';
+import { allRows } from '../core/viewFactors';
 import { assembleAnswer } from './assemble';
 import type { WorkerHandle } from './client';
 import { isSurfaceAnswer, jobEdgeCount, type RowsAnswer, type ViewFactorAnswer, type ViewFactorJob } from './job';
@@ -40,14 +41,43 @@ export function workersForJob(edgeCount: number, available: number, minPairs = M
 }
 
 /**
- * The pool as one `WorkerHandle`. `workers` are started by the caller and ended by
- * `terminate`. `minPairsPerWorker` (tests) overrides MIN_PAIRS_PER_WORKER.
+ * Most pairs of a job computed on the page itself: for a job this small (about 180
+ * edges, a few ms) the round trip to the workers (messages, waking their threads,
+ * putting the parts together) costs more than the job. Not for surface sums.
  */
-export function poolHandle(workers: readonly RowWorker[], minPairsPerWorker = MIN_PAIRS_PER_WORKER): WorkerHandle {
+export const PAGE_MAX_PAIRS = 16384;
+
+/** Most exact circles of a job computed on the page: curved pairs cost far more than straight ones. */
+export const PAGE_MAX_CIRCLES = 8;
+
+/** True when `job` is small enough to compute on the page (see PAGE_MAX_PAIRS). */
+export function runsOnPage(job: ViewFactorJob): boolean {
+  if (job.surfaces || (job.circles?.length ?? 0) > PAGE_MAX_CIRCLES) return false;
+  const n = jobEdgeCount(job);
+  return (n * (n + 1)) / 2 <= PAGE_MAX_PAIRS;
+}
+
+/**
+ * The pool as one `WorkerHandle`. `workers` are started by the caller and ended by
+ * `terminate`. `minPairsPerWorker` (tests) overrides MIN_PAIRS_PER_WORKER. `page`,
+ * when given, computes the jobs `runsOnPage` accepts, all rows in one part.
+ */
+export function poolHandle(
+  workers: readonly RowWorker[],
+  minPairsPerWorker = MIN_PAIRS_PER_WORKER,
+  page?: RowWorker,
+): WorkerHandle {
   if (workers.length === 0) throw new Error('a worker pool needs at least one worker');
+  // Answers the page computed: their buffers go back to the page's memory.
+  const fromPage = new WeakSet<ViewFactorAnswer>();
   return {
     async compute(job: ViewFactorJob): Promise<ViewFactorAnswer> {
       const n = jobEdgeCount(job);
+      if (page && runsOnPage(job)) {
+        const answer = assembleAnswer(job, n, [await page.computeRows(job, allRows(n))]);
+        fromPage.add(answer);
+        return answer;
+      }
       const sets = balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker));
       const parts = await Promise.all(sets.map((rows, k) => workers[k].computeRows(job, rows)));
       return assembleAnswer(job, n, parts);
@@ -55,6 +85,10 @@ export function poolHandle(workers: readonly RowWorker[], minPairsPerWorker = MI
     // Part k of an answer came from worker k (the row sets are dealt in that order).
     recycle(answer: ViewFactorAnswer) {
       if (isSurfaceAnswer(answer)) return;
+      if (fromPage.has(answer)) {
+        page?.recycle?.(answer.rows.packed.filter((packed) => packed.length > 0));
+        return;
+      }
       answer.rows.packed.forEach((packed, k) => {
         if (k < workers.length && packed.length > 0) workers[k].recycle?.([packed]);
       });

@@ -1,9 +1,12 @@
 // Start the real browser workers (Vite bundles them from this URL form): one per
-// logical core (navigator.hardwareConcurrency, capped), sharing each job's rows.
+// logical core (navigator.hardwareConcurrency, capped), sharing each job's rows;
+// jobs too small to be worth a round trip run on the page (pool.ts, runsOnPage).
 import * as Comlink from 'comlink';
 import type { WorkerHandle } from './client';
 import type { ViewFactorApi } from './job';
-import { poolHandle, poolSize, type RowWorker } from './pool';
+import { MIN_PAIRS_PER_WORKER, poolHandle, poolSize, type RowWorker } from './pool';
+import { computeRows } from './api';
+import { RowMemory } from './rowMemory';
 
 function spawnRowWorker(): RowWorker {
   const worker = new Worker(new URL('./viewFactorWorker.ts', import.meta.url), { type: 'module' });
@@ -20,8 +23,21 @@ function spawnRowWorker(): RowWorker {
   };
 }
 
+/**
+ * The page's own row worker for small jobs (pool.ts, runsOnPage): the same rows
+ * code in this thread, with its own memory of the last rows for drags.
+ */
+function pageRowWorker(): RowWorker {
+  const memory = new RowMemory();
+  return {
+    computeRows: (job, rows) => Promise.resolve(computeRows(job, rows, memory)),
+    recycle: (buffers) => memory.recycle(buffers),
+    terminate: () => {},
+  };
+}
+
 /** The view-factor pool as one handle for the client (replaced whole after a failure). */
 export function spawnViewFactorWorker(): WorkerHandle {
   const cores = typeof navigator === 'undefined' ? 1 : navigator.hardwareConcurrency;
-  return poolHandle(Array.from({ length: poolSize(cores) }, spawnRowWorker));
+  return poolHandle(Array.from({ length: poolSize(cores) }, spawnRowWorker), MIN_PAIRS_PER_WORKER, pageRowWorker());
 }

@@ -15,7 +15,16 @@ import {
   type ViewFactorApi,
   type ViewFactorJob,
 } from '../../src/worker/job';
-import { MAX_POOL_SIZE, poolHandle, poolSize, workersForJob, type RowWorker } from '../../src/worker/pool';
+import {
+  MAX_POOL_SIZE,
+  PAGE_MAX_CIRCLES,
+  PAGE_MAX_PAIRS,
+  poolHandle,
+  poolSize,
+  runsOnPage,
+  workersForJob,
+  type RowWorker,
+} from '../../src/worker/pool';
 import { aggregateToSurfaces } from '../../src/core/surfaces';
 import { mixedSceneArb, edgeCountOf } from '../core/arc/arbitraries';
 import { edgeMatrixOf } from './edgeMatrix';
@@ -159,5 +168,62 @@ describe('view-factor pool', () => {
     expect(answer.rows.packed).toHaveLength(3);
     handle.recycle?.(answer);
     expect(handed).toEqual(answer.rows.packed.map((p, k) => ({ worker: k, lengths: [p.length] })));
+  });
+
+  it('computes small jobs on the page, the same bits as the workers, and hands their buffers back to the page', async () => {
+    const calls: string[] = [];
+    const handed: string[] = [];
+    const worker = (name: string): RowWorker => ({
+      computeRows: (job, rows) => {
+        calls.push(name);
+        return Promise.resolve(viewFactorApi.computeRows(job, rows) as RowsAnswer);
+      },
+      recycle: () => handed.push(name),
+      terminate: () => {},
+    });
+    const handle = poolHandle([worker('worker 0'), worker('worker 1')], 1, worker('page'));
+    // A 5-edge duct: on the page, every row in one part, the same bits as one thread.
+    const small = jobFromPolygons([{ kind: 'enclosure', points: [0, 0, 4, 0, 4, 1, 2, 2, 0, 1] }]);
+    expect(runsOnPage(small)).toBe(true);
+    const answer = await handle.compute(small);
+    if (isSurfaceAnswer(answer)) throw new Error('expected edge factors');
+    expect(calls).toEqual(['page']);
+    expect(answer.rows.packed).toHaveLength(1);
+    const single = computeEdgeViewFactors(small);
+    if (isSurfaceAnswer(single)) throw new Error('expected edge factors');
+    expect(bytes(edgeMatrixOf(answer))).toEqual(bytes(edgeMatrixOf(single)));
+    handle.recycle?.(answer);
+    expect(handed).toEqual(['page']);
+    // Past PAGE_MAX_PAIRS (a 200-gon: 20 100 pairs), the workers share it.
+    const ring = Array.from({ length: 200 }, (_, k) => [
+      Math.cos((2 * Math.PI * k) / 200),
+      Math.sin((2 * Math.PI * k) / 200),
+    ]);
+    const big = jobFromPolygons([{ kind: 'enclosure', points: ring.flat() }]);
+    expect(runsOnPage(big)).toBe(false);
+    calls.length = 0;
+    await handle.compute(big);
+    expect(calls.sort()).toEqual(['worker 0', 'worker 1']);
+  });
+
+  it('runs on the page only small edge jobs with few exact circles, never surface sums', () => {
+    const square = (x: number, y: number) => [x, y, x + 0.1, y, x + 0.1, y + 0.1, x, y + 0.1];
+    const box = { kind: 'enclosure' as const, points: [0, 0, 10, 0, 10, 4, 0, 4] };
+    const circles = (k: number) =>
+      Array.from({ length: k }, (_, c) => ({ kind: 'solid' as const, cx: 0.5 + c, cy: 2, radius: 0.2, arcs: 1 }));
+    expect(runsOnPage(jobFromPolygons([box], circles(PAGE_MAX_CIRCLES)))).toBe(true);
+    expect(runsOnPage(jobFromPolygons([box], circles(PAGE_MAX_CIRCLES + 1)))).toBe(false);
+    // 4 + 4k edges: the largest k whose pairs n(n + 1)/2 fit PAGE_MAX_PAIRS, and one more square.
+    let k = 0;
+    while (((8 + 4 * k) * (9 + 4 * k)) / 2 <= PAGE_MAX_PAIRS) k++;
+    const solids = (m: number) =>
+      Array.from({ length: m }, (_, t) => ({
+        kind: 'solid' as const,
+        points: square(0.2 + 0.3 * (t % 30), 0.2 + 0.3 * Math.floor(t / 30)),
+      }));
+    expect(runsOnPage(jobFromPolygons([box, ...solids(k)]))).toBe(true);
+    expect(runsOnPage(jobFromPolygons([box, ...solids(k + 1)]))).toBe(false);
+    const summed = { ...jobFromPolygons([box]), surfaces: { edgeSurface: Int32Array.from([0, 0, 0, 0]), count: 1 } };
+    expect(runsOnPage(summed)).toBe(false);
   });
 });
