@@ -97,7 +97,10 @@ export function createViewFactorApi(): ViewFactorApi {
       return Comlink.transfer(r, transferables(r));
     },
     computeRows(job: ViewFactorJob, rows: Int32Array) {
+      const t0 = performance.now();
       const r = computeRows(job, rows, memory);
+      // What these rows cost this thread: the pool decides from it where the next job like it runs.
+      r.elapsedMs = performance.now() - t0;
       return Comlink.transfer(r, transferables(r));
     },
     recycle(buffers: Float64Array[]) {

@@ -74,8 +74,10 @@ export type RowsAnswer =
       packed: Float64Array;
       /** Pairs computed for this answer; the others were copied from the worker's previous answer. */
       computed: number;
+      /** Time the worker spent on these rows, ms (set by a worker's API, not by computeRows). */
+      elapsedMs?: number;
     }
-  | { kind: 'surfaces'; edgeLength: Float64Array; closed: boolean; sums: SurfaceRowSums };
+  | { kind: 'surfaces'; edgeLength: Float64Array; closed: boolean; sums: SurfaceRowSums; elapsedMs?: number };
 
 export interface ViewFactorApi {
   compute(job: ViewFactorJob): Promise<ViewFactorAnswer> | ViewFactorAnswer;

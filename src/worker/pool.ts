@@ -41,26 +41,39 @@ export function workersForJob(edgeCount: number, available: number, minPairs = M
 }
 
 /**
- * Most pairs of a job computed on the page itself: for a job this small (about 180
- * edges, a few ms) the round trip to the workers (messages, waking their threads,
- * putting the parts together) costs more than the job. Not for surface sums.
+ * Most pairs of a job computed on the page itself (about 180 edges). Surface sums
+ * never are. Within it, a job runs on the page only when the last job of the same
+ * shapes took at most PAGE_BUDGET_MS on one thread (see poolHandle).
  */
 export const PAGE_MAX_PAIRS = 16384;
 
-/** Most exact circles of a job computed on the page: curved pairs cost far more than straight ones. */
-export const PAGE_MAX_CIRCLES = 8;
+/**
+ * Longest the last job of the same shapes may have taken, ms summed over its
+ * threads, for the next one to run on the page: a few ms, well inside a frame;
+ * below it the round trip to the workers (messages, waking their threads,
+ * putting the parts together) costs more than the job. A few exact circles that
+ * see one another past others can cost tens of ms however few their edges.
+ */
+export const PAGE_BUDGET_MS = 8;
 
-/** True when `job` is small enough to compute on the page (see PAGE_MAX_PAIRS). */
+/** True when `job` is small enough to compute on the page, if it is also cheap enough (PAGE_BUDGET_MS). */
 export function runsOnPage(job: ViewFactorJob): boolean {
-  if (job.surfaces || (job.circles?.length ?? 0) > PAGE_MAX_CIRCLES) return false;
+  if (job.surfaces) return false;
   const n = jobEdgeCount(job);
   return (n * (n + 1)) / 2 <= PAGE_MAX_PAIRS;
+}
+
+/** The shapes of a job as far as its cost goes: a drag keeps them, adding a point or a shape does not. */
+function shapesOf(job: ViewFactorJob): string {
+  return `${job.polygons.map((p) => p.points.length >> 1).join(',')};${(job.circles ?? []).map((c) => c.arcs).join(',')}`;
 }
 
 /**
  * The pool as one `WorkerHandle`. `workers` are started by the caller and ended by
  * `terminate`. `minPairsPerWorker` (tests) overrides MIN_PAIRS_PER_WORKER. `page`,
- * when given, computes the jobs `runsOnPage` accepts, all rows in one part.
+ * when given, computes all rows of a job `runsOnPage` accepts whose shapes' last
+ * job took at most PAGE_BUDGET_MS: the first job of new shapes always goes to the
+ * workers, and a page job over the budget sends the next one back to them.
  */
 export function poolHandle(
   workers: readonly RowWorker[],
@@ -70,16 +83,24 @@ export function poolHandle(
   if (workers.length === 0) throw new Error('a worker pool needs at least one worker');
   // Answers the page computed: their buffers go back to the page's memory.
   const fromPage = new WeakSet<ViewFactorAnswer>();
+  // What the last job cost one thread, ms (unknown: Infinity), and its shapes.
+  let last = { shapes: '', ms: Infinity };
   return {
     async compute(job: ViewFactorJob): Promise<ViewFactorAnswer> {
       const n = jobEdgeCount(job);
-      if (page && runsOnPage(job)) {
-        const answer = assembleAnswer(job, n, [await page.computeRows(job, allRows(n))]);
+      const shapes = shapesOf(job);
+      const cheap = last.shapes === shapes && last.ms <= PAGE_BUDGET_MS;
+      if (page && cheap && runsOnPage(job)) {
+        const t0 = performance.now();
+        const part = await page.computeRows(job, allRows(n));
+        last = { shapes, ms: performance.now() - t0 };
+        const answer = assembleAnswer(job, n, [part]);
         fromPage.add(answer);
         return answer;
       }
       const sets = balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker));
       const parts = await Promise.all(sets.map((rows, k) => workers[k].computeRows(job, rows)));
+      last = { shapes, ms: parts.reduce((sum, p) => sum + (p.elapsedMs ?? Infinity), 0) };
       return assembleAnswer(job, n, parts);
     },
     // Part k of an answer came from worker k (the row sets are dealt in that order).
