@@ -90,18 +90,19 @@ export function poolHandle(
       const n = jobEdgeCount(job);
       const shapes = shapesOf(job);
       const cheap = last.shapes === shapes && last.ms <= PAGE_BUDGET_MS;
-      if (page && cheap && runsOnPage(job)) {
-        const t0 = performance.now();
-        const part = await page.computeRows(job, allRows(n));
-        last = { shapes, ms: performance.now() - t0 };
-        const answer = assembleAnswer(job, n, [part]);
-        fromPage.add(answer);
-        return answer;
-      }
-      const sets = balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker));
-      const parts = await Promise.all(sets.map((rows, k) => workers[k].computeRows(job, rows)));
+      const onPage = page !== undefined && cheap && runsOnPage(job);
+      const parts = onPage
+        ? [await page.computeRows(job, allRows(n))]
+        : await Promise.all(
+            balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker)).map((rows, k) =>
+              workers[k].computeRows(job, rows),
+            ),
+          );
+      // Each part reports what its rows cost its thread (a worker's API times them).
       last = { shapes, ms: parts.reduce((sum, p) => sum + (p.elapsedMs ?? Infinity), 0) };
-      return assembleAnswer(job, n, parts);
+      const answer = assembleAnswer(job, n, parts);
+      if (onPage) fromPage.add(answer);
+      return answer;
     },
     // Part k of an answer came from worker k (the row sets are dealt in that order).
     recycle(answer: ViewFactorAnswer) {

@@ -5,8 +5,7 @@ import * as Comlink from 'comlink';
 import type { WorkerHandle } from './client';
 import type { ViewFactorApi } from './job';
 import { MIN_PAIRS_PER_WORKER, poolHandle, poolSize, type RowWorker } from './pool';
-import { computeRows } from './api';
-import { RowMemory } from './rowMemory';
+import { createViewFactorApi } from './api';
 
 function spawnRowWorker(): RowWorker {
   const worker = new Worker(new URL('./viewFactorWorker.ts', import.meta.url), { type: 'module' });
@@ -24,14 +23,14 @@ function spawnRowWorker(): RowWorker {
 }
 
 /**
- * The page's own row worker for small jobs (pool.ts, runsOnPage): the same rows
- * code in this thread, with its own memory of the last rows for drags.
+ * The page's own row worker for small jobs (pool.ts, runsOnPage): a worker's API
+ * run in this thread, with its own memory of the last rows for drags.
  */
 function pageRowWorker(): RowWorker {
-  const memory = new RowMemory();
+  const api = createViewFactorApi();
   return {
-    computeRows: (job, rows) => Promise.resolve(computeRows(job, rows, memory)),
-    recycle: (buffers) => memory.recycle(buffers),
+    computeRows: (job, rows) => Promise.resolve(api.computeRows(job, rows)),
+    recycle: (buffers) => void api.recycle(buffers),
     terminate: () => {},
   };
 }

@@ -4,33 +4,8 @@ import { CanvasController } from '../../src/state/canvasController';
 import { HISTORY_LIMIT } from '../../src/state/historySlice';
 import { setVertex } from '../../src/state/edits/shapeEdits';
 import type { Point, SketchFile } from '../../src/state/sketchFile';
+import { box } from './boxSketch';
 
-const box: SketchFile = {
-  version: 1,
-  units: 'm',
-  shapes: [
-    {
-      kind: 'enclosure',
-      points: [
-        [0, 0],
-        [4, 0],
-        [4, 2],
-        [0, 2],
-      ],
-      surface: ['floor', 'right', 'roof', 'left'],
-    },
-    {
-      kind: 'solid',
-      points: [
-        [1.75, 0.75],
-        [2.25, 0.75],
-        [2.25, 1.25],
-        [1.75, 1.25],
-      ],
-      surface: 'block',
-    },
-  ],
-};
 const at = (p: Point, shift = false) => ({ at: p, shift, tolerance: 0.05 });
 
 describe('undo and redo', () => {

@@ -173,23 +173,18 @@ describe('view-factor pool', () => {
   it('computes a small, cheap job on the page, the same bits as the workers, once a job of its shapes was cheap; its buffers go back to the page', async () => {
     const calls: string[] = [];
     const handed: string[] = [];
-    // `cost`: ms each fake part reports (as a worker's API does); the page's own time is measured.
-    const worker = (name: string, cost: () => number, stall = 0): RowWorker => ({
+    // `cost`: ms each fake part reports, as a worker's API (the page's too) times its rows.
+    const worker = (name: string, cost: () => number): RowWorker => ({
       computeRows: (job, rows) => {
         calls.push(name);
-        const t0 = performance.now();
-        while (performance.now() - t0 < stall); // a page job that takes this long
         return Promise.resolve({ ...(viewFactorApi.computeRows(job, rows) as RowsAnswer), elapsedMs: cost() });
       },
       recycle: () => handed.push(name),
       terminate: () => {},
     });
     let workerCost = 1;
-    let pageStall = 0;
-    const page: RowWorker = {
-      ...worker('page', () => 0),
-      computeRows: (job, rows) => worker('page', () => 0, pageStall).computeRows(job, rows),
-    };
+    let pageCost = 0;
+    const page = worker('page', () => pageCost);
     const handle = poolHandle([worker('worker 0', () => workerCost), worker('worker 1', () => workerCost)], 1, page);
     const duct = (y: number) => jobFromPolygons([{ kind: 'enclosure', points: [0, 0, 4, 0, 4, 1, 2, y, 0, 1] }]);
     const single = computeEdgeViewFactors(duct(2.1));
@@ -209,12 +204,12 @@ describe('view-factor pool', () => {
     expect(handed).toEqual(['page']);
     // A page job over the budget sends the next one back to the workers, and they keep
     // it while their jobs cost more than the budget; a cheap one brings the next back.
-    pageStall = PAGE_BUDGET_MS + 2;
+    pageCost = PAGE_BUDGET_MS + 2;
     workerCost = PAGE_BUDGET_MS + 1;
     calls.length = 0;
     for (const y of [2.2, 2.3, 2.4]) await handle.compute(duct(y));
     expect(calls).toEqual(['page', 'worker 0', 'worker 1', 'worker 0', 'worker 1']);
-    pageStall = 0;
+    pageCost = 0;
     workerCost = 1;
     calls.length = 0;
     for (const y of [2.5, 2.6]) await handle.compute(duct(y));

@@ -104,7 +104,6 @@ export class PairScene {
   }
 }
 
-/** Convex hull (anticlockwise, flat x, y) of flat points `pts` into `out` (monotone chain, floats). */
 /**
  * False only when the disc (cx, cy, r) lies surely outside one side of the convex
  * hull H (x, y pairs, as convexHull gives it; sketch units); true for a hull of
@@ -123,6 +122,7 @@ export function discMeetsHull(H: readonly number[], cx: number, cy: number, r: n
   return true;
 }
 
+/** Convex hull (anticlockwise, flat x, y) of flat points `pts` into `out` (monotone chain, floats). */
 export function convexHull(pts: number[], out: number[]): void {
   const n = pts.length >> 1;
   const idx: number[] = [];

@@ -7,35 +7,9 @@ import { setVertex } from '../../../src/state/edits/shapeEdits';
 import { emptySketch } from '../../../src/state/documentSlice';
 import { ViewFactorClient } from '../../../src/worker/client';
 import { viewFactorApi } from '../../../src/worker/api';
-import type { SketchFile } from '../../../src/state/sketchFile';
 import { spawner } from '../../worker/fakeWorker';
+import { box } from '../boxSketch';
 
-const box: SketchFile = {
-  version: 1,
-  units: 'm',
-  shapes: [
-    {
-      kind: 'enclosure',
-      points: [
-        [0, 0],
-        [4, 0],
-        [4, 2],
-        [0, 2],
-      ],
-      surface: ['floor', 'right', 'roof', 'left'],
-    },
-    {
-      kind: 'solid',
-      points: [
-        [1.75, 0.75],
-        [2.25, 0.75],
-        [2.25, 1.25],
-        [1.75, 1.25],
-      ],
-      surface: 'block',
-    },
-  ],
-};
 const flush = () => new Promise((r) => setTimeout(r, 0));
 /** The real core, run in-thread. */
 const inThread: JobRunner = {

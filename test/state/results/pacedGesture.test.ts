@@ -12,33 +12,8 @@ import { viewFactorApi } from '../../../src/worker/api';
 import type { JobOutcome } from '../../../src/worker/client';
 import type { ViewFactorJob } from '../../../src/worker/job';
 import type { SketchFile } from '../../../src/state/sketchFile';
+import { box } from '../boxSketch';
 
-const box: SketchFile = {
-  version: 1,
-  units: 'm',
-  shapes: [
-    {
-      kind: 'enclosure',
-      points: [
-        [0, 0],
-        [4, 0],
-        [4, 2],
-        [0, 2],
-      ],
-      surface: ['floor', 'right', 'roof', 'left'],
-    },
-    {
-      kind: 'solid',
-      points: [
-        [1.75, 0.75],
-        [2.25, 0.75],
-        [2.25, 1.25],
-        [1.75, 1.25],
-      ],
-      surface: 'block',
-    },
-  ],
-};
 const block = [{ type: 'shape' as const, shape: 1 }];
 const flush = () => new Promise((r) => setTimeout(r, 0));
 
