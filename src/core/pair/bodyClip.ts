@@ -35,8 +35,8 @@ const STRADDLING = 2;
 
 export class BodyClipper {
   private readonly clipOut: SegmentClip = {
-    t0: 0,
-    t1: 1,
+    t0: NaN, // fractions: NaN, a double, until set (see ViewRegion's box)
+    t1: NaN,
     startInside: false,
     endInside: false,
     startSide: -1,

@@ -8,9 +8,7 @@ import type { ViewRegion } from './viewRegion';
 // Which edges can block the view of an edge pair: every edge that enters the interior
 // of the view region H, clipped to H (bodyClip.ts). Obstacles that blocked earlier
 // pairs of the same edges are tried first; then bodies and walls of re-entrant pockets
-// come from the lists shared by a row's pairs with one group of edges
-// (pairCandidates.ts), or, where its triangle is too thin, from the indexes searched
-// with the pair's own region.
+// come from the lists shared by the pairs of two groups of edges (pairCandidates.ts).
 
 export class ObstacleGatherer {
   private readonly clip: BodyClipper;
@@ -33,7 +31,7 @@ export class ObstacleGatherer {
   constructor(
     private readonly e: EdgeSet,
     private readonly ob: ObstacleIndex,
-    private readonly region: ViewRegion,
+    region: ViewRegion,
     private readonly pieces: ObstaclePieces,
   ) {
     this.clip = new BodyClipper(e, ob, region, pieces);
@@ -58,9 +56,7 @@ export class ObstacleGatherer {
    * pieces are incomplete.
    */
   gather(i: number, j: number): boolean {
-    const ob = this.ob,
-      R = this.region,
-      clip = this.clip;
+    const clip = this.clip;
     clip.begin(i, j);
     const hi = this.hint[i],
       hj = this.hint[j],
@@ -83,13 +79,10 @@ export class ObstacleGatherer {
     if (hj2 !== hi && hj2 !== hj && hj2 !== hi2 && this.probe(hj2, 3)) return true;
     // Bodies are placed first and clipped after, so a pair that one body blocks
     // clips none in vain, and one whose chain blocks stops at that body.
-    const listed = this.candidates.find(i, j);
-    if (listed) {
-      const list = this.candidates.bodies;
-      const end = this.candidates.bodyEnd;
-      for (let k = this.candidates.bodyStart; k < end; k++) if (this.visitBody(list[k])) break;
-    } else if (ob.bodyTree) ob.bodyTree.search(R, this.visitBody);
-    else for (let b = 0; b < ob.bodyCount && !clip.blocked; b++) if (!this.wasProbed(b)) clip.placeLater(b);
+    const lists = this.candidates;
+    lists.find(i, j);
+    const bodies = lists.bodies;
+    for (let k = lists.bodyStart; k < lists.bodyEnd; k++) if (this.visitBody(bodies[k])) break;
     if (clip.blocked) {
       this.remember(i, j, clip.blocker);
       return true;
@@ -101,11 +94,8 @@ export class ObstacleGatherer {
       const chain = this.pieces.blockingChain(nextEdge, from);
       if (chain >= 0) return this.blockedByChain(i, j, chain);
     }
-    if (listed) {
-      const list = this.candidates.walls;
-      const end = this.candidates.wallEnd;
-      for (let k = this.candidates.wallStart; k < end; k++) this.visitWall(list[k]);
-    } else ob.wallTree.search(R, this.visitWall);
+    const walls = lists.walls;
+    for (let k = lists.wallStart; k < lists.wallEnd; k++) this.visitWall(walls[k]);
     const chain = this.pieces.blockingChain(nextEdge, 0);
     if (chain >= 0) return this.blockedByChain(i, j, chain);
     this.pieces.sortByEdge();

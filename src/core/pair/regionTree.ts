@@ -1,14 +1,8 @@
-import { SIDE_ORDER as SIDE_ORDER_IN, type ViewRegion } from './viewRegion';
-
-// Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
-// applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
-const SIDE_ORDER = SIDE_ORDER_IN;
-
-// A static tree of bounding boxes (sketch units) searched with the view region H
-// itself, not its bounding box: a node is skipped when its box lies wholly outside
-// one side of H. For a long, slanted H the box of H covers far more than H, and the
-// obstacles it admits grow with the sketch's detail; those H admits do not. flatbush
-// searches by box only (and allocates per search), hence this small tree.
+// A static tree of bounding boxes (sketch units) searched with a convex region itself,
+// not its bounding box: a node is skipped when its box lies wholly outside one side of
+// the region. For a long, slanted region its box covers far more than the region, and
+// the obstacles it admits grow with the sketch's detail; those the region admits do
+// not. flatbush searches by box only (and allocates per search), hence this small tree.
 // Built once per sketch; a search allocates nothing and visits items in an order that
 // depends only on the tree and the region.
 
@@ -26,9 +20,6 @@ export class RegionTree {
   private readonly order: Int32Array;
   private readonly leafBox: Float64Array;
   private stack = new Int32Array(64);
-  private readonly sides = new Float64Array(4 + 4 * SIDE_STRIDE);
-  /** Largest coordinate magnitude of the boxes (scales the float margin). */
-  private readonly extent: number;
 
   /** `itemBox`: 4 numbers per item (minX, minY, maxX, maxY), sketch units. */
   constructor(itemBox: Float64Array) {
@@ -85,26 +76,15 @@ export class RegionTree {
     }
     this.box = centred(Float64Array.from(box));
     centred(this.leafBox);
-    let extent = 0;
-    for (let k = 0; k < boxes.length; k++) extent = Math.max(extent, Math.abs(boxes[k]));
-    this.extent = extent;
     this.first = Int32Array.from(first);
     this.end = Int32Array.from(end);
   }
 
   /**
-   * Call visit(id) for every item whose box may meet the region (a superset: boxes
-   * surely outside a side of the region, by a float test with a wide margin, are
-   * skipped). Stops early when visit returns true.
-   */
-  search(region: ViewRegion, visit: (id: number) => boolean): void {
-    if (this.first.length === 0) return;
-    this.searchSides(this.sides, loadSides(region, this.extent, this.sides), visit);
-  }
-
-  /**
-   * As search, with the region given as sides (the layout of `loadSides`: box centre
-   * and half sizes, then inward normal a, b and offset c per side, margins folded in).
+   * Call visit(id) for every item whose box may meet the convex region given as sides
+   * (box centre and half sizes, then per side its inward normal a, b and offset c,
+   * margins folded in; see `boxMayMeet`): a superset, as boxes are skipped only when
+   * surely outside. Stops early when visit returns true.
    */
   searchSides(S: Float64Array, sideCount: number, visit: (id: number) => boolean): void {
     const nodes = this.first.length;
@@ -138,40 +118,14 @@ export class RegionTree {
   }
 }
 
-/**
- * The region for box tests: its bounding box as centre and half sizes, widened by a
- * margin (4 numbers), then per side of nonzero length its inward normal (a, b) and
- * offset c, the margin folded in: a box lies surely outside the side when
- * a x + b y + |a| w + |b| h + c < 0 at its centre (x, y), half sizes (w, h).
- */
+/** Numbers per side in a region's sides: inward normal a, b and offset c. */
 export const SIDE_STRIDE = 3;
 
-/** Load the region's box and sides (in SIDE_ORDER) into `out`; returns the number of sides. */
-function loadSides(R: ViewRegion, extent: number, out: Float64Array): number {
-  // Far above the rounding of the sums below (sketch extent x 1e-15), so only boxes
-  // surely outside are skipped; skipping fewer costs only time.
-  const boxMargin = 1e-12 * extent;
-  out[0] = 0.5 * (R.minX + R.maxX);
-  out[1] = 0.5 * (R.minY + R.maxY);
-  out[2] = 0.5 * (R.maxX - R.minX) + boxMargin;
-  out[3] = 0.5 * (R.maxY - R.minY) + boxMargin;
-  let count = 0;
-  for (let step = 0; step < 4; step++) {
-    const k = SIDE_ORDER[step];
-    if (!R.on[k]) continue;
-    const at = 4 + SIDE_STRIDE * count++;
-    const a = R.sy[k] - R.ey[k],
-      b = R.ex[k] - R.sx[k];
-    // R.tol is 1e-14 x side length x sketch extent; the sum below rounds to about
-    // 1e-15 of that product, so 100 x R.tol skips a box only when it is surely outside.
-    out[at] = a;
-    out[at + 1] = b;
-    out[at + 2] = 100 * R.tol[k] - (a * R.sx[k] + b * R.sy[k]);
-  }
-  return count;
-}
-
-/** False when box B[at..at+4) (centre, half sizes) lies surely outside the region's box or one of its sides. */
+/**
+ * False when box B[at..at+4) (centre, half sizes) lies surely outside the region's box
+ * or one of its sides: a box lies outside side (a, b, c) when
+ * a x + b y + |a| w + |b| h + c < 0 at its centre (x, y), half sizes (w, h).
+ */
 function boxMayMeet(B: Float64Array, at: number, S: Float64Array, sideCount: number): boolean {
   const x = B[at],
     y = B[at + 1],

@@ -48,10 +48,16 @@ export class ViewRegion {
   readonly tol = new Float64Array(4);
   private readonly normal = new Float64Array(4);
   private normalReady = false;
-  minX = 0;
-  minY = 0;
-  maxX = 0;
-  maxY = 0;
+  /**
+   * Bounding box of H. NaN until set: a field first stored as a small integer changes
+   * its layout when it first holds a fraction, and V8 then discards every piece of code
+   * compiled for the old layout (measured: a cascade of deoptimisations in the first
+   * computation, and slower code after it in about a third of processes).
+   */
+  minX = NaN;
+  minY = NaN;
+  maxX = NaN;
+  maxY = NaN;
 
   /** `extent`: largest coordinate magnitude of the (shifted) sketch, scales float margins. */
   constructor(readonly extent: number) {}
