@@ -5,22 +5,25 @@ import type { EdgeSet } from '../edges';
 // One edge of a pair as a curve: a straight segment or an arc of an exact circle.
 // Sketch units, angles in radians anticlockwise from +x.
 
+// Fields that hold fractions start as NaN (a double) until load: a field first stored
+// as a small integer changes its layout when it first holds a fraction, and V8 then
+// discards the code compiled for the old layout (see ViewRegion's box).
 export class Curve {
   isArc = false;
   /** Segment a -> b, radiating side on the left. */
-  ax = 0;
-  ay = 0;
-  bx = 0;
-  by = 0;
+  ax = NaN;
+  ay = NaN;
+  bx = NaN;
+  by = NaN;
   /** Arc: circle index, centre, radius, start angle and span (anticlockwise), and whether it radiates outward. */
   circle = -1;
-  cx = 0;
-  cy = 0;
-  r = 0;
-  start = 0;
-  span = 0;
+  cx = NaN;
+  cy = NaN;
+  r = NaN;
+  start = NaN;
+  span = NaN;
   solid = false;
-  length = 0;
+  length = NaN;
 
   /** Load edge `id` of `E` (straight edges first, then arcs). */
   load(E: EdgeSet, id: number): void {
