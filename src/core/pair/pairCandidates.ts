@@ -267,16 +267,19 @@ class ListSet {
     this.wallTo = new Int32Array(groups);
   }
 
+  /** Drop every group's lists (O(1): the stamps are compared with a counter). */
   clear(): void {
     this.current++;
     this.bodyFill = 0;
     this.wallFill = 0;
   }
 
+  /** Are the group's lists made for the current key? */
   has(group: number): boolean {
     return this.stamp[group] === this.current;
   }
 
+  /** Start the group's lists at the end of the shared arrays; `close` ends them. */
   open(group: number): void {
     this.stamp[group] = this.current;
     this.bodyFrom[group] = this.bodyFill;
