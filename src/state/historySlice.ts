@@ -45,6 +45,10 @@ export interface HistorySlice {
 /** A view-factor job for the current document is queued or running. */
 const computing = (s: AppState) => s.viewFactors.status === 'computing';
 
+/** A paced gesture's newest position is ahead of the document, and nothing is computing: the document may take it. */
+export const gestureCanCatchUp = (s: AppState): boolean =>
+  s.gesturePreview !== null && s.gesturePreview !== s.doc && !computing(s);
+
 export const createHistorySlice: StateCreator<AppState, [], [], HistorySlice> = (set, get) => ({
   past: [],
   future: [],
@@ -77,8 +81,8 @@ export const createHistorySlice: StateCreator<AppState, [], [], HistorySlice> = 
     else get().updateGesture(next);
   },
   catchUpGesture: () => {
-    const { gesturePreview, doc } = get();
-    if (gesturePreview && gesturePreview !== doc && !computing(get())) set({ doc: gesturePreview });
+    const s = get();
+    if (gestureCanCatchUp(s)) set({ doc: s.gesturePreview! });
   },
   endGesture: () => {
     const { gestureBase, gesturePreview, past } = get();

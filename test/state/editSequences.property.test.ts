@@ -10,34 +10,7 @@ import { insertVertex, deleteVertices, moveSelection } from '../../src/state/edi
 import { documentApi } from '../../src/state/documentApi';
 import { computeViewFactors } from '../../src/core/viewFactors';
 import { serialize } from '../../src/document';
-import type { SketchFile } from '../../src/state/sketchFile';
-
-const start: SketchFile = {
-  version: 1,
-  units: 'm',
-  shapes: [
-    {
-      kind: 'enclosure',
-      points: [
-        [0, 0],
-        [4, 0],
-        [4, 2],
-        [0, 2],
-      ],
-      surface: ['floor', 'right', 'roof', 'left'],
-    },
-    {
-      kind: 'solid',
-      points: [
-        [1.75, 0.75],
-        [2.25, 0.75],
-        [2.25, 1.25],
-        [1.75, 1.25],
-      ],
-      surface: 'block',
-    },
-  ],
-};
+import { box } from './boxSketch';
 
 const edit = fc.oneof(
   fc.record({
@@ -66,7 +39,7 @@ describe('random edit sequences', () => {
     let accepted = 0;
     fc.assert(
       fc.property(fc.array(edit, { minLength: 1, maxLength: 12 }), (edits) => {
-        const store = createAppStore(start);
+        const store = createAppStore(box);
         const s = () => store.getState();
         for (const e of edits) {
           const doc = s().doc;
@@ -110,7 +83,7 @@ describe('random edit sequences', () => {
               L[surfaceNames.indexOf(shape.surface[k])] += Math.hypot(q[0] - p[0], q[1] - p[1]);
             });
           for (let i = 0; i < n; i++) {
-            // The start sketch has an enclosure and edits never remove it: every row sums to one.
+            // The box sketch has an enclosure and edits never remove it: every row sums to one.
             let row = 0;
             for (let j = 0; j < n; j++) {
               const f = r.F[i * n + j];

@@ -16,32 +16,12 @@ import { openSketchText, sketchFileText } from '../../src/state/files';
 import { edgeNames } from '../../src/state/geometry/polygon';
 import type { SketchFile } from '../../src/state/sketchFile';
 import { demoSketch } from '../../src/state/demo';
+import { box } from './boxSketch';
 
 const start: SketchFile = {
   ...demoSketch,
   units: 'm',
-  shapes: [
-    {
-      kind: 'enclosure',
-      points: [
-        [0, 0],
-        [4, 0],
-        [4, 2],
-        [0, 2],
-      ],
-      surface: ['floor', 'right', 'roof', 'left'],
-    },
-    {
-      kind: 'solid',
-      points: [
-        [1.75, 0.75],
-        [2.25, 0.75],
-        [2.25, 1.25],
-        [1.75, 1.25],
-      ],
-      surface: 'block',
-    },
-  ],
+  shapes: box.shapes,
   surfaces: undefined,
   settings: undefined,
 };

@@ -12,6 +12,7 @@ import { jobFromPolygons, needsSurfaceJob, type ViewFactorAnswer, type ViewFacto
 import { checkedGeometry, type CheckedGeometry } from './checked';
 import { scaleBetween } from './geometry';
 import { answerFitsSurfaces } from './derive';
+import { gestureCanCatchUp } from '../historySlice';
 
 /** What the pipeline needs of the worker client. */
 export interface JobRunner {
@@ -150,7 +151,7 @@ export function startLiveResults(store: AppStore, runner: JobRunner, api: Docume
   return store.subscribe(() => {
     const s = store.getState();
     // A paced drag (historySlice): the document takes the newest position once nothing is computing.
-    if (s.gesturePreview && s.gesturePreview !== s.doc && s.viewFactors.status !== 'computing') {
+    if (gestureCanCatchUp(s)) {
       s.catchUpGesture();
       return;
     }
