@@ -15,6 +15,8 @@ export interface ViewFactorJob {
   circles?: CircleInput[];
   /** Only for sketches past the edge-matrix budget: sum straight to these surfaces. */
   surfaces?: JobSurfaces;
+  /** Posted while a shape follows the pointer: the pool leaves one core to the page (pool.ts, workersForJob). */
+  duringGesture?: boolean;
 }
 
 /** Surface of every edge (0..count-1), edges in the core's order. */
@@ -117,11 +119,13 @@ export function jobFromPolygons(
   polygons: readonly PolygonInput[],
   circles: readonly CircleInput[] = [],
   surfaces?: JobSurfaces,
+  duringGesture = false,
 ): ViewFactorJob {
   const job: ViewFactorJob = {
     polygons: polygons.map((p) => ({ kind: p.kind, points: Float64Array.from(p.points) })),
     circles: circles.map((c) => ({ kind: c.kind, cx: c.cx, cy: c.cy, radius: c.radius, arcs: c.arcs })),
   };
   if (surfaces) job.surfaces = { edgeSurface: Int32Array.from(surfaces.edgeSurface), count: surfaces.count };
+  if (duringGesture) job.duringGesture = true;
   return job;
 }

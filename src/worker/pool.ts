@@ -34,10 +34,22 @@ export function poolSize(cores: number | undefined): number {
   return Math.min(MAX_POOL_SIZE, Math.max(1, c));
 }
 
-/** How many of `available` workers one job of `edgeCount` edges uses. */
-export function workersForJob(edgeCount: number, available: number, minPairs = MIN_PAIRS_PER_WORKER): number {
+/**
+ * How many of `available` workers one job of `edgeCount` edges uses. A job posted
+ * during a gesture leaves one worker idle when there are two or more: the page
+ * needs a core of its own to draw the shape at the pointer and file the answers.
+ * On the 2-core machine a drag of a 1012-edge sketch on one worker gave as many
+ * table updates a second as on two, and 1.3-1.7 times the frames (README).
+ */
+export function workersForJob(
+  edgeCount: number,
+  available: number,
+  minPairs = MIN_PAIRS_PER_WORKER,
+  duringGesture = false,
+): number {
   const pairs = (edgeCount * (edgeCount + 1)) / 2;
-  return Math.max(1, Math.min(available, edgeCount, Math.floor(pairs / minPairs)));
+  const usable = duringGesture && available > 1 ? available - 1 : available;
+  return Math.max(1, Math.min(usable, edgeCount, Math.floor(pairs / minPairs)));
 }
 
 /**
@@ -94,7 +106,7 @@ export function poolHandle(
       const parts = onPage
         ? [await page.computeRows(job, allRows(n))]
         : await Promise.all(
-            balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker)).map((rows, k) =>
+            balancedRowSets(n, workersForJob(n, workers.length, minPairsPerWorker, job.duringGesture)).map((rows, k) =>
               workers[k].computeRows(job, rows),
             ),
           );

@@ -108,6 +108,30 @@ describe('view-factor pool', () => {
     expect(poolSize(0)).toBe(1);
     expect(poolSize(6)).toBe(6);
     expect(poolSize(256)).toBe(MAX_POOL_SIZE);
+    // A job posted during a gesture leaves one worker to spare, never the last one.
+    expect(workersForJob(1000, 4, undefined, true)).toBe(3);
+    expect(workersForJob(1000, 2, undefined, true)).toBe(1);
+    expect(workersForJob(1000, 1, undefined, true)).toBe(1);
+  });
+
+  it('a job posted during a gesture leaves one worker idle and gives the same bits as one shared by all', async () => {
+    const calls: number[] = [];
+    const workers: RowWorker[] = [0, 1, 2].map((w) => ({
+      computeRows: (job, rows) => {
+        calls.push(w);
+        return Promise.resolve(viewFactorApi.computeRows(job, rows) as RowsAnswer);
+      },
+      terminate: () => {},
+    }));
+    const handle = poolHandle(workers, 1);
+    const points = [0, 0, 4, 0, 4, 1, 2, 2, 0, 1];
+    const shared = await handle.compute(jobFromPolygons([{ kind: 'enclosure', points }]));
+    expect(calls).toEqual([0, 1, 2]);
+    calls.length = 0;
+    const spared = await handle.compute(jobFromPolygons([{ kind: 'enclosure', points }], [], undefined, true));
+    expect(calls).toEqual([0, 1]);
+    if (isSurfaceAnswer(shared) || isSurfaceAnswer(spared)) throw new Error('expected edge factors');
+    expect(bytes(edgeMatrixOf(spared))).toEqual(bytes(edgeMatrixOf(shared)));
   });
 
   it('a part that fails fails the job; the client ends every worker of the pool and retries a crash on a fresh pool', async () => {

@@ -60,7 +60,7 @@ function refresh(
   if (waiting && sameJob(waiting.basis, current)) return;
   const job: Pending = { basis: current };
   pending.job = job;
-  void runner.run(jobOf(current)).then((outcome) => {
+  void runner.run(jobOf(current, store.getState().gestureBase !== null)).then((outcome) => {
     if (pending.job === job) pending.job = null;
     file(store, job.basis, outcome, retire);
   });
@@ -75,9 +75,10 @@ function summedToSurfaces(g: CheckedGeometry): boolean {
   return needsSurfaceJob(g.surfaces.edgeSurface.length);
 }
 
-function jobOf(g: CheckedGeometry): ViewFactorJob {
+/** The job for `g`; one posted during a gesture leaves a core to the page (worker/pool.ts). */
+function jobOf(g: CheckedGeometry, duringGesture: boolean): ViewFactorJob {
   const surfaces = { edgeSurface: g.surfaces.edgeSurface, count: g.surfaces.names.length };
-  return jobFromPolygons(g.polygons, g.circles, summedToSurfaces(g) ? surfaces : undefined);
+  return jobFromPolygons(g.polygons, g.circles, summedToSurfaces(g) ? surfaces : undefined, duringGesture);
 }
 
 /** The job for `a` answers for `b` too: same geometry up to scale and, for surface sums, the same surface index. */

@@ -67,6 +67,8 @@ describe('a drag paced by the view-factor jobs', () => {
     await jobs[2].answer();
     expect(store.getState().viewFactors.status).toBe('ready');
     expect(jobs).toHaveLength(3);
+    // Jobs posted while the shape follows the pointer leave a core to the page (worker/pool.ts); the first did not.
+    expect(jobs.map((j) => j.job.duringGesture ?? false)).toEqual([false, true, true]);
   });
 
   it('ends with the newest position as one undo step, even while its job still runs', async () => {
@@ -91,6 +93,8 @@ describe('a drag paced by the view-factor jobs', () => {
     expect(now.viewFactors.status).toBe('computing');
     await jobs[2].answer();
     expect(store.getState().viewFactors.status).toBe('ready');
+    // The released position's job is an ordinary one: all cores again.
+    expect(jobs.map((j) => j.job.duringGesture ?? false)).toEqual([false, true, false]);
     store.getState().undo();
     expect(store.getState().doc).toBe(box);
   });
