@@ -104,6 +104,14 @@ function checkScene(polygons: PolygonInput[], circles: CircleInput[], m: number,
   const matrixScaled = aggregateToSurfaces(n, scaled, single, edgeSurface, count, edges.hasEnclosure);
   expect(bytes(packedScaled.F)).toEqual(bytes(matrixScaled.F));
   expect(bytes(packedScaled.surfaceLength)).toEqual(bytes(matrixScaled.surfaceLength));
+  // Summed into a reused buffer still holding another sketch's numbers: cleared first, the same bits, that buffer.
+  const reused = new Float64Array(count * count).fill(0.375);
+  const intoReused = aggregatePackedRows(L, rows, edgeSurface, count, edges.hasEnclosure, scaled, reused);
+  expect(intoReused.F).toBe(reused);
+  expect(bytes(intoReused.F)).toEqual(bytes(matrixScaled.F));
+  expect(() => aggregatePackedRows(L, rows, edgeSurface, count, true, L, new Float64Array(count * count + 1))).toThrow(
+    /buffer/,
+  );
 }
 
 describe('rows shared over workers', () => {

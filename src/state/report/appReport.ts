@@ -52,6 +52,8 @@ export async function appReport(store: AppStore, api: DocumentApi, now = new Dat
         'The results are not for the sketch as it is now: fix the problems or wait for the results, then make the report.',
     };
   const text = api.serialize(s.doc);
+  // A copy of the factors: while the hash is awaited the pipeline may retire this answer and reuse its matrix.
+  const factors = { ...shown.result, F: shown.result.F.slice() };
   const hash = await sha256Hex(text);
   const html = reportHtml({
     source: {
@@ -64,7 +66,7 @@ export async function appReport(store: AppStore, api: DocumentApi, now = new Dat
     },
     sketch: shown.sketch,
     names: shown.names,
-    factors: shown.result,
+    factors,
     // The pipeline's own exchange for these factors (it is not stale: checked above), not a second solve.
     exchange: reportExchange(s.exchange),
   });

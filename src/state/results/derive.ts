@@ -27,6 +27,43 @@ export interface ShownResult {
 }
 
 const sums = new WeakMap<ViewFactorAnswer, WeakMap<SurfaceIndex, { scale: number; result: ViewFactorResult }>>();
+let lastCache: ViewFactorCache | null = null;
+let lastShown: ShownResult | null = null;
+
+/**
+ * Surface-factor matrices of answers that left the store (retireSurfaceFactors),
+ * reused for the next sums: a fresh 1012 x 1012 array (8 MB) costs Chromium's
+ * main thread 30-50 ms on the development machine, every page of it a fault, a
+ * reused one about 1 ms. Two are enough: one answer is retired per answer filed.
+ */
+const spares: Float64Array[] = [];
+const MAX_SPARES = 2;
+/** Smallest matrix worth reusing (64 surfaces, 32 kB): smaller ones cost little to make. */
+export const REUSE_FROM = 4096;
+/** The matrices made from each answer, handed to `spares` when it is retired. */
+const made = new WeakMap<ViewFactorAnswer, Float64Array[]>();
+
+function spareOf(length: number): Float64Array | undefined {
+  if (length < REUSE_FROM) return undefined;
+  const k = spares.findIndex((b) => b.length === length);
+  return k < 0 ? undefined : spares.splice(k, 1)[0];
+}
+
+/**
+ * An answer no screen, stage or cache reads any more (the pipeline retires it one
+ * answer after it left the store): its surface sums are forgotten, so they are
+ * never served again, and their matrices are reused by the next sums.
+ */
+export function retireSurfaceFactors(answer: ViewFactorAnswer): void {
+  sums.delete(answer);
+  const buffers = made.get(answer);
+  made.delete(answer);
+  if (!buffers) return;
+  // Never reuse what the shown result still holds (it is derived from newer answers, but be sure).
+  if (lastShown && buffers.includes(lastShown.result.F)) lastCache = lastShown = null;
+  spares.push(...buffers);
+  if (spares.length > MAX_SPARES) spares.splice(0, spares.length - MAX_SPARES);
+}
 
 /**
  * Surface factors from edge factors: F_IJ = sum L_i F_ij / L_I over the edges of
@@ -44,15 +81,22 @@ export function surfaceFactors(edges: ViewFactorAnswer, surfaces: SurfaceIndex, 
     return result;
   }
   const lengths = scale === 1 ? edges.edgeLength : edges.edgeLength.map((L) => L * scale);
+  const m = surfaces.names.length;
   const result = aggregatePackedRows(
     edges.edgeLength,
     edges.rows,
     surfaces.edgeSurface,
-    surfaces.names.length,
+    m,
     edges.closed,
     lengths,
+    spareOf(m * m),
   );
   bySurfaces.set(surfaces, { scale, result });
+  if (result.F.length >= REUSE_FROM) {
+    // The newest two per answer: older ones (renames of a held answer) are left to the collector, never reused.
+    const list = [...(made.get(edges) ?? []), result.F].slice(-MAX_SPARES);
+    made.set(edges, list);
+  }
   return result;
 }
 
@@ -77,9 +121,6 @@ function scaledSums(r: SurfaceViewFactors, surfaces: SurfaceIndex, scale: number
 export function answerFitsSurfaces(r: ViewFactorAnswer, surfaces: SurfaceIndex): boolean {
   return !isSurfaceAnswer(r) || sumsFitSurfaces(r, surfaces.edgeSurface, surfaces.names.length);
 }
-
-let lastCache: ViewFactorCache | null = null;
-let lastShown: ShownResult | null = null;
 
 /**
  * What is on screen: the newest edge factors summed to surfaces. When they were

@@ -11,7 +11,7 @@ import type { JobOutcome } from '../../worker/client';
 import { jobFromPolygons, needsSurfaceJob, type ViewFactorAnswer, type ViewFactorJob } from '../../worker/job';
 import { checkedGeometry, type CheckedGeometry } from './checked';
 import { scaleBetween } from './geometry';
-import { answerFitsSurfaces } from './derive';
+import { answerFitsSurfaces, retireSurfaceFactors } from './derive';
 import { gestureCanCatchUp } from '../historySlice';
 
 /** What the pipeline needs of the worker client. */
@@ -142,7 +142,10 @@ export function startLiveResults(store: AppStore, runner: JobRunner, api: Docume
   // render already under way may still read the one it replaced.
   let retiring: ViewFactorAnswer | null = null;
   const retire = (answer: ViewFactorAnswer) => {
-    if (retiring && retiring !== answer) runner.recycle?.(retiring);
+    if (retiring && retiring !== answer) {
+      retireSurfaceFactors(retiring);
+      runner.recycle?.(retiring);
+    }
     retiring = answer;
   };
   let last = store.getState().doc;
