@@ -42,7 +42,7 @@ describe('a drag paced by the view-factor jobs', () => {
   it('moves only the drawing while a job runs, then gives the document the newest position and posts one job', async () => {
     const { runner, jobs } = heldRunner();
     const store = createAppStore(box);
-    startLiveResults(store, runner, documentApi);
+    startLiveResults(store, runner, documentApi, { gestureAnswerGapMs: 0 });
     await jobs[0].answer();
     expect(store.getState().viewFactors.status).toBe('ready');
     const s = store.getState();
@@ -69,6 +69,39 @@ describe('a drag paced by the view-factor jobs', () => {
     expect(jobs).toHaveLength(3);
     // Jobs posted while the shape follows the pointer leave a core to the page (worker/pool.ts); the first did not.
     expect(jobs.map((j) => j.job.duringGesture ?? false)).toEqual([false, true, true]);
+  });
+
+  it('files an answer no sooner than the gap after its job was posted while a newer position waits', async () => {
+    const { runner, jobs } = heldRunner();
+    const store = createAppStore(box);
+    // A gap far longer than the test's own steps, so a slow machine cannot make it pass by accident.
+    const stop = startLiveResults(store, runner, documentApi, { gestureAnswerGapMs: 300 });
+    await jobs[0].answer();
+    const s = store.getState();
+    s.beginGesture();
+    s.previewGesture(moveSelection(box, block, 0.1, 0));
+    s.previewGesture(moveSelection(box, block, 0.2, 0));
+    expect(jobs).toHaveLength(2);
+    // Answered at once with a newer position waiting: held back, the document and the status unchanged.
+    await jobs[1].answer();
+    expect(corner(store.getState().doc)).toEqual([1.85, 0.75]);
+    expect(store.getState().viewFactors.status).toBe('computing');
+    expect(jobs).toHaveLength(2);
+    // Once the gap has passed it is filed and the newest position goes to the document.
+    await new Promise((r) => setTimeout(r, 400));
+    expect(corner(store.getState().doc)).toEqual([1.95, 0.75]);
+    expect(jobs).toHaveLength(3);
+    // Nothing newer waits for this answer: filed at once.
+    await jobs[2].answer();
+    expect(store.getState().viewFactors.status).toBe('ready');
+    // Stopped while an answer is held: it is never filed.
+    s.previewGesture(moveSelection(box, block, 0.3, 0));
+    s.previewGesture(moveSelection(box, block, 0.4, 0));
+    await jobs[3].answer();
+    stop();
+    await new Promise((r) => setTimeout(r, 400));
+    expect(corner(store.getState().doc)).toEqual([2.05, 0.75]);
+    expect(store.getState().viewFactors.status).toBe('computing');
   });
 
   it('ends with the newest position as one undo step, even while its job still runs', async () => {
