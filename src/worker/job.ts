@@ -119,13 +119,11 @@ export function jobFromPolygons(
   polygons: readonly PolygonInput[],
   circles: readonly CircleInput[] = [],
   surfaces?: JobSurfaces,
-  duringGesture = false,
 ): ViewFactorJob {
   const job: ViewFactorJob = {
     polygons: polygons.map((p) => ({ kind: p.kind, points: Float64Array.from(p.points) })),
     circles: circles.map((c) => ({ kind: c.kind, cx: c.cx, cy: c.cy, radius: c.radius, arcs: c.arcs })),
   };
   if (surfaces) job.surfaces = { edgeSurface: Int32Array.from(surfaces.edgeSurface), count: surfaces.count };
-  if (duringGesture) job.duringGesture = true;
   return job;
 }

@@ -128,7 +128,7 @@ describe('view-factor pool', () => {
     const shared = await handle.compute(jobFromPolygons([{ kind: 'enclosure', points }]));
     expect(calls).toEqual([0, 1, 2]);
     calls.length = 0;
-    const spared = await handle.compute(jobFromPolygons([{ kind: 'enclosure', points }], [], undefined, true));
+    const spared = await handle.compute({ ...jobFromPolygons([{ kind: 'enclosure', points }]), duringGesture: true });
     expect(calls).toEqual([0, 1]);
     if (isSurfaceAnswer(shared) || isSurfaceAnswer(spared)) throw new Error('expected edge factors');
     expect(bytes(edgeMatrixOf(spared))).toEqual(bytes(edgeMatrixOf(shared)));

@@ -119,7 +119,9 @@ function summedToSurfaces(g: CheckedGeometry): boolean {
 /** The job for `g`; one posted during a gesture leaves a core to the page (worker/pool.ts). */
 function jobOf(g: CheckedGeometry, duringGesture: boolean): ViewFactorJob {
   const surfaces = { edgeSurface: g.surfaces.edgeSurface, count: g.surfaces.names.length };
-  return jobFromPolygons(g.polygons, g.circles, summedToSurfaces(g) ? surfaces : undefined, duringGesture);
+  const job = jobFromPolygons(g.polygons, g.circles, summedToSurfaces(g) ? surfaces : undefined);
+  if (duringGesture) job.duringGesture = true;
+  return job;
 }
 
 /** The job for `a` answers for `b` too: same geometry up to scale and, for surface sums, the same surface index. */
