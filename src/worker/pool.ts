@@ -7,6 +7,7 @@
 import { balancedRowSets } from '../core/pairRows';
 import { allRows } from '../core/viewFactors';
 import { assembleAnswer } from './assemble';
+import { MAX_KEPT_PAIRS } from './rowMemory';
 import type { WorkerHandle } from './client';
 import { isSurfaceAnswer, jobEdgeCount, type RowsAnswer, type ViewFactorAnswer, type ViewFactorJob } from './job';
 
@@ -39,7 +40,9 @@ export function poolSize(cores: number | undefined): number {
  * during a gesture leaves one worker idle when there are two or more: the page
  * needs a core of its own to draw the shape at the pointer and file the answers.
  * On the 2-core machine a drag of a 1012-edge sketch on one worker gave as many
- * table updates a second as on two, and 1.3-1.7 times the frames (README).
+ * table updates a second as on two, and 1.3-1.7 times the frames (README). Not
+ * past MAX_KEPT_PAIRS pairs (about 4100 edges): one worker could not keep such a
+ * job's rows, so each drag step would be computed whole.
  */
 export function workersForJob(
   edgeCount: number,
@@ -48,7 +51,7 @@ export function workersForJob(
   duringGesture = false,
 ): number {
   const pairs = (edgeCount * (edgeCount + 1)) / 2;
-  const usable = duringGesture && available > 1 ? available - 1 : available;
+  const usable = duringGesture && available > 1 && pairs <= MAX_KEPT_PAIRS ? available - 1 : available;
   return Math.max(1, Math.min(usable, edgeCount, Math.floor(pairs / minPairs)));
 }
 

@@ -112,6 +112,9 @@ describe('view-factor pool', () => {
     expect(workersForJob(1000, 4, undefined, true)).toBe(3);
     expect(workersForJob(1000, 2, undefined, true)).toBe(1);
     expect(workersForJob(1000, 1, undefined, true)).toBe(1);
+    // Past what one worker keeps for the next drag step (MAX_KEPT_PAIRS): every worker, as for any job.
+    expect(workersForJob(4095, 2, undefined, true)).toBe(1); // 8,386,560 pairs: kept
+    expect(workersForJob(4096, 2, undefined, true)).toBe(2); // 8,390,656 pairs: not kept
   });
 
   it('a job posted during a gesture leaves one worker idle and gives the same bits as one shared by all', async () => {
