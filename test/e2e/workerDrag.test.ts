@@ -78,6 +78,22 @@ async function open(sketch: SketchFile) {
   await waitReady();
 }
 
+/** What the test reads of Konva, the canvas library, which puts itself on `window`. */
+interface KonvaGlobal {
+  stages: { find(selector: string): { text(): string; getAbsolutePosition(): { x: number; y: number } }[] }[];
+}
+
+/** Screen positions of the canvas labels that read `name`. */
+function labelOf(name: string) {
+  return page.evaluate((n) => {
+    const w = window as unknown as { Konva: KonvaGlobal };
+    return w.Konva.stages[0]
+      .find('Text')
+      .filter((t) => t.text() === n)
+      .map((t) => t.getAbsolutePosition());
+  }, name);
+}
+
 async function exportedCsv(): Promise<string> {
   const [download] = await Promise.all([
     page.waitForEvent('download'),
@@ -98,7 +114,9 @@ describe('a drag computed by the worker pool', () => {
       }).observe(document.querySelector('.matrix-scroll')!, { subtree: true, childList: true, characterData: true });
     });
     await page.getByRole('checkbox', { name: 'snap' }).uncheck();
-    const [sx, sy] = await screenOf(page, 2.3, 1.3); // inside tube 3
+    const label0 = await labelOf('tube 3');
+    expect(label0).toHaveLength(1);
+    const [sx, sy] = await screenOf(page, 2.3, 1.05); // inside tube 3 (centre 2.3, 1)
     await page.mouse.move(sx, sy);
     await page.mouse.down();
     for (let i = 1; i <= 40; i++) {
@@ -109,6 +127,22 @@ describe('a drag computed by the worker pool', () => {
     await page.waitForFunction(() => (window as unknown as { __changes: number }).__changes > 0, null, {
       timeout: 10000,
     });
+    // The tube's name follows it, laid out once and shifted as one group: moved by the tube's shift on screen.
+    const { label, shift } = await page.evaluate(() => {
+      const w = window as unknown as TestWindow & { Konva: KonvaGlobal };
+      const s = w.__tautline.store.getState();
+      const now = (s.gesturePreview ?? s.doc).shapes[3].points[0];
+      const then = s.gestureBase!.shapes[3].points[0];
+      const texts = w.Konva.stages[0].find('Text').filter((t) => t.text() === 'tube 3');
+      return {
+        label: texts.map((t) => t.getAbsolutePosition()),
+        shift: [(now[0] - then[0]) * s.camera.scale, -(now[1] - then[1]) * s.camera.scale],
+      };
+    });
+    expect(label).toHaveLength(1);
+    expect(Math.hypot(shift[0], shift[1])).toBeGreaterThan(5);
+    expect(label[0].x - label0[0].x).toBeCloseTo(shift[0], 3);
+    expect(label[0].y - label0[0].y).toBeCloseTo(shift[1], 3);
     await page.mouse.up();
     await page.getByRole('checkbox', { name: 'snap' }).check();
     await waitReady();

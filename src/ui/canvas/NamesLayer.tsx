@@ -1,5 +1,6 @@
-import { memo } from 'react';
-import { Layer, Text } from 'react-konva';
+import { memo, useLayoutEffect, useMemo, useRef } from 'react';
+import Konva from 'konva';
+import { Group, Layer, Text } from 'react-konva';
 import type { Camera } from '../../state/viewSlice';
 import type { Shape } from '../../state/sketchFile';
 import { edgeEnds } from '../../state/geometry/polygon';
@@ -17,6 +18,11 @@ interface Props {
   live: ReadonlySet<number>;
   /** Draw the names of surfaces on live shapes (true) or of the others (false). */
   liveSide: boolean;
+  /**
+   * Live shapes moved whole by this much (sketch units) since `shapes`, which are then
+   * the gesture's start: the names are laid out once and the group moves (liveShift).
+   */
+  shift?: readonly [number, number] | null;
 }
 
 /** Label box width, px; the text is centred in it. */
@@ -25,7 +31,30 @@ const BOX = 180;
 const GAP = 14;
 
 /** Each surface's name once, beside the middle of its longest edge on the side that radiates. */
-export const NamesLayer = memo(function NamesLayer({ shapes, camera, colours, emphasis, live, liveSide }: Props) {
+export const NamesLayer = memo(function NamesLayer(props: Props) {
+  const { shapes, camera, colours, emphasis, live, liveSide, shift } = props;
+  const labels = useMemo(
+    () => layOut(shapes, camera, colours, emphasis, live, liveSide),
+    [shapes, camera, colours, emphasis, live, liveSide],
+  );
+  return (
+    <Layer listening={false}>
+      <Group x={shift ? shift[0] * camera.scale : 0} y={shift ? -shift[1] * camera.scale : 0}>
+        {labels}
+      </Group>
+    </Layer>
+  );
+});
+
+/** The labels of one side, placed for `shapes`. */
+function layOut(
+  shapes: readonly Shape[],
+  camera: Camera,
+  colours: ReadonlyMap<string, number>,
+  emphasis: Set<string>,
+  live: ReadonlySet<number>,
+  liveSide: boolean,
+) {
   // The longest piece of each name over all shapes, the first one on a tie (per-shape parts are cached).
   const best = new Map<string, { shape: number; edge: number; length: number }>();
   const onLive = new Set<string>();
@@ -49,11 +78,12 @@ export const NamesLayer = memo(function NamesLayer({ shapes, camera, colours, em
         y={y - ny * GAP - 7}
         colour={surfaceStyle(colours.get(name) ?? 0).colour}
         bold={emphasis.has(name)}
+        cached={liveSide}
       />,
     );
   }
-  return <Layer listening={false}>{labels}</Layer>;
-});
+  return labels;
+}
 
 /** Screen point beside which a label sits and the sketch-space direction it is pushed (x, y, nx, ny). */
 function labelPlace(shape: Shape, edge: number, camera: Camera): [number, number, number, number] {
@@ -84,10 +114,31 @@ function labelPlace(shape: Shape, edge: number, camera: Camera): [number, number
   return [x, y, normals[2 * edge], normals[2 * edge + 1]];
 }
 
-/** One label; unchanged labels skip rendering. */
-const Name = memo(function Name(p: { name: string; x: number; y: number; colour: string; bold: boolean }) {
+/**
+ * One label; unchanged labels skip rendering. A label of a shape that follows the
+ * pointer (`cached`) is drawn once into a bitmap that then only moves: its text is
+ * drawn twice (white halo, then colour), which cost every frame of a drag.
+ */
+const Name = memo(function Name(p: {
+  name: string;
+  x: number;
+  y: number;
+  colour: string;
+  bold: boolean;
+  cached: boolean;
+}) {
+  const ref = useRef<Konva.Text>(null);
+  useLayoutEffect(() => {
+    const node = ref.current;
+    if (!node || !p.cached) return;
+    node.cache({ pixelRatio: Konva.pixelRatio });
+    return () => {
+      node.clearCache();
+    };
+  }, [p.cached, p.name, p.colour, p.bold]);
   return (
     <Text
+      ref={ref}
       text={p.name}
       x={p.x}
       y={p.y}

@@ -22,7 +22,7 @@ import { useSurfaceColours } from './useSurfaceColours';
 import { canvasProblemMarks, canvasProblems } from './problems';
 import { GridLayer } from './GridLayer';
 import { ShapesLayer } from './ShapesLayer';
-import { shapeLayers, useLiveShapes } from './liveShapes';
+import { liveShift, shapeLayers, useLiveShapes } from './liveShapes';
 import { HandlesLayer } from './HandlesLayer';
 import { DraftLayer } from './DraftLayer';
 import { NamesLayer } from './NamesLayer';
@@ -56,6 +56,11 @@ export function SketchCanvas() {
   const baseShapes = useApp(selectGestureShapes);
   const live = useLiveShapes(doc.shapes, baseShapes);
   const layers = shapeLayers(doc.shapes, live);
+  // During a gesture the still names depend only on shapes the gesture leaves alone, so
+  // they are laid out from its start, once. Live shapes moved whole: their names too,
+  // shifted as one group.
+  const shift = useMemo(() => liveShift(doc.shapes, baseShapes, live), [doc.shapes, baseShapes, live]);
+  const startShapes = baseShapes?.length === doc.shapes.length ? baseShapes : null;
 
   const order = useSurfaceColours();
   const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
@@ -112,7 +117,8 @@ export function SketchCanvas() {
                 (!side || live.size > 0) && (
                   <NamesLayer
                     key={side ? 'live' : 'still'}
-                    shapes={doc.shapes}
+                    shapes={(side ? shift : true) && startShapes ? startShapes : doc.shapes}
+                    shift={side ? shift : null}
                     camera={camera}
                     colours={order}
                     emphasis={emphasis}
