@@ -59,8 +59,8 @@ export function SketchCanvas() {
   // During a gesture the still names depend only on shapes the gesture leaves alone, so
   // they are laid out from its start, once. Live shapes moved whole: their names too,
   // shifted as one group.
-  const shift = useMemo(() => liveShift(doc.shapes, baseShapes, live), [doc.shapes, baseShapes, live]);
   const startShapes = baseShapes?.length === doc.shapes.length ? baseShapes : null;
+  const shift = useMemo(() => liveShift(doc.shapes, startShapes, live), [doc.shapes, startShapes, live]);
 
   const order = useSurfaceColours();
   const emphasis = useMemo(() => new Set([...(hoverPair ?? []), ...selected]), [hoverPair, selected]);
@@ -117,7 +117,7 @@ export function SketchCanvas() {
                 (!side || live.size > 0) && (
                   <NamesLayer
                     key={side ? 'live' : 'still'}
-                    shapes={(side ? shift : true) && startShapes ? startShapes : doc.shapes}
+                    shapes={startShapes && (shift || !side) ? startShapes : doc.shapes}
                     shift={side ? shift : null}
                     camera={camera}
                     colours={order}
