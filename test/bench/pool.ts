@@ -113,7 +113,7 @@ function speedUp(quick: boolean): void {
   const tN = median(many);
   const target = 0.7 * cores;
   console.log(
-    `threads: ${n} edges, one thread median ${t1.toFixed(0)} ms, ${threads} threads median ${tN.toFixed(0)} ms: speed-up ${(t1 / tN).toFixed(2)}x (target >= 0.7 x ${cores} cores = ${target.toFixed(1)}x on an idle machine; load now ${loadavg()[0].toFixed(1)}): ${t1 / tN >= target ? 'met' : 'NOT met'}; results identical: ${identical ? 'yes' : 'NO'}`,
+    `threads: ${n} edges, one thread median ${t1.toFixed(0)} ms, ${threads} threads median ${tN.toFixed(0)} ms: speed-up ${(t1 / tN).toFixed(3)}x (target >= 0.7 x ${cores} cores = ${target.toFixed(1)}x on an idle machine; load now ${loadavg()[0].toFixed(1)}): ${t1 / tN >= target ? 'met' : 'NOT met'}; results identical: ${identical ? 'yes' : 'NO'}`,
   );
 }
 
