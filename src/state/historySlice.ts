@@ -45,9 +45,11 @@ export interface HistorySlice {
 /** A view-factor job for the current document is queued or running. */
 const computing = (s: AppState) => s.viewFactors.status === 'computing';
 
+/** A paced gesture's newest position is ahead of the document (it waits for the running job). */
+export const gestureIsAhead = (s: AppState): boolean => s.gesturePreview !== null && s.gesturePreview !== s.doc;
+
 /** A paced gesture's newest position is ahead of the document, and nothing is computing: the document may take it. */
-export const gestureCanCatchUp = (s: AppState): boolean =>
-  s.gesturePreview !== null && s.gesturePreview !== s.doc && !computing(s);
+export const gestureCanCatchUp = (s: AppState): boolean => gestureIsAhead(s) && !computing(s);
 
 export const createHistorySlice: StateCreator<AppState, [], [], HistorySlice> = (set, get) => ({
   past: [],

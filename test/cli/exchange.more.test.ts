@@ -3,33 +3,12 @@
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import { run, json, close } from './exchangeHelpers';
+import { box } from '../state/boxSketch';
 
 describe('exchange FILE: options and formats', () => {
+  // The shared 4 x 2 box holding one block, with the conditions of these runs.
   const duct = {
-    version: 1,
-    units: 'm',
-    shapes: [
-      {
-        kind: 'enclosure',
-        points: [
-          [0, 0],
-          [4, 0],
-          [4, 2],
-          [0, 2],
-        ],
-        surface: ['floor', 'right', 'roof', 'left'],
-      },
-      {
-        kind: 'solid',
-        points: [
-          [1.75, 0.75],
-          [2.25, 0.75],
-          [2.25, 1.25],
-          [1.75, 1.25],
-        ],
-        surface: 'block',
-      },
-    ],
+    ...box,
     surfaces: {
       floor: { emissivity: 0.9, temperature: 1100 },
       roof: { emissivity: 0.3, temperature: 600 },

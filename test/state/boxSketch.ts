@@ -1,5 +1,5 @@
 // A 4 x 2 box (floor, right, roof, left) holding one 0.5 x 0.5 block: the small
-// sketch of the store and results-pipeline tests.
+// sketch of the store, results-pipeline and some command-line tests.
 import type { SketchFile } from '../../src/state/sketchFile';
 
 export const box: SketchFile = {

@@ -14,7 +14,7 @@ import { jobFromPolygons, needsSurfaceJob, type ViewFactorAnswer, type ViewFacto
 import { checkedGeometry, type CheckedGeometry } from './checked';
 import { scaleBetween } from './geometry';
 import { answerFitsSurfaces, retireSurfaceFactors } from './derive';
-import { gestureCanCatchUp } from '../historySlice';
+import { gestureCanCatchUp, gestureIsAhead } from '../historySlice';
 
 /** What the pipeline needs of the worker client. */
 export interface JobRunner {
@@ -92,8 +92,7 @@ function refresh(
       file(store, job.basis, outcome, retire);
     };
     // A drag's answer with a newer position waiting is filed no sooner than the gap after its job was posted.
-    const s = store.getState();
-    const newer = s.gesturePreview !== null && s.gesturePreview !== s.doc;
+    const newer = gestureIsAhead(store.getState());
     const wait = duringGesture && newer && outcome.kind === 'done' ? posted + live.gapMs - performance.now() : 0;
     if (wait <= 0) {
       fileIt();
