@@ -1,7 +1,8 @@
-import type { EdgeSet } from '../edges';
+import { sketchExtent, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
 import { Curve, towardTarget as towardTargetIn } from './curve';
+import { DiscShadow } from './discShadow';
 import { convexHull as convexHullIn, discMeetsHull as discMeetsHullIn, PairScene } from './pairScene';
 import { PieceView } from './pieceView';
 import {
@@ -32,6 +33,22 @@ const touchAngles = touchAnglesIn;
 // integrates exactly: towards a point to a distance change, towards a tangent to the
 // change of a taut string wrapped on the circle, at the horizon to +-1/2 ds
 // (crossed strings generalised; Hottel; Modest, Radiative Heat Transfer, ch. 4).
+// Before any of that, a pair that one solid circle hides wholly (discShadow.ts) is 0.
+
+/**
+ * The shadow test's margin over the largest coordinate of the sketch: about 450 ulps,
+ * above the rounding of a tangent line computed from coordinates of that size.
+ */
+const SHADOW_MARGIN = 1e-13;
+
+/** Largest coordinate magnitude of the sketch's straight edges and circles (to their rims), sketch units. */
+function curveExtent(E: EdgeSet): number {
+  let extent = sketchExtent(E);
+  const A = E.arcs;
+  for (let c = 0; c < A.circleCount; c++)
+    extent = Math.max(extent, Math.abs(A.cx[c]) + A.r[c], Math.abs(A.cy[c]) + A.r[c]);
+  return extent;
+}
 
 export class CurvedPairIntegrator implements EventFilter {
   private readonly em = new Curve();
@@ -43,6 +60,7 @@ export class CurvedPairIntegrator implements EventFilter {
   private readonly touch = new Float64Array(2);
   /** A ray from an event point (x, y, then direction), for the target's cone test. */
   private readonly ray = new Float64Array(4);
+  private readonly shadow: DiscShadow;
 
   constructor(
     private readonly E: EdgeSet,
@@ -51,6 +69,7 @@ export class CurvedPairIntegrator implements EventFilter {
     this.scene = new PairScene(E, obstacles);
     this.breaks.filter = this;
     this.view = new PieceView(E.arcs);
+    this.shadow = new DiscShadow(SHADOW_MARGIN * curveExtent(E));
   }
 
   /**
@@ -101,8 +120,20 @@ export class CurvedPairIntegrator implements EventFilter {
     if (em.isArc && tg.isArc && em.circle === tg.circle && em.solid) return 0;
     if (this.surelyApart()) return 0;
     this.scene.collect(em, i, tg, j);
+    if (this.oneCircleHides()) return 0;
     this.findBreaks();
     return this.integrate();
+  }
+
+  /** Does one blocking circle hide the whole target from the whole emitter (discShadow.ts)? */
+  private oneCircleHides(): boolean {
+    const A = this.E.arcs,
+      circles = this.scene.circles;
+    for (let k = 0; k < circles.length; k++) {
+      const c = circles[k];
+      if (this.shadow.hides(this.em, this.tg, A.cx[c], A.cy[c], A.r[c])) return true;
+    }
+    return false;
   }
 
   /** Exact tests that the target lies wholly behind a straight emitter or the reverse. */

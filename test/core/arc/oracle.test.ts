@@ -106,4 +106,31 @@ describe('exact circles against the ray-cast reference', () => {
       Array.from({ length: 24 }, (_, k) => 4 + k),
     );
   });
+
+  it('a row of tubes under a roof: a tube hides those beyond its neighbour (the one-circle shadow), whole and in arcs', () => {
+    // Five tubes of radius 0.1 at a pitch of 0.3 on one line (they all touch the same two
+    // lines, so the shadows graze), the middle one in two arcs, in a 2 x 1 box.
+    const tubes: CircleInput[] = [0, 1, 2, 3, 4].map((k) => ({
+      kind: 'solid',
+      cx: 0.4 + 0.3 * k,
+      cy: 0.7,
+      radius: 0.1,
+      arcs: k === 2 ? 2 : 1,
+    }));
+    compare(
+      [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [2, 0],
+            [2, 1],
+            [0, 1],
+          ],
+        },
+      ],
+      tubes,
+      [2, 4, 5, 6, 8],
+    );
+  });
 });

@@ -1,0 +1,112 @@
+import type { Curve } from './curve';
+
+// Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
+
+// Does one solid circle hide a target from all of an emitter? Then the pair exchanges
+// nothing, and the exact integration (events between every pair of blockers, then one
+// visibility query per piece) can be skipped: in a row of tubes each tube hides the
+// ones beyond its neighbour, and those pairs were most of such a sketch's time.
+//
+// Disc A hides everything of a convex target T from point p when p lies in A's umbra
+// of T: between the two lines that bound the hull of A and T (bridges), on the far
+// side of the chord joining the bridges' touch points on A. The segment from p to a
+// point of T then stays between the bridges and crosses that chord's line, and the
+// part of the line between the bridges is the chord, inside A. For a disc target the
+// bridges are the outer common tangents; for a straight target (b0, b1) the umbra is
+// that of each end, the same construction with T a point. Each condition is a
+// half-plane, so it holds along the emitter when it holds at a segment's ends, or at
+// the lowest point of an arc. Float tests with a margin (see hides).
+
+/** Sketch units: a half-plane test passes down to -margin (rounding of lines that graze the emitter). */
+export class DiscShadow {
+  /** Lines n . x + w >= 0 that the emitter must keep to: nx, ny, w (|n| = 1). */
+  private readonly lines = new Float64Array(18);
+  private count = 0;
+
+  /**
+   * `margin`: how far the emitter may stray across a line, sketch units. A tube row's
+   * tubes all touch the same two lines, so the margin must pass a graze; where it lets
+   * a point of the emitter lie up to `margin` across, the sight lines it could let
+   * past A are within margin / distance radians of a tangent: rounding.
+   */
+  constructor(private readonly margin: number) {}
+
+  /**
+   * True when the solid circle (cx, cy, r) hides every point of target `tg` from every
+   * point of emitter `em`: every sight line between them meets the disc. False when
+   * not shown: a target on a concave (enclosure) arc, or any test failing.
+   */
+  hides(em: Curve, tg: Curve, cx: number, cy: number, r: number): boolean {
+    this.count = 0;
+    if (tg.isArc) {
+      if (!tg.solid || !this.discUmbra(cx, cy, r, tg.cx, tg.cy, tg.r)) return false;
+    } else if (!this.discUmbra(cx, cy, r, tg.ax, tg.ay, 0) || !this.discUmbra(cx, cy, r, tg.bx, tg.by, 0)) {
+      return false;
+    }
+    const L = this.lines;
+    for (let k = 0; k < this.count; k++) {
+      if (lowestOn(em, L[3 * k], L[3 * k + 1], L[3 * k + 2]) < -this.margin) return false;
+    }
+    return true;
+  }
+
+  /**
+   * Add the three lines of disc A's umbra of disc T (tr = 0: a point): the two outer
+   * common tangents and the chord line through their touch points on A, each with
+   * the umbra on its positive side. False when T is not wholly apart from A.
+   */
+  private discUmbra(ax: number, ay: number, ar: number, tx: number, ty: number, tr: number): boolean {
+    const dx = tx - ax,
+      dy = ty - ay;
+    const d = Math.sqrt(dx * dx + dy * dy);
+    if (!(d > ar + tr)) return false;
+    // Outer tangents: normal n at angle phi +- acos((tr - ar) / d) from the centre
+    // line, both centres on the positive side at distances ar and tr.
+    const phi = Math.atan2(dy, dx),
+      w = Math.acos((tr - ar) / d);
+    const L = this.lines;
+    const k = this.count;
+    for (let s = 0; s < 2; s++) {
+      const psi = s === 0 ? phi + w : phi - w;
+      const nx = Math.cos(psi),
+        ny = Math.sin(psi);
+      L[3 * (k + s)] = nx;
+      L[3 * (k + s) + 1] = ny;
+      L[3 * (k + s) + 2] = ar - (nx * ax + ny * ay);
+    }
+    // Touch points on A: a - ar n for each tangent; the umbra lies on the side of their
+    // chord away from T.
+    const p1x = ax - ar * L[3 * k],
+      p1y = ay - ar * L[3 * k + 1],
+      p2x = ax - ar * L[3 * k + 3],
+      p2y = ay - ar * L[3 * k + 4];
+    let nx = p2y - p1y,
+      ny = p1x - p2x;
+    const len = Math.sqrt(nx * nx + ny * ny);
+    if (!(len > 0)) return false;
+    nx /= len;
+    ny /= len;
+    let c = -(nx * p1x + ny * p1y);
+    if (nx * tx + ny * ty + c > 0) {
+      nx = -nx;
+      ny = -ny;
+      c = -c;
+    }
+    L[3 * (k + 2)] = nx;
+    L[3 * (k + 2) + 1] = ny;
+    L[3 * (k + 2) + 2] = c;
+    this.count = k + 3;
+    return true;
+  }
+}
+
+/** Least value of n . x + w over the curve (|n| = 1; sketch units). */
+export function lowestOn(em: Curve, nx: number, ny: number, w: number): number {
+  const atA = nx * em.ax + ny * em.ay + w,
+    atB = nx * em.bx + ny * em.by + w;
+  let low = Math.min(atA, atB);
+  if (em.isArc && em.holdsAngle(Math.atan2(-ny, -nx))) {
+    low = Math.min(low, nx * em.cx + ny * em.cy + w - em.r);
+  }
+  return low;
+}
