@@ -134,4 +134,20 @@ describe('blocked views against the ray-cast reference', () => {
     const r = expectMatchesReference(polys);
     expect(f(r, 0, 1)).toBe(0); // collinear edges of one wall see nothing of each other
   });
+
+  it('a side wall looking along a row of 12-sided tubes on one line (many alignments, most of them outside the target)', () => {
+    // Five equal tubes on y = 1.2 at a pitch of 0.6 in a 4 x 1.5 box: from a tube edge
+    // the far side wall is seen past the others through narrow channels, and the lines
+    // through two tube corners mostly miss the small target edges.
+    const tube = (cx: number) =>
+      Array.from({ length: 12 }, (_, k) => [
+        cx + 0.2 * Math.cos((2 * Math.PI * k) / 12),
+        1.2 + 0.2 * Math.sin((2 * Math.PI * k) / 12),
+      ]);
+    const polys: Poly[] = [
+      { kind: 'enclosure', points: rect(0, 0, 4, 1.5) },
+      ...[0.6, 1.2, 1.8, 2.4, 3.0].map((cx) => ({ kind: 'solid' as const, points: tube(cx) })),
+    ];
+    expectMatchesReference(polys, [1, 3, 4, 10, 40, 61]);
+  });
 });

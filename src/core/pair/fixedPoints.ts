@@ -181,11 +181,21 @@ function facingOf(E: EdgeSet, e: number, P: Float64Array): Facing {
   return f1 > 0 ? FRONT_AT_END : BACK;
 }
 
+/**
+ * Doubt margin of the side test in Breakpoints.find, relative: each offset from a0 is
+ * off by a few ulps of the sketch extent, so a cross product is off by at most about
+ * 1e-15 extent (|q - r| + |b - r|), with |b - r| <= 3 extent; 1e-12 leaves a wide margin.
+ */
+const SIDE_DOUBT = 1e-12;
+
 /** Breakpoints along i': fractions in (0, 1) from a0, sorted ascending, in at[0 .. count). */
 export class Breakpoints {
   at = new Float64Array(64);
   count = 0;
   private offsets = new Float64Array(256);
+
+  /** `extent`: largest coordinate magnitude of the sketch, sketch units (scales the doubt margin). */
+  constructor(private readonly extent: number) {}
 
   /**
    * Find the points of i' = a0-a1 where p lines up with two fixed points (neither a
@@ -199,7 +209,8 @@ export class Breakpoints {
       a1y = P[3];
     const X = points.x,
       Y = points.y,
-      boundary = points.onBoundary;
+      boundary = points.onBoundary,
+      extent = this.extent;
     // The points that are no chain end, as offsets from a0 and from a1 (4 numbers each).
     if (this.offsets.length < 4 * points.count) this.offsets = new Float64Array(8 * points.count);
     const U = this.offsets;
@@ -212,6 +223,11 @@ export class Breakpoints {
       U[4 * n + 3] = Y[k] - a1y;
       n++;
     }
+    // j's ends b0 and b1 (fixed points 0 and 1, never chain ends), from a0.
+    const b0x = X[0] - a0x,
+      b0y = Y[0] - a0y,
+      b1x = X[1] - a0x,
+      b1y = Y[1] - a0y;
     let count = 0;
     for (let r = 0; r < n; r++) {
       // orient(p, r, q) is affine along i': g0 at a0 and g1 at a1.
@@ -223,6 +239,17 @@ export class Breakpoints {
         const g0 = r0x * U[4 * q + 1] - r0y * U[4 * q];
         const g1 = r1x * U[4 * q + 3] - r1y * U[4 * q + 2];
         if ((g0 < 0 && g1 > 0) || (g0 > 0 && g1 < 0)) {
+          // Where the line through r and q misses j', p lines them up in a direction
+          // outside j's range (the line leaves H through a side string), where no gap
+          // of j is bounded: no split. Kept when in doubt (see SIDE_DOUBT).
+          const dx = U[4 * q] - r0x,
+            dy = U[4 * q + 1] - r0y;
+          const s0 = dx * (b0y - r0y) - dy * (b0x - r0x),
+            s1 = dx * (b1y - r0y) - dy * (b1x - r0x);
+          if (s0 * s1 > 0) {
+            const doubt = SIDE_DOUBT * extent * (Math.abs(dx) + Math.abs(dy) + 4 * extent);
+            if (Math.abs(s0) > doubt && Math.abs(s1) > doubt) continue;
+          }
           if (count === this.at.length) this.at = grow(this.at);
           this.at[count++] = g0 / (g0 - g1);
         }

@@ -32,7 +32,7 @@ export class PairIntegrator {
   private readonly pieces: ObstaclePieces;
   private readonly gatherer: ObstacleGatherer;
   private readonly points: FixedPoints;
-  private readonly breakpoints = new Breakpoints();
+  private readonly breakpoints: Breakpoints;
   private readonly gaps = new VisibleGaps();
   /** The pair's trimmed ends a0, a1 (of i') and b0, b1 (of j'), x then y, sketch units. */
   private readonly ends = new Float64Array(8);
@@ -43,7 +43,9 @@ export class PairIntegrator {
     private readonly e: EdgeSet,
     obstacles: ObstacleIndex,
   ) {
-    this.region = new ViewRegion(sketchExtent(e));
+    const extent = sketchExtent(e);
+    this.region = new ViewRegion(extent);
+    this.breakpoints = new Breakpoints(extent);
     this.pieces = new ObstaclePieces(e.count);
     this.gatherer = new ObstacleGatherer(e, obstacles, this.region, this.pieces);
     this.points = new FixedPoints(e, obstacles);
