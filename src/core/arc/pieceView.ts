@@ -37,6 +37,9 @@ export class PieceView {
   private order = new Int32Array(64);
   private m = 0;
   private targetFront = true;
+  /** Blocking circles whose cone from the piece's middle meets the target's (nearCount of them). */
+  private near = new Int32Array(16);
+  private nearCount = 0;
 
   constructor(private readonly A: ArcSet) {}
 
@@ -82,15 +85,23 @@ export class PieceView {
       if (c > 0 && towardTarget(tg, this.aim(pmx, pmy, ux, uy))) this.push(Math.atan2(ux * tx + uy * ty, c), k);
     }
     const T = this.tanCircles;
+    this.nearCount = 0;
     for (let x = 0; x < T.length; x++) {
       const k = T[x];
       const fx = pmx - A.cx[k],
         fy = pmy - A.cy[k],
         r = A.r[k];
       const d = Math.sqrt(fx * fx + fy * fy);
-      if (!(d > r)) continue;
-      // A blocker whose cone misses the target's cone bounds no run: skip its tangents.
-      if (k !== tg.circle && !coneMeetsTarget(tg, this.aim(pmx, pmy, -fx, -fy), Math.asin(r / d))) continue;
+      // A blocker whose cone misses the target's cone bounds no run and stops no ray
+      // that reaches the target: skip its tangents, and leave it out of the ray casts.
+      if (!(d > r)) {
+        if (k !== tg.circle) this.keepNear(k);
+        continue;
+      }
+      if (k !== tg.circle) {
+        if (!coneMeetsTarget(tg, this.aim(pmx, pmy, -fx, -fy), Math.asin(r / d))) continue;
+        this.keepNear(k);
+      }
       const alpha = Math.atan2(fy, fx),
         beta = Math.atan2(Math.sqrt((d - r) * (d + r)), r);
       for (let s = 0; s < 2; s++) {
@@ -144,6 +155,16 @@ export class PieceView {
     r[2] = ux;
     r[3] = uy;
     return r;
+  }
+
+  /** Keep blocking circle k for this piece's ray casts. */
+  private keepNear(k: number): void {
+    if (this.nearCount === this.near.length) {
+      const grown = new Int32Array(2 * this.nearCount);
+      grown.set(this.near);
+      this.near = grown;
+    }
+    this.near[this.nearCount++] = k;
   }
 
   /** Adds a bounding direction: angle b (radians) of object `obj`. */
@@ -243,7 +264,9 @@ export class PieceView {
     for (let k = 0; k < S.length; k += 4) {
       if (raySegment(px, py, dx, dy, S[k], S[k + 1], S[k + 2], S[k + 3]) < tT) return false;
     }
-    for (const k of this.scene.circles) {
+    const near = this.near;
+    for (let q = 0; q < this.nearCount; q++) {
+      const k = near[q];
       const fx = px - A.cx[k],
         fy = py - A.cy[k];
       const b = fx * dx + fy * dy;
