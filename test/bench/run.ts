@@ -4,7 +4,7 @@
 import { buildEdges, totalEdgeCount } from '../../src/core/edges';
 import { edgeViewFactors } from '../../src/core/viewFactors';
 import type { SceneInput } from '../../src/core/scene';
-import { furnaceScene, tubeScene } from './scenes';
+import { bankScene, furnaceScene, tubeScene } from './scenes';
 import { demoSketch } from '../../src/state/demo';
 import { restore, toScene } from '../../src/document';
 import { solveBalance } from '../../src/core/balance';
@@ -101,6 +101,10 @@ for (const v of verdicts) console.log(v);
     g = median(polygon);
   console.log(
     `50-tube furnace section: exact circles median ${e.toFixed(0)} ms, 24-sided tubes median ${g.toFixed(0)} ms (target: circles no slower): ${e <= g ? 'met' : 'NOT met'}`,
+  );
+  const bank = time(bankScene(), rounds);
+  console.log(
+    `tube bank, two staggered rows of 25 exact circles (54 edges): min ${bank.min.toFixed(0)} ms, median ${bank.median.toFixed(0)} ms`,
   );
 }
 

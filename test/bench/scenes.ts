@@ -81,3 +81,22 @@ export function furnaceScene(sides: number): SceneInput {
   }
   return { polygons, circles, edgeSurface, surfaceCount: 54 };
 }
+
+/**
+ * A tube bank: the furnace box with two staggered rows of 25 exact tubes (diameter
+ * 0.12, pitch 0.48 along each row, rows 0.2 apart and shifted half a pitch), one
+ * surface per tube and per wall. Tubes there see one another past several others.
+ */
+export function bankScene(): SceneInput {
+  const circles: NonNullable<SceneInput['circles']> = [];
+  for (let k = 0; k < 25; k++) {
+    circles.push({ kind: 'solid', cx: 0.3 + 0.48 * k, cy: 3.8, radius: 0.06, arcs: 1 });
+    circles.push({ kind: 'solid', cx: 0.54 + 0.48 * k, cy: 3.6, radius: 0.06, arcs: 1 });
+  }
+  return {
+    polygons: [{ kind: 'enclosure', points: [0, 0, 12, 0, 12, 4, 0, 4] }],
+    circles,
+    edgeSurface: Array.from({ length: 54 }, (_, k) => k),
+    surfaceCount: 54,
+  };
+}
