@@ -46,6 +46,14 @@ export interface ObstacleIndex {
    * enters the hull.
    */
   bodyRHull: Float64Array;
+  /**
+   * Corners (flat x, y) of a convex polygon that blocks every view between edges of
+   * other polygons that the body blocks: body b's are bodyHullXY[2 bodyHullStart[b] ..
+   * 2 bodyHullStart[b + 1]). A convex body's own corners; another body's convex hull
+   * when no edge of another polygon enters it (see bodyRHull); none otherwise.
+   */
+  bodyHullStart: Int32Array;
+  bodyHullXY: Float64Array;
   /** Body index of each polygon, -1 for the enclosure. */
   bodyOfPolygon: Int32Array;
   /** Body bounding boxes, searched by view region, when there are many bodies; null means test them all. */
@@ -86,6 +94,8 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
   const walkEdge = new Int32Array(edges.count);
   const walkAngle = new Float64Array(edges.count);
   const bodyBox = new Float64Array(4 * B);
+  const bodyHullStart = new Int32Array(B + 1);
+  const hullXY: number[] = [];
   let allEdges: Flatbush | null = null;
   bodies.forEach((p, b) => {
     bodyFirstEdge[b] = start[p];
@@ -133,10 +143,15 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     } else {
       bodyRIn[b] = innerRadius(edges, start[p], start[p + 1], cx, cy);
     }
+    const hull = convexHull(edges, start[p], start[p + 1]);
+    let clean = true;
     if (!bodyConvex[b]) {
       allEdges ??= edgeBoxIndex(edges);
-      bodyRHull[b] = hullRadius(edges, allEdges, p, cx, cy, bodyRIn[b]);
+      clean = hullIsClean(edges, allEdges, p, hull);
+      bodyRHull[b] = clean ? Math.max(bodyRIn[b], hullInRadius(hull, cx, cy)) : bodyRIn[b];
     } else bodyRHull[b] = bodyRIn[b];
+    if (clean) for (const v of hull) hullXY.push(v);
+    bodyHullStart[b + 1] = hullXY.length >> 1;
     if (bodyConvex[b]) {
       // Solids are walked clockwise, so the angle falls along the walk.
       let e = start[p];
@@ -182,6 +197,8 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     bodyRMin,
     bodyRIn,
     bodyRHull,
+    bodyHullStart,
+    bodyHullXY: Float64Array.from(hullXY),
     bodyOfPolygon,
     bodyTree,
     wallEdges,
@@ -234,18 +251,15 @@ function convexHull(edges: EdgeSet, from: number, to: number): number[] {
 }
 
 /**
- * bodyRHull of polygon p (see ObstacleIndex): the distance from (cx, cy) to the nearest
- * side of its convex hull, or `fallback` when an edge of another polygon may enter
- * the hull (exact separation tests; in doubt it may).
+ * May no edge of another polygon enter the convex hull `hull` of polygon p (see
+ * bodyRHull)? Exact separation tests; false in doubt.
  */
-function hullRadius(edges: EdgeSet, index: Flatbush, p: number, cx: number, cy: number, fallback: number): number {
-  const hull = convexHull(edges, edges.polygonStart[p], edges.polygonStart[p + 1]);
-  const m = hull.length >> 1;
+function hullIsClean(edges: EdgeSet, index: Flatbush, p: number, hull: number[]): boolean {
   let x0 = Infinity,
     y0 = Infinity,
     x1 = -Infinity,
     y1 = -Infinity;
-  for (let k = 0; k < 2 * m; k += 2) {
+  for (let k = 0; k < hull.length; k += 2) {
     x0 = Math.min(x0, hull[k]);
     x1 = Math.max(x1, hull[k]);
     y0 = Math.min(y0, hull[k + 1]);
@@ -253,8 +267,14 @@ function hullRadius(edges: EdgeSet, index: Flatbush, p: number, cx: number, cy: 
   }
   for (const e of index.search(x0, y0, x1, y1)) {
     if (edges.polygon[e] !== p && !segmentMissesHull(hull, edges.ax[e], edges.ay[e], edges.bx[e], edges.by[e]))
-      return fallback;
+      return false;
   }
+  return true;
+}
+
+/** Distance from (cx, cy), inside the anticlockwise convex hull `hull`, to its nearest side (sketch units). */
+function hullInRadius(hull: number[], cx: number, cy: number): number {
+  const m = hull.length >> 1;
   let r = Infinity;
   for (let k = 0; k < m; k++) {
     const hx = hull[2 * k],
@@ -264,7 +284,7 @@ function hullRadius(edges: EdgeSet, index: Flatbush, p: number, cx: number, cy: 
     // The hull runs anticlockwise and (cx, cy), the corner average, lies inside: left of every side.
     r = Math.min(r, (dx * (cy - hy) - dy * (cx - hx)) / Math.hypot(dx, dy));
   }
-  return Math.max(fallback, r);
+  return r;
 }
 
 /** A box index of every edge (built once, for hullRadius). */

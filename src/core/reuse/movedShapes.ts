@@ -220,8 +220,9 @@ function edgesMoved(A: EdgeSet, B: EdgeSet, from: number, to: number): boolean {
 }
 
 /**
- * Body b's own numbers are unchanged. Its hull circle also depends on whether
- * another polygon enters its convex hull, so an unmoved body can change too.
+ * Body b's own numbers are unchanged. Its hull circle, and whether its hull stands in
+ * for it (bodyHullXY: kept or not), also depend on whether another polygon enters its
+ * convex hull, so an unmoved body can change too.
  */
 function sameBody(a: ObstacleIndex, c: ObstacleIndex, b: number): boolean {
   return (
@@ -231,6 +232,7 @@ function sameBody(a: ObstacleIndex, c: ObstacleIndex, b: number): boolean {
     a.bodyRMin[b] === c.bodyRMin[b] &&
     a.bodyRIn[b] === c.bodyRIn[b] &&
     a.bodyRHull[b] === c.bodyRHull[b] &&
-    a.bodyConvex[b] === c.bodyConvex[b]
+    a.bodyConvex[b] === c.bodyConvex[b] &&
+    a.bodyHullStart[b + 1] - a.bodyHullStart[b] === c.bodyHullStart[b + 1] - c.bodyHullStart[b]
   );
 }
