@@ -1,6 +1,7 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { ConvexWindows } from './convexWindows';
+import { cornerTestFlags, crossesBothStrings as crossesBothStringsIn } from './cornerCut';
 import type { ObstaclePieces } from './obstaclePieces';
 import {
   SIDE_ORDER as SIDE_ORDER_IN,
@@ -13,7 +14,8 @@ import {
 
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
-const SIDE_ORDER = SIDE_ORDER_IN,
+const crossesBothStrings = crossesBothStringsIn,
+  SIDE_ORDER = SIDE_ORDER_IN,
   SURELY_INSIDE = SURELY_INSIDE_IN,
   SURELY_OUTSIDE = SURELY_OUTSIDE_IN,
   UNSURE = UNSURE_IN;
@@ -27,13 +29,6 @@ const SIDE_ORDER = SIDE_ORDER_IN,
 
 /** Convex bodies with more edges than this are clipped through angular windows (measured by `npm run bench`). */
 const WINDOW_MIN_EDGES = 8;
-
-/**
- * Bodies whose blocking disc reaches past this fraction of their bounding circle are
- * left to the disc test: the corner test would cost more than the few pairs it adds
- * (a 75-sided tube row ran 3-9% slower with it; squashed and star bodies gain).
- */
-const ROUND_BODY = 0.9;
 
 /** Where a body's bounding circle lies against H (placeBody). */
 export const OUTSIDE = 0;
@@ -83,10 +78,7 @@ export class BodyClipper {
     private readonly region: ViewRegion,
     private readonly pieces: ObstaclePieces,
   ) {
-    this.cornerTest = new Uint8Array(ob.bodyCount);
-    for (let b = 0; b < ob.bodyCount; b++)
-      this.cornerTest[b] =
-        ob.bodyHullStart[b] < ob.bodyHullStart[b + 1] && ob.bodyRHull[b] <= ROUND_BODY * ob.bodyR[b] ? 1 : 0;
+    this.cornerTest = cornerTestFlags(ob);
   }
 
   /** Start the pair of edges i and j (the region is set for it). */
@@ -163,69 +155,7 @@ export class BodyClipper {
   polygonCutsView(b: number): boolean {
     const R = this.region;
     if (!this.cornerTest[b] || b === this.bodyI || b === this.bodyJ || !R.on[1] || !R.on[3]) return false;
-    // Its bounding circle must reach both strings first (two distances, no corner read).
-    if (!this.circleMeetsSide(1, b) || !this.circleMeetsSide(3, b)) return false;
-    return this.crossesSide(1, b) && this.crossesSide(3, b);
-  }
-
-  /** Does body b's bounding circle meet side k of H (float test, yes in doubt)? */
-  private circleMeetsSide(k: number, b: number): boolean {
-    const ob = this.ob,
-      R = this.region;
-    const r = ob.bodyR[b] * (1 + 1e-9);
-    const cx = ob.bodyCx[b],
-      cy = ob.bodyCy[b];
-    const x0 = R.sx[k],
-      y0 = R.sy[k];
-    const dx = R.ex[k] - x0,
-      dy = R.ey[k] - y0;
-    let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
-    t = t < 0 ? 0 : t > 1 ? 1 : t;
-    const ux = cx - (x0 + t * dx),
-      uy = cy - (y0 + t * dy);
-    return ux * ux + uy * uy <= r * r;
-  }
-
-  /**
-   * Does body b's stand-in polygon surely cross side k of H: corners surely on both
-   * sides of its line (margin tol[k], as the clip's float pass), and its chord on the
-   * line surely overlapping the side between its ends (a margin of 1e-9 of its length)?
-   */
-  private crossesSide(k: number, b: number): boolean {
-    const R = this.region,
-      XY = this.ob.bodyHullXY;
-    const first = this.ob.bodyHullStart[b],
-      last = this.ob.bodyHullStart[b + 1] - 1;
-    const x0 = R.sx[k],
-      y0 = R.sy[k],
-      dx = R.ex[k] - x0,
-      dy = R.ey[k] - y0,
-      tol = R.tol[k];
-    const len2 = dx * dx + dy * dy;
-    let lo = Infinity,
-      hi = -Infinity,
-      inside = false,
-      outside = false;
-    // Each side c -> c + 1 of the polygon (the last back to the first): where its
-    // corners lie on opposite sides of the line, the crossing's fraction along side k.
-    for (let c = first; c <= last; c++) {
-      const n = c === last ? first : c + 1;
-      const ax = XY[2 * c] - x0,
-        ay = XY[2 * c + 1] - y0,
-        bx = XY[2 * n] - x0,
-        by = XY[2 * n + 1] - y0;
-      const da = dx * ay - dy * ax,
-        db = dx * by - dy * bx;
-      if (da > tol) inside = true;
-      else if (da < -tol) outside = true;
-      if ((da > 0 && db < 0) || (da < 0 && db > 0)) {
-        const f = da / (da - db);
-        const u = ((ax + f * (bx - ax)) * dx + (ay + f * (by - ay)) * dy) / len2;
-        if (u < lo) lo = u;
-        if (u > hi) hi = u;
-      }
-    }
-    return inside && outside && hi > 1e-9 && lo < 1 - 1e-9;
+    return crossesBothStrings(this.ob, R, b);
   }
 
   /**
