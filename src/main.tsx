@@ -8,6 +8,7 @@ import { demoSketch } from './state/demo';
 import { spawnViewFactorWorker } from './worker/spawn';
 import { browserTabChannel } from './state/tabs/lease';
 import './ui/styles.css';
+import './ui/panels.css';
 
 const runtime = startRuntime({
   storage: window.localStorage,

@@ -6,7 +6,7 @@ import type { ColumnWindow } from './MatrixRow';
 
 /** Above this many surfaces the matrix is windowed (the report's full-matrix limit too). */
 export const WINDOW_FROM = 60;
-/** Row height of a windowed table, px (set in styles.css through --row-px). */
+/** Row height of a windowed table, px (set in panels.css through --row-px). */
 export const ROW_PX = 22;
 /** Rows and columns drawn beyond the visible ones on each side. */
 const OVERSCAN = 4;
