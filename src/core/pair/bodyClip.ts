@@ -1,7 +1,11 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { ConvexWindows } from './convexWindows';
-import { cornerTestFlags, crossesBothStrings as crossesBothStringsIn } from './cornerCut';
+import {
+  centreToSideSquared as centreToSideSquaredIn,
+  cornerTestFlags,
+  crossesBothStrings as crossesBothStringsIn,
+} from './cornerCut';
 import type { ObstaclePieces } from './obstaclePieces';
 import {
   SIDE_ORDER as SIDE_ORDER_IN,
@@ -15,6 +19,7 @@ import {
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call, measured at ~10% of hard scenes.
 const crossesBothStrings = crossesBothStringsIn,
+  centreToSideSquared = centreToSideSquaredIn,
   SIDE_ORDER = SIDE_ORDER_IN,
   SURELY_INSIDE = SURELY_INSIDE_IN,
   SURELY_OUTSIDE = SURELY_OUTSIDE_IN,
@@ -164,20 +169,9 @@ export class BodyClipper {
    * engine does not inline are boxed.
    */
   private discMeetsSide(k: number, b: number): boolean {
-    const ob = this.ob,
-      R = this.region;
+    const ob = this.ob;
     const r = (b === this.bodyI || b === this.bodyJ ? ob.bodyRIn[b] : ob.bodyRHull[b]) * (1 - 1e-9);
-    const cx = ob.bodyCx[b],
-      cy = ob.bodyCy[b];
-    const x0 = R.sx[k],
-      y0 = R.sy[k];
-    const dx = R.ex[k] - x0,
-      dy = R.ey[k] - y0;
-    let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
-    t = t < 0 ? 0 : t > 1 ? 1 : t;
-    const ux = cx - (x0 + t * dx),
-      uy = cy - (y0 + t * dy);
-    return ux * ux + uy * uy < r * r;
+    return centreToSideSquared(ob, this.region, k, b) < r * r;
   }
 
   /**

@@ -35,6 +35,11 @@ export function crossesBothStrings(ob: ObstacleIndex, R: ViewRegion, b: number):
 /** Does body b's bounding circle meet side k of H (float test, yes in doubt)? */
 function circleMeetsSide(ob: ObstacleIndex, R: ViewRegion, k: number, b: number): boolean {
   const r = ob.bodyR[b] * (1 + 1e-9);
+  return centreToSideSquared(ob, R, k, b) <= r * r;
+}
+
+/** Squared distance from body b's centre to side k of H (the segment), sketch units squared. */
+export function centreToSideSquared(ob: ObstacleIndex, R: ViewRegion, k: number, b: number): number {
   const cx = ob.bodyCx[b],
     cy = ob.bodyCy[b];
   const x0 = R.sx[k],
@@ -45,7 +50,7 @@ function circleMeetsSide(ob: ObstacleIndex, R: ViewRegion, k: number, b: number)
   t = t < 0 ? 0 : t > 1 ? 1 : t;
   const ux = cx - (x0 + t * dx),
     uy = cy - (y0 + t * dy);
-  return ux * ux + uy * uy <= r * r;
+  return ux * ux + uy * uy;
 }
 
 /**
