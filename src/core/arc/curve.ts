@@ -7,7 +7,7 @@ import type { EdgeSet } from '../edges';
 
 // Fields that hold fractions start as NaN (a double) until load: a field first stored
 // as a small integer changes its layout when it first holds a fraction, and V8 then
-// discards the code compiled for the old layout (see ViewRegion's box).
+// discards the code compiled for the old layout (DEVELOPERS.md, "Two V8 habits").
 export class Curve {
   isArc = false;
   /** Segment a -> b, radiating side on the left. */

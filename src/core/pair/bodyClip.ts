@@ -42,7 +42,7 @@ const STRADDLING = 2;
 
 export class BodyClipper {
   private readonly clipOut: SegmentClip = {
-    t0: NaN, // fractions: NaN, a double, until set (see ViewRegion's box)
+    t0: NaN, // fractions: NaN, a double, until set (see Curve's fields)
     t1: NaN,
     startInside: false,
     endInside: false,

@@ -31,7 +31,7 @@ export class ObstacleGatherer {
   constructor(
     private readonly e: EdgeSet,
     private readonly ob: ObstacleIndex,
-    region: ViewRegion,
+    private readonly region: ViewRegion,
     private readonly pieces: ObstaclePieces,
   ) {
     this.clip = new BodyClipper(e, ob, region, pieces);
@@ -73,6 +73,7 @@ export class ObstacleGatherer {
       this.discBlocks(i, j, hj2)
     )
       return true;
+    this.region.measure(); // the side lengths and margins, for everything below
     // Hinted convex bodies that cross both side strings block it too (a long, thin body
     // whose inner disc falls short of them), still before anything is clipped.
     if (this.crossBlocks(i, j, hi) || (hj !== hi && this.crossBlocks(i, j, hj))) return true;

@@ -48,16 +48,8 @@ export class ViewRegion {
   readonly tol = new Float64Array(4);
   private readonly normal = new Float64Array(4);
   private normalReady = false;
-  /**
-   * Bounding box of H. NaN until set: a field first stored as a small integer changes
-   * its layout when it first holds a fraction, and V8 then discards every piece of code
-   * compiled for the old layout (measured: a cascade of deoptimisations in the first
-   * computation, and slower code after it in about a third of processes).
-   */
-  minX = NaN;
-  minY = NaN;
-  maxX = NaN;
-  maxY = NaN;
+  /** False from set() until measure(): invLen and tol are not yet those of this pair. */
+  private measured = false;
 
   /** `extent`: largest coordinate magnitude of the (shifted) sketch, scales float margins. */
   constructor(readonly extent: number) {}
@@ -67,22 +59,26 @@ export class ViewRegion {
    * is anticlockwise), given as P = [a0x, a0y, a1x, a1y, b0x, b0y, b1x, b1y].
    */
   set(P: Float64Array): void {
-    const a0x = P[0],
-      a0y = P[1],
-      a1x = P[2],
-      a1y = P[3],
-      b0x = P[4],
-      b0y = P[5],
-      b1x = P[6],
-      b1y = P[7];
     this.side(0, P, 0, 2);
     this.side(1, P, 2, 4);
     this.side(2, P, 4, 6);
     this.side(3, P, 6, 0);
-    this.minX = Math.min(a0x, a1x, b0x, b1x);
-    this.minY = Math.min(a0y, a1y, b0y, b1y);
-    this.maxX = Math.max(a0x, a1x, b0x, b1x);
-    this.maxY = Math.max(a0y, a1y, b0y, b1y);
+    this.measured = false;
+  }
+
+  /**
+   * The sides' lengths and margins (invLen, tol), which set() leaves for later: a pair
+   * that a remembered body's disc blocks ends on the sides' ends alone. Call before
+   * either is read; once per pair is enough.
+   */
+  measure(): void {
+    if (this.measured) return;
+    this.measured = true;
+    for (let k = 0; k < 4; k++) {
+      const len = Math.sqrt((this.ex[k] - this.sx[k]) ** 2 + (this.ey[k] - this.sy[k]) ** 2);
+      this.invLen[k] = len > 0 ? 1 / len : 0;
+      this.tol[k] = 1e-14 * len * this.extent;
+    }
     this.normalReady = false;
   }
 
@@ -97,9 +93,6 @@ export class ViewRegion {
     this.ex[k] = x1;
     this.ey[k] = y1;
     this.on[k] = x0 === x1 && y0 === y1 ? 0 : 1;
-    const len = Math.sqrt((x1 - x0) ** 2 + (y1 - y0) ** 2);
-    this.invLen[k] = len > 0 ? 1 / len : 0;
-    this.tol[k] = 1e-14 * len * this.extent;
   }
 
   /** Angle of each side's inward (left) normal, radians; computed once per pair, on first use. */
