@@ -47,3 +47,33 @@ export function bigSketch(perEdge: boolean): SketchFile {
     ],
   };
 }
+
+/**
+ * The furnace section of `npm run bench` as a sketch file: a 12 x 4 box (one surface per
+ * wall) with one row of 50 exact tubes (diameter 0.12, pitch 0.24, centre line at 3.8),
+ * one surface per tube. The bench drags tube 26 (centre 6.12, 3.8) by up to 0.05 either way.
+ */
+export function furnaceSketch(): SketchFile {
+  return {
+    version: 2,
+    units: 'm',
+    shapes: [
+      {
+        kind: 'enclosure',
+        points: [
+          [0, 0],
+          [12, 0],
+          [12, 4],
+          [0, 4],
+        ],
+        surface: ['floor', 'right', 'roof', 'left'],
+      },
+      ...Array.from({ length: 50 }, (_, k) => ({
+        kind: 'solid' as const,
+        points: [],
+        circle: { center: [0.12 + 0.24 * k, 3.8] as [number, number], radius: 0.06 },
+        surface: `tube ${k + 1}`,
+      })),
+    ],
+  };
+}

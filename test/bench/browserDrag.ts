@@ -88,7 +88,12 @@ export interface FollowFigures {
  * Drag the tube at sketch point `at` for `seconds`, one pointer move per animation
  * frame back and forth along x (±0.3 sketch units), then undo the drag.
  */
-export async function followDrag(page: Page, at: [number, number], seconds: number): Promise<FollowFigures> {
+export async function followDrag(
+  page: Page,
+  at: [number, number],
+  seconds: number,
+  sweep = 0.3,
+): Promise<FollowFigures> {
   await page.evaluate(() => {
     const w = window as unknown as DragWindow;
     const d: DragWindow['__drag'] = (w.__drag = {
@@ -145,7 +150,7 @@ export async function followDrag(page: Page, at: [number, number], seconds: numb
   // Snapping off, so every pointer move moves the tube.
   await page.getByRole('checkbox', { name: 'snap' }).uncheck();
   const [sx, sy] = await screenOf(page, ...at);
-  const px = (await screenOf(page, at[0] + 0.3, at[1]))[0] - sx;
+  const px = (await screenOf(page, at[0] + sweep, at[1]))[0] - sx;
   await page.mouse.move(sx, sy);
   await page.mouse.down();
   const start = await page.evaluate(() => {
@@ -171,7 +176,7 @@ export async function followDrag(page: Page, at: [number, number], seconds: numb
       step[0] = () => {
         const t = performance.now() - began;
         if (t > ms) return;
-        // A triangle wave, 2 s per period: the tube sweeps ±0.3 around its place.
+        // A triangle wave, 2 s per period: the tube sweeps ±sweep around its place.
         const phase = (t % 2000) / 2000;
         const x = phase < 0.5 ? -1 + 4 * phase : 3 - 4 * phase;
         const init = { clientX: x0 + x * span, clientY: y0, buttons: 1, pointerId: 1, pointerType: 'mouse' };
