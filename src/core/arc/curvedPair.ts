@@ -3,6 +3,7 @@ import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
 import { Curve, towardTarget as towardTargetIn } from './curve';
 import { DiscShadow } from './discShadow';
+import { HiddenCircles } from './hiddenCircles';
 import { convexHull as convexHullIn, discMeetsHull as discMeetsHullIn, PairScene } from './pairScene';
 import { PieceView } from './pieceView';
 import {
@@ -33,7 +34,9 @@ const touchAngles = touchAnglesIn;
 // integrates exactly: towards a point to a distance change, towards a tangent to the
 // change of a taut string wrapped on the circle, at the horizon to +-1/2 ds
 // (crossed strings generalised; Hottel; Modest, Radiative Heat Transfer, ch. 4).
-// Before any of that, a pair that one solid circle hides wholly (discShadow.ts) is 0.
+// Before any of that, a pair that one solid circle hides wholly (discShadow.ts) is 0,
+// and blocking circles hidden from the whole emitter behind nearer ones are left out
+// (hiddenCircles.ts).
 
 /**
  * The shadow test's margin over the largest coordinate of the sketch: about 450 ulps,
@@ -61,6 +64,7 @@ export class CurvedPairIntegrator implements EventFilter {
   /** A ray from an event point (x, y, then direction), for the target's cone test. */
   private readonly ray = new Float64Array(4);
   private readonly shadow: DiscShadow;
+  private readonly hidden = new HiddenCircles();
 
   constructor(
     private readonly E: EdgeSet,
@@ -121,6 +125,7 @@ export class CurvedPairIntegrator implements EventFilter {
     if (this.surelyApart()) return 0;
     this.scene.collect(em, i, tg, j);
     if (this.oneCircleHides()) return 0;
+    this.hidden.drop(this.scene, this.E.arcs, em, tg, this.shadow);
     this.findBreaks();
     return this.integrate();
   }

@@ -37,12 +37,20 @@ export class DiscShadow {
    * not shown: a target on a concave (enclosure) arc, or any test failing.
    */
   hides(em: Curve, tg: Curve, cx: number, cy: number, r: number): boolean {
+    if (tg.isArc) return tg.solid && this.hidesDisc(em, tg.cx, tg.cy, tg.r, cx, cy, r);
     this.count = 0;
-    if (tg.isArc) {
-      if (!tg.solid || !this.discUmbra(cx, cy, r, tg.cx, tg.cy, tg.r)) return false;
-    } else if (!this.discUmbra(cx, cy, r, tg.ax, tg.ay, 0) || !this.discUmbra(cx, cy, r, tg.bx, tg.by, 0)) {
-      return false;
-    }
+    if (!this.discUmbra(cx, cy, r, tg.ax, tg.ay, 0) || !this.discUmbra(cx, cy, r, tg.bx, tg.by, 0)) return false;
+    return this.emitterKeeps(em);
+  }
+
+  /** As hides, for the whole disc (tx, ty, tr) as the target. */
+  hidesDisc(em: Curve, tx: number, ty: number, tr: number, cx: number, cy: number, r: number): boolean {
+    this.count = 0;
+    return this.discUmbra(cx, cy, r, tx, ty, tr) && this.emitterKeeps(em);
+  }
+
+  /** Does the whole emitter keep to every line gathered (down to -margin)? */
+  private emitterKeeps(em: Curve): boolean {
     const L = this.lines;
     for (let k = 0; k < this.count; k++) {
       if (lowestOn(em, L[3 * k], L[3 * k + 1], L[3 * k + 2]) < -this.margin) return false;
