@@ -4,8 +4,12 @@ import { useLayoutEffect, useState, type RefObject } from 'react';
 import { useVirtualizer } from '@tanstack/react-virtual';
 import type { ColumnWindow } from './MatrixRow';
 
-/** Above this many surfaces the matrix is windowed (the report's full-matrix limit too). */
-export const WINDOW_FROM = 60;
+/**
+ * Above this many surfaces the matrix is windowed. At 54 surfaces a full table has
+ * 2916 cells, and an answer every 50 ms during a drag restyled them all: the exact-tube
+ * furnace drag drew 9-39 frames a second with the full table, 56 windowed.
+ */
+export const WINDOW_FROM = 30;
 /** Row height of a windowed table, px (set in panels.css through --row-px). */
 export const ROW_PX = 22;
 /** Rows and columns drawn beyond the visible ones on each side. */
