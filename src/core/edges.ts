@@ -59,6 +59,19 @@ export function sketchExtent(e: EdgeSet): number {
   return extent;
 }
 
+/**
+ * Largest coordinate magnitude of the edges' start points and of the circles to their
+ * rims (sketch units, shifted origin). It scales the exact circles' float margins
+ * (arc/discShadow.ts), so two sketches share a pair's number only when they share it too.
+ */
+export function extentWithCircles(e: EdgeSet): number {
+  let extent = sketchExtent(e);
+  const A = e.arcs;
+  for (let c = 0; c < A.circleCount; c++)
+    extent = Math.max(extent, Math.abs(A.cx[c]) + A.r[c], Math.abs(A.cy[c]) + A.r[c]);
+  return extent;
+}
+
 /** Twice the signed area of a flat [x0,y0,x1,y1,...] polygon; > 0 when anticlockwise (y up). */
 export function signedArea2(points: ArrayLike<number>): number {
   const n = points.length >> 1;

@@ -1,4 +1,4 @@
-import { sketchExtent, type EdgeSet } from '../edges';
+import { extentWithCircles, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
 import { Curve, towardTarget as towardTargetIn } from './curve';
@@ -44,15 +44,6 @@ const touchAngles = touchAnglesIn;
  */
 const SHADOW_MARGIN = 1e-13;
 
-/** Largest coordinate magnitude of the sketch's straight edges and circles (to their rims), sketch units. */
-function curveExtent(E: EdgeSet): number {
-  let extent = sketchExtent(E);
-  const A = E.arcs;
-  for (let c = 0; c < A.circleCount; c++)
-    extent = Math.max(extent, Math.abs(A.cx[c]) + A.r[c], Math.abs(A.cy[c]) + A.r[c]);
-  return extent;
-}
-
 export class CurvedPairIntegrator implements EventFilter {
   private readonly em = new Curve();
   private readonly tg = new Curve();
@@ -73,7 +64,7 @@ export class CurvedPairIntegrator implements EventFilter {
     this.scene = new PairScene(E, obstacles);
     this.breaks.filter = this;
     this.view = new PieceView(E.arcs);
-    this.shadow = new DiscShadow(SHADOW_MARGIN * curveExtent(E));
+    this.shadow = new DiscShadow(SHADOW_MARGIN * extentWithCircles(E));
   }
 
   /**

@@ -109,7 +109,7 @@ export class DiscShadow {
 }
 
 /** Least value of n . x + w over the curve (|n| = 1; sketch units). */
-export function lowestOn(em: Curve, nx: number, ny: number, w: number): number {
+function lowestOn(em: Curve, nx: number, ny: number, w: number): number {
   const atA = nx * em.ax + ny * em.ay + w,
     atB = nx * em.bx + ny * em.by + w;
   let low = Math.min(atA, atB);

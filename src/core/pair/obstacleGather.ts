@@ -74,8 +74,8 @@ export class ObstacleGatherer {
     )
       return true;
     this.region.measure(); // the side lengths and margins, for everything below
-    // Hinted convex bodies that cross both side strings block it too (a long, thin body
-    // whose inner disc falls short of them), still before anything is clipped.
+    // Hinted bodies whose corners (or clean hull) cross both side strings block it too
+    // (a long, thin body whose inner disc falls short of them), before anything is clipped.
     if (this.crossBlocks(i, j, hi) || (hj !== hi && this.crossBlocks(i, j, hj))) return true;
     // Probed obstacles keep their pieces; the searches below skip them.
     if (this.probe(hi, 0) || (hj !== hi && this.probe(hj, 1))) return true;

@@ -64,6 +64,7 @@ export class ViewRegion {
     this.side(2, P, 4, 6);
     this.side(3, P, 6, 0);
     this.measured = false;
+    this.normalReady = false;
   }
 
   /**
@@ -79,7 +80,6 @@ export class ViewRegion {
       this.invLen[k] = len > 0 ? 1 / len : 0;
       this.tol[k] = 1e-14 * len * this.extent;
     }
-    this.normalReady = false;
   }
 
   /** Side k from point (P[s], P[s + 1]) to point (P[e], P[e + 1]). */

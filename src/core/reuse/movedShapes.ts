@@ -7,7 +7,7 @@
 // moved shape, or a moved shape may enter its hull before or after the edit. Every
 // other pair keeps its number from the previous answer, the same bits a full
 // computation gives (the tests compare them over random edits).
-import { sketchExtent, totalEdgeCount, type EdgeSet } from '../edges';
+import { extentWithCircles, sketchExtent, totalEdgeCount, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import type { EdgePairs } from '../pairRows';
 import { Curve } from '../arc/curve';
@@ -77,6 +77,8 @@ export class MovedShapes {
     if (A.originX !== B.originX || A.originY !== B.originY) return null;
     const extent = sketchExtent(B);
     if (sketchExtent(A) !== extent) return null;
+    // The exact circles' margins scale with the circles' rims too (arc/discShadow.ts).
+    if (extentWithCircles(A) !== extentWithCircles(B)) return null;
     const moved = new Uint8Array(totalEdgeCount(B));
     const discs: number[] = [];
     const slack = RELATIVE_SLACK * extent;
