@@ -2,6 +2,7 @@
 // furnace box of 52 wall edges holding 20 tubes drawn as 48-gons, either one surface
 // per tube and per wall (24 surfaces) or every edge its own surface.
 import type { SketchFile } from '../../src/state/sketchFile';
+import { FURNACE_BOX, FURNACE_TUBE_RADIUS, FURNACE_TUBES, furnaceTubeCentre } from './scenes';
 
 const WALL_PER_SIDE = 13;
 const SIDES = 48;
@@ -49,29 +50,21 @@ export function bigSketch(perEdge: boolean): SketchFile {
 }
 
 /**
- * The furnace section of `npm run bench` as a sketch file: a 12 x 4 box (one surface per
- * wall) with one row of 50 exact tubes (diameter 0.12, pitch 0.24, centre line at 3.8),
- * one surface per tube. The bench drags tube 26 (centre 6.12, 3.8) by up to 0.05 either way.
+ * The furnace section of `npm run bench` (scenes.ts, furnaceScene) as a sketch file: one
+ * surface per wall and per exact tube. The bench drags tube 26 (centre 6.12, 3.8) by up to 0.05 either way.
  */
 export function furnaceSketch(): SketchFile {
+  const box: [number, number][] = [];
+  for (let k = 0; k < FURNACE_BOX.length; k += 2) box.push([FURNACE_BOX[k], FURNACE_BOX[k + 1]]);
   return {
     version: 2,
     units: 'm',
     shapes: [
-      {
-        kind: 'enclosure',
-        points: [
-          [0, 0],
-          [12, 0],
-          [12, 4],
-          [0, 4],
-        ],
-        surface: ['floor', 'right', 'roof', 'left'],
-      },
-      ...Array.from({ length: 50 }, (_, k) => ({
+      { kind: 'enclosure', points: box, surface: ['floor', 'right', 'roof', 'left'] },
+      ...Array.from({ length: FURNACE_TUBES }, (_, k) => ({
         kind: 'solid' as const,
         points: [],
-        circle: { center: [0.12 + 0.24 * k, 3.8] as [number, number], radius: 0.06 },
+        circle: { center: furnaceTubeCentre(k), radius: FURNACE_TUBE_RADIUS },
         surface: `tube ${k + 1}`,
       })),
     ],

@@ -10,6 +10,7 @@ import type { Page } from 'playwright-core';
 import { screenOf, startApp, type TestWindow } from '../e2e/harness';
 import { bigSketch, dragSizeSketch, followDrag, openSketch } from './browserDrag';
 import { furnaceSketch } from './bigSketch';
+import { furnaceTubeCentre } from './scenes';
 
 type LatencyWindow = TestWindow & { __lat: { lastEvent: number; samples: number[]; changes: number } };
 
@@ -146,7 +147,7 @@ try {
   // The furnace section of `npm run bench`, 50 exact tubes in a row: its middle tube
   // dragged ±0.05 along the row (information: the table rate of a drag of exact circles).
   await openSketch(page, furnaceSketch());
-  const f = await followDrag(page, [6.12, 3.8], 4, 0.05);
+  const f = await followDrag(page, furnaceTubeCentre(25), 4, 0.05);
   console.log(
     `furnace section, 50 exact tubes in a row (54 edges), the middle tube dragged ${f.seconds.toFixed(1)} s, pointer moves ${f.movesPerSecond.toFixed(0)}/s: ` +
       `table updates ${f.tablesPerSecond.toFixed(1)}/s; frames ${f.framesPerSecond.toFixed(0)}/s, of which showing a new position ${f.followPerSecond.toFixed(0)}/s`,

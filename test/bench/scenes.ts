@@ -54,6 +54,16 @@ export function tubeScene(seed: number, tubes: number, sides: number, wallEdges:
   return { polygons, edgeSurface: Array.from({ length: count }, (_, k) => k), surfaceCount: count };
 }
 
+/** The furnace section's box (flat x, y, anticlockwise), its tubes and their radius, sketch units (m). */
+export const FURNACE_BOX: readonly number[] = [0, 0, 12, 0, 12, 4, 0, 4];
+export const FURNACE_TUBES = 50;
+export const FURNACE_TUBE_RADIUS = 0.06;
+
+/** Centre of the furnace section's tube k (0-based): pitch 0.24 along y = 3.8. */
+export function furnaceTubeCentre(k: number): [number, number] {
+  return [0.12 + 0.24 * k, 3.8];
+}
+
 /**
  * A furnace section: a 12 x 4 box with one row of 50 tubes (diameter 0.12, pitch 0.24,
  * centre line 0.2 below the top wall, as in a wall-fired heater). Tubes are exact
@@ -61,13 +71,12 @@ export function tubeScene(seed: number, tubes: number, sides: number, wallEdges:
  * the four walls are a surface each.
  */
 export function furnaceScene(sides: number): SceneInput {
-  const polygons: SceneInput['polygons'] = [{ kind: 'enclosure', points: [0, 0, 12, 0, 12, 4, 0, 4] }];
+  const polygons: SceneInput['polygons'] = [{ kind: 'enclosure', points: [...FURNACE_BOX] }];
   const circles: NonNullable<SceneInput['circles']> = [];
   const edgeSurface = [0, 1, 2, 3];
-  const r = 0.06;
-  for (let k = 0; k < 50; k++) {
-    const cx = 0.12 + 0.24 * k,
-      cy = 3.8;
+  const r = FURNACE_TUBE_RADIUS;
+  for (let k = 0; k < FURNACE_TUBES; k++) {
+    const [cx, cy] = furnaceTubeCentre(k);
     if (sides === 0) {
       circles.push({ kind: 'solid', cx, cy, radius: r, arcs: 1 });
       edgeSurface.push(4 + k);
@@ -90,11 +99,11 @@ export function furnaceScene(sides: number): SceneInput {
 export function bankScene(): SceneInput {
   const circles: NonNullable<SceneInput['circles']> = [];
   for (let k = 0; k < 25; k++) {
-    circles.push({ kind: 'solid', cx: 0.3 + 0.48 * k, cy: 3.8, radius: 0.06, arcs: 1 });
-    circles.push({ kind: 'solid', cx: 0.54 + 0.48 * k, cy: 3.6, radius: 0.06, arcs: 1 });
+    circles.push({ kind: 'solid', cx: 0.3 + 0.48 * k, cy: 3.8, radius: FURNACE_TUBE_RADIUS, arcs: 1 });
+    circles.push({ kind: 'solid', cx: 0.54 + 0.48 * k, cy: 3.6, radius: FURNACE_TUBE_RADIUS, arcs: 1 });
   }
   return {
-    polygons: [{ kind: 'enclosure', points: [0, 0, 12, 0, 12, 4, 0, 4] }],
+    polygons: [{ kind: 'enclosure', points: [...FURNACE_BOX] }],
     circles,
     edgeSurface: Array.from({ length: 54 }, (_, k) => k),
     surfaceCount: 54,
