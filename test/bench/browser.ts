@@ -7,7 +7,7 @@
 // moving on every animation frame, counting table updates and canvas frames per second.
 // Prints min, median and p90; the targets are reported with a met / NOT met verdict, never asserted.
 import type { Page } from 'playwright-core';
-import { screenOf, startApp, type TestWindow } from '../e2e/harness';
+import { screenOf, startApp, waitReady, type TestWindow } from '../e2e/harness';
 import { bigSketch, dragSizeSketch, followDrag, openSketch } from './browserDrag';
 import { furnaceSketch } from './bigSketch';
 import { furnaceTubeCentre } from './scenes';
@@ -53,8 +53,6 @@ async function watch(page: Page, selector: string, kind: 'pointermove' | 'change
 const changes = (page: Page) => page.evaluate(() => (window as unknown as LatencyWindow).__lat.changes);
 const samples = (page: Page) => page.evaluate(() => (window as unknown as LatencyWindow).__lat.samples);
 const jobs = (page: Page) => page.evaluate(() => (window as unknown as TestWindow).__tautline.client.launched);
-const waitReady = (page: Page) =>
-  page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
 
 /**
  * Drag from sketch point `at`, waiting for the table after every move; `offset(i)`

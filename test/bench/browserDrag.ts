@@ -3,7 +3,7 @@
 // pointer moving on every animation frame, not waiting for anything, as a hand does.
 import type { Page } from 'playwright-core';
 import type { SketchFile } from '../../src/state/sketchFile';
-import { screenOf, type TestWindow } from '../e2e/harness';
+import { screenOf, waitReady, type TestWindow } from '../e2e/harness';
 import { tubeScene } from './scenes';
 
 export { bigSketch } from './bigSketch';
@@ -59,11 +59,7 @@ export async function openSketch(page: Page, sketch: SketchFile): Promise<void> 
     JSON.stringify(sketch.shapes[0].surface),
     { timeout: 120_000 },
   );
-  await page.waitForFunction(
-    () => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready',
-    undefined,
-    { timeout: 120_000 },
-  );
+  await waitReady(page, 120_000);
 }
 
 export interface FollowFigures {

@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { startApp, type App, type TestWindow } from './harness';
+import { startApp, type App, type TestWindow, waitReady } from './harness';
 
 let app: App;
 let page: Page;
@@ -15,7 +15,7 @@ beforeAll(async () => {
   page = await app.context.newPage();
   page.on('pageerror', (e) => errors.push(e.message));
   await page.goto(app.url);
-  await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+  await waitReady(page);
 }, 180_000);
 
 afterAll(async () => {
@@ -81,7 +81,7 @@ describe('heat exchange in chromium', () => {
     await page.keyboard.press('Control+Shift+z');
     await expect.poll(async () => (await docOf()).surfaces!['fired floor'].temperature).toBe(1400);
     await page.reload();
-    await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+    await waitReady(page);
     await openTab();
     expect((await docOf()).surfaces!['fired floor'].temperature).toBe(1400);
     expect(await netHeatValue('tube 1')).toBe(tubeAt1400);

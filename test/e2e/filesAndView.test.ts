@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { dragOnCanvas, screenOf as screenPoint, startApp, type App, type TestWindow } from './harness';
+import { dragOnCanvas, screenOf as screenPoint, startApp, type App, type TestWindow, waitReady } from './harness';
 import type { SketchFile } from '../../src/state/sketchFile';
 
 let app: App;
@@ -13,7 +13,7 @@ beforeAll(async () => {
   app = await startApp();
   page = await app.context.newPage();
   await page.goto(app.url);
-  await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+  await waitReady(page);
 }, 180_000);
 
 afterAll(async () => {
@@ -80,7 +80,7 @@ describe('files and view', () => {
       window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
     }, dropped);
     await expect.poll(async () => (await state()).doc.units).toBe('mm');
-    await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+    await waitReady(page);
     expect(
       await page
         .getByRole('table', { name: /view factor/i })
@@ -132,7 +132,7 @@ describe('files and view', () => {
     await page.mouse.move(bx, by, { steps: 2 });
     await page.mouse.click(bx, by);
     await expect.poll(async () => (await state()).doc.shapes.length).toBe(3);
-    await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+    await waitReady(page);
     // The tube and the rectangle are one surface each; a circle's arcs come after every polygon edge (README).
     const rows = await page
       .getByRole('table', { name: /view factor/i })

@@ -78,6 +78,15 @@ export async function startApp(): Promise<App> {
   };
 }
 
+/** Wait until the app says its results are ready (the status line's `data-status`). */
+export async function waitReady(page: Page, timeout?: number): Promise<void> {
+  await page.waitForFunction(
+    () => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready',
+    undefined,
+    timeout === undefined ? undefined : { timeout },
+  );
+}
+
 /** Screen position (page pixels) of a sketch point, from the app's own camera. */
 export async function screenOf(page: Page, x: number, y: number): Promise<[number, number]> {
   const box = (await page.locator('.canvas-box').boundingBox())!;

@@ -5,7 +5,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { startApp, type App } from './harness';
+import { startApp, type App, waitReady } from './harness';
 import { runReport, type ReportIO } from '../../src/cli/reportCommand';
 
 let app: App;
@@ -66,11 +66,11 @@ beforeAll(async () => {
   page = await app.context.newPage();
   page.on('pageerror', (e) => errors.push(e.message));
   await page.goto(app.url);
-  await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+  await waitReady(page);
   await page
     .locator('input[type=file]')
     .setInputFiles({ name: 'furnace.json', mimeType: 'application/json', buffer: Buffer.from(text) });
-  await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+  await waitReady(page);
 }, 180_000);
 
 afterAll(async () => {

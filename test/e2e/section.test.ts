@@ -8,7 +8,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync, readFileSync } from 'node:fs';
 import type { Locator, Page } from 'playwright-core';
-import { startApp, type App, type TestWindow } from './harness';
+import { startApp, type App, type TestWindow, waitReady } from './harness';
 import { main } from '../../src/cli/main';
 import type { CliIO } from '../../src/cli/io';
 
@@ -22,7 +22,7 @@ beforeAll(async () => {
   page = await app.context.newPage();
   page.on('pageerror', (e) => errors.push(e.message));
   await page.goto(app.url);
-  await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
+  await waitReady(page);
 }, 180_000);
 
 afterAll(async () => {

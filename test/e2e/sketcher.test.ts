@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync, readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import type { Page } from 'playwright-core';
-import { dragOnCanvas, screenOf as screenPoint, startApp, type App, type TestWindow } from './harness';
+import { dragOnCanvas, screenOf as screenPoint, startApp, type App, type TestWindow, waitReady } from './harness';
 import { runFactors } from '../../src/cli/factorsCommand';
 import { documentApi } from '../../src/state/documentApi';
 
@@ -32,13 +32,9 @@ const docOf = () => page.evaluate(() => (window as unknown as TestWindow).__taut
 type ProbeWindow = TestWindow & { __changes: number };
 const status = () => page.locator('[data-status]').getAttribute('data-status');
 
-async function waitReady() {
-  await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
-}
-
 describe('sketcher in chromium', () => {
   it('opens the demo with its matrix, fits 1366 x 768 without horizontal scrolling, and saves a screenshot', async () => {
-    await waitReady();
+    await waitReady(page);
     await expect.poll(() => table().getByRole('rowheader').count()).toBe(7);
     expect(await tableText()).toContain('fired floor');
     const [scrollW, clientW] = await page.evaluate(() => [
@@ -75,10 +71,10 @@ describe('sketcher in chromium', () => {
     }
     await page.mouse.up();
     await page.getByRole('checkbox', { name: 'snap' }).check();
-    await waitReady();
+    await waitReady(page);
     expect(await tableText()).not.toBe(before);
     await page.keyboard.press('Control+z');
-    await waitReady();
+    await waitReady(page);
     expect(await tableText()).toBe(before);
   });
 
@@ -97,7 +93,7 @@ describe('sketcher in chromium', () => {
       const [px, py] = await screenOf(x + 0.01, y - 0.01);
       await page.mouse.click(px, py);
     }
-    await waitReady();
+    await waitReady(page);
     const heads = await table().getByRole('rowheader').allInnerTexts();
     // A drawn shape is one surface per side, named by where it is.
     expect(heads.map((h) => h.replace(/^\d+\s*/, ''))).toEqual(['floor', 'right wall', 'roof', 'left wall']);
@@ -112,11 +108,11 @@ describe('sketcher in chromium', () => {
     await page.mouse.move((ax + bx) / 2, (ay + by) / 2);
     await page.mouse.move(bx, by);
     await page.mouse.up();
-    await waitReady();
+    await waitReady(page);
     expect((await docOf()).shapes[0].points[2]).toEqual([2, 1.5]);
     expect(await tableText()).not.toBe(drawn);
     await page.getByRole('button', { name: 'Undo' }).click();
-    await waitReady();
+    await waitReady(page);
     expect(await tableText()).toBe(drawn);
 
     // CSV: floor to roof of a 2 x 1 rectangle by crossed strings,
@@ -148,7 +144,7 @@ describe('sketcher in chromium', () => {
 
     // Reload: the autosave brings the drawn sketch back, not the demo.
     await page.reload();
-    await waitReady();
+    await waitReady(page);
     expect(await tableText()).toBe(drawn);
     expect((await docOf()).shapes[0].points).toEqual([
       [0, 0],
@@ -161,7 +157,7 @@ describe('sketcher in chromium', () => {
   it('marks a body dragged through the wall as invalid and keeps the drawing', async () => {
     await page.getByRole('button', { name: /^Rectangle/ }).click();
     await dragOnCanvas(page, [0.8, 0.3], [1.2, 0.7], 4);
-    await waitReady();
+    await waitReady(page);
     // The enclosure's four sides and the new body, one surface ("body 1").
     expect(await table().getByRole('rowheader').allInnerTexts()).toHaveLength(5);
     expect((await table().getByRole('rowheader').allInnerTexts()).at(-1)).toMatch(/body 1$/);
@@ -172,6 +168,6 @@ describe('sketcher in chromium', () => {
     expect(await page.locator('[data-status]').innerText()).toMatch(/last valid sketch/);
     expect((await docOf()).shapes).toHaveLength(2);
     await page.keyboard.press('Control+z');
-    await waitReady();
+    await waitReady(page);
   });
 });

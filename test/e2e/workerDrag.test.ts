@@ -5,7 +5,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { screenOf, startApp, type App, type TestWindow } from './harness';
+import { screenOf, startApp, type App, type TestWindow, waitReady } from './harness';
 import type { SketchFile } from '../../src/state/sketchFile';
 
 let app: App;
@@ -15,16 +15,12 @@ beforeAll(async () => {
   app = await startApp();
   page = await app.context.newPage();
   await page.goto(app.url);
-  await waitReady();
+  await waitReady(page);
 }, 180_000);
 
 afterAll(async () => {
   await app?.close();
 });
-
-async function waitReady() {
-  await page.waitForFunction(() => document.querySelector('[data-status]')?.getAttribute('data-status') === 'ready');
-}
 
 /**
  * A 6 x 3 box of 64 wall edges, each its own surface, holding 8 tubes drawn as
@@ -75,7 +71,7 @@ async function open(sketch: SketchFile) {
     const w = window as unknown as TestWindow & { __before: unknown };
     return w.__tautline.store.getState().doc !== w.__before;
   });
-  await waitReady();
+  await waitReady(page);
 }
 
 /** What the test reads of Konva, the canvas library, which puts itself on `window`. */
@@ -145,7 +141,7 @@ describe('a drag computed by the worker pool', () => {
     expect(label[0].y - label0[0].y).toBeCloseTo(shift[1], 3);
     await page.mouse.up();
     await page.getByRole('checkbox', { name: 'snap' }).check();
-    await waitReady();
+    await waitReady(page);
     const dragged = await exportedCsv();
     expect(dragged).not.toBe(before);
     // The final sketch opened afresh: no kept rows, no reused matrix, all cores.
