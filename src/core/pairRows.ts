@@ -45,6 +45,25 @@ export class EdgePairs {
     lastBuilt.pairs = this;
   }
 
+  /**
+   * The index after the last edge of edge j's group (a body, or a run of enclosure
+   * edges: consecutive edges, see pair/edgeGroups.ts); j + 1 for an arc. Rows ask
+   * `silentGroup` once per group.
+   */
+  groupEnd(j: number): number {
+    return j < this.straightCount ? this.straight.groups.groupEnd[j] : j + 1;
+  }
+
+  /**
+   * True when edge i surely exchanges nothing with any edge of edge j's group, from
+   * j to groupEnd(j) (behind i, or hidden from all of i by one body): each pairExchange
+   * there would be 0, bit for bit, so rows may write 0 without asking. Only for sketches
+   * without exact circles (those pairs have their own shortcuts, arc/discShadow.ts).
+   */
+  silentGroup(i: number, j: number): boolean {
+    return this.curved === null && i < this.straightCount && j < this.straightCount && this.straight.silentGroup(i, j);
+  }
+
   /** L_i F_ij integrated along edge i (sketch units); for i = j only an arc can be > 0. */
   exchangeLength(i: number, j: number): number {
     const c = this.curved;
@@ -128,7 +147,19 @@ export function packRows(pairs: EdgePairs, rows: ArrayLike<number>, out?: Float6
   for (let k = 0; k < rows.length; k++) {
     const i = rows[k];
     packed[at++] = pairs.selfExchange(i);
-    for (let j = i + 1; j < n; j++) packed[at++] = pairs.pairExchange(i, j);
+    let groupEnd = 0;
+    for (let j = i + 1; j < n; j++) {
+      if (j >= groupEnd) {
+        groupEnd = pairs.groupEnd(j);
+        if (pairs.silentGroup(i, j)) {
+          packed.fill(0, at, at + groupEnd - j);
+          at += groupEnd - j;
+          j = groupEnd - 1;
+          continue;
+        }
+      }
+      packed[at++] = pairs.pairExchange(i, j);
+    }
   }
   return packed;
 }
@@ -173,7 +204,15 @@ export function fillRows(pairs: EdgePairs, rows: ArrayLike<number>, F: Float64Ar
     const i = rows[k];
     const self = pairs.selfExchange(i);
     if (self > 0) F[i * n + i] = self / L[i];
+    let groupEnd = 0;
     for (let j = i + 1; j < n; j++) {
+      if (j >= groupEnd) {
+        groupEnd = pairs.groupEnd(j);
+        if (pairs.silentGroup(i, j)) {
+          j = groupEnd - 1; // the matrix holds 0 there already
+          continue;
+        }
+      }
       const g = pairs.pairExchange(i, j);
       if (g > 0) {
         F[i * n + j] = g / L[i];

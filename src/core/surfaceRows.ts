@@ -53,7 +53,15 @@ export class SurfaceRowSummer {
       const i = rows[k];
       self[k] = pairs.selfExchange(i);
       let t = 0;
+      let groupEnd = 0;
       for (let j = i + 1; j < n; j++) {
+        if (j >= groupEnd) {
+          groupEnd = pairs.groupEnd(j);
+          if (pairs.silentGroup(i, j)) {
+            j = groupEnd - 1;
+            continue;
+          }
+        }
         const g = pairs.pairExchange(i, j);
         if (!(g > 0)) continue;
         const J = edgeSurface[j];

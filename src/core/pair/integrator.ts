@@ -1,6 +1,7 @@
 import { sketchExtent, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { ORIENT_FILTER_BOUND, orient as orientIn } from '../orient';
+import { edgeGroups, type EdgeGroups } from './edgeGroups';
 import { Breakpoints, FixedPoints } from './fixedPoints';
 import { ObstacleGatherer } from './obstacleGather';
 import { ObstaclePieces } from './obstaclePieces';
@@ -34,6 +35,8 @@ export class PairIntegrator {
   private readonly points: FixedPoints;
   private readonly breakpoints: Breakpoints;
   private readonly gaps = new VisibleGaps();
+  /** Groups of consecutive polygon edges (bodies, runs of enclosure edges); see edgeGroups.ts. */
+  readonly groups: EdgeGroups;
   /** The pair's trimmed ends a0, a1 (of i') and b0, b1 (of j'), x then y, sketch units. */
   private readonly ends = new Float64Array(8);
   /** The current piece of i': its middle, i's unit direction, its ends pa and pb, and pb - pa (x, y each). */
@@ -47,7 +50,8 @@ export class PairIntegrator {
     this.region = new ViewRegion(extent);
     this.breakpoints = new Breakpoints(extent);
     this.pieces = new ObstaclePieces(e.count);
-    this.gatherer = new ObstacleGatherer(e, obstacles, this.region, this.pieces);
+    this.groups = edgeGroups(e, obstacles);
+    this.gatherer = new ObstacleGatherer(e, obstacles, this.region, this.pieces, this.groups);
     this.points = new FixedPoints(e, obstacles);
   }
 
@@ -117,6 +121,8 @@ export class PairIntegrator {
     P[6] = b1x;
     P[7] = b1y;
 
+    // Lists that hold no possible obstacle for the row edge and the other's group: clear.
+    if (this.gatherer.nothingBetween(i, j)) return crossedStrings(P);
     // Every sight line from i' to j' lies in H = hull(i', j') = a0 a1 b0 b1 (anticlockwise,
     // since j's front faces i). Only obstructions inside H can block.
     this.region.set(P);
@@ -125,6 +131,14 @@ export class PairIntegrator {
     this.points.build(this.pieces, P);
     this.breakpoints.find(this.points, P);
     return this.integrate(li);
+  }
+
+  /**
+   * True when polygon edge i surely exchanges nothing with any edge of polygon edge
+   * j's group: each such pair's exchangeLength would be 0.
+   */
+  silentGroup(i: number, j: number): boolean {
+    return this.gatherer.silentGroup(i, j);
   }
 
   /** orient(a of edge e, b of edge e, corner `end` (0: a, 1: b) of edge f), from the edge arrays. */

@@ -1,6 +1,8 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { BodyClipper } from './bodyClip';
+import type { EdgeGroups } from './edgeGroups';
+import { GroupCull } from './groupCull';
 import type { ObstaclePieces } from './obstaclePieces';
 import { PairCandidates } from './pairCandidates';
 import type { ViewRegion } from './viewRegion';
@@ -13,6 +15,7 @@ import type { ViewRegion } from './viewRegion';
 export class ObstacleGatherer {
   private readonly clip: BodyClipper;
   private readonly candidates: PairCandidates;
+  private readonly cull: GroupCull;
   private readonly visitWall: (id: number) => boolean;
   private readonly visitBody: (id: number) => boolean;
   /**
@@ -25,6 +28,8 @@ export class ObstacleGatherer {
   private readonly hint: Int32Array;
   /** The one before (a pair is often blocked by one of two neighbours). */
   private readonly hint2: Int32Array;
+  /** Per edge group, the body that last blocked a pair of one of its edges (-1: none). */
+  private readonly groupHider: Int32Array;
   /** Bodies probed for the current pair (-1: none), one slot per hint tried. */
   private readonly probed = new Int32Array(4);
 
@@ -33,11 +38,14 @@ export class ObstacleGatherer {
     private readonly ob: ObstacleIndex,
     private readonly region: ViewRegion,
     private readonly pieces: ObstaclePieces,
+    private readonly groups: EdgeGroups,
   ) {
     this.clip = new BodyClipper(e, ob, region, pieces);
-    this.candidates = new PairCandidates(e, ob, region.extent);
+    this.candidates = new PairCandidates(e, ob, region.extent, groups);
+    this.cull = new GroupCull(e, ob, groups, region.extent);
     this.hint = new Int32Array(e.count).fill(-1);
     this.hint2 = new Int32Array(e.count).fill(-1);
+    this.groupHider = new Int32Array(groups.r.length).fill(-1);
     this.visitWall = (id: number) => {
       const edge = this.ob.wallEdges[id];
       if (!this.pieces.has(edge)) this.clip.clipEdge(edge); // kept already by a probe
@@ -47,6 +55,34 @@ export class ObstacleGatherer {
       if (!this.wasProbed(id)) this.clip.placeLater(id);
       return this.clip.blocked; // one body blocks it all: stop the search
     };
+  }
+
+  /**
+   * Can nothing block edges i and j? True when the lists shared by the row edge and the
+   * other edge's group are made and hold no possible obstacle: every sight line is then
+   * clear, and the pair needs no region, hints or pieces.
+   */
+  nothingBetween(i: number, j: number): boolean {
+    return this.candidates.nothingBetween(i, j);
+  }
+
+  /**
+   * Does polygon edge i surely exchange nothing with every edge of polygon edge j's
+   * group (groupCull.ts)? Then the rows can leave those pairs out: each would be 0.
+   */
+  silentGroup(i: number, j: number): boolean {
+    const b = this.groups.groupOf[j];
+    if (this.cull.behind(i, b)) return true;
+    // The bodies that blocked i's latest pairs, and b's latest, are the likely hiders.
+    const cull = this.cull,
+      h1 = this.hint[i],
+      h2 = this.hint2[i],
+      h3 = this.groupHider[b];
+    if (cull.hides(i, b, h1) || (h2 !== h1 && cull.hides(i, b, h2))) return true;
+    if (h3 === h1 || h3 === h2 || !cull.hides(i, b, h3)) return false;
+    this.hint2[i] = h1;
+    this.hint[i] = h3;
+    return true;
   }
 
   /**
@@ -116,6 +152,11 @@ export class ObstacleGatherer {
 
   /** Make obstacle h the first hint of edges i and j, the previous first hint the second. */
   private remember(i: number, j: number, h: number): void {
+    if (h >= 0) {
+      const G = this.groups.groupOf;
+      this.groupHider[G[i]] = h;
+      this.groupHider[G[j]] = h;
+    }
     if (this.hint[i] !== h) {
       this.hint2[i] = this.hint[i];
       this.hint[i] = h;

@@ -1,6 +1,7 @@
 import type { EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { growInt } from '../scratch';
+import type { EdgeGroups } from './edgeGroups';
 import { SIDE_STRIDE as SIDE_STRIDE_IN } from './regionTree';
 
 // Module-local copies of hot imports (see integrator.ts).
@@ -24,9 +25,6 @@ const SIDE_STRIDE = SIDE_STRIDE_IN;
 
 /** Relative margin of the widened regions: far above the rounding of their sides. */
 const MARGIN = 1e-9;
-
-/** Enclosure edges per group: short runs keep the circle, and so the lists, tight. */
-const WALL_RUN = 8;
 
 export class PairCandidates {
   /**
@@ -62,8 +60,8 @@ export class PairCandidates {
     private readonly e: EdgeSet,
     private readonly ob: ObstacleIndex,
     private readonly extent: number,
+    groups: EdgeGroups,
   ) {
-    const groups = edgeGroups(e, ob);
     this.groupOf = groups.groupOf;
     this.groupCx = groups.cx;
     this.groupCy = groups.cy;
@@ -121,6 +119,20 @@ export class PairCandidates {
     this.wallEnd = R.wallTo[b];
   }
 
+  /**
+   * True when the lists of the pair of edges i and j (either order) are made already
+   * and hold nothing that can block it: no wall edge, and no body but the pair's own
+   * convex ones (they lie behind their edges). No obstacle then enters any view region
+   * of the row edge with the other edge's group. False when not made yet: lists are
+   * made only for pairs that a hint does not end (see obstacleGather.ts).
+   */
+  nothingBetween(i: number, j: number): boolean {
+    const row = i < j ? i : j,
+      other = i < j ? j : i;
+    const b = this.groupOf[other];
+    return row === this.rowEdge && this.row.has(b) && this.row.unblocked[b] === 1;
+  }
+
   /** Copy into the row's lists what of group b's lists may enter the row's widened triangle (all of them when it is too thin). */
   private filterRow(row: number, b: number): void {
     const G = this.group,
@@ -129,6 +141,10 @@ export class PairCandidates {
       ob = this.ob,
       E = this.e;
     const thin = !this.loadTriangle(row, b);
+    // The pair's own bodies: the row edge's, and group b when it is a body.
+    const ownRow = ob.bodyOfPolygon[E.polygon[row]],
+      ownOther = b < ob.bodyCount ? b : -1;
+    let clear = 1;
     for (let k = G.bodyFrom[b]; k < G.bodyTo[b]; k++) {
       const c = G.bodies[k];
       const x = ob.bodyCx[c],
@@ -139,8 +155,10 @@ export class PairCandidates {
         (T[0] * x + T[1] * y + T[2] + r >= 0 &&
           T[3] * x + T[4] * y + T[5] + r >= 0 &&
           T[6] * x + T[7] * y + T[8] + r >= 0)
-      )
+      ) {
         R.bodies = pushTo(R.bodies, R.bodyFill++, c);
+        if (!ob.bodyConvex[c] || (c !== ownRow && c !== ownOther)) clear = 0;
+      }
     }
     for (let k = G.wallFrom[b]; k < G.wallTo[b]; k++) {
       const w = G.walls[k];
@@ -150,9 +168,12 @@ export class PairCandidates {
         (segmentMeetsSide(T, 0, E.ax[e], E.ay[e], E.bx[e], E.by[e]) &&
           segmentMeetsSide(T, 3, E.ax[e], E.ay[e], E.bx[e], E.by[e]) &&
           segmentMeetsSide(T, 6, E.ax[e], E.ay[e], E.bx[e], E.by[e]))
-      )
+      ) {
         R.walls = pushTo(R.walls, R.wallFill++, w);
+        clear = 0;
+      }
     }
+    R.unblocked[b] = clear;
   }
 
   /**
@@ -256,6 +277,8 @@ class ListSet {
   readonly bodyTo: Int32Array;
   readonly wallFrom: Int32Array;
   readonly wallTo: Int32Array;
+  /** Per group: 1 when its lists hold nothing that can block (set by the row's filter). */
+  readonly unblocked: Uint8Array;
   private readonly stamp: Int32Array;
   private current = 0;
 
@@ -265,6 +288,7 @@ class ListSet {
     this.bodyTo = new Int32Array(groups);
     this.wallFrom = new Int32Array(groups);
     this.wallTo = new Int32Array(groups);
+    this.unblocked = new Uint8Array(groups);
   }
 
   /** Drop every group's lists (O(1): the stamps are compared with a counter). */
@@ -315,49 +339,4 @@ function normalSide(S: Float64Array, at: number, a: number, b: number, x0: numbe
 /** False when segment (x0, y0)-(x1, y1) lies wholly outside side S[at..at+3). */
 function segmentMeetsSide(S: Float64Array, at: number, x0: number, y0: number, x1: number, y1: number): boolean {
   return S[at] * x0 + S[at + 1] * y0 + S[at + 2] >= 0 || S[at] * x1 + S[at + 1] * y1 + S[at + 2] >= 0;
-}
-
-/**
- * Groups of edges with their bounding circles: body b is group b (its circle from the
- * obstacle index); each enclosure polygon's edges follow in runs of WALL_RUN, each
- * run's circle about its corners' average (radius: the farthest corner, so it holds
- * every edge of the run, a chord of the circle).
- */
-function edgeGroups(E: EdgeSet, ob: ObstacleIndex) {
-  const groupOf = new Int32Array(E.count);
-  const cx = Array.from(ob.bodyCx),
-    cy = Array.from(ob.bodyCy),
-    r = Array.from(ob.bodyR);
-  for (let p = 0; p + 1 < E.polygonStart.length; p++) {
-    const body = ob.bodyOfPolygon[p];
-    const from = E.polygonStart[p],
-      to = E.polygonStart[p + 1];
-    if (body >= 0) {
-      groupOf.fill(body, from, to);
-      continue;
-    }
-    for (let s = from; s < to; s += WALL_RUN) {
-      const end = Math.min(to, s + WALL_RUN);
-      let x = 0,
-        y = 0;
-      for (let k = s; k < end; k++) {
-        x += E.ax[k] + E.bx[k];
-        y += E.ay[k] + E.by[k];
-      }
-      x /= 2 * (end - s);
-      y /= 2 * (end - s);
-      let far = 0;
-      for (let k = s; k < end; k++)
-        far = Math.max(
-          far,
-          Math.sqrt((E.ax[k] - x) ** 2 + (E.ay[k] - y) ** 2),
-          Math.sqrt((E.bx[k] - x) ** 2 + (E.by[k] - y) ** 2),
-        );
-      groupOf.fill(cx.length, s, end);
-      cx.push(x);
-      cy.push(y);
-      r.push(far);
-    }
-  }
-  return { groupOf, cx: Float64Array.from(cx), cy: Float64Array.from(cy), r: Float64Array.from(r) };
 }

@@ -2,6 +2,7 @@ import { orient2d } from 'robust-predicates';
 import { describe, expect, it } from 'vitest';
 import { buildEdges, type EdgeSet } from '../../../src/core/edges';
 import { buildObstacleIndex } from '../../../src/core/obstacles';
+import { edgeGroups } from '../../../src/core/pair/edgeGroups';
 import { PairCandidates } from '../../../src/core/pair/pairCandidates';
 import { hardScene } from '../../bench/hardScenes';
 import { tubeScene } from '../../bench/scenes';
@@ -72,7 +73,7 @@ const ends = (E: EdgeSet, e: number): [Pt, Pt] => [
 function checkScene(scene: SceneInput, samples: number, seed: number) {
   const E = buildEdges(scene.polygons, scene.circles);
   const ob = buildObstacleIndex(E);
-  const lists = new PairCandidates(E, ob, extentOf(E));
+  const lists = new PairCandidates(E, ob, extentOf(E), edgeGroups(E, ob));
   const rand = seeded(seed);
   let hits = 0;
   // Random pairs taken in the order the rows are filled (row edge, then partner), so
@@ -119,7 +120,8 @@ describe('obstacle lists shared by a row', () => {
   it('list pairs of two wall edges too (runs of enclosure edges), and either order names one row', () => {
     const scene = hardScene(5, 600);
     const E = buildEdges(scene.polygons, scene.circles);
-    const lists = new PairCandidates(E, buildObstacleIndex(E), extentOf(E));
+    const ob = buildObstacleIndex(E);
+    const lists = new PairCandidates(E, ob, extentOf(E), edgeGroups(E, ob));
     // Edges 0 on are the enclosure's: a wall-to-wall pair.
     lists.find(3, 40);
     const walls = Array.from(lists.walls.subarray(lists.wallStart, lists.wallEnd));

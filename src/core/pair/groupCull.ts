@@ -1,0 +1,106 @@
+import type { EdgeSet } from '../edges';
+import type { ObstacleIndex } from '../obstacles';
+import type { EdgeGroups } from './edgeGroups';
+
+// Whole groups of edges that one edge surely exchanges nothing with, shown once for
+// the group instead of once per pair: a group lying wholly behind the edge's line,
+// the other edges of the edge's own convex body, or a group that one body hides from
+// the whole edge. Each such pair would come out 0 on its own (the front tests, or a
+// blocked view), so leaving them out changes no factor. Float tests with margins that
+// only ever say no in doubt. Sketch units.
+
+/** Relative slack on radii: far above the rounding of the lines below. */
+const SLACK = 1e-9;
+
+export class GroupCull {
+  /** Absolute margin: a point must be this far inside each line (sketch units). */
+  private readonly margin: number;
+
+  /** `extent`: largest coordinate magnitude of the sketch (scales the margin). */
+  constructor(
+    private readonly e: EdgeSet,
+    private readonly ob: ObstacleIndex,
+    private readonly groups: EdgeGroups,
+    extent: number,
+  ) {
+    this.margin = 1e-12 * extent;
+  }
+
+  /**
+   * Does polygon edge i surely see nothing of group b by geometry alone: every point
+   * of b's circle not in front of i's line, or b the other edges of i's own convex
+   * body (they lie behind each other's lines)?
+   */
+  behind(i: number, b: number): boolean {
+    const E = this.e,
+      G = this.groups,
+      ob = this.ob;
+    if (b === G.groupOf[i] && b < ob.bodyCount && ob.bodyConvex[b]) return true;
+    const L = E.length[i];
+    if (!(L > 0)) return true; // an edge of no length exchanges nothing
+    const ax = E.ax[i],
+      ay = E.ay[i];
+    // Signed distance of b's centre from i's line, positive in front (left of a -> b).
+    const dist = ((E.bx[i] - ax) * (G.cy[b] - ay) - (E.by[i] - ay) * (G.cx[b] - ax)) / L;
+    return dist + G.r[b] * (1 + SLACK) + this.margin < 0;
+  }
+
+  /**
+   * Does body c (an obstacle hint: a body, or < 0 for none) hide all of group b's
+   * circle from all of polygon edge i? A disc inside c (inside its hull: the pair's
+   * edges are not c's own) then meets every sight line between them.
+   */
+  hides(i: number, b: number, c: number): boolean {
+    if (c < 0 || c === b) return false;
+    if (c === this.ob.bodyOfPolygon[this.e.polygon[i]]) return false;
+    return this.umbraHolds(i, b, c);
+  }
+
+  /**
+   * Is edge i wholly inside body c's umbra of group b's circle? The umbra of a disc H
+   * for a disc T: on the side of each outer common tangent that holds both discs, and
+   * beyond the chord through the tangents' touch points on H, away from T. H is c's
+   * blocking disc shrunk and T is b's circle grown, each by SLACK; every half-plane is
+   * checked at both ends of i (they are convex).
+   */
+  private umbraHolds(i: number, b: number, c: number): boolean {
+    const ob = this.ob,
+      G = this.groups,
+      E = this.e;
+    const hr = ob.bodyRHull[c] * (1 - SLACK);
+    if (!(hr > 0)) return false;
+    const hx = ob.bodyCx[c],
+      hy = ob.bodyCy[c];
+    const tr = G.r[b] * (1 + SLACK) + this.margin;
+    const dx = G.cx[b] - hx,
+      dy = G.cy[b] - hy;
+    const d = Math.sqrt(dx * dx + dy * dy);
+    if (!(d > (hr + tr) * (1 + SLACK))) return false;
+    const ux = dx / d,
+      uy = dy / d;
+    // Tangent normals n = cw u +- sw u_perp, with cw = cos w = (tr - hr) / d.
+    const cw = (tr - hr) / d,
+      sw = Math.sqrt(1 - cw * cw);
+    const n1x = cw * ux - sw * uy,
+      n1y = cw * uy + sw * ux,
+      n2x = cw * ux + sw * uy,
+      n2y = cw * uy - sw * ux;
+    const w1 = hr - (n1x * hx + n1y * hy),
+      w2 = hr - (n2x * hx + n2y * hy),
+      // Chord: -u . (x - h) - hr cw >= 0.
+      w3 = ux * hx + uy * hy - hr * cw;
+    const m = this.margin;
+    const ax = E.ax[i],
+      ay = E.ay[i],
+      bx = E.bx[i],
+      by = E.by[i];
+    return (
+      n1x * ax + n1y * ay + w1 >= m &&
+      n1x * bx + n1y * by + w1 >= m &&
+      n2x * ax + n2y * ay + w2 >= m &&
+      n2x * bx + n2y * by + w2 >= m &&
+      w3 - (ux * ax + uy * ay) >= m &&
+      w3 - (ux * bx + uy * by) >= m
+    );
+  }
+}

@@ -1,0 +1,113 @@
+// Rows leave out whole groups of edges (a body, a run of enclosure edges) that one
+// edge surely exchanges nothing with (core/pair/groupCull.ts): a group behind the
+// edge's line, the edge's own convex body, or a group one body hides from all of the
+// edge. Checked two ways:
+// - against an independent exact test (robust-predicates' orient2d, no code of
+//   src/core): every pair of a silent group has no corner of one edge in front of the
+//   other, or every sampled sight line between them crosses another polygon's edge;
+// - rows with the groups left out equal every pair asked one by one, bit for bit.
+import { orient2d } from 'robust-predicates';
+import { describe, expect, it } from 'vitest';
+import { buildEdges, type EdgeSet } from '../../../src/core/edges';
+import { EdgePairs, packRows } from '../../../src/core/pairRows';
+import type { SceneInput } from '../../../src/core/scene';
+import { allRows } from '../../../src/core/viewFactors';
+import { hardScene } from '../../bench/hardScenes';
+import { tubeScene } from '../../bench/scenes';
+
+type Pt = [number, number];
+
+const corner = (E: EdgeSet, e: number, end: 0 | 1): Pt => (end === 0 ? [E.ax[e], E.ay[e]] : [E.bx[e], E.by[e]]);
+const at = (E: EdgeSet, e: number, t: number): Pt => [
+  E.ax[e] + t * (E.bx[e] - E.ax[e]),
+  E.ay[e] + t * (E.by[e] - E.ay[e]),
+];
+
+/** Is point q strictly in front of (left of) edge e? Exact. */
+const inFront = (E: EdgeSet, e: number, q: Pt) => orient2d(E.ax[e], E.ay[e], E.bx[e], E.by[e], q[0], q[1]) < 0;
+
+/** Do the open segments p-q and edge e cross at one point inside both? Exact. */
+function crosses(E: EdgeSet, e: number, p: Pt, q: Pt): boolean {
+  const d1 = orient2d(p[0], p[1], q[0], q[1], E.ax[e], E.ay[e]),
+    d2 = orient2d(p[0], p[1], q[0], q[1], E.bx[e], E.by[e]),
+    d3 = orient2d(E.ax[e], E.ay[e], E.bx[e], E.by[e], p[0], p[1]),
+    d4 = orient2d(E.ax[e], E.ay[e], E.bx[e], E.by[e], q[0], q[1]);
+  return d1 * d2 < 0 && d3 * d4 < 0;
+}
+
+/** Can edges i and j exchange nothing, shown without src/core: not facing, or every sampled sight line blocked. */
+function independentlySilent(E: EdgeSet, i: number, j: number): { silent: boolean; facing: boolean } {
+  const facing =
+    (inFront(E, i, corner(E, j, 0)) || inFront(E, i, corner(E, j, 1))) &&
+    (inFront(E, j, corner(E, i, 0)) || inFront(E, j, corner(E, i, 1)));
+  if (!facing) return { silent: true, facing };
+  const S = 5;
+  for (let a = 0; a < S; a++) {
+    for (let b = 0; b < S; b++) {
+      const p = at(E, i, (a + 0.5) / S),
+        q = at(E, j, (b + 0.5) / S);
+      let blocked = false;
+      for (let e = 0; e < E.count && !blocked; e++) {
+        if (e !== i && e !== j && E.polygon[e] !== E.polygon[i] && E.polygon[e] !== E.polygon[j])
+          blocked = crosses(E, e, p, q);
+      }
+      if (!blocked) return { silent: false, facing };
+    }
+  }
+  return { silent: true, facing };
+}
+
+const scenes: [string, SceneInput][] = [
+  ['20 square tubes', tubeScene(1, 20, 4, 20)],
+  ['12 hexagonal tubes', tubeScene(3, 12, 6, 24)],
+  ['20 tubes of 18 sides', tubeScene(1, 20, 18, 40)],
+  ['hard scene: fins, zigzag walls, stars', hardScene(5, 300)],
+];
+
+describe('whole groups left out of a row', () => {
+  it.each(scenes)('%s: every pair of a silent group is 0, and shown so independently', (_name, scene) => {
+    const E = buildEdges(scene.polygons, scene.circles);
+    const pairs = new EdgePairs(E);
+    const n = pairs.count;
+    let silentGroups = 0,
+      hiddenPairs = 0;
+    for (let i = 0; i < n; i++) {
+      for (let j = i + 1; j < n;) {
+        const end = pairs.groupEnd(j);
+        if (pairs.silentGroup(i, j)) {
+          silentGroups++;
+          for (let k = j; k < end; k++) {
+            expect(pairs.pairExchange(i, k), `pair ${i}, ${k}`).toBe(0);
+            const shown = independentlySilent(E, i, k);
+            expect(shown.silent, `pair ${i}, ${k}: a sampled sight line is clear`).toBe(true);
+            if (shown.facing) hiddenPairs++;
+          }
+        } else {
+          // As the rows do: the pairs asked leave hints (the bodies that blocked them).
+          for (let k = j; k < end; k++) pairs.pairExchange(i, k);
+        }
+        j = end;
+      }
+    }
+    // Not vacuous: groups behind an edge and groups hidden by a body are both found.
+    expect(silentGroups).toBeGreaterThan(0);
+    expect(hiddenPairs).toBeGreaterThan(0);
+  });
+
+  it.each(scenes)('%s: rows with groups left out equal every pair asked one by one, bit for bit', (_name, scene) => {
+    const E = buildEdges(scene.polygons, scene.circles);
+    const n = new EdgePairs(E).count;
+    const packed = packRows(new EdgePairs(E), allRows(n));
+    const one = new EdgePairs(E);
+    const asked = new Float64Array(packed.length);
+    let at = 0;
+    for (let i = 0; i < n; i++) {
+      asked[at++] = one.selfExchange(i);
+      for (let j = i + 1; j < n; j++) asked[at++] = one.pairExchange(i, j);
+    }
+    expect(at).toBe(packed.length);
+    let differ = 0;
+    for (let k = 0; k < at; k++) if (!Object.is(packed[k], asked[k])) differ++;
+    expect(differ).toBe(0);
+  });
+});
