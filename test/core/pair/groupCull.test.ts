@@ -57,15 +57,37 @@ function independentlySilent(E: EdgeSet, i: number, j: number): { silent: boolea
   return { silent: true, facing };
 }
 
-const scenes: [string, SceneInput][] = [
-  ['20 square tubes', tubeScene(1, 20, 4, 20)],
-  ['12 hexagonal tubes', tubeScene(3, 12, 6, 24)],
-  ['20 tubes of 18 sides', tubeScene(1, 20, 18, 40)],
-  ['hard scene: fins, zigzag walls, stars', hardScene(5, 300)],
+/** A scene moved by (dx, dy) and scaled by k about the origin: the margins scale with the extent. */
+function moved(scene: SceneInput, k: number, dx: number, dy: number): SceneInput {
+  const map = (pts: ArrayLike<number>) => Array.from(pts, (v, m) => k * v + (m % 2 === 0 ? dx : dy));
+  return { ...scene, polygons: scene.polygons.map((p) => ({ ...p, points: map(p.points) })) };
+}
+
+/** Squares on a grid in a box: many edges on one line, corners exactly on other bodies' edge lines. */
+function alignedSquares(): SceneInput {
+  const polygons: SceneInput['polygons'] = [{ kind: 'enclosure', points: [0, 0, 12, 0, 12, 6, 0, 6] }];
+  for (let r = 0; r < 2; r++)
+    for (let c = 0; c < 5; c++) {
+      const x = 1 + 2 * c,
+        y = 1.5 + 2 * r;
+      polygons.push({ kind: 'solid', points: [x, y, x + 1, y, x + 1, y + 1, x, y + 1] });
+    }
+  const count = polygons.reduce((n, p) => n + p.points.length / 2, 0);
+  return { polygons, edgeSurface: Array.from({ length: count }, (_, k) => k), surfaceCount: count };
+}
+
+const scenes: [string, SceneInput, boolean][] = [
+  // Squares no bigger than their neighbours hide none whole: their umbra closes before the next.
+  ['squares in line (collinear edges)', alignedSquares(), false],
+  ['12 hexagonal tubes, 1e-4 of the size, 1e3 from the origin', moved(tubeScene(3, 12, 6, 24), 1e-4, 1e3, -1e3), true],
+  ['20 square tubes', tubeScene(1, 20, 4, 20), true],
+  ['12 hexagonal tubes', tubeScene(3, 12, 6, 24), true],
+  ['20 tubes of 18 sides', tubeScene(1, 20, 18, 40), true],
+  ['hard scene: fins, zigzag walls, stars', hardScene(5, 300), true],
 ];
 
 describe('whole groups left out of a row', () => {
-  it.each(scenes)('%s: every pair of a silent group is 0, and shown so independently', (_name, scene) => {
+  it.each(scenes)('%s: every pair of a silent group is 0, and shown so independently', (_name, scene, hides) => {
     const E = buildEdges(scene.polygons, scene.circles);
     const pairs = new EdgePairs(E);
     const n = pairs.count;
@@ -91,7 +113,7 @@ describe('whole groups left out of a row', () => {
     }
     // Not vacuous: groups behind an edge and groups hidden by a body are both found.
     expect(silentGroups).toBeGreaterThan(0);
-    expect(hiddenPairs).toBeGreaterThan(0);
+    if (hides) expect(hiddenPairs).toBeGreaterThan(0);
   });
 
   it.each(scenes)('%s: rows with groups left out equal every pair asked one by one, bit for bit', (_name, scene) => {
