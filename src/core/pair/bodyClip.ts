@@ -269,12 +269,19 @@ export class BodyClipper {
     if (!this.windows.find(ob, b, this.region, this.centreDist)) return;
     const ranges = this.windows.ranges;
     const first = ob.bodyFirstEdge[b];
+    // Consecutive edges of the walk share a corner: each corner is classified once per
+    // window, its places kept in the slot (0 or 4) the next edge reads as its start.
     for (let q = 0; q < ranges.count; q++) {
-      for (let m = ranges.lo[q]; m <= ranges.hi[q]; m++) {
+      let a = 0;
+      const lo = ranges.lo[q];
+      const e0 = ob.walkEdge[first + lo];
+      this.classifyCorner(E.ax[e0], E.ay[e0], a);
+      for (let m = lo; m <= ranges.hi[q]; m++) {
         const e = ob.walkEdge[first + m];
-        this.classifyCorner(E.ax[e], E.ay[e], 0);
-        this.classifyCorner(E.bx[e], E.by[e], 4);
-        this.settleEdge(e, 0, 4);
+        const b = 4 - a;
+        this.classifyCorner(E.bx[e], E.by[e], b);
+        this.settleEdge(e, a, b);
+        a = b;
       }
     }
   }
