@@ -42,26 +42,28 @@ export class EdgePairs {
     // Sketches with exact circles: pairs with an arc, or with a solid circle near their
     // view, go through the curved integrator; polygon pairs keep the polygon one.
     this.curved = edges.arcs.circleCount > 0 ? new CurvedPairIntegrator(edges, obstacles) : null;
+    this.live = new Int32Array(this.count);
     lastBuilt.pairs = this;
   }
 
-  /**
-   * The index after the last edge of edge j's group (a body, or a run of enclosure
-   * edges: consecutive edges, see pair/edgeGroups.ts); j + 1 for an arc. Rows ask
-   * `silentGroup` once per group.
-   */
-  groupEnd(j: number): number {
-    return j < this.straightCount ? this.straight.groups.groupEnd[j] : j + 1;
-  }
+  /** Scratch of liveColumns: the listed edges, ascending. */
+  readonly live: Int32Array;
 
   /**
-   * True when edge i surely exchanges nothing with any edge of edge j's group, from
-   * j to groupEnd(j) (behind i, or hidden from all of i by one body): each pairExchange
-   * there would be 0, bit for bit, so rows may write 0 without asking. Only for sketches
-   * without exact circles (those pairs have their own shortcuts, arc/discShadow.ts).
+   * The edges j > i worth asking pairExchange(i, j) about, ascending, in `live`;
+   * returns their count. Every pair left out would give 0, bit for
+   * bit: in sketches without exact circles, whole groups of edges behind edge i or
+   * hidden from all of it by one body, and edges that surely do not face it, are left
+   * out (pair/groupCull.ts); with exact circles every j > i is listed (those pairs have
+   * their own shortcuts, arc/discShadow.ts).
    */
-  silentGroup(i: number, j: number): boolean {
-    return this.curved === null && i < this.straightCount && j < this.straightCount && this.straight.silentGroup(i, j);
+  liveColumns(i: number): number {
+    const n = this.count,
+      out = this.live;
+    let count = 0;
+    if (this.curved === null && i < this.straightCount) count = this.straight.liveColumns(i, out, 0);
+    else for (let j = i + 1; j < n; j++) out[count++] = j;
+    return count;
   }
 
   /** L_i F_ij integrated along edge i (sketch units); for i = j only an arc can be > 0. */
@@ -147,19 +149,15 @@ export function packRows(pairs: EdgePairs, rows: ArrayLike<number>, out?: Float6
   for (let k = 0; k < rows.length; k++) {
     const i = rows[k];
     packed[at++] = pairs.selfExchange(i);
-    let groupEnd = 0;
-    for (let j = i + 1; j < n; j++) {
-      if (j >= groupEnd) {
-        groupEnd = pairs.groupEnd(j);
-        if (pairs.silentGroup(i, j)) {
-          packed.fill(0, at, at + groupEnd - j);
-          at += groupEnd - j;
-          j = groupEnd - 1;
-          continue;
-        }
-      }
-      packed[at++] = pairs.pairExchange(i, j);
+    // Pairs not listed are 0: the row is cleared first, then the listed ones written.
+    packed.fill(0, at, at + n - i - 1);
+    const live = pairs.liveColumns(i),
+      columns = pairs.live;
+    for (let q = 0; q < live; q++) {
+      const j = columns[q];
+      packed[at + j - i - 1] = pairs.pairExchange(i, j);
     }
+    at += n - i - 1;
   }
   return packed;
 }
@@ -204,15 +202,11 @@ export function fillRows(pairs: EdgePairs, rows: ArrayLike<number>, F: Float64Ar
     const i = rows[k];
     const self = pairs.selfExchange(i);
     if (self > 0) F[i * n + i] = self / L[i];
-    let groupEnd = 0;
-    for (let j = i + 1; j < n; j++) {
-      if (j >= groupEnd) {
-        groupEnd = pairs.groupEnd(j);
-        if (pairs.silentGroup(i, j)) {
-          j = groupEnd - 1; // the matrix holds 0 there already
-          continue;
-        }
-      }
+    // Pairs not listed are 0, as the matrix holds there already.
+    const live = pairs.liveColumns(i),
+      columns = pairs.live;
+    for (let q = 0; q < live; q++) {
+      const j = columns[q];
       const g = pairs.pairExchange(i, j);
       if (g > 0) {
         F[i * n + j] = g / L[i];

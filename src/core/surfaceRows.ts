@@ -43,7 +43,6 @@ export class SurfaceRowSummer {
   /** The per-surface sums of the given rows (ascending), exchange lengths in sketch units. */
   sum(rows: ArrayLike<number>): SurfaceRowSums {
     const { pairs, edgeSurface, acc, stamp, touched } = this;
-    const n = pairs.count;
     const self = new Float64Array(rows.length);
     const start = new Int32Array(rows.length + 1);
     let surface = new Int32Array(Math.max(16, rows.length));
@@ -53,15 +52,11 @@ export class SurfaceRowSummer {
       const i = rows[k];
       self[k] = pairs.selfExchange(i);
       let t = 0;
-      let groupEnd = 0;
-      for (let j = i + 1; j < n; j++) {
-        if (j >= groupEnd) {
-          groupEnd = pairs.groupEnd(j);
-          if (pairs.silentGroup(i, j)) {
-            j = groupEnd - 1;
-            continue;
-          }
-        }
+      // Pairs not listed are 0 (pairRows.ts, liveColumns).
+      const live = pairs.liveColumns(i),
+        columns = pairs.live;
+      for (let q = 0; q < live; q++) {
+        const j = columns[q];
         const g = pairs.pairExchange(i, j);
         if (!(g > 0)) continue;
         const J = edgeSurface[j];

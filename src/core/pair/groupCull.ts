@@ -15,6 +15,10 @@ const SLACK = 1e-9;
 export class GroupCull {
   /** Absolute margin: a point must be this far inside each line (sketch units). */
   private readonly margin: number;
+  /** Per polygon edge, its front side as nx x + ny y + w > 0 (unit normal; NaN for an edge of no length). */
+  private readonly nx: Float64Array;
+  private readonly ny: Float64Array;
+  private readonly w: Float64Array;
 
   /** `extent`: largest coordinate magnitude of the sketch (scales the margin). */
   constructor(
@@ -24,6 +28,50 @@ export class GroupCull {
     extent: number,
   ) {
     this.margin = 1e-12 * extent;
+    const n = e.count;
+    this.nx = new Float64Array(n);
+    this.ny = new Float64Array(n);
+    this.w = new Float64Array(n);
+    for (let k = 0; k < n; k++) {
+      const L = e.length[k];
+      const nx = (e.ay[k] - e.by[k]) / L,
+        ny = (e.bx[k] - e.ax[k]) / L;
+      this.nx[k] = nx;
+      this.ny[k] = ny;
+      this.w[k] = -(nx * e.ax[k] + ny * e.ay[k]);
+    }
+  }
+
+  /**
+   * Append to `out` (from `count` on) the polygon edges j of [from, end) that may face
+   * polygon edge i: a corner of j maybe in front of i's line and a corner of i maybe in
+   * front of j's. An edge left out surely fails one of the pair's exact front tests, so
+   * its pair is 0. Float tests that leave an edge out only when both its corners lie
+   * beyond the margin behind the line. Returns the new count.
+   */
+  facingIn(i: number, from: number, end: number, out: Int32Array, count: number): number {
+    const E = this.e,
+      NX = this.nx,
+      NY = this.ny,
+      W = this.w,
+      m = -this.margin;
+    const ax = E.ax[i],
+      ay = E.ay[i],
+      bx = E.bx[i],
+      by = E.by[i],
+      nx = NX[i],
+      ny = NY[i],
+      w = W[i];
+    let c = count;
+    for (let j = from; j < end; j++) {
+      if (nx * E.ax[j] + ny * E.ay[j] + w < m && nx * E.bx[j] + ny * E.by[j] + w < m) continue;
+      const jx = NX[j],
+        jy = NY[j],
+        jw = W[j];
+      if (jx * ax + jy * ay + jw < m && jx * bx + jy * by + jw < m) continue;
+      out[c++] = j;
+    }
+    return c;
   }
 
   /**

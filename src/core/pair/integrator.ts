@@ -134,11 +134,12 @@ export class PairIntegrator {
   }
 
   /**
-   * True when polygon edge i surely exchanges nothing with any edge of polygon edge
-   * j's group: each such pair's exchangeLength would be 0.
+   * Append to `out` (from `count` on) the polygon edges j > i that may exchange with
+   * polygon edge i, ascending (the others surely give exchangeLength 0: behind i, not
+   * facing it, or hidden from it by one body). Returns the new count.
    */
-  silentGroup(i: number, j: number): boolean {
-    return this.gatherer.silentGroup(i, j);
+  liveColumns(i: number, out: Int32Array, count: number): number {
+    return this.gatherer.liveColumns(i, out, count);
   }
 
   /** orient(a of edge e, b of edge e, corner `end` (0: a, 1: b) of edge f), from the edge arrays. */

@@ -86,6 +86,23 @@ export class ObstacleGatherer {
   }
 
   /**
+   * Append to `out` (from `count` on) the polygon edges j > i that may exchange with
+   * polygon edge i, ascending: whole groups that are surely silent (silentGroup) and
+   * edges that surely do not face i are left out. Returns the new count.
+   */
+  liveColumns(i: number, out: Int32Array, count: number): number {
+    const n = this.e.count,
+      groupEnd = this.groups.groupEnd;
+    let c = count;
+    for (let j = i + 1; j < n;) {
+      const end = groupEnd[j];
+      if (!this.silentGroup(i, j)) c = this.cull.facingIn(i, j, end, out, c);
+      j = end;
+    }
+    return c;
+  }
+
+  /**
    * Fill `pieces` with the obstructions of edges i and j inside the region (set for
    * this pair). Returns true when one body, or one chain of edges from one side string
    * to the other, blocks every sight line: the pair then exchanges nothing, and the
