@@ -96,6 +96,27 @@ export class BodyClipper {
     this.deferredCount = 0;
   }
 
+  /**
+   * Does body b surely stay out of H's interior: a convex body of the pair's own, or
+   * its bounding circle wholly outside one side (as placeBody, with its margin)?
+   */
+  surelyOutside(b: number): boolean {
+    const ob = this.ob,
+      R = this.region;
+    if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return true;
+    const cx = ob.bodyCx[b],
+      cy = ob.bodyCy[b],
+      r = ob.bodyR[b];
+    const margin = r * 1e-9 + 1e-12 * (Math.abs(cx) + Math.abs(cy));
+    for (let step = 0; step < 4; step++) {
+      const k = SIDE_ORDER[step];
+      if (!R.on[k]) continue;
+      const dist = ((R.ex[k] - R.sx[k]) * (cy - R.sy[k]) - (R.ey[k] - R.sy[k]) * (cx - R.sx[k])) * R.invLen[k];
+      if (dist < -r - margin) return true;
+    }
+    return false;
+  }
+
   /** Clip body b now: place it, then clip it unless it lies outside H or blocks the pair. */
   clipBody(b: number): void {
     if (this.placeBody(b) !== OUTSIDE && !this.blocked) this.clipPlaced(b);

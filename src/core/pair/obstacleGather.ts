@@ -127,6 +127,9 @@ export class ObstacleGatherer {
     )
       return true;
     this.region.measure(); // the side lengths and margins, for everything below
+    // Lists made already with every body surely outside H: nothing can block (the
+    // pieces stay empty), no hint need be probed.
+    if (this.listedOutside(i, j)) return false;
     // Hinted bodies whose corners (or clean hull) cross both side strings block it too
     // (a long, thin body whose inner disc falls short of them), before anything is clipped.
     if (this.crossBlocks(i, j, hi) || (hj !== hi && this.crossBlocks(i, j, hj))) return true;
@@ -157,6 +160,16 @@ export class ObstacleGatherer {
     if (chain >= 0) return this.blockedByChain(i, j, chain);
     this.pieces.sortByEdge();
     return false;
+  }
+
+  /** Are the pair's lists made, with no wall edge, and every listed body surely outside H? */
+  private listedOutside(i: number, j: number): boolean {
+    const lists = this.candidates;
+    if (!lists.madeWithoutWalls(i, j)) return false;
+    lists.find(i, j);
+    const bodies = lists.bodies;
+    for (let k = lists.bodyStart; k < lists.bodyEnd; k++) if (!this.clip.surelyOutside(bodies[k])) return false;
+    return true;
   }
 
   /** Remember the obstacle of the blocking chain that starts at piece `chain`; true. */

@@ -126,6 +126,17 @@ export class PairCandidates {
    * of the row edge with the other edge's group. False when not made yet: lists are
    * made only for pairs that a hint does not end (see obstacleGather.ts).
    */
+  /**
+   * True when the lists of the pair of edges i and j are made already and hold no wall
+   * edge; then `find` would only set the ranges (used to try the listed bodies first).
+   */
+  madeWithoutWalls(i: number, j: number): boolean {
+    const row = i < j ? i : j,
+      other = i < j ? j : i;
+    const b = this.groupOf[other];
+    return row === this.rowEdge && this.row.has(b) && this.row.wallTo[b] === this.row.wallFrom[b];
+  }
+
   nothingBetween(i: number, j: number): boolean {
     const row = i < j ? i : j,
       other = i < j ? j : i;
