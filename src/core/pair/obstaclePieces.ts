@@ -21,6 +21,9 @@ export class ObstaclePieces {
   endSide = new Int8Array(64);
   /** Piece indices sorted by edge id (after sortByEdge). */
   order = new Int32Array(64);
+  /** orderRuns scratch: the first piece of each run and its lowest id (more runs: the insertion sort). */
+  private readonly runStart = new Int32Array(32);
+  private readonly runLow = new Int32Array(32);
   /** 1 once the piece has been walked into a chain. */
   walked = new Uint8Array(64);
   count = 0;
@@ -98,20 +101,8 @@ export class ObstaclePieces {
    * they were gathered in (hints change that order from pair to pair).
    */
   sortByEdge(): void {
-    const n = this.count,
-      order = this.order,
-      edge = this.edge;
-    for (let k = 0; k < n; k++) {
-      const s = k,
-        key = edge[k];
-      let m = k - 1;
-      // Insertion sort: pieces arrive mostly in edge order (bodies and walls by runs).
-      while (m >= 0 && edge[order[m]] > key) {
-        order[m + 1] = order[m];
-        m--;
-      }
-      order[m + 1] = s;
-    }
+    // A few pieces sort fastest by insertion; more come in runs (a body's walk).
+    if (this.count <= 8 || !this.orderRuns()) this.insertionOrder();
     const whole = this.wholeBody;
     for (let k = 1; k < this.wholeCount; k++) {
       const b = whole[k];
@@ -121,6 +112,69 @@ export class ObstaclePieces {
         m--;
       }
       whole[m + 1] = b;
+    }
+  }
+
+  /**
+   * Order the pieces when they arrive as runs of edge ids, each rising or falling by
+   * one (a body's pieces in walk order, which runs backwards through the ids of a
+   * polygon given anticlockwise), whose id ranges do not overlap: the runs sorted by
+   * their lowest id, each laid out rising. False (nothing written that counts) when
+   * there are too many runs or their ranges overlap: the insertion sort then orders.
+   */
+  private orderRuns(): boolean {
+    const n = this.count,
+      edge = this.edge,
+      runs = this.runStart,
+      runLow = this.runLow;
+    let r = 0;
+    for (let k = 0; k < n;) {
+      // The run from k: consecutive ids, rising or falling.
+      let end = k + 1;
+      if (end < n && edge[end] === edge[k] + 1) while (end < n && edge[end] === edge[end - 1] + 1) end++;
+      else if (end < n && edge[end] === edge[k] - 1) while (end < n && edge[end] === edge[end - 1] - 1) end++;
+      if (r === runs.length) return false;
+      const low = Math.min(edge[k], edge[end - 1]);
+      let m = r - 1;
+      while (m >= 0 && runLow[m] > low) {
+        runs[m + 1] = runs[m];
+        runLow[m + 1] = runLow[m];
+        m--;
+      }
+      runs[m + 1] = k;
+      runLow[m + 1] = low;
+      r++;
+      k = end;
+    }
+    const order = this.order;
+    let at = 0,
+      last = -1;
+    for (let q = 0; q < r; q++) {
+      const k = runs[q];
+      if (runLow[q] <= last) return false; // ranges overlap
+      let end = k + 1;
+      if (end < n && edge[end] === edge[k] + 1) while (end < n && edge[end] === edge[end - 1] + 1) end++;
+      else if (end < n && edge[end] === edge[k] - 1) while (end < n && edge[end] === edge[end - 1] - 1) end++;
+      if (edge[k] <= edge[end - 1]) for (let s = k; s < end; s++) order[at++] = s;
+      else for (let s = end - 1; s >= k; s--) order[at++] = s;
+      last = Math.max(edge[k], edge[end - 1]);
+    }
+    return true;
+  }
+
+  /** Insertion sort of the pieces by edge id into `order`. */
+  private insertionOrder(): void {
+    const n = this.count,
+      order = this.order,
+      edge = this.edge;
+    for (let k = 0; k < n; k++) {
+      const key = edge[k];
+      let m = k - 1;
+      while (m >= 0 && edge[order[m]] > key) {
+        order[m + 1] = order[m];
+        m--;
+      }
+      order[m + 1] = k;
     }
   }
 
