@@ -119,11 +119,12 @@ export class ObstacleGatherer {
     const probed = this.probed; // four stores: a call to fill costs more than the work
     probed[0] = probed[1] = probed[2] = probed[3] = -1;
     // Hinted bodies whose disc blocks the pair end it before anything is clipped.
+    // (A hint repeated is tried once.)
     if (
       this.discBlocks(i, j, hi) ||
-      this.discBlocks(i, j, hj) ||
-      this.discBlocks(i, j, hi2) ||
-      this.discBlocks(i, j, hj2)
+      (hj !== hi && this.discBlocks(i, j, hj)) ||
+      (hi2 !== hi && hi2 !== hj && this.discBlocks(i, j, hi2)) ||
+      (hj2 !== hi && hj2 !== hj && hj2 !== hi2 && this.discBlocks(i, j, hj2))
     )
       return true;
     this.region.measure(); // the side lengths and margins, for everything below
