@@ -96,25 +96,9 @@ export class BodyClipper {
     this.deferredCount = 0;
   }
 
-  /**
-   * Does body b surely stay out of H's interior: a convex body of the pair's own, or
-   * its bounding circle wholly outside one side (as placeBody, with its margin)?
-   */
+  /** Does body b surely stay out of H's interior (placeCircle: OUTSIDE)? Leaves only scratch behind. */
   surelyOutside(b: number): boolean {
-    const ob = this.ob,
-      R = this.region;
-    if (ob.bodyConvex[b] && (b === this.bodyI || b === this.bodyJ)) return true;
-    const cx = ob.bodyCx[b],
-      cy = ob.bodyCy[b],
-      r = ob.bodyR[b];
-    const margin = r * 1e-9 + 1e-12 * (Math.abs(cx) + Math.abs(cy));
-    for (let step = 0; step < 4; step++) {
-      const k = SIDE_ORDER[step];
-      if (!R.on[k]) continue;
-      const dist = ((R.ex[k] - R.sx[k]) * (cy - R.sy[k]) - (R.ey[k] - R.sy[k]) * (cx - R.sx[k])) * R.invLen[k];
-      if (dist < -r - margin) return true;
-    }
-    return false;
+    return this.placeCircle(b) === OUTSIDE;
   }
 
   /** Clip body b now: place it, then clip it unless it lies outside H or blocks the pair. */
@@ -202,6 +186,19 @@ export class BodyClipper {
    * whose inner disc cuts the view blocks the pair (blocked, blocker).
    */
   private placeBody(b: number): number {
+    const place = this.placeCircle(b);
+    if (place === STRADDLING && this.cutsView(b)) {
+      this.blocked = true;
+      this.blocker = b;
+    }
+    return place;
+  }
+
+  /**
+   * Place body b against H by its bounding circle alone (placeBody without the disc
+   * test): OUTSIDE, INSIDE, or STRADDLING with the cutting sides in `crossing`.
+   */
+  private placeCircle(b: number): number {
     const ob = this.ob,
       R = this.region;
     // A convex body lies wholly behind each of its own edges, so it cannot block a
@@ -225,12 +222,7 @@ export class BodyClipper {
       if (dist < r + margin) this.crossing[crossCount++] = k;
     }
     this.crossCount = crossCount;
-    if (crossCount === 0) return INSIDE;
-    if (this.cutsView(b)) {
-      this.blocked = true;
-      this.blocker = b;
-    }
-    return STRADDLING;
+    return crossCount === 0 ? INSIDE : STRADDLING;
   }
 
   /** Clip body b, placed by placeBody (and not blocking); a body wholly inside H keeps every edge whole. */

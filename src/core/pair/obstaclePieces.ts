@@ -1,5 +1,9 @@
 import type { EdgeSet } from '../edges';
+import { sortRanges as sortRangesIn } from '../scratch';
 import type { SegmentClip } from './viewRegion';
+
+// Module-local copy of a hot import (see integrator.ts).
+const sortRanges = sortRangesIn;
 
 // The obstruction pieces of one edge pair: edges (or their parts) clipped to the view
 // region H, and the convex bodies lying wholly inside H (which enter the view only by
@@ -128,38 +132,34 @@ export class ObstaclePieces {
       runs = this.runStart,
       runLow = this.runLow;
     let r = 0;
-    for (let k = 0; k < n;) {
-      // The run from k: consecutive ids, rising or falling.
-      let end = k + 1;
-      if (end < n && edge[end] === edge[k] + 1) while (end < n && edge[end] === edge[end - 1] + 1) end++;
-      else if (end < n && edge[end] === edge[k] - 1) while (end < n && edge[end] === edge[end - 1] - 1) end++;
+    for (let k = 0; k < n; k = this.runEnd(k)) {
       if (r === runs.length) return false;
-      const low = Math.min(edge[k], edge[end - 1]);
-      let m = r - 1;
-      while (m >= 0 && runLow[m] > low) {
-        runs[m + 1] = runs[m];
-        runLow[m + 1] = runLow[m];
-        m--;
-      }
-      runs[m + 1] = k;
-      runLow[m + 1] = low;
-      r++;
-      k = end;
+      runs[r] = k;
+      runLow[r++] = Math.min(edge[k], edge[this.runEnd(k) - 1]);
     }
+    sortRanges(runLow, runs, r); // by lowest id
     const order = this.order;
     let at = 0,
       last = -1;
     for (let q = 0; q < r; q++) {
-      const k = runs[q];
+      const k = runs[q],
+        end = this.runEnd(k);
       if (runLow[q] <= last) return false; // ranges overlap
-      let end = k + 1;
-      if (end < n && edge[end] === edge[k] + 1) while (end < n && edge[end] === edge[end - 1] + 1) end++;
-      else if (end < n && edge[end] === edge[k] - 1) while (end < n && edge[end] === edge[end - 1] - 1) end++;
       if (edge[k] <= edge[end - 1]) for (let s = k; s < end; s++) order[at++] = s;
       else for (let s = end - 1; s >= k; s--) order[at++] = s;
       last = Math.max(edge[k], edge[end - 1]);
     }
     return true;
+  }
+
+  /** The end (exclusive) of the run of pieces from k whose ids rise, or fall, by one. */
+  private runEnd(k: number): number {
+    const n = this.count,
+      edge = this.edge;
+    let end = k + 1;
+    if (end < n && edge[end] === edge[k] + 1) while (end < n && edge[end] === edge[end - 1] + 1) end++;
+    else if (end < n && edge[end] === edge[k] - 1) while (end < n && edge[end] === edge[end - 1] - 1) end++;
+    return end;
   }
 
   /** Insertion sort of the pieces by edge id into `order`. */
