@@ -3,6 +3,7 @@ import type { EdgeSet } from './edges';
 import { orient } from './orient';
 import { RegionTree } from './pair/regionTree';
 import { pointInPolygon } from './pointInPolygon';
+import { closestFraction } from './segmentPoint';
 
 /**
  * Where to look for edges that may block a view, built once per sketch.
@@ -335,8 +336,7 @@ function innerRadius(edges: EdgeSet, from: number, to: number, cx: number, cy: n
       y0 = edges.ay[e];
     const dx = edges.bx[e] - x0,
       dy = edges.by[e] - y0;
-    let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
-    t = t < 0 ? 0 : t > 1 ? 1 : t;
+    const t = closestFraction(cx, cy, x0, y0, edges.bx[e], edges.by[e]);
     r = Math.min(r, Math.hypot(cx - x0 - t * dx, cy - y0 - t * dy));
   }
   return r;

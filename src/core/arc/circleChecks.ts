@@ -1,4 +1,5 @@
 import { pointInPolygon } from '../pointInPolygon';
+import { closestFraction } from '../segmentPoint';
 import type { CircleInput, PolygonInput } from '../scene';
 
 // Geometric validity of exact circles against each other and against polygons.
@@ -125,10 +126,6 @@ function circleAndPolygon(
 }
 
 function closestOnSegment(px: number, py: number, ax: number, ay: number, bx: number, by: number): [number, number] {
-  const dx = bx - ax,
-    dy = by - ay;
-  const L2 = dx * dx + dy * dy;
-  let t = L2 > 0 ? ((px - ax) * dx + (py - ay) * dy) / L2 : 0;
-  t = t < 0 ? 0 : t > 1 ? 1 : t;
-  return [ax + t * dx, ay + t * dy];
+  const t = closestFraction(px, py, ax, ay, bx, by);
+  return [ax + t * (bx - ax), ay + t * (by - ay)];
 }

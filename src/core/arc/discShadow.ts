@@ -1,3 +1,4 @@
+import { discUmbraLines } from '../discUmbra';
 import type { Curve } from './curve';
 
 // Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
@@ -8,12 +9,8 @@ import type { Curve } from './curve';
 // ones beyond its neighbour, and those pairs were most of such a sketch's time.
 //
 // Disc A hides everything of a convex target T from point p when p lies in A's umbra
-// of T: between the two lines that bound the hull of A and T (bridges), on the far
-// side of the chord joining the bridges' touch points on A. The segment from p to a
-// point of T then stays between the bridges and crosses that chord's line, and the
-// part of the line between the bridges is the chord, inside A. For a disc target the
-// bridges are the outer common tangents; for a straight target (b0, b1) the umbra is
-// that of each end, the same construction with T a point. Each condition is a
+// of T (core/discUmbra.ts). For a disc target that is the umbra of the disc; for a
+// straight target (b0, b1) the umbra of each end, T a point. Each condition is a
 // half-plane, so it holds along the emitter when it holds at a segment's ends, or at
 // the lowest point of an arc. Float tests with a margin (see hides).
 
@@ -58,52 +55,10 @@ export class DiscShadow {
     return true;
   }
 
-  /**
-   * Add the three lines of disc A's umbra of disc T (tr = 0: a point): the two outer
-   * common tangents and the chord line through their touch points on A, each with
-   * the umbra on its positive side. False when T is not wholly apart from A.
-   */
+  /** Add the three lines of disc A's umbra of disc T (tr = 0: a point); false when T is not wholly apart from A. */
   private discUmbra(ax: number, ay: number, ar: number, tx: number, ty: number, tr: number): boolean {
-    const dx = tx - ax,
-      dy = ty - ay;
-    const d = Math.sqrt(dx * dx + dy * dy);
-    if (!(d > ar + tr)) return false;
-    // Outer tangents: normal n at angle phi +- acos((tr - ar) / d) from the centre
-    // line, both centres on the positive side at distances ar and tr.
-    const phi = Math.atan2(dy, dx),
-      w = Math.acos((tr - ar) / d);
-    const L = this.lines;
-    const k = this.count;
-    for (let s = 0; s < 2; s++) {
-      const psi = s === 0 ? phi + w : phi - w;
-      const nx = Math.cos(psi),
-        ny = Math.sin(psi);
-      L[3 * (k + s)] = nx;
-      L[3 * (k + s) + 1] = ny;
-      L[3 * (k + s) + 2] = ar - (nx * ax + ny * ay);
-    }
-    // Touch points on A: a - ar n for each tangent; the umbra lies on the side of their
-    // chord away from T.
-    const p1x = ax - ar * L[3 * k],
-      p1y = ay - ar * L[3 * k + 1],
-      p2x = ax - ar * L[3 * k + 3],
-      p2y = ay - ar * L[3 * k + 4];
-    let nx = p2y - p1y,
-      ny = p1x - p2x;
-    const len = Math.sqrt(nx * nx + ny * ny);
-    if (!(len > 0)) return false;
-    nx /= len;
-    ny /= len;
-    let c = -(nx * p1x + ny * p1y);
-    if (nx * tx + ny * ty + c > 0) {
-      nx = -nx;
-      ny = -ny;
-      c = -c;
-    }
-    L[3 * (k + 2)] = nx;
-    L[3 * (k + 2) + 1] = ny;
-    L[3 * (k + 2) + 2] = c;
-    this.count = k + 3;
+    if (!discUmbraLines(ax, ay, ar, tx, ty, tr, this.lines, 3 * this.count)) return false;
+    this.count += 3;
     return true;
   }
 }

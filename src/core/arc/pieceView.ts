@@ -1,6 +1,6 @@
 import { distanceChange as distanceChangeIn } from '../pairGeometry';
 import { orient as orientIn } from '../orient';
-import { sortIndexByKey as sortIndexByKeyIn } from '../scratch';
+import { growInt, sortIndexByKey as sortIndexByKeyIn } from '../scratch';
 import type { ArcSet } from './arcs';
 import { coneMeetsTarget as coneMeetsTargetIn, towardTarget as towardTargetIn, type Curve } from './curve';
 import type { PairScene } from './pairScene';
@@ -159,11 +159,7 @@ export class PieceView {
 
   /** Keep blocking circle k for this piece's ray casts. */
   private keepNear(k: number): void {
-    if (this.nearCount === this.near.length) {
-      const grown = new Int32Array(2 * this.nearCount);
-      grown.set(this.near);
-      this.near = grown;
-    }
+    if (this.nearCount === this.near.length) this.near = growInt(this.near);
     this.near[this.nearCount++] = k;
   }
 

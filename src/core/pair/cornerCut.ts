@@ -1,5 +1,9 @@
 import type { ObstacleIndex } from '../obstacles';
+import { closestFraction as closestFractionIn } from '../segmentPoint';
 import type { ViewRegion } from './viewRegion';
+
+// Module-local copy of a hot import (see integrator.ts).
+const closestFraction = closestFractionIn;
 
 // Does a body cut a pair's view region H from one side string to the other, shown by
 // the corners of the convex polygon that stands in for it (ObstacleIndex.bodyHullXY:
@@ -46,8 +50,7 @@ export function centreToSideSquared(ob: ObstacleIndex, R: ViewRegion, k: number,
     y0 = R.sy[k];
   const dx = R.ex[k] - x0,
     dy = R.ey[k] - y0;
-  let t = ((cx - x0) * dx + (cy - y0) * dy) / (dx * dx + dy * dy);
-  t = t < 0 ? 0 : t > 1 ? 1 : t;
+  const t = closestFraction(cx, cy, x0, y0, R.ex[k], R.ey[k]);
   const ux = cx - (x0 + t * dx),
     uy = cy - (y0 + t * dy);
   return ux * ux + uy * uy;

@@ -1,4 +1,5 @@
 import type { EdgeSet } from '../edges';
+import { discUmbraLines } from '../discUmbra';
 import type { ObstacleIndex } from '../obstacles';
 import type { EdgeGroups } from './edgeGroups';
 
@@ -19,6 +20,8 @@ export class GroupCull {
   private readonly nx: Float64Array;
   private readonly ny: Float64Array;
   private readonly w: Float64Array;
+  /** The umbra's three lines (core/discUmbra.ts), scratch. */
+  private readonly umbra = new Float64Array(9);
 
   /** `extent`: largest coordinate magnitude of the sketch (scales the margin). */
   constructor(
@@ -105,11 +108,9 @@ export class GroupCull {
   }
 
   /**
-   * Is edge i wholly inside body c's umbra of group b's circle? The umbra of a disc H
-   * for a disc T: on the side of each outer common tangent that holds both discs, and
-   * beyond the chord through the tangents' touch points on H, away from T. H is c's
-   * blocking disc shrunk and T is b's circle grown, each by SLACK; every half-plane is
-   * checked at both ends of i (they are convex).
+   * Is edge i wholly inside body c's umbra of group b's circle (core/discUmbra.ts)?
+   * c's blocking disc is shrunk and b's circle grown, each by SLACK; every half-plane
+   * is checked at both ends of i, with the margin (half-planes are convex).
    */
   private umbraHolds(i: number, b: number, c: number): boolean {
     const ob = this.ob,
@@ -120,35 +121,16 @@ export class GroupCull {
     const hx = ob.bodyCx[c],
       hy = ob.bodyCy[c];
     const tr = G.r[b] * (1 + SLACK) + this.margin;
-    const dx = G.cx[b] - hx,
-      dy = G.cy[b] - hy;
-    const d = Math.sqrt(dx * dx + dy * dy);
-    if (!(d > (hr + tr) * (1 + SLACK))) return false;
-    const ux = dx / d,
-      uy = dy / d;
-    // Tangent normals n = cw u +- sw u_perp, with cw = cos w = (tr - hr) / d.
-    const cw = (tr - hr) / d,
-      sw = Math.sqrt(1 - cw * cw);
-    const n1x = cw * ux - sw * uy,
-      n1y = cw * uy + sw * ux,
-      n2x = cw * ux + sw * uy,
-      n2y = cw * uy - sw * ux;
-    const w1 = hr - (n1x * hx + n1y * hy),
-      w2 = hr - (n2x * hx + n2y * hy),
-      // Chord: -u . (x - h) - hr cw >= 0.
-      w3 = ux * hx + uy * hy - hr * cw;
+    const L = this.umbra;
+    if (!discUmbraLines(hx, hy, hr, G.cx[b], G.cy[b], tr, L, 0)) return false;
     const m = this.margin;
     const ax = E.ax[i],
       ay = E.ay[i],
       bx = E.bx[i],
       by = E.by[i];
-    return (
-      n1x * ax + n1y * ay + w1 >= m &&
-      n1x * bx + n1y * by + w1 >= m &&
-      n2x * ax + n2y * ay + w2 >= m &&
-      n2x * bx + n2y * by + w2 >= m &&
-      w3 - (ux * ax + uy * ay) >= m &&
-      w3 - (ux * bx + uy * by) >= m
-    );
+    for (let k = 0; k < 9; k += 3) {
+      if (!(L[k] * ax + L[k + 1] * ay + L[k + 2] >= m && L[k] * bx + L[k + 1] * by + L[k + 2] >= m)) return false;
+    }
+    return true;
   }
 }

@@ -120,28 +120,32 @@ export class PairCandidates {
   }
 
   /**
+   * True when the lists of the pair of edges i and j are made already and hold no wall
+   * edge; then `find` would only set the ranges (used to try the listed bodies first).
+   */
+  madeWithoutWalls(i: number, j: number): boolean {
+    const b = this.madeGroup(i, j);
+    return b >= 0 && this.row.wallTo[b] === this.row.wallFrom[b];
+  }
+
+  /**
    * True when the lists of the pair of edges i and j (either order) are made already
    * and hold nothing that can block it: no wall edge, and no body but the pair's own
    * convex ones (they lie behind their edges). No obstacle then enters any view region
    * of the row edge with the other edge's group. False when not made yet: lists are
    * made only for pairs that a hint does not end (see obstacleGather.ts).
    */
-  /**
-   * True when the lists of the pair of edges i and j are made already and hold no wall
-   * edge; then `find` would only set the ranges (used to try the listed bodies first).
-   */
-  madeWithoutWalls(i: number, j: number): boolean {
-    const row = i < j ? i : j,
-      other = i < j ? j : i;
-    const b = this.groupOf[other];
-    return row === this.rowEdge && this.row.has(b) && this.row.wallTo[b] === this.row.wallFrom[b];
+  nothingBetween(i: number, j: number): boolean {
+    const b = this.madeGroup(i, j);
+    return b >= 0 && this.row.unblocked[b] === 1;
   }
 
-  nothingBetween(i: number, j: number): boolean {
+  /** The other edge's group when the row's lists for the pair of edges i and j are made; -1 otherwise. */
+  private madeGroup(i: number, j: number): number {
     const row = i < j ? i : j,
       other = i < j ? j : i;
     const b = this.groupOf[other];
-    return row === this.rowEdge && this.row.has(b) && this.row.unblocked[b] === 1;
+    return row === this.rowEdge && this.row.has(b) ? b : -1;
   }
 
   /** Copy into the row's lists what of group b's lists may enter the row's widened triangle (all of them when it is too thin). */

@@ -48,8 +48,6 @@ export class ViewRegion {
   readonly tol = new Float64Array(4);
   private readonly normal = new Float64Array(4);
   private normalReady = false;
-  /** False from set() until measure(): invLen and tol are not yet those of this pair. */
-  private measured = false;
 
   /** `extent`: largest coordinate magnitude of the (shifted) sketch, scales float margins. */
   constructor(readonly extent: number) {}
@@ -63,18 +61,15 @@ export class ViewRegion {
     this.side(1, P, 2, 4);
     this.side(2, P, 4, 6);
     this.side(3, P, 6, 0);
-    this.measured = false;
     this.normalReady = false;
   }
 
   /**
    * The sides' lengths and margins (invLen, tol), which set() leaves for later: a pair
    * that a remembered body's disc blocks ends on the sides' ends alone. Call before
-   * either is read; once per pair is enough.
+   * either is read, once per pair (the gatherer does, after the remembered discs).
    */
   measure(): void {
-    if (this.measured) return;
-    this.measured = true;
     for (let k = 0; k < 4; k++) {
       const len = Math.sqrt((this.ex[k] - this.sx[k]) ** 2 + (this.ey[k] - this.sy[k]) ** 2);
       this.invLen[k] = len > 0 ? 1 / len : 0;
