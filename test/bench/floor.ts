@@ -121,4 +121,35 @@ export function floorSection(quick: boolean): void {
     );
   }
   for (const v of verdicts) console.log(v);
+  clearSection(quick);
+}
+
+/** An empty oval enclosure of n edges: every pair of edges faces the other and nothing blocks. */
+export function emptyOval(n: number): SceneInput {
+  const points: number[] = [];
+  for (let k = 0; k < n; k++) points.push(5 * Math.cos((2 * Math.PI * k) / n), 3 * Math.sin((2 * Math.PI * k) / n));
+  return {
+    polygons: [{ kind: 'enclosure', points }],
+    edgeSurface: Array.from({ length: n }, (_, k) => k),
+    surfaceCount: n,
+  };
+}
+
+/**
+ * As information: the same ratio where nothing blocks (an empty oval), so every pair is
+ * one crossed-strings sum and the rest is our overhead per pair. What the tube scenes
+ * add above it is the work of finding what blocks each view.
+ */
+function clearSection(quick: boolean): void {
+  for (const n of [400, 1600]) {
+    const scene = emptyOval(n);
+    const ours = timeEdgeMatrix(scene, quick ? 2 : 7);
+    const E = buildEdges(scene.polygons);
+    const pairs = facingPairs(E);
+    const floor = timeFloor(E, pairs, quick ? 5 : 15);
+    if (!Number.isFinite(floor.checksum)) throw new Error('crossed-strings floor: non-finite checksum');
+    console.log(
+      `empty oval, ${n} edges (all ${pairs.length / 2} ordered pairs face, none blocked): ours ${ours.median.toFixed(1)} ms, floor ${floor.median.toFixed(2)} ms, ${(ours.median / floor.median).toFixed(1)}x (information)`,
+    );
+  }
 }
