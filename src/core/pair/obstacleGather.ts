@@ -63,7 +63,13 @@ export class ObstacleGatherer {
    * clear, and the pair needs no region, hints or pieces.
    */
   nothingBetween(i: number, j: number): boolean {
-    return this.candidates.nothingBetween(i, j);
+    const lists = this.candidates;
+    if (lists.nothingBetween(i, j)) return true;
+    // Lists not made yet, and no obstacle remembered by either edge: make them now
+    // (the gather would), so the first pair of the group can be clear too.
+    if (this.hint[i] !== -1 || this.hint[j] !== -1 || lists.made(i, j)) return false;
+    lists.find(i, j);
+    return lists.nothingBetween(i, j);
   }
 
   /**

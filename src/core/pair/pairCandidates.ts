@@ -140,6 +140,11 @@ export class PairCandidates {
     return b >= 0 && this.row.unblocked[b] === 1;
   }
 
+  /** Are the row's lists for the pair of edges i and j (either order) made already? */
+  made(i: number, j: number): boolean {
+    return this.madeGroup(i, j) >= 0;
+  }
+
   /** The other edge's group when the row's lists for the pair of edges i and j are made; -1 otherwise. */
   private madeGroup(i: number, j: number): number {
     const row = i < j ? i : j,
