@@ -14,6 +14,9 @@ const WK = [
 ];
 const WG = [0.12948496616887, 0.279705391489277, 0.381830050505119, 0.417959183673469]; // at XK[1], XK[3], XK[5], XK[7]
 
+/** Most intervals one integral may evaluate (a converged row of the references takes up to about 1e4). */
+const MAX_INTERVALS = 200_000;
+
 /**
  * The integral over [0, 1] of f (n values at once), splitting an interval while
  * the Kronrod and Gauss estimates differ by more than `tol` per unit length in any
@@ -32,7 +35,11 @@ export function integrateVector(
   const edges = [0, ...starts, 1];
   const stack: [number, number, number][] = [];
   for (let k = 0; k + 1 < edges.length; k++) stack.push([edges[k], edges[k + 1], 0]);
+  let intervals = 0;
   while (stack.length) {
+    // Rounding noise in a point factor (points lined up to 1e-12) can keep the error
+    // estimate from ever passing: say so rather than run for hours.
+    if (++intervals > MAX_INTERVALS) throw new Error(`quadrature: no convergence in ${MAX_INTERVALS} intervals`);
     const [u0, u1, depth] = stack.pop()!;
     kron.fill(0);
     gauss.fill(0);
