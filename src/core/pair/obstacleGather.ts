@@ -59,8 +59,10 @@ export class ObstacleGatherer {
 
   /**
    * Can nothing block edges i and j? True when the lists shared by the row edge and the
-   * other edge's group are made and hold no possible obstacle: every sight line is then
-   * clear, and the pair needs no region, hints or pieces.
+   * other edge's group hold no possible obstacle: every sight line is then clear, and
+   * the pair needs no region, hints or pieces. The lists are made here when neither
+   * edge remembers an obstacle; otherwise only lists made already are read (a
+   * remembered obstacle often ends the pair before any list is needed).
    */
   nothingBetween(i: number, j: number): boolean {
     const lists = this.candidates;
