@@ -3,6 +3,7 @@ import type { EdgeSet } from './edges';
 import { orient } from './orient';
 import { RegionTree } from './pair/regionTree';
 import { pointInPolygon } from './pointInPolygon';
+import { blockingWallEdges, convexHull } from './polygonHull';
 import { closestFraction } from './segmentPoint';
 
 /**
@@ -205,50 +206,6 @@ export function buildObstacleIndex(edges: EdgeSet): ObstacleIndex {
     wallEdges,
     wallTree,
   };
-}
-
-/**
- * Edges of one enclosure polygon [from, to) that may block a view: those not on its
- * convex hull. An edge is on the hull when every hull corner lies on its radiating
- * side or on its line (exact test).
- */
-function blockingWallEdges(edges: EdgeSet, from: number, to: number): number[] {
-  const hull = convexHull(edges, from, to);
-  const out: number[] = [];
-  for (let e = from; e < to; e++) {
-    let onHull = true;
-    for (let k = 0; k < hull.length && onHull; k += 2) {
-      if (orient(edges.ax[e], edges.ay[e], edges.bx[e], edges.by[e], hull[k], hull[k + 1]) < 0) onHull = false;
-    }
-    if (!onHull) out.push(e);
-  }
-  return out;
-}
-
-/** Corners of the convex hull of the start points of edges [from, to), flat x,y (monotone chain). */
-function convexHull(edges: EdgeSet, from: number, to: number): number[] {
-  const idx: number[] = [];
-  for (let e = from; e < to; e++) idx.push(e);
-  idx.sort((a, b) => edges.ax[a] - edges.ax[b] || edges.ay[a] - edges.ay[b]);
-  const chain: number[] = [];
-  const build = (order: number[]) => {
-    const part: number[] = [];
-    for (const e of order) {
-      while (part.length >= 2) {
-        const p = part[part.length - 2],
-          q = part[part.length - 1];
-        if (orient(edges.ax[p], edges.ay[p], edges.ax[q], edges.ay[q], edges.ax[e], edges.ay[e]) > 0) break;
-        part.pop();
-      }
-      part.push(e);
-    }
-    part.pop();
-    return part;
-  };
-  chain.push(...build(idx), ...build([...idx].reverse()));
-  const out: number[] = [];
-  for (const e of chain) out.push(edges.ax[e], edges.ay[e]);
-  return out;
 }
 
 /**
