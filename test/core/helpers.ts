@@ -30,3 +30,11 @@ export function withSurfaces(
 }
 
 export const f = (r: ViewFactorResult, i: number, j: number) => r.F[i * r.surfaceCount + j];
+
+/** The corners of a w x h box from the origin, anticlockwise, as [x, y] pairs. */
+export const boxCorners = (w: number, h: number): number[][] => [
+  [0, 0],
+  [w, 0],
+  [w, h],
+  [0, h],
+];

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { computeViewFactors } from '../../../src/core/viewFactors';
 import type { CircleInput } from '../../../src/core/scene';
 import { mulberry32 } from '../../bench/scenes';
-import { circleParts, oracleRow, polygonParts, type OracleScene } from './circleOracle';
+import { boxCorners } from '../helpers';
+import { oracleRow } from './circleOracle';
+import { sectionFactors, type SectionPolygon } from './section';
 
 // Seeded random sections with exact circles: tubes split into 1 to 6 arcs, some beside
 // another 1e-6 or 1e-3 of the smaller radius away (the near-touching case, where the
@@ -16,7 +17,7 @@ const TOL = 1e-9;
 const SECTIONS = 16;
 
 interface Section {
-  polys: { kind: 'enclosure' | 'solid'; points: number[][] }[];
+  polys: SectionPolygon[];
   circles: CircleInput[];
   /** Tubes or bars placed 1e-6 of the smaller radius from another. */
   nearlyTouching: number;
@@ -29,12 +30,7 @@ function randomSection(seed: number): Section {
   const polys: Section['polys'] = [
     {
       kind: 'enclosure',
-      points: [
-        [0, 0],
-        [W, 0],
-        [W, H],
-        [0, H],
-      ],
+      points: boxCorners(W, H),
     },
   ];
   const circles: CircleInput[] = [];
@@ -89,16 +85,7 @@ describe('seeded random sections with exact circles against the ray-cast referen
     let arcRows = 0;
     for (let seed = 1; seed <= SECTIONS; seed++) {
       const { polys, circles } = randomSection(seed);
-      const scene: OracleScene = { parts: [], circles: [] };
-      for (const p of polys) scene.parts.push(...polygonParts(p.kind, p.points));
-      for (const c of circles) circleParts(scene, c.kind, c.cx, c.cy, c.radius, c.arcs);
-      const n = scene.parts.length;
-      const res = computeViewFactors({
-        polygons: polys.map((p) => ({ kind: p.kind, points: p.points.flat() })),
-        circles,
-        edgeSurface: Array.from({ length: n }, (_, k) => k),
-        surfaceCount: n,
-      });
+      const { scene, F, n } = sectionFactors(polys, circles);
       const pick = mulberry32(500 + seed);
       for (let q = 0; q < 3; q++) {
         const i = Math.floor(pick() * n);
@@ -106,7 +93,7 @@ describe('seeded random sections with exact circles against the ray-cast referen
         const ref = oracleRow(scene, i, 1e-11);
         let sum = 0;
         for (let j = 0; j < n; j++) {
-          const got = res.F[i * n + j];
+          const got = F[i * n + j];
           sum += got;
           if (Math.abs(got - ref[j]) > TOL)
             throw new Error(`section ${seed}: F[${i}][${j}] = ${got}, reference ${ref[j]}`);

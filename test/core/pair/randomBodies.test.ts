@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { mulberry32 } from '../../bench/scenes';
-import { f, perEdge, type Poly } from '../helpers';
+import { boxCorners, f, perEdge, type Poly } from '../helpers';
 import { oracleRow, orientedSegments } from '../oracle';
 
 // Seeded random sketches of what the fast paths cut short: convex bodies of 9 to 16
@@ -23,12 +23,7 @@ function randomSketch(seed: number, maxEdges: number): { polys: Poly[]; slits: n
   const polys: Poly[] = [
     {
       kind: 'enclosure',
-      points: [
-        [0, 0],
-        [W, 0],
-        [W, H],
-        [0, H],
-      ],
+      points: boxCorners(W, H),
     },
   ];
   const placed: [number, number, number][] = [];
