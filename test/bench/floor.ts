@@ -114,7 +114,7 @@ export function facingClasses(
   return { clear, partly, blocked };
 }
 
-/** Edge e's ends [ax, ay, bx, by] cut to the part strictly in front of edge f's line (float signs). */
+/** Edge e's ends [ax, ay, bx, by] cut to the part strictly in front of edge f's line (float signs; written here, not taken from the core, so the split is independent of it). */
 function trimmedInFront(E: EdgeSet, e: number, f: number): number[] {
   const side = (x: number, y: number) => (E.bx[f] - E.ax[f]) * (y - E.ay[f]) - (E.by[f] - E.ay[f]) * (x - E.ax[f]);
   let ax = E.ax[e],

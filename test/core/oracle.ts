@@ -5,6 +5,7 @@
 // between consecutive directions to the sketch's corners the first edge hit
 // cannot change, so one ray per angular gap decides it. The point factor is then
 // integrated along the emitting edge by adaptive Gauss-Kronrod (7/15) quadrature.
+import { crossingsAlong, lineThrough, linesThroughPairs, type Line } from './arc/oracleCuts';
 import { integrateVector } from './quadrature';
 
 export interface Seg {
@@ -127,26 +128,17 @@ const ALL_EVENTS_MAX_EDGES = 80;
  * cuts), so a failing row of a large sketch should first be checked with the full cuts.
  */
 function eventCuts(segs: Seg[], i: number): number[] {
-  const s = segs[i];
-  const out: number[] = [];
-  const cross = (px: number, py: number, qx: number, qy: number) => {
-    const side = (x: number, y: number) => (qx - px) * (y - py) - (qy - py) * (x - px);
-    const d0 = side(s.ax, s.ay),
-      d1 = side(s.bx, s.by);
-    if ((d0 < 0 && d1 > 0) || (d0 > 0 && d1 < 0)) {
-      const u = d0 / (d0 - d1);
-      if (u > 1e-12 && u < 1 - 1e-12) out.push(u);
-    }
-  };
   if (segs.length <= ALL_EVENTS_MAX_EDGES) {
-    const corners = segs.flatMap((o) => [o.ax, o.ay, o.bx, o.by]);
-    for (let a = 0; a < corners.length; a += 2)
-      for (let b = a + 2; b < corners.length; b += 2) {
-        if (corners[a] === corners[b] && corners[a + 1] === corners[b + 1]) continue;
-        cross(corners[a], corners[a + 1], corners[b], corners[b + 1]);
-      }
-  } else {
-    for (let k = 0; k < segs.length; k++) if (k !== i) cross(segs[k].ax, segs[k].ay, segs[k].bx, segs[k].by);
+    const corners = segs.flatMap((o): [number, number][] => [
+      [o.ax, o.ay],
+      [o.bx, o.by],
+    ]);
+    return crossingsAlong(segs[i], linesThroughPairs(corners));
   }
-  return [...new Set(out)].sort((a, b) => a - b);
+  const lines: Line[] = [];
+  segs.forEach((o, k) => {
+    const line = k === i ? null : lineThrough([o.ax, o.ay], [o.bx, o.by]);
+    if (line) lines.push(line);
+  });
+  return crossingsAlong(segs[i], lines);
 }

@@ -4,23 +4,44 @@ import type { OracleScene, Part } from './circleOracle';
 // the first part hit from p changes where p lines up two fixed points (corners, arc
 // ends), a fixed point with a tangent of a circle, or a tangent common to two circles.
 // Cutting the quadrature there leaves only smooth pieces, so no kink can hide between
-// the nodes of one interval and fool its error estimate. Test code only.
+// the nodes of one interval and fool its error estimate. Test code only, shared by both
+// references (../oracle.ts too); the core's own tangents (src/core/arc/tangents.ts) are
+// not used, since a reference shares no code with what it checks.
 
 /** A line n . x + c = 0 (n a unit normal). */
-type Line = [nx: number, ny: number, c: number];
+export type Line = [nx: number, ny: number, c: number];
+
+/** A segment a -> b (sketch units). */
+type Segment = { ax: number; ay: number; bx: number; by: number };
 
 /** Parameters u in (0, 1) along segment `emitter` where it crosses an event line of the scene, ascending. */
 export function segmentEventCuts(scene: OracleScene, emitter: Extract<Part, { kind: 'segment' }>): number[] {
+  return crossingsAlong(emitter, eventLines(scene, null));
+}
+
+/** Parameters u in (0, 1) along segment `emitter` where it crosses one of `lines`, ascending, each once. */
+export function crossingsAlong(emitter: Segment, lines: Line[]): number[] {
   const cuts = new Set<number>();
   const ex = emitter.bx - emitter.ax,
     ey = emitter.by - emitter.ay;
-  for (const [nx, ny, c] of eventLines(scene, null)) {
+  for (const [nx, ny, c] of lines) {
     const den = nx * ex + ny * ey;
     if (den === 0) continue;
     const u = -(nx * emitter.ax + ny * emitter.ay + c) / den;
     if (u > 1e-12 && u < 1 - 1e-12) cuts.add(u);
   }
   return [...cuts].sort((p, q) => p - q);
+}
+
+/** The lines through every two distinct points of `points`. */
+export function linesThroughPairs(points: [number, number][]): Line[] {
+  const lines: Line[] = [];
+  for (let a = 0; a < points.length; a++)
+    for (let b = a + 1; b < points.length; b++) {
+      const line = lineThrough(points[a], points[b]);
+      if (line) lines.push(line);
+    }
+  return lines;
 }
 
 /**
@@ -88,19 +109,15 @@ function fixedPoints(scene: OracleScene): [number, number][] {
 function eventLines(scene: OracleScene, skip: OracleScene['circles'][number] | null): Line[] {
   const points = fixedPoints(scene);
   const circles = scene.circles.filter((c) => c !== skip);
-  const lines: Line[] = [];
-  for (let a = 0; a < points.length; a++)
-    for (let b = a + 1; b < points.length; b++) {
-      const line = lineThrough(points[a], points[b]);
-      if (line) lines.push(line);
-    }
+  const lines = linesThroughPairs(points);
   for (const c of circles) for (const p of points) lines.push(...tangentsFrom(p, c));
   for (let a = 0; a < circles.length; a++)
     for (let b = a + 1; b < circles.length; b++) lines.push(...commonTangents(circles[a], circles[b]));
   return lines;
 }
 
-function lineThrough(p: [number, number], q: [number, number]): Line | null {
+/** The line through p and q (null when they coincide to 1e-12). */
+export function lineThrough(p: [number, number], q: [number, number]): Line | null {
   const dx = q[0] - p[0],
     dy = q[1] - p[1];
   const len = Math.hypot(dx, dy);
