@@ -19,15 +19,22 @@ export function segmentEventCuts(scene: OracleScene, emitter: Extract<Part, { ki
   return crossingsAlong(emitter, eventLines(scene, null));
 }
 
-/** Parameters u in (0, 1) along segment `emitter` where it crosses one of `lines`, ascending, each once. */
+/**
+ * Parameters u in (0, 1) along segment `emitter` where it crosses one of `lines`
+ * strictly (its ends on opposite sides), ascending, each once. A line through an end
+ * of the emitter (to rounding: 1e-13 of the terms of its distance) is no cut: a cut a
+ * hair from a shared corner, where the kernel is singular, cost the quadrature 1e-12.
+ */
 export function crossingsAlong(emitter: Segment, lines: Line[]): number[] {
   const cuts = new Set<number>();
-  const ex = emitter.bx - emitter.ax,
-    ey = emitter.by - emitter.ay;
+  const { ax, ay, bx, by } = emitter;
   for (const [nx, ny, c] of lines) {
-    const den = nx * ex + ny * ey;
-    if (den === 0) continue;
-    const u = -(nx * emitter.ax + ny * emitter.ay + c) / den;
+    const d0 = nx * ax + ny * ay + c,
+      d1 = nx * bx + ny * by + c;
+    const t0 = 1e-13 * (Math.abs(nx * ax) + Math.abs(ny * ay) + Math.abs(c)),
+      t1 = 1e-13 * (Math.abs(nx * bx) + Math.abs(ny * by) + Math.abs(c));
+    if (!((d0 < -t0 && d1 > t1) || (d0 > t0 && d1 < -t1))) continue;
+    const u = d0 / (d0 - d1);
     if (u > 1e-12 && u < 1 - 1e-12) cuts.add(u);
   }
   return [...cuts].sort((p, q) => p - q);
