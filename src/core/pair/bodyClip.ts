@@ -131,7 +131,7 @@ export class BodyClipper {
 
   /** Clip edge `edge` to H exactly; keep the piece if it passes through H's interior. */
   clipEdge(edge: number): void {
-    if (edge === this.pairI || edge === this.pairJ) return;
+    if (edge === this.pairI || edge === this.pairJ || this.surelyBackToEmitter(edge)) return;
     if (this.region.clipEdge(this.e, edge, this.clipOut)) this.pieces.keepClipped(edge, this.e, this.clipOut);
   }
 
@@ -183,11 +183,13 @@ export class BodyClipper {
    * Place body b against H by its bounding circle: OUTSIDE when the circle lies wholly
    * outside a side (or the body cannot block: see below), else the sides that cut the
    * circle go to `crossing` (none: the body lies wholly inside H). A straddling body
-   * whose inner disc cuts the view blocks the pair (blocked, blocker).
+   * whose inner disc, or whose corners (polygonCutsView), cut the view blocks the pair
+   * (blocked, blocker). Both tests run here as well as on hinted bodies first, so a
+   * pair ends the same way whichever obstacles were remembered.
    */
   private placeBody(b: number): number {
     const place = this.placeCircle(b);
-    if (place === STRADDLING && this.cutsView(b)) {
+    if (place === STRADDLING && (this.cutsView(b) || this.polygonCutsView(b))) {
       this.blocked = true;
       this.blocker = b;
     }
@@ -327,8 +329,36 @@ export class BodyClipper {
     }
     if (e === this.pairI || e === this.pairJ) return;
     const E = this.e;
+    if (this.surelyBackToEmitter(e)) return;
     if (doubtful === 0) this.pieces.keepWhole(e, E);
     else if (this.region.clipExact(E, e, doubtful, this.clipOut)) this.pieces.keepClipped(e, E, this.clipOut);
+  }
+
+  /**
+   * Does edge e surely face away from all of i' (both its ends a0, a1 beyond a float
+   * margin behind e's line)? A blocked sight line from p on i' first meets an edge whose
+   * front faces p, and an edge faces a point of i' only if it faces a0 or a1 (its front
+   * half-plane meets the segment in a part holding an end). So such an edge blocks
+   * nothing the others do not: it is left out. In doubt it stays (time, not accuracy).
+   */
+  private surelyBackToEmitter(e: number): boolean {
+    const E = this.e,
+      R = this.region;
+    const x0 = E.ax[e],
+      y0 = E.ay[e],
+      dx = E.bx[e] - x0,
+      dy = E.by[e] - y0;
+    const a0x = R.sx[0],
+      a0y = R.sy[0],
+      a1x = R.ex[0],
+      a1y = R.ey[0];
+    const f0 = dx * (a0y - y0) - dy * (a0x - x0),
+      f1 = dx * (a1y - y0) - dy * (a1x - x0);
+    const tol =
+      1e-12 *
+      (Math.abs(dx) + Math.abs(dy)) *
+      (Math.abs(a0x - x0) + Math.abs(a0y - y0) + Math.abs(a1x - x0) + Math.abs(a1y - y0));
+    return f0 < -tol && f1 < -tol;
   }
 
   private growDeferred(): void {

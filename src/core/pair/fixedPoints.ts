@@ -86,14 +86,16 @@ export class FixedPoints {
   private walkChain(pieces: ObstaclePieces, first: number, open: boolean): void {
     const E = this.e;
     this.setChainStart(this.chainCount++, this.count);
-    if (open) this.pushFrom(pieces.px, pieces.py, first, first, 1);
+    // An open chain's end lies on H's boundary, unless the edge beyond it was left out
+    // (facing away from i'): then it is a corner inside H, a point like any other.
+    if (open) this.pushFrom(pieces.px, pieces.py, first, first, pieces.startInside[first] ? 0 : 1);
     let s = first;
     for (;;) {
       pieces.walked[s] = 1;
       const edge = pieces.edge[s];
       const next = E.nextEdge[edge];
       if (!pieces.endInside[s] || !pieces.has(next)) {
-        this.pushFrom(pieces.qx, pieces.qy, s, s, 1);
+        this.pushFrom(pieces.qx, pieces.qy, s, s, pieces.endInside[s] ? 0 : 1);
         return;
       }
       // Corner b of `edge` lies inside H, and the next edge was kept too.

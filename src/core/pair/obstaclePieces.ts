@@ -20,7 +20,7 @@ export class ObstaclePieces {
   /** 1 when the piece's start / end is a corner strictly inside H (the chain goes on there). */
   startInside = new Uint8Array(64);
   endInside = new Uint8Array(64);
-  /** Side of H (1 or 3: the strings; 0, 2: i', j') whose open interior the start / end lies on; -1 if none known. */
+  /** Side of H (1 or 3: the strings; 0, 2: i', j') the start / end lies on (SegmentClip.startSide); -1 if none known. */
   startSide = new Int8Array(64);
   endSide = new Int8Array(64);
   /** Piece indices sorted by edge id (after sortByEdge). */
@@ -179,9 +179,10 @@ export class ObstaclePieces {
   }
 
   /**
-   * A chain of pieces that runs from the open interior of one side string to that of
-   * the other: it cuts H in two, i' on one side and j' on the other, so every sight
-   * line crosses it and the pair exchanges nothing. Exact: the sides come from exact
+   * A chain of pieces that runs from one side string to the other (their open
+   * interiors, or an end where the piece cannot cross i' or j': see STRING_PAST in
+   * viewRegion.ts): it cuts H in two, i' on one side and j' on the other, so every
+   * sight line crosses it and the pair exchanges nothing. Exact: the sides come from exact
    * signs, and chains join at corners strictly inside H. Returns the chain's first
    * piece, or -1 when there is none. `nextEdge`: EdgeSet.nextEdge; only chains that
    * start at piece `from` or later are tried.

@@ -17,6 +17,18 @@ export const UNSURE = 0;
 export const SURELY_INSIDE = 1;
 
 /** Sides in the order that rejects most obstacles first: the side strings bound H most tightly. */
+/**
+ * For a corner outside (or on) exactly two sides of H, by the bit mask of those sides:
+ * the string (1 or 3) its piece leaves H through when the other side is i' or j'
+ * (0 or 2), else -1. In a valid sketch no edge crosses or touches i or j away from
+ * their own polygon's shared corners, so such a piece leaves through the closed string,
+ * maybe at one of its ends; a chain between the closed strings still cuts H in two
+ * (ObstaclePieces.blockingChain). Opposite sides (strings 1 and 3, or 0 and 2): -1.
+ */
+const STRING_PAST = Int8Array.from({ length: 16 }, (_, mask) =>
+  mask === 0b0011 || mask === 0b0110 ? 1 : mask === 0b1001 || mask === 0b1100 ? 3 : -1,
+);
+
 export const SIDE_ORDER: readonly number[] = [1, 3, 0, 2];
 
 /** Result of clipping a segment to H (reused, never allocated per call). */
@@ -29,7 +41,9 @@ export interface SegmentClip {
   endInside: boolean;
   /**
    * The side whose open interior the kept piece's start / end lies on, when the
-   * segment's start / end lies strictly inside every other side (exact signs); else -1.
+   * segment's start / end lies strictly inside every other side (exact signs); the
+   * string it leaves through (closed, see STRING_PAST) when the corner lies past that
+   * string and past i's or j's line; else -1.
    */
   startSide: number;
   endSide: number;
@@ -164,7 +178,9 @@ export class ViewRegion {
     let pOut = 0,
       qOut = 0,
       pSide = -1,
-      qSide = -1;
+      qSide = -1,
+      pMask = 0,
+      qMask = 0;
     for (let k = 0; k < 4; k++) {
       if (!(doubtful & (1 << k))) continue;
       const x0 = this.sx[k],
@@ -185,11 +201,13 @@ export class ViewRegion {
         pIn = false;
         pOut++;
         pSide = k;
+        pMask |= 1 << k;
       }
       if (dQ <= 0) {
         qIn = false;
         qOut++;
         qSide = k;
+        qMask |= 1 << k;
       }
       if (dP < 0) t0 = Math.max(t0, dP / (dP - dQ));
       else if (dQ < 0) t1 = Math.min(t1, dP / (dP - dQ));
@@ -205,8 +223,9 @@ export class ViewRegion {
     out.endInside = qIn;
     // Outside (or on) one side only: the piece meets that side strictly between its
     // corners, since the other sides hold p (q) strictly and the segment strictly.
-    out.startSide = pOut === 1 ? pSide : -1;
-    out.endSide = qOut === 1 ? qSide : -1;
+    // Outside a string and i's or j's line: see STRING_PAST.
+    out.startSide = pOut === 1 ? pSide : pOut === 2 ? STRING_PAST[pMask] : -1;
+    out.endSide = qOut === 1 ? qSide : qOut === 2 ? STRING_PAST[qMask] : -1;
     return true;
   }
 }
