@@ -131,7 +131,7 @@ export class BodyClipper {
 
   /** Clip edge `edge` to H exactly; keep the piece if it passes through H's interior. */
   clipEdge(edge: number): void {
-    if (edge === this.pairI || edge === this.pairJ || this.surelyBackToEmitter(edge)) return;
+    if (edge === this.pairI || edge === this.pairJ || this.region.facesAwayFromEmitter(this.e, edge)) return;
     if (this.region.clipEdge(this.e, edge, this.clipOut)) this.pieces.keepClipped(edge, this.e, this.clipOut);
   }
 
@@ -286,17 +286,22 @@ export class BodyClipper {
     const first = ob.bodyFirstEdge[b];
     // Consecutive edges of the walk share a corner: each corner is classified once per
     // window, its places kept in the slot (0 or 4) the next edge reads as its start.
+    // An edge facing away from i' is left out before its corners are classified.
     for (let q = 0; q < ranges.count; q++) {
-      let a = 0;
-      const lo = ranges.lo[q];
-      const e0 = ob.walkEdge[first + lo];
-      this.classifyCorner(E.ax[e0], E.ay[e0], a);
-      for (let m = lo; m <= ranges.hi[q]; m++) {
+      let a = 0,
+        startKnown = false;
+      for (let m = ranges.lo[q]; m <= ranges.hi[q]; m++) {
         const e = ob.walkEdge[first + m];
+        if (this.region.facesAwayFromEmitter(this.e, e)) {
+          startKnown = false;
+          continue;
+        }
+        if (!startKnown) this.classifyCorner(E.ax[e], E.ay[e], a);
         const b = 4 - a;
         this.classifyCorner(E.bx[e], E.by[e], b);
-        this.settleEdge(e, a, b);
+        this.settleFacingEdge(e, a, b);
         a = b;
+        startKnown = true;
       }
     }
   }
@@ -317,48 +322,42 @@ export class BodyClipper {
    * tested exactly.
    */
   private settleEdge(e: number, a: number, b: number): void {
-    const P = this.places,
-      count = this.crossCount,
-      crossing = this.crossing;
-    let doubtful = 0; // sides to test exactly; none: keep the edge whole
-    for (let c = 0; c < count; c++) {
-      const pa = P[a + c],
-        pb = P[b + c];
-      if (pa === SURELY_OUTSIDE && pb === SURELY_OUTSIDE) return; // drop the edge
-      if (pa !== SURELY_INSIDE || pb !== SURELY_INSIDE) doubtful |= 1 << crossing[c];
-    }
-    if (e === this.pairI || e === this.pairJ) return;
-    const E = this.e;
-    if (this.surelyBackToEmitter(e)) return;
-    if (doubtful === 0) this.pieces.keepWhole(e, E);
-    else if (this.region.clipExact(E, e, doubtful, this.clipOut)) this.pieces.keepClipped(e, E, this.clipOut);
+    const doubtful = this.doubtfulSides(a, b);
+    if (doubtful < 0 || e === this.pairI || e === this.pairJ || this.region.facesAwayFromEmitter(this.e, e)) return;
+    this.keepEdge(e, doubtful);
+  }
+
+  /** settleEdge for an edge known not to face away from i' (clipConvexBody tested it first). */
+  private settleFacingEdge(e: number, a: number, b: number): void {
+    const doubtful = this.doubtfulSides(a, b);
+    if (doubtful < 0 || e === this.pairI || e === this.pairJ) return;
+    this.keepEdge(e, doubtful);
   }
 
   /**
-   * Does edge e surely face away from all of i' (both its ends a0, a1 beyond a float
-   * margin behind e's line)? A blocked sight line from p on i' first meets an edge whose
-   * front faces p, and an edge faces a point of i' only if it faces a0 or a1 (its front
-   * half-plane meets the segment in a part holding an end). So such an edge blocks
-   * nothing the others do not: it is left out. In doubt it stays (time, not accuracy).
+   * From an edge's corner places at offsets a and b: -1 when both lie surely outside one
+   * crossing side (drop the edge), else the bit mask of the crossing sides that do not
+   * hold both surely inside (to test exactly; 0: keep the edge whole).
    */
-  private surelyBackToEmitter(e: number): boolean {
-    const E = this.e,
-      R = this.region;
-    const x0 = E.ax[e],
-      y0 = E.ay[e],
-      dx = E.bx[e] - x0,
-      dy = E.by[e] - y0;
-    const a0x = R.sx[0],
-      a0y = R.sy[0],
-      a1x = R.ex[0],
-      a1y = R.ey[0];
-    const f0 = dx * (a0y - y0) - dy * (a0x - x0),
-      f1 = dx * (a1y - y0) - dy * (a1x - x0);
-    const tol =
-      1e-12 *
-      (Math.abs(dx) + Math.abs(dy)) *
-      (Math.abs(a0x - x0) + Math.abs(a0y - y0) + Math.abs(a1x - x0) + Math.abs(a1y - y0));
-    return f0 < -tol && f1 < -tol;
+  private doubtfulSides(a: number, b: number): number {
+    const P = this.places,
+      count = this.crossCount,
+      crossing = this.crossing;
+    let doubtful = 0;
+    for (let c = 0; c < count; c++) {
+      const pa = P[a + c],
+        pb = P[b + c];
+      if (pa === SURELY_OUTSIDE && pb === SURELY_OUTSIDE) return -1;
+      if (pa !== SURELY_INSIDE || pb !== SURELY_INSIDE) doubtful |= 1 << crossing[c];
+    }
+    return doubtful;
+  }
+
+  /** Keep edge e whole (no doubtful side), or its exact clip against the doubtful sides. */
+  private keepEdge(e: number, doubtful: number): void {
+    const E = this.e;
+    if (doubtful === 0) this.pieces.keepWhole(e, E);
+    else if (this.region.clipExact(E, e, doubtful, this.clipOut)) this.pieces.keepClipped(e, E, this.clipOut);
   }
 
   private growDeferred(): void {

@@ -1,5 +1,5 @@
 // Edges that face away from the whole emitting edge i' are left out of a pair's
-// obstacles (BodyClipper.surelyBackToEmitter): a blocked sight line from p on i' first
+// obstacles (ViewRegion.facesAwayFromEmitter): a blocked sight line from p on i' first
 // meets an edge whose front faces p, and such an edge faces a0 or a1. Checked against
 // an independent exact test (robust-predicates' orient2d, no code of src/core):
 // - every kept piece faces a0 or a1 (up to a doubt margin), so the rule is applied;
