@@ -6,8 +6,8 @@ import type { FixedPoints } from './fixedPoints';
 const sortOrderByKey = sortOrderByKeyIn;
 
 // Which part of the target j' a piece of the emitting edge sees. Directions from a
-// point p are keyed by sin b (b from i's normal; the component of the unit direction
-// along i, increasing towards a1). From p in the middle of a piece, j' covers the key
+// point p are keyed by a pseudo-angle that rises with b (b from i's normal, increasing
+// towards a1; see directionKey). From p in the middle of a piece, j' covers the key
 // range [key(b1), key(b0)] and each chain covers [min, max] of its points' keys; the
 // gaps of j's range left uncovered by the chains are what p sees. Inside one piece the
 // same fixed points bound the same gaps, so the gaps found at the middle hold all along.
@@ -165,7 +165,15 @@ export class VisibleGaps {
   }
 }
 
-/** sin b of direction (vx, vy) (sketch units) against i's unit direction (tx, ty): the gap sweep's key. */
+/**
+ * The gap sweep's key of direction (vx, vy) (sketch units) against i's unit direction
+ * (tx, ty): u / (|u| + |w|), u and w its components along i and along i's front
+ * normal. It rises with b from -1 (along -t) to 1 (along t) like sin b, with no square
+ * root, and it keeps its resolution near grazing, where sin b flattens out. Directions
+ * behind i's line (only rounding puts a fixed point there) mirror to the front.
+ */
 function directionKey(vx: number, vy: number, tx: number, ty: number): number {
-  return (vx * tx + vy * ty) / Math.sqrt(vx * vx + vy * vy);
+  const u = vx * tx + vy * ty,
+    w = vy * tx - vx * ty;
+  return u / (Math.abs(u) + Math.abs(w));
 }
