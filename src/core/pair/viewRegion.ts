@@ -16,7 +16,6 @@ export const SURELY_OUTSIDE = -1;
 export const UNSURE = 0;
 export const SURELY_INSIDE = 1;
 
-/** Sides in the order that rejects most obstacles first: the side strings bound H most tightly. */
 /**
  * For a corner outside (or on) exactly two sides of H, by the bit mask of those sides:
  * the string (1 or 3) its piece leaves H through when the other side is i' or j'
@@ -29,6 +28,7 @@ const STRING_PAST = Int8Array.from({ length: 16 }, (_, mask) =>
   mask === 0b0011 || mask === 0b0110 ? 1 : mask === 0b1001 || mask === 0b1100 ? 3 : -1,
 );
 
+/** Sides in the order that rejects most obstacles first: the side strings bound H most tightly. */
 export const SIDE_ORDER: readonly number[] = [1, 3, 0, 2];
 
 /** Result of clipping a segment to H (reused, never allocated per call). */
