@@ -155,3 +155,44 @@ export function coneMeetsTarget(tg: Curve, ray: Float64Array, half: number): boo
     (toDir - turn >= lo && toDir - turn <= hi)
   );
 }
+
+/**
+ * Does every point of curve `b` lie surely behind every point of curve `a` (behind the
+ * line of a segment; behind the tangent at every point of a solid circle's arc)? Then
+ * no sight line leaves a's front towards b, and the pair exchanges nothing. b is
+ * bounded by its outer polygon (outerPoints, which holds the curve), and for an arc
+ * the reach in front of its tangents, max over its angles of (y - c) . u, is convex in
+ * y, so the polygon's corners decide. Float tests with margins that say no in doubt;
+ * an enclosure circle's arcs face inwards and always say no. `scratch` is reused.
+ */
+export function surelyBehind(a: Curve, b: Curve, scratch: number[]): boolean {
+  // An enclosure circle's arc faces inwards; a whole solid circle faces every way.
+  if (a.isArc && (!a.solid || a.span >= 2 * Math.PI)) return false;
+  // A whole circle: its centre, reach r further (one test, no outer polygon).
+  if (b.isArc && b.span >= 2 * Math.PI) return pointBehind(a, b.cx, b.cy, b.r);
+  scratch.length = 0;
+  b.outerPoints(scratch);
+  for (let k = 0; k < scratch.length; k += 2) if (!pointBehind(a, scratch[k], scratch[k + 1], 0)) return false;
+  return true;
+}
+
+/** Is every point within `reach` of (x, y) surely behind curve a (a segment, or a solid arc short of a whole circle)? */
+function pointBehind(a: Curve, x: number, y: number, reach: number): boolean {
+  if (!a.isArc) {
+    const dx = a.bx - a.ax,
+      dy = a.by - a.ay;
+    const len = Math.sqrt(dx * dx + dy * dy);
+    // Signed distance of (x, y) in front of a's line, less a margin far above rounding.
+    const f = (dx * (y - a.ay) - dy * (x - a.ax)) / len;
+    return f + reach * (1 + 1e-9) < -1e-12 * (Math.abs(x - a.ax) + Math.abs(y - a.ay) + len);
+  }
+  const fx = x - a.cx,
+    fy = y - a.cy;
+  const d = Math.sqrt(fx * fx + fy * fy);
+  // Angular distance from the point's direction to the arc's range of angles.
+  const off = angleOffset(Math.atan2(fy, fx), a.start);
+  if (off <= a.span) return false;
+  const apart = Math.min(off - a.span, 2 * Math.PI - off);
+  const ahead = apart >= Math.PI / 2 ? 0 : d * Math.cos(apart); // max over the arc of (y - c) . u
+  return ahead + reach * (1 + 1e-9) < a.r * (1 - 1e-9) - 1e-12 * d;
+}

@@ -1,7 +1,7 @@
 import { extentWithCircles, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
-import { Curve, towardTarget as towardTargetIn } from './curve';
+import { Curve, surelyBehind, towardTarget as towardTargetIn } from './curve';
 import { DiscShadow } from './discShadow';
 import { HiddenCircles } from './hiddenCircles';
 import { convexHull as convexHullIn, discMeetsHull as discMeetsHullIn, PairScene } from './pairScene';
@@ -56,6 +56,8 @@ export class CurvedPairIntegrator implements EventFilter {
   private readonly ray = new Float64Array(4);
   private readonly shadow: DiscShadow;
   private readonly hidden = new HiddenCircles();
+  /** Scratch for surelyBehind: a curve's outer polygon. */
+  private readonly outline: number[] = [];
 
   constructor(
     private readonly E: EdgeSet,
@@ -114,6 +116,8 @@ export class CurvedPairIntegrator implements EventFilter {
     // Two arcs of one solid circle face away from each other.
     if (em.isArc && tg.isArc && em.circle === tg.circle && em.solid) return 0;
     if (this.surelyApart()) return 0;
+    // Arcs that face away from each other (the far sides of two tubes, say).
+    if (surelyBehind(em, tg, this.outline) || surelyBehind(tg, em, this.outline)) return 0;
     this.scene.collect(em, i, tg, j);
     if (this.oneCircleHides()) return 0;
     this.hidden.drop(this.scene, this.E.arcs, em, tg, this.shadow);
