@@ -1,4 +1,4 @@
-import { extentWithCircles, type EdgeSet } from '../edges';
+import { extentWithCircles, totalEdgeCount, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
 import { Curve, surelyBehind, towardTarget as towardTargetIn } from './curve';
@@ -58,6 +58,13 @@ export class CurvedPairIntegrator implements EventFilter {
   private readonly hidden = new HiddenCircles();
   /** Scratch for surelyBehind: a curve's outer polygon. */
   private readonly outline: number[] = [];
+  /**
+   * Per edge, the solid circle that last hid a pair of it (-1: none), tried before the
+   * pair's blockers are gathered. Only a hint: a circle that hides the target from the
+   * emitter lies across every sight line, so the gathered circles hold it and
+   * hidingCircle finds the pair 0 too; no result depends on what came before.
+   */
+  private readonly hider: Int32Array;
 
   constructor(
     private readonly E: EdgeSet,
@@ -67,6 +74,7 @@ export class CurvedPairIntegrator implements EventFilter {
     this.breaks.filter = this;
     this.view = new PieceView(E.arcs);
     this.shadow = new DiscShadow(SHADOW_MARGIN * extentWithCircles(E));
+    this.hider = new Int32Array(totalEdgeCount(E)).fill(-1);
   }
 
   /**
@@ -118,22 +126,35 @@ export class CurvedPairIntegrator implements EventFilter {
     if (this.surelyApart()) return 0;
     // Arcs that face away from each other (the far sides of two tubes, say).
     if (surelyBehind(em, tg, this.outline) || surelyBehind(tg, em, this.outline)) return 0;
+    if (this.hintHides(this.hider[i]) || this.hintHides(this.hider[j])) return 0;
     this.scene.collect(em, i, tg, j);
-    if (this.oneCircleHides()) return 0;
+    const h = this.hidingCircle();
+    if (h >= 0) {
+      this.hider[i] = h;
+      this.hider[j] = h;
+      return 0;
+    }
     this.hidden.drop(this.scene, this.E.arcs, em, tg, this.shadow);
     this.findBreaks();
     return this.integrate();
   }
 
-  /** Does one blocking circle hide the whole target from the whole emitter (discShadow.ts)? */
-  private oneCircleHides(): boolean {
+  /** A blocking circle that hides the whole target from the whole emitter (discShadow.ts), or -1. */
+  private hidingCircle(): number {
     const A = this.E.arcs,
       circles = this.scene.circles;
     for (let k = 0; k < circles.length; k++) {
       const c = circles[k];
-      if (this.shadow.hides(this.em, this.tg, A.cx[c], A.cy[c], A.r[c])) return true;
+      if (this.shadow.hides(this.em, this.tg, A.cx[c], A.cy[c], A.r[c])) return c;
     }
-    return false;
+    return -1;
+  }
+
+  /** Does solid circle c (a hint; -1: none) hide the target from the emitter, as hidingCircle would test it? */
+  private hintHides(c: number): boolean {
+    const A = this.E.arcs;
+    if (c < 0 || c === this.em.circle || c === this.tg.circle || A.circleIsEnclosure[c]) return false;
+    return this.shadow.hides(this.em, this.tg, A.cx[c], A.cy[c], A.r[c]);
   }
 
   /** Exact tests that the target lies wholly behind a straight emitter or the reverse. */
