@@ -184,8 +184,8 @@ export class BodyClipper {
    * outside a side (or the body cannot block: see below), else the sides that cut the
    * circle go to `crossing` (none: the body lies wholly inside H). A straddling body
    * whose inner disc, or whose corners (polygonCutsView), cut the view blocks the pair
-   * (blocked, blocker). Both tests run here as well as on hinted bodies first, so a
-   * pair ends the same way whichever obstacles were remembered.
+   * (blocked, blocker). Remembered bodies (probed) and listed ones alike come here, so
+   * a pair ends the same way whichever obstacles were remembered.
    */
   private placeBody(b: number): number {
     const place = this.placeCircle(b);
@@ -274,7 +274,7 @@ export class BodyClipper {
         P[at] = d > tol ? SURELY_INSIDE : d < -tol ? SURELY_OUTSIDE : UNSURE;
       }
     }
-    for (let e = first; e < end; e++) this.settleEdge(e, 4 * (e - first), 4 * (E.nextEdge[e] - first));
+    for (let e = first; e < end; e++) this.settleEdge(e, 4 * (e - first), 4 * (E.nextEdge[e] - first), false);
   }
 
   /** Clip a convex body that straddles H's boundary, looking only at edges its angular windows admit. */
@@ -299,7 +299,7 @@ export class BodyClipper {
         if (!startKnown) this.classifyCorner(E.ax[e], E.ay[e], a);
         const b = 4 - a;
         this.classifyCorner(E.bx[e], E.by[e], b);
-        this.settleFacingEdge(e, a, b);
+        this.settleEdge(e, a, b, true); // its facing was tested above
         a = b;
         startKnown = true;
       }
@@ -319,18 +319,13 @@ export class BodyClipper {
    * Drop, keep whole, or clip edge e, from its corners' places at offsets a and b.
    * Sides that miss the body's circle hold it wholly inside: only crossing sides can
    * drop or cut an edge, and only those not holding both corners surely inside are
-   * tested exactly.
+   * tested exactly. An edge facing away from i' is dropped too, unless the caller has
+   * tested that already (`facingKnown`).
    */
-  private settleEdge(e: number, a: number, b: number): void {
-    const doubtful = this.doubtfulSides(a, b);
-    if (doubtful < 0 || e === this.pairI || e === this.pairJ || this.region.facesAwayFromEmitter(this.e, e)) return;
-    this.keepEdge(e, doubtful);
-  }
-
-  /** settleEdge for an edge known not to face away from i' (clipConvexBody tested it first). */
-  private settleFacingEdge(e: number, a: number, b: number): void {
+  private settleEdge(e: number, a: number, b: number, facingKnown: boolean): void {
     const doubtful = this.doubtfulSides(a, b);
     if (doubtful < 0 || e === this.pairI || e === this.pairJ) return;
+    if (!facingKnown && this.region.facesAwayFromEmitter(this.e, e)) return;
     this.keepEdge(e, doubtful);
   }
 

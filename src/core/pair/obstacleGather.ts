@@ -139,9 +139,6 @@ export class ObstacleGatherer {
     // Lists made already with every body surely outside H: nothing can block (the
     // pieces stay empty), no hint need be probed.
     if (this.listedOutside(i, j)) return false;
-    // Hinted bodies whose corners (or clean hull) cross both side strings block it too
-    // (a long, thin body whose inner disc falls short of them), before anything is clipped.
-    if (this.crossBlocks(i, j, hi) || (hj !== hi && this.crossBlocks(i, j, hj))) return true;
     // Probed obstacles keep their pieces; the searches below skip them.
     if (this.probe(hi, 0) || (hj !== hi && this.probe(hj, 1))) return true;
     if (hi2 !== hi && hi2 !== hj && this.probe(hi2, 2)) return true;
@@ -225,13 +222,6 @@ export class ObstacleGatherer {
   /** Does hinted body h (when it is a body) block the pair by its disc alone? Then remember it. */
   private discBlocks(i: number, j: number, h: number): boolean {
     if (h < 0 || !this.clip.cutsView(h)) return false;
-    this.remember(i, j, h);
-    return true;
-  }
-
-  /** Does hinted body h (when it is a body) cross both side strings? Then remember it. */
-  private crossBlocks(i: number, j: number, h: number): boolean {
-    if (h < 0 || !this.clip.polygonCutsView(h)) return false;
     this.remember(i, j, h);
     return true;
   }
