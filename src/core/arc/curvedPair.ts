@@ -1,11 +1,12 @@
 import { extentWithCircles, totalEdgeCount, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
-import { Curve, surelyBehind, towardTarget as towardTargetIn } from './curve';
+import { Curve, surelyBehind } from './curve';
 import { DiscShadow } from './discShadow';
 import { HiddenCircles } from './hiddenCircles';
 import { convexHull as convexHullIn, discMeetsHull as discMeetsHullIn, PairScene } from './pairScene';
 import { PieceView } from './pieceView';
+import { TargetCone } from './targetCone';
 import {
   commonTangents as commonTangentsIn,
   CurveBreaks,
@@ -17,7 +18,6 @@ import {
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call (as in src/core/pair).
 const orient = orientIn;
-const towardTarget = towardTargetIn;
 const convexHull = convexHullIn;
 const discMeetsHull = discMeetsHullIn;
 const commonTangents = commonTangentsIn;
@@ -52,8 +52,8 @@ export class CurvedPairIntegrator implements EventFilter {
   private readonly view: PieceView;
   private readonly lines = new Float64Array(12);
   private readonly touch = new Float64Array(2);
-  /** A ray from an event point (x, y, then direction), for the target's cone test. */
-  private readonly ray = new Float64Array(4);
+  /** The target's cone from an event point. */
+  private readonly cone = new TargetCone();
   private readonly shadow: DiscShadow;
   private readonly hidden = new HiddenCircles();
   /** Scratch for surelyBehind: a curve's outer polygon. */
@@ -282,12 +282,8 @@ export class CurvedPairIntegrator implements EventFilter {
     if (!(Math.min(d1, d2) > 0)) return true;
     const ux = (far ? u1x : u2x) / t,
       uy = (far ? u1y : u2y) / t;
-    const ray = this.ray;
-    ray[0] = px;
-    ray[1] = py;
-    ray[2] = ux;
-    ray[3] = uy;
-    if (!towardTarget(this.tg, ray)) return false;
+    this.cone.from(this.tg, px, py);
+    if (!this.cone.toward(ux, uy)) return false;
     const circles = this.scene.circles;
     for (let q = 0; q < circles.length; q++) if (this.hides(circles[q], px, py, ux, uy, t)) return false;
     if (this.tg.isArc && this.tg.solid && this.hides(this.tg.circle, px, py, ux, uy, t)) return false;

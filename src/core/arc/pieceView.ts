@@ -2,16 +2,15 @@ import { distanceChange as distanceChangeIn } from '../pairGeometry';
 import { orient as orientIn } from '../orient';
 import { growInt, sortIndexByKey as sortIndexByKeyIn } from '../scratch';
 import type { ArcSet } from './arcs';
-import { coneMeetsTarget as coneMeetsTargetIn, towardTarget as towardTargetIn, type Curve } from './curve';
+import type { Curve } from './curve';
 import type { PairScene } from './pairScene';
+import { TargetCone } from './targetCone';
 
 // Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call (as in src/core/pair).
 const distanceChange = distanceChangeIn;
 const orient = orientIn;
-const coneMeetsTarget = coneMeetsTargetIn;
-const towardTarget = towardTargetIn;
 const sortIndexByKey = sortIndexByKeyIn;
 
 // The visible runs of the target from the middle of one emitter piece, and their
@@ -40,6 +39,8 @@ export class PieceView {
   /** Blocking circles whose cone from the piece's middle meets the target's (nearCount of them). */
   private near = new Int32Array(16);
   private nearCount = 0;
+  /** The target's cone from the piece's middle. */
+  private readonly cone = new TargetCone();
 
   constructor(private readonly A: ArcSet) {}
 
@@ -57,7 +58,6 @@ export class PieceView {
    * call the engine does not inline are boxed on the heap.
    */
   readonly query = new Float64Array(11);
-  private readonly ray = new Float64Array(4);
 
   /**
    * The integral over the emitter piece pa -> pb (see `query`) of 1/2 (sin b_hi -
@@ -76,13 +76,15 @@ export class PieceView {
     this.targetFront = tg.isArc || orient(tg.ax, tg.ay, tg.bx, tg.by, pmx, pmy) > 0;
     if (!this.targetFront) return 0;
     this.m = 0;
+    const cone = this.cone;
+    cone.from(tg, pmx, pmy);
     const P = this.scene.pts,
       nP = P.length >> 1;
     for (let k = 0; k < nP; k++) {
       const ux = P[2 * k] - pmx,
         uy = P[2 * k + 1] - pmy;
       const c = ux * nx + uy * ny;
-      if (c > 0 && towardTarget(tg, this.aim(pmx, pmy, ux, uy))) this.push(Math.atan2(ux * tx + uy * ty, c), k);
+      if (c > 0 && cone.toward(ux, uy)) this.push(Math.atan2(ux * tx + uy * ty, c), k);
     }
     const T = this.tanCircles;
     this.nearCount = 0;
@@ -99,7 +101,7 @@ export class PieceView {
         continue;
       }
       if (k !== tg.circle) {
-        if (!coneMeetsTarget(tg, this.aim(pmx, pmy, -fx, -fy), Math.asin(r / d))) continue;
+        if (!cone.meets(-fx, -fy, Math.asin(r / d))) continue;
         this.keepNear(k);
       }
       const alpha = Math.atan2(fy, fx),
@@ -109,7 +111,7 @@ export class PieceView {
         const ux = A.cx[k] + r * Math.cos(th) - pmx,
           uy = A.cy[k] + r * Math.sin(th) - pmy;
         const c = ux * nx + uy * ny;
-        if (c > 0 && (k === tg.circle || towardTarget(tg, this.aim(pmx, pmy, ux, uy))))
+        if (c > 0 && (k === tg.circle || cone.toward(ux, uy)))
           this.push(Math.atan2(ux * tx + uy * ty, c), nP + 2 * x + s);
       }
     }
@@ -145,16 +147,6 @@ export class PieceView {
     }
     if (inRun) total += this.delta(HORIZON_HI, nP) - this.delta(runLo, nP);
     return 0.5 * total;
-  }
-
-  /** The ray from (px, py) along (ux, uy), in `ray` for the target's cone tests. */
-  private aim(px: number, py: number, ux: number, uy: number): Float64Array {
-    const r = this.ray;
-    r[0] = px;
-    r[1] = py;
-    r[2] = ux;
-    r[3] = uy;
-    return r;
   }
 
   /** Keep blocking circle k for this piece's ray casts. */
