@@ -1,9 +1,10 @@
 import { distanceChange as distanceChangeIn } from '../pairGeometry';
 import { orient as orientIn } from '../orient';
-import { growInt, sortIndexByKey as sortIndexByKeyIn } from '../scratch';
+import { sortIndexByKey as sortIndexByKeyIn } from '../scratch';
 import type { ArcSet } from './arcs';
 import type { Curve } from './curve';
 import type { PairScene } from './pairScene';
+import { DiscSweep } from './discSweep';
 import { TargetCone } from './targetCone';
 
 // Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
@@ -15,7 +16,8 @@ const sortIndexByKey = sortIndexByKeyIn;
 
 // The visible runs of the target from the middle of one emitter piece, and their
 // exact integral over the piece. Directions from p are angles b from the emitter's
-// normal n (positive towards its tangent t), in [-pi/2, pi/2]. Objects bounding a
+// normal n (positive towards its tangent t), in [-pi/2, pi/2], kept and sorted as
+// tan b = (u . t) / (u . n) (increasing with b; no trigonometry). Objects bounding a
 // run: fixed points (ids 0 .. nP-1), lines touching circle k on side +1 / -1 (ids
 // nP + 2x and nP + 2x + 1 for the x-th circle with a tangent), and the horizon
 // (HORIZON_LO at b = -pi/2, HORIZON_HI at b = +pi/2). Sketch units.
@@ -29,16 +31,15 @@ export class PieceView {
   private scene!: PairScene;
   /** Circles whose tangents are objects: the blockers, then the target's own if solid. */
   private tanCircles: number[] = [];
-  // The bounding directions of this piece: angle, object id, and their order by angle
+  // The bounding directions of this piece: tan b, object id, and their order by b
   // (typed and grown rarely, so a piece allocates nothing).
-  private angle = new Float64Array(64);
+  private key = new Float64Array(64);
   private id = new Int32Array(64);
   private order = new Int32Array(64);
   private m = 0;
   private targetFront = true;
-  /** Blocking circles whose cone from the piece's middle meets the target's (nearCount of them). */
-  private near = new Int32Array(16);
-  private nearCount = 0;
+  /** Blocking circles whose cone from the piece's middle meets the target's, by the directions they cover. */
+  private readonly near = new DiscSweep();
   /** The target's cone from the piece's middle. */
   private readonly cone = new TargetCone();
 
@@ -84,56 +85,86 @@ export class PieceView {
       const ux = P[2 * k] - pmx,
         uy = P[2 * k + 1] - pmy;
       const c = ux * nx + uy * ny;
-      if (c > 0 && cone.toward(ux, uy)) this.push(Math.atan2(ux * tx + uy * ty, c), k);
+      if (c > 0 && cone.toward(ux, uy)) this.push((ux * tx + uy * ty) / c, k);
     }
-    const T = this.tanCircles;
-    this.nearCount = 0;
+    const T = this.tanCircles,
+      near = this.near;
+    near.reset();
     for (let x = 0; x < T.length; x++) {
       const k = T[x];
       const fx = pmx - A.cx[k],
         fy = pmy - A.cy[k],
         r = A.r[k];
       const d = Math.sqrt(fx * fx + fy * fy);
+      const blocker = k !== tg.circle;
       // A blocker whose cone misses the target's cone bounds no run and stops no ray
       // that reaches the target: skip its tangents, and leave it out of the ray casts.
       if (!(d > r)) {
-        if (k !== tg.circle) this.keepNear(k);
+        if (blocker) near.addEverywhere(k);
         continue;
       }
-      if (k !== tg.circle) {
-        if (!cone.meets(-fx, -fy, Math.asin(r / d))) continue;
-        this.keepNear(k);
-      }
-      const alpha = Math.atan2(fy, fx),
-        beta = Math.atan2(Math.sqrt((d - r) * (d + r)), r);
-      for (let s = 0; s < 2; s++) {
-        const th = s === 0 ? alpha + beta : alpha - beta;
-        const ux = A.cx[k] + r * Math.cos(th) - pmx,
-          uy = A.cy[k] + r * Math.sin(th) - pmy;
-        const c = ux * nx + uy * ny;
-        if (c > 0 && (k === tg.circle || cone.toward(ux, uy)))
-          this.push(Math.atan2(ux * tx + uy * ty, c), nP + 2 * x + s);
-      }
+      if (blocker && !cone.meets(-fx, -fy, Math.asin(r / d))) continue;
+      // The tangent from p touching at angle alpha +- beta (alpha: direction of p from the
+      // centre, cos beta = r / d) runs along -h f +- r f_perp (h = sqrt(d^2 - r^2), length d^2):
+      // no trigonometry, and (d - r)(d + r) keeps h accurate near the rim.
+      const h = Math.sqrt((d - r) * (d + r));
+      const u0x = -h * fx - r * fy,
+        u0y = -h * fy + r * fx,
+        u1x = -h * fx + r * fy,
+        u1y = -h * fy - r * fx;
+      const c0 = u0x * nx + u0y * ny,
+        s0 = u0x * tx + u0y * ty,
+        c1 = u1x * nx + u1y * ny,
+        s1 = u1x * tx + u1y * ty;
+      if (c0 > 0 && (!blocker || cone.toward(u0x, u0y))) this.push(s0 / c0, nP + 2 * x);
+      if (c1 > 0 && (!blocker || cone.toward(u1x, u1y))) this.push(s1 / c1, nP + 2 * x + 1);
+      if (blocker) near.add(k, r, d, c0, s0, c1, s1);
     }
     const m = this.m,
-      angle = this.angle,
+      key = this.key,
       id = this.id,
       order = this.order;
-    sortIndexByKey(order, angle, m); // equal angles keep the order they were found in
+    sortIndexByKey(order, key, m); // equal keys keep the order they were found in
+    near.begin();
     // Sweep the elementary intervals; one ray each decides what is seen first there.
     let total = 0;
     let runLo = 0,
       inRun = false;
-    let prevB = -Math.PI / 2,
+    let prevB = -Infinity,
       prevId = HORIZON_LO;
+    // Unit direction of the last bounding direction in (n, t) terms: the horizon at b = -pi/2 first.
+    let prevC = 0,
+      prevS = -1;
     for (let q = 0; q <= m; q++) {
-      const b = q < m ? angle[order[q]] : Math.PI / 2;
+      const b = q < m ? key[order[q]] : Infinity;
       const bid = q < m ? id[order[q]] : HORIZON_HI;
       if (b > prevB) {
-        const bm = 0.5 * (prevB + b);
-        const cb = Math.cos(bm),
-          sb = Math.sin(bm);
-        const seen = this.seesTarget(pmx, pmy, cb * nx + sb * tx, cb * ny + sb * ty);
+        // cos b and sin b from tan b, without overflow for steep directions.
+        let cb: number, sb: number;
+        if (b === Infinity) {
+          cb = 0;
+          sb = 1;
+        } else if (Math.abs(b) <= 1) {
+          cb = 1 / Math.sqrt(1 + b * b);
+          sb = b * cb;
+        } else {
+          const inv = 1 / b;
+          sb = Math.sign(b) / Math.sqrt(1 + inv * inv);
+          cb = Math.abs(inv * sb);
+        }
+        // The ray halfway in angle: the sum of the two unit directions (less than a half turn apart).
+        let mc = prevC + cb,
+          ms = prevS + sb;
+        const len = Math.sqrt(mc * mc + ms * ms);
+        if (len > 0) {
+          mc /= len;
+          ms /= len;
+        } else {
+          mc = 1; // horizon to horizon: the normal
+          ms = 0;
+        }
+        near.advance(ms / mc); // mc > 0: the ray is in front
+        const seen = this.seesTarget(pmx, pmy, mc * nx + ms * tx, mc * ny + ms * ty);
         if (seen && !inRun) {
           inRun = true;
           runLo = prevId;
@@ -141,33 +172,29 @@ export class PieceView {
           inRun = false;
           total += this.delta(prevId, nP) - this.delta(runLo, nP);
         }
+        prevB = b;
+        prevC = cb;
+        prevS = sb;
       }
-      prevB = Math.max(prevB, b);
       prevId = bid;
     }
     if (inRun) total += this.delta(HORIZON_HI, nP) - this.delta(runLo, nP);
     return 0.5 * total;
   }
 
-  /** Keep blocking circle k for this piece's ray casts. */
-  private keepNear(k: number): void {
-    if (this.nearCount === this.near.length) this.near = growInt(this.near);
-    this.near[this.nearCount++] = k;
-  }
-
-  /** Adds a bounding direction: angle b (radians) of object `obj`. */
+  /** Adds a bounding direction: tan b of object `obj`. */
   private push(b: number, obj: number): void {
-    if (this.m === this.angle.length) {
+    if (this.m === this.key.length) {
       const size = 2 * this.m;
-      const angle = new Float64Array(size),
+      const key = new Float64Array(size),
         id = new Int32Array(size);
-      angle.set(this.angle);
+      key.set(this.key);
       id.set(this.id);
-      this.angle = angle;
+      this.key = key;
       this.id = id;
       this.order = new Int32Array(size);
     }
-    this.angle[this.m] = b;
+    this.key[this.m] = b;
     this.id[this.m++] = obj;
   }
 
@@ -252,9 +279,11 @@ export class PieceView {
     for (let k = 0; k < S.length; k += 4) {
       if (raySegment(px, py, dx, dy, S[k], S[k + 1], S[k + 2], S[k + 3]) < tT) return false;
     }
-    const near = this.near;
-    for (let q = 0; q < this.nearCount; q++) {
-      const k = near[q];
+    const near = this.near,
+      active = near.active,
+      circle = near.circle;
+    for (let q = 0; q < near.activeCount; q++) {
+      const k = circle[active[q]];
       const fx = px - A.cx[k],
         fy = py - A.cy[k];
       const b = fx * dx + fy * dy;
