@@ -243,8 +243,12 @@ export class CurvedPairIntegrator implements EventFilter {
         }
       }
     }
-    // Arc pieces span at most a quarter turn, so each chord is shorter than its arc's diameter.
-    if (em.isArc) for (let k = 1; k < 4; k++) B.addAngle(em, em.start + (k * em.span) / 4);
+    // Arc pieces span at most a quarter turn, so each chord is shorter than its arc's diameter
+    // (a whole tube: four pieces; an arc of a tube split for a flux profile: often one).
+    if (em.isArc) {
+      const parts = Math.max(1, Math.ceil(em.span / (Math.PI / 2) - 1e-12));
+      for (let k = 1; k < parts; k++) B.addAngle(em, em.start + (k * em.span) / parts);
+    }
     B.sort();
   }
 
@@ -284,13 +288,42 @@ export class CurvedPairIntegrator implements EventFilter {
       uy = (far ? u1y : u2y) / t;
     this.cone.from(this.tg, px, py);
     if (!this.cone.toward(ux, uy)) return false;
+    // Nor does it when a circle strictly crosses that line before the target: near p and
+    // near that direction the target is then hidden, so neither object bounds a run.
+    const reach = Math.max(t, this.targetDistance(px, py, ux, uy));
     const circles = this.scene.circles;
-    for (let q = 0; q < circles.length; q++) if (this.hides(circles[q], px, py, ux, uy, t)) return false;
+    for (let q = 0; q < circles.length; q++) if (this.hides(circles[q], px, py, ux, uy, reach)) return false;
     if (this.tg.isArc && this.tg.solid && this.hides(this.tg.circle, px, py, ux, uy, t)) return false;
     return true;
   }
 
-  /** Does solid circle k strictly hide the point at distance t along the unit direction (ux, uy) from p? */
+  /**
+   * Distance from p along the unit direction (ux, uy) to where the line meets the
+   * target (its circle, for an arc), or 0 when it may miss it. Sketch units.
+   */
+  private targetDistance(px: number, py: number, ux: number, uy: number): number {
+    const tg = this.tg;
+    if (!tg.isArc) {
+      const ex = tg.bx - tg.ax,
+        ey = tg.by - tg.ay;
+      const den = ux * ey - uy * ex;
+      if (den === 0) return 0;
+      const wx = tg.ax - px,
+        wy = tg.ay - py;
+      const along = (wx * ey - wy * ex) / den,
+        u = (wx * uy - wy * ux) / den;
+      return u > 1e-9 && u < 1 - 1e-9 && along > 0 ? along : 0;
+    }
+    const fx = px - tg.cx,
+      fy = py - tg.cy;
+    const b = fx * ux + fy * uy;
+    const disc = b * b - (fx * fx + fy * fy - tg.r * tg.r);
+    if (!(disc > 0)) return 0;
+    const along = tg.solid ? -b - Math.sqrt(disc) : -b + Math.sqrt(disc);
+    return along > 0 ? along : 0;
+  }
+
+  /** Does solid circle k strictly cross the line at less than distance t along the unit direction (ux, uy) from p? */
   private hides(k: number, px: number, py: number, ux: number, uy: number, t: number): boolean {
     const A = this.E.arcs,
       slack = 1e-9;
