@@ -106,6 +106,11 @@ for (const v of verdicts) console.log(v);
   console.log(
     `tube bank, two staggered rows of 25 exact circles (54 edges): min ${bank.min.toFixed(0)} ms, median ${bank.median.toFixed(0)} ms`,
   );
+  // The slow case of exact circles (information): pairs between rows see past dozens of tubes.
+  const deep = time(bankScene(4), Math.max(1, rounds >> 1));
+  console.log(
+    `deep tube bank, four staggered rows of 25 exact circles (104 edges): min ${deep.min.toFixed(0)} ms, median ${deep.median.toFixed(0)} ms`,
+  );
 }
 
 // Other targets: reading a 1600-edge sketch file (validation included) and the

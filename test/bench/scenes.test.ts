@@ -20,6 +20,7 @@ function problems(scene: SceneInput): unknown[] {
 describe('bench scenes are valid sketches', () => {
   const scenes: [string, SceneInput][] = [
     ['tube bank', bankScene()],
+    ['deep tube bank', bankScene(4)],
     ['furnace section, exact circles', furnaceScene(0)],
     ['furnace section, 24-sided tubes', furnaceScene(24)],
     ['20 tubes, 100 edges', tubeScene(1, 20, 4, 20)],

@@ -92,22 +92,27 @@ export function furnaceScene(sides: number): SceneInput {
 }
 
 /**
- * A tube bank: the furnace box with two staggered rows of 25 exact tubes (diameter
+ * A tube bank: the furnace box with `rows` staggered rows of 25 exact tubes (diameter
  * 0.12, pitch 0.46 along each row, rows 0.2 apart and shifted half a pitch), one
  * surface per tube and per wall. Tubes there see one another past several others.
  * (At a pitch of 0.48 the last tube of the second row crossed the right wall, a
  * sketch the app refuses: test/bench/scenes.test.ts checks every bench scene.)
  */
-export function bankScene(): SceneInput {
+export function bankScene(rows = 2): SceneInput {
   const circles: NonNullable<SceneInput['circles']> = [];
-  for (let k = 0; k < 25; k++) {
-    circles.push({ kind: 'solid', cx: 0.3 + 0.46 * k, cy: 3.8, radius: FURNACE_TUBE_RADIUS, arcs: 1 });
-    circles.push({ kind: 'solid', cx: 0.53 + 0.46 * k, cy: 3.6, radius: FURNACE_TUBE_RADIUS, arcs: 1 });
-  }
+  for (let row = 0; row < rows; row++)
+    for (let k = 0; k < 25; k++)
+      circles.push({
+        kind: 'solid',
+        cx: 0.3 + 0.23 * (row % 2) + 0.46 * k,
+        cy: 3.8 - 0.2 * row,
+        radius: FURNACE_TUBE_RADIUS,
+        arcs: 1,
+      });
   return {
     polygons: [{ kind: 'enclosure', points: [...FURNACE_BOX] }],
     circles,
-    edgeSurface: Array.from({ length: 54 }, (_, k) => k),
-    surfaceCount: 54,
+    edgeSurface: Array.from({ length: 4 + circles.length }, (_, k) => k),
+    surfaceCount: 4 + circles.length,
   };
 }
