@@ -2,7 +2,7 @@
 // furnace box of 52 wall edges holding 20 tubes drawn as 48-gons, either one surface
 // per tube and per wall (24 surfaces) or every edge its own surface.
 import type { SketchFile } from '../../src/state/sketchFile';
-import { FURNACE_BOX, FURNACE_TUBE_RADIUS, FURNACE_TUBES, furnaceTubeCentre } from './scenes';
+import { bankScene, FURNACE_BOX, FURNACE_TUBE_RADIUS, FURNACE_TUBES, furnaceTubeCentre } from './scenes';
 
 const WALL_PER_SIDE = 13;
 const SIDES = 48;
@@ -65,6 +65,30 @@ export function furnaceSketch(): SketchFile {
         kind: 'solid' as const,
         points: [],
         circle: { center: furnaceTubeCentre(k), radius: FURNACE_TUBE_RADIUS },
+        surface: `tube ${k + 1}`,
+      })),
+    ],
+  };
+}
+
+/**
+ * The deep tube bank of `npm run bench` (scenes.ts, bankScene(4)) as a sketch file: four
+ * staggered rows of 25 exact tubes, one surface per wall and per tube. The browser bench
+ * drags the 13th tube of the second row.
+ */
+export function deepBankSketch(): SketchFile {
+  const box: [number, number][] = [];
+  for (let k = 0; k < FURNACE_BOX.length; k += 2) box.push([FURNACE_BOX[k], FURNACE_BOX[k + 1]]);
+  const circles = bankScene(4).circles!;
+  return {
+    version: 2,
+    units: 'm',
+    shapes: [
+      { kind: 'enclosure', points: box, surface: ['floor', 'right', 'roof', 'left'] },
+      ...circles.map((c, k) => ({
+        kind: 'solid' as const,
+        points: [],
+        circle: { center: [c.cx, c.cy] as [number, number], radius: c.radius },
         surface: `tube ${k + 1}`,
       })),
     ],

@@ -9,7 +9,7 @@
 import type { Page } from 'playwright-core';
 import { screenOf, startApp, waitReady, type TestWindow } from '../e2e/harness';
 import { bigSketch, dragSizeSketch, followDrag, openSketch } from './browserDrag';
-import { furnaceSketch } from './bigSketch';
+import { deepBankSketch, furnaceSketch } from './bigSketch';
 import { furnaceTubeCentre } from './scenes';
 
 type LatencyWindow = TestWindow & { __lat: { lastEvent: number; samples: number[]; changes: number } };
@@ -149,6 +149,14 @@ try {
   console.log(
     `furnace section, 50 exact tubes in a row (54 edges), the middle tube dragged ${f.seconds.toFixed(1)} s, pointer moves ${f.movesPerSecond.toFixed(0)}/s: ` +
       `table updates ${f.tablesPerSecond.toFixed(1)}/s; frames ${f.framesPerSecond.toFixed(0)}/s, of which showing a new position ${f.followPerSecond.toFixed(0)}/s`,
+  );
+  // The slow case of exact circles (information): a tube of the second of four staggered
+  // rows dragged along its row, so pairs between rows past dozens of tubes change.
+  await openSketch(page, deepBankSketch());
+  const b = await followDrag(page, [0.53 + 0.46 * 12, 3.6], 4, 0.05);
+  console.log(
+    `deep tube bank, four staggered rows of 25 exact tubes (104 edges), a tube of the second row dragged ${b.seconds.toFixed(1)} s, pointer moves ${b.movesPerSecond.toFixed(0)}/s: ` +
+      `table updates ${b.tablesPerSecond.toFixed(1)}/s; frames ${b.framesPerSecond.toFixed(0)}/s, of which showing a new position ${b.followPerSecond.toFixed(0)}/s`,
   );
 } finally {
   await app.close();
