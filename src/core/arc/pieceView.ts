@@ -1,9 +1,10 @@
 import { distanceChange as distanceChangeIn } from '../pairGeometry';
 import { orient as orientIn } from '../orient';
-import { sortIndexByKey as sortIndexByKeyIn } from '../scratch';
 import type { ArcSet } from './arcs';
 import type { Curve } from './curve';
 import type { PairScene } from './pairScene';
+import { CoherentOrder, SORT_FROM_LAST } from './coherentOrder';
+import { sortIndexByKey as sortIndexByKeyIn } from '../scratch';
 import { DiscSweep } from './discSweep';
 import { TargetCone } from './targetCone';
 
@@ -11,8 +12,8 @@ import { TargetCone } from './targetCone';
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call (as in src/core/pair).
 const distanceChange = distanceChangeIn;
-const orient = orientIn;
 const sortIndexByKey = sortIndexByKeyIn;
+const orient = orientIn;
 
 // The visible runs of the target from the middle of one emitter piece, and their
 // exact integral over the piece. Directions from p are angles b from the emitter's
@@ -40,6 +41,8 @@ export class PieceView {
   private targetFront = true;
   /** Blocking circles whose cone from the piece's middle meets the target's, by the directions they cover. */
   private readonly near = new DiscSweep();
+  /** The directions' order, started from the last piece's. */
+  private readonly sorter = new CoherentOrder();
   /** The target's cone from the piece's middle. */
   private readonly cone = new TargetCone();
 
@@ -50,6 +53,7 @@ export class PieceView {
     this.em = em;
     this.scene = scene;
     this.tanCircles = scene.tangentCircles;
+    this.sorter.reset();
   }
 
   /**
@@ -124,7 +128,10 @@ export class PieceView {
       key = this.key,
       id = this.id,
       order = this.order;
-    sortIndexByKey(order, key, m); // equal keys keep the order they were found in
+    // Equal keys keep the order they were found in. A few directions are sorted afresh;
+    // many, from the last piece's order (coherentOrder.ts; the same order either way).
+    if (m < SORT_FROM_LAST) sortIndexByKey(order, key, m);
+    else this.sorter.sort(order, key, id, m, nP + 2 * T.length);
     near.begin();
     // Sweep the elementary intervals; one ray each decides what is seen first there.
     let total = 0;
