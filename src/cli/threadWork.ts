@@ -25,8 +25,6 @@ export interface ThreadJob {
   control: SharedArrayBuffer;
   /** The shared edge matrix (edges^2 doubles), or null when summing straight to surfaces. */
   matrix: SharedArrayBuffer | null;
-  /** Int32 per chunk: 1 once its rows are in the matrix (the main thread sums finished rows meanwhile). */
-  chunkDone: SharedArrayBuffer;
   /** Surface of every edge, when summing straight to surfaces. */
   edgeSurface: Int32Array | null;
   surfaceCount: number;
@@ -59,7 +57,6 @@ export function rowChunks(n: number, threads: number): Int32Array {
  */
 export function workChunks(job: ThreadJob, onSums: (sums: SurfaceRowSums) => void, between: () => void): void {
   const control = new Int32Array(job.control);
-  const chunkDone = new Int32Array(job.chunkDone);
   const pairs = new EdgePairs(buildEdges(job.polygons, job.circles));
   const F = job.matrix ? new Float64Array(job.matrix) : null;
   const summer = job.edgeSurface ? new SurfaceRowSummer(pairs, job.edgeSurface, job.surfaceCount) : null;
@@ -72,7 +69,6 @@ export function workChunks(job: ThreadJob, onSums: (sums: SurfaceRowSums) => voi
     for (let k = 0; k < rows.length; k++) rows[k] = job.chunkStart[c] + k;
     if (F) fillRows(pairs, rows, F);
     else if (summer) onSums(summer.sum(rows));
-    Atomics.store(chunkDone, c, 1);
     Atomics.add(control, DONE, 1);
     Atomics.notify(control, DONE);
     between();

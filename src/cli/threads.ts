@@ -7,7 +7,7 @@ import { availableParallelism } from 'node:os';
 import { MessageChannel, receiveMessageOnPort, Worker, type MessagePort } from 'node:worker_threads';
 import { buildEdges, allEdgeLengths, totalEdgeCount } from '../core/edges';
 import type { SceneInput, ViewFactorResult } from '../core/scene';
-import { MatrixSurfaceSums } from '../core/matrixSurfaceSums';
+import { aggregateToSurfaces } from '../core/surfaces';
 import { SurfaceAccumulator, surfaceFactorsFromPairs, type SurfaceRowSums } from '../core/surfaceRows';
 import { EdgePairs } from '../core/pairRows';
 import { computeViewFactors, edgeMatrixFits } from '../core/viewFactors';
@@ -69,30 +69,15 @@ export function threadedViewFactors(
     chunkStart,
     control: new SharedArrayBuffer(4 * CONTROL_SLOTS),
     matrix: summed ? null : new SharedArrayBuffer(8 * n * n),
-    chunkDone: new SharedArrayBuffer(4 * (chunkStart.length - 1)),
     edgeSurface: summed ? Int32Array.from(scene.edgeSurface) : null,
     surfaceCount: scene.surfaceCount,
   };
   const acc = summed ? new SurfaceAccumulator(length, scene.edgeSurface, scene.surfaceCount) : null;
-  // With the edge matrix, the main thread sums to surfaces the rows of every chunk
-  // finished so far (a row is complete once its chunk and all before it are done:
-  // earlier rows hold its left part), while the other threads compute the rest.
-  const sums = job.matrix
-    ? new MatrixSurfaceSums(n, length, new Float64Array(job.matrix), scene.edgeSurface, scene.surfaceCount)
-    : null;
-  const chunkDone = new Int32Array(job.chunkDone);
-  let complete = 0;
-  const sumFinished = () => {
-    if (!sums) return;
-    while (complete < chunkDone.length && Atomics.load(chunkDone, complete) === 1) complete++;
-    sums.addRows(chunkStart[complete]);
-  };
   const workers = helpers(Math.min(count, chunkStart.length - 1) - (options.workersOnly ? 0 : 1));
   for (const w of workers) w.port.postMessage({ job });
   try {
     const takeIn = () => {
       for (const w of workers) drain(w.port, job.id, acc);
-      sumFinished();
     };
     if (!options.workersOnly) workChunks(job, (sums) => acc?.add(sums), takeIn);
     waitForChunks(job, takeIn);
@@ -103,8 +88,8 @@ export function threadedViewFactors(
     throw error;
   }
   if (acc) return acc.result(edges.hasEnclosure);
-  sums!.addRows(n);
-  return sums!.result(edges.hasEnclosure);
+  const F = new Float64Array(job.matrix!);
+  return aggregateToSurfaces(n, length, F, scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
 }
 
 /**

@@ -31,12 +31,42 @@ export function surfaceLengths(
 }
 
 /**
+ * Aggregate edge view factors (edges x edges, row-major, row = from) to surfaces:
+ * F_IJ = sum_{i in I, j in J} L_i F_ij / L_I (lengths in sketch units), and report
+ * the row-sum residual 1 - sum_J F_IJ and the largest relative reciprocity residual
+ * |L_I F_IJ - L_J F_JI| / max(L_I F_IJ, L_J F_JI).
+ */
+export function aggregateToSurfaces(
+  edgeCount: number,
+  edgeLength: Float64Array,
+  edgeF: Float64Array,
+  edgeSurface: ArrayLike<number>,
+  surfaceCount: number,
+  closed: boolean,
+): ViewFactorResult {
+  const n = edgeCount;
+  const m = surfaceCount;
+  const surfaceLength = surfaceLengths(edgeLength, edgeSurface, m);
+  // G_IJ = L_I F_IJ, the exchange length; summed straight from the edge rows.
+  const G = new Float64Array(m * m);
+  for (let i = 0; i < n; i++) {
+    const row = edgeSurface[i] * m;
+    const Li = edgeLength[i];
+    const base = i * n;
+    for (let j = 0; j < n; j++) {
+      const f = edgeF[base + j];
+      if (f !== 0) G[row + edgeSurface[j]] += Li * f;
+    }
+  }
+  return surfaceResult(n, edgeLength, surfaceLength, G, closed, true);
+}
+
+/**
  * Surface factors from the surface exchange matrix G_IJ = L_I F_IJ (row-major,
  * sketch units) and the surface lengths: F_IJ = G_IJ / L_I, the row-sum residual
  * 1 - sum_J F_IJ and the largest relative reciprocity residual over pairs.
  * `overwrite`: G is the caller's scratch and becomes F (one m x m array fewer;
  * at 1000 surfaces fresh memory costs a browser tens of ms). Same numbers either way.
- * `reciprocity`: the largest reciprocity residual when the caller took it already.
  */
 export function surfaceResult(
   edgeCount: number,
@@ -45,18 +75,15 @@ export function surfaceResult(
   G: Float64Array,
   closed: boolean,
   overwrite = false,
-  reciprocity?: number,
 ): ViewFactorResult {
   const m = surfaceLength.length;
   // Reciprocity first: it reads G, which `overwrite` turns into F below.
   let reciprocityResidual = 0;
-  if (reciprocity !== undefined) reciprocityResidual = reciprocity;
-  else
-    for (let I = 0; I < m; I++) {
-      for (let J = I + 1; J < m; J++) {
-        reciprocityResidual = Math.max(reciprocityResidual, reciprocityResidualOf(G[I * m + J], G[J * m + I]));
-      }
+  for (let I = 0; I < m; I++) {
+    for (let J = I + 1; J < m; J++) {
+      reciprocityResidual = Math.max(reciprocityResidual, reciprocityResidualOf(G[I * m + J], G[J * m + I]));
     }
+  }
   const F = overwrite ? G : new Float64Array(m * m);
   const rowSumResidual = new Float64Array(m);
   for (let I = 0; I < m; I++) {

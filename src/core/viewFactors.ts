@@ -1,7 +1,7 @@
 import { allEdgeLengths, buildEdges, totalEdgeCount, type EdgeSet } from './edges';
 import { EdgePairs, fillRows } from './pairRows';
 import type { SceneInput, ViewFactorResult } from './scene';
-import { aggregateToSurfaces } from './matrixSurfaceSums';
+import { aggregateToSurfaces } from './surfaces';
 import { surfaceFactorsFromPairs } from './surfaceRows';
 
 export interface ViewFactorOptions {

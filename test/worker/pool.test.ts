@@ -25,7 +25,7 @@ import {
   workersForJob,
   type RowWorker,
 } from '../../src/worker/pool';
-import { aggregateToSurfaces } from '../../src/core/matrixSurfaceSums';
+import { aggregateToSurfaces } from '../../src/core/surfaces';
 import { mixedSceneArb, edgeCountOf } from '../core/arc/arbitraries';
 import { edgeMatrixOf } from './edgeMatrix';
 
