@@ -33,10 +33,10 @@ export interface ThreadJob {
 /** Most pairs in one chunk: small enough to share the tail evenly, big enough that a chunk costs far more than its claim. */
 const MAX_CHUNK_PAIRS = 1 << 17;
 
-/** Row chunks of about total / (threads * 64) pairs each (at most MAX_CHUNK_PAIRS, at least one row). */
+/** Row chunks of about total / (threads * 16) pairs each (at most MAX_CHUNK_PAIRS, at least one row). */
 export function rowChunks(n: number, threads: number): Int32Array {
   const total = (n * (n + 1)) / 2;
-  const target = Math.max(1, Math.min(MAX_CHUNK_PAIRS, Math.ceil(total / (threads * 64))));
+  const target = Math.max(1, Math.min(MAX_CHUNK_PAIRS, Math.ceil(total / (threads * 16))));
   const starts = [0];
   let load = 0;
   for (let i = 0; i < n; i++) {
