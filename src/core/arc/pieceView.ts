@@ -1,19 +1,19 @@
 import { distanceChange as distanceChangeIn } from '../pairGeometry';
 import { orient as orientIn } from '../orient';
-import type { ArcSet } from './arcs';
-import type { Curve } from './curve';
-import type { PairScene } from './pairScene';
-import { CoherentOrder, SORT_FROM_LAST } from './coherentOrder';
 import { sortIndexByKey as sortIndexByKeyIn } from '../scratch';
+import type { ArcSet } from './arcs';
+import { CoherentOrder, SORT_FROM_LAST } from './coherentOrder';
+import type { Curve } from './curve';
 import { DiscSweep } from './discSweep';
+import type { PairScene } from './pairScene';
 import { TargetCone } from './targetCone';
 
 // Lengths: Math.sqrt of the sum of squares, not Math.hypot (see tangents.ts).
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call (as in src/core/pair).
 const distanceChange = distanceChangeIn;
-const sortIndexByKey = sortIndexByKeyIn;
 const orient = orientIn;
+const sortIndexByKey = sortIndexByKeyIn;
 
 // The visible runs of the target from the middle of one emitter piece, and their
 // exact integral over the piece. Directions from p are angles b from the emitter's
