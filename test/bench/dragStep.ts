@@ -1,7 +1,7 @@
 // One drag step as a worker computes it (issue 13, target 4), rows split as for two
 // workers: the 1012-edge sketch of the browser drag (bigSketch.ts) with one tube
-// moved 0.01 a step, and the 50-tube furnace section of exact circles with its
-// middle tube moved 0.005 a step. Each step is timed twice in alternation: a full
+// moved 0.01 a step, the 50-tube furnace section of exact circles with its middle
+// tube moved 0.005 a step, and a tube of the deep bank (four rows) likewise. Each step is timed twice in alternation: a full
 // job, and a worker that kept its rows from the step before (core reuse/). Both
 // must give the same bits; the bench stops if they do not.
 import { balancedRowSets } from '../../src/core/pairRows';
@@ -10,7 +10,7 @@ import { computeRows } from '../../src/worker/api';
 import { RowMemory } from '../../src/worker/rowMemory';
 import { jobEdgeCount, jobFromPolygons, type RowsAnswer, type ViewFactorJob } from '../../src/worker/job';
 import { bigSketch } from './bigSketch';
-import { furnaceScene } from './scenes';
+import { bankScene, furnaceScene } from './scenes';
 
 function packedOf(r: RowsAnswer) {
   if (r.kind !== 'matrix') throw new Error('drag bench: expected packed rows');
@@ -79,5 +79,17 @@ export function dragStepSection(quick: boolean): void {
         circles.map((c, i) => (i === middle ? { ...c, cx: c.cx + 0.005 * (k % 5) } : c)),
       ),
     quick ? 3 : 8,
+  );
+  // The deep bank (information): the 13th tube of the second of four rows, as the browser drag moves it.
+  const bank = bankScene(4);
+  const tubes = bank.circles ?? [];
+  timeSteps(
+    `deep tube bank, ${tubes.length} exact circles in four rows`,
+    (k) =>
+      jobFromPolygons(
+        bank.polygons,
+        tubes.map((c, i) => (i === 25 + 12 ? { ...c, cx: c.cx + 0.005 * (k % 5) } : c)),
+      ),
+    quick ? 2 : 6,
   );
 }
