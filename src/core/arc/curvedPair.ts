@@ -298,8 +298,12 @@ export class CurvedPairIntegrator implements EventFilter {
   }
 
   /**
-   * Distance from p along the unit direction (ux, uy) to where the line meets the
-   * target (its circle, for an arc), or 0 when it may miss it. Sketch units.
+   * Distance from p along the unit direction (ux, uy) to where the line crosses the
+   * target (its circle, for an arc) clearly, at an angle and away from its ends, or 0
+   * when it may miss it or only graze it. A line nearly along a straight target (p on
+   * its line, where the target turns edge-on) or nearly touching a target circle meets
+   * it at a place that moves far with a tiny turn of the line, so no neighbourhood of
+   * the direction is then known to see the target there. Sketch units.
    */
   private targetDistance(px: number, py: number, ux: number, uy: number): number {
     const tg = this.tg;
@@ -307,18 +311,18 @@ export class CurvedPairIntegrator implements EventFilter {
       const ex = tg.bx - tg.ax,
         ey = tg.by - tg.ay;
       const den = ux * ey - uy * ex;
-      if (den === 0) return 0;
+      if (!(Math.abs(den) > 1e-6 * tg.length)) return 0;
       const wx = tg.ax - px,
         wy = tg.ay - py;
       const along = (wx * ey - wy * ex) / den,
         u = (wx * uy - wy * ux) / den;
-      return u > 1e-9 && u < 1 - 1e-9 && along > 0 ? along : 0;
+      return u > 1e-6 && u < 1 - 1e-6 && along > 0 ? along : 0;
     }
     const fx = px - tg.cx,
       fy = py - tg.cy;
     const b = fx * ux + fy * uy;
     const disc = b * b - (fx * fx + fy * fy - tg.r * tg.r);
-    if (!(disc > 0)) return 0;
+    if (!(disc > 1e-6 * tg.r * tg.r)) return 0;
     const along = tg.solid ? -b - Math.sqrt(disc) : -b + Math.sqrt(disc);
     return along > 0 ? along : 0;
   }
