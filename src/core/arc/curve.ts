@@ -130,3 +130,32 @@ function pointBehind(a: Curve, x: number, y: number, reach: number): boolean {
   const ahead = apart >= Math.PI / 2 ? 0 : d * Math.cos(apart); // max over the arc of (y - c) . u
   return ahead + reach * (1 + 1e-9) < a.r * (1 - 1e-9) - 1e-12 * d;
 }
+
+/**
+ * Distance from p along the unit direction (ux, uy) to where the line crosses the
+ * target (its circle, for an arc) clearly, at an angle and away from its ends, or 0
+ * when it may miss it or only graze it. A line nearly along a straight target (p on
+ * its line, where the target turns edge-on) or nearly touching a target circle meets
+ * it at a place that moves far with a tiny turn of the line, so no neighbourhood of
+ * the direction is then known to see the target there. Sketch units.
+ */
+export function clearCrossing(tg: Curve, px: number, py: number, ux: number, uy: number): number {
+  if (!tg.isArc) {
+    const ex = tg.bx - tg.ax,
+      ey = tg.by - tg.ay;
+    const den = ux * ey - uy * ex;
+    if (!(Math.abs(den) > 1e-6 * tg.length)) return 0;
+    const wx = tg.ax - px,
+      wy = tg.ay - py;
+    const along = (wx * ey - wy * ex) / den,
+      u = (wx * uy - wy * ux) / den;
+    return u > 1e-6 && u < 1 - 1e-6 && along > 0 ? along : 0;
+  }
+  const fx = px - tg.cx,
+    fy = py - tg.cy;
+  const b = fx * ux + fy * uy;
+  const disc = b * b - (fx * fx + fy * fy - tg.r * tg.r);
+  if (!(disc > 1e-6 * tg.r * tg.r)) return 0;
+  const along = tg.solid ? -b - Math.sqrt(disc) : -b + Math.sqrt(disc);
+  return along > 0 ? along : 0;
+}

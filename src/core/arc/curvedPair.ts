@@ -1,7 +1,7 @@
 import { extentWithCircles, totalEdgeCount, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
-import { Curve, surelyBehind } from './curve';
+import { clearCrossing as clearCrossingIn, Curve, surelyBehind } from './curve';
 import { DiscShadow } from './discShadow';
 import { HiddenCircles } from './hiddenCircles';
 import { convexHull as convexHullIn, discMeetsHull as discMeetsHullIn, PairScene } from './pairScene';
@@ -18,6 +18,7 @@ import {
 // Module-local copies of hot imports: under the CommonJS transform that tsx (bench, CLI)
 // applies, every read of an imported binding is a getter call (as in src/core/pair).
 const orient = orientIn;
+const clearCrossing = clearCrossingIn;
 const convexHull = convexHullIn;
 const discMeetsHull = discMeetsHullIn;
 const commonTangents = commonTangentsIn;
@@ -290,41 +291,11 @@ export class CurvedPairIntegrator implements EventFilter {
     if (!this.cone.toward(ux, uy)) return false;
     // Nor does it when a circle strictly crosses that line before the target: near p and
     // near that direction the target is then hidden, so neither object bounds a run.
-    const reach = Math.max(t, this.targetDistance(px, py, ux, uy));
+    const reach = Math.max(t, clearCrossing(this.tg, px, py, ux, uy));
     const circles = this.scene.circles;
     for (let q = 0; q < circles.length; q++) if (this.hides(circles[q], px, py, ux, uy, reach)) return false;
     if (this.tg.isArc && this.tg.solid && this.hides(this.tg.circle, px, py, ux, uy, t)) return false;
     return true;
-  }
-
-  /**
-   * Distance from p along the unit direction (ux, uy) to where the line crosses the
-   * target (its circle, for an arc) clearly, at an angle and away from its ends, or 0
-   * when it may miss it or only graze it. A line nearly along a straight target (p on
-   * its line, where the target turns edge-on) or nearly touching a target circle meets
-   * it at a place that moves far with a tiny turn of the line, so no neighbourhood of
-   * the direction is then known to see the target there. Sketch units.
-   */
-  private targetDistance(px: number, py: number, ux: number, uy: number): number {
-    const tg = this.tg;
-    if (!tg.isArc) {
-      const ex = tg.bx - tg.ax,
-        ey = tg.by - tg.ay;
-      const den = ux * ey - uy * ex;
-      if (!(Math.abs(den) > 1e-6 * tg.length)) return 0;
-      const wx = tg.ax - px,
-        wy = tg.ay - py;
-      const along = (wx * ey - wy * ex) / den,
-        u = (wx * uy - wy * ux) / den;
-      return u > 1e-6 && u < 1 - 1e-6 && along > 0 ? along : 0;
-    }
-    const fx = px - tg.cx,
-      fy = py - tg.cy;
-    const b = fx * ux + fy * uy;
-    const disc = b * b - (fx * fx + fy * fy - tg.r * tg.r);
-    if (!(disc > 1e-6 * tg.r * tg.r)) return 0;
-    const along = tg.solid ? -b - Math.sqrt(disc) : -b + Math.sqrt(disc);
-    return along > 0 ? along : 0;
   }
 
   /** Does solid circle k strictly cross the line at less than distance t along the unit direction (ux, uy) from p? */
