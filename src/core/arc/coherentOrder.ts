@@ -42,8 +42,7 @@ export class CoherentOrder {
     // Start from the last order: directions seen then, in that order, then the new ones.
     let n = 0;
     for (let q = 0; q < this.lastCount; q++) {
-      const o = last[q];
-      if (o > maxId) continue;
+      const o = last[q]; // an id of this pair's objects, so at most maxId
       const k = slot[o];
       if (k >= 0) {
         order[n++] = k;

@@ -291,8 +291,8 @@ export class CurvedPairIntegrator implements EventFilter {
     if (!this.cone.toward(ux, uy)) return false;
     // Nor does it when a circle strictly crosses that line before the target: near p and
     // near that direction the target is then hidden, so neither object bounds a run.
-    const reach = Math.max(t, clearCrossing(this.tg, px, py, ux, uy));
     const circles = this.scene.circles;
+    const reach = circles.length > 0 ? Math.max(t, clearCrossing(this.tg, px, py, ux, uy)) : t;
     for (let q = 0; q < circles.length; q++) if (this.hides(circles[q], px, py, ux, uy, reach)) return false;
     if (this.tg.isArc && this.tg.solid && this.hides(this.tg.circle, px, py, ux, uy, t)) return false;
     return true;
