@@ -4,6 +4,7 @@ import { orient as orientIn } from '../orient';
 import { clearCrossing as clearCrossingIn, Curve, surelyBehind } from './curve';
 import { DiscShadow } from './discShadow';
 import { HiddenCircles } from './hiddenCircles';
+import { LineSweepPair } from './lineSweepPair';
 import { convexHull as convexHullIn, discMeetsHull as discMeetsHullIn, PairScene } from './pairScene';
 import { PieceView } from './pieceView';
 import { TargetCone } from './targetCone';
@@ -57,6 +58,7 @@ export class CurvedPairIntegrator implements EventFilter {
   private readonly cone = new TargetCone();
   private readonly shadow: DiscShadow;
   private readonly hidden = new HiddenCircles();
+  private readonly lines2: LineSweepPair;
   /** Scratch for surelyBehind: a curve's outer polygon. */
   private readonly outline: number[] = [];
   /**
@@ -75,6 +77,7 @@ export class CurvedPairIntegrator implements EventFilter {
     this.breaks.filter = this;
     this.view = new PieceView(E.arcs);
     this.shadow = new DiscShadow(SHADOW_MARGIN * extentWithCircles(E));
+    this.lines2 = new LineSweepPair(SHADOW_MARGIN * extentWithCircles(E));
     this.hider = new Int32Array(totalEdgeCount(E)).fill(-1);
   }
 
@@ -136,6 +139,9 @@ export class CurvedPairIntegrator implements EventFilter {
       return 0;
     }
     this.hidden.drop(this.scene, this.E.arcs, em, tg, this.shadow);
+    // Two straight edges past many circles: summed over lines instead (lineSweepPair.ts).
+    const swept = this.lines2.exchange(em, tg, this.scene, this.E.arcs);
+    if (swept >= 0) return swept;
     this.findBreaks();
     return this.integrate();
   }
