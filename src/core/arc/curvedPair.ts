@@ -38,7 +38,8 @@ const touchAngles = touchAnglesIn;
 // (crossed strings generalised; Hottel; Modest, Radiative Heat Transfer, ch. 4).
 // Before any of that, a pair that one solid circle hides wholly (discShadow.ts) is 0,
 // and blocking circles hidden from the whole emitter behind nearer ones are left out
-// (hiddenCircles.ts).
+// (hiddenCircles.ts). A pair of straight edges and whole tubes past circles only is
+// summed over the lines that cross both instead (lineSweep.ts, lineSweepPair.ts).
 
 /**
  * The shadow test's margin over the largest coordinate of the sketch: about 450 ulps,
@@ -139,7 +140,7 @@ export class CurvedPairIntegrator implements EventFilter {
       return 0;
     }
     this.hidden.drop(this.scene, this.E.arcs, em, tg, this.shadow);
-    // Two straight edges past many circles: summed over lines instead (lineSweepPair.ts).
+    // Straight edges and whole tubes past circles: summed over lines instead (lineSweepPair.ts).
     const swept = this.lines2.exchange(em, tg, this.scene, this.E.arcs);
     if (swept >= 0) return swept;
     this.findBreaks();

@@ -1,335 +1,283 @@
-// Exchange between two straight edges past solid circles, summed over the lines that
-// cross both (integral geometry). With lines measured as dp dθ (θ the angle of the
-// line's normal, p its distance from the origin), the lines that cross two facing
-// segments measure the crossed strings minus the uncrossed ones, so L_i F_ij is half
-// that measure (Hottel's crossed strings; Santaló, Integral Geometry and Geometric
-// Probability, 1976, the measure of lines meeting two convex sets; from memory). With
-// discs between the edges, L_i F_ij is half the measure of the lines that cross both
-// edges and miss every disc: at each θ, the length of the p interval that crosses both
-// edges, less the discs' projections. The end points of those intervals are sinusoids
-// in θ (x cos θ + y sin θ + s); their order changes only where two of them meet, and
-// between such angles the free length is one sinusoid, integrated exactly. The sweep
-// keeps the order up to date one swap of neighbours at a time (a kinetic sorted list).
+import { KineticOrder } from './kineticOrder';
+
+// Exchange between two curves past solid circles, summed over the lines that cross
+// both (integral geometry). With lines measured as dp dθ (θ the angle of the line's
+// normal, p its distance from the origin), the lines that meet two facing segments, or
+// two convex sets, measure the crossed strings minus the uncrossed ones, so L_i F_ij
+// is half that measure (Hottel's crossed strings; Santaló, Integral Geometry and
+// Geometric Probability, 1976, the measure of lines meeting two convex sets; from
+// memory). With discs between, L_i F_ij is half the measure of the lines that cross
+// both and meet no disc between them: at each θ, the length of the p interval that
+// crosses both, less the projections of the discs between. The interval ends are
+// sinusoids in θ; their order changes only where two meet, and between such angles the
+// free length is one sinusoid, integrated exactly. The order is kept one swap of
+// neighbours at a time (kineticOrder.ts).
 //
-// Exact only when every disc lies wholly in front of both edges' lines: then a line
-// that crosses both edges and a disc meets the disc between them, so it is blocked
-// (the caller checks this, lineSweepPair.ts). Sketch units; angles in radians.
+// A member is a straight edge (radiating on its left) or a whole solid circle. Which
+// discs lie between, along a line that crosses both members:
+// - past a straight edge, every disc wholly in front of its line (the caller checks
+//   that each disc is: a line crosses the edge's line once, at the edge);
+// - past a circle, the discs whose centres lie beyond the circle's centre along the
+//   line: disjoint discs that one line crosses are met in the order of their centres.
+//   That order changes where the line runs square to the line of centres, where the two
+//   discs' projections are apart, so no free gap is touched.
+// Sketch units; angles in radians.
 
-const TWO_PI = 2 * Math.PI;
-/**
- * Two end points whose order changes for less than 2 GRAZE (radians) keep their order:
- * the length they would swap is below r GRAZE^2 over that span, under 1e-18 r.
- */
-const GRAZE = 1e-6;
-/** A swap computed this close before the current angle (radians) happens now: rounding of the angle. */
-const NOW = 1e-10;
-
-/** End point kinds. */
-const EDGE_END = 0,
-  DISC_LOW = 1,
-  DISC_HIGH = 2;
+/** End point kinds of the members: an edge's end (role by order), a circle's low and high side. */
+const END = 0,
+  LOW = 1,
+  HIGH = 2;
 
 export class LineSweep {
-  private size = 0;
-  /** End point e's projection at θ is x[e] cos θ + y[e] sin θ + s[e] (coordinates about `ox, oy`). */
-  private x = new Float64Array(64);
-  private y = new Float64Array(64);
-  private s = new Float64Array(64);
-  private kind = new Int8Array(64);
-  /** The other end of the same edge (-1 for a disc). */
-  private mate = new Int32Array(64);
-  /** Change of the count when p passes the end point upwards. */
-  private step = new Int8Array(64);
-  /** End points by position, low to high; and each end point's position. */
-  private order = new Int32Array(64);
-  private at = new Int32Array(64);
-  /**
-   * Count just above each position: the discs covering p plus the edges not crossed
-   * (2 below everything); the lines of a gap whose count is 0 cross both edges freely.
-   */
-  private count = new Int32Array(64);
-  /** When the neighbours at positions k and k + 1 swap, and a min-heap of positions by that angle. */
-  private swapAt = new Float64Array(64);
-  private heap = new Int32Array(64);
-  private inHeap = new Int32Array(64);
-  private heapSize = 0;
-  /** Free length at the current angle as cx cos θ + cy sin θ + cs. */
-  private cx = 0;
-  private cy = 0;
-  private cs = 0;
-  /** Rounding scale of a projection (sketch units) for the order tests. */
-  private tol = 0;
-  private scale = 0;
-  /** Origin of the coordinates (sketch units). */
+  private readonly k = new KineticOrder();
+  /** Per member (0, 1): 1 for a circle (centre mx, my), 0 for a straight edge (left normal mx, my). */
+  private readonly round = new Int8Array(2);
+  private readonly mx = new Float64Array(2);
+  private readonly my = new Float64Array(2);
+  private readonly kind = new Int8Array(4);
+  /** Per blocking disc: centre about the origin, and whether it lies between (per circle member). */
+  private cx = new Float64Array(32);
+  private cy = new Float64Array(32);
+  private between = new Uint8Array(64);
+  private discs = 0;
+  /** Sign of the line direction (-sin θ, cos θ) from member 0 to member 1 in the current window. */
+  private sense = 1;
+  /** Angles at which a disc's order with a circle member changes, and which (disc * 2 + member). */
+  private flipAt = new Float64Array(64);
+  private flipOf = new Int32Array(64);
+  private flips = 0;
+  /** Open windows (pairs of angles) of the members alone. */
+  private readonly windows = new Float64Array(8);
   private ox = 0;
   private oy = 0;
+  private readonly memberSteps = (o: KineticOrder) => this.setSteps(o);
+
+  /** Member `m` (0 or 1): the straight edge a -> b, radiating on its left. */
+  segment(m: number, ax: number, ay: number, bx: number, by: number): void {
+    this.round[m] = 0;
+    this.kind[2 * m] = this.kind[2 * m + 1] = END;
+    this.mx[m] = ay - by;
+    this.my[m] = bx - ax;
+    this.put(2 * m, ax, ay, 0, 2 * m + 1);
+    this.put(2 * m + 1, bx, by, 0, 2 * m);
+  }
+
+  /** Member `m` (0 or 1): a whole solid circle. */
+  circle(m: number, cx: number, cy: number, r: number): void {
+    this.round[m] = 1;
+    this.kind[2 * m] = LOW;
+    this.kind[2 * m + 1] = HIGH;
+    this.mx[m] = cx - this.ox;
+    this.my[m] = cy - this.oy;
+    this.put(2 * m, cx, cy, -r, -1);
+    this.put(2 * m + 1, cx, cy, r, -1);
+  }
 
   /**
-   * L_i F_ij (sketch units) between edge i = a0 -> a1 and edge j = b0 -> b1 (each
-   * radiating on its left, each wholly in front of the other's line, facing), past the
-   * discs (dx, dy, dr)[k], k in `discs`, each wholly in front of both lines. NaN
-   * when rounding lost the order of the end points (never seen; the caller then
-   * integrates the pair its usual way).
+   * L_i F_ij (sketch units) between the two members (set first, about the origin
+   * `ox, oy`, then this call) past the discs (dx, dy, dr)[c], c in `discs`, each
+   * wholly in front of a straight member's line and apart from a round one. NaN when
+   * rounding lost the order of the end points (never seen; the caller then integrates
+   * the pair its usual way).
    */
-  exchange(
-    a0x: number,
-    a0y: number,
-    a1x: number,
-    a1y: number,
-    b0x: number,
-    b0y: number,
-    b1x: number,
-    b1y: number,
-    dx: ArrayLike<number>,
-    dy: ArrayLike<number>,
-    dr: ArrayLike<number>,
-    discs: ArrayLike<number>,
-  ): number {
-    // About the middle of the four ends: projections stay small, so does their rounding.
-    const ox = 0.25 * (a0x + a1x + b0x + b1x),
-      oy = 0.25 * (a0y + a1y + b0y + b1y);
-    this.grow(4 + 2 * discs.length);
+  exchange(dx: ArrayLike<number>, dy: ArrayLike<number>, dr: ArrayLike<number>, discs: ArrayLike<number>): number {
+    const K = this.k,
+      n = discs.length;
+    K.grow(4 + 2 * n);
+    if (this.cx.length < n) {
+      this.cx = new Float64Array(2 * n);
+      this.cy = new Float64Array(2 * n);
+      this.between = new Uint8Array(4 * n);
+      this.flipAt = new Float64Array(8 * n);
+      this.flipOf = new Int32Array(8 * n);
+    }
+    for (let q = 0; q < n; q++) {
+      const c = discs[q];
+      this.cx[q] = dx[c] - this.ox;
+      this.cy[q] = dy[c] - this.oy;
+      this.put(4 + 2 * q, dx[c], dy[c], -dr[c], -1);
+      this.put(5 + 2 * q, dx[c], dy[c], dr[c], -1);
+    }
+    this.discs = n;
+    K.below = 2; // below everything p crosses neither member
+    let scale = 0;
+    for (let e = 0; e < 4 + 2 * n; e++) scale = Math.max(scale, Math.abs(K.x[e]) + Math.abs(K.y[e]) + Math.abs(K.s[e]));
+    K.tol = 1e-11 * scale;
+    let total = 0;
+    const w = this.openWindows();
+    for (let q = 0; q < w; q += 2) total += this.sweep(this.windows[q], this.windows[q + 1]);
+    return 0.5 * total;
+  }
+
+  /** Centre the coordinates of the next members and discs at (ox, oy): small projections, small rounding. */
+  origin(ox: number, oy: number): void {
     this.ox = ox;
     this.oy = oy;
-    this.scale = 0;
-    this.put(0, a0x, a0y, 0, EDGE_END, 1);
-    this.put(1, a1x, a1y, 0, EDGE_END, 0);
-    this.put(2, b0x, b0y, 0, EDGE_END, 3);
-    this.put(3, b1x, b1y, 0, EDGE_END, 2);
-    for (let k = 0; k < discs.length; k++) {
-      const c = discs[k];
-      this.put(4 + 2 * k, dx[c], dy[c], -dr[c], DISC_LOW, -1);
-      this.put(5 + 2 * k, dx[c], dy[c], dr[c], DISC_HIGH, -1);
+  }
+
+  private put(e: number, px: number, py: number, ps: number, mate: number): void {
+    const K = this.k;
+    K.x[e] = px - this.ox;
+    K.y[e] = py - this.oy;
+    K.s[e] = ps;
+    K.mate[e] = mate;
+  }
+
+  /**
+   * The angles over half a turn at which lines cross both members (windows[0..w),
+   * from-to pairs, widened by 1e-9; one window but at a wrap), by a sweep of the
+   * members' four end points alone. Returns w.
+   */
+  private openWindows(): number {
+    const K = this.k,
+      discs = this.discs;
+    K.size = 4;
+    this.discs = 0;
+    K.start(0, this.memberSteps);
+    let w = 0,
+      open = K.anyFree(),
+      now = 0;
+    if (open) this.windows[w++] = 0;
+    for (let guard = 0; K.swaps.size > 0 && guard < 64; guard++) {
+      const t = K.swaps.key[K.swaps.top()];
+      if (t > Math.PI) break;
+      now = t;
+      K.swap(K.swaps.top(), now, Math.cos(now), Math.sin(now));
+      const free = K.anyFree();
+      if (free !== open && w < 8) this.windows[w++] = now;
+      open = free;
     }
-    this.size = 4 + 2 * discs.length;
-    this.tol = 1e-11 * this.scale;
-    // Lines that cross both edges run between the two diagonals a0-b0 and a1-b1 (the
-    // crossed strings; a0 a1 b0 b1 go round anticlockwise). Their normals: from the
-    // first diagonal's, turning anticlockwise to the second's, less than half a turn;
-    // widened a little (outside it nothing is free).
-    const t0 = Math.atan2(b0y - a0y, b0x - a0x) - Math.PI / 2;
-    let t1 = Math.atan2(b1y - a1y, b1x - a1x) - Math.PI / 2;
-    t1 -= TWO_PI * Math.floor((t1 - t0) / TWO_PI);
-    return this.sweep(t0 - 1e-9, t1 + 1e-9);
+    if (open) this.windows[w++] = Math.PI;
+    this.discs = discs;
+    // Open at both ends of the half turn: one window across it.
+    if (w >= 4 && this.windows[0] === 0 && this.windows[w - 1] === Math.PI) {
+      this.windows[0] = this.windows[w - 2];
+      this.windows[1] += Math.PI;
+      w -= 2;
+    }
+    for (let q = 0; q < w; q += 2) {
+      if (this.windows[q + 1] - this.windows[q] >= Math.PI) continue;
+      this.windows[q] -= 1e-9;
+      this.windows[q + 1] += 1e-9;
+    }
+    return w;
   }
 
-  private put(e: number, px: number, py: number, ps: number, kind: number, mate: number): void {
-    const x = px - this.ox,
-      y = py - this.oy;
-    this.x[e] = x;
-    this.y[e] = y;
-    this.s[e] = ps;
-    this.kind[e] = kind;
-    this.mate[e] = mate;
-    this.scale = Math.max(this.scale, Math.abs(x) + Math.abs(y) + Math.abs(ps));
-  }
-
-  /** Half the free measure of lines with normal angles from `from` to `to` (radians, to - from <= pi + tiny); NaN if the order was lost. */
+  /** Twice L_i F_ij from the lines with normal angles `from` to `to` (radians); NaN if the order was lost. */
   private sweep(from: number, to: number): number {
-    this.start(from);
+    const K = this.k;
+    K.size = 4 + 2 * this.discs;
+    this.sense = this.senseAt(0.5 * (from + to));
+    this.findFlips(from, to);
+    K.start(from, this.memberSteps);
     let total = 0,
       now = from,
       sinNow = Math.sin(from),
-      cosNow = Math.cos(from);
+      cosNow = Math.cos(from),
+      f = 0;
     // Each pair of end points swaps at most twice in half a turn; more means rounding
     // has lost the order: give up (NaN), and the caller integrates the pair otherwise.
-    let budget = 2 * this.size * this.size + 16;
-    while (this.heapSize > 0) {
-      if (--budget < 0) return NaN;
-      const k = this.heap[0];
-      const t = this.swapAt[k];
+    let budget = 2 * K.size * K.size + this.flips + 16;
+    for (;;) {
+      const top = K.swaps.size > 0 ? K.swaps.top() : -1;
+      const ts = top >= 0 ? K.swaps.key[top] : Infinity,
+        tf = f < this.flips ? this.flipAt[f] : Infinity;
+      const t = ts < tf ? ts : tf;
       if (t > to) break;
+      if (--budget < 0) return NaN;
       if (t > now) {
         const sinT = Math.sin(t),
           cosT = Math.cos(t);
-        total += this.cx * (sinT - sinNow) + this.cy * (cosNow - cosT) + this.cs * (t - now);
+        total += K.cx * (sinT - sinNow) + K.cy * (cosNow - cosT) + K.cs * (t - now);
         now = t;
         sinNow = sinT;
         cosNow = cosT;
       }
-      this.swap(k, now, cosNow, sinNow);
+      if (tf <= ts) this.flip(this.flipOf[f++]);
+      else K.swap(top, now, cosNow, sinNow);
     }
     const sinT = Math.sin(to),
       cosT = Math.cos(to);
-    total += this.cx * (sinT - sinNow) + this.cy * (cosNow - cosT) + this.cs * (to - now);
-    return 0.5 * total;
+    return total + K.cx * (sinT - sinNow) + K.cy * (cosNow - cosT) + K.cs * (to - now);
   }
 
-  /** Sort the end points at angle t, set the counts, the free length and every swap angle. */
-  private start(t: number): void {
-    const n = this.size,
-      X = this.x,
-      Y = this.y,
-      S = this.s,
-      order = this.order;
-    const c = Math.cos(t),
-      s = Math.sin(t);
-    // Insertion sort by projection, then by its rate of change (ties at the start angle).
-    for (let e = 0; e < n; e++) {
-      const v = X[e] * c + Y[e] * s + S[e],
-        w = Y[e] * c - X[e] * s;
-      let k = e;
-      while (k > 0) {
-        const f = order[k - 1];
-        const vf = X[f] * c + Y[f] * s + S[f];
-        if (vf < v || (vf === v && Y[f] * c - X[f] * s <= w)) break;
-        order[k] = f;
-        k--;
-      }
-      order[k] = e;
-    }
-    const step = this.step,
-      kind = this.kind,
-      at = this.at;
-    for (let k = 0; k < n; k++) at[order[k]] = k;
-    let run = 2;
-    for (let k = 0; k < n; k++) {
-      const e = order[k];
-      // Passing an edge's lower end, p starts crossing that edge: one edge fewer not crossed.
-      if (kind[e] === EDGE_END) step[e] = at[this.mate[e]] > k ? -1 : 1;
-      else step[e] = kind[e] === DISC_LOW ? 1 : -1;
-      run += step[e];
-      this.count[k] = run;
-    }
-    this.cx = this.cy = this.cs = 0;
-    for (let k = 0; k + 1 < n; k++) {
-      if (this.count[k] !== 0) continue;
-      const lo = order[k],
-        hi = order[k + 1];
-      this.cx += X[hi] - X[lo];
-      this.cy += Y[hi] - Y[lo];
-      this.cs += S[hi] - S[lo];
-    }
-    this.heapSize = 0;
-    for (let k = 0; k + 1 < n; k++) {
-      this.swapAt[k] = this.nextSwap(k, t, c, s);
-      this.heap[this.heapSize] = k;
-      this.inHeap[k] = this.heapSize++;
-    }
-    for (let h = (this.heapSize >> 1) - 1; h >= 0; h--) this.down(h);
-  }
-
-  /** Swap the end points at positions k and k + 1 at angle `now` (cosine `cn`, sine `sn`); keep counts, free length and swap angles. */
-  private swap(k: number, now: number, cn: number, sn: number): void {
-    const order = this.order,
-      count = this.count,
-      n = this.size;
-    const u = order[k],
-      v = order[k + 1];
-    const below = k > 0 ? count[k - 1] : 2;
-    const freeBelow = k > 0 && count[k - 1] === 0 ? 1 : 0,
-      freeAbove = k + 2 < n && count[k + 1] === 0 ? 1 : 0,
-      freeOld = count[k] === 0 ? 1 : 0;
-    // The two ends of one edge swap roles: the lower one is where crossing starts.
-    if (this.mate[u] === v) {
-      const t = this.step[u];
-      this.step[u] = this.step[v];
-      this.step[v] = t;
-    }
-    order[k] = v;
-    order[k + 1] = u;
-    this.at[v] = k;
-    this.at[u] = k + 1;
-    count[k] = below + this.step[v];
-    const freeNew = count[k] === 0 ? 1 : 0;
-    const f = freeBelow + freeAbove - freeOld - freeNew;
-    if (f !== 0) {
-      this.cx += f * (this.x[v] - this.x[u]);
-      this.cy += f * (this.y[v] - this.y[u]);
-      this.cs += f * (this.s[v] - this.s[u]);
-    }
-    if (k > 0) this.reschedule(k - 1, now, cn, sn);
-    this.reschedule(k, now, cn, sn);
-    if (k + 2 < n) this.reschedule(k + 1, now, cn, sn);
+  /** +1 or -1: the sign of the direction (-sin t, cos t) from member 0 to member 1 along lines crossing both. */
+  private senseAt(t: number): number {
+    const dx = -Math.sin(t),
+      dy = Math.cos(t);
+    const M = this.round;
+    // Lines leave a straight member into its front, and arrive at one from its front.
+    let v: number;
+    if (M[0] === 0) v = dx * this.mx[0] + dy * this.my[0];
+    else if (M[1] === 0) v = -(dx * this.mx[1] + dy * this.my[1]);
+    else v = dx * (this.mx[1] - this.mx[0]) + dy * (this.my[1] - this.my[0]);
+    return v < 0 ? -1 : 1;
   }
 
   /**
-   * The next angle from `now` (cosine and sine `cn`, `sn`) at which the end point at
-   * position k passes the one at k + 1. Their difference is R cos(θ - φ) + ds; it
-   * turns positive at θ = φ - α, cos α = -ds / R, sin α = h / R. A pair found out of
-   * order by more than rounding swaps now.
+   * Which discs lie between the members just after `from`, and the angles in (from,
+   * to] at which that changes (the line square to the centres of a disc and a circle
+   * member), sorted.
    */
-  private nextSwap(k: number, now: number, cn: number, sn: number): number {
-    const u = this.order[k],
-      v = this.order[k + 1];
-    const dx = this.x[u] - this.x[v],
-      dy = this.y[u] - this.y[v],
-      ds = this.s[u] - this.s[v];
-    const late = dx * cn + dy * sn + ds > this.tol;
-    const R2 = dx * dx + dy * dy;
-    if (R2 <= ds * ds) return late ? now : Infinity;
-    const h = Math.sqrt(R2 - ds * ds || 0);
-    if (h * h < GRAZE * GRAZE * R2) {
-      if (ds < 0) return Infinity; // u is above v only for a moment
-      return now; // u is above v but for a moment
+  private findFlips(from: number, to: number): void {
+    const at = from + 1e-9;
+    const dx = -Math.sin(at) * this.sense,
+      dy = Math.cos(at) * this.sense;
+    let flips = 0;
+    for (let q = 0; q < this.discs; q++) {
+      for (let m = 0; m < 2; m++) {
+        if (this.round[m] === 0) {
+          this.between[2 * q + m] = 1;
+          continue;
+        }
+        const wx = this.cx[q] - this.mx[m],
+          wy = this.cy[q] - this.my[m];
+        const along = wx * dx + wy * dy;
+        this.between[2 * q + m] = (m === 0 ? along > 0 : along < 0) ? 1 : 0;
+        // w . (-sin t, cos t) = 0 at t = atan2(wy, wx) + j pi.
+        let t = Math.atan2(wy, wx);
+        t += Math.PI * Math.ceil((at - t) / Math.PI);
+        for (; t <= to; t += Math.PI) {
+          if (t <= at) continue;
+          let k = flips++;
+          while (k > 0 && this.flipAt[k - 1] > t) {
+            this.flipAt[k] = this.flipAt[k - 1];
+            this.flipOf[k] = this.flipOf[k - 1];
+            k--;
+          }
+          this.flipAt[k] = t;
+          this.flipOf[k] = 2 * q + m;
+        }
+      }
     }
-    if (late) return now;
-    // θ = φ - α: cos θ = (-dx ds + dy h) / R^2, sin θ = (-dy ds - dx h) / R^2.
-    let t = Math.atan2(-dy * ds - dx * h, dy * h - dx * ds);
-    t += TWO_PI * Math.ceil((now - NOW - t) / TWO_PI);
-    return t > now ? t : now;
+    this.flips = flips;
   }
 
-  private reschedule(k: number, now: number, cn: number, sn: number): void {
-    const old = this.swapAt[k];
-    const t = this.nextSwap(k, now, cn, sn);
-    this.swapAt[k] = t;
-    const h = this.inHeap[k];
-    if (t < old) this.up(h);
-    else if (t > old) this.down(h);
+  /** Disc q = b >> 1 passes member b & 1's centre: it is between the members or no longer. */
+  private flip(b: number): void {
+    this.between[b] ^= 1;
+    const q = b >> 1,
+      K = this.k;
+    const act = this.between[2 * q] & this.between[2 * q + 1];
+    const lo = 4 + 2 * q;
+    if (K.step[lo] === act) return;
+    K.step[lo] = act;
+    K.step[lo + 1] = -act;
+    K.recount(Math.min(K.at[lo], K.at[lo + 1]), K.size);
   }
 
-  private up(h: number): void {
-    const heap = this.heap,
-      key = this.swapAt,
-      where = this.inHeap;
-    const k = heap[h],
-      t = key[k];
-    while (h > 0) {
-      const p = (h - 1) >> 1;
-      if (key[heap[p]] <= t) break;
-      heap[h] = heap[p];
-      where[heap[h]] = h;
-      h = p;
+  /** Steps from the order: an edge's lower end -1 (crossing starts), upper +1; a circle member's low side -1, high +1; a disc between its members +1 low, -1 high. */
+  private setSteps(o: KineticOrder): void {
+    const step = o.step,
+      at = o.at;
+    for (let e = 0; e < 4; e++) {
+      const kind = this.kind[e];
+      step[e] = kind === END ? (at[o.mate[e]] > at[e] ? -1 : 1) : kind === LOW ? -1 : 1;
     }
-    heap[h] = k;
-    where[k] = h;
-  }
-
-  private down(h: number): void {
-    const heap = this.heap,
-      key = this.swapAt,
-      where = this.inHeap,
-      size = this.heapSize;
-    const k = heap[h],
-      t = key[k];
-    for (;;) {
-      let c = 2 * h + 1;
-      if (c >= size) break;
-      if (c + 1 < size && key[heap[c + 1]] < key[heap[c]]) c++;
-      if (key[heap[c]] >= t) break;
-      heap[h] = heap[c];
-      where[heap[h]] = h;
-      h = c;
+    for (let q = 0; q < this.discs; q++) {
+      const act = this.between[2 * q] & this.between[2 * q + 1];
+      step[4 + 2 * q] = act;
+      step[5 + 2 * q] = -act;
     }
-    heap[h] = k;
-    where[k] = h;
-  }
-
-  private grow(n: number): void {
-    if (this.x.length >= n) return;
-    const m = 2 * n;
-    this.x = new Float64Array(m);
-    this.y = new Float64Array(m);
-    this.s = new Float64Array(m);
-    this.kind = new Int8Array(m);
-    this.mate = new Int32Array(m);
-    this.step = new Int8Array(m);
-    this.order = new Int32Array(m);
-    this.at = new Int32Array(m);
-    this.count = new Int32Array(m);
-    this.swapAt = new Float64Array(m);
-    this.heap = new Int32Array(m);
-    this.inHeap = new Int32Array(m);
   }
 }

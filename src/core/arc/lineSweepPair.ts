@@ -3,16 +3,14 @@ import type { Curve } from './curve';
 import { LineSweep } from './lineSweep';
 import type { PairScene } from './pairScene';
 
-// When two straight edges may take the line sweep (lineSweep.ts) instead of the
-// integration along the emitter: each edge cut to its part in front of the other's
-// line, every blocking circle wholly in front of both lines (a line that crosses both
-// edges and such a disc is blocked by it) or wholly behind one of them (it blocks
-// nothing), and no polygon edge entering the quadrilateral the two edges span (every
-// sight line lies in it). Float tests with margins; in doubt the pair is left to the
-// integration. Sketch units.
-
-/** Fewest blocking circles for the sweep: below, the integration along the emitter costs less. */
-export const SWEEP_FROM_CIRCLES = 8;
+// When a pair may take the line sweep (lineSweep.ts) instead of the integration along
+// the emitter: each curve a straight edge or a whole solid circle; a straight edge cut
+// to its part in front of the other's line, and a circle wholly in front of a straight
+// partner's line; every blocking circle wholly in front of each straight member's line
+// (then a line that crosses the member and the circle meets the circle past the
+// member) or wholly behind one (it blocks nothing), and apart from a round member; and
+// no polygon edge entering the pair's outer hull (every sight line lies in it). Float
+// tests with margins; in doubt the pair is left to the integration. Sketch units.
 
 /** Relative slack on radii: far above the rounding of the distances below. */
 const SLACK = 1e-9;
@@ -20,53 +18,100 @@ const SLACK = 1e-9;
 export class LineSweepPair {
   private readonly sweep = new LineSweep();
   private readonly kept: number[] = [];
-  /** The two edges cut to their facing parts: a0, a1, b0, b1 (x, y). */
+  /** Straight members cut to their facing parts: a0, a1 of the emitter, then of the target (x, y). */
   private readonly q = new Float64Array(8);
 
   /** `margin`: absolute margin of the side tests (sketch units, from the sketch's extent). */
   constructor(private readonly margin: number) {}
 
   /**
-   * L_i F_ij (sketch units) of straight edges `em` and `tg` past the scene's blockers
-   * by the line sweep, or -1 when the pair is not one it takes (then integrate it).
+   * L_i F_ij (sketch units) of `em` and `tg` past the scene's blockers by the line
+   * sweep, or -1 when the pair is not one it takes (then integrate it).
    */
   exchange(em: Curve, tg: Curve, scene: PairScene, A: ArcSet): number {
     const circles = scene.circles;
-    if (em.isArc || tg.isArc || circles.length < SWEEP_FROM_CIRCLES) return -1;
-    const q = this.q;
-    if (!facingPart(em, tg, q, 0) || !facingPart(tg, em, q, 4)) return -1;
-    const kept = this.kept,
+    if (!whole(em) || !whole(tg)) return -1;
+    const q = this.q,
       m = this.margin;
+    if (!em.isArc && !tg.isArc) {
+      if (!facingPart(em, tg, q, 0) || !facingPart(tg, em, q, 4)) return -1;
+    } else {
+      // A circle wholly in front of a straight partner sees all of it.
+      if (!em.isArc && !inFront(em, tg.cx, tg.cy, tg.r * (1 + SLACK) + m)) return -1;
+      if (!tg.isArc && !inFront(tg, em.cx, em.cy, em.r * (1 + SLACK) + m)) return -1;
+      if (!em.isArc) ends(em, q, 0);
+      if (!tg.isArc) ends(tg, q, 4);
+    }
+    const kept = this.kept;
     kept.length = 0;
     for (let k = 0; k < circles.length; k++) {
       const c = circles[k];
       const r = A.r[c] * (1 + SLACK) + m;
-      const di = sideDistance(em.ax, em.ay, em.bx, em.by, A.cx[c], A.cy[c]),
-        dj = sideDistance(tg.ax, tg.ay, tg.bx, tg.by, A.cx[c], A.cy[c]);
+      const x = A.cx[c],
+        y = A.cy[c];
+      if (em.isArc ? !apart(em, x, y, r) : false) return -1;
+      if (tg.isArc ? !apart(tg, x, y, r) : false) return -1;
+      const di = em.isArc ? Infinity : sideDistance(em.ax, em.ay, em.bx, em.by, x, y),
+        dj = tg.isArc ? Infinity : sideDistance(tg.ax, tg.ay, tg.bx, tg.by, x, y);
       if (di > r && dj > r) kept.push(c);
       else if (!(di < -r || dj < -r)) return -1; // across a line: left to the integration
     }
     const seg = scene.seg;
-    for (let s = 0; s < seg.length; s += 4) if (this.entersQuad(seg[s], seg[s + 1], seg[s + 2], seg[s + 3])) return -1;
-    const g = this.sweep.exchange(q[0], q[1], q[2], q[3], q[4], q[5], q[6], q[7], A.cx, A.cy, A.r, kept);
+    for (let s = 0; s < seg.length; s += 4)
+      if (this.entersHull(scene.hull, seg[s], seg[s + 1], seg[s + 2], seg[s + 3])) return -1;
+    const L = this.sweep;
+    const ax = em.isArc ? em.cx : 0.5 * (q[0] + q[2]),
+      ay = em.isArc ? em.cy : 0.5 * (q[1] + q[3]),
+      bx = tg.isArc ? tg.cx : 0.5 * (q[4] + q[6]),
+      by = tg.isArc ? tg.cy : 0.5 * (q[5] + q[7]);
+    L.origin(0.5 * (ax + bx), 0.5 * (ay + by));
+    if (em.isArc) L.circle(0, em.cx, em.cy, em.r);
+    else L.segment(0, q[0], q[1], q[2], q[3]);
+    if (tg.isArc) L.circle(1, tg.cx, tg.cy, tg.r);
+    else L.segment(1, q[4], q[5], q[6], q[7]);
+    const g = L.exchange(A.cx, A.cy, A.r, kept);
     return g >= 0 ? g : -1;
   }
 
-  /** May the segment enter the open quadrilateral a0 a1 b0 b1 (anticlockwise)? No when both ends lie on or outside one side. */
-  private entersQuad(x0: number, y0: number, x1: number, y1: number): boolean {
-    const q = this.q,
+  /** May the segment enter the open convex hull H (flat x, y, anticlockwise)? No when both ends lie on or outside one side. */
+  private entersHull(H: readonly number[], x0: number, y0: number, x1: number, y1: number): boolean {
+    const n = H.length >> 1,
       m = this.margin;
-    for (let k = 0; k < 4; k++) {
-      const n = (k + 1) & 3;
-      const sx = q[2 * k],
-        sy = q[2 * k + 1],
-        ex = q[2 * n],
-        ey = q[2 * n + 1];
-      if (sx === ex && sy === ey) continue; // two edges meeting at a corner: a triangle
+    if (n < 3) return true;
+    for (let k = 0; k < n; k++) {
+      const e = k + 1 === n ? 0 : k + 1;
+      const sx = H[2 * k],
+        sy = H[2 * k + 1],
+        ex = H[2 * e],
+        ey = H[2 * e + 1];
+      if (sx === ex && sy === ey) continue;
       if (sideDistance(sx, sy, ex, ey, x0, y0) <= m && sideDistance(sx, sy, ex, ey, x1, y1) <= m) return false;
     }
     return true;
   }
+}
+
+/** A straight edge's ends into out[at..at+3]. */
+function ends(c: Curve, out: Float64Array, at: number): void {
+  out[at] = c.ax;
+  out[at + 1] = c.ay;
+  out[at + 2] = c.bx;
+  out[at + 3] = c.by;
+}
+
+/** A straight edge, or an arc that is a whole solid circle. */
+function whole(c: Curve): boolean {
+  return !c.isArc || (c.solid && c.span >= 2 * Math.PI);
+}
+
+/** Is the disc (x, y, r) surely apart from circle member c (its own circle excluded by the caller)? */
+function apart(c: Curve, x: number, y: number, r: number): boolean {
+  return Math.sqrt((x - c.cx) ** 2 + (y - c.cy) ** 2) > c.r + r;
+}
+
+/** Is the disc (x, y, r) wholly in front of straight edge c's line? */
+function inFront(c: Curve, x: number, y: number, r: number): boolean {
+  return sideDistance(c.ax, c.ay, c.bx, c.by, x, y) > r;
 }
 
 /** Signed distance of (x, y) from the line a -> b, positive on its left (sketch units). */

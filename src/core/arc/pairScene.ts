@@ -19,7 +19,8 @@ export class PairScene {
   tangentCircles: number[] = [];
   /** Fixed points (flat x, y): ends of blocking segments and of the target. */
   pts: number[] = [];
-  private hull: number[] = [];
+  /** The convex outer bound of the pair's sight lines (flat x, y, anticlockwise): the hull of both curves' outer polygons. */
+  readonly hull: number[] = [];
   private kept: number[] = [];
   private outer: number[] = [];
   private readonly stamp: Int32Array;

@@ -18,9 +18,11 @@ function swept(a: Seg, b: Seg, discs: Disc[]): number {
   const cx = discs.map((d) => d[0]),
     cy = discs.map((d) => d[1]),
     r = discs.map((d) => d[2]);
-  return new LineSweep().exchange(
-    ...a,
-    ...b,
+  const sweep = new LineSweep();
+  sweep.origin(0.25 * (a[0] + a[2] + b[0] + b[2]), 0.25 * (a[1] + a[3] + b[1] + b[3]));
+  sweep.segment(0, ...a);
+  sweep.segment(1, ...b);
+  return sweep.exchange(
     cx,
     cy,
     r,
@@ -70,6 +72,58 @@ function facingPair(rand: () => number): { a: Seg; b: Seg } {
     if (inFront(b, 0, 0, 0) && inFront(b, w, 0, 0)) return { a, b };
   }
 }
+
+/** L F between members (a straight edge, or a whole tube as [x, y, r]) past discs, by the sweep. */
+function sweptMembers(a: Seg | Disc, b: Seg | Disc, discs: Disc[]): number {
+  const sweep = new LineSweep();
+  const mid = (m: Seg | Disc) => (m.length === 4 ? [0.5 * (m[0] + m[2]), 0.5 * (m[1] + m[3])] : [m[0], m[1]]);
+  sweep.origin(0.5 * (mid(a)[0] + mid(b)[0]), 0.5 * (mid(a)[1] + mid(b)[1]));
+  for (const [k, m] of [a, b].entries()) {
+    if (m.length === 4) sweep.segment(k, ...m);
+    else sweep.circle(k, ...m);
+  }
+  return sweep.exchange(
+    discs.map((d) => d[0]),
+    discs.map((d) => d[1]),
+    discs.map((d) => d[2]),
+    discs.map((_, k) => k),
+  );
+}
+
+/** The same by the reference: a tube is one solid arc, whole. */
+function referenceMembers(a: Seg | Disc, b: Seg | Disc, discs: Disc[]): number {
+  const scene: OracleScene = { parts: [], circles: [] };
+  for (const m of [a, b]) {
+    if (m.length === 4) scene.parts.push({ kind: 'segment', ax: m[0], ay: m[1], bx: m[2], by: m[3] });
+    else circleParts(scene, 'solid', m[0], m[1], m[2], 1);
+  }
+  for (const [x, y, r] of discs) circleParts(scene, 'solid', x, y, r, 1);
+  const length = a.length === 4 ? Math.hypot(a[2] - a[0], a[3] - a[1]) : 2 * Math.PI * a[2];
+  return oracleRow(scene, 0, 1e-12)[1] * length;
+}
+
+describe('the line sweep with a whole tube as one member or both', () => {
+  it('matches the reference past discs, at random', { timeout: 120_000 }, () => {
+    const rand = mulberry32(2024);
+    const apart = (p: Disc, q: Disc, gap: number) => Math.hypot(p[0] - q[0], p[1] - q[1]) > p[2] + q[2] + gap;
+    for (let k = 0; k < 45; k++) {
+      const tube: Disc = [1 + 3 * rand(), 1.2 + rand(), 0.1 + 0.3 * rand()];
+      const floor: Seg = [0, 0, 5, 0];
+      const other: Disc = [1 + 3 * rand(), 2.6 + rand(), 0.1 + 0.3 * rand()];
+      if (!apart(tube, other, 0.05)) continue;
+      const discs: Disc[] = [];
+      for (let t = 0; t < 300 && discs.length < 1 + (k % 9); t++) {
+        const d: Disc = [5 * rand(), 0.2 + 3.5 * rand(), 0.04 + 0.2 * rand()];
+        if (d[1] < d[2] * 1.01 || !apart(d, tube, 1e-6) || !apart(d, other, 1e-6)) continue;
+        if (discs.some((e) => !apart(d, e, 1e-6))) continue;
+        discs.push(d);
+      }
+      const [a, b]: [Seg | Disc, Seg | Disc] =
+        k % 3 === 0 ? [floor, tube] : k % 3 === 1 ? [tube, floor] : [tube, other];
+      expect(Math.abs(sweptMembers(a, b, discs) - referenceMembers(a, b, discs))).toBeLessThan(1e-9);
+    }
+  });
+});
 
 describe('the line sweep between two straight edges', () => {
   it('equals the crossed strings with nothing between (random, a shared corner, a T)', () => {
@@ -127,6 +181,14 @@ describe('the line sweep between two straight edges', () => {
         expect(Math.abs(swept(a, b, discs) - reference(a, b, discs))).toBeLessThan(1e-9);
       }
     }
+  });
+
+  it('matches the reference on its first call with many discs (its buffers grow)', { timeout: 120_000 }, () => {
+    const floor: Seg = [0, 0, 8, 0],
+      roof: Seg = [8, 2, 0, 2];
+    const discs: Disc[] = [];
+    for (let k = 0; k < 40; k++) discs.push([0.1 + 0.2 * k, 0.6 + 0.7 * (k % 2), 0.07]);
+    expect(Math.abs(swept(floor, roof, discs) - reference(floor, roof, discs))).toBeLessThan(1e-9);
   });
 
   it('is symmetric in its two edges (reciprocity)', () => {

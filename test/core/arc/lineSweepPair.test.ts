@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { ArcSet } from '../../../src/core/arc/arcs';
 import { Curve } from '../../../src/core/arc/curve';
 import { LineSweep } from '../../../src/core/arc/lineSweep';
-import { LineSweepPair, SWEEP_FROM_CIRCLES } from '../../../src/core/arc/lineSweepPair';
+import { LineSweepPair } from '../../../src/core/arc/lineSweepPair';
 import type { PairScene } from '../../../src/core/arc/pairScene';
 import type { CircleInput } from '../../../src/core/scene';
 import { boxCorners } from '../helpers';
@@ -26,21 +26,34 @@ function segment(ax: number, ay: number, bx: number, by: number): Curve {
   return c;
 }
 
-/** Circles as the ArcSet fields the pair reads, and a scene listing all of them as blockers plus `seg`. */
+/** Circles as the ArcSet fields the pair reads, and a scene listing all of them as blockers plus `seg`, in the hull of the floor and roof below. */
 function blockers(discs: number[][], seg: number[] = []): { A: ArcSet; scene: PairScene } {
   const A = {
     cx: Float64Array.from(discs, (d) => d[0]),
     cy: Float64Array.from(discs, (d) => d[1]),
     r: Float64Array.from(discs, (d) => d[2]),
   } as unknown as ArcSet;
-  const scene = { circles: discs.map((_, k) => k), seg } as unknown as PairScene;
+  const scene = { circles: discs.map((_, k) => k), seg, hull: [0, 0, 4, 0, 4, 2, 0, 2] } as unknown as PairScene;
   return { A, scene };
+}
+
+function tube(cx: number, cy: number, r: number, span = 2 * Math.PI): Curve {
+  const c = new Curve();
+  c.isArc = true;
+  c.solid = true;
+  c.cx = cx;
+  c.cy = cy;
+  c.r = r;
+  c.start = 0;
+  c.span = span;
+  c.length = r * span;
+  return c;
 }
 
 const floor = segment(0, 0, 4, 0),
   roof = segment(4, 2, 0, 2);
 /** A row of tubes between floor and roof. */
-const row = Array.from({ length: SWEEP_FROM_CIRCLES }, (_, k) => [0.3 + 0.45 * k, 1, 0.15]);
+const row = Array.from({ length: 8 }, (_, k) => [0.3 + 0.45 * k, 1, 0.15]);
 
 describe('which pairs take the line sweep', () => {
   const pair = new LineSweepPair(1e-12);
@@ -50,13 +63,18 @@ describe('which pairs take the line sweep', () => {
     expect(pair.exchange(floor, roof, scene, A)).toBeGreaterThan(0);
   });
 
-  it('leaves to the integration a pair with few circles, a circle across a line, or an edge inside', () => {
-    const few = blockers(row.slice(1));
-    expect(pair.exchange(floor, roof, few.scene, few.A)).toBe(-1);
+  it('leaves to the integration a pair with a circle across a line, or an edge inside', () => {
     const across = blockers([...row, [3.9, 1.95, 0.1]]); // crosses the roof's line
     expect(pair.exchange(floor, roof, across.scene, across.A)).toBe(-1);
     const baffle = blockers(row, [2, 0.2, 2.5, 0.4]); // a plate between the walls
     expect(pair.exchange(floor, roof, baffle.scene, baffle.A)).toBe(-1);
+  });
+
+  it('takes a wall and a whole tube; leaves an arc of a tube, or a tube across the wall, to the integration', () => {
+    const { A, scene } = blockers(row.slice(0, 3));
+    expect(pair.exchange(roof, tube(3, 0.5, 0.2), scene, A)).toBeGreaterThan(0);
+    expect(pair.exchange(roof, tube(3, 0.5, 0.2, Math.PI), scene, A)).toBe(-1);
+    expect(pair.exchange(floor, tube(3.7, -0.1, 0.2), scene, A)).toBe(-1);
   });
 
   it('leaves out a circle wholly behind one of the lines', () => {

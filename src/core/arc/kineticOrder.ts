@@ -1,0 +1,181 @@
+import { AngleHeap } from './angleHeap';
+
+// End points of intervals on a line turning about the origin, kept in order as the
+// angle turns (a kinetic sorted list). End point e sits at x[e] cos θ + y[e] sin θ +
+// s[e] (the projection, along the normal at angle θ, of a point or of a point moved
+// s along that normal). Passing e upwards changes a count by step[e]; the gaps whose
+// count is 0 are free, and their total length, a sinusoid in θ between swaps, is kept
+// as cx cos θ + cy sin θ + cs. Sketch units; angles in radians.
+
+const TWO_PI = 2 * Math.PI;
+/**
+ * Two end points whose order changes for less than 2 GRAZE (radians) keep their order:
+ * the length they would swap is below R GRAZE^2 over that span, under 1e-18 R.
+ */
+const GRAZE = 1e-6;
+/** A swap computed this close before the current angle (radians) happens now: rounding of the angle. */
+const NOW = 1e-10;
+
+export class KineticOrder {
+  size = 0;
+  x = new Float64Array(64);
+  y = new Float64Array(64);
+  s = new Float64Array(64);
+  /** Change of the count when p passes the end point upwards. */
+  step = new Int8Array(64);
+  /** The other end of the same edge, whose step it trades on a swap (-1: none). */
+  mate = new Int32Array(64);
+  /** End points by position, low to high; and each end point's position. */
+  order = new Int32Array(64);
+  at = new Int32Array(64);
+  /** Count just above each position (`below` under everything). */
+  count = new Int32Array(64);
+  below = 0;
+  readonly swaps = new AngleHeap();
+  /** Free length at the current angle: cx cos θ + cy sin θ + cs. */
+  cx = 0;
+  cy = 0;
+  cs = 0;
+  /** Rounding scale of a projection (sketch units) for the order tests. */
+  tol = 0;
+
+  /** Room for n end points; the end points set so far are kept. */
+  grow(n: number): void {
+    if (this.x.length >= n) return;
+    const m = 2 * n;
+    const more = <T extends Float64Array | Int32Array | Int8Array>(a: T, b: T): T => {
+      b.set(a);
+      return b;
+    };
+    this.x = more(this.x, new Float64Array(m));
+    this.y = more(this.y, new Float64Array(m));
+    this.s = more(this.s, new Float64Array(m));
+    this.step = more(this.step, new Int8Array(m));
+    this.mate = more(this.mate, new Int32Array(m));
+    this.order = new Int32Array(m);
+    this.at = new Int32Array(m);
+    this.count = new Int32Array(m);
+    this.swaps.grow(m);
+  }
+
+  /**
+   * Sort the end points at angle t (ties by rate of change), then call `steps` to set
+   * each end point's step from the order; set counts, free length and swap angles.
+   */
+  start(t: number, steps: (order: KineticOrder) => void): void {
+    const n = this.size,
+      X = this.x,
+      Y = this.y,
+      S = this.s,
+      order = this.order;
+    const c = Math.cos(t),
+      s = Math.sin(t);
+    for (let e = 0; e < n; e++) {
+      const v = X[e] * c + Y[e] * s + S[e],
+        w = Y[e] * c - X[e] * s;
+      let k = e;
+      while (k > 0) {
+        const f = order[k - 1];
+        const vf = X[f] * c + Y[f] * s + S[f];
+        if (vf < v || (vf === v && Y[f] * c - X[f] * s <= w)) break;
+        order[k] = f;
+        k--;
+      }
+      order[k] = e;
+    }
+    for (let k = 0; k < n; k++) this.at[order[k]] = k;
+    steps(this);
+    this.recount(0, n);
+    const key = this.swaps.key;
+    for (let k = 0; k + 1 < n; k++) key[k] = this.nextSwap(k, t, c, s);
+    this.swaps.fill(Math.max(0, n - 1));
+  }
+
+  /** Counts from position `from` on and the free length, after steps changed (positions from .. to - 1 affected). */
+  recount(from: number, to: number): void {
+    const order = this.order,
+      count = this.count,
+      step = this.step;
+    let run = from > 0 ? count[from - 1] : this.below;
+    for (let k = from; k < to; k++) {
+      run += step[order[k]];
+      count[k] = run;
+    }
+    this.cx = this.cy = this.cs = 0;
+    const X = this.x,
+      Y = this.y,
+      S = this.s;
+    for (let k = 0; k + 1 < this.size; k++) {
+      if (count[k] !== 0) continue;
+      const lo = order[k],
+        hi = order[k + 1];
+      this.cx += X[hi] - X[lo];
+      this.cy += Y[hi] - Y[lo];
+      this.cs += S[hi] - S[lo];
+    }
+  }
+
+  /** Is some gap free now? */
+  anyFree(): boolean {
+    for (let k = 0; k + 1 < this.size; k++) if (this.count[k] === 0) return true;
+    return false;
+  }
+
+  /** Swap the end points at positions k and k + 1 at angle `now` (cosine cn, sine sn); keep counts, free length and swap angles. */
+  swap(k: number, now: number, cn: number, sn: number): void {
+    const order = this.order,
+      count = this.count,
+      n = this.size;
+    const u = order[k],
+      v = order[k + 1];
+    const below = k > 0 ? count[k - 1] : this.below;
+    const freeBelow = k > 0 && count[k - 1] === 0 ? 1 : 0,
+      freeAbove = k + 2 < n && count[k + 1] === 0 ? 1 : 0,
+      freeOld = count[k] === 0 ? 1 : 0;
+    // The two ends of one edge trade roles: the lower one is where crossing starts.
+    if (this.mate[u] === v) {
+      const t = this.step[u];
+      this.step[u] = this.step[v];
+      this.step[v] = t;
+    }
+    order[k] = v;
+    order[k + 1] = u;
+    this.at[v] = k;
+    this.at[u] = k + 1;
+    count[k] = below + this.step[v];
+    const f = freeBelow + freeAbove - freeOld - (count[k] === 0 ? 1 : 0);
+    if (f !== 0) {
+      this.cx += f * (this.x[v] - this.x[u]);
+      this.cy += f * (this.y[v] - this.y[u]);
+      this.cs += f * (this.s[v] - this.s[u]);
+    }
+    const H = this.swaps;
+    if (k > 0) H.set(k - 1, this.nextSwap(k - 1, now, cn, sn));
+    H.set(k, this.nextSwap(k, now, cn, sn));
+    if (k + 2 < n) H.set(k + 1, this.nextSwap(k + 1, now, cn, sn));
+  }
+
+  /**
+   * The next angle from `now` (cosine cn, sine sn) at which the end point at position
+   * k passes the one at k + 1. Their difference is R cos(θ - φ) + ds; it turns
+   * positive at θ = φ - α, cos α = -ds / R, sin α = h / R. A pair found out of order
+   * by more than rounding swaps now.
+   */
+  private nextSwap(k: number, now: number, cn: number, sn: number): number {
+    const u = this.order[k],
+      v = this.order[k + 1];
+    const dx = this.x[u] - this.x[v],
+      dy = this.y[u] - this.y[v],
+      ds = this.s[u] - this.s[v];
+    const late = dx * cn + dy * sn + ds > this.tol;
+    const R2 = dx * dx + dy * dy;
+    if (R2 <= ds * ds) return late ? now : Infinity;
+    const h = Math.sqrt(R2 - ds * ds);
+    if (h * h < GRAZE * GRAZE * R2) return ds < 0 ? Infinity : now; // above or below but for a moment
+    if (late) return now;
+    // θ = φ - α: cos θ = (-dx ds + dy h) / R^2, sin θ = (-dy ds - dx h) / R^2.
+    let t = Math.atan2(-dy * ds - dx * h, dy * h - dx * ds);
+    t += TWO_PI * Math.ceil((now - NOW - t) / TWO_PI);
+    return t > now ? t : now;
+  }
+}
