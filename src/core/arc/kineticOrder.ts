@@ -38,6 +38,17 @@ export class KineticOrder {
   cs = 0;
   /** Rounding scale of a projection (sketch units) for the order tests. */
   tol = 0;
+  /** Where the sweep ends (radians), its cosine and sine: swaps after it need no angle. */
+  private end = Infinity;
+  private cosEnd = 1;
+  private sinEnd = 0;
+
+  /** The sweep ends at angle t (radians): later swaps are left unscheduled (Infinity). */
+  endAt(t: number): void {
+    this.end = t;
+    this.cosEnd = Math.cos(t);
+    this.sinEnd = Math.sin(t);
+  }
 
   /** Room for n end points; the end points set so far are kept. */
   grow(n: number): void {
@@ -169,6 +180,13 @@ export class KineticOrder {
       ds = this.s[u] - this.s[v];
     const late = dx * cn + dy * sn + ds > this.tol;
     const R2 = dx * dx + dy * dy;
+    if (!late && this.end - now < Math.PI - 1e-6 && dx * this.cosEnd + dy * this.sinEnd + ds <= 0) {
+      // Not above at either end of what is left (under half a turn): u passes v in
+      // between only if the difference peaks there, at the angle of (dx, dy), and the
+      // peak R + ds is above 0. Most neighbours never swap again; no angle is needed.
+      const peakInside = cn * dy - sn * dx >= 0 && dx * this.sinEnd - dy * this.cosEnd >= 0;
+      if (!peakInside || (ds <= 0 && R2 <= ds * ds)) return Infinity;
+    }
     if (R2 <= ds * ds) return late ? now : Infinity;
     const h = Math.sqrt(R2 - ds * ds);
     if (h * h < GRAZE * GRAZE * R2) return ds < 0 ? Infinity : now; // above or below but for a moment

@@ -46,6 +46,8 @@ export class LineSweep {
   private flipAt = new Float64Array(64);
   private flipOf = new Int32Array(64);
   private flips = 0;
+  /** Scratch of dropNeverBetween: each disc's new index (-1: dropped). */
+  private remap = new Int32Array(32);
   /** Open windows (pairs of angles) of the members alone. */
   private readonly windows = new Float64Array(8);
   private ox = 0;
@@ -90,6 +92,7 @@ export class LineSweep {
       this.between = new Uint8Array(4 * n);
       this.flipAt = new Float64Array(8 * n);
       this.flipOf = new Int32Array(8 * n);
+      this.remap = new Int32Array(2 * n);
     }
     for (let q = 0; q < n; q++) {
       const c = discs[q];
@@ -105,7 +108,7 @@ export class LineSweep {
     K.tol = 1e-11 * scale;
     let total = 0;
     const w = this.openWindows();
-    for (let q = 0; q < w; q += 2) total += this.sweep(this.windows[q], this.windows[q + 1]);
+    for (let q = 0; q < w; q += 2) total += this.sweep(this.windows[q], this.windows[q + 1], w === 2);
     return 0.5 * total;
   }
 
@@ -133,6 +136,7 @@ export class LineSweep {
       discs = this.discs;
     K.size = 4;
     this.discs = 0;
+    K.endAt(Math.PI);
     K.start(0, this.memberSteps);
     let w = 0,
       open = K.anyFree(),
@@ -163,12 +167,18 @@ export class LineSweep {
     return w;
   }
 
-  /** Twice L_i F_ij from the lines with normal angles `from` to `to` (radians); NaN if the order was lost. */
-  private sweep(from: number, to: number): number {
+  /**
+   * Twice L_i F_ij from the lines with normal angles `from` to `to` (radians); NaN if
+   * the order was lost. `last`: no window follows, so discs never between the members
+   * in this one may be dropped.
+   */
+  private sweep(from: number, to: number, last: boolean): number {
     const K = this.k;
     K.size = 4 + 2 * this.discs;
     this.sense = this.senseAt(0.5 * (from + to));
     this.findFlips(from, to);
+    if (last) this.dropNeverBetween();
+    K.endAt(to);
     K.start(from, this.memberSteps);
     let total = 0,
       now = from,
@@ -279,5 +289,50 @@ export class LineSweep {
       step[4 + 2 * q] = act;
       step[5 + 2 * q] = -act;
     }
+  }
+
+  /**
+   * Drop the discs that lie between the members nowhere in the window (behind a round
+   * member all along): they block no line there, and their end points would only swap
+   * with the others. Keeps the flips' order.
+   */
+  private dropNeverBetween(): void {
+    const K = this.k,
+      n = this.discs,
+      flips = this.flips;
+    const seen = this.between; // bit 2 of between[2q]: q has a flip
+    for (let f = 0; f < flips; f++) seen[this.flipOf[f] & ~1] |= 2;
+    let kept = 0;
+    const newIndex = this.remap;
+    for (let q = 0; q < n; q++) {
+      const b0 = seen[2 * q],
+        b1 = seen[2 * q + 1];
+      seen[2 * q] = b0 & 1;
+      if ((b0 & 2) === 0 && (b0 & b1 & 1) === 0) {
+        newIndex[q] = -1;
+        continue;
+      }
+      newIndex[q] = kept;
+      if (kept !== q) {
+        this.cx[kept] = this.cx[q];
+        this.cy[kept] = this.cy[q];
+        seen[2 * kept] = seen[2 * q];
+        seen[2 * kept + 1] = b1;
+        for (let e = 0; e < 2; e++) {
+          K.x[4 + 2 * kept + e] = K.x[4 + 2 * q + e];
+          K.y[4 + 2 * kept + e] = K.y[4 + 2 * q + e];
+          K.s[4 + 2 * kept + e] = K.s[4 + 2 * q + e];
+          K.mate[4 + 2 * kept + e] = -1;
+        }
+      }
+      kept++;
+    }
+    if (kept === n) return;
+    for (let f = 0; f < flips; f++) {
+      const b = this.flipOf[f];
+      this.flipOf[f] = 2 * newIndex[b >> 1] + (b & 1);
+    }
+    this.discs = kept;
+    K.size = 4 + 2 * kept;
   }
 }
