@@ -78,7 +78,7 @@ export class CurvedPairIntegrator implements EventFilter {
     this.breaks.filter = this;
     this.view = new PieceView(E.arcs);
     this.shadow = new DiscShadow(SHADOW_MARGIN * extentWithCircles(E));
-    this.lines2 = new LineSweepPair(SHADOW_MARGIN * extentWithCircles(E));
+    this.lines2 = new LineSweepPair(SHADOW_MARGIN * extentWithCircles(E), this.shadow);
     this.hider = new Int32Array(totalEdgeCount(E)).fill(-1);
   }
 

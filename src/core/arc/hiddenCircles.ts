@@ -24,9 +24,25 @@ export class HiddenCircles {
    * HIDERS circles nearest the emitter hides from the whole emitter `em`.
    */
   drop(scene: PairScene, A: ArcSet, em: Curve, tg: Curve, shadow: DiscShadow): void {
-    const circles = scene.circles,
+    const circles = scene.circles;
+    const kept = this.keepSeen(circles, A, em, shadow);
+    if (kept === circles.length) return;
+    circles.length = kept;
+    // The tangent circles are the blockers, then the target's own circle if it is a solid.
+    scene.tangentCircles.length = 0;
+    for (let k = 0; k < kept; k++) scene.tangentCircles.push(circles[k]);
+    if (tg.isArc && tg.solid) scene.tangentCircles.push(tg.circle);
+  }
+
+  /**
+   * Move to the front of `circles` those that none of the HIDERS circles nearest the
+   * curve `from` hides from all of it, in their order; returns how many (the rest are
+   * left behind them, to be cut off by the caller).
+   */
+  keepSeen(circles: number[], A: ArcSet, from: Curve, shadow: DiscShadow): number {
+    const em = from,
       n = circles.length;
-    if (n < 3) return;
+    if (n < 3) return n;
     const ex = em.isArc ? em.cx : 0.5 * (em.ax + em.bx),
       ey = em.isArc ? em.cy : 0.5 * (em.ay + em.by);
     const near = this.near,
@@ -57,11 +73,6 @@ export class HiddenCircles {
       }
       if (!hidden) circles[kept++] = d;
     }
-    if (kept === n) return;
-    circles.length = kept;
-    // The tangent circles are the blockers, then the target's own circle if it is a solid.
-    scene.tangentCircles.length = 0;
-    for (let k = 0; k < kept; k++) scene.tangentCircles.push(circles[k]);
-    if (tg.isArc && tg.solid) scene.tangentCircles.push(tg.circle);
+    return kept;
   }
 }

@@ -1,5 +1,7 @@
 import type { ArcSet } from './arcs';
 import type { Curve } from './curve';
+import type { DiscShadow } from './discShadow';
+import { HiddenCircles } from './hiddenCircles';
 import { LineSweep } from './lineSweep';
 import type { PairScene } from './pairScene';
 
@@ -21,8 +23,16 @@ export class LineSweepPair {
   /** Straight members cut to their facing parts: a0, a1 of the emitter, then of the target (x, y). */
   private readonly q = new Float64Array(8);
 
-  /** `margin`: absolute margin of the side tests (sketch units, from the sketch's extent). */
-  constructor(private readonly margin: number) {}
+  private readonly hidden = new HiddenCircles();
+
+  /**
+   * `margin`: absolute margin of the side tests (sketch units, from the sketch's
+   * extent); `shadow`: the umbra test that finds circles hidden from a whole curve.
+   */
+  constructor(
+    private readonly margin: number,
+    private readonly shadow: DiscShadow,
+  ) {}
 
   /**
    * L_i F_ij (sketch units) of `em` and `tg` past the scene's blockers by the line
@@ -56,6 +66,10 @@ export class LineSweepPair {
       if (di > r && dj > r) kept.push(c);
       else if (!(di < -r || dj < -r)) return -1; // across a line: left to the integration
     }
+    // The circles nearest the target may hide others from all of it too: along a line
+    // that meets such a circle between the members, they are met first (hiddenCircles.ts,
+    // done from the emitter's side already).
+    kept.length = this.hidden.keepSeen(kept, A, tg, this.shadow);
     const seg = scene.seg;
     for (let s = 0; s < seg.length; s += 4)
       if (this.entersHull(scene.hull, seg[s], seg[s + 1], seg[s + 2], seg[s + 3])) return -1;

@@ -1,6 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { ArcSet } from '../../../src/core/arc/arcs';
 import { Curve } from '../../../src/core/arc/curve';
+import { DiscShadow } from '../../../src/core/arc/discShadow';
 import { LineSweep } from '../../../src/core/arc/lineSweep';
 import { LineSweepPair } from '../../../src/core/arc/lineSweepPair';
 import type { PairScene } from '../../../src/core/arc/pairScene';
@@ -56,7 +57,7 @@ const floor = segment(0, 0, 4, 0),
 const row = Array.from({ length: 8 }, (_, k) => [0.3 + 0.45 * k, 1, 0.15]);
 
 describe('which pairs take the line sweep', () => {
-  const pair = new LineSweepPair(1e-12);
+  const pair = new LineSweepPair(1e-12, new DiscShadow(1e-12));
 
   it('takes two walls past a row of tubes, side walls along the quadrilateral', () => {
     const { A, scene } = blockers(row, [4, 0, 4, 2, 0, 2, 0, 0]);
