@@ -39,15 +39,11 @@ export class KineticOrder {
   /** Rounding scale of a projection (sketch units) for the order tests. */
   tol = 0;
   /** Where the sweep ends (radians), its cosine and sine: swaps after it need no angle. */
-  private end = Infinity;
-  private cosEnd = 1;
-  private sinEnd = 0;
+  private readonly ends = Float64Array.of(Infinity, 1, 0);
 
   /** The sweep ends at angle t (radians): later swaps are left unscheduled (Infinity). */
   endAt(t: number): void {
-    this.end = t;
-    this.cosEnd = Math.cos(t);
-    this.sinEnd = Math.sin(t);
+    endsAt(this.ends, t);
   }
 
   /** Room for n end points; the end points set so far are kept. */
@@ -166,34 +162,64 @@ export class KineticOrder {
     if (k + 2 < n) H.set(k + 1, this.nextSwap(k + 1, now, cn, sn));
   }
 
-  /**
-   * The next angle from `now` (cosine cn, sine sn) at which the end point at position
-   * k passes the one at k + 1. Their difference is R cos(θ - φ) + ds; it turns
-   * positive at θ = φ - α, cos α = -ds / R, sin α = h / R. A pair found out of order
-   * by more than rounding swaps now.
-   */
   private nextSwap(k: number, now: number, cn: number, sn: number): number {
     const u = this.order[k],
       v = this.order[k + 1];
-    const dx = this.x[u] - this.x[v],
-      dy = this.y[u] - this.y[v],
-      ds = this.s[u] - this.s[v];
-    const late = dx * cn + dy * sn + ds > this.tol;
-    const R2 = dx * dx + dy * dy;
-    if (!late && this.end - now < Math.PI - 1e-6 && dx * this.cosEnd + dy * this.sinEnd + ds <= 0) {
-      // Not above at either end of what is left (under half a turn): u passes v in
-      // between only if the difference peaks there, at the angle of (dx, dy), and the
-      // peak R + ds is above 0. Most neighbours never swap again; no angle is needed.
-      const peakInside = cn * dy - sn * dx >= 0 && dx * this.sinEnd - dy * this.cosEnd >= 0;
-      if (!peakInside || (ds <= 0 && R2 <= ds * ds)) return Infinity;
-    }
-    if (R2 <= ds * ds) return late ? now : Infinity;
-    const h = Math.sqrt(R2 - ds * ds);
-    if (h * h < GRAZE * GRAZE * R2) return ds < 0 ? Infinity : now; // above or below but for a moment
-    if (late) return now;
-    // θ = φ - α: cos θ = (-dx ds + dy h) / R^2, sin θ = (-dy ds - dx h) / R^2.
-    let t = Math.atan2(-dy * ds - dx * h, dy * h - dx * ds);
-    t += TWO_PI * Math.ceil((now - NOW - t) / TWO_PI);
-    return t > now ? t : now;
+    return nextPass(
+      this.x[u] - this.x[v],
+      this.y[u] - this.y[v],
+      this.s[u] - this.s[v],
+      now,
+      cn,
+      sn,
+      this.tol,
+      this.ends,
+    );
   }
+}
+
+/** Write the sweep's end angle t (radians), its cosine and sine into `ends`. */
+export function endsAt(ends: Float64Array, t: number): void {
+  ends[0] = t;
+  ends[1] = Math.cos(t);
+  ends[2] = Math.sin(t);
+}
+
+/**
+ * The next angle from `now` (cosine cn, sine sn; radians) at which an end point u
+ * below another v passes it, from their difference u - v = dx cos θ + dy sin θ + ds =
+ * R cos(θ - φ) + ds: it turns positive at θ = φ - α, cos α = -ds / R, sin α = h / R.
+ * A pair found out of order by more than `tol` passes now; one that does not pass
+ * before `ends[0]` (the sweep's end; its cosine and sine follow) gets Infinity.
+ */
+export function nextPass(
+  dx: number,
+  dy: number,
+  ds: number,
+  now: number,
+  cn: number,
+  sn: number,
+  tol: number,
+  ends: Float64Array,
+): number {
+  const late = dx * cn + dy * sn + ds > tol;
+  const R2 = dx * dx + dy * dy;
+  const end = ends[0],
+    ce = ends[1],
+    se = ends[2];
+  if (!late && end - now < Math.PI - 1e-6 && dx * ce + dy * se + ds <= 0) {
+    // Not above at either end of what is left (under half a turn): u passes v in
+    // between only if the difference peaks there, at the angle of (dx, dy), and the
+    // peak R + ds is above 0. Most neighbours never swap again; no angle is needed.
+    const peakInside = cn * dy - sn * dx >= 0 && dx * se - dy * ce >= 0;
+    if (!peakInside || (ds <= 0 && R2 <= ds * ds)) return Infinity;
+  }
+  if (R2 <= ds * ds) return late ? now : Infinity;
+  const h = Math.sqrt(R2 - ds * ds);
+  if (h * h < GRAZE * GRAZE * R2) return ds < 0 ? Infinity : now; // above or below but for a moment
+  if (late) return now;
+  // θ = φ - α: cos θ = (-dx ds + dy h) / R^2, sin θ = (-dy ds - dx h) / R^2.
+  let t = Math.atan2(-dy * ds - dx * h, dy * h - dx * ds);
+  t += TWO_PI * Math.ceil((now - NOW - t) / TWO_PI);
+  return t > now ? t : now;
 }

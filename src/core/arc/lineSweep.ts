@@ -1,3 +1,5 @@
+import { BetweenDiscs } from './betweenDiscs';
+import { FramedOrder } from './framedOrder';
 import { KineticOrder } from './kineticOrder';
 
 // Exchange between two curves past solid circles, summed over the lines that cross
@@ -11,17 +13,11 @@ import { KineticOrder } from './kineticOrder';
 // crosses both, less the projections of the discs between. The interval ends are
 // sinusoids in θ; their order changes only where two meet, and between such angles the
 // free length is one sinusoid, integrated exactly. The order is kept one swap of
-// neighbours at a time (kineticOrder.ts).
+// neighbours at a time (a kinetic sorted list).
 //
-// A member is a straight edge (radiating on its left) or a whole solid circle. Which
-// discs lie between, along a line that crosses both members:
-// - past a straight edge, every disc wholly in front of its line (the caller checks
-//   that each disc is: a line crosses the edge's line once, at the edge);
-// - past a circle, the discs whose centres lie beyond the circle's centre along the
-//   line: disjoint discs that one line crosses are met in the order of their centres.
-//   That order changes where the line runs square to the line of centres, where the two
-//   discs' projections are apart, so no free gap is touched.
-// Sketch units; angles in radians.
+// A member is a straight edge (radiating on its left) or a whole solid circle; which
+// discs lie between them along a line is betweenDiscs.ts's. The order is kept only
+// inside the narrower member's interval (framedOrder.ts). Sketch units; radians.
 
 /** End point kinds of the members: an edge's end (role by order), a circle's low and high side. */
 const END = 0,
@@ -30,24 +26,17 @@ const END = 0,
 
 export class LineSweep {
   private readonly k = new KineticOrder();
+  private readonly f = new FramedOrder();
   /** Per member (0, 1): 1 for a circle (centre mx, my), 0 for a straight edge (left normal mx, my). */
   private readonly round = new Int8Array(2);
   private readonly mx = new Float64Array(2);
   private readonly my = new Float64Array(2);
   private readonly kind = new Int8Array(4);
-  /** Per blocking disc: centre about the origin, and whether it lies between (per circle member). */
-  private cx = new Float64Array(32);
-  private cy = new Float64Array(32);
-  private between = new Uint8Array(64);
+  /** The blocking discs: centres, and whether each lies between the members. */
+  private readonly d = new BetweenDiscs();
   private discs = 0;
   /** Sign of the line direction (-sin θ, cos θ) from member 0 to member 1 in the current window. */
   private sense = 1;
-  /** Angles at which a disc's order with a circle member changes, and which (disc * 2 + member). */
-  private flipAt = new Float64Array(64);
-  private flipOf = new Int32Array(64);
-  private flips = 0;
-  /** Scratch of dropNeverBetween: each disc's new index (-1: dropped). */
-  private remap = new Int32Array(32);
   /** Open windows (pairs of angles) of the members alone. */
   private readonly windows = new Float64Array(8);
   private ox = 0;
@@ -86,18 +75,13 @@ export class LineSweep {
     const K = this.k,
       n = discs.length;
     K.grow(4 + 2 * n);
-    if (this.cx.length < n) {
-      this.cx = new Float64Array(2 * n);
-      this.cy = new Float64Array(2 * n);
-      this.between = new Uint8Array(4 * n);
-      this.flipAt = new Float64Array(8 * n);
-      this.flipOf = new Int32Array(8 * n);
-      this.remap = new Int32Array(2 * n);
-    }
+    const D = this.d;
+    D.grow(n);
+    D.count = n;
     for (let q = 0; q < n; q++) {
       const c = discs[q];
-      this.cx[q] = dx[c] - this.ox;
-      this.cy[q] = dy[c] - this.oy;
+      D.cx[q] = dx[c] - this.ox;
+      D.cy[q] = dy[c] - this.oy;
       this.put(4 + 2 * q, dx[c], dy[c], -dr[c], -1);
       this.put(5 + 2 * q, dx[c], dy[c], dr[c], -1);
     }
@@ -108,7 +92,18 @@ export class LineSweep {
     K.tol = 1e-11 * scale;
     let total = 0;
     const w = this.openWindows();
-    for (let q = 0; q < w; q += 2) total += this.sweep(this.windows[q], this.windows[q + 1], w === 2);
+    for (let q = 0; q < w; q += 2) {
+      // Where lines run along a straight member its ends trade roles; nothing is free there
+      // (no line crosses it), so the window is swept in parts between such angles.
+      let from = this.windows[q];
+      const to = this.windows[q + 1];
+      for (;;) {
+        const cut = this.nextAlong(from, to);
+        total += this.sweep(from, cut, q + 2 === w && cut === to);
+        if (cut === to) break;
+        from = cut;
+      }
+    }
     return 0.5 * total;
   }
 
@@ -173,13 +168,26 @@ export class LineSweep {
    * in this one may be dropped.
    */
   private sweep(from: number, to: number, last: boolean): number {
-    const K = this.k;
-    K.size = 4 + 2 * this.discs;
-    this.sense = this.senseAt(0.5 * (from + to));
-    this.findFlips(from, to);
+    const K = this.k,
+      F = this.f;
+    const mid = 0.5 * (from + to);
+    this.sense = this.senseAt(mid);
+    const D = this.d;
+    D.find(from, to, this.sense, this.round, this.mx, this.my);
     if (last) this.dropNeverBetween();
-    K.endAt(to);
-    K.start(from, this.memberSteps);
+    // Steps from the order in the middle of the window (an edge's ends keep their roles
+    // inside it: they swap only where lines run along the edge, and none crosses it).
+    const n = 4 + 2 * this.discs;
+    this.stepsAt(mid);
+    F.share(K.x, K.y, K.s, K.step, n);
+    F.tol = K.tol;
+    // The frame: the member with the narrower interval in the middle of the window.
+    const c = Math.cos(mid),
+      s = Math.sin(mid);
+    const width = (e: number) => Math.abs((K.x[e] - K.x[e + 1]) * c + (K.y[e] - K.y[e + 1]) * s + K.s[e] - K.s[e + 1]);
+    const frame = width(0) <= width(2) ? 0 : 1;
+    const lo = K.step[2 * frame] < 0 ? 2 * frame : 2 * frame + 1;
+    F.start(from, lo, 4 * frame + 1 - lo, 1 - frame, to);
     let total = 0,
       now = from,
       sinNow = Math.sin(from),
@@ -187,28 +195,73 @@ export class LineSweep {
       f = 0;
     // Each pair of end points swaps at most twice in half a turn; more means rounding
     // has lost the order: give up (NaN), and the caller integrates the pair otherwise.
-    let budget = 2 * K.size * K.size + this.flips + 16;
+    let budget = 4 * n * n + D.flips + 16;
     for (;;) {
-      const top = K.swaps.size > 0 ? K.swaps.top() : -1;
-      const ts = top >= 0 ? K.swaps.key[top] : Infinity,
-        tf = f < this.flips ? this.flipAt[f] : Infinity;
+      const ts = F.next(),
+        tf = f < D.flips ? D.flipAt[f] : Infinity;
       const t = ts < tf ? ts : tf;
       if (t > to) break;
       if (--budget < 0) return NaN;
       if (t > now) {
         const sinT = Math.sin(t),
           cosT = Math.cos(t);
-        total += K.cx * (sinT - sinNow) + K.cy * (cosNow - cosT) + K.cs * (t - now);
+        total += F.cx * (sinT - sinNow) + F.cy * (cosNow - cosT) + F.cs * (t - now);
         now = t;
         sinNow = sinT;
         cosNow = cosT;
       }
-      if (tf <= ts) this.flip(this.flipOf[f++]);
-      else K.swap(top, now, cosNow, sinNow);
+      if (tf <= ts) {
+        const q = D.flip(D.flipOf[f++]);
+        if (q >= 0) {
+          const act = D.active(q);
+          K.step[4 + 2 * q] = act;
+          K.step[5 + 2 * q] = -act;
+          F.restep();
+        }
+      } else if (!F.advance(now, cosNow, sinNow)) return total;
     }
     const sinT = Math.sin(to),
       cosT = Math.cos(to);
-    return total + K.cx * (sinT - sinNow) + K.cy * (cosNow - cosT) + K.cs * (to - now);
+    return total + F.cx * (sinT - sinNow) + F.cy * (cosNow - cosT) + F.cs * (to - now);
+  }
+
+  /** Steps at angle t: an edge's lower end -1 (crossing starts), upper +1; a circle member's low side -1, high +1; a disc between the members +1 low, -1 high. */
+  private stepsAt(t: number): void {
+    const K = this.k,
+      step = K.step;
+    const c = Math.cos(t),
+      s = Math.sin(t);
+    for (let m = 0; m < 2; m++) {
+      const a = 2 * m;
+      if (this.round[m] === 1) {
+        step[a] = -1;
+        step[a + 1] = 1;
+        continue;
+      }
+      const low = (K.x[a] - K.x[a + 1]) * c + (K.y[a] - K.y[a + 1]) * s <= 0;
+      step[a] = low ? -1 : 1;
+      step[a + 1] = low ? 1 : -1;
+    }
+    for (let q = 0; q < this.discs; q++) {
+      const act = this.d.active(q);
+      step[4 + 2 * q] = act;
+      step[5 + 2 * q] = -act;
+    }
+  }
+
+  /** The first angle in (from, to) at which lines run along a straight member, or `to`. */
+  private nextAlong(from: number, to: number): number {
+    const K = this.k;
+    let cut = to;
+    for (let m = 0; m < 2; m++) {
+      if (this.round[m] === 1) continue;
+      // The normal (cos t, sin t) is square to the edge: t = atan2(dy, dx) + pi/2, mod pi.
+      let t = Math.atan2(K.y[2 * m + 1] - K.y[2 * m], K.x[2 * m + 1] - K.x[2 * m]) + Math.PI / 2;
+      t += Math.PI * Math.ceil((from - t) / Math.PI);
+      if (t <= from) t += Math.PI;
+      if (t < cut) cut = t;
+    }
+    return cut;
   }
 
   /** +1 or -1: the sign of the direction (-sin t, cos t) from member 0 to member 1 along lines crossing both. */
@@ -224,58 +277,6 @@ export class LineSweep {
     return v < 0 ? -1 : 1;
   }
 
-  /**
-   * Which discs lie between the members just after `from`, and the angles in (from,
-   * to] at which that changes (the line square to the centres of a disc and a circle
-   * member), sorted.
-   */
-  private findFlips(from: number, to: number): void {
-    const at = from + 1e-9;
-    const dx = -Math.sin(at) * this.sense,
-      dy = Math.cos(at) * this.sense;
-    let flips = 0;
-    for (let q = 0; q < this.discs; q++) {
-      for (let m = 0; m < 2; m++) {
-        if (this.round[m] === 0) {
-          this.between[2 * q + m] = 1;
-          continue;
-        }
-        const wx = this.cx[q] - this.mx[m],
-          wy = this.cy[q] - this.my[m];
-        const along = wx * dx + wy * dy;
-        this.between[2 * q + m] = (m === 0 ? along > 0 : along < 0) ? 1 : 0;
-        // w . (-sin t, cos t) = 0 at t = atan2(wy, wx) + j pi.
-        let t = Math.atan2(wy, wx);
-        t += Math.PI * Math.ceil((at - t) / Math.PI);
-        for (; t <= to; t += Math.PI) {
-          if (t <= at) continue;
-          let k = flips++;
-          while (k > 0 && this.flipAt[k - 1] > t) {
-            this.flipAt[k] = this.flipAt[k - 1];
-            this.flipOf[k] = this.flipOf[k - 1];
-            k--;
-          }
-          this.flipAt[k] = t;
-          this.flipOf[k] = 2 * q + m;
-        }
-      }
-    }
-    this.flips = flips;
-  }
-
-  /** Disc q = b >> 1 passes member b & 1's centre: it is between the members or no longer. */
-  private flip(b: number): void {
-    this.between[b] ^= 1;
-    const q = b >> 1,
-      K = this.k;
-    const act = this.between[2 * q] & this.between[2 * q + 1];
-    const lo = 4 + 2 * q;
-    if (K.step[lo] === act) return;
-    K.step[lo] = act;
-    K.step[lo + 1] = -act;
-    K.recount(Math.min(K.at[lo], K.at[lo + 1]), K.size);
-  }
-
   /** Steps from the order: an edge's lower end -1 (crossing starts), upper +1; a circle member's low side -1, high +1; a disc between its members +1 low, -1 high. */
   private setSteps(o: KineticOrder): void {
     const step = o.step,
@@ -285,7 +286,7 @@ export class LineSweep {
       step[e] = kind === END ? (at[o.mate[e]] > at[e] ? -1 : 1) : kind === LOW ? -1 : 1;
     }
     for (let q = 0; q < this.discs; q++) {
-      const act = this.between[2 * q] & this.between[2 * q + 1];
+      const act = this.d.active(q);
       step[4 + 2 * q] = act;
       step[5 + 2 * q] = -act;
     }
@@ -294,45 +295,22 @@ export class LineSweep {
   /**
    * Drop the discs that lie between the members nowhere in the window (behind a round
    * member all along): they block no line there, and their end points would only swap
-   * with the others. Keeps the flips' order.
+   * with the others.
    */
   private dropNeverBetween(): void {
+    const map = this.d.dropNever();
+    if (!map) return;
     const K = this.k,
-      n = this.discs,
-      flips = this.flips;
-    const seen = this.between; // bit 2 of between[2q]: q has a flip
-    for (let f = 0; f < flips; f++) seen[this.flipOf[f] & ~1] |= 2;
-    let kept = 0;
-    const newIndex = this.remap;
+      n = this.discs;
     for (let q = 0; q < n; q++) {
-      const b0 = seen[2 * q],
-        b1 = seen[2 * q + 1];
-      seen[2 * q] = b0 & 1;
-      if ((b0 & 2) === 0 && (b0 & b1 & 1) === 0) {
-        newIndex[q] = -1;
-        continue;
+      const to = map[q];
+      if (to < 0 || to === q) continue;
+      for (let e = 0; e < 2; e++) {
+        K.x[4 + 2 * to + e] = K.x[4 + 2 * q + e];
+        K.y[4 + 2 * to + e] = K.y[4 + 2 * q + e];
+        K.s[4 + 2 * to + e] = K.s[4 + 2 * q + e];
       }
-      newIndex[q] = kept;
-      if (kept !== q) {
-        this.cx[kept] = this.cx[q];
-        this.cy[kept] = this.cy[q];
-        seen[2 * kept] = seen[2 * q];
-        seen[2 * kept + 1] = b1;
-        for (let e = 0; e < 2; e++) {
-          K.x[4 + 2 * kept + e] = K.x[4 + 2 * q + e];
-          K.y[4 + 2 * kept + e] = K.y[4 + 2 * q + e];
-          K.s[4 + 2 * kept + e] = K.s[4 + 2 * q + e];
-          K.mate[4 + 2 * kept + e] = -1;
-        }
-      }
-      kept++;
     }
-    if (kept === n) return;
-    for (let f = 0; f < flips; f++) {
-      const b = this.flipOf[f];
-      this.flipOf[f] = 2 * newIndex[b >> 1] + (b & 1);
-    }
-    this.discs = kept;
-    K.size = 4 + 2 * kept;
+    this.discs = this.d.count;
   }
 }
