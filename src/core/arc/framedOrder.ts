@@ -1,5 +1,5 @@
 import { AngleHeap } from './angleHeap';
-import { endsAt, nextPass } from './kineticOrder';
+import { endsAt, nextPass, swapNeighbours } from './kineticOrder';
 
 // The kinetic order of kineticOrder.ts kept only inside one member's interval, the
 // frame: a free gap crosses both members, so it lies inside either one's interval, and
@@ -28,11 +28,11 @@ export class FramedOrder {
   private other = -1;
   private place = new Int8Array(64);
   /** End points inside the frame by position, low to high (order[0] = lo, order[m - 1] = hi), and their positions. */
-  private order = new Int32Array(64);
-  private at = new Int32Array(64);
+  order = new Int32Array(64);
+  at = new Int32Array(64);
   private m = 0;
   /** Count just above each position (under position 0: see refresh). */
-  private count = new Int32Array(64);
+  count = new Int32Array(64);
   /** Next swap of the neighbours at each position, and the next entry of each end point outside. */
   private readonly swaps = new AngleHeap();
   private readonly entries = new AngleHeap();
@@ -71,34 +71,23 @@ export class FramedOrder {
     endsAt(this.ends, end);
     const c = Math.cos(t),
       s = Math.sin(t);
-    const X = this.x,
-      Y = this.y,
-      S = this.s,
-      n = this.size;
+    const n = this.size;
     this.lo = lo;
     this.hi = hi;
     this.other = other;
-    const vlo = X[lo] * c + Y[lo] * s + S[lo],
-      vhi = X[hi] * c + Y[hi] * s + S[hi];
     const order = this.order;
     order[0] = lo;
     let m = 1;
     for (let e = 0; e < n; e++) {
       if (e === lo || e === hi) continue;
-      const v = X[e] * c + Y[e] * s + S[e];
-      if (v < vlo || v > vhi) {
-        this.place[e] = v < vlo ? BELOW : ABOVE;
+      if (this.compare(e, lo, c, s) < 0 || this.compare(e, hi, c, s) > 0) {
+        this.place[e] = this.compare(e, lo, c, s) < 0 ? BELOW : ABOVE;
         continue;
       }
       this.place[e] = INSIDE;
-      // Insertion sort by projection, then by its rate of change (ties at t).
-      const w = Y[e] * c - X[e] * s;
       let k = m++;
-      while (k > 1) {
-        const f = order[k - 1];
-        const vf = X[f] * c + Y[f] * s + S[f];
-        if (vf < v || (vf === v && Y[f] * c - X[f] * s <= w)) break;
-        order[k] = f;
+      while (k > 1 && this.compare(order[k - 1], e, c, s) > 0) {
+        order[k] = order[k - 1];
         k--;
       }
       order[k] = e;
@@ -111,6 +100,30 @@ export class FramedOrder {
     for (let e = 0; e < n; e++) E.key[e] = this.place[e] === INSIDE ? Infinity : this.entryAt(e, t, c, s);
     E.fill(n);
     this.refresh(t, c, s);
+  }
+
+  /**
+   * Which of end points e and f comes first just after the angle with cosine c, sine s
+   * (-1, 0 or 1): by projection, then by its rate of change, then by the next
+   * derivative, each to within rounding. An arc's end and the tangent it becomes at a
+   * cut of the sweep meet with the same rate of change; the end lies below after.
+   */
+  private compare(e: number, f: number, c: number, s: number): number {
+    const X = this.x,
+      Y = this.y,
+      S = this.s,
+      tol = this.tol;
+    const pe = X[e] * c + Y[e] * s,
+      pf = X[f] * c + Y[f] * s;
+    const dv = pe + S[e] - (pf + S[f]);
+    if (dv < -tol) return -1;
+    if (dv > tol) return 1;
+    const dw = Y[e] * c - X[e] * s - (Y[f] * c - X[f] * s);
+    if (dw < -tol) return -1;
+    if (dw > tol) return 1;
+    // Second derivative -(x cos + y sin): the larger comes out above.
+    const dd = pf - pe;
+    return dd < -tol ? -1 : dd > tol ? 1 : 0;
   }
 
   /** The next event's angle (Infinity: none). */
@@ -143,25 +156,10 @@ export class FramedOrder {
   }
 
   private swap(k: number, now: number, cn: number, sn: number): void {
-    const order = this.order,
-      count = this.count;
-    const u = order[k],
-      v = order[k + 1];
-    const below = count[k - 1];
-    const freeBelow = count[k - 1] === 0 ? 1 : 0,
-      freeAbove = k + 2 < this.m && count[k + 1] === 0 ? 1 : 0,
-      freeOld = count[k] === 0 ? 1 : 0;
-    order[k] = v;
-    order[k + 1] = u;
-    this.at[v] = k;
-    this.at[u] = k + 1;
-    count[k] = below + this.step[v];
-    const f = freeBelow + freeAbove - freeOld - (count[k] === 0 ? 1 : 0);
-    if (f !== 0) {
-      this.cx += f * (this.x[v] - this.x[u]);
-      this.cy += f * (this.y[v] - this.y[u]);
-      this.cs += f * (this.s[v] - this.s[u]);
-    }
+    const count = this.count;
+    const free =
+      (count[k - 1] === 0 ? 1 : 0) + (k + 2 < this.m && count[k + 1] === 0 ? 1 : 0) - (count[k] === 0 ? 1 : 0);
+    swapNeighbours(this, k, count[k - 1], free);
     const H = this.swaps;
     H.set(k - 1, this.pass(k - 1, now, cn, sn));
     H.set(k, this.pass(k, now, cn, sn));

@@ -16,6 +16,42 @@ const GRAZE = 1e-6;
 /** A swap computed this close before the current angle (radians) happens now: rounding of the angle. */
 const NOW = 1e-10;
 
+/** What swapNeighbours reads and keeps: an order of end points with its counts and free length. */
+export interface OrderedEnds {
+  x: Float64Array;
+  y: Float64Array;
+  s: Float64Array;
+  step: Int8Array;
+  order: Int32Array;
+  at: Int32Array;
+  count: Int32Array;
+  cx: number;
+  cy: number;
+  cs: number;
+}
+
+/**
+ * Swap the end points at positions k and k + 1 of `o` (count `below` under k, `free`
+ * the free gaps at k - 1, k + 1 less the one at k): positions, the count at k, and the
+ * free length's coefficients (only the gap between them changes).
+ */
+export function swapNeighbours(o: OrderedEnds, k: number, below: number, free: number): void {
+  const order = o.order,
+    u = order[k],
+    v = order[k + 1];
+  order[k] = v;
+  order[k + 1] = u;
+  o.at[v] = k;
+  o.at[u] = k + 1;
+  o.count[k] = below + o.step[v];
+  const f = free - (o.count[k] === 0 ? 1 : 0);
+  if (f !== 0) {
+    o.cx += f * (o.x[v] - o.x[u]);
+    o.cy += f * (o.y[v] - o.y[u]);
+    o.cs += f * (o.s[v] - o.s[u]);
+  }
+}
+
 export class KineticOrder {
   size = 0;
   x = new Float64Array(64);
@@ -145,17 +181,7 @@ export class KineticOrder {
       this.step[u] = this.step[v];
       this.step[v] = t;
     }
-    order[k] = v;
-    order[k + 1] = u;
-    this.at[v] = k;
-    this.at[u] = k + 1;
-    count[k] = below + this.step[v];
-    const f = freeBelow + freeAbove - freeOld - (count[k] === 0 ? 1 : 0);
-    if (f !== 0) {
-      this.cx += f * (this.x[v] - this.x[u]);
-      this.cy += f * (this.y[v] - this.y[u]);
-      this.cs += f * (this.s[v] - this.s[u]);
-    }
+    swapNeighbours(this, k, below, freeBelow + freeAbove - freeOld);
     const H = this.swaps;
     if (k > 0) H.set(k - 1, this.nextSwap(k - 1, now, cn, sn));
     H.set(k, this.nextSwap(k, now, cn, sn));

@@ -1,3 +1,4 @@
+import { arcEnds, nextArcSwitch } from './arcMember';
 import { BetweenDiscs } from './betweenDiscs';
 import { FramedOrder } from './framedOrder';
 import { KineticOrder } from './kineticOrder';
@@ -32,6 +33,11 @@ export class LineSweep {
   private readonly mx = new Float64Array(2);
   private readonly my = new Float64Array(2);
   private readonly kind = new Int8Array(4);
+  /** Per member: the arc of its circle (start, span < pi), or span 0 for a whole circle or an edge; radius. */
+  private readonly arcStart = new Float64Array(2);
+  private readonly arcSpan = new Float64Array(2);
+  private readonly radius = new Float64Array(2);
+  private readonly ends = new Float64Array(6);
   /** The blocking discs: centres, and whether each lies between the members. */
   private readonly d = new BetweenDiscs();
   private discs = 0;
@@ -46,6 +52,7 @@ export class LineSweep {
   /** Member `m` (0 or 1): the straight edge a -> b, radiating on its left. */
   segment(m: number, ax: number, ay: number, bx: number, by: number): void {
     this.round[m] = 0;
+    this.arcSpan[m] = 0;
     this.kind[2 * m] = this.kind[2 * m + 1] = END;
     this.mx[m] = ay - by;
     this.my[m] = bx - ax;
@@ -53,9 +60,18 @@ export class LineSweep {
     this.put(2 * m + 1, bx, by, 0, 2 * m);
   }
 
+  /** Member `m` (0 or 1): an arc of a solid circle, anticlockwise from `start` over `span` < pi (radians). */
+  arc(m: number, cx: number, cy: number, r: number, start: number, span: number): void {
+    this.circle(m, cx, cy, r);
+    this.arcStart[m] = start;
+    this.arcSpan[m] = span;
+  }
+
   /** Member `m` (0 or 1): a whole solid circle. */
   circle(m: number, cx: number, cy: number, r: number): void {
     this.round[m] = 1;
+    this.arcSpan[m] = 0;
+    this.radius[m] = r;
     this.kind[2 * m] = LOW;
     this.kind[2 * m + 1] = HIGH;
     this.mx[m] = cx - this.ox;
@@ -98,7 +114,7 @@ export class LineSweep {
       let from = this.windows[q];
       const to = this.windows[q + 1];
       for (;;) {
-        const cut = this.nextAlong(from, to);
+        const cut = this.nextCut(from, to);
         total += this.sweep(from, cut, q + 2 === w && cut === to);
         if (cut === to) break;
         from = cut;
@@ -172,6 +188,7 @@ export class LineSweep {
       F = this.f;
     const mid = 0.5 * (from + to);
     this.sense = this.senseAt(mid);
+    if (!this.arcsAt(mid)) return 0; // an arc member faces away from every line here
     const D = this.d;
     D.find(from, to, this.sense, this.round, this.mx, this.my);
     if (last) this.dropNeverBetween();
@@ -225,7 +242,31 @@ export class LineSweep {
     return total + F.cx * (sinT - sinNow) + F.cy * (cosNow - cosT) + F.cs * (to - now);
   }
 
-  /** Steps at angle t: an edge's lower end -1 (crossing starts), upper +1; a circle member's low side -1, high +1; a disc between the members +1 low, -1 high. */
+  /**
+   * Set each arc member's interval ends for the part holding angle t (lines travel
+   * from member 0 to member 1 along sense (-sin t, cos t)); false when one faces away.
+   */
+  private arcsAt(t: number): boolean {
+    const K = this.k,
+      E = this.ends;
+    for (let m = 0; m < 2; m++) {
+      if (!(this.arcSpan[m] > 0)) continue;
+      // Lines reach member 1 travelling along the sense, member 0 against it.
+      const dir = m === 1 ? this.sense : -this.sense;
+      const dx = -Math.sin(t) * dir,
+        dy = Math.cos(t) * dir;
+      if (!arcEnds(this.mx[m], this.my[m], this.radius[m], this.arcStart[m], this.arcSpan[m], t, dx, dy, E))
+        return false;
+      for (let k = 0; k < 2; k++) {
+        K.x[2 * m + k] = E[3 * k];
+        K.y[2 * m + k] = E[3 * k + 1];
+        K.s[2 * m + k] = E[3 * k + 2];
+      }
+    }
+    return true;
+  }
+
+  /** Steps at angle t: an edge's or arc's lower end -1 (crossing starts), upper +1; a circle member's low side -1, high +1; a disc between the members +1 low, -1 high. */
   private stepsAt(t: number): void {
     const K = this.k,
       step = K.step;
@@ -233,12 +274,12 @@ export class LineSweep {
       s = Math.sin(t);
     for (let m = 0; m < 2; m++) {
       const a = 2 * m;
-      if (this.round[m] === 1) {
+      if (this.round[m] === 1 && !(this.arcSpan[m] > 0)) {
         step[a] = -1;
         step[a + 1] = 1;
         continue;
       }
-      const low = (K.x[a] - K.x[a + 1]) * c + (K.y[a] - K.y[a + 1]) * s <= 0;
+      const low = (K.x[a] - K.x[a + 1]) * c + (K.y[a] - K.y[a + 1]) * s + K.s[a] - K.s[a + 1] <= 0;
       step[a] = low ? -1 : 1;
       step[a + 1] = low ? 1 : -1;
     }
@@ -249,11 +290,15 @@ export class LineSweep {
     }
   }
 
-  /** The first angle in (from, to) at which lines run along a straight member, or `to`. */
-  private nextAlong(from: number, to: number): number {
+  /**
+   * The first angle in (from, to) at which lines run along a straight member, or an
+   * end of an arc member is a tangent point (arcMember.ts), or `to`.
+   */
+  private nextCut(from: number, to: number): number {
     const K = this.k;
     let cut = to;
     for (let m = 0; m < 2; m++) {
+      if (this.arcSpan[m] > 0) cut = nextArcSwitch(this.arcStart[m], this.arcSpan[m], from, cut);
       if (this.round[m] === 1) continue;
       // The normal (cos t, sin t) is square to the edge: t = atan2(dy, dx) + pi/2, mod pi.
       let t = Math.atan2(K.y[2 * m + 1] - K.y[2 * m], K.x[2 * m + 1] - K.x[2 * m]) + Math.PI / 2;

@@ -6,7 +6,8 @@ import { LineSweep } from './lineSweep';
 import type { PairScene } from './pairScene';
 
 // When a pair may take the line sweep (lineSweep.ts) instead of the integration along
-// the emitter: each curve a straight edge or a whole solid circle; a straight edge cut
+// the emitter: each curve a straight edge, a whole solid circle or an arc of one under
+// half a turn (arcMember.ts; a circle below means the arc's circle); a straight edge cut
 // to its part in front of the other's line, and a circle wholly in front of a straight
 // partner's line; every blocking circle wholly in front of each straight member's line
 // (then a line that crosses the member and the circle meets the circle past the
@@ -16,6 +17,12 @@ import type { PairScene } from './pairScene';
 
 /** Relative slack on radii: far above the rounding of the distances below. */
 const SLACK = 1e-9;
+/**
+ * Smallest member for the sweep, relative to the pair's hull: its error is about 1e-16
+ * of the hull per swap-free stretch, so a member 1e-4 of it keeps about 1e-12 of its
+ * own factor.
+ */
+const TINY = 1e-4;
 
 export class LineSweepPair {
   private readonly sweep = new LineSweep();
@@ -52,6 +59,9 @@ export class LineSweepPair {
       if (!em.isArc) ends(em, q, 0);
       if (!tg.isArc) ends(tg, q, 4);
     }
+    // The sweep's rounding is relative to the pair's size, the integration's to the
+    // emitter's length: a member far smaller than the pair is left to the integration.
+    if (Math.min(memberLength(em), memberLength(tg)) < TINY * hullWidth(scene.hull)) return -1;
     const kept = this.kept;
     kept.length = 0;
     for (let k = 0; k < circles.length; k++) {
@@ -79,12 +89,18 @@ export class LineSweepPair {
       bx = tg.isArc ? tg.cx : 0.5 * (q[4] + q[6]),
       by = tg.isArc ? tg.cy : 0.5 * (q[5] + q[7]);
     L.origin(0.5 * (ax + bx), 0.5 * (ay + by));
-    if (em.isArc) L.circle(0, em.cx, em.cy, em.r);
-    else L.segment(0, q[0], q[1], q[2], q[3]);
-    if (tg.isArc) L.circle(1, tg.cx, tg.cy, tg.r);
-    else L.segment(1, q[4], q[5], q[6], q[7]);
+    this.member(0, em, q);
+    this.member(1, tg, q);
     const g = L.exchange(A.cx, A.cy, A.r, kept);
     return g >= 0 ? g : -1;
+  }
+
+  /** Give the sweep curve c as member m (a straight one cut to q[4m..4m+3]). */
+  private member(m: number, c: Curve, q: Float64Array): void {
+    const L = this.sweep;
+    if (!c.isArc) L.segment(m, q[4 * m], q[4 * m + 1], q[4 * m + 2], q[4 * m + 3]);
+    else if (c.span >= 2 * Math.PI) L.circle(m, c.cx, c.cy, c.r);
+    else L.arc(m, c.cx, c.cy, c.r, c.start, c.span);
   }
 
   /** May the segment enter the open convex hull H (flat x, y, anticlockwise)? No when both ends lie on or outside one side. */
@@ -105,6 +121,26 @@ export class LineSweepPair {
   }
 }
 
+/** A curve's length (sketch units): a segment's, an arc's r span. */
+function memberLength(c: Curve): number {
+  return c.isArc ? c.r * Math.min(c.span, 2 * Math.PI) : Math.sqrt((c.bx - c.ax) ** 2 + (c.by - c.ay) ** 2);
+}
+
+/** Largest width of a hull's bounding box (flat x, y; sketch units). */
+function hullWidth(H: readonly number[]): number {
+  let x0 = Infinity,
+    x1 = -Infinity,
+    y0 = Infinity,
+    y1 = -Infinity;
+  for (let k = 0; k < H.length; k += 2) {
+    x0 = Math.min(x0, H[k]);
+    x1 = Math.max(x1, H[k]);
+    y0 = Math.min(y0, H[k + 1]);
+    y1 = Math.max(y1, H[k + 1]);
+  }
+  return Math.max(x1 - x0, y1 - y0, 0);
+}
+
 /** A straight edge's ends into out[at..at+3]. */
 function ends(c: Curve, out: Float64Array, at: number): void {
   out[at] = c.ax;
@@ -113,9 +149,9 @@ function ends(c: Curve, out: Float64Array, at: number): void {
   out[at + 3] = c.by;
 }
 
-/** A straight edge, or an arc that is a whole solid circle. */
+/** A straight edge, a whole solid circle, or an arc of one under half a turn (arcMember.ts). */
 function whole(c: Curve): boolean {
-  return !c.isArc || (c.solid && c.span >= 2 * Math.PI);
+  return !c.isArc || (c.solid && (c.span >= 2 * Math.PI || c.span < Math.PI - 1e-6));
 }
 
 /** Is the disc (x, y, r) surely apart from circle member c (its own circle excluded by the caller)? */

@@ -1,41 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { Curve } from '../../../src/core/arc/curve';
+import type { Curve } from '../../../src/core/arc/curve';
 import { DiscShadow } from '../../../src/core/arc/discShadow';
 import { seeded } from '../seeded';
+import { arc, segment } from './curves';
 
 // The one-circle shadow test (src/core/arc/discShadow.ts) against sight lines cast
 // one by one: whenever it says a disc hides the target, every sampled line from the
 // emitter to the target must meet the disc. Plain geometry (distance from a point to
 // a segment), sharing no code with the core.
-
-function segment(ax: number, ay: number, bx: number, by: number): Curve {
-  const c = new Curve();
-  c.isArc = false;
-  c.ax = ax;
-  c.ay = ay;
-  c.bx = bx;
-  c.by = by;
-  c.length = Math.sqrt((bx - ax) ** 2 + (by - ay) ** 2);
-  return c;
-}
-
-function arc(cx: number, cy: number, r: number, start: number, span: number, solid = true): Curve {
-  const c = new Curve();
-  c.isArc = true;
-  c.circle = 0;
-  c.cx = cx;
-  c.cy = cy;
-  c.r = r;
-  c.start = start;
-  c.span = span;
-  c.solid = solid;
-  c.length = r * span;
-  c.ax = cx + r * Math.cos(start);
-  c.ay = cy + r * Math.sin(start);
-  c.bx = cx + r * Math.cos(start + span);
-  c.by = cy + r * Math.sin(start + span);
-  return c;
-}
 
 /** Point at fraction s of a curve (along the segment, or the arc's angle). */
 function pointOn(c: Curve, s: number): [number, number] {

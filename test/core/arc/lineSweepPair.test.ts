@@ -1,6 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { ArcSet } from '../../../src/core/arc/arcs';
-import { Curve } from '../../../src/core/arc/curve';
 import { DiscShadow } from '../../../src/core/arc/discShadow';
 import { LineSweep } from '../../../src/core/arc/lineSweep';
 import { LineSweepPair } from '../../../src/core/arc/lineSweepPair';
@@ -8,6 +7,7 @@ import type { PairScene } from '../../../src/core/arc/pairScene';
 import type { CircleInput } from '../../../src/core/scene';
 import { boxCorners } from '../helpers';
 import { oracleRow } from './circleOracle';
+import { arc, segment } from './curves';
 import { sectionFactors } from './section';
 
 // Which pairs of straight edges take the line sweep (arc/lineSweepPair.ts), and the
@@ -16,16 +16,8 @@ import { sectionFactors } from './section';
 // with the summation rule of a closed enclosure (Incropera et al., Fundamentals of
 // Heat and Mass Transfer, 6th ed., sec. 13.1).
 
-function segment(ax: number, ay: number, bx: number, by: number): Curve {
-  const c = new Curve();
-  c.isArc = false;
-  c.ax = ax;
-  c.ay = ay;
-  c.bx = bx;
-  c.by = by;
-  c.length = Math.hypot(bx - ax, by - ay);
-  return c;
-}
+/** A tube (circle 0) or an arc of it from angle 0. */
+const tube = (cx: number, cy: number, r: number, span = 2 * Math.PI) => arc(cx, cy, r, 0, span);
 
 /** Circles as the ArcSet fields the pair reads, and a scene listing all of them as blockers plus `seg`, in the hull of the floor and roof below. */
 function blockers(discs: number[][], seg: number[] = []): { A: ArcSet; scene: PairScene } {
@@ -36,19 +28,6 @@ function blockers(discs: number[][], seg: number[] = []): { A: ArcSet; scene: Pa
   } as unknown as ArcSet;
   const scene = { circles: discs.map((_, k) => k), seg, hull: [0, 0, 4, 0, 4, 2, 0, 2] } as unknown as PairScene;
   return { A, scene };
-}
-
-function tube(cx: number, cy: number, r: number, span = 2 * Math.PI): Curve {
-  const c = new Curve();
-  c.isArc = true;
-  c.solid = true;
-  c.cx = cx;
-  c.cy = cy;
-  c.r = r;
-  c.start = 0;
-  c.span = span;
-  c.length = r * span;
-  return c;
 }
 
 const floor = segment(0, 0, 4, 0),
@@ -71,11 +50,13 @@ describe('which pairs take the line sweep', () => {
     expect(pair.exchange(floor, roof, baffle.scene, baffle.A)).toBe(-1);
   });
 
-  it('takes a wall and a whole tube; leaves an arc of a tube, or a tube across the wall, to the integration', () => {
+  it('takes a wall and a whole tube or an arc under half a turn; leaves a half tube, a tube across the wall or a tiny edge to the integration', () => {
     const { A, scene } = blockers(row.slice(0, 3));
     expect(pair.exchange(roof, tube(3, 0.5, 0.2), scene, A)).toBeGreaterThan(0);
+    expect(pair.exchange(roof, tube(3, 0.5, 0.2, Math.PI / 3), scene, A)).toBeGreaterThan(0);
     expect(pair.exchange(roof, tube(3, 0.5, 0.2, Math.PI), scene, A)).toBe(-1);
     expect(pair.exchange(floor, tube(3.7, -0.1, 0.2), scene, A)).toBe(-1);
+    expect(pair.exchange(segment(2, 2, 2 - 1e-5, 2), floor, scene, A)).toBe(-1);
   });
 
   it('leaves out a circle wholly behind one of the lines', () => {
