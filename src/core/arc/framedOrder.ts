@@ -1,5 +1,5 @@
 import { AngleHeap } from './angleHeap';
-import { endsAt, nextPass, swapNeighbours } from './kineticOrder';
+import { endsAt, passOf, swapNeighbours } from './kineticOrder';
 
 // The kinetic order of kineticOrder.ts kept only inside one member's interval, the
 // frame: a free gap crosses both members, so it lies inside either one's interval, and
@@ -207,28 +207,13 @@ export class FramedOrder {
   /** When e, outside, passes the frame's end it waits beyond (Infinity: not before the end). */
   private entryAt(e: number, now: number, cn: number, sn: number): number {
     if (e === this.lo || e === this.hi) return Infinity;
-    const X = this.x,
-      Y = this.y,
-      S = this.s;
     // Below: e passes lo upwards. Above: hi passes e upwards (e comes down past it).
-    const u = this.place[e] === BELOW ? e : this.hi,
-      v = this.place[e] === BELOW ? this.lo : e;
-    return nextPass(X[u] - X[v], Y[u] - Y[v], S[u] - S[v], now, cn, sn, this.tol, this.ends);
+    const below = this.place[e] === BELOW;
+    return passOf(this, below ? e : this.hi, below ? this.lo : e, now, cn, sn, this.tol, this.ends);
   }
 
   private pass(k: number, now: number, cn: number, sn: number): number {
-    const u = this.order[k],
-      v = this.order[k + 1];
-    return nextPass(
-      this.x[u] - this.x[v],
-      this.y[u] - this.y[v],
-      this.s[u] - this.s[v],
-      now,
-      cn,
-      sn,
-      this.tol,
-      this.ends,
-    );
+    return passOf(this, this.order[k], this.order[k + 1], now, cn, sn, this.tol, this.ends);
   }
 
   /** Counts, free length and every swap angle, from scratch. */

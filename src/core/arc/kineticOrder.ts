@@ -189,19 +189,22 @@ export class KineticOrder {
   }
 
   private nextSwap(k: number, now: number, cn: number, sn: number): number {
-    const u = this.order[k],
-      v = this.order[k + 1];
-    return nextPass(
-      this.x[u] - this.x[v],
-      this.y[u] - this.y[v],
-      this.s[u] - this.s[v],
-      now,
-      cn,
-      sn,
-      this.tol,
-      this.ends,
-    );
+    return passOf(this, this.order[k], this.order[k + 1], now, cn, sn, this.tol, this.ends);
   }
+}
+
+/** nextPass for end point u of `o`, below v (see nextPass). */
+export function passOf(
+  o: OrderedEnds,
+  u: number,
+  v: number,
+  now: number,
+  cn: number,
+  sn: number,
+  tol: number,
+  ends: Float64Array,
+): number {
+  return nextPass(o.x[u] - o.x[v], o.y[u] - o.y[v], o.s[u] - o.s[v], now, cn, sn, tol, ends);
 }
 
 /** Write the sweep's end angle t (radians), its cosine and sine into `ends`. */
