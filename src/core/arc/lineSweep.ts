@@ -16,8 +16,9 @@ import { KineticOrder } from './kineticOrder';
 // free length is one sinusoid, integrated exactly. The order is kept one swap of
 // neighbours at a time (a kinetic sorted list).
 //
-// A member is a straight edge (radiating on its left) or a whole solid circle; which
-// discs lie between them along a line is betweenDiscs.ts's. The order is kept only
+// A member is a straight edge (radiating on its left), a whole solid circle, or an arc
+// of one under half a turn (arcMember.ts); which discs lie between them along a line is
+// betweenDiscs.ts's. The order is kept only
 // inside the narrower member's interval (framedOrder.ts). Sketch units; radians.
 
 /** End point kinds of the members: an edge's end (role by order), a circle's low and high side. */
@@ -28,7 +29,7 @@ const END = 0,
 export class LineSweep {
   private readonly k = new KineticOrder();
   private readonly f = new FramedOrder();
-  /** Per member (0, 1): 1 for a circle (centre mx, my), 0 for a straight edge (left normal mx, my). */
+  /** Per member (0, 1): 1 for a circle or an arc of one (centre mx, my), 0 for a straight edge (left normal mx, my). */
   private readonly round = new Int8Array(2);
   private readonly mx = new Float64Array(2);
   private readonly my = new Float64Array(2);
