@@ -24,12 +24,16 @@ export class Curve {
   span = NaN;
   solid = false;
   length = NaN;
+  /** Arc: its index in the sketch's arcs, and their shapes computed once (null: compute here). */
+  arc = -1;
+  shapes: ArcShapes | null = null;
 
-  /** Load edge `id` of `E` (straight edges first, then arcs). */
-  load(E: EdgeSet, id: number): void {
+  /** Load edge `id` of `E` (straight edges first, then arcs), taking an arc's end points from `shapes` when given. */
+  load(E: EdgeSet, id: number, shapes: ArcShapes | null = null): void {
     if (id < E.count) {
       this.isArc = false;
       this.circle = -1;
+      this.arc = -1;
       this.ax = E.ax[id];
       this.ay = E.ay[id];
       this.bx = E.bx[id];
@@ -49,6 +53,16 @@ export class Curve {
     this.span = A.span[a];
     this.solid = A.circleIsEnclosure[c] === 0;
     this.length = A.length[a];
+    this.arc = a;
+    this.shapes = shapes;
+    if (shapes) {
+      const e = shapes.ends;
+      this.ax = e[4 * a];
+      this.ay = e[4 * a + 1];
+      this.bx = e[4 * a + 2];
+      this.by = e[4 * a + 3];
+      return;
+    }
     // Arc end points, used as the arc's fixed points when it is the target.
     this.ax = this.cx + this.r * Math.cos(this.start);
     this.ay = this.cy + this.r * Math.sin(this.start);
@@ -69,6 +83,11 @@ export class Curve {
   outerPoints(out: number[]): void {
     if (!this.isArc) {
       out.push(this.ax, this.ay, this.bx, this.by);
+      return;
+    }
+    const S = this.shapes;
+    if (S) {
+      for (let k = S.outerAt[this.arc]; k < S.outerAt[this.arc + 1]; k++) out.push(S.outer[k]);
       return;
     }
     const m = Math.max(1, Math.ceil(this.span / (Math.PI / 2) - 1e-12));
@@ -158,4 +177,32 @@ export function clearCrossing(tg: Curve, px: number, py: number, ux: number, uy:
   if (!(disc > 1e-6 * tg.r * tg.r)) return 0;
   const along = tg.solid ? -b - Math.sqrt(disc) : -b + Math.sqrt(disc);
   return along > 0 ? along : 0;
+}
+
+/**
+ * Each arc's end points and outer polygon (Curve.load, outerPoints), computed once per
+ * sketch: a pair of arcs asked for them by trigonometry every time (a tube bank split
+ * for flux profiles has hundreds of thousands of pairs). The same numbers.
+ */
+export class ArcShapes {
+  /** Per arc: a's x, y, b's x, y (sketch units). */
+  readonly ends: Float64Array;
+  /** Arc a's outer polygon is outer[outerAt[a] .. outerAt[a + 1]) (flat x, y). */
+  readonly outerAt: Int32Array;
+  readonly outer: Float64Array;
+
+  constructor(E: EdgeSet) {
+    const n = E.arcs.count,
+      c = new Curve(),
+      points: number[] = [];
+    this.ends = new Float64Array(4 * n);
+    this.outerAt = new Int32Array(n + 1);
+    for (let a = 0; a < n; a++) {
+      c.load(E, E.count + a);
+      this.ends.set([c.ax, c.ay, c.bx, c.by], 4 * a);
+      c.outerPoints(points);
+      this.outerAt[a + 1] = points.length;
+    }
+    this.outer = Float64Array.from(points);
+  }
 }

@@ -1,7 +1,7 @@
 import { extentWithCircles, totalEdgeCount, type EdgeSet } from '../edges';
 import type { ObstacleIndex } from '../obstacles';
 import { orient as orientIn } from '../orient';
-import { clearCrossing as clearCrossingIn, Curve, surelyBehind } from './curve';
+import { ArcShapes, clearCrossing as clearCrossingIn, Curve, surelyBehind } from './curve';
 import { DiscShadow } from './discShadow';
 import { HiddenCircles } from './hiddenCircles';
 import { LineSweepPair } from './lineSweepPair';
@@ -60,6 +60,8 @@ export class CurvedPairIntegrator implements EventFilter {
   private readonly shadow: DiscShadow;
   private readonly hidden = new HiddenCircles();
   private readonly lines2: LineSweepPair;
+  /** Arcs' end points and outer polygons, computed once (curve.ts). */
+  private readonly shapes: ArcShapes;
   /** Scratch for surelyBehind: a curve's outer polygon. */
   private readonly outline: number[] = [];
   /**
@@ -80,6 +82,7 @@ export class CurvedPairIntegrator implements EventFilter {
     this.shadow = new DiscShadow(SHADOW_MARGIN * extentWithCircles(E));
     this.lines2 = new LineSweepPair(SHADOW_MARGIN * extentWithCircles(E), this.shadow);
     this.hider = new Int32Array(totalEdgeCount(E)).fill(-1);
+    this.shapes = new ArcShapes(E);
   }
 
   /**
@@ -121,8 +124,8 @@ export class CurvedPairIntegrator implements EventFilter {
   exchangeLength(i: number, j: number): number {
     const em = this.em,
       tg = this.tg;
-    em.load(this.E, i);
-    tg.load(this.E, j);
+    em.load(this.E, i, this.shapes);
+    tg.load(this.E, j, this.shapes);
     // A concave arc (of an enclosure circle) sees itself; nothing else does.
     if (i === j && !(em.isArc && !em.solid)) return 0;
     if (em.length === 0 || tg.length === 0) return 0;
