@@ -31,7 +31,7 @@ export class FramedOrder {
   order = new Int32Array(64);
   at = new Int32Array(64);
   private m = 0;
-  /** Count just above each position (under position 0: see refresh). */
+  /** Count just above each position (under position 0: see recount). */
   count = new Int32Array(64);
   /** Next swap of the neighbours at each position, and the next entry of each end point outside. */
   private readonly swaps = new AngleHeap();
