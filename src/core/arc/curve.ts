@@ -123,6 +123,15 @@ export function surelyBehind(a: Curve, b: Curve, scratch: number[]): boolean {
   if (a.isArc && (!a.solid || a.span >= 2 * Math.PI)) return false;
   // A whole circle: its centre, reach r further (one test, no outer polygon).
   if (b.isArc && b.span >= 2 * Math.PI) return pointBehind(a, b.cx, b.cy, b.r);
+  if (!b.isArc) return pointBehind(a, b.ax, b.ay, 0) && pointBehind(a, b.bx, b.by, 0);
+  const S = b.shapes;
+  if (S) {
+    // The arc's outer polygon as computed once for the sketch (no copy).
+    const P = S.outer;
+    for (let k = S.outerAt[b.arc]; k < S.outerAt[b.arc + 1]; k += 2)
+      if (!pointBehind(a, P[k], P[k + 1], 0)) return false;
+    return true;
+  }
   scratch.length = 0;
   b.outerPoints(scratch);
   for (let k = 0; k < scratch.length; k += 2) if (!pointBehind(a, scratch[k], scratch[k + 1], 0)) return false;
