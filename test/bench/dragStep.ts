@@ -1,9 +1,10 @@
 // One drag step as a worker computes it (issue 13, target 4), rows split as for two
 // workers: the 1012-edge sketch of the browser drag (bigSketch.ts) with one tube
 // moved 0.01 a step, the 50-tube furnace section of exact circles with its middle
-// tube moved 0.005 a step, and a tube of the deep bank (four rows) likewise. Each step is timed twice in alternation: a full
-// job, and a worker that kept its rows from the step before (core reuse/). Both
-// must give the same bits; the bench stops if they do not.
+// tube moved 0.005 a step, and a tube of the deep bank (four rows) likewise. Each
+// step is timed twice in alternation: a full job, and a worker that kept its rows
+// from the step before (core reuse/). Both must give the same bits; the bench stops
+// if they do not.
 import { balancedRowSets } from '../../src/core/pairRows';
 import { restore, toScene } from '../../src/document';
 import { computeRows } from '../../src/worker/api';

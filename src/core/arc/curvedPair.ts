@@ -79,8 +79,9 @@ export class CurvedPairIntegrator implements EventFilter {
     this.scene = new PairScene(E, obstacles);
     this.breaks.filter = this;
     this.view = new PieceView(E.arcs);
-    this.shadow = new DiscShadow(SHADOW_MARGIN * extentWithCircles(E));
-    this.lines2 = new LineSweepPair(SHADOW_MARGIN * extentWithCircles(E), this.shadow);
+    const margin = SHADOW_MARGIN * extentWithCircles(E);
+    this.shadow = new DiscShadow(margin);
+    this.lines2 = new LineSweepPair(margin, this.shadow);
     this.hider = new Int32Array(totalEdgeCount(E)).fill(-1);
     this.shapes = new ArcShapes(E);
   }

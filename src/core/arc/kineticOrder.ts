@@ -128,19 +128,19 @@ export class KineticOrder {
     }
     for (let k = 0; k < n; k++) this.at[order[k]] = k;
     steps(this);
-    this.recount(0, n);
+    this.recount();
     const key = this.swaps.key;
     for (let k = 0; k + 1 < n; k++) key[k] = this.nextSwap(k, t, c, s);
     this.swaps.fill(Math.max(0, n - 1));
   }
 
-  /** Counts from position `from` on and the free length, after steps changed (positions from .. to - 1 affected). */
-  recount(from: number, to: number): void {
+  /** Counts and the free length from the steps and the order. */
+  private recount(): void {
     const order = this.order,
       count = this.count,
       step = this.step;
-    let run = from > 0 ? count[from - 1] : this.below;
-    for (let k = from; k < to; k++) {
+    let run = this.below;
+    for (let k = 0; k < this.size; k++) {
       run += step[order[k]];
       count[k] = run;
     }

@@ -323,18 +323,13 @@ export class LineSweep {
     return v < 0 ? -1 : 1;
   }
 
-  /** Steps from the order: an edge's lower end -1 (crossing starts), upper +1; a circle member's low side -1, high +1; a disc between its members +1 low, -1 high. */
+  /** The members' steps from the order, for the window sweep (no discs there): an edge's lower end -1 (crossing starts), upper +1; a circle's low side -1, high +1. */
   private setSteps(o: KineticOrder): void {
     const step = o.step,
       at = o.at;
     for (let e = 0; e < 4; e++) {
       const kind = this.kind[e];
       step[e] = kind === END ? (at[o.mate[e]] > at[e] ? -1 : 1) : kind === LOW ? -1 : 1;
-    }
-    for (let q = 0; q < this.discs; q++) {
-      const act = this.d.active(q);
-      step[4 + 2 * q] = act;
-      step[5 + 2 * q] = -act;
     }
   }
 
