@@ -2,16 +2,27 @@
 // synchronous, so the main thread takes chunks of rows itself and then waits on
 // a shared counter (Atomics.wait) while the workers finish; edge rows go into one
 // shared matrix, surface sums come back over ports read without an event loop
-// (receiveMessageOnPort). Results are the same bit for bit for any thread count.
+// (receiveMessageOnPort). With the matrix, the threads then sum it to surfaces,
+// each taking whole surfaces. Results are the same bit for bit for any thread count.
 import { availableParallelism } from 'node:os';
 import { MessageChannel, receiveMessageOnPort, Worker, type MessagePort } from 'node:worker_threads';
 import { buildEdges, allEdgeLengths, totalEdgeCount } from '../core/edges';
 import type { SceneInput, ViewFactorResult } from '../core/scene';
-import { aggregateToSurfaces } from '../core/surfaces';
+import { surfaceLengths } from '../core/surfaces';
 import { SurfaceAccumulator, surfaceFactorsFromPairs, type SurfaceRowSums } from '../core/surfaceRows';
 import { EdgePairs } from '../core/pairRows';
 import { computeViewFactors, edgeMatrixFits } from '../core/viewFactors';
-import { CONTROL_SLOTS, DONE, FAILED, rowChunks, workChunks, type ThreadJob } from './threadWork';
+import {
+  CONTROL_SLOTS,
+  doneSlot,
+  FACTORS,
+  FAILED,
+  rowChunks,
+  ROWS,
+  surfaceBlocks,
+  workChunks,
+  type ThreadJob,
+} from './threadWork';
 
 /** Most threads accepted by --threads. */
 export const MAX_THREADS = 256;
@@ -57,22 +68,31 @@ export function threadedViewFactors(
     throw new Error(`edgeSurface has ${scene.edgeSurface.length} entries for ${n} edges`);
   const summed = options.sumToSurfaces === true || !edgeMatrixFits(n);
   if (count <= 1 || n < 2) {
-    if (!summed) return computeViewFactors(scene);
+    if (!summed) return computeViewFactors(scene, { edgeMatrix: new Float64Array(sharedMatrix(n), 0, n * n) });
     return surfaceFactorsFromPairs(new EdgePairs(edges), scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
   }
   const length = allEdgeLengths(edges);
+  // Checks every edge's surface before any thread adds to a surface row.
+  const surfaceLength = surfaceLengths(length, scene.edgeSurface, scene.surfaceCount);
   const chunkStart = rowChunks(n, count);
+  const m = scene.surfaceCount;
+  const surfaceStart = surfaceBlocks(scene.edgeSurface, m, count);
   const job: ThreadJob = {
     id: nextJobId++,
     polygons: scene.polygons.map((p) => ({ kind: p.kind, points: Float64Array.from(p.points) })),
     circles: (scene.circles ?? []).map((c) => ({ ...c })),
     chunkStart,
     control: new SharedArrayBuffer(4 * CONTROL_SLOTS),
-    matrix: summed ? null : new SharedArrayBuffer(8 * n * n),
-    edgeSurface: summed ? Int32Array.from(scene.edgeSurface) : null,
-    surfaceCount: scene.surfaceCount,
+    matrix: summed ? null : sharedMatrix(n),
+    exchange: summed ? null : new SharedArrayBuffer(8 * m * m),
+    surfaceStart,
+    surfaceLength,
+    blockWorst: summed ? null : new SharedArrayBuffer(8 * (surfaceStart.length - 1)),
+    rowSumResidual: summed ? null : new SharedArrayBuffer(8 * m),
+    edgeSurface: Int32Array.from(scene.edgeSurface),
+    surfaceCount: m,
   };
-  const acc = summed ? new SurfaceAccumulator(length, scene.edgeSurface, scene.surfaceCount) : null;
+  const acc = summed ? new SurfaceAccumulator(length, scene.edgeSurface, m) : null;
   const workers = helpers(Math.min(count, chunkStart.length - 1) - (options.workersOnly ? 0 : 1));
   for (const w of workers) w.port.postMessage({ job });
   try {
@@ -80,7 +100,8 @@ export function threadedViewFactors(
       for (const w of workers) drain(w.port, job.id, acc);
     };
     if (!options.workersOnly) workChunks(job, (sums) => acc?.add(sums), takeIn);
-    waitForChunks(job, takeIn);
+    waitForChunks(job, doneSlot(ROWS), chunkStart.length - 1, takeIn);
+    if (!summed) waitForChunks(job, doneSlot(FACTORS), surfaceStart.length - 1, takeIn);
     takeIn();
   } catch (error) {
     // A thread that failed or stalled may hold broken state: start afresh next time.
@@ -88,8 +109,37 @@ export function threadedViewFactors(
     throw error;
   }
   if (acc) return acc.result(edges.hasEnclosure);
-  const F = new Float64Array(job.matrix!);
-  return aggregateToSurfaces(n, length, F, scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
+  // The threads turned G into F in place (core surfaceResult's steps, by blocks): the
+  // result's arrays are the shared memory they wrote, not copies of surfaces^2 doubles.
+  let reciprocityResidual = 0;
+  for (const w of new Float64Array(job.blockWorst!)) reciprocityResidual = Math.max(reciprocityResidual, w);
+  return {
+    edgeCount: n,
+    surfaceCount: m,
+    edgeLength: length,
+    surfaceLength,
+    F: new Float64Array(job.exchange!),
+    rowSumResidual: new Float64Array(job.rowSumResidual!),
+    reciprocityResidual,
+    closed: edges.hasEnclosure,
+  };
+}
+
+/** The edge matrix kept between jobs, one thread's or many (see sharedMatrix); dropped by endThreads. */
+let kept: SharedArrayBuffer | null = null;
+
+/**
+ * A zeroed shared buffer for an n x n edge matrix, reusing the last one when it is
+ * big enough (each job reads its matrix to the end before the next begins). Measured
+ * at 1600 edges on 2 cores: a fresh 20 MB buffer per job took up to 50 ms to fault
+ * in, and each one freed set off a full collection whose background threads took a
+ * core from the rows, so that two threads ran no faster than one.
+ */
+function sharedMatrix(n: number): SharedArrayBuffer {
+  const bytes = 8 * n * n;
+  if (kept === null || kept.byteLength < bytes) kept = new SharedArrayBuffer(bytes);
+  else new Float64Array(kept, 0, n * n).fill(0);
+  return kept;
 }
 
 /**
@@ -118,6 +168,7 @@ function helpers(count: number): { worker: Worker; port: MessagePort }[] {
 
 /** End every kept worker thread. */
 export function endThreads(): void {
+  kept = null;
   for (const t of threads.splice(0)) {
     t.port.close();
     void t.worker.terminate();
@@ -134,20 +185,19 @@ function drain(port: MessagePort, id: number, acc: SurfaceAccumulator | null): v
   }
 }
 
-/** Block until every chunk is done, taking in sums as they come; fail on a failed or stalled thread. */
-function waitForChunks(job: ThreadJob, takeIn: () => void): void {
+/** Block until slot `slot` of the job's control counts `count` (chunks or surface blocks), taking in sums as they come; fail on a failed or stalled thread. */
+function waitForChunks(job: ThreadJob, slot: number, count: number, takeIn: () => void): void {
   const control = new Int32Array(job.control);
-  const chunks = job.chunkStart.length - 1;
-  let seen = Atomics.load(control, DONE);
+  let seen = Atomics.load(control, slot);
   let since = Date.now();
-  while (seen < chunks) {
+  while (seen < count) {
     if (Atomics.load(control, FAILED) !== 0) {
       takeIn(); // throws with the thread's message
       throw new Error('a view-factor thread failed');
     }
-    Atomics.wait(control, DONE, seen, 500);
+    Atomics.wait(control, slot, seen, 500);
     takeIn();
-    const now = Atomics.load(control, DONE);
+    const now = Atomics.load(control, slot);
     if (now !== seen) {
       seen = now;
       since = Date.now();

@@ -4,7 +4,7 @@
 // flagged in the shared control array, so the main thread, which waits without an
 // event loop, learns of it.
 import { workerData, type MessagePort } from 'node:worker_threads';
-import { DONE, FAILED, workChunks, type ThreadJob } from './threadWork';
+import { doneSlot, FACTORS, FAILED, ROWS, workChunks, type ThreadJob } from './threadWork';
 
 const { port } = workerData as { port: MessagePort };
 
@@ -22,7 +22,7 @@ function run(job: ThreadJob): void {
     port.postMessage({ id: job.id, error: error instanceof Error ? error.message : String(error) });
     const control = new Int32Array(job.control);
     Atomics.store(control, FAILED, 1);
-    Atomics.notify(control, DONE);
+    for (let stage = ROWS; stage <= FACTORS; stage++) Atomics.notify(control, doneSlot(stage));
   }
 }
 

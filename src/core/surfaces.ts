@@ -49,16 +49,32 @@ export function aggregateToSurfaces(
   const surfaceLength = surfaceLengths(edgeLength, edgeSurface, m);
   // G_IJ = L_I F_IJ, the exchange length; summed straight from the edge rows.
   const G = new Float64Array(m * m);
-  for (let i = 0; i < n; i++) {
-    const row = edgeSurface[i] * m;
-    const Li = edgeLength[i];
-    const base = i * n;
-    for (let j = 0; j < n; j++) {
-      const f = edgeF[base + j];
-      if (f !== 0) G[row + edgeSurface[j]] += Li * f;
-    }
-  }
+  for (let i = 0; i < n; i++) addEdgeRow(i, n, edgeLength, edgeF, edgeSurface, m, G);
   return surfaceResult(n, edgeLength, surfaceLength, G, closed, true);
+}
+
+/**
+ * Add edge i's row of the edge factors to its surface's row of G:
+ * G[s(i), s(j)] += L_i F_ij for j = 0 .. n-1 in order (sketch units). Rows added in
+ * ascending i give the same bits however the surfaces are shared out, as long as
+ * each surface's edges are added by one caller (the threads of the command line).
+ */
+export function addEdgeRow(
+  i: number,
+  n: number,
+  edgeLength: ArrayLike<number>,
+  edgeF: Float64Array,
+  edgeSurface: ArrayLike<number>,
+  m: number,
+  G: Float64Array,
+): void {
+  const row = edgeSurface[i] * m;
+  const Li = edgeLength[i];
+  const base = i * n;
+  for (let j = 0; j < n; j++) {
+    const f = edgeF[base + j];
+    if (f !== 0) G[row + edgeSurface[j]] += Li * f;
+  }
 }
 
 /**
@@ -78,24 +94,10 @@ export function surfaceResult(
 ): ViewFactorResult {
   const m = surfaceLength.length;
   // Reciprocity first: it reads G, which `overwrite` turns into F below.
-  let reciprocityResidual = 0;
-  for (let I = 0; I < m; I++) {
-    for (let J = I + 1; J < m; J++) {
-      reciprocityResidual = Math.max(reciprocityResidual, reciprocityResidualOf(G[I * m + J], G[J * m + I]));
-    }
-  }
+  const reciprocityResidual = reciprocityOfRows(G, m, 0, m);
   const F = overwrite ? G : new Float64Array(m * m);
   const rowSumResidual = new Float64Array(m);
-  for (let I = 0; I < m; I++) {
-    const LI = surfaceLength[I];
-    let sum = 0;
-    for (let J = 0; J < m; J++) {
-      const f = LI > 0 ? G[I * m + J] / LI : 0;
-      F[I * m + J] = f;
-      sum += f;
-    }
-    rowSumResidual[I] = 1 - sum;
-  }
+  factorRows(G, surfaceLength, 0, m, F, rowSumResidual);
   return {
     edgeCount,
     surfaceCount: m,
@@ -106,4 +108,42 @@ export function surfaceResult(
     reciprocityResidual,
     closed,
   };
+}
+
+/**
+ * The largest relative reciprocity residual over the pairs (I, J > I) with I in
+ * [I0, I1) of the surface exchange matrix G (m x m, sketch units); dimensionless.
+ * A maximum is the same whatever the order, so rows may be taken in any split.
+ */
+export function reciprocityOfRows(G: Float64Array, m: number, I0: number, I1: number): number {
+  let worst = 0;
+  for (let I = I0; I < I1; I++) {
+    for (let J = I + 1; J < m; J++) worst = Math.max(worst, reciprocityResidualOf(G[I * m + J], G[J * m + I]));
+  }
+  return worst;
+}
+
+/**
+ * Rows I0 .. I1-1 of F_IJ = G_IJ / L_I (0 for a surface of no length) into F, which
+ * may be G itself, and each row's residual 1 - sum_J F_IJ into rowSumResidual.
+ */
+export function factorRows(
+  G: Float64Array,
+  surfaceLength: Float64Array,
+  I0: number,
+  I1: number,
+  F: Float64Array,
+  rowSumResidual: Float64Array,
+): void {
+  const m = surfaceLength.length;
+  for (let I = I0; I < I1; I++) {
+    const LI = surfaceLength[I];
+    let sum = 0;
+    for (let J = 0; J < m; J++) {
+      const f = LI > 0 ? G[I * m + J] / LI : 0;
+      F[I * m + J] = f;
+      sum += f;
+    }
+    rowSumResidual[I] = 1 - sum;
+  }
 }

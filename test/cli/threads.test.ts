@@ -7,6 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { main } from '../../src/cli/main';
 import type { CliIO } from '../../src/cli/io';
 import { parseThreads, threadedViewFactors } from '../../src/cli/threads';
+import { surfaceBlocks } from '../../src/cli/threadWork';
 import { computeViewFactors } from '../../src/core/viewFactors';
 import type { SceneInput } from '../../src/core/scene';
 import { mixedSceneArb, edgeCountOf } from '../core/arc/arbitraries';
@@ -92,6 +93,61 @@ describe('--threads', () => {
         expect(Math.abs(summed[1].F[k] - single.F[k])).toBeLessThanOrEqual(1e-13 * Math.abs(single.F[k]));
     }
   }, 120_000); // starting worker threads (tsx compiles their modules) is slow on a busy machine
+
+  it('a smaller sketch after a larger one (the kept edge matrix is bigger than it needs) gives the same bits, on 2 threads then 1', () => {
+    // Polygon rooms of falling size: many of their pairs are silent and never written, so
+    // a kept matrix not cleared between sketches would show the larger one's factors.
+    for (const [pieces, tubes, sides] of [
+      [12, 6, 9],
+      [6, 3, 5],
+      [3, 1, 4],
+    ]) {
+      const room: number[] = [];
+      for (let k = 0; k < pieces; k++) room.push((8 * k) / pieces, 0);
+      for (let k = 0; k < pieces; k++) room.push(8, (3 * k) / pieces);
+      for (let k = pieces; k > 0; k--) room.push((8 * k) / pieces, 3);
+      for (let k = pieces; k > 0; k--) room.push(0, (3 * k) / pieces);
+      const polygons: SceneInput['polygons'] = [{ kind: 'enclosure', points: room }];
+      for (let t = 0; t < tubes; t++) {
+        const points: number[] = [];
+        for (let k = 0; k < sides; k++)
+          points.push(
+            1 + t + 0.3 * Math.cos((2 * Math.PI * k) / sides),
+            1.5 + 0.3 * Math.sin((2 * Math.PI * k) / sides),
+          );
+        polygons.push({ kind: 'solid', points });
+      }
+      const n = 4 * pieces + tubes * sides;
+      // Two edges a surface, so the surface stages add rows of several edges.
+      const scene: SceneInput = {
+        polygons,
+        edgeSurface: Array.from({ length: n }, (_, k) => k >> 1),
+        surfaceCount: (n + 1) >> 1,
+      };
+      const single = computeViewFactors(scene);
+      for (const t of [2, 1]) {
+        const r = threadedViewFactors(scene, t);
+        expect(bytes(r.F)).toEqual(bytes(single.F));
+        expect(bytes(r.rowSumResidual)).toEqual(bytes(single.rowSumResidual));
+        expect(r.reciprocityResidual).toBe(single.reciprocityResidual);
+      }
+    }
+  }, 120_000);
+
+  it('surface blocks cover every surface once, in order, none empty', () => {
+    for (const [surfaces, threads] of [
+      [1, 4],
+      [7, 2],
+      [300, 3],
+    ]) {
+      const edgeSurface = Array.from({ length: 3 * surfaces }, (_, k) => (k * 7) % surfaces);
+      const start = surfaceBlocks(edgeSurface, surfaces, threads);
+      expect(start[0]).toBe(0);
+      expect(start[start.length - 1]).toBe(surfaces);
+      for (let b = 0; b + 1 < start.length; b++) expect(start[b + 1]).toBeGreaterThan(start[b]);
+      if (surfaces >= 8 * threads) expect(start.length - 1).toBeGreaterThanOrEqual(4 * threads);
+    }
+  });
 
   it('refuses a bad thread count with exit 2, and the help names the option', () => {
     const files = { 'duct.json': ductFile() };
