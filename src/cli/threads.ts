@@ -27,16 +27,25 @@ import {
 /** Most threads accepted by --threads. */
 export const MAX_THREADS = 256;
 
-/** Without --threads, sketches with fewer pairs than this run in-process: starting threads would cost more than it saves. */
-export const THREADS_FROM_PAIRS = 2_000_000;
+/**
+ * Without --threads, sketches with fewer pairs than this (about 4000 edges) run
+ * in-process. A new worker thread compiles its modules and runs its first rows
+ * unoptimised: its first job cost 0.6-0.8 s more than it saved. Measured one-shot
+ * (`factors`, 2 cores, 24 surfaces): 2052 edges 1.65 s on one thread and 1.89 s
+ * on two, 3052 edges 1.81 and 1.99 s, 4052 edges 2.41 and 2.15 s. Warm, from the
+ * third job of a study on, two threads took half the time at 2052 edges and
+ * 4052 edges alike: a long study of a smaller sketch gains from --threads.
+ */
+export const THREADS_FROM_PAIRS = 8_000_000;
 
 /** How long the main thread waits without any chunk finishing before it gives up on the workers, ms. */
 const STALL_MS = 300_000;
 
 export const THREADS_HELP = `  --threads N  worker threads for the view factors (default: one per core,
-               ${availableParallelism()} here; 1 computes in-process). Sketches under about 2000
-               edges run in-process unless --threads is given. Any N gives
-               the same numbers, bit for bit.`;
+               ${availableParallelism()} here; 1 computes in-process). Sketches under about 4000
+               edges run in-process unless --threads is given (threads take
+               about a second to start; a study of many cases gains from them
+               sooner). Any N gives the same numbers, bit for bit.`;
 
 /** Read a --threads value: a whole number from 1 to MAX_THREADS, or a problem. */
 export function parseThreads(text: string | undefined): number | string {
@@ -68,7 +77,8 @@ export function threadedViewFactors(
     throw new Error(`edgeSurface has ${scene.edgeSurface.length} entries for ${n} edges`);
   const summed = options.sumToSurfaces === true || !edgeMatrixFits(n);
   if (count <= 1 || n < 2) {
-    if (!summed) return computeViewFactors(scene, { edgeMatrix: new Float64Array(sharedMatrix(n), 0, n * n) });
+    // edgeViewFactors clears the part of the kept matrix it uses.
+    if (!summed) return computeViewFactors(scene, { edgeMatrix: new Float64Array(keptMatrix(n), 0, n * n) });
     return surfaceFactorsFromPairs(new EdgePairs(edges), scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
   }
   const length = allEdgeLengths(edges);
@@ -83,7 +93,7 @@ export function threadedViewFactors(
     circles: (scene.circles ?? []).map((c) => ({ ...c })),
     chunkStart,
     control: new SharedArrayBuffer(4 * CONTROL_SLOTS),
-    matrix: summed ? null : sharedMatrix(n),
+    matrix: summed ? null : clearedMatrix(n),
     exchange: summed ? null : new SharedArrayBuffer(8 * m * m),
     surfaceStart,
     surfaceLength,
@@ -125,21 +135,28 @@ export function threadedViewFactors(
   };
 }
 
-/** The edge matrix kept between jobs, one thread's or many (see sharedMatrix); dropped by endThreads. */
+/** The edge matrix kept between jobs, one thread's or many (see keptMatrix); dropped by endThreads. */
 let kept: SharedArrayBuffer | null = null;
 
 /**
- * A zeroed shared buffer for an n x n edge matrix, reusing the last one when it is
- * big enough (each job reads its matrix to the end before the next begins). Measured
- * at 1600 edges on 2 cores: a fresh 20 MB buffer per job took up to 50 ms to fault
- * in, and each one freed set off a full collection whose background threads took a
- * core from the rows, so that two threads ran no faster than one.
+ * A shared buffer for an n x n edge matrix (at least n^2 doubles, not cleared),
+ * the last one again when it is big enough: each job reads its matrix to the end
+ * before the next begins. Measured at 1600 edges on 2 cores: a fresh 20 MB buffer
+ * per job took up to 50 ms to fault in, and each one freed set off a full
+ * collection whose background threads took a core from the rows, so that two
+ * threads ran no faster than one.
  */
-function sharedMatrix(n: number): SharedArrayBuffer {
+function keptMatrix(n: number): SharedArrayBuffer {
   const bytes = 8 * n * n;
   if (kept === null || kept.byteLength < bytes) kept = new SharedArrayBuffer(bytes);
-  else new Float64Array(kept, 0, n * n).fill(0);
   return kept;
+}
+
+/** keptMatrix with its first n^2 doubles cleared (the rows write only pairs that exchange). */
+function clearedMatrix(n: number): SharedArrayBuffer {
+  const buffer = keptMatrix(n);
+  new Float64Array(buffer, 0, n * n).fill(0);
+  return buffer;
 }
 
 /**
