@@ -83,7 +83,7 @@ export function runSensitivity(args: string[], io: CliIO): number {
   if (!table.ok) return fail(table.message);
   let bounds: EmissivityBounds | undefined;
   if (ranges.length > 0) {
-    const found = emissivityBounds(sketch, ranges);
+    const found = emissivityBounds(sketch, ranges, factors);
     if (!found.ok) return fail(found.message);
     bounds = found.bounds;
   }

@@ -16,11 +16,19 @@ import {
 import { formatNumber } from '../document/labels';
 import { parseArgs } from './args';
 import type { CliIO } from './io';
-import { STUDY_CAUTION, missingStudyOption, studyOptions, studySketch, type StudyArgs } from './sweepCommand';
+import {
+  STUDY_CAUTION,
+  missingStudyOption,
+  studyOptions,
+  studySketch,
+  studyViewFactors,
+  type StudyArgs,
+} from './sweepCommand';
+import { THREADS_HELP } from './threads';
 import { usageError as reportUsage } from './terminalText';
 
 export const SOLVE_FOR_USAGE =
-  'usage: npm run cli -- solve-for FILE --vary SURFACE.PROPERTY --from A --to B --target SURFACE.QUANTITY=VALUE [--steps N] [--json]';
+  'usage: npm run cli -- solve-for FILE --vary SURFACE.PROPERTY --from A --to B --target SURFACE.QUANTITY=VALUE [--steps N] [--json] [--threads N]';
 
 const SOLVE_FOR_HELP = `${SOLVE_FOR_USAGE}
 
@@ -39,6 +47,7 @@ equals VALUE.
   --json                    {"value": v, "run": <exchange --json at v>}; when the
                             target is met more than once, value is the lowest
                             and "values" lists every one found
+${THREADS_HELP}
 The answer is found to 1e-9 of itself. A target not met in [A, B] is refused
 with the range the result covers at the scanned values. A crossing and
 recrossing between two scanned values is not seen: raise --steps.
@@ -73,6 +82,7 @@ export function runSolveFor(args: string[], io: CliIO): number {
     study.to!,
     target.value,
     study.steps ?? DEFAULT_SCAN_STEPS,
+    studyViewFactors(study),
   );
   if (!outcome.ok) {
     io.err(`solve-for: ${file}: ${outcome.message}\n`);

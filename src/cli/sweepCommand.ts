@@ -16,14 +16,16 @@ import {
   sweepCsv,
   sweepRows,
   type StudyParameter,
+  type ViewFactorsOf,
 } from '../document/study';
 import { parseArgs, type Format, type OwnOption } from './args';
 import type { CliIO } from './io';
 import { readSketchFile } from './readSketch';
+import { threadedViewFactors, threadsOption, THREADS_HELP } from './threads';
 import { displayName, usageError as reportUsage } from './terminalText';
 
 export const SWEEP_USAGE =
-  'usage: npm run cli -- sweep FILE --vary SURFACE.PROPERTY --from A --to B --steps N [--json | --csv]';
+  'usage: npm run cli -- sweep FILE --vary SURFACE.PROPERTY --from A --to B --steps N [--json | --csv] [--threads N]';
 
 export const STUDY_CAUTION = RESULTS_CAUTION;
 
@@ -47,6 +49,7 @@ from A to B (both included).
                             exchange --json prints for the file with that value
   --csv                     one row per value: each surface's net heat (W/m)
                             and temperature (K)
+${THREADS_HELP}
 Temperature and heat flux are varied only on a surface that has that
 condition in the file. Property and settings sweeps compute the view factors
 once; position and tube-row sweeps compute them for every value. FILE '-' reads standard input.
@@ -60,14 +63,18 @@ export interface StudyArgs {
   to?: number;
   steps?: number;
   target?: string;
+  /** --threads: worker threads for each case's view factors (see threads.ts). */
+  threads?: number;
 }
 
 /**
- * The study options as one OwnOption: --vary, --from, --to, --steps, and
- * --target when `withTarget`. Fills `into`; a problem is returned as text.
+ * The study options as one OwnOption: --vary, --from, --to, --steps, --threads,
+ * and --target when `withTarget`. Fills `into`; a problem is returned as text.
  */
 export function studyOptions(into: StudyArgs, withTarget: boolean): OwnOption {
   return (arg, takeNext) => {
+    const threads = threadsOption(arg, takeNext, into);
+    if (threads !== undefined) return threads;
     const eq = arg.indexOf('=');
     const name = arg.startsWith('--') && eq > 0 ? arg.slice(0, eq) : arg;
     const known = ['--vary', '--from', '--to', '--steps', ...(withTarget ? ['--target'] : [])];
@@ -93,6 +100,11 @@ export function studyOptions(into: StudyArgs, withTarget: boolean): OwnOption {
     else into.steps = value;
     return null;
   };
+}
+
+/** Each case's view factors over the threads asked for (or the default of threads.ts). */
+export function studyViewFactors(study: StudyArgs): ViewFactorsOf {
+  return (scene) => threadedViewFactors(scene, study.threads);
 }
 
 /** The problem with missing study options, or null. */
@@ -137,7 +149,9 @@ export function runSweepCommand(args: string[], io: CliIO): number {
   const p = study.vary!;
   const read = studySketch('sweep', file, p, io);
   if (!read) return 1;
-  const outcome = runSweep(read.sketch, p, study.from!, study.to!, study.steps!);
+  const outcome = runSweep(read.sketch, p, study.from!, study.to!, study.steps!, {
+    viewFactors: studyViewFactors(study),
+  });
   if (!outcome.ok) {
     io.err(`sweep: ${file}: ${outcome.message}\n`);
     return 1;

@@ -8,6 +8,8 @@ import { main } from '../../src/cli/main';
 import type { CliIO } from '../../src/cli/io';
 import { parseThreads, threadedViewFactors } from '../../src/cli/threads';
 import { surfaceBlocks } from '../../src/cli/threadWork';
+import { restore } from '../../src/document';
+import { parseParameter, parseTarget, runSweep, solveForTarget } from '../../src/document/study';
 import { computeViewFactors } from '../../src/core/viewFactors';
 import type { SceneInput } from '../../src/core/scene';
 import { mixedSceneArb, edgeCountOf } from '../core/arc/arbitraries';
@@ -94,6 +96,58 @@ describe('--threads', () => {
     }
   }, 120_000); // starting worker threads (tsx compiles their modules) is slow on a busy machine
 
+  it('sweep and solve-for of a position print the same with --threads 1 and --threads 2', () => {
+    // A cooler tube, so that the floor's net heat depends on where tube b stands.
+    const duct = JSON.parse(ductFile()) as { surfaces: Record<string, object> };
+    duct.surfaces['tube a'] = { emissivity: 0.9, temperature: 500 };
+    const files = { 'duct.json': JSON.stringify(duct) };
+    // Moving a tube recomputes the view factors for every value: each case over the threads.
+    const sweep = ['sweep', 'duct.json', '--vary', 'tube b.x', '--from', '4', '--to', '6', '--steps', '3', '--json'];
+    const swept = run([...sweep, '--threads', '1'], files);
+    expect(swept.err).toBe('');
+    const floorHeat = (JSON.parse(swept.out) as { runs: { surfaces: { name: string; netHeat: number }[] }[] }).runs.map(
+      (r) => r.surfaces.find((x) => x.name === 'floor')!.netHeat,
+    );
+    expect(floorHeat[0]).not.toBe(floorHeat[2]);
+    const middle = (floorHeat[0] + floorHeat[2]) / 2;
+    const solveFor = [
+      ...['solve-for', 'duct.json', '--vary', 'tube b.x', '--from', '4', '--to', '6', '--steps', '3'],
+      ...['--target', `floor.netHeat=${middle}`, '--json'],
+    ];
+    for (const command of [sweep, solveFor]) {
+      const one = run([...command, '--threads', '1'], files);
+      const two = run([...command, '--threads=2'], files);
+      expect(one.err).toBe('');
+      expect(one.code).toBe(0);
+      expect(two.out).toBe(one.out);
+      expect(two.code).toBe(0);
+    }
+    expect(run([...sweep, '--threads', '0'], files).code).toBe(2);
+  }, 120_000);
+
+  it('sweep and solve-for compute each case through the view-factor function they are given', () => {
+    const read = restore(JSON.parse(ductFile()));
+    if (!read.ok) throw new Error('duct sketch invalid');
+    const position = parseParameter('tube b.x'),
+      emissivity = parseParameter('roof.emissivity'),
+      target = parseTarget('roof.temperature=1200');
+    if (!position.ok || !emissivity.ok || !target.ok) throw new Error('parameters invalid');
+    let calls = 0;
+    const counted = (scene: SceneInput) => {
+      calls++;
+      return computeViewFactors(scene);
+    };
+    expect(runSweep(read.sketch, position.value, 4.5, 5.5, 3, { viewFactors: counted }).ok).toBe(true);
+    expect(calls).toBe(3); // a position: every case
+    calls = 0;
+    expect(runSweep(read.sketch, emissivity.value, 0.5, 0.7, 3, { viewFactors: counted }).ok).toBe(true);
+    expect(calls).toBe(1); // a property: the first case's factors serve all
+    calls = 0;
+    const names = ['floor', 'right', 'roof', 'left', 'tube a', 'tube b', 'tube c 1', 'tube c 2'];
+    solveForTarget(read.sketch, names, position.value, 4.5, 5.5, target.value, 3, counted);
+    expect(calls).toBeGreaterThanOrEqual(3);
+  });
+
   it('a smaller sketch after a larger one (the kept edge matrix is bigger than it needs) gives the same bits, on 2 threads then 1', () => {
     // Polygon rooms of falling size: many of their pairs are silent and never written, so
     // a kept matrix not cleared between sketches would show the larger one's factors.
@@ -158,7 +212,7 @@ describe('--threads', () => {
     }
     expect(run(['factors', 'duct.json', '--threads'], files).err).toMatch(/--threads needs a number/);
     expect(parseThreads('4')).toBe(4);
-    for (const command of ['factors', 'exchange', 'sensitivity', 'report'])
+    for (const command of ['factors', 'exchange', 'sensitivity', 'report', 'sweep', 'solve-for'])
       expect(run([command, '--help']).out).toMatch(/--threads N {2}worker threads/);
   });
 });

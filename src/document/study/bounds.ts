@@ -8,6 +8,7 @@
 // each ranged emissivity is worked out at every corner: where its sign differs
 // between corners the result is not monotone and is flagged, because its true
 // extreme may lie inside the box. No flag does not prove monotonicity between corners.
+import type { ViewFactorResult } from '../../core/scene';
 import { computeViewFactors } from '../../core/viewFactors';
 import { solveSketchExchange } from '../exchangeInput';
 import { formatNumber, quoteName } from '../labels';
@@ -57,10 +58,15 @@ export function parseEmissivityRange(text: string): Parsed<EmissivityRange> {
   return { ok: true, value: { surface: text.slice(0, eq), low, high } };
 }
 
-/** Lowest and highest net heat of every surface over the corners of the emissivity ranges (see the file header). */
+/**
+ * Lowest and highest net heat of every surface over the corners of the emissivity
+ * ranges (see the file header). `factors`: the sketch's view factors when the
+ * caller has them already (emissivities leave them as they are); else computed here.
+ */
 export function emissivityBounds(
   sketch: Sketch,
   ranges: readonly EmissivityRange[],
+  factors?: ViewFactorResult,
 ): { ok: true; bounds: EmissivityBounds } | { ok: false; message: string } {
   if (ranges.length === 0) return { ok: false, message: 'give at least one emissivity range' };
   if (ranges.length > MAX_RANGES)
@@ -75,7 +81,7 @@ export function emissivityBounds(
     if (ranges.filter((o) => o.surface === r.surface).length > 1)
       return { ok: false, message: `${quoteName(r.surface)} has more than one emissivity range` };
   }
-  const factors = computeViewFactors(scene);
+  const viewFactors = factors ?? computeViewFactors(scene);
   const n = names.length;
   const low = new Array<number>(n).fill(Infinity);
   const high = new Array<number>(n).fill(-Infinity);
@@ -89,7 +95,7 @@ export function emissivityBounds(
       const value = corner & (1 << k) ? r.high : r.low;
       edited = withParameterValue(edited, { kind: 'surface', surface: r.surface, property: 'emissivity' }, value);
     });
-    const solved = solveSketchExchange(edited, names, factors);
+    const solved = solveSketchExchange(edited, names, viewFactors);
     if (!solved.ok) {
       const at = ranges.map((r, k) => `${quoteName(r.surface)} ${formatNumber(corner & (1 << k) ? r.high : r.low)}`);
       return { ok: false, message: `with emissivities ${at.join(', ')}: ${solved.message}` };

@@ -18,7 +18,7 @@ export {
   type StudyTarget,
 } from './parameter';
 export { parameterValue, withParameterValue } from './apply';
-export { editedSketch, studyRunner, type StudyRun, type StudyRunOutcome } from './run';
+export { editedSketch, studyRunner, type StudyRun, type StudyRunOutcome, type ViewFactorsOf } from './run';
 export { MAX_STUDY_STEPS, rangeProblem, runSweep, type SweepOutcome } from './sweep';
 export { DEFAULT_SCAN_STEPS, solveForTarget, targetQuantity, type SolveForOutcome } from './solveFor';
 export { sweepCsv, sweepRows } from './tables';

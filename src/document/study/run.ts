@@ -3,7 +3,7 @@
 // and the object `exchange --json` prints for that file. Property and settings
 // studies keep the view factors of the first case (the geometry is the same);
 // position and tube-row studies compute them again for every value.
-import type { ViewFactorResult } from '../../core/scene';
+import type { SceneInput, ViewFactorResult } from '../../core/scene';
 import { computeViewFactors } from '../../core/viewFactors';
 import { solveSketchExchange } from '../exchangeInput';
 import { exchangeJson } from '../exchangeJson';
@@ -40,8 +40,15 @@ export function editedSketch(
   return { ok: false, message: read.errors.map((e) => e.message).join('; ') };
 }
 
+/** Surface view factors of a scene: core computeViewFactors, or the command line's over worker threads (same bits). */
+export type ViewFactorsOf = (scene: SceneInput) => ViewFactorResult;
+
 /** A function that solves the case at one value of the parameter, reusing view factors where the geometry is fixed. */
-export function studyRunner(sketch: Sketch, p: StudyParameter): (value: number) => StudyRunOutcome {
+export function studyRunner(
+  sketch: Sketch,
+  p: StudyParameter,
+  viewFactors: ViewFactorsOf = computeViewFactors,
+): (value: number) => StudyRunOutcome {
   const sameGeometry = p.kind !== 'shape' && p.kind !== 'row';
   let kept: { names: string[]; factors: ViewFactorResult } | undefined;
   const unit = parameterUnit(p, sketch.units);
@@ -56,7 +63,7 @@ export function studyRunner(sketch: Sketch, p: StudyParameter): (value: number) 
     let shared = sameGeometry ? kept : undefined;
     if (!shared) {
       const { scene, surfaceNames } = toScene(edited.sketch);
-      const factors = computeViewFactors(scene);
+      const factors = viewFactors(scene);
       if (!factors.F.every(Number.isFinite) || !factors.surfaceLength.every(Number.isFinite))
         return at(value, 'internal error: the view factors came out non-finite; please report this file');
       shared = { names: surfaceNames, factors };

@@ -15,7 +15,7 @@ import {
   type StudyParameter,
   type StudyTarget,
 } from './parameter';
-import { studyRunner, type StudyRun } from './run';
+import { studyRunner, type StudyRun, type ViewFactorsOf } from './run';
 import { rangeProblem } from './sweep';
 
 /** Scanned values when none is asked for. */
@@ -48,7 +48,8 @@ export function targetQuantity(run: StudyRun, target: Pick<StudyTarget, 'surface
  * Values of `p` in [from, to] where the target's quantity equals target.value.
  * Refused, with the range the quantity covers at the `steps` scanned values,
  * when no scanned interval brackets the target (a crossing and recrossing
- * between two scanned values is not seen: scan finer).
+ * between two scanned values is not seen: scan finer). `viewFactors` computes
+ * each case's factors (default: core, one thread).
  */
 export function solveForTarget(
   sketch: Sketch,
@@ -58,13 +59,14 @@ export function solveForTarget(
   to: number,
   target: StudyTarget,
   steps = DEFAULT_SCAN_STEPS,
+  viewFactors?: ViewFactorsOf,
 ): SolveForOutcome {
   const problem = rangeProblem(from, to, steps);
   if (problem) return { ok: false, message: problem };
   if (from === to) return { ok: false, message: 'the range is empty: --from and --to are the same value' };
   if (target.quantity !== 'peakToAverage' && !names.includes(target.surface))
     return { ok: false, message: `the target names no surface of the sketch: ${quoteName(target.surface)}` };
-  const solve = studyRunner(sketch, p);
+  const solve = studyRunner(sketch, p, viewFactors);
   let failure: string | undefined;
   const runs = new Map<number, StudyRun>();
   const residual = (value: number): number => {

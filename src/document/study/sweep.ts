@@ -2,7 +2,7 @@
 import { evenlySpaced } from '../../core/study';
 import { formatNumber } from '../labels';
 import type { Sketch } from '../schema';
-import { studyRunner, type StudyRun } from './run';
+import { studyRunner, type StudyRun, type ViewFactorsOf } from './run';
 import type { StudyParameter } from './parameter';
 
 /** Most values a study may take (each may need a view-factor computation). */
@@ -23,7 +23,8 @@ export type SweepOutcome = { ok: true; values: number[]; runs: StudyRun[] } | { 
  * The exchange at `steps` evenly spaced values from `from` to `to` (both
  * included; units of the parameter). The first case that cannot be solved ends
  * the sweep with its message. `onProgress(done, total)` is told after each case;
- * `stopped()` returning true ends it early with the message 'stopped'.
+ * `stopped()` returning true ends it early with the message 'stopped';
+ * `viewFactors` computes each case's factors (default: core, one thread).
  */
 export function runSweep(
   sketch: Sketch,
@@ -31,12 +32,16 @@ export function runSweep(
   from: number,
   to: number,
   steps: number,
-  hooks: { onProgress?: (done: number, total: number) => void; stopped?: () => boolean } = {},
+  hooks: {
+    onProgress?: (done: number, total: number) => void;
+    stopped?: () => boolean;
+    viewFactors?: ViewFactorsOf;
+  } = {},
 ): SweepOutcome {
   const problem = rangeProblem(from, to, steps);
   if (problem) return { ok: false, message: problem };
   const values = evenlySpaced(from, to, steps);
-  const solve = studyRunner(sketch, p);
+  const solve = studyRunner(sketch, p, hooks.viewFactors);
   const runs: StudyRun[] = [];
   for (const value of values) {
     if (hooks.stopped?.()) return { ok: false, message: 'stopped' };
