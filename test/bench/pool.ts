@@ -11,6 +11,7 @@
 import { availableParallelism, loadavg } from 'node:os';
 import type { SceneInput } from '../../src/core/scene';
 import { endThreads, threadedViewFactors } from '../../src/cli/threads';
+import { coRunCeiling } from './coRun';
 import { tubeScene } from './scenes';
 
 const args = process.argv.slice(2);
@@ -123,6 +124,11 @@ function speedUp(quick: boolean): void {
   const target = 0.7 * cores;
   console.log(
     `threads: ${n} edges, one thread median ${t1.toFixed(0)} ms, ${threads} threads median ${tN.toFixed(0)} ms: speed-up ${(t1 / tN).toFixed(3)}x (target >= 0.7 x ${cores} cores = ${target.toFixed(1)}x on an idle machine; load now ${loadavg()[0].toFixed(1)}): ${t1 / tN >= target ? 'met' : 'NOT met'}; results identical: ${identical ? 'yes' : 'NO'}`,
+  );
+  // Right after, what the machine allows: the edge matrix alone, then one copy per thread at once (information).
+  const c = coRunCeiling(scene, threads, quick ? 3 : 7);
+  console.log(
+    `threads, the machine now: the edge matrix alone ${c.alone.toFixed(0)} ms; ${threads} copies at once, a thread each, ${c.together.map((t) => t.toFixed(0)).join(' and ')} ms: no code could gain more than ${c.ceiling.toFixed(2)}x over ${threads} threads now (information)`,
   );
 }
 
