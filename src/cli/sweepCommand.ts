@@ -16,6 +16,7 @@ import {
   sweepCsv,
   sweepRows,
   type StudyParameter,
+  type StudyRun,
   type ViewFactorsOf,
 } from '../document/study';
 import { parseArgs, type Format, type OwnOption } from './args';
@@ -166,7 +167,7 @@ function sweepOutput(
   sketch: Sketch,
   p: StudyParameter,
   values: number[],
-  outcome: { runs: Parameters<typeof sweepRows>[2] },
+  outcome: { runs: readonly StudyRun[] },
 ): string {
   if (format === 'json') return `${JSON.stringify({ values, runs: outcome.runs.map((r) => r.json) })}\n`;
   if (format === 'csv') return sweepCsv(p, sketch.units, outcome.runs);

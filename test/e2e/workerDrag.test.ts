@@ -7,6 +7,7 @@ import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { screenOf, startApp, type App, type TestWindow, waitReady } from './harness';
 import type { SketchFile } from '../../src/state/sketchFile';
+import { cliJson, kiln } from '../cli/studyHelpers';
 
 let app: App;
 let page: Page;
@@ -150,4 +151,51 @@ describe('a drag computed by the worker pool', () => {
     await open(final);
     expect(await exportedCsv()).toBe(dragged);
   }, 120_000);
+});
+
+describe('a sweep that moves a shape, shared over workers', () => {
+  it('runs its cases in one worker per core but the page, and shows what sweep --json prints', async () => {
+    // A page that believes it has 4 cores, and counts the workers it starts.
+    const p = await app.context.newPage();
+    await p.addInitScript(() => {
+      Object.defineProperty(navigator, 'hardwareConcurrency', { get: () => 4 });
+      const Base = window.Worker;
+      const made: string[] = [];
+      (window as unknown as { __made: string[] }).__made = made;
+      window.Worker = class extends Base {
+        constructor(url: string | URL, options?: WorkerOptions) {
+          super(url, options);
+          made.push(String(url));
+        }
+      };
+    });
+    await p.goto(app.url);
+    await waitReady(p);
+    await p.evaluate((content) => {
+      const dt = new DataTransfer();
+      dt.items.add(new File([content], 'kiln.json', { type: 'application/json' }));
+      window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
+    }, JSON.stringify(kiln()));
+    await p.getByRole('tab', { name: 'What if' }).click();
+    await p.getByRole('combobox', { name: /vary/i }).selectOption("position x of the shape of 'ware stack.2' (m)");
+    await p.getByRole('textbox', { name: /^from/i }).fill('1.2');
+    await p.getByRole('textbox', { name: /^to/i }).fill('1.8');
+    await p.getByRole('textbox', { name: /^steps/i }).fill('5');
+    const made = () => p.evaluate(() => (window as unknown as { __made: string[] }).__made.length);
+    const before = await made();
+    await p.getByRole('button', { name: 'Run' }).click();
+    const table = p.getByRole('table', { name: 'Study results per value' });
+    await table.waitFor();
+    expect((await made()) - before).toBe(3);
+    const argv = ['sweep', 'k.json', '--vary', 'ware stack.2.x', '--from', '1.2', '--to', '1.8', '--steps', '5'];
+    const cli = cliJson({ 'k.json': kiln() }, ...argv) as { runs: { surfaces: { netHeat: number }[] }[] };
+    const rows = await table.locator('tbody tr').all();
+    expect(rows).toHaveLength(5);
+    for (const [k, row] of rows.entries()) {
+      const cells = (await row.locator('td').allInnerTexts()).map(Number);
+      // Six figures, as the table shows them (Chromium and Node may differ in the last bits).
+      expect(cells).toEqual(cli.runs[k].surfaces.map((s) => Number(s.netHeat.toPrecision(6))));
+    }
+    await p.close();
+  });
 });

@@ -19,9 +19,17 @@ export {
 } from './parameter';
 export { parameterValue, withParameterValue } from './apply';
 export { editedSketch, studyRunner, type StudyRun, type StudyRunOutcome, type ViewFactorsOf } from './run';
-export { MAX_STUDY_STEPS, rangeProblem, runSweep, type SweepOutcome } from './sweep';
+export {
+  MAX_STUDY_STEPS,
+  rangeProblem,
+  runSweep,
+  sweepShare,
+  type SweepOutcome,
+  type SweepShare,
+  type SweepShareOutcome,
+} from './sweep';
 export { DEFAULT_SCAN_STEPS, solveForTarget, targetQuantity, type SolveForOutcome } from './solveFor';
-export { sweepCsv, sweepRows } from './tables';
+export { sweepCsv, sweepRows, type SweepRowSource } from './tables';
 export { sensitivityTable, type SensitivityRow, type SensitivityTableOutcome } from './sensitivity';
 export {
   MAX_RANGES,

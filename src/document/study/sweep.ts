@@ -19,6 +19,24 @@ export function rangeProblem(from: number, to: number, steps: number, least = 2)
 
 export type SweepOutcome = { ok: true; values: number[]; runs: StudyRun[] } | { ok: false; message: string };
 
+/** Which cases of a sweep one worker takes: case k (from 0) when k % of === part. */
+export interface SweepShare {
+  part: number;
+  of: number;
+}
+
+export type SweepShareOutcome =
+  | { ok: true; values: number[]; indices: number[]; runs: StudyRun[] }
+  /** `index`: the case that could not be solved (-1: the range itself was refused). */
+  | { ok: false; message: string; index: number };
+
+/** What a sweep may be told as it goes (see runSweep). */
+export interface SweepHooks {
+  onProgress?: (done: number, total: number) => void;
+  stopped?: () => boolean;
+  viewFactors?: ViewFactorsOf;
+}
+
 /**
  * The exchange at `steps` evenly spaced values from `from` to `to` (both
  * included; units of the parameter). The first case that cannot be solved ends
@@ -32,23 +50,41 @@ export function runSweep(
   from: number,
   to: number,
   steps: number,
-  hooks: {
-    onProgress?: (done: number, total: number) => void;
-    stopped?: () => boolean;
-    viewFactors?: ViewFactorsOf;
-  } = {},
+  hooks: SweepHooks = {},
 ): SweepOutcome {
+  const out = sweepShare(sketch, p, from, to, steps, { part: 0, of: 1 }, hooks);
+  return out.ok ? { ok: true, values: out.values, runs: out.runs } : { ok: false, message: out.message };
+}
+
+/**
+ * One share of a sweep (several workers each take one): the cases k with
+ * k % of === part, in order, each exactly as the whole sweep solves it. Its first
+ * case that cannot be solved ends the share with its index, so that of all shares
+ * the lowest index gives the whole sweep's message. Progress counts this share's cases.
+ */
+export function sweepShare(
+  sketch: Sketch,
+  p: StudyParameter,
+  from: number,
+  to: number,
+  steps: number,
+  share: SweepShare,
+  hooks: SweepHooks = {},
+): SweepShareOutcome {
   const problem = rangeProblem(from, to, steps);
-  if (problem) return { ok: false, message: problem };
+  if (problem) return { ok: false, message: problem, index: -1 };
   const values = evenlySpaced(from, to, steps);
   const solve = studyRunner(sketch, p, hooks.viewFactors);
-  const runs: StudyRun[] = [];
-  for (const value of values) {
-    if (hooks.stopped?.()) return { ok: false, message: 'stopped' };
-    const outcome = solve(value);
-    if (!outcome.ok) return outcome;
+  const runs: StudyRun[] = [],
+    indices: number[] = [];
+  const total = Math.ceil((values.length - share.part) / share.of);
+  for (let k = share.part; k < values.length; k += share.of) {
+    if (hooks.stopped?.()) return { ok: false, message: 'stopped', index: k };
+    const outcome = solve(values[k]);
+    if (!outcome.ok) return { ok: false, message: outcome.message, index: k };
     runs.push(outcome.run);
-    hooks.onProgress?.(runs.length, values.length);
+    indices.push(k);
+    hooks.onProgress?.(runs.length, total);
   }
-  return { ok: true, values, runs };
+  return { ok: true, values, indices, runs };
 }

@@ -4,10 +4,16 @@
 import { toCsv, type CsvCell } from '../csv';
 import type { Units } from '../units';
 import { describeParameter, parameterUnit, type StudyParameter } from './parameter';
-import type { StudyRun } from './run';
+
+/** What a row needs of a run (a StudyRun has it; so do the app's shares of a sweep put together). */
+export interface SweepRowSource {
+  value: number;
+  names: readonly string[];
+  result: { netHeat: ArrayLike<number>; temperature: ArrayLike<number> };
+}
 
 /** Header and one row per run: the value, then net heat (W per metre of depth) and temperature (K) of each surface. */
-export function sweepRows(p: StudyParameter, units: Units, runs: readonly StudyRun[]): CsvCell[][] {
+export function sweepRows(p: StudyParameter, units: Units, runs: readonly SweepRowSource[]): CsvCell[][] {
   const unit = parameterUnit(p, units);
   const names = runs[0]?.names ?? [];
   const header: CsvCell[] = [unit === '' ? describeParameter(p) : `${describeParameter(p)} (${unit})`];
@@ -22,6 +28,6 @@ export function sweepRows(p: StudyParameter, units: Units, runs: readonly StudyR
 }
 
 /** The rows as CSV (RFC 4180, spreadsheet-safe names). */
-export function sweepCsv(p: StudyParameter, units: Units, runs: readonly StudyRun[]): string {
+export function sweepCsv(p: StudyParameter, units: Units, runs: readonly SweepRowSource[]): string {
   return toCsv(sweepRows(p, units, runs));
 }

@@ -13,8 +13,10 @@ import {
   sensitivityTable,
   solveForTarget,
   sweepCsv,
+  sweepShare,
   targetQuantity,
   type Quantity,
+  type SweepShare,
 } from '../../document/study';
 import { toScene } from '../../document';
 import { computeViewFactors } from '../../core/viewFactors';
@@ -22,7 +24,16 @@ import { solveSketchExchange } from '../../document/exchangeInput';
 import type { CheckedSketch } from '../documentApi';
 
 export type StudyRequest =
-  | { kind: 'sweep'; sketch: CheckedSketch; address: string; from: number; to: number; steps: number }
+  | {
+      kind: 'sweep';
+      sketch: CheckedSketch;
+      address: string;
+      from: number;
+      to: number;
+      steps: number;
+      /** One worker's share of the cases (shares.ts); none: every case. */
+      share?: SweepShare;
+    }
   /** How each net heat changes with each emissivity and fixed temperature (no parameter, no range). */
   | { kind: 'effects'; sketch: CheckedSketch }
   | {
@@ -65,12 +76,25 @@ export interface EffectsTable {
   rows: { parameter: string; unit: string; netHeat: number[] }[];
 }
 
+/** One worker's share of a sweep: the cases at `indices` (of `values`), in order. */
+export interface SweepShareTable {
+  label: string;
+  unit: string;
+  names: string[];
+  values: number[];
+  indices: number[];
+  netHeat: number[][];
+  temperature: number[][];
+}
+
 export type StudyReply =
   | { kind: 'progress'; done: number; total: number }
   | { kind: 'effects'; table: EffectsTable }
   | { kind: 'sweep'; table: SweepTable }
+  | { kind: 'sweepShare'; table: SweepShareTable }
   | { kind: 'solve'; answer: SolveAnswer }
-  | { kind: 'failed'; message: string };
+  /** `index`: with a share, the case that could not be solved (-1: the range was refused). */
+  | { kind: 'failed'; message: string; index?: number };
 
 const shown = (x: number) => String(Number(x.toPrecision(10)));
 
@@ -88,6 +112,20 @@ export function runStudy(
   const problem = parameterProblem(sketch, names, p);
   if (problem) return { kind: 'failed', message: problem };
   const unit = parameterUnit(p, sketch.units);
+  if (request.kind === 'sweep' && request.share) {
+    const out = sweepShare(sketch, p, request.from, request.to, request.steps, request.share, { onProgress });
+    if (!out.ok) return { kind: 'failed', message: out.message, index: out.index };
+    const table: SweepShareTable = {
+      label: describeParameter(p),
+      unit,
+      names,
+      values: out.values,
+      indices: out.indices,
+      netHeat: out.runs.map((r) => Array.from(r.result.netHeat)),
+      temperature: out.runs.map((r) => Array.from(r.result.temperature)),
+    };
+    return { kind: 'sweepShare', table };
+  }
   if (request.kind === 'sweep') {
     const out = runSweep(sketch, p, request.from, request.to, request.steps, { onProgress });
     if (!out.ok) return { kind: 'failed', message: out.message };

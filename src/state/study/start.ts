@@ -1,8 +1,10 @@
 // Starting a study from the page: in a worker where the browser has them (so a
-// long sweep that moves a shape never freezes the page), and in-line, after
-// the page has drawn, where it has none (tests, old browsers). Either way the
-// caller gets progress and one final reply, and can stop it.
+// long sweep that moves a shape never freezes the page; such a sweep over several
+// workers, shares.ts), and in-line, after the page has drawn, where it has none
+// (tests, old browsers). Either way the caller gets progress and one final reply,
+// and can stop it.
 import { runStudy, type StudyReply, type StudyRequest } from './run';
+import { startShares, studyWorkerCount, workerFailure } from './shares';
 
 export interface RunningStudy {
   /** Stop now; no further reply comes. */
@@ -12,7 +14,10 @@ export interface RunningStudy {
 /** Start the study; `onReply` gets progress replies and then exactly one final reply (unless stopped). */
 export function startStudy(request: StudyRequest, onReply: (reply: StudyReply) => void): RunningStudy {
   if (typeof Worker === 'undefined') return startInline(request, onReply);
-  const worker = new Worker(new URL('./worker.ts', import.meta.url), { type: 'module' });
+  const makeWorker = () => new Worker(new URL('./worker.ts', import.meta.url), { type: 'module' });
+  const count = studyWorkerCount(request, navigator.hardwareConcurrency || 1);
+  if (request.kind === 'sweep' && count > 1) return startShares(request, count, onReply, makeWorker);
+  const worker = makeWorker();
   let over = false;
   worker.onmessage = (event: MessageEvent<StudyReply>) => {
     if (over) return;
@@ -26,10 +31,7 @@ export function startStudy(request: StudyRequest, onReply: (reply: StudyReply) =
     if (over) return;
     over = true;
     worker.terminate();
-    onReply({
-      kind: 'failed',
-      message: `the study stopped with an internal error (${event.message || 'worker failed'})`,
-    });
+    onReply(workerFailure(event.message));
   };
   worker.postMessage(request);
   return {

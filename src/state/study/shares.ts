@@ -1,0 +1,114 @@
+// A sweep that moves a shape or a tube row computes view factors for every case,
+// so its cases are shared over several workers (case k to share k % n), and the
+// shares are put back together here: the same table, CSV and first failure as one
+// worker's sweep, number for number (each case is solved exactly as in the whole).
+import { parseParameter, sweepCsv } from '../../document/study';
+import type { StudyReply, StudyRequest, SweepShareTable } from './run';
+
+type SweepRequest = Extract<StudyRequest, { kind: 'sweep' }>;
+
+/** Most workers one study takes. */
+const MAX_STUDY_WORKERS = 8;
+
+/**
+ * Workers for a study on a machine of `cores` logical cores: a sweep whose every
+ * case computes view factors (a moved shape, a tube row) takes one per core but
+ * the page's, at most one per case; any other study one (its factors are computed once).
+ */
+export function studyWorkerCount(request: StudyRequest, cores: number): number {
+  if (request.kind !== 'sweep') return 1;
+  const p = parseParameter(request.address);
+  if (!p.ok || (p.value.kind !== 'shape' && p.value.kind !== 'row')) return 1;
+  return Math.max(1, Math.min(MAX_STUDY_WORKERS, Math.floor(cores) - 1, request.steps));
+}
+
+/** The failure a study reports when its worker breaks down. */
+export function workerFailure(detail: string): StudyReply {
+  return { kind: 'failed', message: `the study stopped with an internal error (${detail || 'worker failed'})` };
+}
+
+/**
+ * The whole sweep from its shares' final replies (any order): the table, or the
+ * message of the lowest case that could not be solved, as the whole sweep would stop there.
+ */
+export function joinShares(request: SweepRequest, finals: readonly StudyReply[]): StudyReply {
+  let failure: { message: string; index: number } | null = null;
+  const tables: SweepShareTable[] = [];
+  for (const reply of finals) {
+    if (reply.kind === 'failed') {
+      const index = reply.index ?? -1;
+      if (failure === null || index < failure.index) failure = { message: reply.message, index };
+    } else if (reply.kind === 'sweepShare') tables.push(reply.table);
+    else return workerFailure(`a share of the sweep replied '${reply.kind}'`);
+  }
+  if (failure) return { kind: 'failed', message: failure.message };
+  const parsed = parseParameter(request.address);
+  if (!parsed.ok || tables.length === 0) return workerFailure('no share of the sweep came back');
+  const { label, unit, names, values } = tables[0];
+  const netHeat: number[][] = new Array<number[]>(values.length);
+  const temperature: number[][] = new Array<number[]>(values.length);
+  for (const t of tables)
+    t.indices.forEach((k, q) => {
+      netHeat[k] = t.netHeat[q];
+      temperature[k] = t.temperature[q];
+    });
+  for (let k = 0; k < values.length; k++)
+    if (!netHeat[k]) return workerFailure(`case ${k + 1} of the sweep is missing`);
+  const rows = values.map((value, k) => ({
+    value,
+    names,
+    result: { netHeat: netHeat[k], temperature: temperature[k] },
+  }));
+  const csv = sweepCsv(parsed.value, request.sketch.units, rows);
+  return { kind: 'sweep', table: { label, unit, names, values, netHeat, temperature, csv } };
+}
+
+/** What the shares need of a worker (a browser Worker has it). */
+export interface StudyWorker {
+  postMessage(request: StudyRequest): void;
+  onmessage: ((event: MessageEvent<StudyReply>) => void) | null;
+  onerror: ((event: ErrorEvent) => void) | null;
+  terminate(): void;
+}
+
+/**
+ * Run a sweep as `count` shares, one worker each (`makeWorker`): progress is the
+ * cases done over all shares; one final reply once every share has answered.
+ */
+export function startShares(
+  request: SweepRequest,
+  count: number,
+  onReply: (reply: StudyReply) => void,
+  makeWorker: () => StudyWorker,
+): { stop(): void } {
+  const workers = Array.from({ length: count }, makeWorker);
+  const done = new Array<number>(count).fill(0);
+  const finals: StudyReply[] = [];
+  let over = false;
+  const stop = () => {
+    over = true;
+    for (const w of workers) w.terminate();
+  };
+  workers.forEach((worker, part) => {
+    worker.onmessage = (event) => {
+      if (over) return;
+      const reply = event.data;
+      if (reply.kind === 'progress') {
+        done[part] = reply.done;
+        onReply({ kind: 'progress', done: done.reduce((a, b) => a + b, 0), total: request.steps });
+        return;
+      }
+      finals.push(reply);
+      if (finals.length < count) return;
+      stop();
+      onReply(joinShares(request, finals));
+    };
+    worker.onerror = (event) => {
+      if (over) return;
+      stop();
+      onReply(workerFailure(event.message));
+    };
+    worker.postMessage({ ...request, share: { part, of: count } });
+  });
+  return { stop };
+}
