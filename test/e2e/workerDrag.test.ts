@@ -154,7 +154,7 @@ describe('a drag computed by the worker pool', () => {
 });
 
 describe('a sweep that moves a shape, shared over workers', () => {
-  it('runs its cases in one worker per core but the page, and shows what sweep --json prints', async () => {
+  it('runs its 12 cases in one worker per core but the page (3 of 4), and shows what sweep --json prints', async () => {
     // A page that believes it has 4 cores, and counts the workers it starts.
     const p = await app.context.newPage();
     await p.addInitScript(() => {
@@ -180,17 +180,17 @@ describe('a sweep that moves a shape, shared over workers', () => {
     await p.getByRole('combobox', { name: /vary/i }).selectOption("position x of the shape of 'ware stack.2' (m)");
     await p.getByRole('textbox', { name: /^from/i }).fill('1.2');
     await p.getByRole('textbox', { name: /^to/i }).fill('1.8');
-    await p.getByRole('textbox', { name: /^steps/i }).fill('5');
+    await p.getByRole('textbox', { name: /^steps/i }).fill('12');
     const made = () => p.evaluate(() => (window as unknown as { __made: string[] }).__made.length);
     const before = await made();
     await p.getByRole('button', { name: 'Run' }).click();
     const table = p.getByRole('table', { name: 'Study results per value' });
     await table.waitFor();
     expect((await made()) - before).toBe(3);
-    const argv = ['sweep', 'k.json', '--vary', 'ware stack.2.x', '--from', '1.2', '--to', '1.8', '--steps', '5'];
+    const argv = ['sweep', 'k.json', '--vary', 'ware stack.2.x', '--from', '1.2', '--to', '1.8', '--steps', '12'];
     const cli = cliJson({ 'k.json': kiln() }, ...argv) as { runs: { surfaces: { netHeat: number }[] }[] };
     const rows = await table.locator('tbody tr').all();
-    expect(rows).toHaveLength(5);
+    expect(rows).toHaveLength(12);
     for (const [k, row] of rows.entries()) {
       const cells = (await row.locator('td').allInnerTexts()).map(Number);
       // Six figures, as the table shows them (Chromium and Node may differ in the last bits).

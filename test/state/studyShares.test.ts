@@ -50,11 +50,12 @@ class FakeWorker implements StudyWorker {
 }
 
 describe('a sweep in shares', () => {
-  it('takes one worker per core but the page, at most one per case, only when every case computes view factors', () => {
-    const move = sweep(1.2, 1.8, 5);
+  it('takes one worker per core but the page, four cases each at least, only when every case computes view factors', () => {
+    const move = sweep(1.2, 1.8, 20);
     expect(studyWorkerCount(move, 8)).toBe(5);
-    expect(studyWorkerCount({ ...move, steps: 16 }, 8)).toBe(7);
-    expect(studyWorkerCount({ ...move, steps: 16 }, 64)).toBe(8);
+    expect(studyWorkerCount({ ...move, steps: 40 }, 8)).toBe(7);
+    expect(studyWorkerCount({ ...move, steps: 40 }, 64)).toBe(8);
+    expect(studyWorkerCount({ ...move, steps: 7 }, 8)).toBe(1);
     expect(studyWorkerCount(move, 2)).toBe(1);
     expect(studyWorkerCount({ ...move, address: 'hearth.temperature' }, 8)).toBe(1);
     expect(studyWorkerCount({ kind: 'effects', sketch: move.sketch }, 8)).toBe(1);

@@ -10,16 +10,21 @@ type SweepRequest = Extract<StudyRequest, { kind: 'sweep' }>;
 /** Most workers one study takes. */
 const MAX_STUDY_WORKERS = 8;
 
+/** Fewest cases a share takes: a new worker runs its first cases unoptimised (about two cases' time). */
+const LEAST_CASES_PER_SHARE = 4;
+
 /**
  * Workers for a study on a machine of `cores` logical cores: a sweep whose every
  * case computes view factors (a moved shape, a tube row) takes one per core but
- * the page's, at most one per case; any other study one (its factors are computed once).
+ * the page's, with at least LEAST_CASES_PER_SHARE cases each; any other study one
+ * (its factors are computed once).
  */
 export function studyWorkerCount(request: StudyRequest, cores: number): number {
   if (request.kind !== 'sweep') return 1;
   const p = parseParameter(request.address);
   if (!p.ok || (p.value.kind !== 'shape' && p.value.kind !== 'row')) return 1;
-  return Math.max(1, Math.min(MAX_STUDY_WORKERS, Math.floor(cores) - 1, request.steps));
+  const byCases = Math.floor(request.steps / LEAST_CASES_PER_SHARE);
+  return Math.max(1, Math.min(MAX_STUDY_WORKERS, Math.floor(cores) - 1, byCases));
 }
 
 /** The failure a study reports when its worker breaks down. */
