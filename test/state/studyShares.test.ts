@@ -36,13 +36,16 @@ class FakeWorker implements StudyWorker {
   onmessage: ((event: MessageEvent<StudyReply>) => void) | null = null;
   onerror: ((event: ErrorEvent) => void) | null = null;
   terminated = false;
+  /** `delay`: ms before it starts (a slow share). */
+  constructor(private readonly delay = 0) {}
   postMessage(request: StudyRequest): void {
     setTimeout(() => {
+      if (this.terminated) return;
       const post = (data: StudyReply) => {
         if (!this.terminated) this.onmessage?.({ data } as MessageEvent<StudyReply>);
       };
       post(runStudy(request, (done, total) => post({ kind: 'progress', done, total })));
-    }, 0);
+    }, this.delay);
   }
   terminate(): void {
     this.terminated = true;
@@ -108,5 +111,25 @@ describe('a sweep in shares', () => {
     ).stop();
     await new Promise((resolve) => setTimeout(resolve, 50));
     expect(stopped).toEqual([]);
+  });
+
+  it('refuses as soon as no share can still refuse a lower value, without waiting for the slow ones', async () => {
+    // x = 2.6 (the first value) pushes the ware stack through the wall: share 0 refuses at once;
+    // share 1 (values 2 and 4) is slow and cannot refuse a lower value.
+    const request = sweep(2.6, 1.0, 5);
+    const whole = runStudy(request);
+    expect(whole.kind).toBe('failed');
+    const replies: StudyReply[] = [];
+    let made = 0;
+    startShares(
+      request,
+      2,
+      (r) => replies.push(r),
+      () => new FakeWorker(made++ === 0 ? 0 : 2000),
+    );
+    await new Promise((resolve) => setTimeout(resolve, 300));
+    expect(replies.filter((r) => r.kind !== 'progress')).toEqual([
+      { kind: 'failed', message: (whole as { message: string }).message },
+    ]);
   });
 });

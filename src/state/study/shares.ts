@@ -78,7 +78,9 @@ export interface StudyWorker {
 
 /**
  * Run a sweep as `count` shares, one worker each (`makeWorker`): progress is the
- * cases done over all shares; one final reply once every share has answered.
+ * cases done over all shares; one final reply once every share has answered, or
+ * as soon as a case could not be solved and no share can still refuse a lower one
+ * (share q's next case is q + done * count), as one worker's sweep stops there.
  */
 export function startShares(
   request: SweepRequest,
@@ -88,11 +90,19 @@ export function startShares(
 ): { stop(): void } {
   const workers = Array.from({ length: count }, makeWorker);
   const done = new Array<number>(count).fill(0);
+  const answered = new Array<boolean>(count).fill(false);
   const finals: StudyReply[] = [];
+  let lowestRefused = Infinity;
   let over = false;
   const stop = () => {
     over = true;
     for (const w of workers) w.terminate();
+  };
+  // Without a refusal, every share must answer; with one, every share must be past it.
+  const settle = () => {
+    if (!answered.every((a, q) => a || q + done[q] * count > lowestRefused)) return;
+    stop();
+    onReply(joinShares(request, finals));
   };
   workers.forEach((worker, part) => {
     worker.onmessage = (event) => {
@@ -101,12 +111,13 @@ export function startShares(
       if (reply.kind === 'progress') {
         done[part] = reply.done;
         onReply({ kind: 'progress', done: done.reduce((a, b) => a + b, 0), total: request.steps });
+        settle();
         return;
       }
       finals.push(reply);
-      if (finals.length < count) return;
-      stop();
-      onReply(joinShares(request, finals));
+      answered[part] = true;
+      if (reply.kind === 'failed') lowestRefused = Math.min(lowestRefused, reply.index ?? -1);
+      settle();
     };
     worker.onerror = (event) => {
       if (over) return;
