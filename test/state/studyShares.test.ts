@@ -132,4 +132,20 @@ describe('a sweep in shares', () => {
       { kind: 'failed', message: (whole as { message: string }).message },
     ]);
   });
+
+  it('says which part went missing when the shares do not come back whole', () => {
+    const request = sweep(1.2, 1.8, 4);
+    const half = runStudy({ ...request, share: { part: 0, of: 2 } });
+    expect(joinShares(request, [half])).toEqual({
+      kind: 'failed',
+      message: 'the study stopped with an internal error (case 2 of the sweep is missing)',
+    });
+    expect(joinShares(request, [])).toEqual({
+      kind: 'failed',
+      message: 'the study stopped with an internal error (no share of the sweep came back)',
+    });
+    expect(joinShares(request, [{ kind: 'progress', done: 1, total: 4 }])).toMatchObject({
+      message: "the study stopped with an internal error (a share of the sweep replied 'progress')",
+    });
+  });
 });

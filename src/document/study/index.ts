@@ -30,6 +30,7 @@ export {
 } from './sweep';
 export { DEFAULT_SCAN_STEPS, solveForTarget, targetQuantity, type SolveForOutcome } from './solveFor';
 export { sweepCsv, sweepRows, type SweepRowSource } from './tables';
+export { studyFaultMessage, type StudyFault } from './faults';
 export { sensitivityTable, type SensitivityRow, type SensitivityTableOutcome } from './sensitivity';
 export {
   MAX_RANGES,

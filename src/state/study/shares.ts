@@ -2,7 +2,7 @@
 // so its cases are shared over several workers (case k to share k % n), and the
 // shares are put back together here: the same table, CSV and first failure as one
 // worker's sweep, number for number (each case is solved exactly as in the whole).
-import { parseParameter, sweepCsv } from '../../document/study';
+import { parseParameter, studyFaultMessage, sweepCsv, type StudyFault } from '../../document/study';
 import type { StudyReply, StudyRequest, SweepShareTable } from './run';
 
 type SweepRequest = Extract<StudyRequest, { kind: 'sweep' }>;
@@ -27,9 +27,9 @@ export function studyWorkerCount(request: StudyRequest, cores: number): number {
   return Math.max(1, Math.min(MAX_STUDY_WORKERS, Math.floor(cores) - 1, byCases));
 }
 
-/** The failure a study reports when its worker breaks down. */
-export function workerFailure(detail: string): StudyReply {
-  return { kind: 'failed', message: `the study stopped with an internal error (${detail || 'worker failed'})` };
+/** The reply of a study that broke down inside (worded in document/study/faults.ts). */
+export function workerFailure(fault: StudyFault): StudyReply {
+  return { kind: 'failed', message: studyFaultMessage(fault) };
 }
 
 /**
@@ -44,11 +44,11 @@ export function joinShares(request: SweepRequest, finals: readonly StudyReply[])
       const index = reply.index ?? -1;
       if (failure === null || index < failure.index) failure = { message: reply.message, index };
     } else if (reply.kind === 'sweepShare') tables.push(reply.table);
-    else return workerFailure(`a share of the sweep replied '${reply.kind}'`);
+    else return workerFailure({ kind: 'unexpectedReply', reply: reply.kind });
   }
   if (failure) return { kind: 'failed', message: failure.message };
   const parsed = parseParameter(request.address);
-  if (!parsed.ok || tables.length === 0) return workerFailure('no share of the sweep came back');
+  if (!parsed.ok || tables.length === 0) return workerFailure({ kind: 'noShare' });
   const { label, unit, names, values } = tables[0];
   const netHeat: number[][] = new Array<number[]>(values.length);
   const temperature: number[][] = new Array<number[]>(values.length);
@@ -57,8 +57,7 @@ export function joinShares(request: SweepRequest, finals: readonly StudyReply[])
       netHeat[k] = t.netHeat[q];
       temperature[k] = t.temperature[q];
     });
-  for (let k = 0; k < values.length; k++)
-    if (!netHeat[k]) return workerFailure(`case ${k + 1} of the sweep is missing`);
+  for (let k = 0; k < values.length; k++) if (!netHeat[k]) return workerFailure({ kind: 'missingCase', index: k });
   const rows = values.map((value, k) => ({
     value,
     names,
@@ -122,7 +121,7 @@ export function startShares(
     worker.onerror = (event) => {
       if (over) return;
       stop();
-      onReply(workerFailure(event.message));
+      onReply(workerFailure({ kind: 'workerFailed', detail: event.message }));
     };
     worker.postMessage({ ...request, share: { part, of: count } });
   });

@@ -31,7 +31,7 @@ export function startStudy(request: StudyRequest, onReply: (reply: StudyReply) =
     if (over) return;
     over = true;
     worker.terminate();
-    onReply(workerFailure(event.message));
+    onReply(workerFailure({ kind: 'workerFailed', detail: event.message }));
   };
   worker.postMessage(request);
   return {
