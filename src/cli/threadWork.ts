@@ -5,7 +5,7 @@
 // unit of the one before: blocks of surfaces are summed from the matrix, their
 // reciprocity residuals found, and their rows divided into factors. The numbers do
 // not depend on which thread took which unit (core pairRows.ts, core surfaces.ts).
-import { buildEdges } from '../core/edges';
+import { buildEdges, type EdgeSet } from '../core/edges';
 import { EdgePairs, fillRows, rowPairCount } from '../core/pairRows';
 import type { CircleInput, PolygonInput } from '../core/scene';
 import { SurfaceRowSummer, type SurfaceRowSums } from '../core/surfaceRows';
@@ -75,10 +75,16 @@ export function rowChunks(n: number, threads: number): Int32Array {
  * rows go straight into the shared matrix, or as surface sums to `onSums`; with the
  * matrix the surface stages follow. `between` runs after every unit and every 50 ms
  * of waiting (the main thread takes in the workers' sums and failures there).
+ * `edges`: the job's edges when the caller has built them already (the main thread).
  */
-export function workChunks(job: ThreadJob, onSums: (sums: SurfaceRowSums) => void, between: () => void): void {
+export function workChunks(
+  job: ThreadJob,
+  onSums: (sums: SurfaceRowSums) => void,
+  between: () => void,
+  edges: EdgeSet = buildEdges(job.polygons, job.circles),
+): void {
   const control = new Int32Array(job.control);
-  const pairs = new EdgePairs(buildEdges(job.polygons, job.circles));
+  const pairs = new EdgePairs(edges);
   const F = job.matrix ? new Float64Array(job.matrix) : null;
   const summer = F ? null : new SurfaceRowSummer(pairs, job.edgeSurface, job.surfaceCount);
   const chunks = job.chunkStart.length - 1;

@@ -109,7 +109,7 @@ export function threadedViewFactors(
     const takeIn = () => {
       for (const w of workers) drain(w.port, job.id, acc);
     };
-    if (!options.workersOnly) workChunks(job, (sums) => acc?.add(sums), takeIn);
+    if (!options.workersOnly) workChunks(job, (sums) => acc?.add(sums), takeIn, edges);
     waitForChunks(job, doneSlot(ROWS), chunkStart.length - 1, takeIn);
     if (!summed) waitForChunks(job, doneSlot(FACTORS), surfaceStart.length - 1, takeIn);
     takeIn();

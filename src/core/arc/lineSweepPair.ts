@@ -69,8 +69,7 @@ export class LineSweepPair {
       const r = A.r[c] * (1 + SLACK) + m;
       const x = A.cx[c],
         y = A.cy[c];
-      if (em.isArc ? !apart(em, x, y, r) : false) return -1;
-      if (tg.isArc ? !apart(tg, x, y, r) : false) return -1;
+      if ((em.isArc && !apart(em, x, y, r)) || (tg.isArc && !apart(tg, x, y, r))) return -1;
       const di = em.isArc ? Infinity : sideDistance(em.ax, em.ay, em.bx, em.by, x, y),
         dj = tg.isArc ? Infinity : sideDistance(tg.ax, tg.ay, tg.bx, tg.by, x, y);
       if (di > r && dj > r) kept.push(c);

@@ -9,7 +9,6 @@ import {
   parameterUnit,
   parseParameter,
   parseTarget,
-  runSweep,
   sensitivityTable,
   solveForTarget,
   sweepCsv,
@@ -112,33 +111,26 @@ export function runStudy(
   const problem = parameterProblem(sketch, names, p);
   if (problem) return { kind: 'failed', message: problem };
   const unit = parameterUnit(p, sketch.units);
-  if (request.kind === 'sweep' && request.share) {
-    const out = sweepShare(sketch, p, request.from, request.to, request.steps, request.share, { onProgress });
-    if (!out.ok) return { kind: 'failed', message: out.message, index: out.index };
-    const table: SweepShareTable = {
-      label: describeParameter(p),
-      unit,
-      names,
-      values: out.values,
-      indices: out.indices,
-      netHeat: out.runs.map((r) => Array.from(r.result.netHeat)),
-      temperature: out.runs.map((r) => Array.from(r.result.temperature)),
-    };
-    return { kind: 'sweepShare', table };
-  }
   if (request.kind === 'sweep') {
-    const out = runSweep(sketch, p, request.from, request.to, request.steps, { onProgress });
-    if (!out.ok) return { kind: 'failed', message: out.message };
-    const table: SweepTable = {
+    // A whole sweep is the one share of one; a share also says which cases it holds.
+    const { share } = request;
+    const out = sweepShare(sketch, p, request.from, request.to, request.steps, share ?? { part: 0, of: 1 }, {
+      onProgress,
+    });
+    if (!out.ok)
+      return share
+        ? { kind: 'failed', message: out.message, index: out.index }
+        : { kind: 'failed', message: out.message };
+    const rows = {
       label: describeParameter(p),
       unit,
       names,
       values: out.values,
       netHeat: out.runs.map((r) => Array.from(r.result.netHeat)),
       temperature: out.runs.map((r) => Array.from(r.result.temperature)),
-      csv: sweepCsv(p, sketch.units, out.runs),
     };
-    return { kind: 'sweep', table };
+    if (share) return { kind: 'sweepShare', table: { ...rows, indices: out.indices } };
+    return { kind: 'sweep', table: { ...rows, csv: sweepCsv(p, sketch.units, out.runs) } };
   }
   const target = parseTarget(`${request.surface}.${request.quantity}=${request.target}`);
   if (!target.ok) return { kind: 'failed', message: target.message };
