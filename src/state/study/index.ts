@@ -10,6 +10,7 @@ export {
   type SweepTable,
 } from './run';
 export { startStudy, type RunningStudy } from './start';
+export { withKnownFactors } from './pipelineFactors';
 export { QUANTITIES, QUANTITY_UNIT, type Quantity } from '../../document/study';
 export {
   resetStudies,

@@ -16,13 +16,21 @@ import {
   targetQuantity,
   type Quantity,
   type SweepShare,
+  type ViewFactorsOf,
 } from '../../document/study';
 import { toScene } from '../../document';
 import { computeViewFactors } from '../../core/viewFactors';
 import { solveSketchExchange } from '../../document/exchangeInput';
 import type { CheckedSketch } from '../documentApi';
+import type { ViewFactorResult } from '../../core/scene';
+import { knownFactorsOf } from './known';
 
-export type StudyRequest =
+/**
+ * A study to run. `factors`: the surface view factors of `sketch`'s geometry when
+ * the results pipeline holds them (known.ts); cases with that geometry use them
+ * instead of computing them again.
+ */
+export type StudyRequest = (
   | {
       kind: 'sweep';
       sketch: CheckedSketch;
@@ -45,7 +53,8 @@ export type StudyRequest =
       surface: string;
       quantity: Quantity;
       target: number;
-    };
+    }
+) & { factors?: ViewFactorResult };
 
 /** One sweep, ready for a plot, a table and a CSV file. */
 export interface SweepTable {
@@ -103,7 +112,8 @@ export function runStudy(
   onProgress: (done: number, total: number) => void = () => {},
 ): StudyReply {
   const { sketch } = request;
-  if (request.kind === 'effects') return effects(sketch);
+  const viewFactors = request.factors ? knownFactorsOf(toScene(sketch).scene, request.factors) : computeViewFactors;
+  if (request.kind === 'effects') return effects(sketch, viewFactors);
   const parsed = parseParameter(request.address);
   if (!parsed.ok) return { kind: 'failed', message: parsed.message };
   const p = parsed.value;
@@ -116,6 +126,7 @@ export function runStudy(
     const { share } = request;
     const out = sweepShare(sketch, p, request.from, request.to, request.steps, share ?? { part: 0, of: 1 }, {
       onProgress,
+      viewFactors,
     });
     if (!out.ok)
       return share
@@ -134,7 +145,7 @@ export function runStudy(
   }
   const target = parseTarget(`${request.surface}.${request.quantity}=${request.target}`);
   if (!target.ok) return { kind: 'failed', message: target.message };
-  const out = solveForTarget(sketch, names, p, request.from, request.to, target.value, request.steps);
+  const out = solveForTarget(sketch, names, p, request.from, request.to, target.value, request.steps, viewFactors);
   if (!out.ok) return { kind: 'failed', message: out.message };
   const got = targetQuantity(out.run, target.value);
   const withUnit = (x: number, u: string) => (u ? `${shown(x)} ${u}` : shown(x));
@@ -142,9 +153,9 @@ export function runStudy(
   return { kind: 'solve', answer: { value: out.value, values: out.values, summary } };
 }
 
-function effects(sketch: CheckedSketch): StudyReply {
+function effects(sketch: CheckedSketch, viewFactors: ViewFactorsOf): StudyReply {
   const { scene, surfaceNames: names } = toScene(sketch);
-  const factors = computeViewFactors(scene);
+  const factors = viewFactors(scene);
   const solved = solveSketchExchange(sketch, names, factors);
   if (!solved.ok) return { kind: 'failed', message: solved.message };
   const table = sensitivityTable(names, solved.input, solved.result);

@@ -42,8 +42,11 @@ export function startStudy(request: StudyRequest, onReply: (reply: StudyReply) =
   };
 }
 
-function startInline(request: StudyRequest, onReply: (reply: StudyReply) => void): RunningStudy {
+function startInline(sent: StudyRequest, onReply: (reply: StudyReply) => void): RunningStudy {
   let stopped = false;
+  // A copy, as a worker gets: the view factors it may carry are the pipeline's, whose
+  // arrays are reused once the pipeline moves on (results/derive.ts, spares).
+  const request = structuredClone(sent);
   // Let the page draw "running" before the work starts.
   const timer = setTimeout(() => {
     if (stopped) return;
