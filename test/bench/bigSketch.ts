@@ -94,3 +94,16 @@ export function deepBankSketch(): SketchFile {
     ],
   };
 }
+
+/** The 1012-edge sketch (24 surfaces) with a hot floor, cooler tubes and reradiating other walls. */
+export function studySketch(): SketchFile {
+  const file = bigSketch(false);
+  const surfaces: NonNullable<SketchFile['surfaces']> = {
+    floor: { emissivity: 0.85, temperature: 1400 },
+    roof: { emissivity: 0.7, adiabatic: true },
+    left: { emissivity: 0.7, adiabatic: true },
+    right: { emissivity: 0.7, adiabatic: true },
+  };
+  for (let t = 1; t <= 20; t++) surfaces[`tube ${t}`] = { emissivity: 0.8, temperature: 600 + 10 * t };
+  return { ...file, surfaces };
+}

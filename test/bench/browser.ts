@@ -5,12 +5,14 @@
 // net-heat table (which must post no view-factor job).
 // Then opens a 1012-edge sketch and drags a tube for a few seconds, the pointer
 // moving on every animation frame, counting table updates and canvas frames per second.
+// Last, a study's start: "Which input matters" on the 1012-edge sketch (browserStudy.ts).
 // Prints min, median and p90; the targets are reported with a met / NOT met verdict, never asserted.
 import type { Page } from 'playwright-core';
 import { screenOf, startApp, waitReady, type TestWindow } from '../e2e/harness';
 import { bigSketch, dragSizeSketch, followDrag, openSketch } from './browserDrag';
 import { deepBankSketch, furnaceSketch } from './bigSketch';
 import { furnaceTubeCentre } from './scenes';
+import { studyStartTimes } from './browserStudy';
 
 type LatencyWindow = TestWindow & { __lat: { lastEvent: number; samples: number[]; changes: number } };
 
@@ -157,6 +159,11 @@ try {
   console.log(
     `deep tube bank, four staggered rows of 25 exact tubes (104 edges), a tube of the second row dragged ${b.seconds.toFixed(1)} s, pointer moves ${b.movesPerSecond.toFixed(0)}/s: ` +
       `table updates ${b.tablesPerSecond.toFixed(1)}/s; frames ${b.framesPerSecond.toFixed(0)}/s, of which showing a new position ${b.followPerSecond.toFixed(0)}/s`,
+  );
+  // A study's start on the 1012-edge sketch: it takes the view factors on screen (information).
+  const study = await studyStartTimes(page, 5);
+  console.log(
+    `1012-edge sketch (24 surfaces), "Which input matters": click -> table ${stats(study)} runs (the view factors taken from the results on screen)`,
   );
 } finally {
   await app.close();

@@ -10,6 +10,9 @@ import { checkSketchGeometry } from '../../src/core/sketchChecks';
 import { emptyOval } from './floor';
 import { hardScene } from './hardScenes';
 import { bankScene, furnaceScene, tubeScene } from './scenes';
+import { studySketch } from './bigSketch';
+import { restore } from '../../src/document';
+import { runStudy } from '../../src/state/study';
 
 function problems(scene: SceneInput): unknown[] {
   const polygons = scene.polygons.map((polygon, shape) => ({ shape, polygon }));
@@ -41,5 +44,15 @@ describe('bench scenes are valid sketches', () => {
     const circles = scene.circles!.map((c) => ({ ...c }));
     circles[circles.length - 1].cx = 12.06;
     expect(problems({ ...scene, circles })).not.toEqual([]);
+  });
+});
+
+describe('the study bench sketch', () => {
+  it('is a valid file whose sensitivity the app can work out (the browser bench times it)', () => {
+    const read = restore(studySketch());
+    expect(read.ok).toBe(true);
+    if (!read.ok) return;
+    const reply = runStudy({ kind: 'effects', sketch: read.sketch });
+    expect(reply.kind).toBe('effects');
   });
 });
