@@ -7,6 +7,7 @@ import { RESULTS_CAUTION } from '../document/exchange/cautions';
 import type { Sketch } from '../document';
 import { toScene } from '../document';
 import {
+  caseFactors,
   MAX_STUDY_STEPS,
   describeParameter,
   parameterProblem,
@@ -22,7 +23,7 @@ import {
 import { parseArgs, type Format, type OwnOption } from './args';
 import type { CliIO } from './io';
 import { readSketchFile } from './readSketch';
-import { threadedViewFactors, threadsOption, THREADS_HELP } from './threads';
+import { threadedViewFactors, threadsFor, threadsOption, THREADS_HELP } from './threads';
 import { displayName, usageError as reportUsage } from './terminalText';
 
 export const SWEEP_USAGE =
@@ -103,9 +104,15 @@ export function studyOptions(into: StudyArgs, withTarget: boolean): OwnOption {
   };
 }
 
-/** Each case's view factors over the threads asked for (or the default of threads.ts). */
+/**
+ * Each case's view factors over the threads asked for (or the default of threads.ts);
+ * in-process, each case keeps the pairs its moved shapes cannot change since the
+ * case before (caseFactors). The same bits either way.
+ */
 export function studyViewFactors(study: StudyArgs): ViewFactorsOf {
-  return (scene) => threadedViewFactors(scene, study.threads);
+  const inProcess = caseFactors();
+  return (scene) =>
+    threadsFor(scene, study.threads) <= 1 ? inProcess(scene) : threadedViewFactors(scene, study.threads);
 }
 
 /** The problem with missing study options, or null. */

@@ -57,6 +57,18 @@ export function parseThreads(text: string | undefined): number | string {
 }
 
 /**
+ * Threads the view factors of `scene` run on: `threads` when given, else one per
+ * core from THREADS_FROM_PAIRS pairs on and 1 (in-process) below.
+ */
+export function threadsFor(scene: SceneInput, threads?: number): number {
+  if (threads !== undefined) return threads;
+  let n = 0; // edges: polygon edges, then arcs
+  for (const p of scene.polygons) n += p.points.length >> 1;
+  for (const c of scene.circles ?? []) n += c.arcs;
+  return (n * (n + 1)) / 2 >= THREADS_FROM_PAIRS ? availableParallelism() : 1;
+}
+
+/**
  * Surface view factors of a scene (as core computeViewFactors), with the pairs
  * shared over `threads` threads (the main thread one of them). `threads` undefined:
  * one per core for sketches of at least THREADS_FROM_PAIRS pairs, else in-process.
@@ -71,8 +83,7 @@ export function threadedViewFactors(
 ): ViewFactorResult {
   const edges = buildEdges(scene.polygons, scene.circles);
   const n = totalEdgeCount(edges);
-  const pairs = (n * (n + 1)) / 2;
-  const count = threads ?? (pairs >= THREADS_FROM_PAIRS ? availableParallelism() : 1);
+  const count = threadsFor(scene, threads);
   if (scene.edgeSurface.length !== n)
     throw new Error(`edgeSurface has ${scene.edgeSurface.length} entries for ${n} edges`);
   const summed = options.sumToSurfaces === true || !edgeMatrixFits(n);

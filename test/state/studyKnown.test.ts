@@ -57,9 +57,9 @@ describe('sameScene and knownFactorsOf', () => {
     expect(sameScene(withCircle(0.1), withCircle(0.1000001))).toBe(false);
   });
 
-  it('gives the known factors for their own scene only, and computes any other', () => {
+  it('gives the known factors for their own scene only, and asks the fallback for any other', () => {
     const known = computeViewFactors(base);
-    const of = knownFactorsOf(base, known);
+    const of = knownFactorsOf(base, known, computeViewFactors);
     expect(of(toScene(checked(kiln())).scene)).toBe(known);
     const moved = toScene(checked(movedKiln(0.2))).scene;
     const got = of(moved);

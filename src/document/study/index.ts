@@ -18,7 +18,7 @@ export {
   type StudyTarget,
 } from './parameter';
 export { parameterValue, withParameterValue } from './apply';
-export { editedSketch, studyRunner, type StudyRun, type StudyRunOutcome, type ViewFactorsOf } from './run';
+export { caseFactors, editedSketch, studyRunner, type StudyRun, type StudyRunOutcome, type ViewFactorsOf } from './run';
 export {
   MAX_STUDY_STEPS,
   rangeProblem,

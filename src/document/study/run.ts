@@ -4,7 +4,7 @@
 // studies keep the view factors of the first case (the geometry is the same);
 // position and tube-row studies compute them again for every value.
 import type { SceneInput, ViewFactorResult } from '../../core/scene';
-import { computeViewFactors } from '../../core/viewFactors';
+import { KeptViewFactors } from '../../core/reuse/keptViewFactors';
 import { solveSketchExchange } from '../exchangeInput';
 import { exchangeJson } from '../exchangeJson';
 import { restore } from '../restore';
@@ -43,11 +43,21 @@ export function editedSketch(
 /** Surface view factors of a scene: core computeViewFactors, or the command line's over worker threads (same bits). */
 export type ViewFactorsOf = (scene: SceneInput) => ViewFactorResult;
 
+/**
+ * View factors for the cases of one study, one after another: each case computes
+ * only the pairs its moved shapes may change since the case before and keeps the
+ * rest (core reuse/keptViewFactors.ts), the same bits as computing them all.
+ */
+export function caseFactors(): ViewFactorsOf {
+  const kept = new KeptViewFactors();
+  return (scene) => kept.compute(scene);
+}
+
 /** A function that solves the case at one value of the parameter, reusing view factors where the geometry is fixed. */
 export function studyRunner(
   sketch: Sketch,
   p: StudyParameter,
-  viewFactors: ViewFactorsOf = computeViewFactors,
+  viewFactors: ViewFactorsOf = caseFactors(),
 ): (value: number) => StudyRunOutcome {
   const sameGeometry = p.kind !== 'shape' && p.kind !== 'row';
   let kept: { names: string[]; factors: ViewFactorResult } | undefined;

@@ -5,7 +5,6 @@
 // Only for the geometry they were computed for: a case whose scene differs (a
 // moved shape or tube row) computes its own.
 import type { SceneInput, ViewFactorResult } from '../../core/scene';
-import { computeViewFactors } from '../../core/viewFactors';
 import type { ViewFactorsOf } from '../../document/study';
 
 /** Equal, entry by entry (numbers exactly). */
@@ -35,7 +34,7 @@ export function sameScene(a: SceneInput, b: SceneInput): boolean {
   return true;
 }
 
-/** The view factors of a scene: `known` when it is `base` (the geometry they belong to), else core's. */
-export function knownFactorsOf(base: SceneInput, known: ViewFactorResult): ViewFactorsOf {
-  return (scene) => (sameScene(scene, base) ? known : computeViewFactors(scene));
+/** The view factors of a scene: `known` when it is `base` (the geometry they belong to), else `otherwise`'s. */
+export function knownFactorsOf(base: SceneInput, known: ViewFactorResult, otherwise: ViewFactorsOf): ViewFactorsOf {
+  return (scene) => (sameScene(scene, base) ? known : otherwise(scene));
 }

@@ -17,9 +17,9 @@ import {
   type Quantity,
   type SweepShare,
   type ViewFactorsOf,
+  caseFactors,
 } from '../../document/study';
 import { toScene } from '../../document';
-import { computeViewFactors } from '../../core/viewFactors';
 import { solveSketchExchange } from '../../document/exchangeInput';
 import type { CheckedSketch } from '../documentApi';
 import type { ViewFactorResult } from '../../core/scene';
@@ -112,7 +112,9 @@ export function runStudy(
   onProgress: (done: number, total: number) => void = () => {},
 ): StudyReply {
   const { sketch } = request;
-  const viewFactors = request.factors ? knownFactorsOf(toScene(sketch).scene, request.factors) : computeViewFactors;
+  // Cases one after another keep the pairs a moved shape cannot change (caseFactors).
+  const compute = caseFactors();
+  const viewFactors = request.factors ? knownFactorsOf(toScene(sketch).scene, request.factors, compute) : compute;
   if (request.kind === 'effects') return effects(sketch, viewFactors);
   const parsed = parseParameter(request.address);
   if (!parsed.ok) return { kind: 'failed', message: parsed.message };
