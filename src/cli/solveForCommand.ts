@@ -90,7 +90,7 @@ export function runSolveFor(args: string[], io: CliIO): number {
   }
   const { value, values, run } = outcome;
   if (format === 'json') {
-    io.out(`${JSON.stringify({ value, ...(values.length > 1 ? { values } : {}), run: run.json })}\n`);
+    io.out(`${JSON.stringify({ value, ...(values.length > 1 ? { values } : {}), run: run.json() })}\n`);
     return 0;
   }
   const unit = parameterUnit(p, read.sketch.units);

@@ -15,8 +15,10 @@ import {
   parseParameter,
   runSweep,
   sweepCsv,
+  sweepRowOf,
   sweepRows,
   type StudyParameter,
+  type SweepRowSource,
   type StudyRun,
   type ViewFactorsOf,
 } from '../document/study';
@@ -157,15 +159,33 @@ export function runSweepCommand(args: string[], io: CliIO): number {
   const p = study.vary!;
   const read = studySketch('sweep', file, p, io);
   if (!read) return 1;
-  const outcome = runSweep(read.sketch, p, study.from!, study.to!, study.steps!, {
-    viewFactors: studyViewFactors(study),
-  });
-  if (!outcome.ok) {
-    io.err(`sweep: ${file}: ${outcome.message}\n`);
+  const range = [read.sketch, p, study.from!, study.to!, study.steps!] as const;
+  const viewFactors = studyViewFactors(study);
+  const failed = (message: string) => {
+    io.err(`sweep: ${file}: ${message}\n`);
     return 1;
+  };
+  // --json prints every case's whole exchange; the table and CSV keep only what their rows need.
+  if (format === 'json') {
+    const outcome = runSweep(...range, { viewFactors });
+    if (!outcome.ok) return failed(outcome.message);
+    io.out(sweepJson(outcome.values, outcome.runs));
+    return 0;
   }
-  io.out(sweepOutput(format, file, read.sketch, p, outcome.values, outcome));
+  const outcome = runSweep(...range, { viewFactors, keep: sweepRowOf });
+  if (!outcome.ok) return failed(outcome.message);
+  io.out(sweepOutput(format, file, read.sketch, p, outcome.values, outcome.runs));
   return 0;
+}
+
+/**
+ * `{"values":[...],"runs":[...]}`, the text JSON.stringify gives for the whole
+ * object, made one run at a time: each run's object (its exchange matrix
+ * surfaces^2 numbers) is built, written and dropped before the next.
+ */
+function sweepJson(values: number[], runs: readonly StudyRun[]): string {
+  const parts = runs.map((r) => JSON.stringify(r.json()));
+  return `{"values":${JSON.stringify(values)},"runs":[${parts.join(',')}]}\n`;
 }
 
 function sweepOutput(
@@ -174,11 +194,10 @@ function sweepOutput(
   sketch: Sketch,
   p: StudyParameter,
   values: number[],
-  outcome: { runs: readonly StudyRun[] },
+  runs: readonly SweepRowSource[],
 ): string {
-  if (format === 'json') return `${JSON.stringify({ values, runs: outcome.runs.map((r) => r.json) })}\n`;
-  if (format === 'csv') return sweepCsv(p, sketch.units, outcome.runs);
-  const rows = sweepRows(p, sketch.units, outcome.runs).map((row) =>
+  if (format === 'csv') return sweepCsv(p, sketch.units, runs);
+  const rows = sweepRows(p, sketch.units, runs).map((row) =>
     row.map((cell) => (typeof cell === 'number' ? String(Number(cell.toPrecision(6))) : displayName(cell, 40))),
   );
   const unit = parameterUnit(p, sketch.units);

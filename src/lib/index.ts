@@ -112,7 +112,7 @@ export function sweep(
   if (!parameter.ok) return parameter;
   const out = runSweep(sketch, parameter.p, from, to, steps);
   if (!out.ok) return out;
-  return { ok: true, values: out.values, runs: out.runs.map((r) => r.json) };
+  return { ok: true, values: out.values, runs: out.runs.map((r) => r.json()) };
 }
 
 /**
@@ -136,7 +136,7 @@ export function solveFor(
   const names = toScene(sketch).surfaceNames;
   const out = solveForTarget(sketch, names, parameter.p, from, to, t.value, steps);
   if (!out.ok) return { ok: false, message: out.message };
-  return { ok: true, value: out.value, values: out.values, run: out.run.json };
+  return { ok: true, value: out.value, values: out.values, run: out.run.json() };
 }
 
 /**

@@ -121,41 +121,36 @@ describe('sweep --json over convection inputs (file version 2)', () => {
 });
 
 describe('sweep --csv and the table', () => {
-  it('one row per value with every surface net heat and temperature, matching --json', () => {
-    const argv = [
-      'sweep',
-      'kiln.json',
-      '--vary',
-      'hearth.temperature',
-      '--from',
-      '1150',
-      '--to',
-      '1350',
-      '--steps',
-      '3',
-    ];
-    const csv = runCli({ 'kiln.json': kiln() }, ...argv, '--csv');
-    expect(csv.code).toBe(0);
-    const rows = Papa.parse<string[]>(csv.out.trim()).data;
-    const json = cliJson({ 'kiln.json': kiln() }, ...argv) as SweepJson;
-    const names = json.runs[0].surfaces.map((s) => s.name);
-    expect(rows[0]).toEqual([
-      "temperature of 'hearth' (K)",
-      ...names.flatMap((n) => [`${n}: net heat (W/m)`, `${n}: temperature (K)`]),
-    ]);
-    expect(rows).toHaveLength(4);
-    json.runs.forEach((run, k) => {
-      expect(Number(rows[k + 1][0])).toBe(json.values[k]);
-      run.surfaces.forEach((s, i) => {
-        expect(Number(rows[k + 1][1 + 2 * i])).toBe(s.netHeat);
-        expect(Number(rows[k + 1][2 + 2 * i])).toBe(s.temperature);
+  // The table and CSV keep only their rows of each case (sweepRowOf), --json the whole
+  // runs: the same numbers, for a property and for a position (new view factors each value).
+  const cases: [string, string, number, number][] = [
+    ['hearth.temperature', "temperature of 'hearth' (K)", 1150, 1350],
+    ['ware stack.2.x', "position x of the shape of 'ware stack.2' (m)", 0.8, 2.2],
+  ];
+  it.each(cases)(
+    '%s: one row per value with every surface net heat and temperature, matching --json',
+    (vary, label, from, to) => {
+      const argv = ['sweep', 'kiln.json', '--vary', vary, '--from', String(from), '--to', String(to), '--steps', '3'];
+      const csv = runCli({ 'kiln.json': kiln() }, ...argv, '--csv');
+      expect(csv.code).toBe(0);
+      const rows = Papa.parse<string[]>(csv.out.trim()).data;
+      const json = cliJson({ 'kiln.json': kiln() }, ...argv) as SweepJson;
+      const names = json.runs[0].surfaces.map((s) => s.name);
+      expect(rows[0]).toEqual([label, ...names.flatMap((n) => [`${n}: net heat (W/m)`, `${n}: temperature (K)`])]);
+      expect(rows).toHaveLength(4);
+      json.runs.forEach((run, k) => {
+        expect(Number(rows[k + 1][0])).toBe(json.values[k]);
+        run.surfaces.forEach((s, i) => {
+          expect(Number(rows[k + 1][1 + 2 * i])).toBe(s.netHeat);
+          expect(Number(rows[k + 1][2 + 2 * i])).toBe(s.temperature);
+        });
       });
-    });
-    const table = runCli({ 'kiln.json': kiln() }, ...argv);
-    expect(table.code).toBe(0);
-    expect(table.out).toMatch(/Sweep of temperature of 'hearth' \(K\)/);
-    expect(table.out).toMatch(/licensed engineering practice/);
-  });
+      const table = runCli({ 'kiln.json': kiln() }, ...argv);
+      expect(table.code).toBe(0);
+      expect(table.out).toContain(`Sweep of ${label}`);
+      expect(table.out).toMatch(/licensed engineering practice/);
+    },
+  );
 });
 
 describe('sweep refusals', () => {

@@ -29,7 +29,7 @@ export {
   type SweepShareOutcome,
 } from './sweep';
 export { DEFAULT_SCAN_STEPS, solveForTarget, targetQuantity, type SolveForOutcome } from './solveFor';
-export { sweepCsv, sweepRows, type SweepRowSource } from './tables';
+export { sweepCsv, sweepRowOf, sweepRows, type SweepRowSource } from './tables';
 export { studyFaultMessage, type StudyFault } from './faults';
 export { sensitivityTable, type SensitivityRow, type SensitivityTableOutcome } from './sensitivity';
 export {

@@ -15,16 +15,21 @@ import { describeParameter, parameterUnit, withUnit, type StudyParameter } from 
 
 type Solved = Extract<ReturnType<typeof solveSketchExchange>, { ok: true }>;
 
-/** One solved case: the checked edited sketch, its surfaces in matrix order, view factors and exchange (SI). */
+/**
+ * One solved case: the checked edited sketch, its surfaces in matrix order and
+ * exchange (SI). Its view factors are not kept (surfaces^2 numbers per case: a
+ * long sweep of a sketch of many surfaces held gigabytes), only their lengths.
+ */
 export interface StudyRun {
   value: number;
   sketch: Sketch;
   names: string[];
-  factors: ViewFactorResult;
+  /** Surface lengths, sketch units. */
+  surfaceLength: Float64Array;
   result: Solved['result'];
   conditions: Solved['input']['conditions'];
-  /** Exactly what `exchange --json` prints for the edited file. */
-  json: Record<string, unknown>;
+  /** Exactly what `exchange --json` prints for the edited file; made when asked (its exchange matrix is surfaces^2 numbers). */
+  json(): Record<string, unknown>;
 }
 
 export type StudyRunOutcome = { ok: true; run: StudyRun } | { ok: false; message: string };
@@ -83,10 +88,18 @@ export function studyRunner(
     const outcome = solveSketchExchange(edited.sketch, names, factors);
     if (!outcome.ok) return at(value, outcome.message);
     const { result } = outcome;
-    const json = exchangeJson({ names, factors, result });
+    const { surfaceLength } = factors; // the run keeps the lengths, not the factors
     return {
       ok: true,
-      run: { value, sketch: edited.sketch, names, factors, result, conditions: outcome.input.conditions, json },
+      run: {
+        value,
+        sketch: edited.sketch,
+        names,
+        surfaceLength,
+        result,
+        conditions: outcome.input.conditions,
+        json: () => exchangeJson({ names, factors: { surfaceLength }, result }),
+      },
     };
   };
 }

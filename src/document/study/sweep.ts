@@ -17,7 +17,7 @@ export function rangeProblem(from: number, to: number, steps: number, least = 2)
   return null;
 }
 
-export type SweepOutcome = { ok: true; values: number[]; runs: StudyRun[] } | { ok: false; message: string };
+export type SweepOutcome<R = StudyRun> = { ok: true; values: number[]; runs: R[] } | { ok: false; message: string };
 
 /** Which cases of a sweep one worker takes: case k (from 0) when k % of === part. */
 export interface SweepShare {
@@ -25,16 +25,22 @@ export interface SweepShare {
   of: number;
 }
 
-export type SweepShareOutcome =
-  | { ok: true; values: number[]; indices: number[]; runs: StudyRun[] }
+export type SweepShareOutcome<R = StudyRun> =
+  | { ok: true; values: number[]; indices: number[]; runs: R[] }
   /** `index`: the case that could not be solved (-1: the range itself was refused). */
   | { ok: false; message: string; index: number };
 
 /** What a sweep may be told as it goes (see runSweep). */
-export interface SweepHooks {
+export interface SweepHooks<R = StudyRun> {
   onProgress?: (done: number, total: number) => void;
   stopped?: () => boolean;
   viewFactors?: ViewFactorsOf;
+  /**
+   * What to keep of each case (default: the whole run). A table needs a few numbers
+   * per surface, while a run holds the surfaces^2 exchange matrix: a long sweep of
+   * many surfaces that keeps whole runs holds gigabytes.
+   */
+  keep?: (run: StudyRun) => R;
 }
 
 /**
@@ -42,16 +48,17 @@ export interface SweepHooks {
  * included; units of the parameter). The first case that cannot be solved ends
  * the sweep with its message. `onProgress(done, total)` is told after each case;
  * `stopped()` returning true ends it early with the message 'stopped';
- * `viewFactors` computes each case's factors (default: core, one thread).
+ * `viewFactors` computes each case's factors (default: caseFactors); `keep`
+ * says what to keep of each case (default: the whole run).
  */
-export function runSweep(
+export function runSweep<R = StudyRun>(
   sketch: Sketch,
   p: StudyParameter,
   from: number,
   to: number,
   steps: number,
-  hooks: SweepHooks = {},
-): SweepOutcome {
+  hooks: SweepHooks<R> = {},
+): SweepOutcome<R> {
   const out = sweepShare(sketch, p, from, to, steps, { part: 0, of: 1 }, hooks);
   return out.ok ? { ok: true, values: out.values, runs: out.runs } : { ok: false, message: out.message };
 }
@@ -62,27 +69,28 @@ export function runSweep(
  * case that cannot be solved ends the share with its index, so that of all shares
  * the lowest index gives the whole sweep's message. Progress counts this share's cases.
  */
-export function sweepShare(
+export function sweepShare<R = StudyRun>(
   sketch: Sketch,
   p: StudyParameter,
   from: number,
   to: number,
   steps: number,
   share: SweepShare,
-  hooks: SweepHooks = {},
-): SweepShareOutcome {
+  hooks: SweepHooks<R> = {},
+): SweepShareOutcome<R> {
   const problem = rangeProblem(from, to, steps);
   if (problem) return { ok: false, message: problem, index: -1 };
   const values = evenlySpaced(from, to, steps);
   const solve = studyRunner(sketch, p, hooks.viewFactors);
-  const runs: StudyRun[] = [],
+  const keep = hooks.keep ?? ((run: StudyRun) => run as unknown as R); // R is StudyRun without `keep`
+  const runs: R[] = [],
     indices: number[] = [];
   const total = Math.ceil((values.length - share.part) / share.of);
   for (let k = share.part; k < values.length; k += share.of) {
     if (hooks.stopped?.()) return { ok: false, message: 'stopped', index: k };
     const outcome = solve(values[k]);
     if (!outcome.ok) return { ok: false, message: outcome.message, index: k };
-    runs.push(outcome.run);
+    runs.push(keep(outcome.run));
     indices.push(k);
     hooks.onProgress?.(runs.length, total);
   }

@@ -12,6 +12,15 @@ export interface SweepRowSource {
   result: { netHeat: ArrayLike<number>; temperature: ArrayLike<number> };
 }
 
+/** What the rows need of a case, and no more (a whole run also holds its surfaces^2 exchange matrix). */
+export function sweepRowOf(run: SweepRowSource): SweepRowSource {
+  return {
+    value: run.value,
+    names: run.names,
+    result: { netHeat: run.result.netHeat, temperature: run.result.temperature },
+  };
+}
+
 /** Header and one row per run: the value, then net heat (W per metre of depth) and temperature (K) of each surface. */
 export function sweepRows(p: StudyParameter, units: Units, runs: readonly SweepRowSource[]): CsvCell[][] {
   const unit = parameterUnit(p, units);

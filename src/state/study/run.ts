@@ -18,6 +18,7 @@ import {
   type SweepShare,
   type ViewFactorsOf,
   caseFactors,
+  sweepRowOf,
 } from '../../document/study';
 import { toScene } from '../../document';
 import { solveSketchExchange } from '../../document/exchangeInput';
@@ -129,6 +130,7 @@ export function runStudy(
     const out = sweepShare(sketch, p, request.from, request.to, request.steps, share ?? { part: 0, of: 1 }, {
       onProgress,
       viewFactors,
+      keep: sweepRowOf, // a whole run holds its surfaces^2 exchange: thousands of cases of many surfaces held gigabytes
     });
     if (!out.ok)
       return share
