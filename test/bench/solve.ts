@@ -4,9 +4,11 @@
 // adiabatic, a third at a flux, a few black. Timed: build and factor the
 // radiosity system (with the condition estimate), solve, and the one step of
 // iterative refinement the exchange adds; then the whole exchange with its
-// results. For comparison, the general LU on a random matrix of the same size.
+// results, and the whole surface balance the app solves. For comparison, the
+// general LU on a random matrix of the same size.
 // Part of `npm run bench`; alone: `npx tsx test/bench/solve.ts [--quick]`.
 import { pathToFileURL } from 'node:url';
+import { solveBalance } from '../../src/core/balance';
 import { DenseLuSolver, solveExchange, type SurfaceCondition } from '../../src/core/exchange';
 import { RadiositySystem } from '../../src/core/exchange/radiositySystem';
 import { radiosityResidual } from '../../src/core/exchange/refine';
@@ -82,6 +84,15 @@ export function benchDenseSolve(quick: boolean): void {
   });
   console.log(
     `whole exchange, ${N} surfaces (the solve above, irradiation, the ${N} x ${N} exchange table, energy balance): min ${whole.min.toFixed(0)} ms, median ${whole.median.toFixed(0)} ms`,
+  );
+  // What the app and the command line solve: the whole surface balance. With only held,
+  // adiabatic and heat-flux surfaces it is linear and takes one system (core balance/linear.ts).
+  const balance = timeRuns(runs, () => {
+    const out = solveBalance(input, workspace);
+    if (!out.ok) throw new Error(`balance refused: ${out.code}`);
+  });
+  console.log(
+    `whole surface balance, ${N} surfaces, the same conditions (as the app and the command line solve it; linear: one system): min ${balance.min.toFixed(0)} ms, median ${balance.median.toFixed(0)} ms`,
   );
   // General LU with partial pivoting on a random matrix (systems without reciprocity).
   const s = seeded(12345);

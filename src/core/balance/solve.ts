@@ -21,6 +21,7 @@ import { checkCondition, checkConvection } from './check';
 import { backHeat } from './conditions';
 import { balanceNodes, nodeCoupling, nodeIrradiation } from './nodes';
 import { RadiosityNetwork } from './radiosity';
+import { isLinearBalance, solveLinearBalance } from './linear';
 import { balanceResult, type Solved } from './results';
 import type { BalanceInput, BalanceOutcome } from './types';
 
@@ -35,11 +36,22 @@ export const MAX_ITERATIONS = 100;
  * gasConvectionHeat + surroundingsNetHeat| / sum A_i J_i. Out-of-range input
  * and cases without a unique answer, or where Newton does not converge, come
  * back as an ExchangeFailure (a code, the surface, the number), never a wrong answer.
- * `workspace`: an n x n solver to reuse for the radiosity matrix.
+ * `workspace`: an n x n solver to reuse for the radiosity matrix. A balance
+ * linear in the radiosities (linear.ts: held, open, adiabatic and heat-flux
+ * surfaces, no convection) is solved as one system; `method: 'newton'` (tests)
+ * takes Newton for it too.
  */
-export function solveBalance(input: BalanceInput, workspace?: DenseLuSolver): BalanceOutcome {
+export function solveBalance(
+  input: BalanceInput,
+  workspace?: DenseLuSolver,
+  options: { method?: 'auto' | 'newton' } = {},
+): BalanceOutcome {
   const setup = prepare(input);
   if ('ok' in setup) return setup;
+  if (options.method !== 'newton' && isLinearBalance(input)) {
+    const linear = solveLinearBalance(input, workspace);
+    return 'ok' in linear ? linear : { ok: true, result: balanceResult(input, linear) };
+  }
   const { n, eps, Fs, Es, h, Tg, known } = setup;
   let network: RadiosityNetwork;
   try {
