@@ -8,7 +8,7 @@ import type { StudyReply, StudyRequest, SweepShareTable } from './run';
 type SweepRequest = Extract<StudyRequest, { kind: 'sweep' }>;
 
 /** Most workers one study takes. */
-const MAX_STUDY_WORKERS = 8;
+export const MAX_STUDY_WORKERS = 8;
 
 /** Fewest cases a share takes: a new worker runs its first cases unoptimised (about two cases' time). */
 const LEAST_CASES_PER_SHARE = 4;
@@ -80,12 +80,15 @@ export interface StudyWorker {
  * cases done over all shares; one final reply once every share has answered, or
  * as soon as a case could not be solved and no share can still refuse a lower one
  * (share q's next case is q + done * count), as one worker's sweep stops there.
+ * Then each worker that has answered goes to `giveBack` (kept for the next study)
+ * and any still working is ended.
  */
 export function startShares(
   request: SweepRequest,
   count: number,
   onReply: (reply: StudyReply) => void,
   makeWorker: () => StudyWorker,
+  giveBack: (worker: StudyWorker) => void = (worker) => worker.terminate(),
 ): { stop(): void } {
   const workers = Array.from({ length: count }, makeWorker);
   const done = new Array<number>(count).fill(0);
@@ -100,7 +103,8 @@ export function startShares(
   // Without a refusal, every share must answer; with one, every share must be past it.
   const settle = () => {
     if (!answered.every((a, q) => a || q + done[q] * count > lowestRefused)) return;
-    stop();
+    over = true;
+    workers.forEach((worker, q) => (answered[q] ? giveBack(worker) : worker.terminate()));
     onReply(joinShares(request, finals));
   };
   workers.forEach((worker, part) => {

@@ -2,28 +2,45 @@
 // long sweep that moves a shape never freezes the page; such a sweep over several
 // workers, shares.ts), and in-line, after the page has drawn, where it has none
 // (tests, old browsers). Either way the caller gets progress and one final reply,
-// and can stop it.
+// and can stop it. A worker whose study ended is kept for the next (idleWorkers.ts).
 import { runStudy, type StudyReply, type StudyRequest } from './run';
-import { startShares, studyWorkerCount, workerFailure } from './shares';
+import { IdleWorkers } from './idleWorkers';
+import { MAX_STUDY_WORKERS, startShares, studyWorkerCount, workerFailure } from './shares';
 
 export interface RunningStudy {
   /** Stop now; no further reply comes. */
   stop(): void;
 }
 
+/** Workers kept between studies (idleWorkers.ts): at most one study's worth, for a minute. */
+let kept: IdleWorkers | null = null;
+const LINGER_MS = 60_000;
+
 /** Start the study; `onReply` gets progress replies and then exactly one final reply (unless stopped). */
 export function startStudy(request: StudyRequest, onReply: (reply: StudyReply) => void): RunningStudy {
   if (typeof Worker === 'undefined') return startInline(request, onReply);
-  const makeWorker = () => new Worker(new URL('./worker.ts', import.meta.url), { type: 'module' });
+  kept ??= new IdleWorkers(
+    () => new Worker(new URL('./worker.ts', import.meta.url), { type: 'module' }),
+    MAX_STUDY_WORKERS,
+    LINGER_MS,
+  );
+  const pool = kept;
   const count = studyWorkerCount(request, navigator.hardwareConcurrency || 1);
-  if (request.kind === 'sweep' && count > 1) return startShares(request, count, onReply, makeWorker);
-  const worker = makeWorker();
+  if (request.kind === 'sweep' && count > 1)
+    return startShares(
+      request,
+      count,
+      onReply,
+      () => pool.take(),
+      (w) => pool.giveBack(w),
+    );
+  const worker = pool.take();
   let over = false;
   worker.onmessage = (event: MessageEvent<StudyReply>) => {
     if (over) return;
     if (event.data.kind !== 'progress') {
       over = true;
-      worker.terminate();
+      pool.giveBack(worker); // its study is over: kept, compiled, for the next
     }
     onReply(event.data);
   };
