@@ -2,7 +2,8 @@
 // a file would be (restore of its text), then view factors and the exchange,
 // and the object `exchange --json` prints for that file. Property and settings
 // studies keep the view factors of the first case (the geometry is the same);
-// position and tube-row studies compute them again for every value.
+// position and tube-row studies compute them for every value, keeping the pairs
+// the move cannot change since the value before (caseFactors).
 import type { SceneInput, ViewFactorResult } from '../../core/scene';
 import { KeptViewFactors } from '../../core/reuse/keptViewFactors';
 import { solveSketchExchange } from '../exchangeInput';

@@ -49,7 +49,8 @@ export function targetQuantity(run: StudyRun, target: Pick<StudyTarget, 'surface
  * Refused, with the range the quantity covers at the `steps` scanned values,
  * when no scanned interval brackets the target (a crossing and recrossing
  * between two scanned values is not seen: scan finer). `viewFactors` computes
- * each case's factors (default: core, one thread).
+ * each case's factors (default: caseFactors, which keeps the pairs a moved
+ * shape cannot change from one case to the next).
  */
 export function solveForTarget(
   sketch: Sketch,
