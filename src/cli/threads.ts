@@ -6,7 +6,7 @@
 // each taking whole surfaces. Results are the same bit for bit for any thread count.
 import { availableParallelism } from 'node:os';
 import { MessageChannel, receiveMessageOnPort, Worker, type MessagePort } from 'node:worker_threads';
-import { buildEdges, allEdgeLengths, totalEdgeCount } from '../core/edges';
+import { buildEdges, allEdgeLengths, sceneEdgeCount, totalEdgeCount } from '../core/edges';
 import type { SceneInput, ViewFactorResult } from '../core/scene';
 import { surfaceLengths } from '../core/surfaces';
 import { SurfaceAccumulator, surfaceFactorsFromPairs, type SurfaceRowSums } from '../core/surfaceRows';
@@ -62,9 +62,7 @@ export function parseThreads(text: string | undefined): number | string {
  */
 export function threadsFor(scene: SceneInput, threads?: number): number {
   if (threads !== undefined) return threads;
-  let n = 0; // edges: polygon edges, then arcs
-  for (const p of scene.polygons) n += p.points.length >> 1;
-  for (const c of scene.circles ?? []) n += c.arcs;
+  const n = sceneEdgeCount(scene.polygons, scene.circles);
   return (n * (n + 1)) / 2 >= THREADS_FROM_PAIRS ? availableParallelism() : 1;
 }
 

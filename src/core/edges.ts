@@ -35,6 +35,14 @@ export interface EdgeSet {
   arcs: ArcSet;
 }
 
+/** Edges a scene's shapes make, before they are built: polygon edges (one per point) plus arcs. */
+export function sceneEdgeCount(polygons: readonly PolygonInput[], circles: readonly CircleInput[] = []): number {
+  let n = 0;
+  for (const p of polygons) n += p.points.length >> 1;
+  for (const c of circles) n += c.arcs;
+  return n;
+}
+
 /** Straight edges plus arcs: the size of an edge matrix's side. */
 export function totalEdgeCount(edges: EdgeSet): number {
   return edges.count + edges.arcs.count;

@@ -7,8 +7,7 @@
 import * as Comlink from 'comlink';
 import { buildEdges, type EdgeSet } from '../core/edges';
 import { EdgePairs, packRows } from '../core/pairRows';
-import { MovedShapes } from '../core/reuse/movedShapes';
-import { updateRows } from '../core/reuse/reuseRows';
+import { packedRowsAfter } from '../core/reuse/reuseRows';
 import { RowMemory } from './rowMemory';
 import { SurfaceRowSummer } from '../core/surfaceRows';
 import { allRows } from '../core/viewFactors';
@@ -35,18 +34,9 @@ export function computeRows(job: ViewFactorJob, rows: Int32Array, memory?: RowMe
   }
   const earlier = memory?.take();
   const same = earlier && sameRows(earlier.rows, rows) ? earlier : null;
-  const moved = same && MovedShapes.between(same.pairs, pairs);
   // One buffer is kept and one handed over per job: a fresh one of this size costs
   // a browser worker more than the pairs themselves, so the kept one is updated in place.
-  let kept: Float64Array;
-  let computed: number;
-  if (same && moved) {
-    kept = same.packed;
-    computed = updateRows(pairs, rows, kept, moved);
-  } else {
-    kept = packRows(pairs, rows);
-    computed = kept.length;
-  }
+  const { packed: kept, computed } = packedRowsAfter(same, pairs, rows);
   const keeping = memory !== undefined && memory.keep({ pairs, rows: rows.slice(), packed: kept });
   const packed = keeping ? memory.copy(kept) : kept;
   return { kind: 'matrix', edgeLength: pairs.length, closed, rows, packed, computed };

@@ -7,6 +7,7 @@
 import type { PackedRows } from '../core/pairRows';
 import type { SurfaceRowSums } from '../core/surfaceRows';
 import type { CircleInput, PolygonInput } from '../core/scene';
+import { sceneEdgeCount } from '../core/edges';
 import { edgeMatrixFits } from '../core/viewFactors';
 
 export interface ViewFactorJob {
@@ -95,10 +96,7 @@ export function isSurfaceAnswer(r: ViewFactorAnswer): r is SurfaceViewFactors {
 
 /** Edges in a job's matrix: polygon edges, then arcs. */
 export function jobEdgeCount(job: ViewFactorJob): number {
-  let n = 0;
-  for (const p of job.polygons) n += p.points.length >> 1;
-  for (const c of job.circles ?? []) n += c.arcs;
-  return n;
+  return sceneEdgeCount(job.polygons, job.circles);
 }
 
 /** True when a sketch of this many edges is computed as surface sums (its edge matrix would pass the budget). */

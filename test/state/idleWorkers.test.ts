@@ -2,28 +2,11 @@
 // which workers of a shared sweep are kept when it ends (shares.ts).
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { restore } from '../../src/document';
-import { runStudy, type StudyReply, type StudyRequest } from '../../src/state/study';
+import type { StudyReply } from '../../src/state/study';
 import { IdleWorkers } from '../../src/state/study/idleWorkers';
 import { startShares, type StudyWorker } from '../../src/state/study/shares';
 import { kiln } from '../cli/studyHelpers';
-
-/** A stand-in worker: runs the study after `delay` ms, posting what the real one posts. */
-class StandIn implements StudyWorker {
-  onmessage: ((event: MessageEvent<StudyReply>) => void) | null = null;
-  onerror: ((event: ErrorEvent) => void) | null = null;
-  terminated = false;
-  constructor(private readonly delay = 0) {}
-  postMessage(request: StudyRequest): void {
-    setTimeout(() => {
-      if (this.terminated) return;
-      const post = (data: StudyReply) => !this.terminated && this.onmessage?.({ data } as MessageEvent<StudyReply>);
-      post(runStudy(request, (done, total) => post({ kind: 'progress', done, total })));
-    }, this.delay);
-  }
-  terminate(): void {
-    this.terminated = true;
-  }
-}
+import { StandInWorker } from './studyStandIn';
 
 afterEach(() => {
   vi.useRealTimers();
@@ -32,10 +15,10 @@ afterEach(() => {
 describe('IdleWorkers', () => {
   it('hands back the worker kept last, keeps at most `most`, and ends each after its time', () => {
     vi.useFakeTimers();
-    const made: StandIn[] = [];
+    const made: StandInWorker[] = [];
     const pool = new IdleWorkers(
       () => {
-        const w = new StandIn();
+        const w = new StandInWorker();
         made.push(w);
         return w;
       },
@@ -52,15 +35,15 @@ describe('IdleWorkers', () => {
     pool.giveBack(b);
     pool.giveBack(c); // past `most`: the oldest kept (a) is ended
     expect(pool.size).toBe(2);
-    expect((a as StandIn).terminated).toBe(true);
+    expect((a as StandInWorker).terminated).toBe(true);
     expect(pool.take()).toBe(c);
     expect(made).toHaveLength(3); // taken from the kept ones, none made
     vi.advanceTimersByTime(999);
-    expect((b as StandIn).terminated).toBe(false);
+    expect((b as StandInWorker).terminated).toBe(false);
     vi.advanceTimersByTime(1);
-    expect((b as StandIn).terminated).toBe(true);
+    expect((b as StandInWorker).terminated).toBe(true);
     expect(pool.size).toBe(0);
-    expect((c as StandIn).terminated).toBe(false); // taken before its time ran out
+    expect((c as StandInWorker).terminated).toBe(false); // taken before its time ran out
   });
 });
 
@@ -71,7 +54,7 @@ describe('a shared sweep gives back the workers that answered', () => {
     ({ kind: 'sweep', sketch: read.sketch, address: 'ware stack.2.x', from, to, steps }) as const;
 
   it('every worker of a finished sweep, none ended', async () => {
-    const workers: StandIn[] = [];
+    const workers: StandInWorker[] = [];
     const given: StudyWorker[] = [];
     const finals: StudyReply[] = [];
     startShares(
@@ -79,7 +62,7 @@ describe('a shared sweep gives back the workers that answered', () => {
       3,
       (r) => r.kind !== 'progress' && finals.push(r),
       () => {
-        const w = new StandIn();
+        const w = new StandInWorker();
         workers.push(w);
         return w;
       },
@@ -93,14 +76,14 @@ describe('a shared sweep gives back the workers that answered', () => {
 
   it('after an early refusal: the share that answered is given back, the slow one still working is ended', async () => {
     // x = 2.6 (the first value) pushes the ware stack through the wall: share 0 refuses at once.
-    const workers: StandIn[] = [];
+    const workers: StandInWorker[] = [];
     const given: StudyWorker[] = [];
     startShares(
       sweep(2.6, 1.0, 5),
       2,
       () => {},
       () => {
-        const w = new StandIn(workers.length === 0 ? 0 : 2000);
+        const w = new StandInWorker(workers.length === 0 ? 0 : 2000);
         workers.push(w);
         return w;
       },

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { restore } from '../../src/document';
 import { runStudy, type StudyReply, type StudyRequest } from '../../src/state/study';
-import { joinShares, startShares, studyWorkerCount, type StudyWorker } from '../../src/state/study/shares';
+import { joinShares, startShares, studyWorkerCount } from '../../src/state/study/shares';
+import { StandInWorker } from './studyStandIn';
 import { kiln } from '../cli/studyHelpers';
 
 // A sweep that moves a shape, shared over several workers, must give what one
@@ -29,27 +30,6 @@ function shared(request: Sweep, of: number): StudyReply {
     request,
     Array.from({ length: of }, (_, part) => runStudy({ ...request, share: { part, of } })),
   );
-}
-
-/** A stand-in for a browser worker: runs the study on a timer, posting what the real one posts. */
-class FakeWorker implements StudyWorker {
-  onmessage: ((event: MessageEvent<StudyReply>) => void) | null = null;
-  onerror: ((event: ErrorEvent) => void) | null = null;
-  terminated = false;
-  /** `delay`: ms before it starts (a slow share). */
-  constructor(private readonly delay = 0) {}
-  postMessage(request: StudyRequest): void {
-    setTimeout(() => {
-      if (this.terminated) return;
-      const post = (data: StudyReply) => {
-        if (!this.terminated) this.onmessage?.({ data } as MessageEvent<StudyReply>);
-      };
-      post(runStudy(request, (done, total) => post({ kind: 'progress', done, total })));
-    }, this.delay);
-  }
-  terminate(): void {
-    this.terminated = true;
-  }
 }
 
 describe('a sweep in shares', () => {
@@ -83,13 +63,13 @@ describe('a sweep in shares', () => {
   it('counts progress over all shares and replies once; a stopped sweep never replies', async () => {
     const request = sweep(1.2, 1.8, 5);
     const replies: StudyReply[] = [];
-    const workers: FakeWorker[] = [];
+    const workers: StandInWorker[] = [];
     startShares(
       request,
       3,
       (r) => replies.push(r),
       () => {
-        const w = new FakeWorker();
+        const w = new StandInWorker();
         workers.push(w);
         return w;
       },
@@ -107,7 +87,7 @@ describe('a sweep in shares', () => {
       request,
       2,
       (r) => stopped.push(r),
-      () => new FakeWorker(),
+      () => new StandInWorker(),
     ).stop();
     await new Promise((resolve) => setTimeout(resolve, 50));
     expect(stopped).toEqual([]);
@@ -125,7 +105,7 @@ describe('a sweep in shares', () => {
       request,
       2,
       (r) => replies.push(r),
-      () => new FakeWorker(made++ === 0 ? 0 : 2000),
+      () => new StandInWorker(made++ === 0 ? 0 : 2000),
     );
     await new Promise((resolve) => setTimeout(resolve, 300));
     expect(replies.filter((r) => r.kind !== 'progress')).toEqual([

@@ -31,8 +31,8 @@ export function isLinearBalance(input: BalanceInput): boolean {
  * need a surface below 0 K, a singular system). Inputs checked by the caller.
  */
 export function solveLinearBalance(input: BalanceInput, workspace?: DenseLuSolver): Solved | ExchangeFailure {
-  const conditions = input.conditions.filter(isClassic);
-  if (conditions.length !== input.conditions.length) throw new Error('solveLinearBalance: not a linear balance');
+  const conditions = input.conditions;
+  if (!conditions.every(isClassic)) throw new Error('solveLinearBalance: not a linear balance');
   const out = solveExchange(
     {
       viewFactors: input.viewFactors,

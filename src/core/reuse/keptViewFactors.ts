@@ -7,11 +7,10 @@
 // surfaces with aggregateToSurfaces's very numbers (packedSurfaces.ts).
 import { buildEdges, totalEdgeCount } from '../edges';
 import { aggregatePackedRows } from '../packedSurfaces';
-import { EdgePairs, packRows } from '../pairRows';
+import { EdgePairs } from '../pairRows';
 import type { SceneInput, ViewFactorResult } from '../scene';
 import { allRows, computeViewFactors, edgeMatrixFits } from '../viewFactors';
-import { MovedShapes } from './movedShapes';
-import { updateRows } from './reuseRows';
+import { packedRowsAfter } from './reuseRows';
 
 /** Most packed pairs kept for the next sketch (64 MB, about 4000 edges); past it every case computes every pair. */
 export const MAX_KEPT_PAIRS = 1 << 23;
@@ -40,18 +39,10 @@ export class KeptViewFactors {
     }
     const pairs = new EdgePairs(edges);
     // Taken, not shared: a call that throws half way leaves no half-updated rows behind.
-    const before = this.pairs,
-      kept = this.packed;
+    const earlier = this.pairs && this.packed ? { pairs: this.pairs, packed: this.packed } : null;
     this.pairs = this.packed = null;
-    const moved = before && kept && kept.length === (n * (n + 1)) / 2 ? MovedShapes.between(before, pairs) : null;
-    let packed: Float64Array;
-    if (moved && kept) {
-      this.computed = updateRows(pairs, rows, kept, moved);
-      packed = kept;
-    } else {
-      packed = packRows(pairs, rows);
-      this.computed = packed.length;
-    }
+    const { packed, computed } = packedRowsAfter(earlier, pairs, rows);
+    this.computed = computed;
     const result = aggregatePackedRows(
       pairs.length,
       { sets: [rows], packed: [packed] },

@@ -1,6 +1,6 @@
 // Rows packed again after an edit, keeping the pairs the edit cannot change.
-import { packedLength, type EdgePairs } from '../pairRows';
-import type { MovedShapes } from './movedShapes';
+import { packedLength, packRows, type EdgePairs } from '../pairRows';
+import { MovedShapes } from './movedShapes';
 
 /**
  * Bring `packed`, the given rows packed by `packRows` (pairRows.ts) for the earlier
@@ -31,4 +31,24 @@ export function updateRows(
     }
   }
   return computed;
+}
+
+/**
+ * The given rows packed for the sketch of `pairs` (exchange lengths, sketch units,
+ * see packRows): `earlier`, the same rows packed for an earlier sketch, updated in
+ * place when that sketch had the same shapes and only some solids or circles moved
+ * (updateRows), else packed afresh. With how many pairs were computed.
+ */
+export function packedRowsAfter(
+  earlier: { pairs: EdgePairs; packed: Float64Array } | null,
+  pairs: EdgePairs,
+  rows: ArrayLike<number>,
+): { packed: Float64Array; computed: number } {
+  const moved =
+    earlier && earlier.packed.length === packedLength(pairs.count, rows)
+      ? MovedShapes.between(earlier.pairs, pairs)
+      : null;
+  if (earlier && moved) return { packed: earlier.packed, computed: updateRows(pairs, rows, earlier.packed, moved) };
+  const packed = packRows(pairs, rows);
+  return { packed, computed: packed.length };
 }

@@ -21,9 +21,18 @@ export function withKnownFactors(request: StudyRequest, vf: ViewFactorCache): St
     const parsed = parseParameter(request.address);
     if (!parsed.ok || parsed.value.kind === 'shape' || parsed.value.kind === 'row') return request;
   }
+  // Not stale: the factors are those of the current checked geometry, which the pipeline holds.
+  const held = vf.current;
+  if (!held) return request;
   const own = toScene(request.sketch);
   // Same names in the same order: the matrix rows are the study's surfaces.
-  if (!sameEntries(own.surfaceNames, shown.names)) return request;
-  if (!sameScene(toScene(shown.sketch).scene, own.scene)) return request;
+  if (!sameEntries(own.surfaceNames, held.surfaces.names)) return request;
+  const heldScene = {
+    polygons: held.polygons,
+    circles: held.circles,
+    edgeSurface: held.surfaces.edgeSurface,
+    surfaceCount: held.surfaces.names.length,
+  };
+  if (!sameScene(heldScene, own.scene)) return request;
   return { ...request, factors: shown.result };
 }

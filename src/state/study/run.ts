@@ -113,14 +113,15 @@ export function runStudy(
   onProgress: (done: number, total: number) => void = () => {},
 ): StudyReply {
   const { sketch } = request;
+  const base = toScene(sketch);
   // Cases one after another keep the pairs a moved shape cannot change (caseFactors).
   const compute = caseFactors();
-  const viewFactors = request.factors ? knownFactorsOf(toScene(sketch).scene, request.factors, compute) : compute;
-  if (request.kind === 'effects') return effects(sketch, viewFactors);
+  const viewFactors = request.factors ? knownFactorsOf(base.scene, request.factors, compute) : compute;
+  if (request.kind === 'effects') return effects(sketch, base, viewFactors);
   const parsed = parseParameter(request.address);
   if (!parsed.ok) return { kind: 'failed', message: parsed.message };
   const p = parsed.value;
-  const names = toScene(sketch).surfaceNames;
+  const names = base.surfaceNames;
   const problem = parameterProblem(sketch, names, p);
   if (problem) return { kind: 'failed', message: problem };
   const unit = parameterUnit(p, sketch.units);
@@ -157,8 +158,8 @@ export function runStudy(
   return { kind: 'solve', answer: { value: out.value, values: out.values, summary } };
 }
 
-function effects(sketch: CheckedSketch, viewFactors: ViewFactorsOf): StudyReply {
-  const { scene, surfaceNames: names } = toScene(sketch);
+function effects(sketch: CheckedSketch, base: ReturnType<typeof toScene>, viewFactors: ViewFactorsOf): StudyReply {
+  const { scene, surfaceNames: names } = base;
   const factors = viewFactors(scene);
   const solved = solveSketchExchange(sketch, names, factors);
   if (!solved.ok) return { kind: 'failed', message: solved.message };
