@@ -77,8 +77,8 @@ export class RadiosityNetwork {
   /**
    * dG_r/dE_c for the surfaces `rows` and `cols` (dimensionless, >= 0),
    * rows.length x cols.length row-major: F M^-1 diag(e) restricted to them.
-   * X = M^-1 diag(e) costs n^2 x cols.length (all right-hand sides at once, by
-   * rows, so the inner loops run along contiguous memory). Since
+   * X = M^-1 diag(e) costs about n^2 x cols.length, solved for all columns
+   * together (radiositySystem.ts, solveColumns). Since
    * M X = diag(e) gives diag(1 - e) F X = X - diag(e), a row of F X is
    * (X_r - e_r delta_r)/(1 - e_r) where 1 - e_r is not small (the loss of digits is
    * 1/(1 - e_r), at most 1e3 here: harmless in a Jacobian, whose residual is
@@ -109,18 +109,12 @@ export class RadiosityNetwork {
     return Y;
   }
 
-  /** M^-1 diag(e) restricted to the columns `cols`: n x cols.length, row-major, one solve per column. */
+  /** M^-1 diag(e) restricted to the columns `cols`: n x cols.length, row-major (all columns solved together). */
   private inverseColumns(cols: ArrayLike<number>): Float64Array {
-    const { n, eps } = this;
-    const u = cols.length;
-    const X = new Float64Array(n * u);
-    const column = new Float64Array(n);
-    for (let c = 0; c < u; c++) {
-      column.fill(0);
-      column[cols[c]] = eps[cols[c]];
-      this.system.solve(column);
-      for (let i = 0; i < n; i++) X[i * u + c] = column[i];
-    }
-    return X;
+    const { eps } = this;
+    return this.system.solveColumns(
+      cols,
+      Float64Array.from(cols, (k) => eps[k]),
+    );
   }
 }

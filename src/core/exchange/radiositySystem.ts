@@ -17,6 +17,7 @@
 // the system is singular).
 
 import { DenseCholesky } from './cholesky';
+import { CholeskyRows } from './manyRightHandSides';
 import { estimateInverseNormOne, type FactoredSystem } from './conditionEstimate';
 import { DEFAULT_MIN_RECIPROCAL_CONDITION, DenseLuSolver, LinearSolveError } from './linearSolve';
 
@@ -121,6 +122,48 @@ export class RadiositySystem implements FactoredSystem {
     chol.solve(reduced);
     for (let a = 0; a < unknown.length; a++) b[unknown[a]] = reduced[a];
     return b;
+  }
+
+  /**
+   * x_c = M^-1 (scale_c e_{cols[c]}) for every c, as the columns of an n x
+   * cols.length row-major matrix (units of x per unit of scale): what solve()
+   * gives column by column, to rounding. With the Cholesky factors the
+   * columns are solved together (manyRightHandSides.ts).
+   */
+  solveColumns(cols: ArrayLike<number>, scale: ArrayLike<number>): Float64Array {
+    const { n, cholesky: chol } = this;
+    const u = cols.length;
+    const X = new Float64Array(n * u);
+    if (!chol) {
+      const column = new Float64Array(n);
+      for (let c = 0; c < u; c++) {
+        column.fill(0);
+        column[cols[c]] = scale[c];
+        this.solve(column);
+        for (let i = 0; i < n; i++) X[i * u + c] = column[i];
+      }
+      return X;
+    }
+    const { F, w, area, unknown } = this;
+    const m = unknown.length;
+    const place = new Int32Array(n).fill(-1); // surface -> its row of S (-1: known, J = b)
+    for (let a = 0; a < m; a++) place[unknown[a]] = a;
+    // One right-hand side of S per column, as solve() reduces it: b has only
+    // b_k = scale at k = cols[c]; a known k moves to every unknown row.
+    const rows = new Float64Array(u * m);
+    for (let c = 0; c < u; c++) {
+      const k = cols[c];
+      const at = c * m;
+      if (place[k] >= 0) rows[at + place[k]] = (area[k] * scale[c]) / w[k];
+      else for (let a = 0; a < m; a++) rows[at + a] = area[unknown[a]] * F[unknown[a] * n + k] * scale[c];
+      X[k * u + c] = place[k] >= 0 ? 0 : scale[c]; // a known row: J_k = b_k
+    }
+    new CholeskyRows(chol.matrix, m).solve(rows, u);
+    for (let c = 0; c < u; c++) {
+      const at = c * m;
+      for (let a = 0; a < m; a++) X[unknown[a] * u + c] = rows[at + a];
+    }
+    return X;
   }
 
   /** Solves M^T x = b (for the condition estimate): b is overwritten with x and returned. */
