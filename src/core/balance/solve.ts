@@ -16,10 +16,11 @@
 // 100 iterations; one more step then polishes to rounding.
 import { STEFAN_BOLTZMANN, emissivePower } from '../exchange/exchange';
 import { exchangeFailure, surroundingsFactor, type ExchangeFailure } from '../exchange/failures';
-import { DenseLuSolver, LinearSolveError } from '../exchange/linearSolve';
+import { LinearSolveError, type DenseLuSolver } from '../exchange/linearSolve';
 import { checkCondition, checkConvection } from './check';
 import { backHeat } from './conditions';
 import { balanceNodes, nodeCoupling, nodeIrradiation } from './nodes';
+import { NewtonMatrix } from './newtonMatrix';
 import { RadiosityNetwork } from './radiosity';
 import { isLinearBalance, solveLinearBalance } from './linear';
 import { balanceResult, type Solved } from './results';
@@ -124,7 +125,8 @@ export function solveBalance(
     const rowOf = new Int32Array(n);
     unknown.forEach((i, k) => (rowOf[i] = k));
     const { Z, W } = nodeCoupling(nodeIrradiation(network, unknown, members), (i) => rowOf[i], members, A, eps);
-    const jacobian = new DenseLuSolver(m);
+    const jacobian = new NewtonMatrix(Z, W);
+    const diagonal = new Float64Array(m);
     const step = new Float64Array(m);
     const colScale = new Float64Array(m);
     const trial = new Float64Array(m);
@@ -137,14 +139,12 @@ export function solveBalance(
       if (iterations >= MAX_ITERATIONS) {
         return exchangeFailure('no-convergence', { value: state.worst / state.scale, expected: MAX_ITERATIONS });
       }
-      const Jm = jacobian.matrix;
-      Jm.set(Z);
       for (let a = 0; a < m; a++) {
         colScale[a] = 1 / (4 * STEFAN_BOLTZMANN * nodeT[a] ** 3);
-        Jm[a * m + a] += slope[a] * colScale[a] - W[a];
+        diagonal[a] = slope[a] * colScale[a];
       }
       try {
-        jacobian.factor({ minReciprocalCondition: 1e-15 });
+        jacobian.factor(diagonal);
       } catch (err) {
         if (err instanceof LinearSolveError)
           return exchangeFailure('balance-singular', { value: err.reciprocalCondition || 0 });
