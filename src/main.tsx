@@ -7,6 +7,7 @@ import { documentApi } from './state/documentApi';
 import { demoSketch } from './state/demo';
 import { spawnViewFactorWorker } from './worker/spawn';
 import { browserTabChannel } from './state/tabs/lease';
+import { spawnExchangeWorker } from './state/exchange/background';
 import './ui/styles.css';
 import './ui/panels.css';
 
@@ -16,6 +17,7 @@ const runtime = startRuntime({
   spawn: spawnViewFactorWorker,
   demo: demoSketch,
   channel: browserTabChannel(),
+  exchangeWorker: spawnExchangeWorker,
 });
 // A closing tab lets go of the autosave, so a tab waiting on it is told.
 window.addEventListener('pagehide', () => runtime.dispose());

@@ -5,6 +5,7 @@ import { createAppStore, type AppStore } from './store';
 import { loadAutosave, startAutosave } from './autosave';
 import { startLiveResults } from './results/live';
 import { startLiveExchange } from './exchange/live';
+import type { ExchangeWorker } from './exchange/background';
 import { ViewFactorClient, type WorkerHandle } from '../worker/client';
 import type { TabChannel } from './tabs/lease';
 import { restartNotice } from './workerRestart';
@@ -26,6 +27,8 @@ export function startRuntime(options: {
   timeLimitMs?: number;
   /** Channel to other tabs, so only one autosaves the sketch (none in tests unless given). */
   channel?: TabChannel | null;
+  /** The exchange's worker for large sketches (exchange/background.ts); none: every solve on the page. */
+  exchangeWorker?: () => ExchangeWorker | null;
 }): Runtime {
   const start = loadAutosave(options.storage, options.api, options.demo);
   const store = createAppStore(start.doc);
@@ -39,7 +42,7 @@ export function startRuntime(options: {
   });
   const stopSave = startAutosave(store, options.storage, options.api, { channel: options.channel ?? null });
   const stopLive = startLiveResults(store, client, options.api);
-  const stopExchange = startLiveExchange(store);
+  const stopExchange = startLiveExchange(store, options.exchangeWorker);
   return {
     store,
     client,

@@ -87,4 +87,48 @@ describe('heat exchange in chromium', () => {
     expect(await netHeatValue('tube 1')).toBe(tubeAt1400);
     expect(errors).toEqual([]);
   });
+
+  it('solves a sketch of 340 surfaces in the exchange worker, then an edit of it', async () => {
+    // A regular 340-gon enclosure, every wall its own surface, one held: the rest reradiate,
+    // so every wall settles at the held temperature (equilibrium, common practice).
+    const n = 340;
+    const points = Array.from({ length: n }, (_, k) => [
+      Math.cos((2 * Math.PI * k) / n),
+      Math.sin((2 * Math.PI * k) / n),
+    ]);
+    const sketch = {
+      version: 1,
+      units: 'm',
+      shapes: [{ kind: 'enclosure', points, surface: points.map((_, k) => `wall ${k}`) }],
+      surfaces: { 'wall 0': { temperature: 800 } },
+    };
+    await page.evaluate((content) => {
+      const dt = new DataTransfer();
+      dt.items.add(new File([content], 'ring.json', { type: 'application/json' }));
+      window.dispatchEvent(new DragEvent('dragover', { dataTransfer: dt, bubbles: true, cancelable: true }));
+      window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
+    }, JSON.stringify(sketch));
+    const temperatures = () =>
+      page.evaluate(() => {
+        const ex = (window as unknown as TestWindow).__tautline.store.getState().exchange;
+        return ex.kind === 'solved' && !ex.stale && ex.names.length === 340 ? Array.from(ex.result.temperature) : null;
+      });
+    await expect.poll(temperatures, { timeout: 60_000 }).not.toBeNull();
+    for (const T of (await temperatures())!) expect(Math.abs(T - 800)).toBeLessThanOrEqual(1e-9 * 800);
+    // The solve ran in the exchange's own worker (its bundle was fetched), not on the page.
+    const fetched = await page.evaluate(() => performance.getEntriesByType('resource').map((e) => e.name));
+    expect(fetched.some((name) => /exchangeWorker/.test(name))).toBe(true);
+    await page.evaluate(() =>
+      (window as unknown as TestWindow).__tautline.store.getState().edit((d) => ({
+        ...d,
+        surfaces: { ...d.surfaces, 'wall 0': { temperature: 900 } },
+      })),
+    );
+    await expect
+      .poll(async () => (await temperatures())?.every((T) => Math.abs(T - 900) <= 1e-9 * 900) ?? false, {
+        timeout: 60_000,
+      })
+      .toBe(true);
+    expect(errors).toEqual([]);
+  });
 });

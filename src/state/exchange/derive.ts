@@ -1,40 +1,41 @@
 // The exchange stage of the results pipeline: the gray-diffuse solve for what
 // is on screen, keyed on the surface factors and the properties that go with
-// them (a property edit re-solves; it never needs new view factors).
-import { solveSketchExchange } from '../../document/exchangeInput';
+// them (a property edit re-solves; it never needs new view factors). The solve
+// itself is solveJob.ts, run here or, for large sketches, in the exchange's
+// worker (live.ts, background.ts), whose answer is filed in the same cache.
 import type { ShownResult } from '../results/derive';
 import type { ExchangeView } from './slice';
+import { exchangeJob, solveExchangeJob, type SolvedView } from './solveJob';
 
-type Solve = Exclude<ExchangeView, { kind: 'none' }>;
-let last: { key: unknown[]; view: Solve } | null = null;
+let last: { key: unknown[]; view: SolvedView } | null = null;
 
-/** Solve the exchange for the shown view factors; messages instead of exceptions. */
-export function deriveExchange(shown: ShownResult | null): ExchangeView {
-  if (!shown) return { kind: 'none' };
-  const { sketch } = shown;
-  const key = [shown.result, shown.names, shown.units, sketch.surfaces, sketch.settings];
-  if (!last || key.length !== last.key.length || key.some((v, i) => v !== last?.key[i])) {
-    last = { key, view: solve(shown) };
-  }
-  return last.view.stale === shown.stale ? last.view : { ...last.view, stale: shown.stale };
+const keyOf = (shown: ShownResult): unknown[] => [
+  shown.result,
+  shown.names,
+  shown.units,
+  shown.sketch.surfaces,
+  shown.sketch.settings,
+];
+
+function sameKey(key: unknown[]): boolean {
+  return last !== null && key.length === last.key.length && key.every((v, i) => v === last?.key[i]);
 }
 
-function solve(shown: ShownResult): Solve {
-  // Lengths are in the units of the geometry the factors belong to.
-  const part = { units: shown.units, surfaces: shown.sketch.surfaces, settings: shown.sketch.settings };
-  const names = [...shown.names];
-  const outcome = solveSketchExchange(part, names, shown.result);
-  if (!outcome.ok) {
-    const surface = outcome.surface === undefined ? undefined : names[outcome.surface];
-    return { kind: 'error', message: outcome.message, surface, stale: shown.stale };
-  }
-  return {
-    kind: 'solved',
-    names,
-    lengths: shown.result.surfaceLength,
-    units: shown.units,
-    conditions: [...outcome.input.conditions],
-    result: outcome.result,
-    stale: shown.stale,
-  };
+/** Solve the exchange for the shown view factors (or take the solve filed for them); messages instead of exceptions. */
+export function deriveExchange(shown: ShownResult | null): ExchangeView {
+  if (!shown) return { kind: 'none' };
+  const key = keyOf(shown);
+  const filed =
+    last !== null && sameKey(key) ? last : (last = { key, view: solveExchangeJob(exchangeJob(shown), shown.stale) });
+  return filed.view.stale === shown.stale ? filed.view : { ...filed.view, stale: shown.stale };
+}
+
+/** Is the solve for these shown factors and properties filed already? */
+export function exchangeKnown(shown: ShownResult): boolean {
+  return sameKey(keyOf(shown));
+}
+
+/** File a solve made elsewhere (the exchange's worker) for these shown factors and properties. */
+export function fileExchange(shown: ShownResult, view: SolvedView): void {
+  last = { key: keyOf(shown), view };
 }

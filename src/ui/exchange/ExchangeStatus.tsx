@@ -14,7 +14,9 @@ export function ExchangeStatus() {
         ? 'Nothing to compute yet.'
         : vf.status === 'invalid'
           ? 'Sketch is invalid: no results.'
-          : 'Waiting for the view factors…';
+          : vf.status === 'ready'
+            ? 'Solving the heat balance…' // a large sketch, in the exchange's worker
+            : 'Waiting for the view factors…';
     tone = vf.status === 'invalid' ? 'warn' : 'idle';
   } else if (!ex.stale) {
     text = ex.kind === 'error' ? 'No answer for these properties: see the message.' : 'Up to date';

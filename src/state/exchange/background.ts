@@ -1,0 +1,74 @@
+// Solving the exchange off the page's thread for large sketches: a surface
+// balance of 1000 surfaces takes about half a second (the Newton matrix is
+// dense), which would hold the page after every edit. One worker, kept while
+// the page lives; the newest job wins: a job still running when another comes
+// is ended with its worker (a fresh one takes the new job), and its answer never shown.
+import type { ExchangeJob, SolvedView } from './solveJob';
+
+/** The part of a Worker the exchange uses (a stand-in in tests). */
+export interface ExchangeWorker {
+  postMessage(message: { id: number; job: ExchangeJob }): void;
+  terminate(): void;
+  onmessage: ((event: MessageEvent<{ id: number; view: SolvedView }>) => void) | null;
+  onerror: ((event: ErrorEvent) => void) | null;
+}
+
+/** The browser's exchange worker (Vite bundles it from this URL form); null without Worker. */
+export function spawnExchangeWorker(): ExchangeWorker | null {
+  if (typeof Worker === 'undefined') return null;
+  return new Worker(new URL('./exchangeWorker.ts', import.meta.url), { type: 'module' });
+}
+
+/** A background solve's end: the view, a newer job in its place, or no answer from the worker. */
+export type BackgroundOutcome = SolvedView | 'superseded' | 'failed';
+
+export class BackgroundExchange {
+  private worker: ExchangeWorker | null = null;
+  private running: { id: number; settle: (outcome: BackgroundOutcome) => void } | null = null;
+  private nextId = 0;
+
+  constructor(private readonly spawn: () => ExchangeWorker | null) {}
+
+  /**
+   * Solve in the worker. Resolves with the view; 'superseded' when a newer
+   * job took its place; 'failed' when there is no worker or it failed (the
+   * caller then solves on the page).
+   */
+  solve(job: ExchangeJob): Promise<BackgroundOutcome> {
+    if (this.running) {
+      // Newest wins: the running solve cannot be interrupted, so its worker goes.
+      this.running.settle('superseded');
+      this.end();
+    }
+    const worker = (this.worker ??= this.spawn());
+    if (!worker) return Promise.resolve('failed');
+    const id = ++this.nextId;
+    return new Promise((resolve) => {
+      const settle = (outcome: BackgroundOutcome) => {
+        if (this.running?.id === id) this.running = null;
+        resolve(outcome);
+      };
+      this.running = { id, settle };
+      worker.onmessage = (event) => {
+        if (event.data.id === id) settle(event.data.view);
+      };
+      worker.onerror = () => {
+        this.end();
+        settle('failed');
+      };
+      worker.postMessage({ id, job });
+    });
+  }
+
+  /** End the worker (and any job it runs, whose answer is then never given). */
+  dispose(): void {
+    this.running?.settle('superseded');
+    this.end();
+  }
+
+  private end(): void {
+    this.worker?.terminate();
+    this.worker = null;
+    this.running = null;
+  }
+}

@@ -1,0 +1,70 @@
+// One solve of the exchange stage as plain data, so that the page or the
+// exchange's worker (background.ts) can run it: the same function either way.
+// Pure: numbers and the document's messages in, a view out.
+import { solveSketchExchange, type SketchExchangePart } from '../../document/exchangeInput';
+import type { ShownResult } from '../results/derive';
+import type { ExchangeView } from './slice';
+
+export type SolvedView = Exclude<ExchangeView, { kind: 'none' }>;
+
+/** What one solve needs: the sketch's properties, the surface names and their factors. */
+export interface ExchangeJob {
+  /** Units, properties and settings of the geometry the factors belong to (lengths in its units). */
+  part: SketchExchangePart;
+  names: string[];
+  /** n x n surface view factors, row-major, row = from (dimensionless). */
+  F: Float64Array;
+  /** Surface lengths in `part.units`. */
+  surfaceLength: Float64Array;
+}
+
+/** The job for what is on screen. */
+export function exchangeJob(shown: ShownResult): ExchangeJob {
+  return {
+    part: { units: shown.units, surfaces: shown.sketch.surfaces, settings: shown.sketch.settings },
+    names: [...shown.names],
+    F: shown.result.F,
+    surfaceLength: shown.result.surfaceLength,
+  };
+}
+
+/** Solve the job; messages instead of exceptions. `stale` is copied into the view. */
+export function solveExchangeJob(job: ExchangeJob, stale: boolean): SolvedView {
+  const { part, names } = job;
+  const outcome = solveSketchExchange(part, names, job);
+  if (!outcome.ok) {
+    const surface = outcome.surface === undefined ? undefined : names[outcome.surface];
+    return { kind: 'error', message: outcome.message, surface, stale };
+  }
+  return {
+    kind: 'solved',
+    names,
+    lengths: job.surfaceLength,
+    units: part.units,
+    conditions: [...outcome.input.conditions],
+    result: outcome.result,
+    stale,
+  };
+}
+
+/** The arrays of a solved view, to hand over instead of copy (the exchange table is surfaces^2 numbers). */
+export function viewBuffers(view: SolvedView): ArrayBuffer[] {
+  if (view.kind !== 'solved') return [];
+  const r = view.result;
+  const arrays = [
+    view.lengths,
+    r.radiosity,
+    r.irradiation,
+    r.temperature,
+    r.emissivity,
+    r.netFlux,
+    r.netHeat,
+    r.exchange,
+    r.surroundingsViewFactor,
+    r.surroundingsExchange,
+    r.netHeatTotal,
+  ];
+  const buffers = new Set<ArrayBuffer>();
+  for (const a of arrays) if (a && a.byteLength > 0) buffers.add(a.buffer as ArrayBuffer);
+  return [...buffers];
+}

@@ -1,0 +1,128 @@
+// Large sketches solve their exchange in the exchange's worker (a stand-in
+// here, fed structured clones as a real worker is): the page shows the last
+// answer as stale meanwhile, only the newest job's answer is shown, and a
+// failed worker leaves the solve to the page. The numbers are those of the
+// page's own solve, bit for bit (the same function runs in both places).
+import { describe, expect, it } from 'vitest';
+import { createAppStore, type AppStore } from '../../src/state/store';
+import { startLiveResults } from '../../src/state/results/live';
+import { LIVE_SOLVE_LIMIT, startLiveExchange } from '../../src/state/exchange/live';
+import type { ExchangeWorker } from '../../src/state/exchange/background';
+import { solveExchangeJob, type ExchangeJob, type SolvedView } from '../../src/state/exchange/solveJob';
+import { setCondition } from '../../src/state/exchange/edits';
+import { documentApi } from '../../src/state/documentApi';
+import type { SketchFile } from '../../src/state/sketchFile';
+import { flush, inThread, live, solved } from './exchangeHelpers';
+
+class StandInWorker implements ExchangeWorker {
+  onmessage: ExchangeWorker['onmessage'] = null;
+  onerror: ExchangeWorker['onerror'] = null;
+  terminated = false;
+  readonly posted: { id: number; job: ExchangeJob }[] = [];
+  postMessage(message: { id: number; job: ExchangeJob }): void {
+    this.posted.push(structuredClone(message));
+  }
+  terminate(): void {
+    this.terminated = true;
+  }
+  /** Answer the oldest job posted, as worker.ts does. */
+  answer(): void {
+    const m = this.posted.shift();
+    if (!m) throw new Error('no job posted');
+    const view: SolvedView = structuredClone(solveExchangeJob(m.job, false));
+    this.onmessage?.({ data: { id: m.id, view } } as MessageEvent<{ id: number; view: SolvedView }>);
+  }
+  fail(): void {
+    this.onerror?.({ message: 'stopped' } as ErrorEvent);
+  }
+}
+
+/** A regular polygon enclosure of n walls, every edge its own surface, one held at 800 K (the rest reradiating). */
+function ring(n: number): SketchFile {
+  const points = Array.from({ length: n }, (_, k): [number, number] => [
+    Math.cos((2 * Math.PI * k) / n),
+    Math.sin((2 * Math.PI * k) / n),
+  ]);
+  return {
+    version: 1,
+    units: 'm',
+    shapes: [{ kind: 'enclosure', points, surface: points.map((_, k) => `wall ${k}`) }],
+    surfaces: { 'wall 0': { temperature: 800 } },
+  };
+}
+
+function withWorkers(doc: SketchFile): { store: AppStore; made: StandInWorker[] } {
+  const made: StandInWorker[] = [];
+  const store = createAppStore(doc);
+  startLiveResults(store, inThread, documentApi);
+  startLiveExchange(store, () => {
+    const w = new StandInWorker();
+    made.push(w);
+    return w;
+  });
+  return { store, made };
+}
+
+const big = ring(LIVE_SOLVE_LIMIT + 20);
+
+describe('the exchange of a large sketch, solved off the page', () => {
+  it('is solved in the worker, with the numbers of the page’s own solve', async () => {
+    const { store, made } = withWorkers(big);
+    await flush();
+    expect(made).toHaveLength(1);
+    expect(made[0].posted).toHaveLength(1);
+    expect(store.getState().exchange.kind).toBe('none'); // nothing yet: the page did not solve it
+    made[0].answer();
+    await flush();
+    const ex = solved(store);
+    expect(ex.stale).toBe(false);
+    const onPage = live(big); // no worker: solved in this thread
+    await flush();
+    expect(Array.from(ex.result.netHeat)).toEqual(Array.from(solved(onPage).result.netHeat));
+    expect(Array.from(ex.result.temperature)).toEqual(Array.from(solved(onPage).result.temperature));
+    // Reradiating walls around one wall at 800 K settle at 800 K (equilibrium, common practice).
+    for (const T of ex.result.temperature) expect(Math.abs(T - 800)).toBeLessThanOrEqual(1e-9 * 800);
+  });
+
+  it('shows the last answer as stale while an edit is solved, and only the newest edit’s answer', async () => {
+    const { store, made } = withWorkers(big);
+    await flush();
+    made[0].answer();
+    await flush();
+    const first = solved(store);
+    store.getState().edit((d) => setCondition(d, 'wall 0', { kind: 'temperature', temperature: 900 }));
+    expect(solved(store).stale).toBe(true);
+    expect(solved(store).result).toBe(first.result);
+    // A second edit before the first is answered: the first job's worker is ended, a new one takes the second.
+    store.getState().edit((d) => setCondition(d, 'wall 0', { kind: 'temperature', temperature: 1000 }));
+    expect(made).toHaveLength(2);
+    expect(made[0].terminated).toBe(true);
+    made[1].answer();
+    await flush();
+    const last = solved(store);
+    expect(last.stale).toBe(false);
+    for (const T of last.result.temperature) expect(Math.abs(T - 1000)).toBeLessThanOrEqual(1e-9 * 1000);
+    // The ended worker's late answer (were it to come) is never shown.
+    made[0].answer();
+    await flush();
+    expect(solved(store)).toBe(last);
+  });
+
+  it('is solved on the page when the worker fails', async () => {
+    const { store, made } = withWorkers(big);
+    await flush();
+    made[0].fail();
+    await flush();
+    const ex = solved(store);
+    expect(ex.stale).toBe(false);
+    expect(ex.names).toHaveLength(LIVE_SOLVE_LIMIT + 20);
+    expect(made[0].terminated).toBe(true);
+  });
+
+  it('a sketch of few surfaces never waits for a worker', async () => {
+    const { store, made } = withWorkers(ring(12));
+    await flush();
+    expect(solved(store).stale).toBe(false);
+    expect(made).toHaveLength(0);
+  });
+});
