@@ -8,7 +8,7 @@ import { createAppStore, type AppStore } from '../../src/state/store';
 import { startLiveResults } from '../../src/state/results/live';
 import { LIVE_SOLVE_LIMIT, startLiveExchange } from '../../src/state/exchange/live';
 import type { ExchangeWorker } from '../../src/state/exchange/background';
-import { solveExchangeJob, type ExchangeJob, type SolvedView } from '../../src/state/exchange/solveJob';
+import { HeldFactors, type ExchangeMessage, type SolvedView } from '../../src/state/exchange/solveJob';
 import { setCondition } from '../../src/state/exchange/edits';
 import { documentApi } from '../../src/state/documentApi';
 import type { SketchFile } from '../../src/state/sketchFile';
@@ -18,8 +18,10 @@ class StandInWorker implements ExchangeWorker {
   onmessage: ExchangeWorker['onmessage'] = null;
   onerror: ExchangeWorker['onerror'] = null;
   terminated = false;
-  readonly posted: { id: number; job: ExchangeJob }[] = [];
-  postMessage(message: { id: number; job: ExchangeJob }): void {
+  readonly posted: ExchangeMessage[] = [];
+  /** The worker's own side, as exchangeWorker.ts runs it. */
+  private readonly held = new HeldFactors();
+  postMessage(message: ExchangeMessage): void {
     this.posted.push(structuredClone(message));
   }
   terminate(): void {
@@ -29,8 +31,8 @@ class StandInWorker implements ExchangeWorker {
   answer(): void {
     const m = this.posted.shift();
     if (!m) throw new Error('no job posted');
-    const view: SolvedView = structuredClone(solveExchangeJob(m.job, false));
-    this.onmessage?.({ data: { id: m.id, view } } as MessageEvent<{ id: number; view: SolvedView }>);
+    const { id, view } = this.held.answer(m);
+    this.onmessage?.({ data: structuredClone({ id, view }) } as MessageEvent<{ id: number; view: SolvedView | null }>);
   }
   fail(): void {
     this.onerror?.({ message: 'stopped' } as ErrorEvent);
@@ -91,12 +93,15 @@ describe('the exchange of a large sketch, solved off the page', () => {
     await flush();
     const first = solved(store);
     store.getState().edit((d) => setCondition(d, 'wall 0', { kind: 'temperature', temperature: 900 }));
+    // The same factors: the worker holds them, so the edit posts none.
+    expect(made[0].posted[0].factors).toBeNull();
     expect(solved(store).stale).toBe(true);
     expect(solved(store).result).toBe(first.result);
     // A second edit before the first is answered: the first job's worker is ended, a new one takes the second.
     store.getState().edit((d) => setCondition(d, 'wall 0', { kind: 'temperature', temperature: 1000 }));
     expect(made).toHaveLength(2);
     expect(made[0].terminated).toBe(true);
+    expect(made[1].posted[0].factors?.F).toHaveLength((LIVE_SOLVE_LIMIT + 20) ** 2); // a new worker gets them
     made[1].answer();
     await flush();
     const last = solved(store);

@@ -3,13 +3,14 @@
 // dense), which would hold the page after every edit. One worker, kept while
 // the page lives; the newest job wins: a job still running when another comes
 // is ended with its worker (a fresh one takes the new job), and its answer never shown.
-import type { ExchangeJob, SolvedView } from './solveJob';
+import type { ExchangeJob, ExchangeMessage, SolvedView } from './solveJob';
 
 /** The part of a Worker the exchange uses (a stand-in in tests). */
 export interface ExchangeWorker {
-  postMessage(message: { id: number; job: ExchangeJob }): void;
+  postMessage(message: ExchangeMessage): void;
   terminate(): void;
-  onmessage: ((event: MessageEvent<{ id: number; view: SolvedView }>) => void) | null;
+  /** view: null when the worker held no factors (never, as posted). */
+  onmessage: ((event: MessageEvent<{ id: number; view: SolvedView | null }>) => void) | null;
   onerror: ((event: ErrorEvent) => void) | null;
 }
 
@@ -26,6 +27,8 @@ export class BackgroundExchange {
   private worker: ExchangeWorker | null = null;
   private running: { id: number; settle: (outcome: BackgroundOutcome) => void } | null = null;
   private nextId = 0;
+  /** The factors the current worker holds (compared by identity). */
+  private held: Float64Array | null = null;
 
   constructor(private readonly spawn: () => ExchangeWorker | null) {}
 
@@ -50,13 +53,15 @@ export class BackgroundExchange {
       };
       this.running = { id, settle };
       worker.onmessage = (event) => {
-        if (event.data.id === id) settle(event.data.view);
+        if (event.data.id === id) settle(event.data.view ?? 'failed');
       };
       worker.onerror = () => {
         this.end();
         settle('failed');
       };
-      worker.postMessage({ id, job });
+      const factors = this.held === job.F ? null : { F: job.F, surfaceLength: job.surfaceLength };
+      this.held = job.F;
+      worker.postMessage({ id, part: job.part, names: job.names, factors });
     });
   }
 
@@ -70,5 +75,6 @@ export class BackgroundExchange {
     this.worker?.terminate();
     this.worker = null;
     this.running = null;
+    this.held = null;
   }
 }
