@@ -5,7 +5,9 @@
 // net-heat table (which must post no view-factor job).
 // Then opens a 1012-edge sketch and drags a tube for a few seconds, the pointer
 // moving on every animation frame, counting table updates and canvas frames per second.
-// Last, a study's start: "Which input matters" on the 1012-edge sketch (browserStudy.ts).
+// Then a study's start: "Which input matters" on the 1012-edge sketch (browserStudy.ts).
+// Last, a property edit of a 1012-surface sketch whose balance takes Newton's method,
+// solved in the exchange's worker: how long the page is held (browserExchange.ts).
 // Prints min, median and p90; the targets are reported with a met / NOT met verdict, never asserted.
 import type { Page } from 'playwright-core';
 import { screenOf, startApp, waitReady, type TestWindow } from '../e2e/harness';
@@ -13,6 +15,7 @@ import { bigSketch, dragSizeSketch, followDrag, openSketch } from './browserDrag
 import { deepBankSketch, furnaceSketch } from './bigSketch';
 import { furnaceTubeCentre } from './scenes';
 import { studyStartTimes } from './browserStudy';
+import { exchangeEditFigures } from './browserExchange';
 
 type LatencyWindow = TestWindow & { __lat: { lastEvent: number; samples: number[]; changes: number } };
 
@@ -164,6 +167,13 @@ try {
   const study = await studyStartTimes(page, 5);
   console.log(
     `1012-edge sketch (24 surfaces), "Which input matters": click -> table ${stats(study)} runs (the view factors taken from the results on screen)`,
+  );
+  // A property edit of a large Newton balance, solved off the page (information).
+  const edits = await exchangeEditFigures(page, 5);
+  const list = (k: 'answerMs' | 'longestTaskMs' | 'longestFrameGapMs') => edits.map((e) => e[k].toFixed(0)).join(', ');
+  console.log(
+    `1012-surface sketch with convection (Newton), a property edit solved in the exchange's worker: answer ${list('answerMs')} ms; ` +
+      `longest task on the page ${list('longestTaskMs')} ms (0: none over 50 ms); longest frame gap ${list('longestFrameGapMs')} ms`,
   );
 } finally {
   await app.close();
