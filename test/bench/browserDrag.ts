@@ -3,7 +3,7 @@
 // pointer moving on every animation frame, not waiting for anything, as a hand does.
 import type { Page } from 'playwright-core';
 import type { SketchFile } from '../../src/state/sketchFile';
-import { screenOf, waitReady, type TestWindow } from '../e2e/harness';
+import { dropFile, screenOf, waitReady, type TestWindow } from '../e2e/harness';
 import { tubeScene } from './scenes';
 
 export { bigSketch } from './bigSketch';
@@ -47,12 +47,7 @@ type DragWindow = TestWindow & {
 
 /** Open `sketch` as a dropped file and wait for its first results. */
 export async function openSketch(page: Page, sketch: SketchFile): Promise<void> {
-  await page.evaluate((content) => {
-    const dt = new DataTransfer();
-    dt.items.add(new File([content], 'bench.json', { type: 'application/json' }));
-    window.dispatchEvent(new DragEvent('dragover', { dataTransfer: dt, bubbles: true, cancelable: true }));
-    window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
-  }, JSON.stringify(sketch));
+  await dropFile(page, 'bench.json', JSON.stringify(sketch));
   await page.waitForFunction(
     (names) =>
       JSON.stringify((window as unknown as TestWindow).__tautline.store.getState().doc.shapes[0]?.surface) === names,

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { DenseLuSolver } from '../../src/core/exchange';
 import { DenseCholesky } from '../../src/core/exchange/cholesky';
-import { seeded } from './seeded';
+import { spd } from './spd';
 
 // Oracle: ml-matrix's CholeskyDecomposition (an independent, general-purpose
 // package). Bounds: Cholesky is backward stable without pivoting for any
@@ -12,25 +12,6 @@ import { seeded } from './seeded';
 // n u ||S|| ||x||; the factor agrees with the oracle's to about
 // cond(S) u relative.
 const U = 2 ** -53;
-
-/** A random symmetric matrix made positive definite by a dominant diagonal (like the scaled radiosity matrix). */
-function spd(m: number, seed: number): Float64Array {
-  const r = seeded(seed);
-  const s = new Float64Array(m * m);
-  for (let i = 0; i < m; i++) {
-    for (let j = 0; j < i; j++) {
-      const v = -r();
-      s[i * m + j] = v;
-      s[j * m + i] = v;
-    }
-  }
-  for (let i = 0; i < m; i++) {
-    let row = 0;
-    for (let j = 0; j < m; j++) if (j !== i) row += Math.abs(s[i * m + j]);
-    s[i * m + i] = row * (1 + r()) + 1e-3;
-  }
-  return s;
-}
 
 function factorAndSolve(s: Float64Array, m: number, b: Float64Array, accelerate: boolean) {
   const host = new DenseLuSolver(m + 3, { accelerate }); // a larger host: the factor uses stride m inside it

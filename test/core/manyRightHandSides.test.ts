@@ -5,6 +5,7 @@ import { DenseCholesky } from '../../src/core/exchange/cholesky';
 import { CholeskyRows } from '../../src/core/exchange/manyRightHandSides';
 import { RadiositySystem } from '../../src/core/exchange/radiositySystem';
 import { seeded } from './seeded';
+import { spd } from './spd';
 
 // Many right-hand sides solved together against one Cholesky factor, and the
 // radiosity system's columns of M^-1 built on it. Oracle: ml-matrix's general
@@ -13,25 +14,6 @@ import { seeded } from './seeded';
 // thm. 10.4 with ch. 8 for the triangular solves), so the forward error is
 // within a small multiple of m u cond(S) ||x||.
 const U = 2 ** -53;
-
-/** A random symmetric positive definite matrix (a dominant diagonal, as the scaled radiosity matrix has). */
-function spd(m: number, seed: number): Float64Array {
-  const r = seeded(seed);
-  const s = new Float64Array(m * m);
-  for (let i = 0; i < m; i++) {
-    for (let j = 0; j < i; j++) {
-      const v = -r();
-      s[i * m + j] = v;
-      s[j * m + i] = v;
-    }
-  }
-  for (let i = 0; i < m; i++) {
-    let row = 0;
-    for (let j = 0; j < m; j++) if (j !== i) row += Math.abs(s[i * m + j]);
-    s[i * m + i] = row * (1 + r()) + 1e-3;
-  }
-  return s;
-}
 
 const rowsOf = (a: ArrayLike<number>, m: number) =>
   Array.from({ length: m }, (_, i) => Array.from({ length: m }, (_, j) => a[i * m + j]));

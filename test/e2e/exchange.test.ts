@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { startApp, type App, type TestWindow, waitReady } from './harness';
+import { dropFile, startApp, type App, type TestWindow, waitReady } from './harness';
 
 let app: App;
 let page: Page;
@@ -102,12 +102,7 @@ describe('heat exchange in chromium', () => {
       shapes: [{ kind: 'enclosure', points, surface: points.map((_, k) => `wall ${k}`) }],
       surfaces: { 'wall 0': { temperature: 800 } },
     };
-    await page.evaluate((content) => {
-      const dt = new DataTransfer();
-      dt.items.add(new File([content], 'ring.json', { type: 'application/json' }));
-      window.dispatchEvent(new DragEvent('dragover', { dataTransfer: dt, bubbles: true, cancelable: true }));
-      window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
-    }, JSON.stringify(sketch));
+    await dropFile(page, 'ring.json', JSON.stringify(sketch));
     const temperatures = () =>
       page.evaluate(() => {
         const ex = (window as unknown as TestWindow).__tautline.store.getState().exchange;

@@ -3,7 +3,15 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { dragOnCanvas, screenOf as screenPoint, startApp, type App, type TestWindow, waitReady } from './harness';
+import {
+  dragOnCanvas,
+  dropFile,
+  screenOf as screenPoint,
+  startApp,
+  type App,
+  type TestWindow,
+  waitReady,
+} from './harness';
 import type { SketchFile } from '../../src/state/sketchFile';
 
 let app: App;
@@ -73,12 +81,7 @@ describe('files and view', () => {
         },
       ],
     });
-    await page.evaluate((content) => {
-      const dt = new DataTransfer();
-      dt.items.add(new File([content], 'duct.json', { type: 'application/json' }));
-      window.dispatchEvent(new DragEvent('dragover', { dataTransfer: dt, bubbles: true, cancelable: true }));
-      window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
-    }, dropped);
+    await dropFile(page, 'duct.json', dropped);
     await expect.poll(async () => (await state()).doc.units).toBe('mm');
     await waitReady(page);
     expect(

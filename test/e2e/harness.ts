@@ -78,6 +78,19 @@ export async function startApp(): Promise<App> {
   };
 }
 
+/** Drop a file named `name` holding `content` on the page, as a user drags one from the desktop. */
+export async function dropFile(page: Page, name: string, content: string): Promise<void> {
+  await page.evaluate(
+    ([fileName, text]) => {
+      const dt = new DataTransfer();
+      dt.items.add(new File([text], fileName, { type: 'application/json' }));
+      window.dispatchEvent(new DragEvent('dragover', { dataTransfer: dt, bubbles: true, cancelable: true }));
+      window.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
+    },
+    [name, content] as const,
+  );
+}
+
 /** Wait until the app says its results are ready (the status line's `data-status`). */
 export async function waitReady(page: Page, timeout?: number): Promise<void> {
   await page.waitForFunction(
