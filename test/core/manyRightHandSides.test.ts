@@ -108,3 +108,34 @@ describe('columns of the radiosity system solved together', () => {
     });
   }
 });
+
+describe('those columns at their own rows only (the symmetry of S^-1 fills the rest)', () => {
+  it('as ml-matrix’s inverse, for columns in any order, with and without a surface outside S', () => {
+    const n = 61;
+    const { F, area } = enclosure(n, 8);
+    const w = Float64Array.from({ length: n }, (_, i) => (i % 9 === 0 ? 0 : 0.05 + 0.9 * (((i * 53) % 17) / 17)));
+    const system = new RadiositySystem(F, w, area);
+    expect(system.symmetric).toBe(true);
+    const M = Array.from({ length: n }, (_, i) =>
+      Array.from({ length: n }, (_, j) => (i === j ? 1 : 0) - w[i] * F[i * n + j]),
+    );
+    const inv = inverse(new Matrix(M)).to2DArray();
+    const bound = 20 * n * U * condOne(M);
+    // Every surface of S but a few, shuffled; then with a black one (w = 0: not a row of S, so every row is solved).
+    const inS = Array.from({ length: n }, (_, i) => i).filter((i) => w[i] > 0 && i % 5 !== 2);
+    const shuffled = inS
+      .map((k, t) => [k, (t * 37) % inS.length] as const)
+      .sort((a, b) => a[1] - b[1])
+      .map(([k]) => k);
+    for (const cols of [Int32Array.from(shuffled), Int32Array.from([...shuffled.slice(0, 20), 9, 18])]) {
+      const u = cols.length;
+      const scale = Float64Array.from(cols, (k) => 0.2 + k / 80);
+      const X = system.solveColumnsAt(cols, scale);
+      for (let c = 0; c < u; c++) {
+        const big = Math.max(...inv.map((row) => Math.abs(row[cols[c]] * scale[c])));
+        for (let r = 0; r < u; r++)
+          expect(Math.abs(X[r * u + c] - inv[cols[r]][cols[c]] * scale[c])).toBeLessThanOrEqual(bound * big);
+      }
+    }
+  });
+});

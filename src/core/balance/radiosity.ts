@@ -87,6 +87,19 @@ export class RadiosityNetwork {
   sensitivity(rows: ArrayLike<number>, cols: ArrayLike<number>): Float64Array {
     const { n, eps, F } = this;
     const u = cols.length;
+    if (this.onlyAmong(rows, cols)) {
+      // Rows are the columns' own surfaces, none nearly black: M^-1 there only (solveColumnsAt).
+      const Y = this.system.solveColumnsAt(
+        cols,
+        Float64Array.from(cols, (k) => eps[k]),
+      );
+      for (let r = 0; r < u; r++) {
+        const i = cols[r];
+        const w = 1 - eps[i];
+        for (let c = 0; c < u; c++) Y[r * u + c] = (Y[r * u + c] - (c === r ? eps[i] : 0)) / w;
+      }
+      return Y;
+    }
     const X = this.inverseColumns(cols);
     const Y = new Float64Array(rows.length * u);
     for (let r = 0; r < rows.length; r++) {
@@ -107,6 +120,13 @@ export class RadiosityNetwork {
       }
     }
     return Y;
+  }
+
+  /** Are the rows the columns' surfaces, in the same order, with none nearly black (1 - e >= 1e-3)? */
+  private onlyAmong(rows: ArrayLike<number>, cols: ArrayLike<number>): boolean {
+    if (rows.length !== cols.length) return false;
+    for (let r = 0; r < rows.length; r++) if (rows[r] !== cols[r] || 1 - this.eps[rows[r]] < 1e-3) return false;
+    return true;
   }
 
   /** M^-1 diag(e) restricted to the columns `cols`: n x cols.length, row-major (all columns solved together). */

@@ -52,9 +52,12 @@ export class CholeskyRows implements ProductContext {
   /**
    * Solves S x = b for each of the `count` rows b of `rows` (m doubles each,
    * row-major), in place: row r becomes S^-1 b_r. Rows whose leading entries
-   * are 0 skip the part of the forward solve they cannot change.
+   * are 0 skip the part of the forward solve they cannot change. `trailing`:
+   * only the entries from the pass's first nonzero column on are solved (the
+   * backward solve of those needs no others); the ones before stay 0. For a
+   * caller that gets them by the symmetry of S^-1 instead: a third of the work.
    */
-  solve(rows: Float64Array, count: number): Float64Array {
+  solve(rows: Float64Array, count: number, trailing = false): Float64Array {
     const m = this.n;
     if (rows.length < count * m) throw new RangeError(`right-hand sides: ${rows.length} doubles for ${count} x ${m}`);
     for (let r0 = 0; r0 < count; r0 += ROWS_PER_PASS) {
@@ -75,7 +78,8 @@ export class CholeskyRows implements ProductContext {
       }
       if (first < m) {
         this.forward(first, m - first);
-        this.backward(0, m);
+        if (trailing) this.backward(first, m - first);
+        else this.backward(0, m);
       }
       block.set(this.matrix.subarray(m * m, (m + k) * m));
     }

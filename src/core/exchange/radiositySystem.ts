@@ -166,6 +166,55 @@ export class RadiositySystem implements FactoredSystem {
     return X;
   }
 
+  /**
+   * solveColumns at the rows of `cols` only: u x u row-major, entry (r, c) the
+   * radiosity of surface cols[r] for scale_c e_{cols[c]} (the same to
+   * rounding). With the Cholesky factors and every listed surface a row of S,
+   * each column is solved only from its own row of S on and the rest taken
+   * by the symmetry of S^-1, a third of the work (manyRightHandSides.ts).
+   */
+  solveColumnsAt(cols: ArrayLike<number>, scale: ArrayLike<number>): Float64Array {
+    const { n, cholesky: chol, w, area, unknown } = this;
+    const u = cols.length;
+    const out = new Float64Array(u * u);
+    const place = new Int32Array(n).fill(-1); // surface -> its row of S
+    for (let a = 0; a < unknown.length; a++) place[unknown[a]] = a;
+    let rowsOfS = chol !== null;
+    for (let c = 0; c < u && rowsOfS; c++) rowsOfS = place[cols[c]] >= 0 && scale[c] !== 0;
+    if (!chol || !rowsOfS) {
+      const X = this.solveColumns(cols, scale);
+      for (let r = 0; r < u; r++) out.set(X.subarray(cols[r] * u, cols[r] * u + u), r * u);
+      return out;
+    }
+    const m = unknown.length;
+    // Right-hand sides by their row of S, so each pass skips the most (its first nonzero is its lowest).
+    const order = Int32Array.from({ length: u }, (_, c) => c).sort((p, q) => place[cols[p]] - place[cols[q]]);
+    const at = new Int32Array(u); // column c's right-hand side is row at[c]
+    const s = new Float64Array(u); // its one entry: area_k scale_c / w_k at place[k]
+    const rows = new Float64Array(u * m);
+    order.forEach((c, r) => {
+      const k = cols[c];
+      at[c] = r;
+      s[c] = (area[k] * scale[c]) / w[k];
+      rows[r * m + place[k]] = s[c];
+    });
+    new CholeskyRows(chol.matrix, m).solve(rows, u, true);
+    // In tiles: the reads run down the right-hand sides (rows of `rows`), the writes along rows of `out`.
+    for (let r0 = 0; r0 < u; r0 += TILE) {
+      for (let c0 = 0; c0 < u; c0 += TILE) {
+        for (let r = r0; r < Math.min(u, r0 + TILE); r++) {
+          const pr = place[cols[r]];
+          for (let c = c0; c < Math.min(u, c0 + TILE); c++) {
+            const pc = place[cols[c]];
+            // x_r for column c is (S^-1)_{pr pc} s_c: solved where pr >= pc, else (S^-1)_{pc pr} from column r.
+            out[r * u + c] = pr >= pc ? rows[at[c] * m + pr] : (rows[at[r] * m + pc] / s[r]) * s[c];
+          }
+        }
+      }
+    }
+    return out;
+  }
+
   /** Solves M^T x = b (for the condition estimate): b is overwritten with x and returned. */
   solveTransposed(b: Float64Array): Float64Array {
     const chol = this.cholesky;
