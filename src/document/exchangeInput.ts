@@ -16,6 +16,7 @@ import { conditionOf, type SketchCondition } from './exchange/conditions';
 import { exchangeFailureMessage, type ConditionsFailure, type SketchExchangeFailure } from './exchange/messages';
 import type { SketchSettings, SurfaceProperties } from './schema';
 import { METRES_PER_UNIT, type Units } from './units';
+import type { SolverMemory } from '../core/exchange';
 
 // For the app, which reaches the core through this layer.
 export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY } from '../core/exchange';
@@ -91,10 +92,11 @@ export function sketchExchange(
   surfaceNames: ReadonlyArray<string>,
   factors: SurfaceFactors,
   depth?: number,
+  memory?: SolverMemory,
 ): { ok: true; input: BalanceInput; result: BalanceResult } | SketchExchangeFailure {
   const prepared = sketchExchangeInput(sketch, surfaceNames, factors, depth);
   if (!prepared.ok) return prepared;
-  const solved = solveBalance(prepared.input);
+  const solved = solveBalance(prepared.input, memory);
   return solved.ok ? { ok: true, input: prepared.input, result: solved.result } : solved;
 }
 
@@ -107,14 +109,16 @@ export type SketchExchangeOutcome =
  * Solves the sketch's surface balance (SI results: W per metre of depth,
  * W/m^2, K; see solveBalance). Problems that are out of range or have no
  * unique answer come back as a message naming the surface, never as an exception.
+ * `memory`: solvers and scratch kept between solves by a caller that solves often.
  */
 export function solveSketchExchange(
   sketch: SketchExchangePart,
   surfaceNames: ReadonlyArray<string>,
   factors: SurfaceFactors,
   depth?: number,
+  memory?: SolverMemory,
 ): SketchExchangeOutcome {
-  const outcome = sketchExchange(sketch, surfaceNames, factors, depth);
+  const outcome = sketchExchange(sketch, surfaceNames, factors, depth, memory);
   if (outcome.ok) return outcome;
   return { ok: false, message: exchangeFailureMessage(outcome, surfaceNames), surface: outcome.surface };
 }

@@ -9,8 +9,9 @@
 // Part of `npm run bench`; alone: `npx tsx test/bench/solve.ts [--quick]`.
 import { pathToFileURL } from 'node:url';
 import { solveBalance } from '../../src/core/balance';
-import { DenseLuSolver, solveExchange, type SurfaceCondition } from '../../src/core/exchange';
+import { solveExchange, type SurfaceCondition } from '../../src/core/exchange';
 import { RadiositySystem } from '../../src/core/exchange/radiositySystem';
+import { SolverMemory } from '../../src/core/exchange/solverMemory';
 import { radiosityResidual } from '../../src/core/exchange/refine';
 
 /** Target of the dense solve at 2000 surfaces, ms (issue 13). */
@@ -65,7 +66,8 @@ export function benchDenseSolve(quick: boolean): void {
   const b = Float64Array.from({ length: N }, (_, i) => 1e4 * (1 + (i % 7)));
   const x = new Float64Array(N);
   const r = new Float64Array(N);
-  const workspace = new DenseLuSolver(N);
+  const memory = new SolverMemory(); // kept between runs, as the app keeps it
+  const workspace = memory.solver('radiosity', N);
   let symmetric = false;
   const dense = timeRuns(runs, () => {
     const system = new RadiositySystem(F, weight, input.area, workspace);
@@ -88,7 +90,7 @@ export function benchDenseSolve(quick: boolean): void {
   // What the app and the command line solve: the whole surface balance. With only held,
   // adiabatic and heat-flux surfaces it is linear and takes one system (core balance/linear.ts).
   const balance = timeRuns(runs, () => {
-    const out = solveBalance(input, workspace);
+    const out = solveBalance(input, memory);
     if (!out.ok) throw new Error(`balance refused: ${out.code}`);
   });
   console.log(

@@ -33,13 +33,15 @@ export class NewtonMatrix {
   usedCholesky = false;
   private readonly scratch: Float64Array[];
 
+  /** `solver`: an m x m solver whose memory is used (kept between solves); a new one otherwise. */
   constructor(
     private readonly Z: Float64Array,
     private readonly W: Float64Array,
+    solver?: DenseLuSolver,
   ) {
     const m = W.length;
     this.m = m;
-    this.lu = new DenseLuSolver(m);
+    this.lu = solver && solver.n === m ? solver : new DenseLuSolver(m);
     this.cholesky = new DenseCholesky(this.lu, m);
     this.scratch = [new Float64Array(m), new Float64Array(m), new Float64Array(m)];
     let symmetric = true;

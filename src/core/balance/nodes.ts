@@ -2,6 +2,7 @@
 // Newton matrix, shared by the solver (solve.ts) and the derivatives of its answer
 // (core/study/sensitivity.ts). Emissive powers in W/m^2, areas in m per metre of depth.
 import type { BalanceCondition } from './conditions';
+import type { SolverMemory } from '../exchange/solverMemory';
 import type { RadiosityNetwork } from './radiosity';
 
 /** Kinds whose temperature is solved for (their own node). */
@@ -29,12 +30,15 @@ export function nodeIrradiation(
   network: RadiosityNetwork,
   rows: ArrayLike<number>,
   nodes: ReadonlyArray<ReadonlyArray<number>>,
+  memory?: SolverMemory,
 ): Float64Array {
   const unknown = Int32Array.from(nodes.flat());
   const Y = network.sensitivity(rows, unknown);
   const u = unknown.length;
   const m = nodes.length;
-  const out = new Float64Array(rows.length * m);
+  // One surface per node, as is usual: dG/dE by node is Y itself.
+  if (u === m) return Y;
+  const out = memory ? memory.array('irradiation', rows.length * m) : new Float64Array(rows.length * m);
   for (let r = 0; r < rows.length; r++) {
     let col = 0;
     for (let b = 0; b < m; b++) {
@@ -60,9 +64,10 @@ export function nodeCoupling(
   nodes: ReadonlyArray<ReadonlyArray<number>>,
   area: ArrayLike<number>,
   eps: ArrayLike<number>,
+  memory?: SolverMemory,
 ): { Z: Float64Array; W: Float64Array } {
   const m = nodes.length;
-  const Z = new Float64Array(m * m);
+  const Z = memory ? memory.array('coupling', m * m) : new Float64Array(m * m);
   const W = new Float64Array(m);
   for (let a = 0; a < m; a++) {
     for (const i of nodes[a]) {

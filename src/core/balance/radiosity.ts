@@ -4,7 +4,7 @@
 // (openings: e = 1, E = E_s), so M = I - diag(1 - e) F is factored once per
 // solve (exchange/radiositySystem.ts) and each new set of emissive powers
 // E = sigma T^4 costs two triangular solves. Fluxes and powers in W/m^2.
-import type { DenseLuSolver } from '../exchange/linearSolve';
+import type { SolverMemory } from '../exchange/solverMemory';
 import { RadiositySystem } from '../exchange/radiositySystem';
 import { radiosityResidual } from '../exchange/refine';
 
@@ -21,7 +21,8 @@ export class RadiosityNetwork {
    * Builds and factors M (throws LinearSolveError when it is singular or not
    * finite). F: n x n view factors row-major; area: surface lengths, m;
    * eps: emissivity (1 for openings); Fs: view factor to the surroundings;
-   * Es: their emissive power, W/m^2.
+   * Es: their emissive power, W/m^2. `memory`: kept memory for the
+   * factors and the sensitivity's scratch (solverMemory.ts).
    */
   constructor(
     private readonly F: ArrayLike<number>,
@@ -29,14 +30,14 @@ export class RadiosityNetwork {
     private readonly eps: Float64Array,
     private readonly Fs: Float64Array,
     private readonly Es: number,
-    workspace?: DenseLuSolver,
+    private readonly memory?: SolverMemory,
   ) {
     const n = eps.length;
     this.n = n;
     this.weight = eps.map((e) => 1 - e);
     this.rhs = new Float64Array(n);
     this.residual = new Float64Array(n);
-    this.system = new RadiositySystem(F, this.weight, area, workspace);
+    this.system = new RadiositySystem(F, this.weight, area, memory?.solver('radiosity', n));
     this.reciprocalCondition = this.system.reciprocalCondition;
   }
 
@@ -92,6 +93,7 @@ export class RadiosityNetwork {
       const Y = this.system.solveColumnsAt(
         cols,
         Float64Array.from(cols, (k) => eps[k]),
+        this.memory,
       );
       for (let r = 0; r < u; r++) {
         const i = cols[r];

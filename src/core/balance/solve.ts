@@ -16,7 +16,8 @@
 // 100 iterations; one more step then polishes to rounding.
 import { STEFAN_BOLTZMANN, emissivePower } from '../exchange/exchange';
 import { exchangeFailure, surroundingsFactor, type ExchangeFailure } from '../exchange/failures';
-import { LinearSolveError, type DenseLuSolver } from '../exchange/linearSolve';
+import { LinearSolveError } from '../exchange/linearSolve';
+import type { SolverMemory } from '../exchange/solverMemory';
 import { checkCondition, checkConvection } from './check';
 import { backHeat } from './conditions';
 import { balanceNodes, nodeCoupling, nodeIrradiation } from './nodes';
@@ -37,26 +38,26 @@ export const MAX_ITERATIONS = 100;
  * gasConvectionHeat + surroundingsNetHeat| / sum A_i J_i. Out-of-range input
  * and cases without a unique answer, or where Newton does not converge, come
  * back as an ExchangeFailure (a code, the surface, the number), never a wrong answer.
- * `workspace`: an n x n solver to reuse for the radiosity matrix. A balance
+ * `memory`: solvers and scratch kept between solves (solverMemory.ts). A balance
  * linear in the radiosities (linear.ts: held, open, adiabatic and heat-flux
  * surfaces, no convection) is solved as one system; `method: 'newton'` (tests)
  * takes Newton for it too.
  */
 export function solveBalance(
   input: BalanceInput,
-  workspace?: DenseLuSolver,
+  memory?: SolverMemory,
   options: { method?: 'auto' | 'newton' } = {},
 ): BalanceOutcome {
   const setup = prepare(input);
   if ('ok' in setup) return setup;
   if (options.method !== 'newton' && isLinearBalance(input)) {
-    const linear = solveLinearBalance(input, workspace);
+    const linear = solveLinearBalance(input, memory?.solver('radiosity', setup.n));
     return 'ok' in linear ? linear : { ok: true, result: balanceResult(input, linear) };
   }
   const { n, eps, Fs, Es, h, Tg, known } = setup;
   let network: RadiosityNetwork;
   try {
-    network = new RadiosityNetwork(input.viewFactors, input.area, eps, Fs, Es, workspace);
+    network = new RadiosityNetwork(input.viewFactors, input.area, eps, Fs, Es, memory);
   } catch (err) {
     if (err instanceof LinearSolveError) {
       return err.problem === 'not-finite'
@@ -124,8 +125,9 @@ export function solveBalance(
     // dG/dE among the unknown surfaces, rows in `unknown` order (row k is unknown[k]).
     const rowOf = new Int32Array(n);
     unknown.forEach((i, k) => (rowOf[i] = k));
-    const { Z, W } = nodeCoupling(nodeIrradiation(network, unknown, members), (i) => rowOf[i], members, A, eps);
-    const jacobian = new NewtonMatrix(Z, W);
+    const irradiation = nodeIrradiation(network, unknown, members, memory);
+    const { Z, W } = nodeCoupling(irradiation, (i) => rowOf[i], members, A, eps, memory);
+    const jacobian = new NewtonMatrix(Z, W, memory?.solver('newton', m));
     const diagonal = new Float64Array(m);
     const step = new Float64Array(m);
     const colScale = new Float64Array(m);

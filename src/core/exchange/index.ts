@@ -15,3 +15,4 @@ export { exchangeFailure, type ExchangeFailure, type ExchangeFailureCode } from 
 export { DEFAULT_CONDITION, DEFAULT_EMISSIVITY, exchangeInputFor, type ExchangeSetup } from './setup';
 export { DEFAULT_MIN_RECIPROCAL_CONDITION, DenseLuSolver, LinearSolveError, solveLinearSystem } from './linearSolve';
 export type { FactorOptions, LinearSolution, LinearSolveProblem, SolverOptions } from './linearSolve';
+export { SolverMemory } from './solverMemory';

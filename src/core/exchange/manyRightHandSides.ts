@@ -46,7 +46,13 @@ export class CholeskyRows implements ProductContext {
     this.packedA = matrixBytes;
     this.packedB = matrixBytes + PACKED_A_BYTES;
     this.matrix = this.kernel ? new Float64Array(this.kernel.memory.buffer, 0, doubles) : new Float64Array(doubles);
-    this.matrix.set(factor.subarray(0, m * m));
+    this.load(factor);
+  }
+
+  /** Take another m x m factor (copied in); returns this. */
+  load(factor: Float64Array): this {
+    this.matrix.set(factor.subarray(0, this.n * this.n));
+    return this;
   }
 
   /**

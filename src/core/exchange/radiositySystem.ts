@@ -18,6 +18,7 @@
 
 import { DenseCholesky } from './cholesky';
 import { CholeskyRows } from './manyRightHandSides';
+import type { SolverMemory } from './solverMemory';
 import { estimateInverseNormOne, type FactoredSystem } from './conditionEstimate';
 import { DEFAULT_MIN_RECIPROCAL_CONDITION, DenseLuSolver, LinearSolveError } from './linearSolve';
 
@@ -172,11 +173,12 @@ export class RadiositySystem implements FactoredSystem {
    * rounding). With the Cholesky factors and every listed surface a row of S,
    * each column is solved only from its own row of S on and the rest taken
    * by the symmetry of S^-1, a third of the work (manyRightHandSides.ts).
+   * With `memory` the answer is its 'columns' array (valid until that is handed out again).
    */
-  solveColumnsAt(cols: ArrayLike<number>, scale: ArrayLike<number>): Float64Array {
+  solveColumnsAt(cols: ArrayLike<number>, scale: ArrayLike<number>, memory?: SolverMemory): Float64Array {
     const { n, cholesky: chol, w, area, unknown } = this;
     const u = cols.length;
-    const out = new Float64Array(u * u);
+    const out = memory ? memory.array('columns', u * u) : new Float64Array(u * u);
     const place = new Int32Array(n).fill(-1); // surface -> its row of S
     for (let a = 0; a < unknown.length; a++) place[unknown[a]] = a;
     let rowsOfS = chol !== null;
@@ -191,14 +193,14 @@ export class RadiositySystem implements FactoredSystem {
     const order = Int32Array.from({ length: u }, (_, c) => c).sort((p, q) => place[cols[p]] - place[cols[q]]);
     const at = new Int32Array(u); // column c's right-hand side is row at[c]
     const s = new Float64Array(u); // its one entry: area_k scale_c / w_k at place[k]
-    const rows = new Float64Array(u * m);
+    const rows = memory ? memory.array('right-hand sides', u * m) : new Float64Array(u * m);
     order.forEach((c, r) => {
       const k = cols[c];
       at[c] = r;
       s[c] = (area[k] * scale[c]) / w[k];
       rows[r * m + place[k]] = s[c];
     });
-    new CholeskyRows(chol.matrix, m).solve(rows, u, true);
+    (memory ? memory.choleskyRows(chol.matrix, m) : new CholeskyRows(chol.matrix, m)).solve(rows, u, true);
     // In tiles: the reads run down the right-hand sides (rows of `rows`), the writes along rows of `out`.
     for (let r0 = 0; r0 < u; r0 += TILE) {
       for (let c0 = 0; c0 < u; c0 += TILE) {
