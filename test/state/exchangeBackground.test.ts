@@ -113,6 +113,19 @@ describe('the exchange of a large sketch, solved off the page', () => {
     expect(solved(store)).toBe(last);
   });
 
+  it('posts no second job when the shown factors come again unchanged while one is solved', async () => {
+    const { store, made } = withWorkers(big);
+    await flush();
+    expect(made[0].posted).toHaveLength(1);
+    store.setState({ viewFactors: { ...store.getState().viewFactors } }); // a new cache object, the same factors
+    expect(made).toHaveLength(1);
+    expect(made[0].posted).toHaveLength(1);
+    expect(made[0].terminated).toBe(false);
+    made[0].answer();
+    await flush();
+    expect(solved(store).stale).toBe(false);
+  });
+
   it('is solved on the page when the worker fails', async () => {
     const { store, made } = withWorkers(big);
     await flush();

@@ -9,7 +9,8 @@ import { exchangeJob, solveExchangeJob, type SolvedView } from './solveJob';
 
 let last: { key: unknown[]; view: SolvedView } | null = null;
 
-const keyOf = (shown: ShownResult): unknown[] => [
+/** What a solve depends on: the shown factors, names, units, properties and settings. */
+export const exchangeKey = (shown: ShownResult): unknown[] => [
   shown.result,
   shown.names,
   shown.units,
@@ -17,14 +18,17 @@ const keyOf = (shown: ShownResult): unknown[] => [
   shown.sketch.settings,
 ];
 
-function sameKey(key: unknown[]): boolean {
-  return last !== null && key.length === last.key.length && key.every((v, i) => v === last?.key[i]);
+/** Do two keys name the same solve (every part the same object)? */
+export function sameExchangeKey(a: unknown[], b: unknown[]): boolean {
+  return a.length === b.length && a.every((v, i) => v === b[i]);
 }
+
+const sameKey = (key: unknown[]): boolean => last !== null && sameExchangeKey(key, last.key);
 
 /** Solve the exchange for the shown view factors (or take the solve filed for them); messages instead of exceptions. */
 export function deriveExchange(shown: ShownResult | null): ExchangeView {
   if (!shown) return { kind: 'none' };
-  const key = keyOf(shown);
+  const key = exchangeKey(shown);
   const filed =
     last !== null && sameKey(key) ? last : (last = { key, view: solveExchangeJob(exchangeJob(shown), shown.stale) });
   return filed.view.stale === shown.stale ? filed.view : { ...filed.view, stale: shown.stale };
@@ -32,10 +36,10 @@ export function deriveExchange(shown: ShownResult | null): ExchangeView {
 
 /** Is the solve for these shown factors and properties filed already? */
 export function exchangeKnown(shown: ShownResult): boolean {
-  return sameKey(keyOf(shown));
+  return sameKey(exchangeKey(shown));
 }
 
 /** File a solve made elsewhere (the exchange's worker) for these shown factors and properties. */
 export function fileExchange(shown: ShownResult, view: SolvedView): void {
-  last = { key: keyOf(shown), view };
+  last = { key: exchangeKey(shown), view };
 }

@@ -6,7 +6,7 @@
 import type { AppState, AppStore } from '../store';
 import { shownResult, type ShownResult } from '../results/derive';
 import { BackgroundExchange, type ExchangeWorker } from './background';
-import { deriveExchange, exchangeKnown, fileExchange } from './derive';
+import { deriveExchange, exchangeKey, exchangeKnown, fileExchange, sameExchangeKey } from './derive';
 import { exchangeJob } from './solveJob';
 
 /**
@@ -35,14 +35,21 @@ export function startLiveExchange(store: AppStore, spawn?: () => ExchangeWorker 
     const s = store.getState();
     if (s.exchange.kind !== 'none' && !s.exchange.stale) s.setExchange({ ...s.exchange, stale: true });
   };
+  /** The key of the solve in the worker, while one runs. */
+  let pending: unknown[] | null = null;
   const solveElsewhere = (shown: ShownResult, bg: BackgroundExchange) => {
+    const key = exchangeKey(shown);
+    if (pending && sameExchangeKey(pending, key)) return; // this very solve is on its way
+    pending = key;
     markStale();
     void bg.solve(exchangeJob(shown)).then((outcome) => {
-      if (outcome === 'superseded') return;
-      // Filed only while these factors are still the ones shown (else a newer solve is on its way).
-      if (shownResult(store.getState().viewFactors) !== shown) return;
-      if (outcome !== 'failed') fileExchange(shown, { ...outcome, stale: shown.stale });
-      show(shown); // 'failed': solved here instead
+      if (outcome === 'superseded') return; // the newer job set `pending`
+      pending = null;
+      // Filed only while it is still what is shown (else the newer factors or properties have their own solve).
+      const now = shownResult(store.getState().viewFactors);
+      if (!now || !sameExchangeKey(exchangeKey(now), key)) return;
+      if (outcome !== 'failed') fileExchange(now, { ...outcome, stale: now.stale });
+      show(now); // 'failed': solved here instead
     });
   };
 
