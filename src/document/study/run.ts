@@ -6,6 +6,7 @@
 // the move cannot change since the value before (caseFactors).
 import type { SceneInput, ViewFactorResult } from '../../core/scene';
 import { KeptViewFactors } from '../../core/reuse/keptViewFactors';
+import { SolverMemory } from '../../core/exchange';
 import { solveSketchExchange } from '../exchangeInput';
 import { exchangeJson } from '../exchangeJson';
 import { restore } from '../restore';
@@ -67,6 +68,8 @@ export function studyRunner(
 ): (value: number) => StudyRunOutcome {
   const sameGeometry = p.kind !== 'shape' && p.kind !== 'row';
   let kept: { names: string[]; factors: ViewFactorResult } | undefined;
+  // Every case is a balance of the same size: its solvers and scratch are kept from one to the next.
+  const memory = new SolverMemory();
   const unit = parameterUnit(p, sketch.units);
   const at = (value: number, message: string): StudyRunOutcome => ({
     ok: false,
@@ -86,7 +89,7 @@ export function studyRunner(
       if (sameGeometry) kept = shared;
     }
     const { names, factors } = shared;
-    const outcome = solveSketchExchange(edited.sketch, names, factors);
+    const outcome = solveSketchExchange(edited.sketch, names, factors, undefined, memory);
     if (!outcome.ok) return at(value, outcome.message);
     const { result } = outcome;
     const { surfaceLength } = factors; // the run keeps the lengths, not the factors
