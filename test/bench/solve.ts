@@ -9,7 +9,7 @@
 // Part of `npm run bench`; alone: `npx tsx test/bench/solve.ts [--quick]`.
 import { pathToFileURL } from 'node:url';
 import { solveBalance } from '../../src/core/balance';
-import { solveExchange, type SurfaceCondition } from '../../src/core/exchange';
+import { DenseLuSolver, solveExchange, type SurfaceCondition } from '../../src/core/exchange';
 import { RadiositySystem } from '../../src/core/exchange/radiositySystem';
 import { SolverMemory } from '../../src/core/exchange/solverMemory';
 import { radiosityResidual } from '../../src/core/exchange/refine';
@@ -66,8 +66,8 @@ export function benchDenseSolve(quick: boolean): void {
   const b = Float64Array.from({ length: N }, (_, i) => 1e4 * (1 + (i % 7)));
   const x = new Float64Array(N);
   const r = new Float64Array(N);
-  const memory = new SolverMemory(); // kept between runs, as the app keeps it
-  const workspace = memory.solver('radiosity', N);
+  const workspace = new DenseLuSolver(N);
+  const memory = new SolverMemory(); // the balance's, kept between runs as the app keeps it
   let symmetric = false;
   const dense = timeRuns(runs, () => {
     const system = new RadiositySystem(F, weight, input.area, workspace);

@@ -21,6 +21,7 @@ import type { SolverMemory } from '../exchange/solverMemory';
 import { checkCondition, checkConvection } from './check';
 import { backHeat } from './conditions';
 import { balanceNodes, nodeCoupling, nodeIrradiation } from './nodes';
+import { forgetKept, keptCoupling, keptNetwork } from './kept';
 import { NewtonMatrix } from './newtonMatrix';
 import { RadiosityNetwork } from './radiosity';
 import { isLinearBalance, solveLinearBalance } from './linear';
@@ -51,13 +52,22 @@ export function solveBalance(
   const setup = prepare(input);
   if ('ok' in setup) return setup;
   if (options.method !== 'newton' && isLinearBalance(input)) {
+    forgetKept(memory); // the linear path refills the radiosity solver
     const linear = solveLinearBalance(input, memory?.solver('radiosity', setup.n));
     return 'ok' in linear ? linear : { ok: true, result: balanceResult(input, linear) };
   }
   const { n, eps, Fs, Es, h, Tg, known } = setup;
   let network: RadiosityNetwork;
   try {
-    network = new RadiosityNetwork(input.viewFactors, input.area, eps, Fs, Es, memory);
+    network = keptNetwork(
+      memory,
+      input.viewFactors,
+      input.area,
+      eps,
+      Fs,
+      Es,
+      () => new RadiosityNetwork(input.viewFactors, input.area, eps, Fs, Es, memory),
+    );
   } catch (err) {
     if (err instanceof LinearSolveError) {
       return err.problem === 'not-finite'
@@ -125,8 +135,9 @@ export function solveBalance(
     // dG/dE among the unknown surfaces, rows in `unknown` order (row k is unknown[k]).
     const rowOf = new Int32Array(n);
     unknown.forEach((i, k) => (rowOf[i] = k));
-    const irradiation = nodeIrradiation(network, unknown, members, memory);
-    const { Z, W } = nodeCoupling(irradiation, (i) => rowOf[i], members, A, eps, memory);
+    const { Z, W } = keptCoupling(memory, network, members, () =>
+      nodeCoupling(nodeIrradiation(network, unknown, members, memory), (i) => rowOf[i], members, A, eps, memory),
+    );
     const jacobian = new NewtonMatrix(Z, W, memory?.solver('newton', m));
     const diagonal = new Float64Array(m);
     const step = new Float64Array(m);
