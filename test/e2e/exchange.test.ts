@@ -89,8 +89,9 @@ describe('heat exchange in chromium', () => {
   });
 
   it('solves a sketch of 340 surfaces in the exchange worker, then an edit of it', async () => {
-    // A regular 340-gon enclosure, every wall its own surface, one held: the rest reradiate,
-    // so every wall settles at the held temperature (equilibrium, common practice).
+    // A regular 340-gon enclosure, every wall its own surface, one held, the rest reradiating with
+    // convection to a gas at the same temperature (so Newton's method, not one linear system):
+    // every wall settles at that temperature (equilibrium, common practice).
     const n = 340;
     const points = Array.from({ length: n }, (_, k) => [
       Math.cos((2 * Math.PI * k) / n),
@@ -100,7 +101,10 @@ describe('heat exchange in chromium', () => {
       version: 1,
       units: 'm',
       shapes: [{ kind: 'enclosure', points, surface: points.map((_, k) => `wall ${k}`) }],
-      surfaces: { 'wall 0': { temperature: 800 } },
+      surfaces: Object.fromEntries(
+        points.map((_, k) => [`wall ${k}`, k === 0 ? { temperature: 800 } : { convectionCoefficient: 5 }]),
+      ),
+      settings: { gasTemperature: 800 },
     };
     await dropFile(page, 'ring.json', JSON.stringify(sketch));
     const temperatures = () =>
@@ -117,10 +121,24 @@ describe('heat exchange in chromium', () => {
       (window as unknown as TestWindow).__tautline.store.getState().edit((d) => ({
         ...d,
         surfaces: { ...d.surfaces, 'wall 0': { temperature: 900 } },
+        settings: { ...d.settings, gasTemperature: 900 },
       })),
     );
     await expect
       .poll(async () => (await temperatures())?.every((T) => Math.abs(T - 900) <= 1e-9 * 900) ?? false, {
+        timeout: 60_000,
+      })
+      .toBe(true);
+    // Again: the worker's kept network serves a second edit too (its answer's arrays were handed over).
+    await page.evaluate(() =>
+      (window as unknown as TestWindow).__tautline.store.getState().edit((d) => ({
+        ...d,
+        surfaces: { ...d.surfaces, 'wall 0': { temperature: 1000 } },
+        settings: { ...d.settings, gasTemperature: 1000 },
+      })),
+    );
+    await expect
+      .poll(async () => (await temperatures())?.every((T) => Math.abs(T - 1000) <= 1e-9 * 1000) ?? false, {
         timeout: 60_000,
       })
       .toBe(true);

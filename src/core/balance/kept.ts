@@ -40,7 +40,9 @@ function copyOf(from: ArrayLike<number>, into: Float64Array | undefined): Float6
 
 /**
  * The network for these numbers (F n x n, area m, eps, Fs, Es W/m^2): the kept
- * one when every number is the same, else `make()` (which may throw), then kept.
+ * one when every number is the same, else `make(...)` (which may throw), then
+ * kept. `make` gets copies the memory owns, so the network never reads an
+ * array its caller may refill or hand away (a worker transfers its answer's).
  */
 export function keptNetwork(
   memory: SolverMemory | undefined,
@@ -49,23 +51,20 @@ export function keptNetwork(
   eps: Float64Array,
   Fs: Float64Array,
   Es: number,
-  make: () => RadiosityNetwork,
+  make: (F: ArrayLike<number>, area: ArrayLike<number>, eps: Float64Array, Fs: Float64Array) => RadiosityNetwork,
 ): RadiosityNetwork {
-  if (!memory) return make();
+  if (!memory) return make(F, area, eps, Fs);
   const k = kept.get(memory);
   if (k && k.Es === Es && same(k.eps, eps) && same(k.Fs, Fs) && same(k.area, area) && same(k.F, F)) return k.network;
   kept.delete(memory); // its solver is about to be refilled
-  const network = make();
-  kept.set(memory, {
+  const own = {
     F: copyOf(F, k?.F),
     area: Float64Array.from(area),
     eps: Float64Array.from(eps),
     Fs: Float64Array.from(Fs),
-    Es,
-    network,
-    nodes: null,
-    coupling: null,
-  });
+  };
+  const network = make(own.F, own.area, own.eps, own.Fs);
+  kept.set(memory, { ...own, Es, network, nodes: null, coupling: null });
   return network;
 }
 

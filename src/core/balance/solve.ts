@@ -66,7 +66,7 @@ export function solveBalance(
       eps,
       Fs,
       Es,
-      () => new RadiosityNetwork(input.viewFactors, input.area, eps, Fs, Es, memory),
+      (F, area, e, s) => new RadiosityNetwork(F, area, e, s, Es, memory),
     );
   } catch (err) {
     if (err instanceof LinearSolveError) {
