@@ -12,8 +12,8 @@ export interface ExchangeMatrixRows {
   names: string[];
   /** Column names: the surfaces, then the surroundings in an open sketch. */
   columns: string[];
-  /** rows[i][j]: net heat from surface i to column j, W per metre of depth. */
-  rows: number[][];
+  /** Net heat from surface i to column j, W per metre of depth (read from the result: nothing is copied). */
+  at(i: number, j: number): number;
 }
 
 export interface RadiosityRow {
@@ -33,12 +33,9 @@ export function exchangeMatrixRows(ex: ExchangeSolved): ExchangeMatrixRows {
   const r = ex.result;
   const n = r.surfaceCount;
   const open = seesSurroundings(r);
-  const rows = ex.names.map((_, i) => {
-    const row = Array.from(r.exchange.subarray(i * n, (i + 1) * n));
-    if (open) row.push(r.surroundingsExchange[i]);
-    return row;
-  });
-  const view = { names: ex.names, columns: open ? [...ex.names, SURROUNDINGS_LABEL.name] : ex.names, rows };
+  // Cells are read where they are: a windowed table shows a few hundred of n^2.
+  const at = (i: number, j: number) => (j < n ? r.exchange[i * n + j] : r.surroundingsExchange[i]);
+  const view = { names: ex.names, columns: open ? [...ex.names, SURROUNDINGS_LABEL.name] : ex.names, at };
   matrices.set(ex.result, view);
   return view;
 }
@@ -65,7 +62,10 @@ export function toTsv(rows: ReadonlyArray<ReadonlyArray<string | number>>): stri
 /** The exchange matrix as tab-separated text, header row and first column of names. */
 export function exchangeMatrixTsv(ex: ExchangeSolved): string {
   const m = exchangeMatrixRows(ex);
-  return toTsv([["q' from \\ to (W/m)", ...m.columns], ...m.rows.map((row, i) => [m.names[i], ...row])]);
+  return toTsv([
+    ["q' from \\ to (W/m)", ...m.columns],
+    ...m.names.map((name, i) => [name, ...m.columns.map((_, j) => m.at(i, j))]),
+  ]);
 }
 
 /** Radiosity and irradiation as tab-separated text. */

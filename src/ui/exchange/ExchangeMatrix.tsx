@@ -16,13 +16,13 @@ interface Props {
 }
 
 export function ExchangeMatrix(props: Props) {
-  return exchangeMatrixRows(props.ex).rows.length > WINDOW_FROM ? <Windowed {...props} /> : <Grid {...props} />;
+  return exchangeMatrixRows(props.ex).names.length > WINDOW_FROM ? <Windowed {...props} /> : <Grid {...props} />;
 }
 
 function Windowed(props: Props) {
   const ref = useRef<HTMLTableElement>(null);
   const m = exchangeMatrixRows(props.ex);
-  const win = useMatrixWindow(ref, m.rows.length, m.columns.length, HEAT_CELL_PX, m, 1);
+  const win = useMatrixWindow(ref, m.names.length, m.columns.length, HEAT_CELL_PX, m, 1);
   return <Grid {...props} tableRef={ref} rows={win.rows} cols={win.cols} pad={win.pad} />;
 }
 
@@ -50,7 +50,7 @@ function Grid({
         ref={tableRef}
         className={`matrix exchange-matrix${ex.stale ? ' stale' : ''}${windowed ? ' windowed' : ''}`}
         aria-labelledby={labelledBy}
-        aria-rowcount={aria(matrix.rows.length + 1)}
+        aria-rowcount={aria(matrix.names.length + 1)}
         aria-colcount={aria(matrix.columns.length + 1)}
         style={windowed ? ({ '--cell-px': `${HEAT_CELL_PX}px`, '--row-px': '22px' } as object) : undefined}
       >
@@ -70,7 +70,7 @@ function Grid({
         </thead>
         <tbody>
           {pad && <Spacer px={pad.before} />}
-          {(rows ?? matrix.rows.map((_, i) => i)).map((i) => (
+          {(rows ?? matrix.names.map((_, i) => i)).map((i) => (
             <tr key={matrix.names[i]} data-surface={matrix.names[i]} aria-rowindex={aria(i + 2)}>
               <th scope="row" aria-colindex={aria(1)}>
                 {matrix.names[i]}
@@ -80,10 +80,10 @@ function Grid({
                 <td
                   key={j}
                   className={windowed ? 'num cell' : 'num'}
-                  data-value={matrix.rows[i][j]}
+                  data-value={matrix.at(i, j)}
                   aria-colindex={aria(j + 2)}
                 >
-                  {fmtHeat(matrix.rows[i][j])}
+                  {fmtHeat(matrix.at(i, j))}
                 </td>
               ))}
               <Gap px={shownCols.after} />

@@ -3,6 +3,8 @@ import { divergingColour } from './heatScale';
 import { fmtHeat } from './format';
 import { exchangeRows } from './rows';
 
+/** Above this many surfaces only this many bars are drawn: those with the largest net heat in size, largest first. */
+export const CHART_SURFACES = 40;
 const ROW = 18;
 const WIDTH = 420;
 const LABEL = 120;
@@ -15,7 +17,12 @@ const VALUE = 64;
  */
 export function NetHeatChart({ ex }: { ex: ExchangeSolved }) {
   // Net radiation only: the gas row has none.
-  const rows = exchangeRows(ex).flatMap((r) => (r.netHeat === undefined ? [] : [{ ...r, netHeat: r.netHeat }]));
+  const all = exchangeRows(ex).flatMap((r) => (r.netHeat === undefined ? [] : [{ ...r, netHeat: r.netHeat }]));
+  // A bar per surface stops being readable long before a thousand (and costs a redraw of each after every edit).
+  const rows =
+    all.length > CHART_SURFACES
+      ? [...all].sort((a, b) => Math.abs(b.netHeat) - Math.abs(a.netHeat)).slice(0, CHART_SURFACES)
+      : all;
   let largest = 0;
   for (const r of rows) largest = Math.max(largest, Math.abs(r.netHeat));
   const plot = WIDTH - LABEL - VALUE;
@@ -23,7 +30,10 @@ export function NetHeatChart({ ex }: { ex: ExchangeSolved }) {
   const height = rows.length * ROW + 8;
   return (
     <figure className="net-heat-chart">
-      <figcaption>Net radiation per surface, W per metre of depth</figcaption>
+      <figcaption>
+        Net radiation per surface, W per metre of depth
+        {rows.length < all.length ? `: the ${rows.length} largest in size of ${all.length}, largest first` : ''}
+      </figcaption>
       <svg
         viewBox={`0 0 ${WIDTH} ${height}`}
         width={WIDTH}
