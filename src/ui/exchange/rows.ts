@@ -33,12 +33,13 @@ export interface ExchangeRow {
   burn: string | null;
 }
 
-// Per solved exchange: the table, its cautions and its memoised rows share one list.
-const cache = new WeakMap<ExchangeSolved, ExchangeRow[]>();
+// Per solve: the table, its cautions and its memoised rows share one list. Keyed on
+// the result, so the same answer marked stale (a copy of the view) keeps its rows.
+const cache = new WeakMap<ExchangeSolved['result'], ExchangeRow[]>();
 
 export function exchangeRows(ex: ExchangeSolved): ExchangeRow[] {
-  let rows = cache.get(ex);
-  if (!rows) cache.set(ex, (rows = buildRows(ex)));
+  let rows = cache.get(ex.result);
+  if (!rows) cache.set(ex.result, (rows = buildRows(ex)));
   return rows;
 }
 
