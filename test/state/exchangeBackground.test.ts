@@ -12,7 +12,7 @@ import { HeldFactors, type ExchangeMessage, type SolvedView } from '../../src/st
 import { setCondition } from '../../src/state/exchange/edits';
 import { documentApi } from '../../src/state/documentApi';
 import type { SketchFile } from '../../src/state/sketchFile';
-import { flush, inThread, live, solved } from './exchangeHelpers';
+import { flush, inThread, live, ring, solved } from './exchangeHelpers';
 
 class StandInWorker implements ExchangeWorker {
   onmessage: ExchangeWorker['onmessage'] = null;
@@ -39,19 +39,8 @@ class StandInWorker implements ExchangeWorker {
   }
 }
 
-/** A regular polygon enclosure of n walls, every edge its own surface, one held at 800 K (the rest reradiating). */
-function ring(n: number): SketchFile {
-  const points = Array.from({ length: n }, (_, k): [number, number] => [
-    Math.cos((2 * Math.PI * k) / n),
-    Math.sin((2 * Math.PI * k) / n),
-  ]);
-  return {
-    version: 1,
-    units: 'm',
-    shapes: [{ kind: 'enclosure', points, surface: points.map((_, k) => `wall ${k}`) }],
-    surfaces: { 'wall 0': { temperature: 800 } },
-  };
-}
+/** A ring of n walls, one held at 800 K (the rest reradiating). */
+const heldRing = (n: number) => ring(n, (k) => (k === 0 ? { temperature: 800 } : undefined));
 
 function withWorkers(doc: SketchFile): { store: AppStore; made: StandInWorker[] } {
   const made: StandInWorker[] = [];
@@ -65,7 +54,7 @@ function withWorkers(doc: SketchFile): { store: AppStore; made: StandInWorker[] 
   return { store, made };
 }
 
-const big = ring(LIVE_SOLVE_LIMIT + 20);
+const big = heldRing(LIVE_SOLVE_LIMIT + 20);
 
 describe('the exchange of a large sketch, solved off the page', () => {
   it('is solved in the worker, with the numbers of the page’s own solve', async () => {
@@ -138,7 +127,7 @@ describe('the exchange of a large sketch, solved off the page', () => {
   });
 
   it('a sketch of few surfaces never waits for a worker', async () => {
-    const { store, made } = withWorkers(ring(12));
+    const { store, made } = withWorkers(heldRing(12));
     await flush();
     expect(solved(store).stale).toBe(false);
     expect(made).toHaveLength(0);

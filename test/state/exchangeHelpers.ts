@@ -5,6 +5,7 @@ import { startLiveExchange } from '../../src/state/exchange/live';
 import { documentApi } from '../../src/state/documentApi';
 import type { ExchangeSolved } from '../../src/state/exchange/slice';
 import type { SketchFile } from '../../src/state/sketchFile';
+import type { SurfaceProperties } from '../../src/document/schema';
 import { viewFactorApi } from '../../src/worker/api';
 import { STEFAN_BOLTZMANN as SIGMA } from '../../src/core/exchange';
 
@@ -70,4 +71,26 @@ export const squares: SketchFile = {
  */
 export function twoSurface(T1: number, T2: number, e1: number, e2: number, A1: number, A2: number): number {
   return (SIGMA * (T1 ** 4 - T2 ** 4) * A1) / (1 / e1 + (A1 / A2) * (1 / e2 - 1));
+}
+
+/**
+ * A regular polygon enclosure of n walls ("wall 0", "wall 1", ...), every edge its own
+ * surface, each with the properties `of(k)` gives (none: the default, reradiating).
+ */
+export function ring(n: number, of: (k: number) => SurfaceProperties | undefined): SketchFile {
+  const points = Array.from({ length: n }, (_, k): [number, number] => [
+    Math.cos((2 * Math.PI * k) / n),
+    Math.sin((2 * Math.PI * k) / n),
+  ]);
+  const surfaces: Record<string, SurfaceProperties> = {};
+  points.forEach((_, k) => {
+    const p = of(k);
+    if (p) surfaces[`wall ${k}`] = p;
+  });
+  return {
+    version: 1,
+    units: 'm',
+    shapes: [{ kind: 'enclosure', points, surface: points.map((_, k) => `wall ${k}`) }],
+    surfaces,
+  };
 }

@@ -3,43 +3,21 @@
 // radiosity table only the rows in view, the net heat chart the surfaces with
 // the largest net heat in size. (Redrawing a bar and a row per surface held the
 // page 70-230 ms after each edit of a 1012-surface sketch.)
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, render, screen } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { render, screen } from '@testing-library/react';
 import { CHART_SURFACES, NetHeatChart } from '../../src/ui/exchange/NetHeatChart';
 import { RadiosityTable } from '../../src/ui/exchange/RadiosityTable';
-import type { SketchFile } from '../../src/state/sketchFile';
-import { flush, live, solved } from '../state/exchangeHelpers';
+import { flush, live, ring, solved } from '../state/exchangeHelpers';
+import { stubScrollBox } from './scrollBox';
 
-beforeEach(() => {
-  // jsdom has no layout: the scrolled box reports a fixed size, as the virtualizer reads it.
-  vi.spyOn(HTMLElement.prototype, 'clientWidth', 'get').mockReturnValue(800);
-  vi.spyOn(HTMLElement.prototype, 'clientHeight', 'get').mockReturnValue(400);
-});
+stubScrollBox();
 
-afterEach(() => {
-  cleanup();
-  vi.restoreAllMocks();
-});
-
-/** A 120-wall ring: every third wall held at its own temperature, the rest reradiating. */
-function ring(n: number): SketchFile {
-  const points = Array.from({ length: n }, (_, k): [number, number] => [
-    Math.cos((2 * Math.PI * k) / n),
-    Math.sin((2 * Math.PI * k) / n),
-  ]);
-  return {
-    version: 1,
-    units: 'm',
-    shapes: [{ kind: 'enclosure', points, surface: points.map((_, k) => `wall ${k}`) }],
-    surfaces: Object.fromEntries(
-      points.flatMap((_, k) => (k % 3 === 0 ? [[`wall ${k}`, { temperature: 600 + 5 * k }]] : [])),
-    ),
-  };
-}
+/** A ring of n walls: every third wall held at its own temperature, the rest reradiating. */
+const heldEveryThird = (n: number) => ring(n, (k) => (k % 3 === 0 ? { temperature: 600 + 5 * k } : undefined));
 
 describe('the exchange views of a large sketch', () => {
   it('chart the surfaces with the largest net heat in size, largest first, and say so', async () => {
-    const store = live(ring(120));
+    const store = live(heldEveryThird(120));
     await flush();
     const ex = solved(store);
     const { container } = render(<NetHeatChart ex={ex} />);
@@ -54,7 +32,7 @@ describe('the exchange views of a large sketch', () => {
   });
 
   it('draw only the radiosity rows in view, with their place in the whole table', async () => {
-    const store = live(ring(120));
+    const store = live(heldEveryThird(120));
     await flush();
     render(<RadiosityTable ex={solved(store)} labelledBy="none" />);
     const table = screen.getByRole('table');
@@ -72,7 +50,7 @@ describe('the exchange views of a large sketch', () => {
   });
 
   it('chart every surface of a small sketch', async () => {
-    const store = live(ring(12));
+    const store = live(heldEveryThird(12));
     await flush();
     const { container } = render(<NetHeatChart ex={solved(store)} />);
     expect(container.querySelectorAll('g[data-surface]')).toHaveLength(12);

@@ -3,8 +3,9 @@
 // document, each with its place in the whole (aria-rowindex / aria-colindex),
 // headed and valued like the full table. jsdom has no layout, so the scrolled
 // box reports a fixed size here; the browser benchmark drags the real thing.
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, render, screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { render, screen, within } from '@testing-library/react';
+import { stubScrollBox } from './scrollBox';
 import { MatrixTable } from '../../src/ui/matrix/MatrixTable';
 import { matrixView } from '../../src/state/matrixView';
 import { WINDOW_FROM } from '../../src/ui/matrix/useMatrixWindow';
@@ -36,16 +37,7 @@ function shown(): ShownResult {
   };
 }
 
-beforeEach(() => {
-  // The scrolled box's size, as the virtualizer reads it.
-  vi.spyOn(HTMLElement.prototype, 'clientWidth', 'get').mockReturnValue(800);
-  vi.spyOn(HTMLElement.prototype, 'clientHeight', 'get').mockReturnValue(400);
-});
-
-afterEach(() => {
-  cleanup();
-  vi.restoreAllMocks();
-});
+stubScrollBox();
 
 describe('windowed matrix table', () => {
   it('draws a window of rows and columns, each knowing its place, with the right numbers', () => {
