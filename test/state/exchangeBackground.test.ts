@@ -3,11 +3,11 @@
 // answer as stale meanwhile, only the newest job's answer is shown, and a
 // failed worker leaves the solve to the page. The numbers are those of the
 // page's own solve, bit for bit (the same function runs in both places).
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { createAppStore, type AppStore } from '../../src/state/store';
 import { startLiveResults } from '../../src/state/results/live';
 import { LIVE_SOLVE_LIMIT, startLiveExchange } from '../../src/state/exchange/live';
-import type { ExchangeWorker } from '../../src/state/exchange/background';
+import { EXCHANGE_LINGER_MS, type ExchangeWorker } from '../../src/state/exchange/background';
 import { HeldFactors, type ExchangeMessage, type SolvedView } from '../../src/state/exchange/solveJob';
 import { setCondition } from '../../src/state/exchange/edits';
 import { documentApi } from '../../src/state/documentApi';
@@ -113,6 +113,29 @@ describe('the exchange of a large sketch, solved off the page', () => {
     made[0].answer();
     await flush();
     expect(solved(store).stale).toBe(false);
+  });
+
+  it('ends a worker left idle for a minute (its memory with it); the next edit takes a new one', async () => {
+    const { store, made } = withWorkers(big);
+    await flush();
+    vi.useFakeTimers();
+    try {
+      made[0].answer();
+      await vi.advanceTimersByTimeAsync(0);
+      expect(solved(store).stale).toBe(false);
+      await vi.advanceTimersByTimeAsync(EXCHANGE_LINGER_MS - 1000);
+      expect(made[0].terminated).toBe(false);
+      await vi.advanceTimersByTimeAsync(1000);
+      expect(made[0].terminated).toBe(true);
+      store.getState().edit((d) => setCondition(d, 'wall 0', { kind: 'temperature', temperature: 700 }));
+      expect(made).toHaveLength(2);
+      expect(made[1].posted[0].factors).not.toBeNull(); // the new worker holds nothing yet
+      made[1].answer();
+      await vi.advanceTimersByTimeAsync(0);
+      for (const T of solved(store).result.temperature) expect(Math.abs(T - 700)).toBeLessThanOrEqual(1e-9 * 700);
+    } finally {
+      vi.useRealTimers();
+    }
   });
 
   it('is solved on the page when the worker fails', async () => {
