@@ -131,13 +131,33 @@ export function withUnit(value: number, unit: string): string {
   return unit === '' ? formatNumber(value) : `${formatNumber(value)} ${unit}`;
 }
 
+// Lookups made once per sketch (documents are never changed in place): the panel
+// asks about every surface of a 1000-surface sketch after each edit, and a scan of
+// all names and shapes per question made that 1000^2.
+const shapeIndex = new WeakMap<Sketch['shapes'], Map<string, number[]>>();
+const nameSets = new WeakMap<readonly string[], ReadonlySet<string>>();
+
 /** Where `surface` names edges: the indices of the shapes (0-based). */
 export function shapesOfSurface(sketch: Pick<Sketch, 'shapes'>, surface: string): number[] {
-  const found: number[] = [];
-  sketch.shapes.forEach((shape, k) => {
-    if (shape.surface.includes(surface)) found.push(k);
-  });
-  return found;
+  let index = shapeIndex.get(sketch.shapes);
+  if (!index) {
+    index = new Map();
+    for (let k = 0; k < sketch.shapes.length; k++) {
+      for (const name of new Set(sketch.shapes[k].surface)) {
+        const list = index.get(name);
+        if (list) list.push(k);
+        else index.set(name, [k]);
+      }
+    }
+    shapeIndex.set(sketch.shapes, index);
+  }
+  return [...(index.get(surface) ?? [])];
+}
+
+function namesInclude(names: readonly string[], surface: string): boolean {
+  let set = nameSets.get(names);
+  if (!set) nameSets.set(names, (set = new Set(names)));
+  return set.has(surface);
 }
 
 /**
@@ -149,7 +169,7 @@ export function shapesOfSurface(sketch: Pick<Sketch, 'shapes'>, surface: string)
 export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[], p: StudyParameter): string | null {
   if (p.kind === 'setting') return null;
   if (p.kind === 'row') return rowParameterProblem(sketch, p);
-  if (!surfaceNames.includes(p.surface)) {
+  if (!namesInclude(surfaceNames, p.surface)) {
     const some = surfaceNames.slice(0, 6).map(quoteName).join(', ');
     return `the sketch has no surface named ${quoteName(p.surface)}; its surfaces: ${some}${surfaceNames.length > 6 ? ', …' : ''}`;
   }
