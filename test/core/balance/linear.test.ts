@@ -49,9 +49,13 @@ describe('the classic balance as one linear system', () => {
           const newton = solveBalance(input, undefined, { method: 'newton' });
           expect(linear.ok).toBe(newton.ok);
           if (!linear.ok || !newton.ok) {
-            // A heat flux that needs a surface below 0 K: both name it.
-            expect(linear.ok ? '' : linear.code).toBe(
-              newton.ok ? '' : newton.code === 'balance-below-absolute-zero' ? 'flux-below-absolute-zero' : newton.code,
+            // A heat flux that needs a surface below 0 K: both refuse. The linear system names it; Newton
+            // names it when the temperature reaches the edge of 0 K, and may instead stall above it and
+            // refuse as not converging (seen: 3 surfaces, seed 1846051491; the largest residual 0.39 of
+            // all radiation after 100 steps). Either way no answer is given.
+            expect(linear.ok ? '' : linear.code).toBe('flux-below-absolute-zero');
+            expect(newton.ok ? '' : newton.code).toMatch(
+              /^(balance-below-absolute-zero|flux-below-absolute-zero|no-convergence)$/,
             );
             return;
           }
@@ -90,6 +94,14 @@ describe('the classic balance as one linear system', () => {
       ),
       { numRuns: 150 },
     );
+  });
+
+  it('refuses, as Newton does, a heat flux that would need a surface below 0 K (the case Newton stalls on)', () => {
+    const input = classicSection(3, 1846051491, 1);
+    const linear = solveBalance(input);
+    const newton = solveBalance(input, undefined, { method: 'newton' });
+    expect(linear.ok ? '' : linear.code).toBe('flux-below-absolute-zero');
+    expect(newton.ok).toBe(false);
   });
 
   it('is taken only without convection, walls, tubes or linked plates', () => {
