@@ -83,8 +83,3 @@ export function keptCoupling(
   k.nodes = nodes;
   return k.coupling;
 }
-
-/** Forget what was kept (the radiosity solver is handed to another use). */
-export function forgetKept(memory: SolverMemory | undefined): void {
-  if (memory) kept.delete(memory);
-}

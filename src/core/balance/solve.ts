@@ -21,7 +21,7 @@ import type { SolverMemory } from '../exchange/solverMemory';
 import { checkCondition, checkConvection } from './check';
 import { backHeat } from './conditions';
 import { balanceNodes, nodeCoupling, nodeIrradiation } from './nodes';
-import { forgetKept, keptCoupling, keptNetwork } from './kept';
+import { keptCoupling, keptNetwork } from './kept';
 import { NewtonMatrix } from './newtonMatrix';
 import { RadiosityNetwork } from './radiosity';
 import { isLinearBalance, solveLinearBalance } from './linear';
@@ -52,8 +52,7 @@ export function solveBalance(
   const setup = prepare(input);
   if ('ok' in setup) return setup;
   if (options.method !== 'newton' && isLinearBalance(input)) {
-    forgetKept(memory); // the linear path refills the radiosity solver
-    const linear = solveLinearBalance(input, memory?.solver('radiosity', setup.n));
+    const linear = solveLinearBalance(input, memory?.solver('linear', setup.n));
     return 'ok' in linear ? linear : { ok: true, result: balanceResult(input, linear) };
   }
   const { n, eps, Fs, Es, h, Tg, known } = setup;

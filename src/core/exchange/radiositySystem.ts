@@ -42,6 +42,8 @@ export class RadiositySystem implements FactoredSystem {
   private cholesky: DenseCholesky | null = null;
   /** Surfaces with w > 0 (the unknowns of S) and with w = 0 (J = b), each in order. */
   private readonly unknown: Int32Array;
+  /** Each surface's row of S (-1: a known radiosity, J = b). */
+  private readonly place: Int32Array;
   private readonly known: Int32Array;
   private readonly reduced: Float64Array;
 
@@ -61,6 +63,8 @@ export class RadiositySystem implements FactoredSystem {
     this.n = n;
     this.lu = workspace && workspace.n === n ? workspace : new DenseLuSolver(n);
     this.unknown = Int32Array.from({ length: n }, (_, i) => i).filter((i) => w[i] > 0);
+    this.place = new Int32Array(n).fill(-1);
+    this.unknown.forEach((i, a) => (this.place[i] = a));
     this.known = Int32Array.from({ length: n }, (_, i) => i).filter((i) => !(w[i] > 0));
     this.reduced = new Float64Array(this.unknown.length);
 
@@ -145,10 +149,8 @@ export class RadiositySystem implements FactoredSystem {
       }
       return X;
     }
-    const { F, w, area, unknown } = this;
+    const { F, w, area, unknown, place } = this;
     const m = unknown.length;
-    const place = new Int32Array(n).fill(-1); // surface -> its row of S (-1: known, J = b)
-    for (let a = 0; a < m; a++) place[unknown[a]] = a;
     // One right-hand side of S per column, as solve() reduces it: b has only
     // b_k = scale at k = cols[c]; a known k moves to every unknown row.
     const rows = new Float64Array(u * m);
@@ -176,11 +178,9 @@ export class RadiositySystem implements FactoredSystem {
    * With `memory` the answer is its 'columns' array (valid until that is handed out again).
    */
   solveColumnsAt(cols: ArrayLike<number>, scale: ArrayLike<number>, memory?: SolverMemory): Float64Array {
-    const { n, cholesky: chol, w, area, unknown } = this;
+    const { cholesky: chol, w, area, unknown, place } = this;
     const u = cols.length;
     const out = memory ? memory.array('columns', u * u) : new Float64Array(u * u);
-    const place = new Int32Array(n).fill(-1); // surface -> its row of S
-    for (let a = 0; a < unknown.length; a++) place[unknown[a]] = a;
     let rowsOfS = chol !== null;
     for (let c = 0; c < u && rowsOfS; c++) rowsOfS = place[cols[c]] >= 0 && scale[c] !== 0;
     if (!chol || !rowsOfS) {

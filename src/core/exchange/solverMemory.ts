@@ -11,7 +11,8 @@ import { DenseLuSolver } from './linearSolve';
 
 /** What each kept piece of memory is for (one of each is kept). */
 export type MemoryRole =
-  | 'radiosity' // the radiosity system's solver (n)
+  | 'radiosity' // the radiosity system's solver (n), whose factors a later solve may take again
+  | 'linear' // the classic balance's one system (n): its own, so it never overwrites those factors
   | 'newton' // the Newton matrix's solver (nodes)
   | 'right-hand sides' // many right-hand sides of the radiosity system
   | 'columns' // M^-1 among the unknown surfaces

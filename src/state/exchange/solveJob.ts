@@ -44,9 +44,7 @@ export class HeldFactors {
     const factors = (this.factors = message.factors ?? this.factors);
     if (!factors) return { id, view: null, transfer: [] };
     const view = solveExchangeJob({ part, names, ...factors }, false);
-    // The view's new arrays are handed over; not the lengths, which are the held factors' own.
-    const held = factors.surfaceLength.buffer;
-    return { id, view, transfer: viewBuffers(view).filter((b) => b !== held) };
+    return { id, view, transfer: viewBuffers(view) };
   }
 }
 
@@ -90,8 +88,8 @@ export function solveExchangeJob(job: ExchangeJob, stale: boolean): SolvedView {
 export function viewBuffers(view: SolvedView): ArrayBuffer[] {
   if (view.kind !== 'solved') return [];
   const r = view.result;
+  // Not the lengths: they are the job's (in the worker, the held factors' own).
   const arrays = [
-    view.lengths,
     r.radiosity,
     r.irradiation,
     r.temperature,

@@ -40,7 +40,7 @@ describe('a balance solved with kept memory', () => {
     const adiabatic = base.conditions.findIndex((c) => c.kind === 'adiabatic');
     expect(held).toBeGreaterThanOrEqual(0);
     expect(adiabatic).toBeGreaterThanOrEqual(0);
-    // The classic section on the same factors: solved as one linear system, in the same solver.
+    // The classic section on the same factors: solved as one linear system, with the same memory.
     const linear: BalanceInput = {
       ...base,
       convectionCoefficient: undefined,
@@ -92,8 +92,8 @@ describe('a balance solved with kept memory', () => {
       () => ({ ...base, gasTemperature: 1250 }), // the gas: all kept
       () => withCondition(base, adiabatic, { kind: 'temperature', temperature: 950 }), // other unknowns: a new coupling
       () => base,
-      () => linear, // fills the radiosity solver
-      () => base, // so the network is made again
+      () => linear, // one linear system, in a solver of its own
+      () => base, // the kept network, untouched by it
       () => ({ ...base, viewFactors: refilled }), // the same numbers in another array: kept
       moved, // the same array, other numbers: a new network
       () => base,
