@@ -26,6 +26,7 @@ import { parseArgs, type Format, type OwnOption } from './args';
 import type { CliIO } from './io';
 import { readSketchFile } from './readSketch';
 import { threadedViewFactors, threadsFor, threadsOption, THREADS_HELP } from './threads';
+import type { ViewFactorResult } from '../core/scene';
 import { displayName, usageError as reportUsage } from './terminalText';
 
 export const SWEEP_USAGE =
@@ -109,12 +110,18 @@ export function studyOptions(into: StudyArgs, withTarget: boolean): OwnOption {
 /**
  * Each case's view factors over the threads asked for (or the default of threads.ts);
  * in-process, each case keeps the pairs its moved shapes cannot change since the
- * case before (caseFactors). The same bits either way.
+ * case before (caseFactors). The same bits either way. Over threads, a case writes
+ * over the case before's surface factors: the study runner reads a case's factors
+ * only while it solves that case (document/study/run.ts).
  */
 export function studyViewFactors(study: StudyArgs): ViewFactorsOf {
   const inProcess = caseFactors();
-  return (scene) =>
-    threadsFor(scene, study.threads) <= 1 ? inProcess(scene) : threadedViewFactors(scene, study.threads);
+  let last: ViewFactorResult | undefined;
+  return (scene) => {
+    if (threadsFor(scene, study.threads) <= 1) return inProcess(scene);
+    last = threadedViewFactors(scene, study.threads, { reuse: last });
+    return last;
+  };
 }
 
 /** The problem with missing study options, or null. */

@@ -35,7 +35,7 @@ export interface ThreadJob {
   control: SharedArrayBuffer;
   /** The shared edge matrix (at least edges^2 doubles), or null when summing straight to surfaces. */
   matrix: SharedArrayBuffer | null;
-  /** With the matrix: the surface exchange G_IJ = L_I F_IJ (surfaces^2 doubles, sketch units), summed from it. */
+  /** With the matrix: the surface exchange G_IJ = L_I F_IJ (surfaces^2 doubles, sketch units, not cleared), summed from it. */
   exchange: SharedArrayBuffer | null;
   /** Block b of the surface stages is surfaces surfaceStart[b] .. surfaceStart[b+1]-1. */
   surfaceStart: Int32Array;
@@ -120,6 +120,7 @@ function surfaceStages(job: ThreadJob, length: Float64Array, F: Float64Array, be
   for (let i = 0; i < n; i++) order[at[S[i]]++] = i;
   if (!waitForCount(control, doneSlot(ROWS), job.chunkStart.length - 1, between)) return;
   const summed = runStage(control, SUMS, blocks, between, (b) => {
+    G.fill(0, start[b] * m, start[b + 1] * m); // the rows of a kept buffer hold an earlier result
     const end = first[start[b + 1]];
     for (let k = first[start[b]]; k < end; k++) addEdgeRow(order[k], n, length, F, S, m, G);
   });

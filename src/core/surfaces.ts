@@ -34,7 +34,8 @@ export function surfaceLengths(
  * Aggregate edge view factors (edges x edges, row-major, row = from) to surfaces:
  * F_IJ = sum_{i in I, j in J} L_i F_ij / L_I (lengths in sketch units), and report
  * the row-sum residual 1 - sum_J F_IJ and the largest relative reciprocity residual
- * |L_I F_IJ - L_J F_JI| / max(L_I F_IJ, L_J F_JI).
+ * |L_I F_IJ - L_J F_JI| / max(L_I F_IJ, L_J F_JI). `into`, when it holds exactly
+ * surfaces^2 doubles, is cleared and becomes the result's F (same numbers).
  */
 export function aggregateToSurfaces(
   edgeCount: number,
@@ -43,12 +44,13 @@ export function aggregateToSurfaces(
   edgeSurface: ArrayLike<number>,
   surfaceCount: number,
   closed: boolean,
+  into?: Float64Array,
 ): ViewFactorResult {
   const n = edgeCount;
   const m = surfaceCount;
   const surfaceLength = surfaceLengths(edgeLength, edgeSurface, m);
   // G_IJ = L_I F_IJ, the exchange length; summed straight from the edge rows.
-  const G = new Float64Array(m * m);
+  const G = into && into.length === m * m ? into.fill(0) : new Float64Array(m * m);
   for (let i = 0; i < n; i++) addEdgeRow(i, n, edgeLength, edgeF, edgeSurface, m, G);
   return surfaceResult(n, edgeLength, surfaceLength, G, closed, true);
 }

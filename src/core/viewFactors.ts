@@ -12,6 +12,12 @@ export interface ViewFactorOptions {
   independentPairs?: boolean;
   /** Reuse this buffer (length >= edges^2) for the edge matrix. */
   edgeMatrix?: Float64Array;
+  /**
+   * Write the surface factors into this buffer when it holds exactly surfaces^2
+   * doubles (it becomes the result's F; other lengths are not used). For a caller
+   * done with an earlier result: fresh memory costs tens of ms per 10 MB here.
+   */
+  surfaceMatrix?: Float64Array;
 }
 
 /**
@@ -79,5 +85,13 @@ export function computeViewFactors(scene: SceneInput, options: ViewFactorOptions
     return surfaceFactorsFromPairs(new EdgePairs(edges), scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
   }
   const F = edgeViewFactors(edges, options);
-  return aggregateToSurfaces(n, allEdgeLengths(edges), F, scene.edgeSurface, scene.surfaceCount, edges.hasEnclosure);
+  return aggregateToSurfaces(
+    n,
+    allEdgeLengths(edges),
+    F,
+    scene.edgeSurface,
+    scene.surfaceCount,
+    edges.hasEnclosure,
+    options.surfaceMatrix,
+  );
 }

@@ -9,7 +9,7 @@
 //   process's peak resident memory (target: at most 1 GB; the edge matrix alone
 //   would be 3.2 GB). It runs first and alone, then the process ends.
 import { availableParallelism, loadavg } from 'node:os';
-import type { SceneInput } from '../../src/core/scene';
+import type { SceneInput, ViewFactorResult } from '../../src/core/scene';
 import { endThreads, threadedViewFactors } from '../../src/cli/threads';
 import { coRunCeiling } from './coRun';
 import { tubeScene } from './scenes';
@@ -109,12 +109,16 @@ function speedUp(quick: boolean): void {
   const one: number[] = [];
   const many: number[] = [];
   let identical = true;
+  // Each run writes over the run before's surface factors, as a study's cases do
+  // (sweepCommand's studyViewFactors): fresh memory for 1600^2 doubles took longer
+  // to fault in than the whole surface stage.
+  let a: ViewFactorResult | undefined, b: ViewFactorResult | undefined;
   for (let r = 0; r < (quick ? 3 : 7); r++) {
     let t0 = performance.now();
-    const a = threadedViewFactors(scene, 1);
+    a = threadedViewFactors(scene, 1, { reuse: a });
     one.push(performance.now() - t0);
     t0 = performance.now();
-    const b = threadedViewFactors(scene, threads);
+    b = threadedViewFactors(scene, threads, { reuse: b });
     many.push(performance.now() - t0);
     identical &&= sameBits(a.F, b.F) && sameBits(a.F, first.F);
   }

@@ -8,7 +8,7 @@ import { main } from '../../src/cli/main';
 import type { CliIO } from '../../src/cli/io';
 import { parseThreads, threadedViewFactors } from '../../src/cli/threads';
 import { surfaceBlocks } from '../../src/cli/threadWork';
-import { restore } from '../../src/document';
+import { restore, toScene } from '../../src/document';
 import { parseParameter, parseTarget, runSweep, solveForTarget } from '../../src/document/study';
 import { computeViewFactors } from '../../src/core/viewFactors';
 import type { SceneInput } from '../../src/core/scene';
@@ -185,6 +185,33 @@ describe('--threads', () => {
         expect(bytes(r.rowSumResidual)).toEqual(bytes(single.rowSumResidual));
         expect(r.reciprocityResidual).toBe(single.reciprocityResidual);
       }
+    }
+  }, 120_000);
+
+  it('a result handed back (reuse) is written over with the same bits as fresh memory, on 2 threads and 1', () => {
+    const read = restore(JSON.parse(ductFile()));
+    if (!read.ok) throw new Error('duct sketch invalid');
+    const { scene } = toScene(read.sketch);
+    const single = computeViewFactors(scene);
+    const m = scene.surfaceCount;
+    // Buffers holding something else, as an earlier case's factors would.
+    const stale = (shared: boolean) => {
+      const F = new Float64Array(shared ? new SharedArrayBuffer(8 * m * m) : new ArrayBuffer(8 * m * m)).fill(0.25);
+      return { ...single, F };
+    };
+    for (const t of [2, 1]) {
+      for (const shared of [true, false]) {
+        const earlier = stale(shared);
+        const r = threadedViewFactors(scene, t, { reuse: earlier, workersOnly: t > 1 });
+        expect(bytes(r.F)).toEqual(bytes(single.F));
+        expect(bytes(r.rowSumResidual)).toEqual(bytes(single.rowSumResidual));
+        // Written in place: over threads only into shared memory, in-process into either.
+        expect(r.F.buffer === earlier.F.buffer).toBe(t === 1 || shared);
+      }
+      // A buffer of another size is left as it was.
+      const other = { ...single, F: new Float64Array(new SharedArrayBuffer(8 * (m * m + 1))).fill(0.25) };
+      expect(bytes(threadedViewFactors(scene, t, { reuse: other }).F)).toEqual(bytes(single.F));
+      expect(other.F.every((f) => f === 0.25)).toBe(true);
     }
   }, 120_000);
 

@@ -47,7 +47,11 @@ export function editedSketch(
   return { ok: false, message: read.errors.map((e) => e.message).join('; ') };
 }
 
-/** Surface view factors of a scene: core computeViewFactors, or the command line's over worker threads (same bits). */
+/**
+ * Surface view factors of a scene: core computeViewFactors, or the command line's over
+ * worker threads (same bits). The runner reads a case's factors only while it solves
+ * that case, so the next call may write over them (the command line's threads do).
+ */
 export type ViewFactorsOf = (scene: SceneInput) => ViewFactorResult;
 
 /**
