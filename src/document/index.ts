@@ -1,5 +1,5 @@
 // The sketch file: schema (version 1), reading, writing, and CSV export.
-export { restore, readDraft, type RestoreResult, type DraftResult } from './restore';
+export { restore, readDraft, readSketch, type RestoreResult, type DraftResult, type SketchReading } from './restore';
 export { serialize } from './serialize';
 export { toScene } from './toScene';
 export { toCsv, matrixCsv, type CsvCell } from './csv';

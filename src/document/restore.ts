@@ -33,6 +33,12 @@ export type DraftResult =
   | { ok: true; doc: SketchFileV1; problems: SketchProblem[]; warnings: string[] }
   | { ok: false; errors: SketchProblem[] };
 
+/** A document read both ways at once: as `restore` reads it and as `readDraft` does. */
+export interface SketchReading {
+  restored: RestoreResult;
+  draft: DraftResult;
+}
+
 /**
  * Read a sketch from JSON text or from an already-parsed value; validate it
  * against the file format, bring older versions up to date, normalise it
@@ -40,13 +46,7 @@ export type DraftResult =
  * its geometry. Warnings describe repairs and ignored content.
  */
 export function restore(input: unknown): RestoreResult {
-  return guarded(() => {
-    const read = readFormat(input);
-    if (!read.ok) return read;
-    const checked = checkSketch(read.doc);
-    if (!checked.ok) return refuse(checked.problems);
-    return { ok: true, sketch: checked.sketch, warnings: [...read.warnings, ...checked.warnings] };
-  });
+  return readSketch(input).restored;
 }
 
 /**
@@ -57,14 +57,30 @@ export function restore(input: unknown): RestoreResult {
  * fields of the wrong type) or is past the file-size or edge limit.
  */
 export function readDraft(input: unknown): DraftResult {
-  return guarded(() => {
-    const read = readFormat(input);
-    if (!read.ok) return read;
-    const checked = checkSketch(read.doc);
-    if (checked.ok)
-      return { ok: true, doc: checked.sketch, problems: [], warnings: [...read.warnings, ...checked.warnings] };
-    return { ok: true, doc: read.doc, problems: refuse(checked.problems).errors, warnings: read.warnings };
-  });
+  return readSketch(input).draft;
+}
+
+/**
+ * `restore` and `readDraft` of one document from one reading (the app asks both
+ * about every edit: its results and its autosave; the checks are the costly part).
+ */
+export function readSketch(input: unknown): SketchReading {
+  const read = guarded(() => readFormat(input));
+  if (!read.ok) return { restored: read, draft: read };
+  const checked = guarded(() => checkSketch(read.doc));
+  if ('errors' in checked) return { restored: checked, draft: checked }; // a fault in the checks: neither reads
+  if (!checked.ok) {
+    const problems = refuse(checked.problems).errors;
+    return {
+      restored: { ok: false, errors: problems },
+      draft: { ok: true, doc: read.doc, problems, warnings: read.warnings },
+    };
+  }
+  const warnings = [...read.warnings, ...checked.warnings];
+  return {
+    restored: { ok: true, sketch: checked.sketch, warnings },
+    draft: { ok: true, doc: checked.sketch, problems: [], warnings },
+  };
 }
 
 function guarded<T>(

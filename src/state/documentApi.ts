@@ -2,7 +2,17 @@
 // the live pipeline and autosave can be tested with stand-ins for faults.
 import type { SceneInput } from '../core/scene';
 import type { SketchFile } from './sketchFile';
-import { CURRENT_VERSION, readDraft, restore, serialize, toScene, type Sketch, type SketchProblem } from '../document';
+import {
+  CURRENT_VERSION,
+  readDraft,
+  readSketch,
+  restore,
+  serialize,
+  toScene,
+  type Sketch,
+  type SketchProblem,
+  type SketchReading,
+} from '../document';
 
 export type { SketchProblem, ProblemPlace } from '../document';
 
@@ -27,19 +37,24 @@ export interface DocumentApi {
   serialize(sketch: SketchFile): string;
 }
 
-// Documents are immutable (every edit makes a new object), so the verdict on one is
+// Documents are immutable (every edit makes a new object), so the reading of one is
 // kept: live results, autosave and serialize each ask about the same document, and
-// the geometry checks should run once per edit, not three times.
-const verdicts = new WeakMap<object, RestoreOutcome>();
+// the checks should run once per edit, not once per question (restore and readDraft
+// come from one reading).
+const readings = new WeakMap<object, SketchReading>();
+
+function readingOf(input: object): SketchReading {
+  let reading = readings.get(input);
+  if (!reading) {
+    reading = readSketch(input);
+    readings.set(input, reading);
+  }
+  return reading;
+}
 
 function restoreOnce(input: unknown): RestoreOutcome {
   if (typeof input !== 'object' || input === null) return restore(input);
-  let verdict = verdicts.get(input);
-  if (!verdict) {
-    verdict = restore(input);
-    verdicts.set(input, verdict);
-  }
-  return verdict;
+  return readingOf(input).restored;
 }
 
 /** The sketch in serialize's form without changing what it says: a single name stands for every edge. */
@@ -62,16 +77,9 @@ function asWritten(doc: SketchFile): Sketch {
   };
 }
 
-const drafts = new WeakMap<object, DraftOutcome>();
-
 function readDraftOnce(input: unknown): DraftOutcome {
   if (typeof input !== 'object' || input === null) return readDraft(input);
-  let read = drafts.get(input);
-  if (!read) {
-    read = readDraft(input);
-    drafts.set(input, read);
-  }
-  return read;
+  return readingOf(input).draft;
 }
 
 export const documentApi: DocumentApi = {
