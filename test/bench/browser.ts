@@ -6,8 +6,9 @@
 // Then opens a 1012-edge sketch and drags a tube for a few seconds, the pointer
 // moving on every animation frame, counting table updates and canvas frames per second.
 // Then a study's start: "Which input matters" on the 1012-edge sketch (browserStudy.ts).
-// Last, a property edit of a 1012-surface sketch whose balance takes Newton's method,
+// Then a property edit of a 1012-surface sketch whose balance takes Newton's method,
 // solved in the exchange's worker: how long the page is held (browserExchange.ts).
+// Last, the view-factor pool: one worker against one per core (browserPool.ts).
 // Prints min, median and p90; the targets are reported with a met / NOT met verdict, never asserted.
 import type { Page } from 'playwright-core';
 import { screenOf, startApp, waitReady, type TestWindow } from '../e2e/harness';
@@ -16,6 +17,7 @@ import { deepBankSketch, furnaceSketch } from './bigSketch';
 import { furnaceTubeCentre } from './scenes';
 import { studyStartTimes } from './browserStudy';
 import { exchangeEditFigures } from './browserExchange';
+import { poolFigures, poolLine } from './browserPool';
 
 type LatencyWindow = TestWindow & { __lat: { lastEvent: number; samples: number[]; changes: number } };
 
@@ -175,6 +177,9 @@ try {
     `1012-surface sketch with convection (Newton), a property edit solved in the exchange's worker: answer ${list('answerMs')} ms; ` +
       `longest task on the page ${list('longestTaskMs')} ms (0: none over 50 ms); longest frame gap ${list('longestFrameGapMs')} ms`,
   );
+  // The view-factor pool over cores, one worker against one per core, in pages of their own (target 3).
+  await page.close();
+  console.log(poolLine(await poolFigures(app, 9)));
 } finally {
   await app.close();
 }
