@@ -102,17 +102,17 @@ function speedUp(quick: boolean): void {
   // 3-5 runs of this scene to compile its hot code, and the worker threads run only
   // their share of each, so timing from the first run measured the warm-up (one
   // thread fell from 330 to 140 ms over the timed runs, and the ratio with it).
-  for (let w = 0; w < (quick ? 1 : 5); w++) {
-    threadedViewFactors(scene, 1);
-    threadedViewFactors(scene, threads);
-  }
-  const one: number[] = [];
-  const many: number[] = [];
-  let identical = true;
   // Each run writes over the run before's surface factors, as a study's cases do
   // (sweepCommand's studyViewFactors): fresh memory for 1600^2 doubles took longer
   // to fault in than the whole surface stage.
   let a: ViewFactorResult | undefined, b: ViewFactorResult | undefined;
+  for (let w = 0; w < (quick ? 1 : 5); w++) {
+    a = threadedViewFactors(scene, 1, { reuse: a });
+    b = threadedViewFactors(scene, threads, { reuse: b });
+  }
+  const one: number[] = [];
+  const many: number[] = [];
+  let identical = true;
   for (let r = 0; r < (quick ? 3 : 7); r++) {
     let t0 = performance.now();
     a = threadedViewFactors(scene, 1, { reuse: a });
