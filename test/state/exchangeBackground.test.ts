@@ -10,6 +10,8 @@ import { LIVE_SOLVE_LIMIT, startLiveExchange } from '../../src/state/exchange/li
 import { EXCHANGE_LINGER_MS, type ExchangeWorker } from '../../src/state/exchange/background';
 import { HeldFactors, type ExchangeMessage, type SolvedView } from '../../src/state/exchange/solveJob';
 import { setCondition } from '../../src/state/exchange/edits';
+import { setVertex } from '../../src/state/edits/shapeEdits';
+import { shownResult } from '../../src/state/results/derive';
 import { documentApi } from '../../src/state/documentApi';
 import type { SketchFile } from '../../src/state/sketchFile';
 import { flush, inThread, live, ring, solved } from './exchangeHelpers';
@@ -136,6 +138,41 @@ describe('the exchange of a large sketch, solved off the page', () => {
     } finally {
       vi.useRealTimers();
     }
+  });
+
+  it('after a drag, solves with the dragged factors even when their matrix is one the worker held, refilled', async () => {
+    // Two walls held apart, so every other wall's temperature depends on the geometry.
+    const doc = ring(LIVE_SOLVE_LIMIT + 20, (k) =>
+      k === 0 ? { temperature: 800 } : k === 170 ? { temperature: 400 } : undefined,
+    );
+    const { store, made } = withWorkers(doc);
+    await flush();
+    made[0].answer();
+    await flush();
+    const heldF = shownResult(store.getState().viewFactors)!.result.F;
+    // A drag of several steps: the answers in between are retired and their matrices reused
+    // for later sums (results/derive.ts), the one the worker holds among them.
+    store.getState().beginGesture();
+    let refilled = false;
+    for (let step = 1; step <= 6; step++) {
+      store.getState().updateGesture(setVertex(store.getState().doc, 0, 5, [0.9 + 0.01 * step, 0.1]));
+      await flush();
+      refilled ||= shownResult(store.getState().viewFactors)!.result.F === heldF;
+    }
+    // End on a step whose matrix is the held one, refilled (the case the worker must not trust by identity).
+    for (let step = 7; step <= 12 && !refilled; step++) {
+      store.getState().updateGesture(setVertex(store.getState().doc, 0, 5, [0.9 + 0.01 * step, 0.1]));
+      await flush();
+      refilled = shownResult(store.getState().viewFactors)!.result.F === heldF;
+    }
+    expect(refilled).toBe(true);
+    store.getState().endGesture();
+    await flush();
+    made.at(-1)!.answer();
+    await flush();
+    const onPage = live(store.getState().doc);
+    await flush();
+    expect(Array.from(solved(store).result.netHeat)).toEqual(Array.from(solved(onPage).result.netHeat));
   });
 
   it('is solved on the page when the worker fails', async () => {

@@ -5,7 +5,7 @@
 // is ended with its worker (a fresh one takes the new job), and its answer never shown.
 // A worker left idle for a minute is ended too: it holds the factors and the
 // solver memory of its last sketch (about 50 MB at 1012 surfaces, 200 MB at 2000).
-import type { ExchangeJob, ExchangeMessage, SolvedView } from './solveJob';
+import type { ExchangeJob, ExchangeMessage, JobFactors, SolvedView } from './solveJob';
 
 /** The part of a Worker the exchange uses (a stand-in in tests). */
 export interface ExchangeWorker {
@@ -33,8 +33,8 @@ export class BackgroundExchange {
   private idle: ReturnType<typeof setTimeout> | null = null;
   private running: { id: number; settle: (outcome: BackgroundOutcome) => void } | null = null;
   private nextId = 0;
-  /** The factors the current worker holds (compared by identity). */
-  private held: Float64Array | null = null;
+  /** The factors the current worker holds: the job's factors object, compared by identity (see ExchangeJob). */
+  private held: JobFactors | null = null;
 
   constructor(private readonly spawn: () => ExchangeWorker | null) {}
 
@@ -69,8 +69,9 @@ export class BackgroundExchange {
         this.end();
         settle('failed');
       };
-      const factors = this.held === job.F ? null : { F: job.F, surfaceLength: job.surfaceLength };
-      this.held = job.F;
+      const { F, surfaceLength } = job.factors;
+      const factors = this.held === job.factors ? null : { F, surfaceLength };
+      this.held = job.factors;
       worker.postMessage({ id, part: job.part, names: job.names, factors });
     });
   }

@@ -8,15 +8,23 @@ import type { ExchangeView } from './slice';
 
 export type SolvedView = Exclude<ExchangeView, { kind: 'none' }>;
 
+/** The factors of one solve: n x n surface view factors, row-major, row = from (dimensionless), and lengths in the part's units. */
+export interface JobFactors {
+  F: Float64Array;
+  surfaceLength: Float64Array;
+}
+
 /** What one solve needs: the sketch's properties, the surface names and their factors. */
 export interface ExchangeJob {
   /** Units, properties and settings of the geometry the factors belong to (lengths in its units). */
   part: SketchExchangePart;
   names: string[];
-  /** n x n surface view factors, row-major, row = from (dimensionless). */
-  F: Float64Array;
-  /** Surface lengths in `part.units`. */
-  surfaceLength: Float64Array;
+  /**
+   * On the page, the shown answer's sums themselves: one object per answer, so its
+   * identity tells one answer from another. Its F alone does not: the matrix of a
+   * retired answer is refilled for a later one (results/derive.ts, retireSurfaceFactors).
+   */
+  factors: JobFactors;
 }
 
 /**
@@ -29,7 +37,7 @@ export interface ExchangeMessage {
   part: ExchangeJob['part'];
   names: string[];
   /** The job's factors, or null: the ones posted last to this worker. */
-  factors: Pick<ExchangeJob, 'F' | 'surfaceLength'> | null;
+  factors: JobFactors | null;
 }
 
 /**
@@ -43,7 +51,7 @@ export class HeldFactors {
     const { id, part, names } = message;
     const factors = (this.factors = message.factors ?? this.factors);
     if (!factors) return { id, view: null, transfer: [] };
-    const view = solveExchangeJob({ part, names, ...factors }, false);
+    const view = solveExchangeJob({ part, names, factors }, false);
     return { id, view, transfer: viewBuffers(view) };
   }
 }
@@ -53,8 +61,7 @@ export function exchangeJob(shown: ShownResult): ExchangeJob {
   return {
     part: { units: shown.units, surfaces: shown.sketch.surfaces, settings: shown.sketch.settings },
     names: [...shown.names],
-    F: shown.result.F,
-    surfaceLength: shown.result.surfaceLength,
+    factors: shown.result,
   };
 }
 
@@ -67,8 +74,8 @@ const memory = new SolverMemory();
 
 /** Solve the job; messages instead of exceptions. `stale` is copied into the view. */
 export function solveExchangeJob(job: ExchangeJob, stale: boolean): SolvedView {
-  const { part, names } = job;
-  const outcome = solveSketchExchange(part, names, job, undefined, memory);
+  const { part, names, factors } = job;
+  const outcome = solveSketchExchange(part, names, factors, undefined, memory);
   if (!outcome.ok) {
     const surface = outcome.surface === undefined ? undefined : names[outcome.surface];
     return { kind: 'error', message: outcome.message, surface, stale };
@@ -76,7 +83,7 @@ export function solveExchangeJob(job: ExchangeJob, stale: boolean): SolvedView {
   return {
     kind: 'solved',
     names,
-    lengths: job.surfaceLength,
+    lengths: factors.surfaceLength,
     units: part.units,
     conditions: [...outcome.input.conditions],
     result: outcome.result,
