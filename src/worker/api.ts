@@ -8,6 +8,7 @@ import * as Comlink from 'comlink';
 import { buildEdges, type EdgeSet } from '../core/edges';
 import { EdgePairs, packRows } from '../core/pairRows';
 import { packedRowsAfter } from '../core/reuse/reuseRows';
+import { sameEntries } from '../core/sameEntries';
 import { RowMemory } from './rowMemory';
 import { SurfaceRowSummer } from '../core/surfaceRows';
 import { allRows } from '../core/viewFactors';
@@ -33,19 +34,13 @@ export function computeRows(job: ViewFactorJob, rows: Int32Array, memory?: RowMe
     return { kind: 'surfaces', edgeLength: pairs.length, closed, sums };
   }
   const earlier = memory?.take();
-  const same = earlier && sameRows(earlier.rows, rows) ? earlier : null;
+  const same = earlier && sameEntries(earlier.rows, rows) ? earlier : null;
   // One buffer is kept and one handed over per job: a fresh one of this size costs
   // a browser worker more than the pairs themselves, so the kept one is updated in place.
   const { packed: kept, computed } = packedRowsAfter(same, pairs, rows);
   const keeping = memory !== undefined && memory.keep({ pairs, rows: rows.slice(), packed: kept });
   const packed = keeping ? memory.copy(kept) : kept;
   return { kind: 'matrix', edgeLength: pairs.length, closed, rows, packed, computed };
-}
-
-function sameRows(a: Int32Array, b: Int32Array): boolean {
-  if (a.length !== b.length) return false;
-  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
-  return true;
 }
 
 /** View factors of a job's polygons and circles in this thread (lengths in sketch units; arcs after polygon edges). */

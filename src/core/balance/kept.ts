@@ -8,6 +8,7 @@
 // Compared by value, never by identity alone: an array can be refilled.
 import type { SolverMemory } from '../exchange/solverMemory';
 import type { RadiosityNetwork } from './radiosity';
+import { sameEntries } from '../sameEntries';
 
 interface Kept {
   F: Float64Array;
@@ -22,12 +23,6 @@ interface Kept {
 }
 
 const kept = new WeakMap<SolverMemory, Kept>();
-
-function same(a: ArrayLike<number>, b: ArrayLike<number>): boolean {
-  if (a.length !== b.length) return false;
-  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
-  return true;
-}
 
 /** Copy of `from` into `into` when of its length (kept memory), else a new copy. */
 function copyOf(from: ArrayLike<number>, into: Float64Array | undefined): Float64Array {
@@ -55,7 +50,15 @@ export function keptNetwork(
 ): RadiosityNetwork {
   if (!memory) return make(F, area, eps, Fs);
   const k = kept.get(memory);
-  if (k && k.Es === Es && same(k.eps, eps) && same(k.Fs, Fs) && same(k.area, area) && same(k.F, F)) return k.network;
+  if (
+    k &&
+    k.Es === Es &&
+    sameEntries(k.eps, eps) &&
+    sameEntries(k.Fs, Fs) &&
+    sameEntries(k.area, area) &&
+    sameEntries(k.F, F)
+  )
+    return k.network;
   kept.delete(memory); // its solver is about to be refilled
   const own = {
     F: copyOf(F, k?.F),
@@ -78,7 +81,7 @@ export function keptCoupling(
   const k = memory ? kept.get(memory) : undefined;
   if (!k || k.network !== network) return make();
   const nodes = Int32Array.from(members.flatMap((m) => [m.length, ...m]));
-  if (k.coupling && k.nodes && same(k.nodes, nodes)) return k.coupling;
+  if (k.coupling && k.nodes && sameEntries(k.nodes, nodes)) return k.coupling;
   k.coupling = make();
   k.nodes = nodes;
   return k.coupling;

@@ -5,14 +5,8 @@
 // Only for the geometry they were computed for: a case whose scene differs (a
 // moved shape or tube row) computes its own.
 import type { SceneInput, ViewFactorResult } from '../../core/scene';
+import { sameEntries } from '../../core/sameEntries';
 import type { ViewFactorsOf } from '../../document/study';
-
-/** Equal, entry by entry (numbers exactly). */
-export const sameEntries = <T>(a: ArrayLike<T>, b: ArrayLike<T>) => {
-  if (a.length !== b.length) return false;
-  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
-  return true;
-};
 
 /** Do two scenes hold the same shapes (kinds, points, circles) and the same surface of every edge, exactly? */
 export function sameScene(a: SceneInput, b: SceneInput): boolean {

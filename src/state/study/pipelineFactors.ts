@@ -5,7 +5,8 @@ import { toScene } from '../../document';
 import { parseParameter } from '../../document/study';
 import { shownResult } from '../results/derive';
 import type { ViewFactorCache } from '../results/slice';
-import { sameEntries, sameScene } from './known';
+import { sameEntries } from '../../core/sameEntries';
+import { sameScene } from './known';
 import type { StudyRequest } from './run';
 
 /**
