@@ -16,6 +16,14 @@ const orient = orientIn,
   crossedStrings = crossedStringsIn,
   pieceIntegral = pieceIntegralIn;
 
+/** Flags of the ends that exchangeLength trimmed to the other edge's line. */
+const TRIMMED_B0 = 1,
+  TRIMMED_B1 = 2,
+  TRIMMED_A0 = 4,
+  TRIMMED_A1 = 8;
+/** 2^-52: the first step of frontEnds, as a fraction of the trimmed part. */
+const EPSILON = 2.220446049250313e-16;
+
 // Exact diffuse view factor between two edges of a long (2D) geometry, with blocking
 // by every other edge of the sketch. The steps, in order, each with its own module:
 //   1. trim each edge to the part in front of the other, and set the view region H
@@ -89,26 +97,31 @@ export class PairIntegrator {
     const dA1 = Math.abs(l - r) >= FILTER_BOUND * Math.abs(l + r) ? -(l - r) : +this.orientAt(j, i, 1);
     if (dA0 <= 0 && dA1 <= 0) return 0;
     // Keep only the part of each edge in front of the other: nothing else can exchange.
+    // (A trimmed end is put back in front of or on the other's line where rounding left
+    // it behind: see frontEnds.)
+    let trimmed = 0;
     if (dB0 < 0) {
       const t = dB0 / (dB0 - dB1);
       b0x += t * (b1x - b0x);
       b0y += t * (b1y - b0y);
+      trimmed = TRIMMED_B0;
     } else if (dB1 < 0) {
       const t = dB1 / (dB1 - dB0);
       b1x += t * (b0x - b1x);
       b1y += t * (b0y - b1y);
+      trimmed = TRIMMED_B1;
     }
     if (dA0 < 0) {
       const t = dA0 / (dA0 - dA1);
       a0x += t * (a1x - a0x);
       a0y += t * (a1y - a0y);
+      trimmed |= TRIMMED_A0;
     } else if (dA1 < 0) {
       const t = dA1 / (dA1 - dA0);
       a1x += t * (a0x - a1x);
       a1y += t * (a0y - a1y);
+      trimmed |= TRIMMED_A1;
     }
-    const li = Math.sqrt((a1x - a0x) ** 2 + (a1y - a0y) ** 2);
-    if (li === 0 || (b0x === b1x && b0y === b1y)) return 0;
     // The trimmed ends go to the steps below through `ends`: a call that is not inlined
     // boxes each number passed to it.
     const P = this.ends;
@@ -120,6 +133,9 @@ export class PairIntegrator {
     P[5] = b0y;
     P[6] = b1x;
     P[7] = b1y;
+    if (trimmed !== 0) this.frontEnds(i, j, trimmed);
+    const li = Math.sqrt((P[2] - P[0]) ** 2 + (P[3] - P[1]) ** 2);
+    if (li === 0 || (P[4] === P[6] && P[5] === P[7])) return 0;
 
     // Lists that hold no possible obstacle for the row edge and the other's group: clear.
     if (this.gatherer.nothingBetween(i, j)) return crossedStrings(P);
@@ -140,6 +156,40 @@ export class PairIntegrator {
    */
   liveColumns(i: number, out: Int32Array, count: number): number {
     return this.gatherer.liveColumns(i, out, count);
+  }
+
+  /**
+   * Put each trimmed end of `ends` (flags TRIMMED_*) in front of or on the other edge's
+   * line, exactly. The end computed where an edge crosses the other's line can round
+   * to behind it; the view region a0 a1 b0 b1 is convex only when every corner is in
+   * front of or on the other edge's line, and its sides are taken as half-planes, so a
+   * corner left behind made it non-convex and cut bodies that hug the other edge (one
+   * 1 ulp from it was read as crossing the view, and the pair as blocked). The end moves
+   * toward the kept end by doubling fractions of the trimmed part: orient is affine
+   * along the edge and the kept end lies strictly in front, so it ends in front.
+   */
+  private frontEnds(i: number, j: number, trimmed: number): void {
+    const E = this.e,
+      P = this.ends;
+    for (let k = 0; k < 4; k++) {
+      if ((trimmed & (1 << k)) === 0) continue;
+      // k: 0 b0 (kept b1), 1 b1 (kept b0), 2 a0 (kept a1), 3 a1 (kept a0); the line is the other edge's.
+      const at = k < 2 ? 4 + 2 * k : 2 * (k - 2);
+      const keep = k < 2 ? 4 + 2 * (1 - k) : 2 * (3 - k);
+      const o = k < 2 ? i : j;
+      const ax = E.ax[o],
+        ay = E.ay[o],
+        bx = E.bx[o],
+        by = E.by[o];
+      const x = P[at],
+        y = P[at + 1],
+        dx = P[keep] - x,
+        dy = P[keep + 1] - y;
+      for (let s = EPSILON; s < 1 && orient(ax, ay, bx, by, P[at], P[at + 1]) < 0; s *= 2) {
+        P[at] = x + s * dx;
+        P[at + 1] = y + s * dy;
+      }
+    }
   }
 
   /** orient(a of edge e, b of edge e, corner `end` (0: a, 1: b) of edge f), from the edge arrays. */

@@ -29,6 +29,13 @@ const STRING_PAST = Int8Array.from({ length: 16 }, (_, mask) =>
 );
 
 /** Sides in the order that rejects most obstacles first: the side strings bound H most tightly. */
+/**
+ * Pieces shorter than this fraction of their edge, with both ends outside H, are
+ * checked exactly (crossesInterior): far above the rounding of t0 and t1 (about 1e-16),
+ * far below any piece that matters.
+ */
+const GRAZE = 1e-9;
+
 export const SIDE_ORDER: readonly number[] = [1, 3, 0, 2];
 
 /** Result of clipping a segment to H (reused, never allocated per call). */
@@ -154,6 +161,23 @@ export class ViewRegion {
   }
 
   /**
+   * Does the line through p and q have corners of H strictly on both sides (exact)? A
+   * segment with both ends outside H whose clipped piece is under GRAZE of it passes
+   * near a corner of H, where the rounding of t0 and t1 cannot tell a piece from none;
+   * when every corner lies on one side of its line (or on it) it misses H's interior.
+   */
+  private crossesInterior(px: number, py: number, qx: number, qy: number): boolean {
+    let left = false,
+      right = false;
+    for (let k = 0; k < 4; k++) {
+      const d = orient(px, py, qx, qy, this.sx[k], this.sy[k]);
+      if (d > 0) left = true;
+      else if (d < 0) right = true;
+    }
+    return left && right;
+  }
+
+  /**
    * Does edge e of E surely face away from all of i' = a0-a1 (side 0): both ends beyond
    * a float margin behind e's line? A blocked sight line from p on i' first meets an
    * edge whose front faces p, and an edge faces a point of i' only if it faces a0 or a1
@@ -241,7 +265,7 @@ export class ViewRegion {
     // piece vanish (a corner a hair inside a side): chains must stay connected.
     if (pIn) t0 = 0;
     if (qIn) t1 = 1;
-    if (t1 <= t0 && !pIn && !qIn) return false;
+    if (!pIn && !qIn && (t1 <= t0 || (t1 - t0 < GRAZE && !this.crossesInterior(px, py, qx, qy)))) return false;
     out.t0 = t0;
     out.t1 = t1;
     out.startInside = pIn;
