@@ -1,6 +1,6 @@
 // Exact circles in the document: reading the circle form of a shape (version 2),
 // and the wording of the geometric rules that involve circles.
-import type { CircleFinding } from '../core/arc/circleChecks';
+import { CONTACT_FRACTION, type CircleFinding } from '../core/arc/circleChecks';
 import type { GeometryFinding } from '../core/sketchChecks';
 import type { CircleInput, PolygonInput } from '../core/scene';
 import { severalEnclosuresMessage } from './geometryMessages';
@@ -115,7 +115,7 @@ export function circleProblem(
       const onEdge = edge >= 0 ? ` edge ${edge + 1}` : '';
       return problemAt(
         f.rule,
-        `${label(f.shape)}: crosses, touches or overlaps ${other}${onEdge} near ${formatPoint(f.at)}; circles need a gap of at least 1e-9 of the radius (tangent contact is not computed; a gap of 1e-6 of the radius is fine)`,
+        `${label(f.shape)}: crosses, touches or overlaps ${other}${onEdge} near ${formatPoint(f.at)}; circles need a gap of at least ${CONTACT_FRACTION} of the radius (tangent contact is not computed; a gap of 1e-6 of the radius is fine)`,
         {
           shapes: [f.shape, f.otherShape],
           edges: edge >= 0 ? [{ shape: f.otherShape, edge }] : [],

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { checkCircles } from '../../../src/core/arc/circleChecks';
 import type { CircleInput, PolygonInput } from '../../../src/core/scene';
 
-// The rules for circles: a clear gap everywhere (at least 1e-9 of the radius), solids
+// The rules for circles: a clear gap everywhere (at least 1e-7 of the radius), solids
 // inside the enclosure, one enclosure in all. Gaps here are set exactly in the input.
 const box: PolygonInput = { kind: 'enclosure', points: [0, 0, 4, 0, 4, 3, 0, 3] };
 const solid = (cx: number, cy: number, radius: number): CircleInput => ({ kind: 'solid', cx, cy, radius, arcs: 1 });
@@ -17,6 +17,8 @@ describe('geometric checks of circles', () => {
     const r = 0.5;
     expect(check([box], [solid(1, r * (1 + 1e-6), r), solid(1 + 2 * r * (1 + 1e-6), 1.5, r)])).toEqual([]);
     expect(check([box], [solid(1, r, r)])).toEqual(['circle-contact']); // resting on the floor
+    expect(check([box], [solid(1, r * (1 + 2e-8), r)])).toEqual(['circle-contact']); // under 1e-7 of the radius
+    expect(check([box], [solid(1, 1, r), solid(1 + 2 * r * (1 + 2e-8), 1, r)])).toEqual(['circle-contact']);
     expect(check([box], [solid(1, 1, r), solid(2, 1, r)])).toEqual(['circle-contact']); // tangent tubes
     expect(check([box], [solid(1, 1, r), solid(1.5, 1, r)])).toEqual(['circle-contact']);
     const bar: PolygonInput = { kind: 'solid', points: [2, 1, 3, 1, 3, 2, 2, 2] };
