@@ -34,6 +34,13 @@ export const MIN_EDGE_LENGTH = 1e-100;
 export const MIN_RELATIVE_EDGE_LENGTH = 2 ** -40;
 
 /**
+ * Shortest edge (or arc) relative to the whole sketch's size (2^-26, about 1.5e-8):
+ * the core's computed points carry a rounding of about 1e-16 of the size, so a
+ * shorter edge's factors could be off by more than 1e-9 (sketchSize.ts).
+ */
+export const MIN_SIZE_FRACTION = 2 ** -26;
+
+/**
  * Longest sketch file, in characters (20 MB of ASCII text). A sketch at the edge
  * limit takes well under 1 MB; the limit is checked before the text is parsed,
  * so a huge or runaway file is turned away at once instead of filling memory.

@@ -8,6 +8,7 @@ import { conditionOf, surfaceRuleProblems } from './exchange/conditions';
 import { moreThanOneConditionMessage, surfaceRuleMessage } from './exchange/messages';
 import { formatNumber, formatPoint, quoteName, shapeLabel } from './labels';
 import { MAX_COORDINATE, MIN_EDGE_LENGTH, MIN_RELATIVE_EDGE_LENGTH } from './limits';
+import { shortBesideSketch } from './sketchSize';
 import { problemAt, type SketchProblem } from './problems';
 import {
   CURRENT_VERSION,
@@ -94,6 +95,10 @@ export function normalise(file: SketchFileV1): Normalised {
     if (shape.row !== undefined) kept.row = shape.row;
     return kept;
   });
+
+  // Shapes refused already (their coordinates or edges) are left to those messages.
+  const refused = new Set(errors.flatMap((e) => e.place.shapes));
+  errors.push(...shortBesideSketch(file, shapes, fileIndex, refused));
 
   const surfaces: Record<string, SurfaceProperties> = {};
   const used = new Set(shapes.flatMap((s) => s.surface));
