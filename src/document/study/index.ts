@@ -10,6 +10,7 @@ export {
   describeParameter,
   describeQuantity,
   parameterProblem,
+  parameterRefusal,
   parameterUnit,
   parseParameter,
   parseTarget,

@@ -160,50 +160,84 @@ function namesInclude(names: readonly string[], surface: string): boolean {
   return set.has(surface);
 }
 
+/** Why a parameter cannot be varied, as data; `parameterProblem` words it. */
+export type ParameterRefusal =
+  | { kind: 'no-surface'; surface: string }
+  | { kind: 'several-shapes'; surface: string; shapes: number[] }
+  | { kind: 'not-circle'; surface: string }
+  | { kind: 'no-temperature' | 'no-heat-flux' | 'opening-emissivity'; surface: string }
+  | { kind: 'no-row'; row: string }
+  | { kind: 'row-from-start'; row: string };
+
 /**
  * Why the parameter cannot be varied in this sketch, or null. Temperature and
  * heat flux are varied only where the surface is held at one (the file must give
  * that condition: varying it must not add a second); an opening has no emissivity
- * of its own; a position names a surface of exactly one shape.
+ * of its own; a position names a surface of exactly one shape. Data only: the
+ * studies panel asks this of every choice of a 1000-surface sketch after each edit.
  */
-export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[], p: StudyParameter): string | null {
+export function parameterRefusal(
+  sketch: Sketch,
+  surfaceNames: readonly string[],
+  p: StudyParameter,
+): ParameterRefusal | null {
   if (p.kind === 'setting') return null;
-  if (p.kind === 'row') return rowParameterProblem(sketch, p);
-  if (!namesInclude(surfaceNames, p.surface)) {
-    const some = surfaceNames.slice(0, 6).map(quoteName).join(', ');
-    return `the sketch has no surface named ${quoteName(p.surface)}; its surfaces: ${some}${surfaceNames.length > 6 ? ', …' : ''}`;
-  }
-  if (p.kind === 'shape') {
-    const shapes = shapesOfSurface(sketch, p.surface);
-    if (shapes.length > 1)
-      return `${quoteName(p.surface)} names edges of ${shapes.length} shapes (${shapes.map((k) => k + 1).join(', ')}); to move one, give it a surface name of its own`;
-    if (p.measure === 'radius' && !sketch.shapes[shapes[0]].circle)
-      return `${quoteName(p.surface)} is not on a circle: only a round tube (a circle shape) has a radius to vary`;
+  if (p.kind === 'row') {
+    const rows = sketch.rows ?? {};
+    if (!Object.hasOwn(rows, p.row)) return { kind: 'no-row', row: p.row };
+    // A row's distance only when it is measured from a wall.
+    if (p.measure === 'distance' && !('wall' in rows[p.row].from)) return { kind: 'row-from-start', row: p.row };
     return null;
   }
-  const props = Object.hasOwn(sketch.surfaces, p.surface) ? sketch.surfaces[p.surface] : undefined;
+  if (!namesInclude(surfaceNames, p.surface)) return { kind: 'no-surface', surface: p.surface };
+  if (p.kind === 'shape') {
+    const shapes = shapesOfSurface(sketch, p.surface);
+    if (shapes.length > 1) return { kind: 'several-shapes', surface: p.surface, shapes };
+    if (p.measure === 'radius' && !sketch.shapes[shapes[0]].circle) return { kind: 'not-circle', surface: p.surface };
+    return null;
+  }
+  const props = ownProperties(sketch, p.surface);
   if (p.property === 'temperature' && props?.temperature === undefined)
-    return `${quoteName(p.surface)} has no temperature condition to vary; give it a temperature in the file first (it is ${conditionWords(props)})`;
-  if (p.property === 'heatFlux' && props?.heatFlux === undefined)
-    return `${quoteName(p.surface)} has no heat-flux condition to vary; give it a heatFlux in the file first (it is ${conditionWords(props)})`;
-  if (p.property === 'emissivity' && props?.opening === true)
-    return `${quoteName(p.surface)} is an opening: it is black (emissivity 1) whatever the file says, so its emissivity has no effect`;
+    return { kind: 'no-temperature', surface: p.surface };
+  if (p.property === 'heatFlux' && props?.heatFlux === undefined) return { kind: 'no-heat-flux', surface: p.surface };
+  if (p.property === 'emissivity' && props?.opening === true) return { kind: 'opening-emissivity', surface: p.surface };
   return null;
 }
 
-/** A row's number can be varied when the row exists; its distance only when it is measured from a wall. */
-function rowParameterProblem(sketch: Sketch, p: Extract<StudyParameter, { kind: 'row' }>): string | null {
-  const rows = sketch.rows ?? {};
-  if (!Object.hasOwn(rows, p.row)) {
-    const names = Object.keys(rows);
-    const some = names.slice(0, 6).map(quoteName).join(', ');
-    return names.length === 0
-      ? `the sketch has no tube row named ${quoteName(p.row)} (it has no rows)`
-      : `the sketch has no tube row named ${quoteName(p.row)}; its rows: ${some}${names.length > 6 ? ', …' : ''}`;
+/** The file's properties of `surface` (never an inherited member: names such as "constructor" are plain names). */
+function ownProperties(sketch: Sketch, surface: string): Sketch['surfaces'][string] | undefined {
+  return Object.hasOwn(sketch.surfaces, surface) ? sketch.surfaces[surface] : undefined;
+}
+
+/** parameterRefusal in words for people, or null. */
+export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[], p: StudyParameter): string | null {
+  const r = parameterRefusal(sketch, surfaceNames, p);
+  if (r === null) return null;
+  switch (r.kind) {
+    case 'no-surface': {
+      const some = surfaceNames.slice(0, 6).map(quoteName).join(', ');
+      return `the sketch has no surface named ${quoteName(r.surface)}; its surfaces: ${some}${surfaceNames.length > 6 ? ', …' : ''}`;
+    }
+    case 'several-shapes':
+      return `${quoteName(r.surface)} names edges of ${r.shapes.length} shapes (${r.shapes.map((k) => k + 1).join(', ')}); to move one, give it a surface name of its own`;
+    case 'not-circle':
+      return `${quoteName(r.surface)} is not on a circle: only a round tube (a circle shape) has a radius to vary`;
+    case 'no-temperature':
+      return `${quoteName(r.surface)} has no temperature condition to vary; give it a temperature in the file first (it is ${conditionWords(ownProperties(sketch, r.surface))})`;
+    case 'no-heat-flux':
+      return `${quoteName(r.surface)} has no heat-flux condition to vary; give it a heatFlux in the file first (it is ${conditionWords(ownProperties(sketch, r.surface))})`;
+    case 'opening-emissivity':
+      return `${quoteName(r.surface)} is an opening: it is black (emissivity 1) whatever the file says, so its emissivity has no effect`;
+    case 'no-row': {
+      const names = Object.keys(sketch.rows ?? {});
+      const some = names.slice(0, 6).map(quoteName).join(', ');
+      return names.length === 0
+        ? `the sketch has no tube row named ${quoteName(r.row)} (it has no rows)`
+        : `the sketch has no tube row named ${quoteName(r.row)}; its rows: ${some}${names.length > 6 ? ', …' : ''}`;
+    }
+    case 'row-from-start':
+      return `row ${quoteName(r.row)} is placed from a start point, not from a wall: it has no distance to vary`;
   }
-  if (p.measure === 'distance' && !('wall' in rows[p.row].from))
-    return `row ${quoteName(p.row)} is placed from a start point, not from a wall: it has no distance to vary`;
-  return null;
 }
 
 function conditionWords(props: Sketch['surfaces'][string] | undefined): string {

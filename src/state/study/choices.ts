@@ -5,7 +5,7 @@
 // the command line (`hearth.temperature`), so a study reads the same in both.
 import {
   describeParameter,
-  parameterProblem,
+  parameterRefusal,
   parameterUnit,
   parameterValue,
   parseParameter,
@@ -40,7 +40,7 @@ export function studyChoices(sketch: CheckedSketch): StudyChoice[] {
   const choices: StudyChoice[] = [];
   for (const address of addresses) {
     const parsed = parseParameter(address);
-    if (!parsed.ok || parameterProblem(sketch, names, parsed.value)) continue;
+    if (!parsed.ok || parameterRefusal(sketch, names, parsed.value)) continue;
     const p: StudyParameter = parsed.value;
     const current = parameterValue(sketch, p);
     // Convection and the gas temperature are offered where the file uses them (one needs the other).

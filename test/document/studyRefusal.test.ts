@@ -1,0 +1,75 @@
+// What a study may vary: the refusals as data (parameterRefusal, which the studies
+// panel asks of every choice after each edit) and the same refusals in words
+// (parameterProblem, for the command line and the panel's messages).
+import { describe, expect, it } from 'vitest';
+import { restore, toScene } from '../../src/document';
+import { parameterProblem, parameterRefusal, type StudyParameter } from '../../src/document/study';
+
+const read = restore({
+  version: 1,
+  units: 'm',
+  shapes: [
+    {
+      kind: 'enclosure',
+      points: [
+        [0, 0],
+        [4, 0],
+        [4, 2],
+        [0, 2],
+      ],
+      surface: ['floor', 'mouth', 'constructor', 'wall'],
+    },
+    {
+      kind: 'solid',
+      points: [
+        [1, 0.5],
+        [1.5, 0.5],
+        [1.5, 1],
+        [1, 1],
+      ],
+      surface: 'wall',
+    },
+  ],
+  surfaces: {
+    floor: { emissivity: 0.9, temperature: 1200 },
+    mouth: { opening: true },
+    wall: { emissivity: 0.8, heatFlux: 0 },
+  },
+});
+if (!read.ok) throw new Error(read.errors.map((e) => e.message).join('; '));
+const sketch = read.sketch;
+const names = toScene(sketch).surfaceNames;
+const surface = (name: string, property: 'temperature' | 'heatFlux' | 'emissivity') =>
+  ({ kind: 'surface', surface: name, property }) as StudyParameter;
+
+describe('parameters a study may not vary', () => {
+  const cases: [StudyParameter, string | null, RegExp | null][] = [
+    [surface('floor', 'temperature'), null, null],
+    [surface('wall', 'heatFlux'), null, null],
+    [surface('roof', 'emissivity'), 'no-surface', /the sketch has no surface named 'roof'; its surfaces: /],
+    [
+      surface('floor', 'heatFlux'),
+      'no-heat-flux',
+      /'floor' has no heat-flux condition to vary.*\(it is held at a temperature\)/,
+    ],
+    // A name such as "constructor" is a plain name: no inherited member stands for its properties.
+    [
+      surface('constructor', 'temperature'),
+      'no-temperature',
+      /'constructor' has no temperature condition.*\(it is adiabatic\)/,
+    ],
+    [surface('mouth', 'emissivity'), 'opening-emissivity', /'mouth' is an opening: it is black/],
+    [{ kind: 'shape', surface: 'wall', measure: 'x' }, 'several-shapes', /'wall' names edges of 2 shapes \(1, 2\)/],
+    [{ kind: 'shape', surface: 'floor', measure: 'radius' }, 'not-circle', /'floor' is not on a circle/],
+    [{ kind: 'row', row: 'upper', measure: 'pitch' }, 'no-row', /no tube row named 'upper' \(it has no rows\)/],
+    [{ kind: 'setting', setting: 'depth' }, null, null],
+  ];
+  for (const [p, kind, words] of cases) {
+    it(`${JSON.stringify(p)}: ${kind ?? 'allowed'}`, () => {
+      expect(parameterRefusal(sketch, names, p)?.kind ?? null).toBe(kind);
+      const problem = parameterProblem(sketch, names, p);
+      if (words) expect(problem).toMatch(words);
+      else expect(problem).toBeNull();
+    });
+  }
+});
