@@ -28,7 +28,6 @@ const STRING_PAST = Int8Array.from({ length: 16 }, (_, mask) =>
   mask === 0b0011 || mask === 0b0110 ? 1 : mask === 0b1001 || mask === 0b1100 ? 3 : -1,
 );
 
-/** Sides in the order that rejects most obstacles first: the side strings bound H most tightly. */
 /**
  * Pieces shorter than this fraction of their edge, with both ends outside H, are
  * checked exactly (crossesInterior): far above the rounding of t0 and t1 (about 1e-16),
@@ -36,6 +35,7 @@ const STRING_PAST = Int8Array.from({ length: 16 }, (_, mask) =>
  */
 const GRAZE = 1e-9;
 
+/** Sides in the order that rejects most obstacles first: the side strings bound H most tightly. */
 export const SIDE_ORDER: readonly number[] = [1, 3, 0, 2];
 
 /** Result of clipping a segment to H (reused, never allocated per call). */
