@@ -38,3 +38,14 @@ export const boxCorners = (w: number, h: number): number[][] => [
   [w, h],
   [0, h],
 ];
+
+/** Worst |1 - row sum| of an n x n matrix F (row-major): the summation rule's residual of a closed sketch. */
+export function worstRowError(F: ArrayLike<number>, n: number): number {
+  let worst = 0;
+  for (let i = 0; i < n; i++) {
+    let s = 0;
+    for (let j = 0; j < n; j++) s += F[i * n + j];
+    worst = Math.max(worst, Math.abs(1 - s));
+  }
+  return worst;
+}

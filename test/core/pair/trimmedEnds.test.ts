@@ -6,7 +6,7 @@
 // ray-cast reference (test/core/oracle.ts) and the summation rule (Incropera et al.,
 // Fundamentals of Heat and Mass Transfer, 6th ed., eq. 13.4), to rounding.
 import { describe, expect, it } from 'vitest';
-import { perEdge, type Poly } from '../helpers';
+import { perEdge, worstRowError, type Poly } from '../helpers';
 import { oracleRow, orientedSegments } from '../oracle';
 import { seeded } from '../seeded';
 
@@ -21,14 +21,7 @@ function ulpsBelow(x: number, k: number): number {
 /** Worst |1 - row sum| of a closed sketch's edge matrix. */
 function worstRow(polys: Poly[]): number {
   const r = perEdge(polys);
-  const n = r.surfaceCount;
-  let worst = 0;
-  for (let i = 0; i < n; i++) {
-    let s = 0;
-    for (let j = 0; j < n; j++) s += r.F[i * n + j];
-    worst = Math.max(worst, Math.abs(1 - s));
-  }
-  return worst;
+  return worstRowError(r.F, r.surfaceCount);
 }
 
 const square = (x0: number, y0: number, x1: number, y1: number): Poly => ({
