@@ -73,3 +73,41 @@ describe('parameters a study may not vary', () => {
     });
   }
 });
+
+describe('a parameter named by a split surface', () => {
+  it('names the parts of a tube split into arcs, and a part moves the whole tube', () => {
+    const split = restore({
+      version: 2,
+      units: 'm',
+      shapes: [
+        {
+          kind: 'enclosure',
+          points: [
+            [0, 0],
+            [4, 0],
+            [4, 2],
+            [0, 2],
+          ],
+          surface: 'wall',
+        },
+        {
+          kind: 'solid',
+          circle: { center: [2, 1], radius: 0.1 },
+          surface: ['tube 1 1', 'tube 1 2', 'tube 1 3', 'tube 1 4'],
+        },
+      ],
+    });
+    if (!split.ok) throw new Error(split.errors.map((e) => e.message).join('; '));
+    const all = toScene(split.sketch).surfaceNames;
+    const whole: StudyParameter = { kind: 'shape', surface: 'tube 1', measure: 'x' };
+    expect(parameterRefusal(split.sketch, all, whole)?.kind).toBe('no-surface');
+    expect(parameterProblem(split.sketch, all, whole)).toBe(
+      "the sketch has no surface named 'tube 1', but 4 parts of it ('tube 1 1', 'tube 1 2', 'tube 1 3', …): name one part (a position or radius moves or sizes the whole shape it lies on)",
+    );
+    expect(parameterRefusal(split.sketch, all, { kind: 'shape', surface: 'tube 1 3', measure: 'x' })).toBeNull();
+    // Parts add one word to the name: 'tube 1 3' is a part of 'tube 1', not of 'tube'.
+    expect(parameterProblem(split.sketch, all, { kind: 'shape', surface: 'tube', measure: 'x' })).toMatch(
+      /its surfaces: /,
+    );
+  });
+});

@@ -215,6 +215,14 @@ export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[]
   if (r === null) return null;
   switch (r.kind) {
     case 'no-surface': {
+      // A tube split into arcs, or a wall into parts, is named by its parts ("tube 1 3").
+      const parts = surfaceNames.filter(
+        (n) => n.startsWith(`${r.surface} `) && !/\s/.test(n.slice(r.surface.length + 1)),
+      );
+      if (parts.length > 0) {
+        const some = parts.slice(0, 3).map(quoteName).join(', ');
+        return `the sketch has no surface named ${quoteName(r.surface)}, but ${parts.length} part${parts.length === 1 ? '' : 's'} of it (${some}${parts.length > 3 ? ', …' : ''}): name one part (a position or radius moves or sizes the whole shape it lies on)`;
+      }
       const some = surfaceNames.slice(0, 6).map(quoteName).join(', ');
       return `the sketch has no surface named ${quoteName(r.surface)}; its surfaces: ${some}${surfaceNames.length > 6 ? ', …' : ''}`;
     }
