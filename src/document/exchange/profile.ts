@@ -48,7 +48,7 @@ export interface Profile {
  * The pieces of a profile: the surface `name` itself, or the parts split from
  * it ("name 1", "name 2"...; on a circle any "name <word>", as "tube 4 a").
  */
-function partOf(surface: string, name: string, circle: boolean): boolean {
+export function partOf(surface: string, name: string, circle: boolean): boolean {
   if (surface === name) return true;
   if (!surface.startsWith(`${name} `)) return false;
   const rest = surface.slice(name.length + 1);

@@ -5,6 +5,7 @@
 // `SURFACE.QUANTITY=VALUE` for a target (split on the last '=').
 import { conditionOf } from '../exchange/conditions';
 import { CONDITION_LABEL } from '../exchange/labels';
+import { partOf } from '../exchange/profile';
 import { formatNumber, quoteName } from '../labels';
 import type { Sketch } from '../schema';
 import type { Units } from '../units';
@@ -215,10 +216,9 @@ export function parameterProblem(sketch: Sketch, surfaceNames: readonly string[]
   if (r === null) return null;
   switch (r.kind) {
     case 'no-surface': {
-      // A tube split into arcs, or a wall into parts, is named by its parts ("tube 1 3").
-      const parts = surfaceNames.filter(
-        (n) => n.startsWith(`${r.surface} `) && !/\s/.test(n.slice(r.surface.length + 1)),
-      );
+      // A tube split into arcs, or a wall into parts, is named by its parts ("tube 1 3"):
+      // a profile's rule for parts, the looser one of a circle (any one word added).
+      const parts = surfaceNames.filter((n) => partOf(n, r.surface, true));
       if (parts.length > 0) {
         const some = parts.slice(0, 3).map(quoteName).join(', ');
         return `the sketch has no surface named ${quoteName(r.surface)}, but ${parts.length} part${parts.length === 1 ? '' : 's'} of it (${some}${parts.length > 3 ? ', …' : ''}): name one part (a position or radius moves or sizes the whole shape it lies on)`;
