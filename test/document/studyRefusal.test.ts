@@ -4,31 +4,15 @@
 import { describe, expect, it } from 'vitest';
 import { restore, toScene } from '../../src/document';
 import { parameterProblem, parameterRefusal, type StudyParameter } from '../../src/document/study';
+import { block, enclosure } from './restoreHelpers';
 
 const read = restore({
   version: 1,
   units: 'm',
+  // The reader tests' box and block (restoreHelpers.ts), named for these cases.
   shapes: [
-    {
-      kind: 'enclosure',
-      points: [
-        [0, 0],
-        [4, 0],
-        [4, 2],
-        [0, 2],
-      ],
-      surface: ['floor', 'mouth', 'constructor', 'wall'],
-    },
-    {
-      kind: 'solid',
-      points: [
-        [1, 0.5],
-        [1.5, 0.5],
-        [1.5, 1],
-        [1, 1],
-      ],
-      surface: 'wall',
-    },
+    { ...enclosure, surface: ['floor', 'mouth', 'constructor', 'wall'] },
+    { ...block, surface: 'wall' },
   ],
   surfaces: {
     floor: { emissivity: 0.9, temperature: 1200 },
@@ -80,16 +64,7 @@ describe('a parameter named by a split surface', () => {
       version: 2,
       units: 'm',
       shapes: [
-        {
-          kind: 'enclosure',
-          points: [
-            [0, 0],
-            [4, 0],
-            [4, 2],
-            [0, 2],
-          ],
-          surface: 'wall',
-        },
+        { ...enclosure, surface: 'wall' },
         {
           kind: 'solid',
           circle: { center: [2, 1], radius: 0.1 },
