@@ -53,8 +53,8 @@ export class EdgePairs {
    * The edges j > i worth asking pairExchange(i, j) about, ascending, in `live`;
    * returns their count. Every pair left out would give 0, bit for
    * bit: in sketches without exact circles, whole groups of edges behind edge i or
-   * hidden from all of it by one body, and edges that surely do not face it, are left
-   * out (pair/groupCull.ts); with exact circles every j > i is listed (those pairs have
+   * hidden from all of it by one body, edges that surely do not face it, and edges one
+   * body hides from all of it, are left out (pair/groupCull.ts); with exact circles every j > i is listed (those pairs have
    * their own shortcuts, arc/discShadow.ts).
    */
   liveColumns(i: number): number {

@@ -3,12 +3,13 @@ import { discUmbraLines } from '../discUmbra';
 import type { ObstacleIndex } from '../obstacles';
 import type { EdgeGroups } from './edgeGroups';
 
-// Whole groups of edges that one edge surely exchanges nothing with, shown once for
-// the group instead of once per pair: a group lying wholly behind the edge's line,
-// the other edges of the edge's own convex body, or a group that one body hides from
-// the whole edge. Each such pair would come out 0 on its own (the front tests, or a
-// blocked view), so leaving them out changes no factor. Float tests with margins that
-// only ever say no in doubt. Sketch units.
+// Edges that one edge surely exchanges nothing with, shown for a row before any pair
+// is computed: whole groups lying behind the edge's line, the other edges of the
+// edge's own convex body, or a group that one body hides from the whole edge; then
+// single edges that do not face it, or that one listed body hides from all of it (its
+// shadow from each end of the row edge). Each such pair would come out 0 on its own
+// (the front tests, or a blocked view), so leaving them out changes no factor. Float
+// tests with margins that only ever say no in doubt. Sketch units.
 
 /** Relative slack on radii: far above the rounding of the lines below. */
 const SLACK = 1e-9;
@@ -22,6 +23,10 @@ export class GroupCull {
   private readonly w: Float64Array;
   /** The umbra's three lines (core/discUmbra.ts), scratch. */
   private readonly umbra = new Float64Array(9);
+  /** Per body, the row edge its shadows were made for (-1: none), whether they hold, and their six lines. */
+  private readonly shadowRow: Int32Array;
+  private readonly shadowOk: Uint8Array;
+  private readonly shadowLines: Float64Array;
 
   /** `extent`: largest coordinate magnitude of the sketch (scales the margin). */
   constructor(
@@ -31,6 +36,9 @@ export class GroupCull {
     extent: number,
   ) {
     this.margin = 1e-12 * extent;
+    this.shadowRow = new Int32Array(ob.bodyCount).fill(-1);
+    this.shadowOk = new Uint8Array(ob.bodyCount);
+    this.shadowLines = new Float64Array(18 * ob.bodyCount);
     const n = e.count;
     this.nx = new Float64Array(n);
     this.ny = new Float64Array(n);
@@ -132,5 +140,55 @@ export class GroupCull {
       if (!(L[k] * ax + L[k + 1] * ay + L[k + 2] >= m && L[k] * bx + L[k + 1] * by + L[k + 2] >= m)) return false;
     }
     return true;
+  }
+
+  /**
+   * Remove from out[from, to) the edges that body c hides from all of polygon edge i:
+   * both corners in c's shadow from each end of i (a disc inside c, shrunk by SLACK;
+   * the shadow from a point is convex, and a point hidden from both ends of i is hidden
+   * from every point between). Returns the new end. c is not i's body nor the edges'.
+   */
+  shadowFilter(i: number, c: number, out: Int32Array, from: number, to: number): number {
+    const L = this.shadowLines,
+      at = 18 * c;
+    if (this.shadowRow[c] !== i) {
+      this.shadowRow[c] = i;
+      const ob = this.ob,
+        E = this.e;
+      const hr = ob.bodyRHull[c] * (1 - SLACK);
+      this.shadowOk[c] =
+        hr > 0 &&
+        discUmbraLines(ob.bodyCx[c], ob.bodyCy[c], hr, E.ax[i], E.ay[i], 0, L, at) &&
+        discUmbraLines(ob.bodyCx[c], ob.bodyCy[c], hr, E.bx[i], E.by[i], 0, L, at + 9)
+          ? 1
+          : 0;
+    }
+    if (this.shadowOk[c] === 0) return to;
+    // A group whose circle lies wholly outside one of the lines has no edge hidden.
+    const G = this.groups,
+      b = G.groupOf[out[from]];
+    const gx = G.cx[b],
+      gy = G.cy[b],
+      gr = G.r[b];
+    for (let t = at; t < at + 18; t += 3) if (L[t] * gx + L[t + 1] * gy + L[t + 2] + gr < 0) return to;
+    const E = this.e,
+      m = this.margin;
+    let k = from;
+    for (let q = from; q < to; q++) {
+      const j = out[q];
+      const ax = E.ax[j],
+        ay = E.ay[j],
+        bx = E.bx[j],
+        by = E.by[j];
+      let hidden = true;
+      for (let t = at; t < at + 18; t += 3) {
+        if (!(L[t] * ax + L[t + 1] * ay + L[t + 2] >= m && L[t] * bx + L[t + 1] * by + L[t + 2] >= m)) {
+          hidden = false;
+          break;
+        }
+      }
+      if (!hidden) out[k++] = j;
+    }
+    return k;
   }
 }

@@ -95,8 +95,9 @@ export class ObstacleGatherer {
 
   /**
    * Append to `out` (from `count` on) the polygon edges j > i that may exchange with
-   * polygon edge i, ascending: whole groups that are surely silent (silentGroup) and
-   * edges that surely do not face i are left out. Returns the new count.
+   * polygon edge i, ascending: whole groups that are surely silent (silentGroup),
+   * edges that surely do not face i, and edges one body of the pair's lists hides from
+   * all of i (shadowCull) are left out. Returns the new count.
    */
   liveColumns(i: number, out: Int32Array, count: number): number {
     const n = this.e.count,
@@ -104,8 +105,32 @@ export class ObstacleGatherer {
     let c = count;
     for (let j = i + 1; j < n;) {
       const end = groupEnd[j];
-      if (!this.silentGroup(i, j)) c = this.cull.facingIn(i, j, end, out, c);
+      if (!this.silentGroup(i, j)) {
+        const from = c;
+        c = this.cull.facingIn(i, j, end, out, c);
+        if (c > from) c = this.shadowCull(i, j, out, from, c);
+      }
       j = end;
+    }
+    return c;
+  }
+
+  /**
+   * Leave out of out[from, to) (edges of j's group) those that one body of the lists
+   * shared by i and that group hides from all of i. The lists hold every body that may
+   * enter a view region of i with the group; making them here costs little, since the
+   * pairs left would make them anyway. Returns the new end.
+   */
+  private shadowCull(i: number, j: number, out: Int32Array, from: number, to: number): number {
+    const lists = this.candidates;
+    lists.find(i, j);
+    const ownI = this.ob.bodyOfPolygon[this.e.polygon[i]],
+      ownJ = this.ob.bodyOfPolygon[this.e.polygon[j]];
+    const bodies = lists.bodies;
+    let c = to;
+    for (let k = lists.bodyStart; k < lists.bodyEnd && c > from; k++) {
+      const h = bodies[k];
+      if (h !== ownI && h !== ownJ) c = this.cull.shadowFilter(i, h, out, from, c);
     }
     return c;
   }
