@@ -40,7 +40,7 @@ export function poolSize(cores: number | undefined): number {
  * during a gesture leaves one worker idle when there are two or more: the page
  * needs a core of its own to draw the shape at the pointer and file the answers.
  * On the 2-core machine a drag of a 1012-edge sketch on one worker gave as many
- * table updates a second as on two, and 1.3-1.7 times the frames (README). Not
+ * table updates a second as on two, and 1.3-1.7 times the frames (DEVELOPERS.md, Performance log). Not
  * past MAX_KEPT_PAIRS pairs (about 4100 edges): one worker could not keep such a
  * job's rows, so each drag step would be computed whole.
  */

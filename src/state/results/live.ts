@@ -33,7 +33,7 @@ interface Pending {
  * position waits, ms: at most 25 answers a second, so the page keeps most of its
  * time for drawing the shape at the pointer. On the 2-core development machine a
  * 1012-edge drag drew 51-54 frames a second with it against 41-47 without, and
- * updated its table 18-19 times a second against 25-26 (README, Performance).
+ * updated its table 18-19 times a second against 25-26 (DEVELOPERS.md, Performance log).
  */
 export const GESTURE_ANSWER_GAP_MS = 40;
 
