@@ -136,6 +136,21 @@ const scenes: [string, SceneInput, boolean][] = [
   ['hard scene: fins, zigzag walls, stars', hardScene(5, 300), true],
 ];
 
+/**
+ * Mark in `listed` the columns row i lists (ascending, checked), asking each pair as the
+ * rows do, so that the pairs leave their hints (the bodies that blocked them).
+ */
+function listRow(pairs: EdgePairs, i: number, listed: Uint8Array, asked: (j: number, g: number) => void): void {
+  listed.fill(0);
+  const live = pairs.liveColumns(i);
+  for (let q = 0; q < live; q++) {
+    const j = pairs.live[q];
+    if (q > 0) expect(j, 'ascending').toBeGreaterThan(pairs.live[q - 1]);
+    listed[j] = 1;
+    asked(j, pairs.pairExchange(i, j));
+  }
+}
+
 describe('pairs left out of a row', () => {
   it.each(scenes)('%s: every pair left out is 0, and shown so independently', (_name, scene, hides) => {
     const E = buildEdges(scene.polygons, scene.circles);
@@ -145,15 +160,7 @@ describe('pairs left out of a row', () => {
       hiddenPairs = 0;
     const listed = new Uint8Array(n);
     for (let i = 0; i < n; i++) {
-      listed.fill(0);
-      const live = pairs.liveColumns(i);
-      for (let q = 0; q < live; q++) {
-        const j = pairs.live[q];
-        if (q > 0) expect(j, 'ascending').toBeGreaterThan(pairs.live[q - 1]);
-        listed[j] = 1;
-        // As the rows do: the pairs asked leave hints (the bodies that blocked them).
-        pairs.pairExchange(i, j);
-      }
+      listRow(pairs, i, listed, () => {});
       for (let j = i + 1; j < n; j++) {
         if (listed[j]) continue;
         leftOut++;
@@ -201,13 +208,7 @@ describe('pairs left out of a row', () => {
       const n = rows.count;
       const listed = new Uint8Array(n);
       for (let i = 0; i < n; i++) {
-        listed.fill(0);
-        const live = rows.liveColumns(i);
-        for (let q = 0; q < live; q++) {
-          const j = rows.live[q];
-          listed[j] = 1;
-          expect(Object.is(rows.pairExchange(i, j), one.pairExchange(i, j))).toBe(true);
-        }
+        listRow(rows, i, listed, (j, g) => expect(Object.is(g, one.pairExchange(i, j))).toBe(true));
         for (let j = i + 1; j < n; j++) {
           if (listed[j]) continue;
           expect(one.pairExchange(i, j), `pair ${i}, ${j}`).toBe(0);
