@@ -12,29 +12,41 @@ import { formatNumber, shapeLabel } from './labels';
 import { MIN_SIZE_FRACTION } from './limits';
 import { problemAt, type SketchProblem } from './problems';
 
-/** The sketch's size: the larger side of the box around every point and circle (file units). */
-export function sketchSize(shapes: readonly Shape[]): number {
-  let x0 = Infinity,
-    y0 = Infinity,
-    x1 = -Infinity,
-    y1 = -Infinity;
+/** A box in file units. */
+export interface Bounds {
+  minX: number;
+  minY: number;
+  maxX: number;
+  maxY: number;
+}
+
+/** The box around every point and every circle of the sketch (file units); null when it has neither. */
+export function sketchBounds(shapes: readonly Shape[]): Bounds | null {
+  let b: Bounds | null = null;
+  const take = (x0: number, y0: number, x1: number, y1: number) => {
+    if (!b) b = { minX: x0, minY: y0, maxX: x1, maxY: y1 };
+    else {
+      b.minX = Math.min(b.minX, x0);
+      b.minY = Math.min(b.minY, y0);
+      b.maxX = Math.max(b.maxX, x1);
+      b.maxY = Math.max(b.maxY, y1);
+    }
+  };
   for (const s of shapes) {
     if (s.circle) {
       const [cx, cy] = s.circle.center,
         r = s.circle.radius;
-      x0 = Math.min(x0, cx - r);
-      x1 = Math.max(x1, cx + r);
-      y0 = Math.min(y0, cy - r);
-      y1 = Math.max(y1, cy + r);
+      take(cx - r, cy - r, cx + r, cy + r);
     }
-    for (const [x, y] of s.points) {
-      x0 = Math.min(x0, x);
-      x1 = Math.max(x1, x);
-      y0 = Math.min(y0, y);
-      y1 = Math.max(y1, y);
-    }
+    for (const [x, y] of s.points) take(x, y, x, y);
   }
-  return Math.max(x1 - x0, y1 - y0, 0);
+  return b;
+}
+
+/** The sketch's size: the larger side of the box around every point and circle (file units). */
+export function sketchSize(shapes: readonly Shape[]): number {
+  const b = sketchBounds(shapes);
+  return b ? Math.max(b.maxX - b.minX, b.maxY - b.minY, 0) : 0;
 }
 
 /**
