@@ -20,8 +20,11 @@ export interface Bounds {
   maxY: number;
 }
 
+/** What a box needs of a shape, in the file's form or the reader's. */
+type Outline = Pick<Shape, 'points' | 'circle'>;
+
 /** The box around every point and every circle of the sketch (file units); null when it has neither. */
-export function sketchBounds(shapes: readonly Shape[]): Bounds | null {
+export function sketchBounds(shapes: readonly Outline[]): Bounds | null {
   let b: Bounds | null = null;
   const take = (x0: number, y0: number, x1: number, y1: number) => {
     if (!b) b = { minX: x0, minY: y0, maxX: x1, maxY: y1 };

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { fitCamera, toScreen, toSketch, zoomAt } from '../../src/state/camera';
+import { sketchBounds } from '../../src/state/geometry/polygon';
 
 describe('camera', () => {
   it('maps sketch to screen with y up, and back', () => {
@@ -22,5 +23,33 @@ describe('camera', () => {
     const c = fitCamera({ minX: 0, minY: 0, maxX: 4, maxY: 2 }, 840, 480, 20);
     expect(c.scale).toBe(200);
     expect(toScreen(c, [2, 1])).toEqual([420, 240]);
+  });
+
+  it('frames exact circles too: a shell around a bar, and a tube outside every polygon', () => {
+    const bar = {
+      kind: 'solid' as const,
+      points: [
+        [-1, -1],
+        [1, -1],
+        [1, 1],
+        [-1, 1],
+      ] as [number, number][],
+      surface: 'bar',
+    };
+    const shell = {
+      kind: 'enclosure' as const,
+      points: [],
+      circle: { center: [0, 0] as [number, number], radius: 5 },
+      surface: 'shell',
+    };
+    expect(sketchBounds([bar, shell])).toEqual({ minX: -5, minY: -5, maxX: 5, maxY: 5 });
+    const tube = {
+      kind: 'solid' as const,
+      points: [],
+      circle: { center: [10, 0] as [number, number], radius: 2 },
+      surface: 'tube',
+    };
+    expect(sketchBounds([tube])).toEqual({ minX: 8, minY: -2, maxX: 12, maxY: 2 });
+    expect(sketchBounds([])).toBeNull();
   });
 });

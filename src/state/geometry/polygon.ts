@@ -69,25 +69,5 @@ export function closestOnSegment(p: Point, a: Point, b: Point): { point: Point; 
   return { point, t, distance: Math.hypot(p[0] - point[0], p[1] - point[1]) };
 }
 
-export interface Bounds {
-  minX: number;
-  minY: number;
-  maxX: number;
-  maxY: number;
-}
-
-export function sketchBounds(shapes: readonly Shape[]): Bounds | null {
-  let b: Bounds | null = null;
-  for (const s of shapes) {
-    for (const [x, y] of s.points) {
-      if (!b) b = { minX: x, minY: y, maxX: x, maxY: y };
-      else {
-        b.minX = Math.min(b.minX, x);
-        b.minY = Math.min(b.minY, y);
-        b.maxX = Math.max(b.maxX, x);
-        b.maxY = Math.max(b.maxY, y);
-      }
-    }
-  }
-  return b;
-}
+// The box of the sketch (points and circles) for fitting the view: the reader's own (document/sketchSize.ts).
+export { sketchBounds, type Bounds } from '../../document/sketchSize';
