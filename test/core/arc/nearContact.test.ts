@@ -10,7 +10,7 @@ import { CONTACT_FRACTION, checkCircles } from '../../../src/core/arc/circleChec
 import { buildEdges } from '../../../src/core/edges';
 import { EdgePairs } from '../../../src/core/pairRows';
 import type { CircleInput } from '../../../src/core/scene';
-import { worstRowError } from '../helpers';
+import { boxCorners, worstRowError } from '../helpers';
 import { seeded } from '../seeded';
 import { oracleRow } from './circleOracle';
 import { sectionFactors, type SectionPolygon } from './section';
@@ -18,15 +18,7 @@ import { sectionFactors, type SectionPolygon } from './section';
 const r = 0.0906,
   face = 0.3282;
 const polys: SectionPolygon[] = [
-  {
-    kind: 'enclosure',
-    points: [
-      [0, 0],
-      [1, 0],
-      [1, 1],
-      [0, 1],
-    ],
-  },
+  { kind: 'enclosure', points: boxCorners(1, 1) },
   {
     kind: 'solid',
     points: [
