@@ -8,7 +8,7 @@
 // of the other edge and grazing pieces decided exactly (integrator.ts, viewRegion.ts).
 import { describe, expect, it } from 'vitest';
 import { checkSketchGeometry } from '../../../src/core/sketchChecks';
-import { perEdge, worstRowError, type Poly } from '../helpers';
+import { boxCorners, perEdge, worstRowError, type Poly } from '../helpers';
 import { seeded } from '../seeded';
 
 /** x moved by k ulps (k may be negative); from 0, k steps of 1.3e-17. */
@@ -25,17 +25,7 @@ function ulps(x: number, k: number): number {
 function attempt(rand: () => number, c: number): Poly[] {
   const W = [8, 1, 0.1][c % 3],
     H = W * (0.5 + rand());
-  const polys: Poly[] = [
-    {
-      kind: 'enclosure',
-      points: [
-        [0, 0],
-        [W, 0],
-        [W, H],
-        [0, H],
-      ],
-    },
-  ];
+  const polys: Poly[] = [{ kind: 'enclosure', points: boxCorners(W, H) }];
   const xs = [0, W],
     ys = [0, H];
   const nearest = (v: number, list: number[]) =>
