@@ -34,7 +34,7 @@ describe('factors as a process', () => {
     const L = [4, 2, 4, 2, 2];
     expect(out.viewFactors.map((row) => row.length)).toEqual([5, 5, 5, 5, 5]);
     out.viewFactors.forEach((row, i) => {
-      // Closed enclosure: every row sums to one (summation rule, Incropera et al., 6th ed., sec. 13.1; eq. 13.4 from memory),
+      // Closed enclosure: every row sums to one (summation rule, Incropera et al., 6th ed., sec. 13.1; equation number from memory),
       // summed here from the printed factors; the printed residual is 1 minus that sum.
       const sum = row.reduce((a, f) => a + f, 0);
       expect(Math.abs(1 - sum)).toBeLessThan(1e-12);

@@ -102,7 +102,7 @@ describe('blocked views against the ray-cast reference', () => {
       all.map(() => 0),
       1,
     );
-    expect(Math.abs(f(oneSurface, 0, 0) - 1)).toBeLessThan(1e-12); // a whole closed enclosure sees only itself (summation rule, Incropera et al., 6th ed., sec. 13.1.2, eq. 13.5, from memory)
+    expect(Math.abs(f(oneSurface, 0, 0) - 1)).toBeLessThan(1e-12); // a whole closed enclosure sees only itself (summation rule, Incropera et al., 6th ed., sec. 13.1; equation number from memory)
     const walls = withSurfaces([L], [0, 0, 1, 1, 1, 1], 2);
     expect(f(walls, 0, 0)).toBeGreaterThan(0); // floor + right wall form a concave corner
   });

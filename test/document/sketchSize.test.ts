@@ -4,7 +4,7 @@
 // after the long fuzz runs that caught them: a value mutated to 1e15 (a 1 mm square's
 // row then summed to 0.87) and one mutated to -1 (a 1e-4 opening beside a sliver 1e6
 // long summed to 1 - 2.4e-8). Just inside the limit the rows hold to 1e-9 (the
-// summation rule, Incropera et al., 6th ed., eq. 13.4).
+// summation rule, Incropera et al., 6th ed., sec. 13.1).
 import { describe, expect, it } from 'vitest';
 import { restore, toScene } from '../../src/document';
 import { MIN_SIZE_FRACTION } from '../../src/document/limits';

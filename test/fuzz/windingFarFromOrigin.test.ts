@@ -6,7 +6,7 @@
 // so the winding came out wrong and every factor was 0; the same cancellation
 // flipped small bodies at 1e6. The area is now taken relative to the first point.
 // Expected values: a closed enclosure's rows sum to one (Incropera et al.,
-// Fundamentals of Heat and Mass Transfer, 6th ed., eq. 13.4).
+// Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1).
 import { describe, expect, it } from 'vitest';
 import { restore, toScene } from '../../src/document';
 import { computeViewFactors } from '../../src/core/viewFactors';

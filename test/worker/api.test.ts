@@ -113,7 +113,7 @@ describe('worker api', () => {
     for (let k = 0; k < m * m; k++) expect(Math.abs(summed.F[k] - expected.F[k])).toBeLessThanOrEqual(1e-12);
     for (let I = 0; I < m; I++) {
       expect(Math.abs(summed.surfaceLength[I] - expected.length[I])).toBeLessThanOrEqual(1e-12);
-      // Closed enclosure: every row sums to one (summation rule, Incropera et al., 6th ed., eq. 13.4).
+      // Closed enclosure: every row sums to one (summation rule, Incropera et al., 6th ed., sec. 13.1).
       let row = 0;
       for (let J = 0; J < m; J++) row += expected.F[I * m + J];
       expect(Math.abs(1 - row)).toBeLessThanOrEqual(1e-9);

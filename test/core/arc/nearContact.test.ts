@@ -4,7 +4,7 @@
 // and none to the lower one (rows off by 21%): the integrator's float margins are 1e-9
 // of a radius. The reader now refuses gaps under 1e-7 of the radius; from there on the
 // factors agree with the ray-cast reference (circleOracle.ts, no shared code) to 1e-9
-// and every row sums to one (Incropera et al., 6th ed., eq. 13.4), to rounding.
+// and every row sums to one (Incropera et al., 6th ed., sec. 13.1), to rounding.
 import { describe, expect, it } from 'vitest';
 import { CONTACT_FRACTION, checkCircles } from '../../../src/core/arc/circleChecks';
 import { buildEdges } from '../../../src/core/edges';

@@ -15,7 +15,7 @@ import { oracleRow, orientedSegments } from '../oracle';
 // Checked against the ray-cast quadrature reference in ../oracle.ts (shares no code
 // with src/core; converged to about 1e-11 per entry, so 1e-9 leaves room for its error)
 // and against the enclosure rule: rows of a closed sketch sum to one (Incropera et al.,
-// Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1, eq. 13.5), summed here.
+// Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1), summed here.
 const TOL = 1e-9;
 
 const scene = hardScene(7, 200, { bodies: 24, sides: 6 });

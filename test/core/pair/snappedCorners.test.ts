@@ -3,7 +3,7 @@
 // rounding steps from walls and from each other. What drawing to a grid, or moving by
 // typed amounts, makes of real sketches. Every valid one (core/sketchChecks.ts) must
 // keep the summation rule (Incropera et al., Fundamentals of Heat and Mass Transfer,
-// 6th ed., eq. 13.4) to rounding. Seed 4 holds four sketches (attempts 348, 1428,
+// 6th ed., sec. 13.1) to rounding. Seed 4 holds four sketches (attempts 348, 1428,
 // 3471, 3556) whose rows summed to 0.8-1.2 before the trimmed ends were kept in front
 // of the other edge and grazing pieces decided exactly (integrator.ts, viewRegion.ts).
 import { describe, expect, it } from 'vitest';

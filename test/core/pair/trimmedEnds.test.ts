@@ -4,7 +4,7 @@
 // blocked. Fixtures named after the fuzz case that caught it (two squares one ulp
 // apart, the left face of one seeing the floor below the other), checked against the
 // ray-cast reference (test/core/oracle.ts) and the summation rule (Incropera et al.,
-// Fundamentals of Heat and Mass Transfer, 6th ed., eq. 13.4), to rounding.
+// Fundamentals of Heat and Mass Transfer, 6th ed., sec. 13.1), to rounding.
 import { describe, expect, it } from 'vitest';
 import { perEdge, worstRowError, type Poly } from '../helpers';
 import { oracleRow, orientedSegments } from '../oracle';
