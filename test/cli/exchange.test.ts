@@ -196,7 +196,7 @@ describe('exchange FILE --csv: every cell against closed forms, not against anot
   const rowsOf = (out: string) => Papa.parse<string[]>(out, { newline: '\r\n', skipEmptyLines: true }).data;
 
   it('a triangular duct with a reradiating side, with a depth', () => {
-    // Incropera et al., 6th ed., sec. 13.3.4, eq. 13.30 (reradiating surface) and Table 13.1 (three-sided enclosure), as above.
+    // Incropera et al., 6th ed., sec. 13.3.4, eq. 13.30 (reradiating surface; number from memory) and Table 13.1 (three-sided enclosure), as above.
     const L = [3, 4, 5];
     const file = {
       version: 1,

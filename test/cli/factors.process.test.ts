@@ -39,7 +39,7 @@ describe('factors as a process', () => {
       const sum = row.reduce((a, f) => a + f, 0);
       expect(Math.abs(1 - sum)).toBeLessThan(1e-12);
       expect(Math.abs(out.rowSumResidual[i] - (1 - sum))).toBeLessThan(1e-15);
-      // Reciprocity, L_i F_ij = L_j F_ji (Incropera et al., 6th ed., eq. 13.3).
+      // Reciprocity, L_i F_ij = L_j F_ji (Incropera et al., 6th ed., sec. 13.1; equation number from memory).
       row.forEach((f, j) => expect(Math.abs(L[i] * f - L[j] * out.viewFactors[j][i])).toBeLessThan(1e-12));
     });
     // The sketch is symmetric left/right: floor sees both side walls equally.

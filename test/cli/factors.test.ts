@@ -99,7 +99,7 @@ describe('factors --json', () => {
         const expected = i === j ? 0 : (L[i] + L[j] - L[k]) / (2 * L[i]);
         expect(r.viewFactors[i][j]).toBeCloseTo(expected, 12);
         row += r.viewFactors[i][j];
-        // Reciprocity, L_i F_ij = L_j F_ji (Incropera et al., 6th ed., eq. 13.3), from the printed factors.
+        // Reciprocity, L_i F_ij = L_j F_ji (Incropera et al., 6th ed., sec. 13.1; equation number from memory), from the printed factors.
         expect(Math.abs(L[i] * r.viewFactors[i][j] - L[j] * r.viewFactors[j][i])).toBeLessThan(1e-12);
       }
       // The printed residual is 1 - the row sum of the printed factors, and that sum is one (closed).
